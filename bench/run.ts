@@ -1,0 +1,38 @@
+// `npm run bench`: runs every benchmark case and prints one table.
+import { benchCases } from "./cases/index.ts";
+import type { BenchRow } from "./benchCase.ts";
+
+function fmt(x: number): string {
+  if (!Number.isFinite(x)) return String(x);
+  const a = Math.abs(x);
+  return a >= 100 ? x.toFixed(0) : a >= 1 ? x.toFixed(2) : x.toPrecision(3);
+}
+
+const only = process.argv.slice(2);
+const rows: BenchRow[] = [];
+for (const c of benchCases) {
+  if (only.length > 0 && !only.some((o) => c.name.includes(o))) continue;
+  process.stderr.write(`bench: ${c.name} ...\n`);
+  try {
+    rows.push(...(await c.run()));
+  } catch (error) {
+    rows.push({ name: c.name, value: Number.NaN, unit: "", note: `failed: ${(error as Error).message}` });
+  }
+}
+const header = ["measure", "value", "unit", "baseline (same run)", "ratio", "goal", "note"];
+const table = rows.map((r) => [
+  r.name,
+  fmt(r.value),
+  r.unit,
+  r.baseline ? `${r.baseline.name}: ${fmt(r.baseline.value)} ${r.unit}` : "",
+  r.ratio !== undefined ? `${fmt(r.ratio)} ${r.ratioLabel ?? "×"}` : "",
+  r.goal ?? "",
+  r.note ?? "",
+]);
+const widths = header.map((h, i) => Math.max(h.length, ...table.map((t) => t[i]!.length)));
+const line = (cells: string[]) => `| ${cells.map((c, i) => c.padEnd(widths[i]!)).join(" | ")} |`;
+console.log(line(header));
+console.log(`|${widths.map((w) => "-".repeat(w + 2)).join("|")}|`);
+for (const t of table) console.log(line(t));
+if (rows.length === 0) console.log("(no benchmark rows)");
+console.log(`\nNode ${process.version}, ${process.platform}/${process.arch}; times are wall-clock medians unless noted.`);

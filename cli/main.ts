@@ -1,0 +1,57 @@
+import { parseArgs } from "node:util";
+import type { Command, CommandIo } from "./command.ts";
+import { commands } from "./commands/index.ts";
+import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_USAGE, InputError, UsageError } from "./exitCodes.ts";
+
+function usage(): string {
+  const lines = commands.map((c: Command) => `  ${c.name.padEnd(10)} ${c.summary}`);
+  return [
+    "brackline: estuarine mixing analysis from survey files",
+    "",
+    "Usage: brackline <command> [options]",
+    "",
+    "Commands:",
+    ...lines,
+    "",
+    "Run `brackline <command> --help` for a command's options.",
+    "Screening analysis, not a compliance assessment: defer to local regulations and licensed practice.",
+  ].join("\n");
+}
+
+/** Runs the CLI with the given arguments and returns the process exit code. */
+export async function main(argv: string[], io?: CommandIo): Promise<number> {
+  const sink: CommandIo = io ?? {
+    out: (t) => process.stdout.write(t.endsWith("\n") ? t : `${t}\n`),
+    err: (t) => process.stderr.write(t.endsWith("\n") ? t : `${t}\n`),
+  };
+  const [name, ...rest] = argv;
+  if (name === undefined || name === "--help" || name === "-h" || name === "help") {
+    sink.out(usage());
+    return name === undefined ? EXIT_USAGE : 0;
+  }
+  const command = commands.find((c) => c.name === name);
+  if (!command) {
+    sink.err(`brackline: unknown command "${name}"\n\n${usage()}`);
+    return EXIT_USAGE;
+  }
+  if (rest.includes("--help") || rest.includes("-h")) {
+    sink.out(command.help);
+    return 0;
+  }
+  try {
+    return await command.run(rest, sink);
+  } catch (error) {
+    if (error instanceof InputError) {
+      sink.err(`brackline ${name}: ${error.message}`);
+      return EXIT_BAD_INPUT;
+    }
+    if (error instanceof UsageError || (error instanceof TypeError && "code" in error && String((error as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"))) {
+      sink.err(`brackline ${name}: ${(error as Error).message}\n\n${command.help}`);
+      return EXIT_USAGE;
+    }
+    sink.err(`brackline ${name}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+    return EXIT_INTERNAL;
+  }
+}
+
+export { parseArgs };
