@@ -1,0 +1,53 @@
+/**
+ * The result of analysing one survey end to end (geometry + mixing), as the
+ * dashboard, the CLI JSON output and the briefing read it. Field names are a
+ * public contract (documented in the README): add fields, never rename.
+ */
+import type { MixingWarning } from "../mixing/result.ts";
+
+/** One station as placed on the channel. */
+export interface StationPlacement {
+  id: string;
+  /** [lon, lat] of the sample, when known. */
+  lonLat?: [number, number];
+  /** Along-channel distance from the mouth [km]; undefined when the station has no position. */
+  alongChannelKm?: number;
+  /** Signed cross-channel offset [m]; positive = right bank looking seaward. */
+  offsetM?: number;
+  /** Branch of the channel network the station projects onto. */
+  branchId?: string;
+  /** Nearest point on the centerline [lon, lat]. */
+  nearestLonLat?: [number, number];
+  /** True when farther off the channel than the threshold. */
+  offChannel: boolean;
+  /** Practical salinity, when measured and accepted. */
+  salinity?: number;
+  temperatureC?: number;
+  pH?: number;
+  time?: string;
+  depthM?: number;
+}
+
+/** An isohaline's position(s) along the channel. */
+export interface IsohalineAtKm {
+  salinity: number;
+  /** Every crossing [km from the mouth]; several when S(x) is not monotonic. */
+  km: number[];
+}
+
+/** Survey-level facts. */
+export interface SurveyFacts {
+  name: string;
+  startDate?: string;
+  endDate?: string;
+  riverDischargeM3s?: number;
+  /** Distance from the mouth of the salt-intrusion isohaline [km]. */
+  saltIntrusionKm?: number;
+  /** The isohaline used for the intrusion length (default 2). */
+  saltIntrusionSalinity: number;
+  isohalines: IsohalineAtKm[];
+  /** Salinity range covered by the stations [min, max]. */
+  salinityRange?: [number, number];
+}
+
+export type { MixingWarning };
