@@ -1,0 +1,122 @@
+// @vitest-environment jsdom
+import { describe, expect, it } from "vitest";
+import { fireEvent, render, screen } from "@testing-library/svelte";
+import { flushSync } from "svelte";
+import MixingPlot from "../../../dashboard/src/panels/MixingPlot.svelte";
+import { Selection } from "../../../dashboard/src/state/selection.svelte.ts";
+import { fixtureAnalysis } from "./fixtures.ts";
+import { expectSvgSnapshot } from "./snapshot.ts";
+
+function setup(constituent = "Fe") {
+  const selection = new Selection();
+  selection.constituent = constituent;
+  const r = render(MixingPlot, { analysis: fixtureAnalysis(), selection, idPrefix: "t" });
+  const svg = r.container.querySelector("svg[data-export-name='mixing']") as SVGSVGElement;
+  return { selection, svg, ...r };
+}
+
+describe("MixingPlot", () => {
+  it("MixingPlot labels both axes with units (Salinity (PSS-78), Fe (nmol/L))", () => {
+    const { svg } = setup();
+    const titles = [...svg.querySelectorAll(".axis-title")].map((t) => t.textContent);
+    expect(titles).toEqual(["Salinity (PSS-78)", "Fe (nmol/L)"]);
+  });
+
+  it("MixingPlot draws one mark per observation, censored as triangles and QC-rejected as labelled crosses", () => {
+    const { svg } = setup();
+    expect(svg.querySelectorAll(".point")).toHaveLength(13);
+    expect(svg.querySelectorAll(".point-belowDetection")).toHaveLength(1);
+    const rejected = svg.querySelectorAll(".point-rejected");
+    expect(rejected).toHaveLength(1);
+    expect(rejected[0].textContent).toContain("S07b rejected");
+  });
+
+  it("MixingPlot draws the dilution line, fit with band, tangent, C*₀ marker and reaction zone", () => {
+    const { svg } = setup();
+    for (const sel of [".dilution-line", ".fit", ".fit-band", ".tangent", ".effective-endmember", ".reaction-zone"]) {
+      expect(svg.querySelector(sel), sel).not.toBeNull();
+    }
+    expect(svg.querySelector(".effective-endmember")?.textContent).toContain("C*₀ 243 nmol/L");
+  });
+
+  it("MixingPlot has an accessible title and description", () => {
+    const { svg } = setup();
+    expect(svg.getAttribute("aria-labelledby")).toBe("t-title");
+    expect(svg.querySelector("title")?.textContent).toBe("Mixing plot: Fe (nmol/L) against salinity");
+    expect(svg.querySelector("desc")?.textContent).toContain("13 observations");
+  });
+
+  it("MixingPlot click selects a station, shift-click adds, and the selected class follows", async () => {
+    const { svg, selection } = setup();
+    const p = (id: string) => svg.querySelector(`.point[data-station='${id}']`) as SVGGElement;
+    await fireEvent.click(p("S03"));
+    expect([...selection.stationIds]).toEqual(["S03"]);
+    await fireEvent.click(p("S05"), { shiftKey: true });
+    expect([...selection.stationIds].sort()).toEqual(["S03", "S05"]);
+    expect(p("S03").classList.contains("selected")).toBe(true);
+    expect(p("S05").getAttribute("aria-checked")).toBe("true");
+    expect(p("S04").classList.contains("selected")).toBe(false);
+  });
+
+  it("MixingPlot highlights stations selected elsewhere (linked selection)", () => {
+    const { svg, selection } = setup();
+    selection.selectStations(["S10"]);
+    flushSync();
+    expect(svg.querySelectorAll(".point.selected")).toHaveLength(1);
+    expect(svg.querySelector(".point.selected")?.getAttribute("data-station")).toBe("S10");
+  });
+
+  it("MixingPlot horizontal drag sets selection.salinityBrush and selects the stations inside it", async () => {
+    const { svg, selection } = setup();
+    const surface = svg.querySelector(".brush-surface") as SVGRectElement;
+    const x0 = Number(surface.getAttribute("x"));
+    const w = Number(surface.getAttribute("width"));
+    // the x axis runs 0..35 over the frame (niced); drag from 10 % to 40 % of the width
+    await fireEvent.pointerDown(surface, { clientX: x0 + 0.1 * w, clientY: 200, button: 0 });
+    await fireEvent.pointerMove(surface, { clientX: x0 + 0.25 * w, clientY: 200 });
+    await fireEvent.pointerUp(surface, { clientX: x0 + 0.4 * w, clientY: 200 });
+    const brush = selection.salinityBrush;
+    expect(brush).not.toBeNull();
+    const [lo, hi] = brush!;
+    expect(lo).toBeLessThan(hi);
+    const inside = fixtureAnalysis()
+      .constituents[0].observations!.filter((o) => o.salinity >= lo && o.salinity <= hi)
+      .map((o) => o.stationId);
+    expect(inside.length).toBeGreaterThan(0);
+    expect([...selection.stationIds].sort()).toEqual(inside.sort());
+    expect(svg.querySelector(".brush")).not.toBeNull();
+  });
+
+  it("MixingPlot arrow keys move focus along salinity and Enter toggles the station", async () => {
+    const { svg, selection } = setup();
+    const first = svg.querySelector(".point[data-order='0']") as SVGGElement;
+    expect(first.getAttribute("tabindex")).toBe("0");
+    first.focus();
+    await fireEvent.keyDown(first, { key: "ArrowRight" });
+    const second = svg.querySelector(".point[data-order='1']") as SVGGElement;
+    expect(document.activeElement).toBe(second);
+    await fireEvent.keyDown(second, { key: "Enter" });
+    expect([...selection.stationIds]).toEqual([second.getAttribute("data-station")]);
+  });
+
+  it("MixingPlot switches constituent with selection.constituent", () => {
+    const { svg, selection } = setup();
+    selection.constituent = "Si";
+    flushSync();
+    expect(svg.querySelectorAll(".axis-title")[1].textContent).toBe("Si (µmol/L)");
+    expect(svg.querySelectorAll(".point")).toHaveLength(12);
+  });
+
+  it("MixingPlot SVG output matches the saved snapshot (Fe, S03 selected)", () => {
+    const { svg, selection } = setup();
+    selection.selectStations(["S03"]);
+    flushSync();
+    expectSvgSnapshot(svg.outerHTML, "mixing-fe");
+  });
+
+  it("MixingPlot SVG output matches the saved snapshot (Ba, maximum)", () => {
+    const { svg } = setup("Ba");
+    expectSvgSnapshot(svg.outerHTML, "mixing-ba");
+    expect(screen.getByText("maximum")).toBeTruthy();
+  });
+});
