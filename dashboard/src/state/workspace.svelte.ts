@@ -1,0 +1,76 @@
+/**
+ * The workspace: surveys loaded, the channel, problems found while reading,
+ * and the analysis results received from the worker. Data arrays are
+ * `$state.raw` so analysis/ always gets plain arrays; they are replaced, never
+ * mutated.
+ */
+import type { FeatureCollection } from "geojson";
+import type { ImportIssue, Survey } from "../../../analysis/index.ts";
+import type { WorkerResponse } from "../worker/protocol.ts";
+import type { AnalysisResult } from "../worker/engine.ts";
+import type { ChannelOverlay, SurveyOverlay } from "../worker/overlay.ts";
+
+export type WorkspaceStatus = "idle" | "reading" | "analysing" | "ready" | "error";
+
+/** Progress of the running worker job. */
+export interface Progress {
+  stage: string;
+  done: number;
+  total: number;
+}
+
+export class Workspace {
+  surveys = $state.raw<Survey[]>([]);
+  issues = $state.raw<ImportIssue[]>([]);
+  channel = $state.raw<ChannelOverlay | undefined>(undefined);
+  /** Basemap GeoJSON (water, land, marsh, place labels), drawn by MapLibre. */
+  basemap = $state.raw<FeatureCollection | undefined>(undefined);
+  /** Analysis results by survey index (undefined until the worker answers). */
+  analyses = $state.raw<Array<AnalysisResult | undefined>>([]);
+  overlays = $state.raw<Array<SurveyOverlay | undefined>>([]);
+  status = $state<WorkspaceStatus>("idle");
+  progress = $state<Progress | null>(null);
+  /** Errors reported by the worker, newest last. */
+  errors = $state.raw<string[]>([]);
+
+  /** Folds one worker message into the workspace. */
+  receive(message: WorkerResponse): void {
+    switch (message.type) {
+      case "progress":
+        this.progress = { stage: message.stage, done: message.done, total: message.total };
+        if (this.status !== "reading" || message.done > 0) this.status = "analysing";
+        break;
+      case "loaded":
+        this.surveys = message.surveys;
+        this.issues = message.issues;
+        this.channel = message.channel;
+        this.analyses = message.surveys.map(() => undefined);
+        this.overlays = message.surveys.map(() => undefined);
+        this.status = "analysing";
+        break;
+      case "analysis": {
+        const analyses = [...this.analyses];
+        analyses[message.surveyIndex] = message.analysis;
+        this.analyses = analyses;
+        const overlays = [...this.overlays];
+        overlays[message.surveyIndex] = message.overlay;
+        this.overlays = overlays;
+        break;
+      }
+      case "done":
+        this.status = "ready";
+        this.progress = null;
+        break;
+      case "error":
+        this.errors = [...this.errors, message.message];
+        this.status = this.surveys.length > 0 ? "ready" : "error";
+        break;
+    }
+  }
+
+  /** Marks the start of a new job (files are being read, or settings changed). */
+  begin(reading: boolean): void {
+    this.status = reading ? "reading" : "analysing";
+    this.progress = { stage: reading ? "Reading files" : "Analysing", done: 0, total: 1 };
+  }
+}

@@ -1,0 +1,143 @@
+/**
+ * End-to-end harness: serves dashboard/dist with scripts/serve.js on a free
+ * port, launches Debian's Chromium (never a downloaded browser) headless with
+ * software WebGL, collects console errors and saves screenshots.
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import { existsSync, mkdirSync, mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join, resolve } from "node:path";
+import { fileURLToPath } from "node:url";
+import { chromium, type Browser, type Page } from "playwright-core";
+
+export const REPO_ROOT = resolve(fileURLToPath(new URL("../..", import.meta.url)));
+export const CHROMIUM_PATH = process.env.BRACKLINE_CHROMIUM ?? "/usr/bin/chromium";
+export const SCREENSHOT_DIR = join(REPO_ROOT, "tests", "e2e", "screenshots");
+const DIST_INDEX = join(REPO_ROOT, "dashboard", "dist", "index.html");
+
+/** Flags that give WebGL2 through SwiftShader without a GPU (see TOOLCHAIN notes). */
+export const CHROMIUM_FLAGS = [
+  "--headless",
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+  "--enable-unsafe-swiftshader",
+];
+
+/** Whether the browser tests can run here. */
+export const chromiumAvailable = existsSync(CHROMIUM_PATH);
+
+/**
+ * In CI a missing browser is a failure, not a skip: returns the message to
+ * fail with, or undefined when tests may run or skip.
+ */
+export function missingBrowserMessage(): string | undefined {
+  if (chromiumAvailable) return undefined;
+  return (
+    `Chromium not found at ${CHROMIUM_PATH}. Install Debian's package: apt-get install -y chromium ` +
+    `(browsers are never downloaded by the tests).`
+  );
+}
+
+/** True when the suite should skip (no browser, and not in CI). */
+export const skipBrowser = !chromiumAvailable && process.env.CI !== "true";
+if (skipBrowser) console.warn(`e2e: skipped locally. ${missingBrowserMessage()}`);
+
+export interface Session {
+  browser: Browser;
+  page: Page;
+  url: string;
+  /** Console errors, page errors and failed requests seen so far. */
+  errors: string[];
+  close(): Promise<void>;
+}
+
+function startServer(): Promise<{ child: ChildProcess; url: string }> {
+  if (!existsSync(DIST_INDEX)) {
+    return Promise.reject(new Error(`${DIST_INDEX} is missing: run \`npm run build\` (npm run test:e2e builds first).`));
+  }
+  return new Promise((resolveServer, reject) => {
+    const child = spawn(process.execPath, [join(REPO_ROOT, "scripts", "serve.js")], {
+      env: { ...process.env, PORT: "0" },
+      stdio: ["ignore", "pipe", "pipe"],
+    });
+    let out = "";
+    const timer = setTimeout(() => reject(new Error(`static server did not start: ${out}`)), 15_000);
+    child.stdout?.on("data", (chunk: Buffer) => {
+      out += chunk.toString();
+      const match = /(http:\/\/127\.0\.0\.1:\d+\/)/.exec(out);
+      if (match) {
+        clearTimeout(timer);
+        resolveServer({ child, url: match[1] });
+      }
+    });
+    child.stderr?.on("data", (chunk: Buffer) => (out += chunk.toString()));
+    child.once("exit", (code) => {
+      clearTimeout(timer);
+      reject(new Error(`static server exited with ${code}: ${out}`));
+    });
+  });
+}
+
+/** Starts the server and the browser and opens the dashboard. */
+export async function openDashboard(viewport = { width: 1440, height: 900 }): Promise<Session> {
+  const missing = missingBrowserMessage();
+  if (missing) throw new Error(missing);
+  const server = await startServer();
+  const profile = mkdtempSync(join(tmpdir(), "brackline-chromium-"));
+  let browser: Browser;
+  try {
+    browser = await chromium.launch({
+      executablePath: CHROMIUM_PATH,
+      headless: true,
+      args: [...CHROMIUM_FLAGS, `--user-data-dir=${profile}`],
+    });
+  } catch (error) {
+    server.child.kill();
+    throw error;
+  }
+  const page = await browser.newPage({ viewport });
+  const errors: string[] = [];
+  page.on("console", (msg) => {
+    if (msg.type() === "error") errors.push(`console: ${msg.text()}`);
+  });
+  page.on("pageerror", (error) => errors.push(`page: ${error.message}`));
+  page.on("requestfailed", (req) => errors.push(`request failed: ${req.url()} ${req.failure()?.errorText ?? ""}`));
+  page.on("request", (req) => {
+    if (!req.url().startsWith(server.url) && !req.url().startsWith("data:") && !req.url().startsWith("blob:")) {
+      errors.push(`off-line rule broken: request to ${req.url()}`);
+    }
+  });
+  await page.goto(server.url, { waitUntil: "load" });
+  return {
+    browser,
+    page,
+    url: server.url,
+    errors,
+    async close() {
+      await browser.close().catch(() => undefined);
+      server.child.kill();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Waits until the map has loaded, drawn its style and gone idle. */
+export async function waitForMap(page: Page): Promise<void> {
+  await page.waitForSelector('[data-map-ready="true"]', { timeout: 90_000 });
+}
+
+/** Waits until the worker has analysed every survey. */
+export async function waitForAnalysis(page: Page): Promise<void> {
+  await page.waitForSelector('[data-analysis-status="ready"]', { timeout: 90_000 });
+}
+
+/** Saves a screenshot to tests/e2e/screenshots/<name>.png and returns the PNG bytes. */
+export async function screenshot(page: Page, name: string): Promise<Buffer> {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  return page.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`) });
+}
