@@ -1,0 +1,113 @@
+import type { Constituent, ImportIssue } from "../survey/survey.ts";
+import type { ColumnMapping, ColumnRole } from "./columnMapping.ts";
+import { makeIssue } from "./importSummary.ts";
+import { projDefinition } from "./projection.ts";
+import type { UnitParser } from "./unitText.ts";
+import { canonicalUnitText } from "./unitText.ts";
+
+/** Roles that take a single column. */
+export type SingleRole = Exclude<ColumnRole, "constituent" | "flag" | "ignore">;
+
+/** A constituent column ready to read. */
+export interface ConstituentColumn {
+  index: number;
+  /** Key in Station.values (the symbol, made unique with the header when repeated). */
+  key: string;
+  constituent: Constituent;
+}
+
+/** A mapping resolved against the actual header row. */
+export interface CompiledMapping {
+  headers: string[];
+  single: Partial<Record<SingleRole, number>>;
+  constituents: ConstituentColumn[];
+  /** value column index → flag column index */
+  flagOf: Map<number, number>;
+  /** Conductivity unit factor to mS/cm. */
+  conductivityToMScm?: number;
+  constituentList: Constituent[];
+}
+
+const COND_FACTOR: Record<string, number> = { "mS/cm": 1, "µS/cm": 0.001, "S/m": 10 };
+
+/**
+ * Resolves a ColumnMapping against a header row: finds each mapped column, checks units and the
+ * EPSG code, and lists the file-level problems (never throws).
+ *
+ * @param headers the file's header texts
+ * @param mapping the confirmed mapping
+ * @param file file name for issues
+ * @param parseUnit unit reader used to validate mapping units
+ * @returns the compiled mapping and file-level issues (row 0)
+ */
+export function compileMapping(
+  headers: readonly string[],
+  mapping: ColumnMapping,
+  file: string,
+  parseUnit: UnitParser = canonicalUnitText,
+): { compiled: CompiledMapping; issues: ImportIssue[] } {
+  const issues: ImportIssue[] = [];
+  const compiled: CompiledMapping = { headers: [...headers], single: {}, constituents: [], flagOf: new Map(), constituentList: [] };
+  const indexOf = (h: string): number => {
+    const exact = headers.indexOf(h);
+    return exact >= 0 ? exact : headers.findIndex((x) => x.trim().toLowerCase() === h.trim().toLowerCase());
+  };
+  const keys = new Set<string>();
+  for (const col of mapping.columns) {
+    const i = indexOf(col.header);
+    if (i < 0) {
+      if (col.role !== "ignore") issues.push(makeIssue(file, 0, col.header, "", `column "${col.header}" named in the mapping`, "warning"));
+      continue;
+    }
+    if (col.role === "ignore") continue;
+    if (col.role === "flag") {
+      const target = col.flagFor === undefined ? -1 : indexOf(col.flagFor);
+      if (target < 0) issues.push(makeIssue(file, 0, col.header, col.flagFor ?? "", "the value column this flag belongs to", "warning"));
+      else compiled.flagOf.set(target, i);
+      continue;
+    }
+    if (col.role === "constituent") {
+      const unit = col.unit === undefined ? undefined : (parseUnit(col.unit) ?? undefined);
+      if (unit === undefined) {
+        const found = col.unit ?? col.unitText ?? "";
+        issues.push(makeIssue(file, 0, col.header, found, "a known concentration unit for this constituent (set it in the column mapping); column not imported"));
+        continue;
+      }
+      const name = col.name ?? col.header;
+      let key = name;
+      if (keys.has(key)) {
+        key = `${name} (${col.header})`;
+        issues.push(makeIssue(file, 0, col.header, name, `one column per constituent; stored as "${key}"`, "warning"));
+      }
+      keys.add(key);
+      const constituent: Constituent = { name: key, unit, header: col.header };
+      compiled.constituents.push({ index: i, key, constituent });
+      compiled.constituentList.push(constituent);
+      continue;
+    }
+    const role = col.role as SingleRole;
+    if (compiled.single[role] !== undefined) {
+      issues.push(makeIssue(file, 0, col.header, role, `one "${role}" column; this one is not used`, "warning"));
+      continue;
+    }
+    compiled.single[role] = i;
+    if (role === "conductivity") {
+      const u = col.unit === undefined ? undefined : parseUnit(col.unit);
+      const f = u === undefined ? undefined : COND_FACTOR[u];
+      if (f === undefined) issues.push(makeIssue(file, 0, col.header, col.unit ?? "", "a conductivity unit (mS/cm, µS/cm or S/m)"));
+      else compiled.conductivityToMScm = f;
+    }
+  }
+  const s = compiled.single;
+  if ((s.x !== undefined || s.y !== undefined) && (mapping.epsg === undefined || projDefinition(mapping.epsg) === undefined)) {
+    issues.push(makeIssue(file, 0, headers[s.x ?? s.y ?? 0] ?? "", String(mapping.epsg ?? ""), "a supported EPSG code for the x/y columns (e.g. 27700, 2154, 25832, 326xx/327xx)"));
+  }
+  if (s.station === undefined) issues.push(makeIssue(file, 0, "", "", "a station column; rows are named by their row number", "warning"));
+  if (s.salinity === undefined && s.conductivity === undefined) issues.push(makeIssue(file, 0, "", "", "a salinity (or conductivity) column", "warning"));
+  return { compiled, issues };
+}
+
+/** Exposed for tests and the dialog: which roles a compiled mapping found. */
+export function compiledRoles(c: CompiledMapping): SingleRole[] {
+  return Object.keys(c.single) as SingleRole[];
+}

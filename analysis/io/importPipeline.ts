@@ -1,0 +1,114 @@
+import type { ImportIssue, Survey } from "../survey/survey.ts";
+import type { ColumnMapping } from "./columnMapping.ts";
+import type { CompiledMapping } from "./compileMapping.ts";
+import { compileMapping } from "./compileMapping.ts";
+import type { TextDialect } from "./dialect.ts";
+import type { SurveyGrouping } from "./groupSurveys.ts";
+import { groupSurveys } from "./groupSurveys.ts";
+import type { ImportedStation, ImportSummary } from "./importSummary.ts";
+import { makeIssue } from "./importSummary.ts";
+import type { LayerChoice } from "./layerSelection.ts";
+import { selectLayer } from "./layerSelection.ts";
+import type { FlagDecision } from "./qcFlags.ts";
+import type { RowReader, SalinityFromConductivity } from "./rowReader.ts";
+import { createRowReader } from "./rowReader.ts";
+import type { StationTable } from "./stationTable.ts";
+import { joinStationTable } from "./stationTable.ts";
+import { normaliseStationId } from "./stationIds.ts";
+import { findSavedMapping } from "./fileShape.ts";
+import { suggestMapping } from "./suggestMapping.ts";
+import type { UnitParser } from "./unitText.ts";
+import { canonicalUnitText } from "./unitText.ts";
+
+/** Options shared by the survey readers. */
+export interface ReadSurveyOptions {
+  /** File name used in every issue. */
+  fileName: string;
+  /** Confirmed mapping; otherwise a saved mapping of the same shape, otherwise the suggestion. */
+  mapping?: ColumnMapping;
+  savedMappings?: readonly ColumnMapping[];
+  /** Field delimiter / decimal comma; detected when absent (the mapping's choice comes first). */
+  delimiter?: string;
+  decimalComma?: boolean;
+  parseUnit?: UnitParser;
+  flagMap?: Readonly<Record<string, FlagDecision>>;
+  /** PSS-78 conversion used when only conductivity is given. */
+  salinityFromConductivity?: SalinityFromConductivity;
+  /** Station table joined by station id (positions, distances). */
+  stationTable?: StationTable;
+  /** Layer kept per station and time (default: every row). */
+  layer?: LayerChoice;
+  /** Survey grouping (default: survey column when mapped, else date gaps of 3 days). */
+  grouping?: SurveyGrouping;
+  /** River discharge [m³/s] for all surveys, or by survey name. */
+  riverDischargeM3s?: number | Readonly<Record<string, number>>;
+  /** Progress callback, fraction done 0…1. */
+  onProgress?: (fraction: number) => void;
+}
+
+/** Everything an import produces. */
+export interface ImportResult {
+  surveys: Survey[];
+  issues: ImportIssue[];
+  summary: ImportSummary;
+  mapping: ColumnMapping;
+  headers: string[];
+  dialect: TextDialect;
+}
+
+/** Chooses the mapping: explicit, saved for this shape, or suggested. */
+export function chooseMapping(headers: string[], sample: string[][], options: ReadSurveyOptions): ColumnMapping {
+  if (options.mapping !== undefined) return options.mapping;
+  const saved = options.savedMappings === undefined ? undefined : findSavedMapping(headers, options.savedMappings);
+  return saved ?? suggestMapping(headers, sample, options.parseUnit ?? canonicalUnitText);
+}
+
+/** Compiles the mapping and creates the row reader, adding file-level issues. */
+export function startRows(headers: string[], mapping: ColumnMapping, dialect: TextDialect, options: ReadSurveyOptions): { reader: RowReader; compiled: CompiledMapping } {
+  const { compiled, issues } = compileMapping(headers, mapping, options.fileName, options.parseUnit ?? canonicalUnitText);
+  const reader = createRowReader(compiled, mapping, {
+    file: options.fileName,
+    decimalComma: dialect.decimalComma,
+    ...(options.flagMap !== undefined ? { flagMap: options.flagMap } : {}),
+    ...(options.salinityFromConductivity !== undefined ? { salinityFromConductivity: options.salinityFromConductivity } : {}),
+  });
+  reader.issues.push(...issues);
+  const s = compiled.single;
+  if (s.salinity === undefined && s.conductivity !== undefined && options.salinityFromConductivity === undefined) {
+    reader.issues.push(makeIssue(options.fileName, 0, headers[s.conductivity] ?? "", "", "a salinity column or a PSS-78 conductivity conversion (salinity left missing)"));
+  }
+  return { reader, compiled };
+}
+
+/** Joins, selects the layer, reports stations without position and groups into surveys. */
+export function finishImport(
+  reader: RowReader,
+  compiled: CompiledMapping,
+  mapping: ColumnMapping,
+  headers: string[],
+  dialect: TextDialect,
+  options: ReadSurveyOptions,
+): ImportResult {
+  const file = options.fileName;
+  const issues = reader.issues;
+  const stationHeader = compiled.single.station === undefined ? "" : (headers[compiled.single.station] ?? "");
+  let rows: ImportedStation[] = reader.stations;
+  if (options.stationTable !== undefined) {
+    const joined = joinStationTable(rows, options.stationTable, file, stationHeader);
+    rows = joined.stations;
+    issues.push(...joined.issues);
+  }
+  const layered = selectLayer(rows, options.layer ?? { kind: "all" }, file);
+  issues.push(...layered.issues);
+  const noPos = new Map<string, ImportedStation>();
+  for (const st of layered.stations) if (st.lonLat === undefined && !noPos.has(normaliseStationId(st.id).id)) noPos.set(normaliseStationId(st.id).id, st);
+  for (const st of noPos.values()) {
+    const hint = st.distanceKm !== undefined ? `; the file's along-channel distance ${st.distanceKm} km is kept` : "; it can be placed by its along-axis label or a station table";
+    issues.push(makeIssue(file, st.sourceRow, stationHeader, st.id, `a position for station ${st.id} (latitude/longitude, x/y or a station table)${hint}`, "warning"));
+  }
+  const grouping: SurveyGrouping = options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
+  const grouped = groupSurveys(layered.stations, grouping, compiled.constituentList, file, options.riverDischargeM3s);
+  issues.push(...grouped.issues);
+  options.onProgress?.(1);
+  return { surveys: grouped.surveys, issues, summary: reader.summary, mapping, headers, dialect };
+}

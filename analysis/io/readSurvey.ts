@@ -1,0 +1,143 @@
+import type { ColumnMapping } from "./columnMapping.ts";
+import type { CompiledMapping } from "./compileMapping.ts";
+import type { TextDialect } from "./dialect.ts";
+import { detectDialect, stripBom } from "./dialect.ts";
+import type { DelimitedRecord } from "./delimitedRecords.ts";
+import { parseDelimitedChunks, parseDelimitedText } from "./delimitedRecords.ts";
+import type { ImportResult, ReadSurveyOptions } from "./importPipeline.ts";
+import { chooseMapping, finishImport, startRows } from "./importPipeline.ts";
+import type { RowReader } from "./rowReader.ts";
+
+const SAMPLE_ROWS = 50;
+
+function dialectFor(sample: string, options: ReadSurveyOptions): TextDialect {
+  const m = options.mapping;
+  const detected = detectDialect(sample);
+  const delimiter = options.delimiter ?? m?.delimiter ?? detected.delimiter;
+  const decimalComma = options.decimalComma ?? m?.decimalComma ?? (delimiter === "," ? false : detected.decimalComma);
+  return { delimiter, decimalComma };
+}
+
+/** Buffers the header and the first records, then hands every record to the row reader. */
+class RecordRouter {
+  private buffer: DelimitedRecord[] = [];
+  headers: string[] = [];
+  mapping: ColumnMapping | undefined;
+  reader: RowReader | undefined;
+  compiled: CompiledMapping | undefined;
+  constructor(
+    private readonly dialect: TextDialect,
+    private readonly options: ReadSurveyOptions,
+  ) {}
+  push = (rec: DelimitedRecord): void => {
+    if (this.reader !== undefined) return this.reader.read(rec);
+    this.buffer.push(rec);
+    if (this.buffer.length > SAMPLE_ROWS) this.start();
+  };
+  start(): void {
+    if (this.reader !== undefined) return;
+    const [head, ...rest] = this.buffer;
+    this.headers = head === undefined ? [] : head.fields.map((h, i) => (h.trim() === "" ? `column ${i + 1}` : h.trim()));
+    this.mapping = chooseMapping(this.headers, rest.map((r) => r.fields), this.options);
+    const { reader, compiled } = startRows(this.headers, this.mapping, this.dialect, this.options);
+    this.reader = reader;
+    this.compiled = compiled;
+    if (head === undefined) reader.issues.push({ file: this.options.fileName, row: 0, column: "", value: "", expected: "a header row and data rows (the file is empty)", severity: "error" });
+    for (const r of rest) reader.read(r);
+    this.buffer = [];
+  }
+  finish(blankLines: number): ImportResult {
+    this.start();
+    const reader = this.reader as RowReader;
+    reader.summary.blankLines = blankLines;
+    if (this.headers.length > 0 && reader.summary.rowsRead === 0) {
+      reader.issues.push({ file: this.options.fileName, row: 1, column: "", value: this.headers.join(",").slice(0, 200), expected: "data rows below the header", severity: "warning" });
+    }
+    return finishImport(reader, this.compiled as CompiledMapping, this.mapping as ColumnMapping, this.headers, this.dialect, this.options);
+  }
+}
+
+/**
+ * Reads a survey file given as text (CSV, TSV or semicolon-separated with decimal comma; UTF-8
+ * with or without BOM; quoted fields) with papaparse, following the confirmed, saved or suggested
+ * column mapping. Never throws on bad data: every problem is an ImportIssue with file, row, column
+ * and value, and every data row is counted as accepted or rejected in the summary.
+ *
+ * @param text the file content
+ * @param options file name, mapping, station table, layer, grouping, discharge, progress
+ * @returns surveys, issues, summary, the mapping used, headers and dialect
+ */
+export function readSurveyText(text: string, options: ReadSurveyOptions): ImportResult {
+  const clean = stripBom(text);
+  const dialect = dialectFor(clean.slice(0, 65536), options);
+  const router = new RecordRouter(dialect, options);
+  const blank = parseDelimitedText(clean, dialect, router.push);
+  return router.finish(blank);
+}
+
+/** Text in pieces: a WHATWG ReadableStream or any (async) iterable of strings or UTF-8 bytes. */
+export type TextChunkSource = ReadableStream<Uint8Array | string> | AsyncIterable<Uint8Array | string> | Iterable<Uint8Array | string>;
+
+async function* decodeChunks(source: TextChunkSource, counter: { size: number }): AsyncGenerator<string> {
+  const decoder = new TextDecoder("utf-8");
+  const iterable: AsyncIterable<Uint8Array | string> | Iterable<Uint8Array | string> =
+    typeof (source as ReadableStream).getReader === "function" ? readAll(source as ReadableStream<Uint8Array | string>) : (source as AsyncIterable<Uint8Array | string>);
+  for await (const chunk of iterable) {
+    counter.size += chunk.length;
+    yield typeof chunk === "string" ? chunk : decoder.decode(chunk, { stream: true });
+  }
+  const tail = decoder.decode();
+  if (tail.length > 0) yield tail;
+}
+
+async function* readAll<T>(stream: ReadableStream<T>): AsyncGenerator<T> {
+  const reader = stream.getReader();
+  try {
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) return;
+      yield value;
+    }
+  } finally {
+    reader.releaseLock();
+  }
+}
+
+/**
+ * Streams a large survey file through papaparse's chunked reader. The delimiter is detected on the
+ * first 64 KiB; the mapping is chosen after the first 50 records; progress is reported as the
+ * fraction of `totalSize` read (characters for string chunks, bytes for byte chunks).
+ *
+ * @param source the file in chunks (split anywhere, also inside quoted fields)
+ * @param options as for readSurveyText, plus totalSize for progress
+ * @returns a promise of the same result readSurveyText gives for the whole text
+ */
+export async function readSurveyStream(source: TextChunkSource, options: ReadSurveyOptions & { totalSize?: number }): Promise<ImportResult> {
+  const counter = { size: 0 };
+  const chunks = decodeChunks(source, counter);
+  let head = "";
+  const early: string[] = [];
+  while (head.length < 65536) {
+    const next = await chunks.next();
+    if (next.done === true) break;
+    early.push(next.value);
+    head += next.value;
+  }
+  const dialect = dialectFor(stripBom(head).slice(0, 65536), options);
+  const router = new RecordRouter(dialect, options);
+  const total = options.totalSize;
+  const early0 = early.length;
+  let handed = 0;
+  async function* all(): AsyncGenerator<string> {
+    yield* early;
+    yield* chunks;
+  }
+  // Progress: share of totalSize read so far (the early chunks count once they are handed to the parser).
+  const blank = await parseDelimitedChunks(all(), dialect, router.push, () => {
+    handed += 1;
+    if (total === undefined || total <= 0) return;
+    const sizeSoFar = handed <= early0 ? Math.min(counter.size, (counter.size * handed) / Math.max(early0, 1)) : counter.size;
+    options.onProgress?.(Math.min(1, sizeSoFar / total));
+  });
+  return router.finish(blank);
+}

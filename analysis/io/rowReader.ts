@@ -1,0 +1,146 @@
+import type { ImportIssue, ValueCell } from "../survey/survey.ts";
+import type { ColumnMapping } from "./columnMapping.ts";
+import type { CompiledMapping } from "./compileMapping.ts";
+import type { CellContext } from "./cellReaders.ts";
+import { readNumberCell, readValueCell, VALUE_LIMITS } from "./cellReaders.ts";
+import type { DelimitedRecord } from "./delimitedRecords.ts";
+import type { ImportedStation, ImportSummary } from "./importSummary.ts";
+import { countRejected, emptySummary, makeIssue } from "./importSummary.ts";
+import type { FlagDecision } from "./qcFlags.ts";
+import { DEFAULT_FLAG_MAP, readQcFlag } from "./qcFlags.ts";
+import { readRowPlace } from "./rowPlace.ts";
+
+/** Practical salinity from conductivity [mS/cm], temperature [°C] and pressure [dbar]. */
+export type SalinityFromConductivity = (conductivityMScm: number, temperatureC: number, pressureDbar: number) => number | undefined;
+
+/** Options for reading rows. */
+export interface RowReaderOptions {
+  file: string;
+  decimalComma: boolean;
+  flagMap?: Readonly<Record<string, FlagDecision>>;
+  salinityFromConductivity?: SalinityFromConductivity;
+}
+
+/** Reads data records into stations, counting every row. */
+export interface RowReader {
+  read(record: DelimitedRecord): void;
+  stations: ImportedStation[];
+  issues: ImportIssue[];
+  summary: ImportSummary;
+}
+
+const VALUE_ROLES = ["salinity", "temperature", "pH", "conductivity"] as const;
+
+/**
+ * Creates a reader that turns data records into {@link ImportedStation}s following a compiled mapping.
+ * A bad cell becomes an invalid ValueCell plus an issue; a row is rejected (counted by reason, with
+ * an issue naming file, row and column) only when it has no station id or its row QC flag rejects it.
+ *
+ * @param compiled mapping resolved against the header row
+ * @param mapping the mapping (date order, time zone, EPSG, depth labels)
+ * @param options file name, decimal comma, flag map, conductivity conversion
+ * @returns the reader; read() never throws on bad data
+ */
+export function createRowReader(compiled: CompiledMapping, mapping: ColumnMapping, options: RowReaderOptions): RowReader {
+  const issues: ImportIssue[] = [];
+  const stations: ImportedStation[] = [];
+  const summary = emptySummary();
+  const flagMap = options.flagMap ?? DEFAULT_FLAG_MAP;
+  const s = compiled.single;
+  const width = compiled.headers.length;
+  const header = (i: number): string => compiled.headers[i] ?? `column ${i + 1}`;
+  const count = (c: ValueCell): void => {
+    summary.valuesByStatus[c.status] += 1;
+    if (!c.accepted && c.status !== "invalid") summary.valuesRejectedByFlag += 1;
+  };
+
+  const read = (record: DelimitedRecord): void => {
+    const { fields, row } = record;
+    summary.rowsRead += 1;
+    const ctx: CellContext = { file: options.file, row, decimalComma: options.decimalComma, flagMap, issues };
+    for (const e of record.parseErrors) issues.push(makeIssue(options.file, row, "", fields.join(",").slice(0, 120), `well-formed delimited text (${e})`, "warning"));
+    if (fields.length !== width) {
+      issues.push(makeIssue(options.file, row, "", String(fields.length), `${width} fields as in the header row`, "warning"));
+    }
+    const cellText = (i: number | undefined): string => (i === undefined ? "" : (fields[i] ?? ""));
+    const flagged = (i: number): { text: string; header: string } | undefined => {
+      const f = compiled.flagOf.get(i);
+      return f === undefined ? undefined : { text: cellText(f), header: header(f) };
+    };
+    // station id
+    let id = s.station === undefined ? `row ${row}` : cellText(s.station).trim();
+    if (id.length === 0) {
+      countRejected(summary, "missing station id");
+      issues.push(makeIssue(options.file, row, header(s.station ?? 0), cellText(s.station), "a station id"));
+      return;
+    }
+    if (id.length > 200) id = id.slice(0, 200);
+    // row flag
+    let rowFlag: string | undefined;
+    if (s.rowFlag !== undefined) {
+      rowFlag = cellText(s.rowFlag);
+      const d = readQcFlag(rowFlag, flagMap);
+      if (d !== "accept") {
+        const reason = d === undefined ? "unknown row QC flag" : "row QC flag rejects";
+        countRejected(summary, reason);
+        issues.push(makeIssue(options.file, row, header(s.rowFlag), rowFlag, "a row QC flag that accepts the row", "warning"));
+        return;
+      }
+    }
+    const place = readRowPlace(ctx, compiled, mapping, fields);
+    const cells: Partial<Record<(typeof VALUE_ROLES)[number], ValueCell>> = {};
+    for (const role of VALUE_ROLES) {
+      const i = s[role];
+      if (i === undefined) continue;
+      const c = readValueCell(ctx, header(i), cellText(i), flagged(i), VALUE_LIMITS[role]);
+      if (role !== "conductivity") count(c);
+      cells[role] = c;
+    }
+    let salinity = cells.salinity;
+    if (salinity === undefined) salinity = salinityFromConductivityCell(ctx, cells, compiled, options, place.depthM);
+    const values: Record<string, ValueCell> = {};
+    for (const c of compiled.constituents) {
+      const cell = readValueCell(ctx, header(c.index), cellText(c.index), flagged(c.index));
+      count(cell);
+      values[c.key] = cell;
+    }
+    const st: ImportedStation = { id, salinity, values, sourceRow: row, sourceFile: options.file, ...place };
+    if (cells.temperature !== undefined) st.temperatureC = cells.temperature;
+    if (cells.pH !== undefined) st.pH = cells.pH;
+    if (s.survey !== undefined && cellText(s.survey).trim() !== "") st.surveyLabel = cellText(s.survey).trim();
+    if (s.distance !== undefined) {
+      const d = readNumberCell(ctx, header(s.distance), cellText(s.distance));
+      if (d !== undefined) st.distanceKm = d;
+    }
+    if (s.discharge !== undefined) {
+      const q = readNumberCell(ctx, header(s.discharge), cellText(s.discharge), 0);
+      if (q !== undefined) st.dischargeM3s = q;
+    }
+    if (rowFlag !== undefined && rowFlag.trim() !== "") st.rowFlag = rowFlag;
+    stations.push(st);
+    summary.rowsAccepted += 1;
+  };
+  return { read, stations, issues, summary };
+}
+
+function salinityFromConductivityCell(
+  ctx: CellContext,
+  cells: Partial<Record<string, ValueCell>>,
+  compiled: CompiledMapping,
+  options: RowReaderOptions,
+  depthM: number | undefined,
+): ValueCell {
+  const cond = cells.conductivity;
+  const missing: ValueCell = { value: undefined, original: cond?.original ?? "", status: "missing", accepted: true };
+  if (cond === undefined || cond.status !== "measured" || cond.value === undefined) return cond === undefined ? missing : { ...cond };
+  const t = cells.temperature?.value;
+  const f = compiled.conductivityToMScm;
+  if (options.salinityFromConductivity === undefined || t === undefined || f === undefined) return missing;
+  // Pressure from depth: 1 m ≈ 1 dbar (common practice for shallow estuarine samples).
+  const sp = options.salinityFromConductivity(cond.value * f, t, depthM ?? 0);
+  if (sp === undefined || !Number.isFinite(sp)) {
+    ctx.issues.push(makeIssue(ctx.file, ctx.row, compiled.headers[compiled.single.conductivity ?? 0] ?? "", cond.original, "a conductivity that converts to practical salinity"));
+    return { value: undefined, original: cond.original, status: "invalid", accepted: false };
+  }
+  return { value: sp, original: cond.original, status: "measured", accepted: cond.accepted };
+}

@@ -1,0 +1,31 @@
+/** A station id reduced to its comparable form. */
+export interface NormalisedStationId {
+  /** Comparable id: trimmed, upper-case, leading zeros and a trailing ".0" removed from numbers. */
+  id: string;
+  /** What the normalisation changed, for reporting ("leading zeros", "case", ...). */
+  changes: string[];
+}
+
+/**
+ * Normalises a station id for joining a measurement file to a station table: trims white space,
+ * compares case-insensitively, reads numeric ids as numbers ("007" → "7", "2.0" → "2", "12.50" → "12.5").
+ *
+ * @param raw the id as written
+ * @returns the comparable id and the list of changes made
+ */
+export function normaliseStationId(raw: string): NormalisedStationId {
+  const changes: string[] = [];
+  let id = raw.trim().replace(/\s+/g, " ");
+  if (id !== raw) changes.push("white space");
+  if (/^[+-]?\d+(\.\d+)?$/.test(id)) {
+    const n = String(Number(id));
+    if (/^[+-]?0\d/.test(id)) changes.push("leading zeros");
+    if (/\.\d*$/.test(id) && n !== id && !id.startsWith("0")) changes.push("decimal form");
+    id = n;
+  } else {
+    const up = id.toUpperCase();
+    if (up !== id) changes.push("case");
+    id = up;
+  }
+  return { id, changes };
+}
