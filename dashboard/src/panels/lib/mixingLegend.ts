@@ -19,6 +19,7 @@ export function mixingLegendItems(model: MixingModel): LegendItem[] {
   if (model.tangent) items.push({ label: "Seaward tangent", colour: roles.tangent, symbol: "line" });
   if (model.effective) items.push({ label: "C*₀ (effective river end-member)", colour: roles.tangent, symbol: "diamond" });
   if (model.zone) items.push({ label: "Reaction zone", colour: roles.zone, symbol: "zone" });
+  if (model.maximum) items.push({ label: "Maximum (95 % range)", colour: roles.maximum, symbol: "dashed" });
   return items;
 }
 

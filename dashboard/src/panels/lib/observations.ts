@@ -2,6 +2,7 @@
  * The observations a panel draws for one constituent, and look-ups between
  * constituents, stations and the shared selection. Data handling only.
  */
+import type { Survey } from "../../../../analysis/survey/survey.ts";
 import type { ConstituentAnalysisView, ObservationPoint, StationPlacement, SurveyAnalysisView } from "./types.ts";
 
 /** The constituent result by name, or undefined. */
@@ -45,3 +46,37 @@ export const observationKindLabel: Record<ObservationPoint["kind"], string> = {
   belowDetection: "below detection limit (drawn at the limit)",
   rejected: "rejected by quality control (not analysed)",
 };
+
+/**
+ * Observations of constituent `name` read straight from the survey, including
+ * QC-rejected values (drawn as crosses) and below-detection values at their
+ * limit. Values without a readable salinity are left out.
+ */
+export function surveyObservations(survey: Survey, name: string): ObservationPoint[] {
+  const out: ObservationPoint[] = [];
+  for (const st of survey.stations) {
+    const cell = st.values[name];
+    const s = st.salinity.value;
+    if (!cell || s === undefined || !Number.isFinite(s)) continue;
+    if (cell.status === "measured" && cell.value !== undefined) {
+      out.push({ stationId: st.id, salinity: s, value: cell.value, kind: cell.accepted ? "measured" : "rejected", original: cell.original });
+    } else if (cell.status === "belowDetection" && cell.detectionLimit !== undefined) {
+      out.push({
+        stationId: st.id,
+        salinity: s,
+        value: cell.detectionLimit,
+        kind: cell.accepted ? "belowDetection" : "rejected",
+        original: cell.original,
+      });
+    }
+  }
+  return out;
+}
+
+/** The analysis with each constituent's `observations` filled from the survey (for drawing rejected values). */
+export function withObservations(analysis: SurveyAnalysisView, survey: Survey): SurveyAnalysisView {
+  return {
+    ...analysis,
+    constituents: analysis.constituents.map((c) => ({ ...c, observations: surveyObservations(survey, c.name) })),
+  };
+}

@@ -5,6 +5,9 @@
 import type { StationPlacement, SurveyFacts } from "../../../../analysis/pipeline/surveyAnalysis.ts";
 import type {
   BehaviourClass,
+  ConstituentAnalysis,
+  FitCurve,
+  TangentLine,
   DilutionLine,
   Endmember,
   Estimate,
@@ -17,6 +20,9 @@ import type { Selection } from "../../state/selection.svelte.ts";
 
 export type {
   BehaviourClass,
+  ConstituentAnalysis,
+  FitCurve,
+  TangentLine,
   DilutionLine,
   Endmember,
   Estimate,
@@ -27,22 +33,6 @@ export type {
   StationPlacement,
   SurveyFacts,
 };
-
-/** Fitted curve with its 95 % confidence band, sampled on a salinity grid. */
-export interface FitCurve {
-  salinity: number[];
-  conc: number[];
-  lower: number[];
-  upper: number[];
-}
-
-/** Straight tangent C = intercept + slope·S drawn from the seaward segment to the river salinity. */
-export interface TangentLine {
-  slope: number;
-  intercept: number;
-  /** Salinity interval of the seaward segment the tangent was fitted to. */
-  salinityRange: [number, number];
-}
 
 /** One observation as drawn, including values the analysis set aside. */
 export interface ObservationPoint {
@@ -55,24 +45,12 @@ export interface ObservationPoint {
   original?: string;
 }
 
-/** Per-constituent mixing result, as the panels read it. */
-export interface ConstituentAnalysisView {
-  name: string;
-  unit: string;
-  endmembers?: { river: Endmember; sea: Endmember };
-  dilutionLine?: DilutionLine;
-  deviations: StationDeviation[];
-  fit?: FitCurve;
-  tangent?: TangentLine;
-  class: BehaviourClass;
-  effectiveEndmember?: Estimate;
-  percentChange?: Estimate;
-  reactionZone?: ReactionZone;
-  maximum?: MidEstuarineMaximum;
-  warnings: MixingWarning[];
-  /** Every observation including QC-rejected ones; when absent the plot draws the deviations. */
-  observations?: ObservationPoint[];
-}
+/**
+ * Per-constituent mixing result as the panels read it: the analysis contract
+ * plus, optionally, every observation including QC-rejected ones (see
+ * {@link withObservations}); without them the plots draw the analysed stations.
+ */
+export type ConstituentAnalysisView = ConstituentAnalysis & { observations?: ObservationPoint[] };
 
 /** The survey analysis result the panels take as `analysis`. */
 export interface SurveyAnalysisView {
