@@ -1,4 +1,5 @@
 import type { Command } from "../command.ts";
+import { demoCommand } from "./demo.ts";
 
 /** Every subcommand of `brackline`, in the order `--help` lists them. */
-export const commands: Command[] = [];
+export const commands: Command[] = [demoCommand];
