@@ -24,8 +24,7 @@ export interface FeConstantSet {
 const BM = [-2.19, -5.67, -12.56, -21.6] as const;
 const BM_DH_KCAL = [10.4, 17.1, 24.8, 31.9] as const;
 
-/** Fe(III) constant sets, keyed by id. */
-export const FE_CONSTANT_SETS: Readonly<Record<FeConstantSetId, FeConstantSet>> = Object.freeze({
+const SETS: Record<FeConstantSetId, FeConstantSet> = {
   baesMesmer1976: {
     id: "baesMesmer1976",
     label: "Baes & Mesmer 1976 (WATEQ4F), I = 0",
@@ -61,7 +60,10 @@ export const FE_CONSTANT_SETS: Readonly<Record<FeConstantSetId, FeConstantSet>> 
     logKs0: (t) => -9.17 + 3993 / (t + 273.15),
     temperatureRangeC: [5, 50],
   },
-});
+};
+
+/** Fe(III) constant sets, keyed by id. */
+export const FE_CONSTANT_SETS: Readonly<Record<FeConstantSetId, FeConstantSet>> = Object.freeze(SETS);
 
 /**
  * Looks up a built-in Fe(III) constant set.
