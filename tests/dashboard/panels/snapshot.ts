@@ -28,14 +28,19 @@ export function normaliseSvg(markup: string): string {
 
 /** Compares `markup` with the saved snapshot `name`.svg; writes `name`-changed.svg and fails on mismatch. */
 export function expectSvgSnapshot(markup: string, name: string): void {
+  expectMarkupSnapshot(markup, name, "svg");
+}
+
+/** As {@link expectSvgSnapshot} for other markup (e.g. "html" tables). */
+export function expectMarkupSnapshot(markup: string, name: string, ext: "svg" | "html"): void {
   const actual = normaliseSvg(markup);
-  const path = join(dir, `${name}.svg`);
-  const changed = join(dir, `${name}-changed.svg`);
+  const path = join(dir, `${name}.${ext}`);
+  const changed = join(dir, `${name}-changed.${ext}`);
   mkdirSync(dir, { recursive: true });
   if (!existsSync(path)) {
     writeFileSync(path, actual);
-    console.warn(`snapshot ${name}.svg was missing and has been written; review it`);
-    expect(process.env.CI, `snapshot ${name}.svg missing (written now); commit it`).toBeFalsy();
+    console.warn(`snapshot ${name}.${ext} was missing and has been written; review it`);
+    expect(process.env.CI, `snapshot ${name}.${ext} missing (written now); commit it`).toBeFalsy();
     return;
   }
   const expected = readFileSync(path, "utf8");
@@ -44,5 +49,5 @@ export function expectSvgSnapshot(markup: string, name: string): void {
     return;
   }
   writeFileSync(changed, actual);
-  expect(actual, `SVG output differs from __snapshots__/${name}.svg; see ${name}-changed.svg`).toBe(expected);
+  expect(actual, `output differs from __snapshots__/${name}.${ext}; see ${name}-changed.${ext}`).toBe(expected);
 }
