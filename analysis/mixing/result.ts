@@ -90,3 +90,114 @@ export interface MidEstuarineMaximum {
   /** Salinity beyond which the constituent is conservative again. */
   conservativeBeyondSalinity?: number;
 }
+
+/** Fitted C–S curve sampled on a salinity grid, with its 95 % bootstrap band. */
+export interface FitCurve {
+  /** How the curve was fitted, e.g. "cubic smoothing spline, λ by GCV (α = 1.4)". */
+  method: string;
+  salinity: number[];
+  conc: number[];
+  /** 2.5 % and 97.5 % bootstrap percentiles of the curve at each grid salinity. */
+  lower: number[];
+  upper: number[];
+  /** dC/dS of the fitted curve [unit per salinity unit]. */
+  derivative: number[];
+  /** d²C/dS² of the fitted curve [unit per salinity unit²]. */
+  secondDerivative: number[];
+  /** Smoothing parameter λ and effective degrees of freedom (2 = straight line). */
+  lambda: number;
+  edf: number;
+}
+
+/** Straight seaward segment (tangent) C = intercept + slope·S used for the effective end-member. */
+export interface TangentLine {
+  slope: number;
+  intercept: number;
+  /** Salinity interval of the seaward segment the line was fitted to. */
+  fromSalinity: number;
+  toSalinity: number;
+  /** Same interval as [fromSalinity, toSalinity] (as the dashboard reads it). */
+  salinityRange: [number, number];
+  /** "segment" = least-squares line through the seaward linear stations; "curve-tangent" = tangent of the fitted curve at the seaward-most station. */
+  method: "segment" | "curve-tangent";
+  /** Stations in the seaward segment. */
+  nStations: number;
+}
+
+/** Statistical evidence behind the behaviour class. */
+export interface MixingEvidence {
+  /** Σ(e_i/σ_i)²/(n − 2) of the straight-line fit of C on S, σ = analytical precision (≫ 1: scatter beyond precision). */
+  chiSquaredPerDof: number;
+  /** Upper-tail p of that χ² with n − 2 degrees of freedom. */
+  chiSquaredP: number;
+  /** p of the nested F-test quadratic vs linear, F ~ F(1, n − 3). */
+  fTestCurvatureP: number;
+  /** Coefficient c of C = a + b·S + c·S² (> 0 removal, < 0 addition) [unit per salinity²]. */
+  quadraticCoefficient: number;
+  /** Reduction of χ² by the quadratic term, in precision units (> 3.84 = curvature larger than precision). */
+  curvatureDeltaChiSquared: number;
+  /** Exact one-sided Wald–Wolfowitz p (too few runs) of the straight-line residual signs ordered by salinity. */
+  runsTestP: number;
+  runs: number;
+  nStations: number;
+  /** Stations whose deviation from the dilution line exceeds k·precision. */
+  nSignificantDeviations: number;
+  nCensored: number;
+  /** Significance factor k used for deviations. */
+  k: number;
+}
+
+/** Fluxes through the estuary when the river discharge is known (Boyle et al. 1974). */
+export interface FluxSummary {
+  /** Q·C₀, the gross river input [mol/s]. */
+  grossRiver: Estimate;
+  /** Q·C*₀, the effective export past the reaction zone [mol/s]. */
+  effectiveExport: Estimate;
+  /** Q·(C*₀ − C₀): negative = estuarine sink (removal), positive = source (addition) [mol/s]. */
+  netChange: Estimate;
+  dischargeM3s: number;
+  /** How the concentration unit was converted to mol/m³ (and any density assumption). */
+  unitNote: string;
+}
+
+/** Reaction-rate profile R(S) from the curvature (Eq. 4) and its integrated check (Eq. 5). */
+export interface RateProfile {
+  salinity: number[];
+  /** Volumetric rate R, positive = production (addition), negative = removal [unit/s, e.g. µmol L⁻¹ s⁻¹ = mmol m⁻³ s⁻¹]. */
+  rate: number[];
+  unit: string;
+  /** Which physical inputs were used: "Q,A,dS/dx", "K,dS/dx" or "Q,A,K". */
+  formula: string;
+  /** ∫A·R dx over the profile [mol/s], from the rates. */
+  integratedMolS: number;
+  /** Q·[C*₀(S₂) − C*₀(S₁)] over the same interval [mol/s] (Eq. 5). */
+  expectedMolS: number;
+  /** |integrated − expected|/max(|expected|, tiny). */
+  relativeDifference: number;
+}
+
+/** The full mixing analysis of one constituent: what the dashboard, CLI JSON and briefing show. */
+export interface ConstituentAnalysis {
+  name: string;
+  unit: string;
+  class: BehaviourClass;
+  /** "low" when a warning undermines the interpretation (end-member variability, too few stations, partial salinity range). */
+  confidence: "normal" | "low";
+  endmembers?: { river: Endmember; sea: Endmember };
+  dilutionLine?: DilutionLine;
+  deviations: StationDeviation[];
+  fit?: FitCurve;
+  tangent?: TangentLine;
+  evidence?: MixingEvidence;
+  /** C*₀ = tangent value at the river salinity S_r (Boyle et al. 1974). */
+  effectiveEndmember?: Estimate;
+  /** 100·(C*₀ − C₀)/C₀; NEGATIVE = net removal, POSITIVE = net addition [%]. */
+  percentChange?: Estimate;
+  flux?: FluxSummary;
+  reactionZone?: ReactionZone & { salinityLower?: Estimate; salinityUpper?: Estimate };
+  maximum?: MidEstuarineMaximum & { addedFlux?: Estimate };
+  rateProfile?: RateProfile;
+  /** Bootstrap draws requested and usable, and the seed. */
+  bootstrap?: { draws: number; usable: number; seed: number };
+  warnings: MixingWarning[];
+}

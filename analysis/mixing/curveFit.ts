@@ -1,0 +1,74 @@
+import type { PreparedSample } from "./prepareSamples.ts";
+import type { NaturalSpline } from "../stats/naturalSpline.ts";
+import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
+import { fitSmoothingSpline, mergeKnots } from "../stats/smoothingSpline.ts";
+import { GCV_ALPHA, minimiseGcv, precisionFloorLambda, splinePath } from "../stats/splineGcv.ts";
+import { chiSquareUpperP } from "../stats/distributions.ts";
+import { runsTest } from "../stats/runsTest.ts";
+
+/** The fitted C–S curve on the full data. */
+export interface CurveFitResult {
+  spline: NaturalSpline;
+  lambda: number;
+  edf: number;
+  /** max(1, √(RSS_w/(n − edf))): how much the scatter exceeds analytical precision. */
+  scatterFactor: number;
+  method: string;
+}
+
+/** Salinities closer than this fraction of the range share one knot. */
+export const TIE_FRACTION = 1e-6;
+
+/**
+ * Fits the C–S curve: a cubic smoothing spline weighted by 1/σ² with λ chosen by
+ * generalised cross-validation. Rule (documented choice): λ_GCV minimises GCV with
+ * α = 1.4 (against undersmoothing); if its residuals show lack of fit (χ² vs precision
+ * p < 0.01 AND runs test p < 0.05) plain GCV (α = 1) is used instead; finally
+ * λ = max(λ_GCV, λ_floor), λ_floor being the largest λ whose residuals stay within
+ * analytical precision (RSS_w/(n − edf) ≤ 1). Chosen over a fixed polynomial because it
+ * follows a steep low-salinity removal curve or a mid-salinity maximum, and over
+ * interpolation because the GCV penalty keeps it from inventing wiggles; it also gives
+ * continuous first and second derivatives for the tangent and the rate (Eq. 4).
+ *
+ * @param used prepared samples sorted by salinity (≥ 4 distinct salinities)
+ * @returns the fit, or undefined with fewer than 4 distinct salinities
+ * @see Craven & Wahba (1979) Numer. Math. 31, 377–403; Green & Silverman (1994) ch. 2–3.
+ */
+export function fitCurve(used: readonly PreparedSample[]): CurveFitResult | undefined {
+  const x = used.map((s) => s.salinity);
+  const range = x[x.length - 1]! - x[0]!;
+  const knots = mergeKnots(x, used.map((s) => s.conc), used.map((s) => 1 / (s.sigma * s.sigma)), TIE_FRACTION * range);
+  if (knots.x.length < 4) return undefined;
+  const path = splinePath(knots);
+  let g = minimiseGcv(path, GCV_ALPHA);
+  let alpha = GCV_ALPHA;
+  const r = path.residuals(g.lambda);
+  const lackOfFit = chiSquareUpperP(g.rss, Math.max(1, path.n - g.edf)) < 0.01 && runsTest(r).pTooFew < 0.05;
+  if (lackOfFit) {
+    g = minimiseGcv(path, 1);
+    alpha = 1;
+  }
+  const floor = precisionFloorLambda(path);
+  const lambda = Math.max(g.lambda, floor);
+  const edf = path.at(Math.log(lambda), 1).edf;
+  const spline = fitSmoothingSpline(knots, lambda);
+  let rss = 0;
+  const vals = new Float64Array(used.length);
+  evaluateSplineGrid(spline, x, vals);
+  used.forEach((s, i) => (rss += ((s.conc - vals[i]!) / s.sigma) ** 2));
+  const dof = Math.max(1, used.length - edf);
+  return {
+    spline,
+    lambda,
+    edf,
+    scatterFactor: Math.max(1, Math.sqrt(rss / dof)),
+    method: `cubic smoothing spline weighted by 1/σ², λ by generalised cross-validation (α = ${alpha})${lambda > g.lambda ? ", raised to the analytical-precision floor" : ""}`,
+  };
+}
+
+/** An evenly spaced grid of `points` salinities from `from` to `to`. */
+export function salinityGrid(from: number, to: number, points: number): Float64Array {
+  const g = new Float64Array(points);
+  for (let i = 0; i < points; i++) g[i] = from + ((to - from) * i) / (points - 1);
+  return g;
+}

@@ -1,0 +1,58 @@
+/** Fraction of the peak reaction density that bounds the reaction zone. */
+export const ZONE_THRESHOLD = 0.05;
+
+/**
+ * Reaction zone from the fitted curve. The reaction per unit salinity follows from
+ * Eqs. 3–5: Q·dC*₀/dS = −Q·(S − S_r)·d²C/dS², so ρ(S) = −(S − S_r)·C''(S) (ρ < 0 removal).
+ * The dominant sign is that of ∫ρ dS; the zone is the contiguous salinity interval
+ * around the peak of that sign where ρ stays ≥ 5 % of the peak (documented choice).
+ *
+ * @param grid ascending salinities
+ * @param d2 d²C/dS² on the grid
+ * @param riverSalinity S_r
+ * @returns [from, to] salinity and kind, or undefined when there is no curvature
+ * @see mixing-methods.md §1.3 (Eqs. 4–5, DERIVED+VERIFIED).
+ */
+export function zoneFromCurve(grid: ArrayLike<number>, d2: ArrayLike<number>, riverSalinity: number): { from: number; to: number; kind: "removal" | "addition" } | undefined {
+  const G = grid.length;
+  let total = 0;
+  let maxAbs = 0;
+  let maxAbsSigned = 0;
+  const rho = new Float64Array(G);
+  for (let i = 0; i < G; i++) {
+    rho[i] = -(grid[i]! - riverSalinity) * d2[i]!;
+    if (i > 0) total += 0.5 * (rho[i]! + rho[i - 1]!) * (grid[i]! - grid[i - 1]!);
+    if (Math.abs(rho[i]!) > maxAbs) {
+      maxAbs = Math.abs(rho[i]!);
+      maxAbsSigned = rho[i]!;
+    }
+  }
+  if (!(maxAbs > 0)) return undefined;
+  const sign = total !== 0 ? Math.sign(total) : Math.sign(maxAbsSigned);
+  let peak = 0;
+  for (let i = 1; i < G; i++) if (sign * rho[i]! > sign * rho[peak]!) peak = i;
+  const thr = ZONE_THRESHOLD * sign * rho[peak]!;
+  if (!(thr > 0)) return undefined;
+  let lo = peak;
+  let hi = peak;
+  while (lo > 0 && sign * rho[lo - 1]! >= thr) lo--;
+  while (hi < G - 1 && sign * rho[hi + 1]! >= thr) hi++;
+  return { from: grid[lo]!, to: grid[hi]!, kind: sign < 0 ? "removal" : "addition" };
+}
+
+/**
+ * Interior maximum of the fitted curve (e.g. a desorption maximum): the grid point of
+ * highest concentration, strictly inside the grid and above both ends.
+ *
+ * @param grid ascending salinities
+ * @param f fitted concentrations on the grid
+ * @returns index of the maximum, or -1 when the maximum is at an end
+ */
+export function interiorMaximum(grid: ArrayLike<number>, f: ArrayLike<number>): number {
+  const G = grid.length;
+  let best = 0;
+  for (let i = 1; i < G; i++) if (f[i]! > f[best]!) best = i;
+  if (best === 0 || best === G - 1) return -1;
+  const margin = 1e-9 * (Math.abs(f[best]!) + 1);
+  return f[best]! > f[0]! + margin && f[best]! > f[G - 1]! + margin ? best : -1;
+}
