@@ -3,7 +3,7 @@ import type { ColumnMapping, ColumnRole } from "./columnMapping.ts";
 import { makeIssue } from "./importSummary.ts";
 import { projDefinition } from "./projection.ts";
 import type { UnitParser } from "./unitText.ts";
-import { canonicalUnitText } from "./unitText.ts";
+import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
 
 /** Roles that take a single column. */
 export type SingleRole = Exclude<ColumnRole, "constituent" | "flag" | "ignore">;
@@ -67,10 +67,10 @@ export function compileMapping(
       continue;
     }
     if (col.role === "constituent") {
-      const unit = col.unit === undefined ? undefined : (parseUnit(col.unit) ?? undefined);
+      const unit = col.unit === undefined ? undefined : concentrationUnitText(col.unit);
       if (unit === undefined) {
         const found = col.unit ?? col.unitText ?? "";
-        issues.push(makeIssue(file, 0, col.header, found, "a known concentration unit for this constituent (set it in the column mapping); column not imported"));
+        issues.push(makeIssue(file, 0, col.header, found, "a concentration unit from the units table (e.g. nmol/L, µmol/kg, µg/L; ppm/ppb/ppt are ambiguous) — set it in the column mapping; column not imported"));
         continue;
       }
       const name = col.name ?? col.header;

@@ -1,3 +1,4 @@
+import { practicalSalinityFromConductivity } from "../seawater/practicalSalinity.ts";
 import type { ImportIssue, Survey } from "../survey/survey.ts";
 import type { ColumnMapping } from "./columnMapping.ts";
 import type { CompiledMapping } from "./compileMapping.ts";
@@ -17,6 +18,7 @@ import { joinStationTable } from "./stationTable.ts";
 import { normaliseStationId } from "./stationIds.ts";
 import { findSavedMapping } from "./fileShape.ts";
 import { suggestMapping } from "./suggestMapping.ts";
+import { crossCheckUnits } from "./unitCrossCheck.ts";
 import type { UnitParser } from "./unitText.ts";
 import { canonicalUnitText } from "./unitText.ts";
 
@@ -56,6 +58,18 @@ export interface ImportResult {
   dialect: TextDialect;
 }
 
+/**
+ * Default conductivity conversion: PSS-78 practical salinity (with the Hill et al. 1986 extension
+ * below S = 2) from the shared seawater core; undefined where the inputs are outside its domain.
+ */
+export function pss78Salinity(conductivityMScm: number, temperatureC: number, pressureDbar: number): number | undefined {
+  try {
+    return practicalSalinityFromConductivity(conductivityMScm, temperatureC, Math.max(0, pressureDbar));
+  } catch {
+    return undefined;
+  }
+}
+
 /** Chooses the mapping: explicit, saved for this shape, or suggested. */
 export function chooseMapping(headers: string[], sample: string[][], options: ReadSurveyOptions): ColumnMapping {
   if (options.mapping !== undefined) return options.mapping;
@@ -70,13 +84,9 @@ export function startRows(headers: string[], mapping: ColumnMapping, dialect: Te
     file: options.fileName,
     decimalComma: dialect.decimalComma,
     ...(options.flagMap !== undefined ? { flagMap: options.flagMap } : {}),
-    ...(options.salinityFromConductivity !== undefined ? { salinityFromConductivity: options.salinityFromConductivity } : {}),
+    salinityFromConductivity: options.salinityFromConductivity ?? pss78Salinity,
   });
   reader.issues.push(...issues);
-  const s = compiled.single;
-  if (s.salinity === undefined && s.conductivity !== undefined && options.salinityFromConductivity === undefined) {
-    reader.issues.push(makeIssue(options.fileName, 0, headers[s.conductivity] ?? "", "", "a salinity column or a PSS-78 conductivity conversion (salinity left missing)"));
-  }
   return { reader, compiled };
 }
 
@@ -92,6 +102,7 @@ export function finishImport(
   const file = options.fileName;
   const issues = reader.issues;
   const stationHeader = compiled.single.station === undefined ? "" : (headers[compiled.single.station] ?? "");
+  issues.push(...crossCheckUnits(reader.stations, compiled.constituents, file));
   let rows: ImportedStation[] = reader.stations;
   if (options.stationTable !== undefined) {
     const joined = joinStationTable(rows, options.stationTable, file, stationHeader);

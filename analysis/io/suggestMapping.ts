@@ -3,7 +3,7 @@ import { normaliseConstituentName } from "./constituentNames.ts";
 import { fileShapeSignature } from "./fileShape.ts";
 import { splitHeaderUnit } from "./headerUnits.ts";
 import type { UnitParser } from "./unitText.ts";
-import { canonicalUnitText } from "./unitText.ts";
+import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
 import { detectDateOrder } from "./dateTime.ts";
 import { flagTarget, isRowFlagHeader } from "./qcFlags.ts";
 
@@ -82,7 +82,9 @@ export function suggestMapping(
     }
     const name = normaliseConstituentName(parts.name);
     if (name !== undefined) {
-      const why = parts.unit !== undefined ? `unit ${parts.unit}` : parts.unitText !== undefined ? `unknown unit "${parts.unitText}"` : "no unit in header";
+      const conc = parts.unitText === undefined ? undefined : concentrationUnitText(parts.unitText);
+      const unitFields = { ...(conc !== undefined ? { unit: conc } : {}), ...(parts.unitText !== undefined ? { unitText: parts.unitText } : {}) };
+      const why = conc !== undefined ? `unit ${conc}` : parts.unitText !== undefined ? `unknown unit "${parts.unitText}"` : "no unit in header";
       return { header, role: "constituent", name, ...unitFields, reason: `constituent ${name}, ${why}` };
     }
     return { header, role: "ignore", reason: "not recognised" };

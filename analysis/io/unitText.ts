@@ -1,3 +1,5 @@
+import { parseUnit } from "../seawater/units.ts";
+
 /**
  * Reading unit text from column headers into canonical unit strings.
  *
@@ -8,8 +10,6 @@
 /** Turns unit text into a canonical unit string, or undefined when the text is not a known unit. */
 export type UnitParser = (text: string) => string | undefined;
 
-const PREFIX: Record<string, string> = { "": "", m: "m", u: "µ", n: "n", p: "p", f: "f" };
-const PREFIX_WORD: Record<string, string> = { milli: "m", micro: "µ", nano: "n", pico: "p", femto: "f" };
 
 const FIXED: Record<string, string> = {
   c: "°C",
@@ -48,18 +48,30 @@ const FIXED: Record<string, string> = {
   "m³s-1": "m³/s",
 };
 
-/** Molar and mass concentration written many ways: "nmol/L", "nM", "umol l-1", "ngL", "µmol/kg", "nmol kg-1". */
-const CONC =
-  /^(milli|micro|nano|pico|femto|[munpf]?)(mol|m|g|eq)(?:\/|per)?(l|kg|liter|litre|l-1|l\^-1|kg-1|kg\^-1)?$/;
+/** Compact header suffixes without a slash ("ngL", "umolL", "nmolkg") get one before parsing. */
+const COMPACT = /^([pnuµm]?)(g|mol)(l|kg)$/i;
 
 /**
- * The built-in reader for unit text in headers.
+ * The concentration reader: the shared units table and parser (analysis/seawater/units.ts), after
+ * giving compact header suffixes a slash ("Cd_ngL" → "ng/L").
  *
- * Accepts molar (mol/L, "M"), mass (g/L) and per-kilogram (mol/kg) concentrations with the prefixes
- * m, µ (u, μ, micro), n, p, f; temperature (°C), depth (m), salinity labels (PSU, ppt), conductivity,
- * %, NTU and discharge (m³/s). Spaces, dots and "-1"/"^-1" exponents are understood.
+ * @param text unit text, e.g. "nmol/L", "uM", "ngL", "nmol kg-1", "Micromolar"
+ * @returns the canonical concentration symbol ("ng/L", "µmol/L", ...), or undefined when unknown or ambiguous
+ */
+export function concentrationUnitText(text: string): string | undefined {
+  const t = text.trim().replace(/\u03bc/g, "µ");
+  const c = COMPACT.exec(t);
+  const prepared = c === null ? t : `${c[1]}${c[2]}/${c[3].toLowerCase() === "l" ? "L" : "kg"}`;
+  return parseUnit(prepared)?.symbol;
+}
+
+/**
+ * The reader for unit text in headers: concentrations through the shared units parser
+ * ({@link concentrationUnitText}); besides those, temperature (°C), depth (m, km), pressure (dbar),
+ * salinity labels (PSU, ppt — accepted only as salinity labels, never as concentrations),
+ * conductivity, %, NTU and discharge (m³/s).
  *
- * @param text unit text as written, e.g. "µmol/l", "nmol kg-1", "ngL", "Micromolar", "micrograms/L"
+ * @param text unit text as written, e.g. "µmol/l", "nmol kg-1", "ngL", "Micromolar", "micrograms/L", "Degrees Celsius"
  * @returns canonical unit ("µmol/L", "nmol/kg", "ng/L", "°C", ...) or undefined when unknown
  */
 export function canonicalUnitText(text: string): string | undefined {
@@ -68,29 +80,10 @@ export function canonicalUnitText(text: string): string | undefined {
   t = t.replace(/^\((.*)\)$/, "$1").replace(/^\[(.*)\]$/, "$1");
   const compact = t.replace(/[\s.·*]/g, "").replace(/º/g, "°");
   if (FIXED[compact] !== undefined) return FIXED[compact];
-  // Words: micromolar, nanomolar, micrograms/l, milligrams per liter.
-  const worded = compact
-    .replace(/molar$/, "m")
-    .replace(/grams?/, "g")
-    .replace(/moles?/, "mol")
-    .replace(/liters?|litres?/, "l")
-    .replace(/kilograms?/, "kg");
-  const m = CONC.exec(worded);
-  if (m === null) return undefined;
-  const [, pre, base, per] = m;
-  const prefix = PREFIX_WORD[pre] ?? PREFIX[pre];
-  if (prefix === undefined) return undefined;
-  if (base === "m") {
-    // "nM", "uM": molar. A bare "m" is metres (handled above); "mm" would be millimolar or millimetres.
-    if (per !== undefined || prefix === "" || prefix === "m") return undefined;
-    return `${prefix}mol/L`;
-  }
-  if (per === undefined) return undefined;
-  const denom = per.startsWith("kg") ? "kg" : "L";
-  return `${prefix}${base}/${denom}`;
+  return concentrationUnitText(text);
 }
 
-/** Canonical units that express an amount or mass of a constituent per volume or mass of water. */
+/** True when the unit text is a concentration of the shared units table. */
 export function isConcentrationUnit(unit: string): boolean {
-  return /^(m|µ|n|p|f)?(mol|g|eq)\/(L|kg)$/.test(unit);
+  return concentrationUnitText(unit) !== undefined;
 }
