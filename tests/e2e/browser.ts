@@ -8,7 +8,7 @@ import { existsSync, mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { chromium, type Browser, type Page } from "playwright-core";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
 
 export const REPO_ROOT = resolve(fileURLToPath(new URL("../..", import.meta.url)));
 export const CHROMIUM_PATH = process.env.BRACKLINE_CHROMIUM ?? "/usr/bin/chromium";
@@ -48,7 +48,7 @@ export const skipBrowser = !chromiumAvailable && process.env.CI !== "true";
 if (skipBrowser) console.warn(`e2e: skipped locally. ${missingBrowserMessage()}`);
 
 export interface Session {
-  browser: Browser;
+  context: BrowserContext;
   page: Page;
   url: string;
   /** Console errors, page errors and failed requests seen so far. */
@@ -58,7 +58,9 @@ export interface Session {
 
 function startServer(): Promise<{ child: ChildProcess; url: string }> {
   if (!existsSync(DIST_INDEX)) {
-    return Promise.reject(new Error(`${DIST_INDEX} is missing: run \`npm run build\` (npm run test:e2e builds first).`));
+    return Promise.reject(
+      new Error(`${DIST_INDEX} is missing: run \`npm run build\` (npm run test:e2e builds first).`),
+    );
   }
   return new Promise((resolveServer, reject) => {
     const child = spawn(process.execPath, [join(REPO_ROOT, "scripts", "serve.js")], {
@@ -89,24 +91,30 @@ export async function openDashboard(viewport = { width: 1440, height: 900 }): Pr
   if (missing) throw new Error(missing);
   const server = await startServer();
   const profile = mkdtempSync(join(tmpdir(), "brackline-chromium-"));
-  let browser: Browser;
+  let context: BrowserContext;
   try {
-    browser = await chromium.launch({
+    // A fresh profile directory per session (Playwright passes it as --user-data-dir).
+    context = await chromium.launchPersistentContext(profile, {
       executablePath: CHROMIUM_PATH,
       headless: true,
-      args: [...CHROMIUM_FLAGS, `--user-data-dir=${profile}`],
+      args: CHROMIUM_FLAGS,
+      viewport,
     });
   } catch (error) {
     server.child.kill();
     throw error;
   }
-  const page = await browser.newPage({ viewport });
+  const page = context.pages()[0] ?? (await context.newPage());
+  page.setDefaultTimeout(15_000);
   const errors: string[] = [];
   page.on("console", (msg) => {
     if (msg.type() === "error") errors.push(`console: ${msg.text()}`);
   });
   page.on("pageerror", (error) => errors.push(`page: ${error.message}`));
   page.on("requestfailed", (req) => errors.push(`request failed: ${req.url()} ${req.failure()?.errorText ?? ""}`));
+  page.on("response", (res) => {
+    if (res.status() >= 400) errors.push(`HTTP ${res.status()}: ${res.url()}`);
+  });
   page.on("request", (req) => {
     if (!req.url().startsWith(server.url) && !req.url().startsWith("data:") && !req.url().startsWith("blob:")) {
       errors.push(`off-line rule broken: request to ${req.url()}`);
@@ -114,12 +122,12 @@ export async function openDashboard(viewport = { width: 1440, height: 900 }): Pr
   });
   await page.goto(server.url, { waitUntil: "load" });
   return {
-    browser,
+    context,
     page,
     url: server.url,
     errors,
     async close() {
-      await browser.close().catch(() => undefined);
+      await context.close().catch(() => undefined);
       server.child.kill();
       rmSync(profile, { recursive: true, force: true });
     },
@@ -140,4 +148,30 @@ export async function waitForAnalysis(page: Page): Promise<void> {
 export async function screenshot(page: Page, name: string): Promise<Buffer> {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
   return page.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`) });
+}
+
+/** Page position of a station on the map, from the dashboard's automation hook. */
+export async function stationPixel(page: Page, id: string): Promise<[number, number]> {
+  const p = await page.evaluate(
+    (sid) =>
+      (
+        window as unknown as { __brackline?: { stationPixel(id: string): [number, number] | null } }
+      ).__brackline?.stationPixel(sid) ?? null,
+    id,
+  );
+  if (!p) throw new Error(`station ${id} is not on the map`);
+  return p;
+}
+
+/** Waits for the map to finish drawing after a change (MapLibre idle + two frames for deck.gl). */
+export async function settle(page: Page): Promise<void> {
+  await page.evaluate(
+    () => new Promise<void>((resolve) => requestAnimationFrame(() => requestAnimationFrame(() => resolve()))),
+  );
+  await page.waitForTimeout(300);
+}
+
+/** The text of the aria-live selection status under the map. */
+export async function selectionStatus(page: Page): Promise<string> {
+  return ((await page.locator('[data-testid="selection-status"]').textContent()) ?? "").trim();
 }

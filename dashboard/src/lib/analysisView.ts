@@ -8,16 +8,14 @@ import type { AnalysisResult } from "../worker/engine.ts";
 
 /** Stations as placed on the channel, by id. */
 export function placementsById(analysis: AnalysisResult | undefined): Map<string, StationPlacement> {
-  const out = new Map<string, StationPlacement>();
-  const list = (analysis as { stations?: StationPlacement[] } | undefined)?.stations;
-  for (const p of list ?? []) out.set(p.id, p);
-  return out;
+  return new Map((analysis?.stations ?? []).map((p) => [p.id, p]));
 }
 
 /** Deviations from the dilution line of one constituent, by station id. */
-export function deviationsById(analysis: AnalysisResult | undefined, constituent: string): Map<string, StationDeviation> {
-  void constituent;
-  const out = new Map<string, StationDeviation>();
-  void analysis;
-  return out;
+export function deviationsById(
+  analysis: AnalysisResult | undefined,
+  constituent: string,
+): Map<string, StationDeviation> {
+  const c = analysis?.constituents.find((x) => x.name === constituent);
+  return new Map((c?.deviations ?? []).map((d) => [d.stationId, d]));
 }

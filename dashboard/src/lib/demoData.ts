@@ -42,11 +42,16 @@ function pick(files: Record<string, string>, name: string): TextFile | undefined
   return undefined;
 }
 
+/** The demo's file holding every survey; when present it is read alone (the others repeat it). */
+const ALL_SURVEYS_FILE = "both-surveys.csv";
+
 /** The demo files bundled into this build. */
 export function demoBundle(): DemoBundle {
-  const surveys = Object.entries(surveyFiles)
+  const all = Object.entries(surveyFiles)
     .map(([path, text]) => ({ name: baseName(path), text }))
     .sort((a, b) => a.name.localeCompare(b.name));
+  const combined = all.find((f) => f.name === ALL_SURVEYS_FILE);
+  const surveys = combined ? [combined] : all;
   return {
     surveys,
     centerline: pick(geojsonFiles, "centerline.geojson"),

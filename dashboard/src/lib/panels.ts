@@ -4,13 +4,7 @@
  * `{ analysis, selection }`.
  */
 import type { Component } from "svelte";
-import type { Selection } from "../state/selection.svelte.ts";
-import type { AnalysisResult } from "../worker/engine.ts";
-
-export interface PanelProps {
-  analysis: AnalysisResult;
-  selection: Selection;
-}
+import type { PanelProps } from "../panels/lib/types.ts";
 
 export interface PanelEntry {
   /** File name without extension, e.g. "MixingPlot". */

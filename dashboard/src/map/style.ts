@@ -8,6 +8,7 @@ import type { FeatureCollection } from "geojson";
 import type { ExpressionSpecification, StyleSpecification } from "maplibre-gl";
 
 export const PALETTE = {
+  background: "#e3e1da",
   land: "#eceae3",
   water: "#c6d8e0",
   marsh: "#d3ddc4",
@@ -21,6 +22,9 @@ const KIND: ExpressionSpecification = [
   "downcase",
   ["to-string", ["coalesce", ["get", "kind"], ["get", "class"], ["get", "type"], ""]],
 ];
+
+const POLYGON: ExpressionSpecification = ["in", ["geometry-type"], ["literal", ["Polygon", "MultiPolygon"]]];
+const POINT: ExpressionSpecification = ["in", ["geometry-type"], ["literal", ["Point", "MultiPoint"]]];
 
 const EMPTY: FeatureCollection = { type: "FeatureCollection", features: [] };
 
@@ -38,33 +42,40 @@ export function buildStyle({ basemap, tileUrl }: StyleOptions): StyleSpecificati
       basemap: { type: "geojson", data: basemap ?? EMPTY },
     },
     layers: [
-      { id: "land", type: "background", paint: { "background-color": PALETTE.land } },
+      { id: "background", type: "background", paint: { "background-color": PALETTE.background } },
+      {
+        id: "land",
+        type: "fill",
+        source: "basemap",
+        filter: ["all", POLYGON, ["==", KIND, "land"]],
+        paint: { "fill-color": PALETTE.land },
+      },
       {
         id: "water",
         type: "fill",
         source: "basemap",
-        filter: ["all", ["==", ["geometry-type"], "Polygon"], ["in", KIND, ["literal", ["water", "sea", "river"]]]],
+        filter: ["all", POLYGON, ["in", KIND, ["literal", ["water", "sea", "river"]]]],
         paint: { "fill-color": PALETTE.water, "fill-outline-color": PALETTE.shore },
       },
       {
         id: "marsh",
         type: "fill",
         source: "basemap",
-        filter: ["all", ["==", ["geometry-type"], "Polygon"], ["in", KIND, ["literal", ["marsh", "wetland"]]]],
+        filter: ["all", POLYGON, ["in", KIND, ["literal", ["marsh", "wetland"]]]],
         paint: { "fill-color": PALETTE.marsh },
       },
       {
         id: "shoreline",
         type: "line",
         source: "basemap",
-        filter: ["all", ["==", ["geometry-type"], "Polygon"], ["in", KIND, ["literal", ["water", "sea", "river"]]]],
+        filter: ["all", POLYGON, ["in", KIND, ["literal", ["water", "sea", "river"]]]],
         paint: { "line-color": PALETTE.shore, "line-width": 0.8 },
       },
       {
         id: "place-labels",
         type: "symbol",
         source: "basemap",
-        filter: ["all", ["==", ["geometry-type"], "Point"], ["has", "name"]],
+        filter: ["all", POINT, ["has", "name"]],
         layout: {
           "text-field": ["get", "name"],
           "text-font": ["sans-serif"],
@@ -79,14 +90,19 @@ export function buildStyle({ basemap, tileUrl }: StyleOptions): StyleSpecificati
         id: "place-dots",
         type: "circle",
         source: "basemap",
-        filter: ["all", ["==", ["geometry-type"], "Point"], ["has", "name"]],
+        filter: ["all", POINT, ["has", "name"]],
         paint: { "circle-radius": 2.5, "circle-color": PALETTE.label },
       },
     ],
   };
   if (tileUrl && tileUrl.trim() !== "") {
     style.sources.userTiles = { type: "raster", tiles: [tileUrl.trim()], tileSize: 256 };
-    style.layers.splice(1, 0, { id: "user-tiles", type: "raster", source: "userTiles", paint: { "raster-opacity": 0.85 } });
+    style.layers.splice(1, 0, {
+      id: "user-tiles",
+      type: "raster",
+      source: "userTiles",
+      paint: { "raster-opacity": 0.85 },
+    });
   }
   return style;
 }

@@ -48,8 +48,19 @@ async function handle(request: WorkerRequest): Promise<void> {
   if (request.type === "load") {
     post({ type: "progress", id: request.id, stage: "Reading files", done: 0, total: 1 });
     await yieldToQueue();
-    const read = readSurveys(request.surveys);
-    const built = readChannel(request.centerline);
+    const read = readSurveys(request.surveys, (fraction) =>
+      post({ type: "progress", id: request.id, stage: "Reading files", done: Math.round(fraction * 100), total: 100 }),
+    );
+    let built: ReturnType<typeof readChannel>;
+    try {
+      built = readChannel(request.centerline);
+    } catch (error) {
+      post({
+        type: "error",
+        id: request.id,
+        message: `${request.centerline?.name ?? "centerline"}: ${messageOf(error)}`,
+      });
+    }
     surveys = read.surveys;
     channel = built?.channel;
     post({

@@ -20,7 +20,11 @@ export class AnalysisClient {
       if (event.data.id === this.#currentId) onMessage(event.data);
     };
     this.#worker.onerror = (event: ErrorEvent) => {
-      onMessage({ type: "error", id: this.#currentId, message: event.message || "The analysis worker failed to start." });
+      onMessage({
+        type: "error",
+        id: this.#currentId,
+        message: event.message || "The analysis worker failed to start.",
+      });
     };
   }
 
