@@ -1,0 +1,104 @@
+import type { z } from "zod";
+import type { ImportIssue } from "../survey/survey.ts";
+import { makeIssue } from "./importSummary.ts";
+import { WORKSPACE_MIGRATIONS } from "./workspaceMigrations.ts";
+import type { WorkspaceDocument } from "./workspaceSchema.ts";
+import { surveySchema, WORKSPACE_FORMAT, WORKSPACE_VERSION, workspaceSchema } from "./workspaceSchema.ts";
+
+const FILE = "workspace";
+
+/** A new, empty workspace document (current version). */
+export function createWorkspace(name?: string): WorkspaceDocument {
+  const ws: WorkspaceDocument = {
+    format: WORKSPACE_FORMAT,
+    version: WORKSPACE_VERSION,
+    surveys: [],
+    centerline: null,
+    mappings: [],
+    imports: [],
+    settings: {},
+    analysis: {},
+  };
+  if (name !== undefined) ws.name = name;
+  return ws;
+}
+
+/**
+ * Writes a workspace document as JSON text after validating it against the current schema.
+ *
+ * @param ws the workspace document
+ * @returns pretty-printed JSON (2-space indent)
+ * @throws TypeError naming the first invalid path when the document does not match the schema
+ *   (e.g. a non-finite number, which JSON cannot hold)
+ */
+export function exportWorkspace(ws: WorkspaceDocument): string {
+  const checked = workspaceSchema.safeParse(ws);
+  if (!checked.success) {
+    const first = checked.error.issues[0];
+    throw new TypeError(`exportWorkspace(): ws.${first?.path.join(".") ?? ""} is invalid: ${first?.message ?? "schema mismatch"}`);
+  }
+  return JSON.stringify(ws, null, 2);
+}
+
+function zodIssues(error: z.ZodError, prefix: string): ImportIssue[] {
+  return error.issues.slice(0, 50).map((i) => makeIssue(FILE, 0, `${prefix}${i.path.join(".")}`, "", i.message));
+}
+
+/**
+ * Reads a workspace document from JSON text: migrates older versions step by step (1 → 2, ...),
+ * then validates with the current schema. A survey that fails validation is left out with an issue
+ * naming its path; any other invalid part makes the whole document unreadable (workspace undefined).
+ * Never throws.
+ *
+ * @param text JSON text written by exportWorkspace (any version)
+ * @returns the workspace (undefined when unreadable) and the issues found
+ */
+export function importWorkspace(text: string): { workspace: WorkspaceDocument | undefined; issues: ImportIssue[] } {
+  const issues: ImportIssue[] = [];
+  let doc: unknown;
+  try {
+    doc = JSON.parse(text.replace(/^\uFEFF/, "")) as unknown;
+  } catch (err) {
+    issues.push(makeIssue(FILE, 0, "", text.slice(0, 80), `JSON text (${err instanceof Error ? err.message : "parse error"})`));
+    return { workspace: undefined, issues };
+  }
+  if (typeof doc !== "object" || doc === null || Array.isArray(doc)) {
+    issues.push(makeIssue(FILE, 0, "", String(doc).slice(0, 80), "a workspace object"));
+    return { workspace: undefined, issues };
+  }
+  let version = (doc as { version?: unknown }).version;
+  if (typeof version !== "number" || !Number.isInteger(version) || version < 1) {
+    issues.push(makeIssue(FILE, 0, "version", String(version), `a workspace version 1…${WORKSPACE_VERSION}`));
+    return { workspace: undefined, issues };
+  }
+  if (version > WORKSPACE_VERSION) {
+    issues.push(makeIssue(FILE, 0, "version", String(version), `version ${WORKSPACE_VERSION} or older (written by a newer Brackline)`));
+    return { workspace: undefined, issues };
+  }
+  while (version < WORKSPACE_VERSION) {
+    const step = WORKSPACE_MIGRATIONS[version];
+    const parsed = step?.schema.safeParse(doc);
+    if (step === undefined || parsed === undefined || !parsed.success) {
+      if (parsed !== undefined && !parsed.success) issues.push(...zodIssues(parsed.error, ""));
+      issues.push(makeIssue(FILE, 0, "version", String(version), `a valid version ${version} document to migrate`));
+      return { workspace: undefined, issues };
+    }
+    doc = step.migrate(parsed.data as never);
+    issues.push(makeIssue(FILE, 0, "version", String(version), `version ${version + 1} (migrated)`, "warning"));
+    version += 1;
+  }
+  const record = doc as Record<string, unknown>;
+  if (Array.isArray(record.surveys)) {
+    record.surveys = record.surveys.filter((s, i) => {
+      const r = surveySchema.safeParse(s);
+      if (!r.success) issues.push(...zodIssues(r.error, `surveys.${i}.`), makeIssue(FILE, 0, `surveys.${i}`, "", "a valid survey; this survey was left out", "warning"));
+      return r.success;
+    });
+  }
+  const result = workspaceSchema.safeParse(record);
+  if (!result.success) {
+    issues.push(...zodIssues(result.error, ""));
+    return { workspace: undefined, issues };
+  }
+  return { workspace: result.data, issues };
+}
