@@ -92,6 +92,13 @@ export type { PlotSeries, SeriesSet } from "./seawater/plotSeries.ts";
 // --- end io ---
 
 // --- pipeline ---
+export type { StationPlacement, IsohalineAtKm, SurveyFacts, SurveyAnalysis } from "./pipeline/surveyAnalysis.ts";
+export { analyzeSurvey } from "./pipeline/analyzeSurvey.ts";
+export type { AnalyzeSurveyOptions, ConstituentSettings } from "./pipeline/analyzeSurvey.ts";
+export { constituentSamples } from "./pipeline/mixingSamples.ts";
+export type { ConstituentSamples } from "./pipeline/mixingSamples.ts";
+export { placeStations } from "./pipeline/placeStations.ts";
+export { SCREENING_CAUTION } from "./pipeline/caution.ts";
 // --- end pipeline ---
 
 // --- compare ---

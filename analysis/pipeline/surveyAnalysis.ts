@@ -3,7 +3,8 @@
  * dashboard, the CLI JSON output and the briefing read it. Field names are a
  * public contract (documented in the README): add fields, never rename.
  */
-import type { MixingWarning } from "../mixing/result.ts";
+import type { ConstituentAnalysis, MixingWarning } from "../mixing/result.ts";
+import type { SalinityProfile } from "../geometry/salinityTypes.ts";
 
 /** One station as placed on the channel. */
 export interface StationPlacement {
@@ -48,6 +49,21 @@ export interface SurveyFacts {
   isohalines: IsohalineAtKm[];
   /** Salinity range covered by the stations [min, max]. */
   salinityRange?: [number, number];
+  /** Number of stations (samples) in the survey. */
+  nStations: number;
+}
+
+/** Everything Brackline concludes about one survey. */
+export interface SurveyAnalysis {
+  survey: SurveyFacts;
+  stations: StationPlacement[];
+  /** S(x) along the channel, when stations could be placed on it. */
+  salinityProfile?: SalinityProfile;
+  constituents: ConstituentAnalysis[];
+  /** Survey-level warnings and notices (geometry, import, pipeline). */
+  warnings: MixingWarning[];
+  /** The caution to show beside every result. */
+  caution: string;
 }
 
 export type { MixingWarning };

@@ -1,0 +1,139 @@
+import type { ChannelNetwork } from "../geometry/types.ts";
+import { fitSalinityProfile } from "../geometry/salinityProfile.ts";
+import { crossingsKm, isohalinePositions, saltIntrusionLengthKm } from "../geometry/isohalines.ts";
+import { salinityIntervalToKm } from "../geometry/salinityToKm.ts";
+import type { SalinityProfile } from "../geometry/salinityTypes.ts";
+import { analyzeConstituent } from "../mixing/analyzeConstituent.ts";
+import type { AnalyzeOptions } from "../mixing/options.ts";
+import type { ConstituentAnalysis } from "../mixing/result.ts";
+import { densityEos80 } from "../seawater/densityEos80.ts";
+import type { Survey } from "../survey/survey.ts";
+import { SCREENING_CAUTION } from "./caution.ts";
+import { constituentSamples } from "./mixingSamples.ts";
+import { placeStations } from "./placeStations.ts";
+import type { MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
+
+/** Per-constituent settings a user may change (end-member overrides, precision, k, ...). */
+export type ConstituentSettings = Partial<Omit<AnalyzeOptions, "name" | "unit" | "salinityToKm" | "salinityToKmPoint" | "salinityNonMonotonic">>;
+
+/** Options of {@link analyzeSurvey}. */
+export interface AnalyzeSurveyOptions {
+  /** Channel network (from buildChannelNetwork); without it, file distances are used if present. */
+  network?: ChannelNetwork;
+  /** Stations farther off the channel are flagged [m] (geometry default when absent). */
+  offChannelThresholdM?: number;
+  /** Isohalines to locate (default 1, 2, 5, 10, 20). */
+  isohalines?: number[];
+  /** Isohaline defining the salt intrusion length (default 2). */
+  saltIntrusionSalinity?: number;
+  /** River discharge [m³/s]; overrides the survey's. */
+  riverDischargeM3s?: number;
+  /** Bootstrap draws for every constituent (default 2000). */
+  bootstrapDraws?: number;
+  /** Seed of the bootstrap (default 1). */
+  seed?: number;
+  /** Only these constituents (default: all of the survey). */
+  constituents?: string[];
+  /** Settings by constituent name. */
+  settings?: Record<string, ConstituentSettings>;
+  /** Temperature at which per-volume samples were measured, for per-kg ↔ per-L [°C] (default 20). */
+  labTemperatureC?: number;
+  /** Progress callback (fraction 0…1 and what is being done). */
+  onProgress?: (fraction: number, label: string) => void;
+}
+
+const DEFAULT_ISOHALINES = [1, 2, 5, 10, 20];
+
+function profileOf(analysis: { placements: SurveyAnalysis["stations"] }): SalinityProfile | undefined {
+  const points = analysis.placements.flatMap((p) =>
+    p.alongChannelKm !== undefined && p.salinity !== undefined ? [{ km: p.alongChannelKm, salinity: p.salinity, id: p.id, ...(p.branchId ? { branchId: p.branchId } : {}) }] : [],
+  );
+  return points.length >= 2 ? fitSalinityProfile(points) : undefined;
+}
+
+/**
+ * Analyses one survey end to end: places stations on the channel (km from the mouth, offset),
+ * fits S(x), locates isohalines and the salt intrusion length, then runs the mixing analysis of every
+ * constituent with reaction zones and maxima mapped from salinity to channel kilometres.
+ *
+ * @param survey the survey (from analysis/io)
+ * @param options see {@link AnalyzeSurveyOptions}
+ * @returns the survey analysis; never throws for thin data (warnings say what could not be done)
+ * @see Boyle et al. (1974) GCA 38, 1719–1728 for the mixing analysis; mixing-methods.md §5.1 for S(x).
+ */
+export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}): SurveyAnalysis {
+  const progress = options.onProgress ?? (() => undefined);
+  progress(0, "placing stations on the channel");
+  const warnings: MixingWarning[] = [];
+  const network = options.network;
+  if (network) warnings.push(...network.warnings);
+  const { placements, warnings: placeWarnings } = placeStations(survey.stations, network, options.offChannelThresholdM);
+  warnings.push(...placeWarnings);
+  const profile = profileOf({ placements });
+  if (profile) warnings.push(...profile.warnings);
+  const saltS = options.saltIntrusionSalinity ?? 2;
+  const iso = profile ? isohalinePositions(profile, options.isohalines ?? DEFAULT_ISOHALINES) : undefined;
+  if (iso) warnings.push(...iso.warnings);
+  const intrusion = profile ? saltIntrusionLengthKm(profile, saltS) : undefined;
+  if (intrusion) warnings.push(...intrusion.warnings);
+  const salinities = placements.flatMap((p) => (p.salinity !== undefined ? [p.salinity] : []));
+  const discharge = options.riverDischargeM3s ?? survey.riverDischargeM3s;
+  const facts: SurveyFacts = {
+    name: survey.name,
+    ...(survey.startDate !== undefined ? { startDate: survey.startDate } : {}),
+    ...(survey.endDate !== undefined ? { endDate: survey.endDate } : {}),
+    ...(discharge !== undefined ? { riverDischargeM3s: discharge } : {}),
+    ...(intrusion?.km !== undefined ? { saltIntrusionKm: intrusion.km } : {}),
+    saltIntrusionSalinity: saltS,
+    isohalines: iso ? iso.positions.map((p) => ({ salinity: p.salinity, km: p.km })) : [],
+    ...(salinities.length > 0 ? { salinityRange: [Math.min(...salinities), Math.max(...salinities)] as [number, number] } : {}),
+    nStations: survey.stations.length,
+  };
+  const wanted = options.constituents ?? survey.constituents.map((c) => c.name);
+  const constituents: ConstituentAnalysis[] = [];
+  const labT = options.labTemperatureC ?? 20;
+  wanted.forEach((name, i) => {
+    const info = survey.constituents.find((c) => c.name === name);
+    if (!info) {
+      warnings.push({ code: "unknown-constituent", message: `Constituent "${name}" is not in survey "${survey.name}".` });
+      return;
+    }
+    progress((i + 0.5) / Math.max(1, wanted.length), `mixing analysis of ${name}`);
+    const { samples, leftOut } = constituentSamples(survey.stations, name);
+    const perKg = /\/\s*kg/i.test(info.unit);
+    const settings = options.settings?.[name] ?? {};
+    const result = analyzeConstituent(samples, {
+      bootstrapDraws: options.bootstrapDraws ?? 2000,
+      seed: options.seed ?? 1,
+      ...(discharge !== undefined ? { riverDischargeM3s: discharge } : {}),
+      ...(perKg ? { densityKgM3: (s: number) => densityEos80(Math.max(0, Math.min(42, s)), labT, 0) } : {}),
+      ...settings,
+      name,
+      unit: info.unit,
+      ...(profile
+        ? {
+            salinityToKm: (s1: number, s2: number) => salinityIntervalToKm(profile, [s1, s2]).intervalsKm,
+            salinityToKmPoint: (s: number) => crossingsKm(profile, s),
+            salinityNonMonotonic: !profile.monotone,
+          }
+        : {}),
+    });
+    const reasons = Object.entries(leftOut);
+    if (reasons.length > 0) {
+      result.warnings.push({
+        code: "stations-left-out",
+        message: `${name}: stations left out of the analysis — ${reasons.map(([r, n]) => `${n} ${r}`).join("; ")}.`,
+      });
+    }
+    constituents.push(result);
+  });
+  progress(1, "done");
+  return {
+    survey: facts,
+    stations: placements,
+    ...(profile ? { salinityProfile: profile } : {}),
+    constituents,
+    warnings,
+    caution: SCREENING_CAUTION,
+  };
+}

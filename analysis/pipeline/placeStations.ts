@@ -1,0 +1,58 @@
+import type { ChannelNetwork } from "../geometry/types.ts";
+import { projectStations } from "../geometry/projectStations.ts";
+import type { Station } from "../survey/survey.ts";
+import type { MixingWarning, StationPlacement } from "./surveyAnalysis.ts";
+
+function accepted(cell: Station["salinity"] | undefined): number | undefined {
+  return cell && cell.status === "measured" && cell.accepted ? cell.value : undefined;
+}
+
+/**
+ * Places survey stations on the channel: along-channel distance from the mouth [km], signed
+ * cross-channel offset [m], branch and nearest channel point, through the geometry core. Without a
+ * network, a distance given in the file (`distanceKm` on imported stations) is used as the chainage.
+ *
+ * @param stations survey stations
+ * @param network channel network, when a centerline was given
+ * @param offChannelThresholdM stations farther off the channel are flagged [m]
+ * @returns one placement per station (none dropped) and the geometry warnings
+ */
+export function placeStations(
+  stations: readonly Station[],
+  network: ChannelNetwork | undefined,
+  offChannelThresholdM: number | undefined,
+): { placements: StationPlacement[]; warnings: MixingWarning[] } {
+  const base = stations.map((st): StationPlacement => {
+    const given = (st as Station & { distanceKm?: number }).distanceKm;
+    return {
+      id: st.id,
+      ...(st.lonLat ? { lonLat: st.lonLat } : {}),
+      ...(given !== undefined && !network ? { alongChannelKm: given } : {}),
+      offChannel: false,
+      ...(accepted(st.salinity) !== undefined ? { salinity: accepted(st.salinity) } : {}),
+      ...(accepted(st.temperatureC) !== undefined ? { temperatureC: accepted(st.temperatureC) } : {}),
+      ...(accepted(st.pH) !== undefined ? { pH: accepted(st.pH) } : {}),
+      ...(st.time !== undefined ? { time: st.time } : {}),
+      ...(st.depthM !== undefined ? { depthM: st.depthM } : {}),
+    };
+  });
+  if (!network) return { placements: base, warnings: [] };
+  const options = offChannelThresholdM !== undefined ? { offChannelThresholdM } : {};
+  const { projections, warnings } = projectStations(
+    network,
+    stations.map((s) => ({ id: s.id, lonLat: s.lonLat })),
+    options,
+  );
+  const placements = base.map((p, i): StationPlacement => {
+    const pr = projections[i]!;
+    return {
+      ...p,
+      ...(pr.alongChannelKm !== undefined ? { alongChannelKm: pr.alongChannelKm } : {}),
+      ...(pr.offsetM !== undefined ? { offsetM: pr.offsetM } : {}),
+      ...(pr.branchId !== undefined ? { branchId: pr.branchId } : {}),
+      ...(pr.nearestLonLat !== undefined ? { nearestLonLat: pr.nearestLonLat } : {}),
+      offChannel: pr.offChannel,
+    };
+  });
+  return { placements, warnings };
+}
