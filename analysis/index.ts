@@ -6,6 +6,52 @@ export type { CellStatus, ValueCell, Station, Constituent, Survey, ImportIssue }
 // --- end survey ---
 
 // --- geometry ---
+export type {
+  GeometryWarning,
+  MouthOption,
+  ChannelBranch,
+  ChannelSegments,
+  ChannelNetwork,
+  StationProjection,
+} from "./geometry/types.ts";
+export type { SalinityPoint, SalinityProfile, IsohalinePosition } from "./geometry/salinityTypes.ts";
+export type {
+  CenterlineGeoJson,
+  LineStringGeometry,
+  MultiLineStringGeometry,
+  LineFeature,
+  LineFeatureCollection,
+} from "./geometry/geojsonInput.ts";
+export { buildChannelNetwork, type ChannelNetworkOptions } from "./geometry/buildNetwork.ts";
+export { projectLonLatArrays, type BulkProjection } from "./geometry/projectBulk.ts";
+export {
+  projectStations,
+  type StationPosition,
+  type ProjectStationsOptions,
+  type StationProjectionResult,
+} from "./geometry/projectStations.ts";
+export { suggestMouth, spearmanRho, type MouthEvidence, type MouthSuggestion } from "./geometry/suggestMouth.ts";
+export { fitSalinityProfile, type SalinityProfileOptions } from "./geometry/salinityProfile.ts";
+export {
+  isohalinePositions,
+  saltIntrusionLengthKm,
+  crossingsKm,
+  DEFAULT_ISOHALINES,
+  type SaltIntrusion,
+} from "./geometry/isohalines.ts";
+export { salinityIntervalToKm, type KmIntervals } from "./geometry/salinityToKm.ts";
+export { pointAtKm, pathPieces, type PathPiece } from "./geometry/alongChannel.ts";
+export { channelStretch } from "./geometry/channelStretch.ts";
+export { kmTicks, type KmTickProperties, type KmTickCollection } from "./geometry/kmTicks.ts";
+export { channelLengthKm } from "./geometry/channelLength.ts";
+export {
+  WGS84_A_M,
+  WGS84_F,
+  meridionalRadiusM,
+  primeVerticalRadiusM,
+  localSegmentLengthM,
+  localBearingDeg,
+} from "./geometry/ellipsoid.ts";
 // --- end geometry ---
 
 // --- mixing ---
@@ -89,6 +135,49 @@ export type { PlotSeries, SeriesSet } from "./seawater/plotSeries.ts";
 // --- end seawater ---
 
 // --- io ---
+export { readSurveyText, readSurveyStream } from "./io/readSurvey.ts";
+export type { TextChunkSource } from "./io/readSurvey.ts";
+export type { ImportResult, ReadSurveyOptions } from "./io/importPipeline.ts";
+export { pss78Salinity } from "./io/importPipeline.ts";
+export { applyMapping } from "./io/applyMapping.ts";
+export { readStationTable, joinStationTable } from "./io/stationTable.ts";
+export type { StationTable, StationRecord } from "./io/stationTable.ts";
+export { readGeoJsonPoints } from "./io/geojsonPoints.ts";
+export { readNetcdfStations } from "./io/netcdfStations.ts";
+export { parseCfTimeUnits, cfTimeToIso } from "./io/cfTime.ts";
+export type { CfTimeUnit } from "./io/cfTime.ts";
+export { suggestMapping } from "./io/suggestMapping.ts";
+export { COLUMN_ROLES, columnMappingSchema, columnAssignmentSchema, columnWithRole } from "./io/columnMapping.ts";
+export type { ColumnMapping, ColumnAssignment, ColumnRole } from "./io/columnMapping.ts";
+export { fileShapeSignature, findSavedMapping } from "./io/fileShape.ts";
+export { emptySummary, mergeSummaries } from "./io/importSummary.ts";
+export type { ImportSummary, ImportedStation } from "./io/importSummary.ts";
+export { selectLayer, combineCells } from "./io/layerSelection.ts";
+export type { LayerChoice } from "./io/layerSelection.ts";
+export { groupSurveys, DEFAULT_SURVEY_GAP_DAYS } from "./io/groupSurveys.ts";
+export type { SurveyGrouping } from "./io/groupSurveys.ts";
+export { parseValueText, parseNumberText, isMissingText, MISSING_MARKERS, BELOW_DETECTION_WORDS } from "./io/valueText.ts";
+export { parseCoordinateText } from "./io/coordinates.ts";
+export type { CoordinateAxis } from "./io/coordinates.ts";
+export { projectedToLonLat, projDefinition, EPSG_DEFINITIONS } from "./io/projection.ts";
+export { parseDateTimeText, parseTimeOfDay, detectDateOrder, expandTwoDigitYear } from "./io/dateTime.ts";
+export type { DateOrder, ParsedDateTime } from "./io/dateTime.ts";
+export { DEFAULT_FLAG_MAP, readQcFlag, flagTarget, isRowFlagHeader } from "./io/qcFlags.ts";
+export type { FlagDecision } from "./io/qcFlags.ts";
+export { normaliseConstituentName, CONSTITUENT_SYNONYMS, ELEMENT_SYMBOLS } from "./io/constituentNames.ts";
+export { splitHeaderUnit } from "./io/headerUnits.ts";
+export type { HeaderParts } from "./io/headerUnits.ts";
+export { canonicalUnitText, concentrationUnitText, isConcentrationUnit } from "./io/unitText.ts";
+export type { UnitParser } from "./io/unitText.ts";
+export { crossCheckUnits, COUNTED_ELEMENT } from "./io/unitCrossCheck.ts";
+export { normaliseStationId } from "./io/stationIds.ts";
+export type { NormalisedStationId } from "./io/stationIds.ts";
+export { detectDialect, stripBom } from "./io/dialect.ts";
+export type { TextDialect } from "./io/dialect.ts";
+export { createWorkspace, exportWorkspace, importWorkspace } from "./io/workspace.ts";
+export { workspaceSchema, WORKSPACE_VERSION, WORKSPACE_FORMAT } from "./io/workspaceSchema.ts";
+export type { WorkspaceDocument } from "./io/workspaceSchema.ts";
+export { migrateV1toV2, workspaceV1Schema } from "./io/workspaceMigrations.ts";
 // --- end io ---
 
 // --- pipeline ---

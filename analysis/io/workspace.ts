@@ -100,5 +100,14 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
     issues.push(...zodIssues(result.error, ""));
     return { workspace: undefined, issues };
   }
-  return { workspace: result.data, issues };
+  // JSON drops undefined values; give every cell its `value` key back so cells match the survey model.
+  const workspace = result.data as unknown as WorkspaceDocument;
+  for (const survey of workspace.surveys) {
+    for (const st of survey.stations) {
+      for (const cell of [st.salinity, st.temperatureC, st.pH, ...Object.values(st.values)]) {
+        if (cell !== undefined && !Object.hasOwn(cell, "value")) cell.value = undefined;
+      }
+    }
+  }
+  return { workspace, issues };
 }

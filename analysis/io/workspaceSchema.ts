@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { Survey } from "../survey/survey.ts";
 import { columnMappingSchema } from "./columnMapping.ts";
 
 /** Current workspace document version. */
@@ -120,5 +121,8 @@ export const workspaceSchema = z.object({
   analysis: analysisChoicesSchema,
 });
 
-/** The workspace document: surveys, centerline, mappings, settings and analysis choices. */
-export type WorkspaceDocument = z.infer<typeof workspaceSchema>;
+/**
+ * The workspace document: surveys, centerline, mappings, import records, settings and analysis
+ * choices. Surveys use the shared survey model (stations may carry the reader's extra fields).
+ */
+export type WorkspaceDocument = Omit<z.infer<typeof workspaceSchema>, "surveys"> & { surveys: Survey[] };
