@@ -27,6 +27,17 @@ export interface ShapeInput {
   warnings: MixingWarning[];
 }
 
+/** Grid points of the bootstrap replicate curves (band, zone and maximum intervals). */
+export const BOOTSTRAP_GRID_POINTS = 41;
+
+/** Linear interpolation of ys given on ascending xs at x. */
+function interpolate(xs: Float64Array, ys: number[], x: number): number {
+  let i = 0;
+  while (i < xs.length - 2 && x > xs[i + 1]!) i++;
+  const t = (x - xs[i]!) / (xs[i + 1]! - xs[i]!);
+  return ys[i]! + t * (ys[i + 1]! - ys[i]!);
+}
+
 /** Fewest stations inside a reaction zone before a warning. */
 export const MIN_ZONE_STATIONS = 3;
 
@@ -64,6 +75,7 @@ export function analyzeShape(p: ShapeInput): {
   const sr = river.salinity;
   const cStar = tangent.intercept + tangent.slope * sr;
   const draws = o.bootstrapDraws ?? 2000;
+  const bGrid = salinityGrid(sMin, sMax, Math.min(G, BOOTSTRAP_GRID_POINTS));
   const seed = o.seed ?? 1;
   const x = Float64Array.from(used, (s) => s.salinity);
   const bs = runBootstrap({
@@ -73,7 +85,7 @@ export function analyzeShape(p: ShapeInput): {
     wTangent: Float64Array.from(used, (s) => 1 / (s.sigma * curve.scatterFactor) ** 2),
     lambda: curve.lambda,
     tieTol: TIE_FRACTION * (sMax - sMin),
-    grid,
+    grid: bGrid,
     tangent,
     river: { salinity: sr, conc: river.conc, sd: river.concSd },
     sea: { salinity: sea.salinity, conc: sea.conc, sd: sea.concSd },
@@ -115,7 +127,10 @@ export function analyzeShape(p: ShapeInput): {
   for (let i = 0; i < G; i++) cStarLocal[i] = f[i]! - (grid[i]! - sr) * d1[i]!;
   const rp = rateProfile(grid, d2, cStarLocal, sr, o);
   warnings.push(...rp.warnings);
-  const band = (arr: number[]): number[] => arr.map((v, i) => (Number.isFinite(v) ? v : f[i]!));
+  const band = (arr: number[]): number[] => Array.from(grid, (s, i) => {
+    const v = interpolate(bGrid, arr, s);
+    return Number.isFinite(v) ? v : f[i]!;
+  });
   return {
     cls,
     fit: {

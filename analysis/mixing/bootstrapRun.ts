@@ -1,7 +1,7 @@
 import { randomLcg, randomNormal } from "d3-random";
 import { evaluateSpline, evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitSmoothingSpline, mergeKnots } from "../stats/smoothingSpline.ts";
-import { interval95, percentileSorted } from "../stats/percentile.ts";
+import { interval95, percentileSelect } from "../stats/percentile.ts";
 import type { TangentLine } from "./result.ts";
 import { lineInInterval } from "./tangent.ts";
 import { interiorMaximum, zoneFromCurve } from "./zoneAndMaximum.ts";
@@ -16,6 +16,7 @@ export interface BootstrapInput {
   wTangent: Float64Array;
   lambda: number;
   tieTol: number;
+  /** Salinity grid of the replicate curves (coarser than the plotted grid to save time). */
   grid: Float64Array;
   tangent: TangentLine;
   river: { salinity: number; conc: number; sd: number };
@@ -71,8 +72,11 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const curves = new Float64Array(D * G).fill(Number.NaN);
   const counts = new Uint16Array(n);
   const wc = new Float64Array(n);
+  const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
+  const splineWs = { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: 0 };
   const f = new Float64Array(G);
   const d2 = new Float64Array(G);
+  const rhoWork = new Float64Array(G);
   const sMax = b.x[n - 1]!;
   let usable = 0;
   for (let d = 0; d < D; d++) {
@@ -81,9 +85,9 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     const cr = b.river.conc + b.river.sd * z();
     const cs = b.sea.conc + b.sea.sd * z();
     for (let i = 0; i < n; i++) wc[i] = b.w[i]! * counts[i]!;
-    const knots = mergeKnots(b.x, b.y, wc, b.tieTol);
-    if (knots.x.length < 4) continue;
-    const spline = fitSmoothingSpline(knots, b.lambda);
+    const knots = mergeKnots(b.x, b.y, wc, b.tieTol, ws);
+    if (knots.n < 4) continue;
+    const spline = fitSmoothingSpline(knots, b.lambda, splineWs);
     evaluateSplineGrid(spline, b.grid, f, undefined, d2);
     let line: [number, number] | undefined;
     if (b.tangent.method === "segment") line = lineInInterval(b.x, b.y, b.wTangent, counts, b.tangent.fromSalinity, b.tangent.toSalinity);
@@ -97,7 +101,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     eff[d] = line[0] + line[1] * b.river.salinity;
     c0[d] = cr;
     if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
-    const zone = zoneFromCurve(b.grid, d2, b.river.salinity);
+    const zone = zoneFromCurve(b.grid, d2, b.river.salinity, rhoWork);
     if (zone) {
       zLo[d] = zone.from;
       zHi[d] = zone.to;
@@ -118,9 +122,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
       const v = curves[d * G + g]!;
       if (Number.isFinite(v)) col[k++] = v;
     }
-    const s = col.subarray(0, k).sort();
-    bandLower[g] = percentileSorted(s, 0.025) ?? Number.NaN;
-    bandUpper[g] = percentileSorted(s, 0.975) ?? Number.NaN;
+    bandLower[g] = percentileSelect(col, k, 0.025) ?? Number.NaN;
+    bandUpper[g] = percentileSelect(col, k, 0.975) ?? Number.NaN;
   }
   const delta = eff.map((v, i) => v - c0[i]!);
   return {

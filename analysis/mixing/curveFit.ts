@@ -38,7 +38,7 @@ export function fitCurve(used: readonly PreparedSample[]): CurveFitResult | unde
   const x = used.map((s) => s.salinity);
   const range = x[x.length - 1]! - x[0]!;
   const knots = mergeKnots(x, used.map((s) => s.conc), used.map((s) => 1 / (s.sigma * s.sigma)), TIE_FRACTION * range);
-  if (knots.x.length < 4) return undefined;
+  if (knots.n < 4) return undefined;
   const path = splinePath(knots);
   let g = minimiseGcv(path, GCV_ALPHA);
   let alpha = GCV_ALPHA;

@@ -10,15 +10,21 @@ export const ZONE_THRESHOLD = 0.05;
  * @param grid ascending salinities
  * @param d2 d²C/dS² on the grid
  * @param riverSalinity S_r
+ * @param work optional scratch array of length ≥ grid.length
  * @returns [from, to] salinity and kind, or undefined when there is no curvature
  * @see mixing-methods.md §1.3 (Eqs. 4–5, DERIVED+VERIFIED).
  */
-export function zoneFromCurve(grid: ArrayLike<number>, d2: ArrayLike<number>, riverSalinity: number): { from: number; to: number; kind: "removal" | "addition" } | undefined {
+export function zoneFromCurve(
+  grid: ArrayLike<number>,
+  d2: ArrayLike<number>,
+  riverSalinity: number,
+  work?: Float64Array,
+): { from: number; to: number; kind: "removal" | "addition" } | undefined {
   const G = grid.length;
   let total = 0;
   let maxAbs = 0;
   let maxAbsSigned = 0;
-  const rho = new Float64Array(G);
+  const rho = work && work.length >= G ? work : new Float64Array(G);
   for (let i = 0; i < G; i++) {
     rho[i] = -(grid[i]! - riverSalinity) * d2[i]!;
     if (i > 0) total += 0.5 * (rho[i]! + rho[i - 1]!) * (grid[i]! - grid[i - 1]!);

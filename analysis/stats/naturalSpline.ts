@@ -4,11 +4,13 @@
  */
 export interface NaturalSpline {
   /** Strictly increasing knots. */
-  knots: number[];
+  knots: Float64Array;
   /** Spline values at the knots. */
-  values: number[];
+  values: Float64Array;
   /** Second derivatives at the knots (first and last are 0). */
-  secondDerivs: number[];
+  secondDerivs: Float64Array;
+  /** Knots in use (the arrays may be longer, reusable buffers). */
+  count: number;
 }
 
 /** Value and first and second derivatives of a spline at one abscissa. */
@@ -33,7 +35,7 @@ export interface SplinePoint {
  */
 export function evaluateSpline(s: NaturalSpline, x: number, hint = 0): SplinePoint {
   const t = s.knots;
-  const n = t.length;
+  const n = s.count;
   if (n === 1) return { value: s.values[0]!, d1: 0, d2: 0 };
   if (x <= t[0]!) {
     const d1 = evaluateInterval(s, 0, t[0]!).d1;
@@ -76,14 +78,26 @@ export function evaluateInterval(s: NaturalSpline, i: number, x: number): Spline
  * @param d2 output second derivatives, or undefined
  */
 export function evaluateSplineGrid(s: NaturalSpline, grid: ArrayLike<number>, value: Float64Array, d1?: Float64Array, d2?: Float64Array): void {
-  let hint = 0;
   const t = s.knots;
+  const n = s.count;
+  let i = 0;
   for (let g = 0; g < grid.length; g++) {
     const x = grid[g]!;
-    while (hint < t.length - 2 && x > t[hint + 1]!) hint++;
-    const p = t.length >= 2 && x >= t[0]! && x <= t[t.length - 1]! ? evaluateInterval(s, hint, x) : evaluateSpline(s, x, hint);
-    value[g] = p.value;
-    if (d1) d1[g] = p.d1;
-    if (d2) d2[g] = p.d2;
+    if (n < 2 || x < t[0]! || x > t[n - 1]!) {
+      const p = evaluateSpline(s, x, i);
+      value[g] = p.value;
+      if (d1) d1[g] = p.d1;
+      if (d2) d2[g] = p.d2;
+      continue;
+    }
+    while (i < n - 2 && x > t[i + 1]!) i++;
+    const t0 = t[i]!;
+    const h = t[i + 1]! - t0;
+    const a = (t[i + 1]! - x) / h;
+    const b = (x - t0) / h;
+    const f0 = s.values[i]!, f1 = s.values[i + 1]!, g0 = s.secondDerivs[i]!, g1 = s.secondDerivs[i + 1]!;
+    value[g] = a * f0 + b * f1 + ((a * a * a - a) * g0 + (b * b * b - b) * g1) * (h * h) / 6;
+    if (d1) d1[g] = (f1 - f0) / h - ((3 * a * a - 1) * h * g0) / 6 + ((3 * b * b - 1) * h * g1) / 6;
+    if (d2) d2[g] = a * g0 + b * g1;
   }
 }

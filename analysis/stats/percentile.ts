@@ -26,9 +26,62 @@ export function percentileSorted(sorted: ArrayLike<number>, p: number): number |
  * @see Efron, B. & Tibshirani, R.J. (1993) An Introduction to the Bootstrap, ch. 13 (percentile interval).
  */
 export function interval95(values: ArrayLike<number>): [number, number] | undefined {
-  const finite: number[] = [];
-  for (let i = 0; i < values.length; i++) if (Number.isFinite(values[i]!)) finite.push(values[i]!);
-  if (finite.length < 2) return undefined;
-  const sorted = Float64Array.from(finite).sort();
-  return [percentileSorted(sorted, 0.025)!, percentileSorted(sorted, 0.975)!];
+  const work = new Float64Array(values.length);
+  let n = 0;
+  for (let i = 0; i < values.length; i++) if (Number.isFinite(values[i]!)) work[n++] = values[i]!;
+  if (n < 2) return undefined;
+  return [percentileSelect(work, n, 0.025)!, percentileSelect(work, n, 0.975)!];
+}
+
+/** Rearranges a[lo..hi] so that a[k] holds the value it would have if sorted (Hoare's selection). */
+function selectInPlace(a: Float64Array, k: number, lo: number, hi: number): void {
+  while (hi > lo) {
+    const mid = (lo + hi) >> 1;
+    // Median-of-three pivot.
+    if (a[mid]! < a[lo]!) swap(a, mid, lo);
+    if (a[hi]! < a[lo]!) swap(a, hi, lo);
+    if (a[hi]! < a[mid]!) swap(a, hi, mid);
+    const pivot = a[mid]!;
+    let i = lo;
+    let j = hi;
+    while (i <= j) {
+      while (a[i]! < pivot) i++;
+      while (a[j]! > pivot) j--;
+      if (i <= j) {
+        swap(a, i, j);
+        i++;
+        j--;
+      }
+    }
+    if (k <= j) hi = j;
+    else if (k >= i) lo = i;
+    else return;
+  }
+}
+
+function swap(a: Float64Array, i: number, j: number): void {
+  const t = a[i]!;
+  a[i] = a[j]!;
+  a[j] = t;
+}
+
+/**
+ * Percentile (Hyndman & Fan 1996 definition 7) of the first `n` values of a work array,
+ * by selection in O(n) instead of sorting; the array order is changed.
+ *
+ * @param a work array (finite values in a[0..n−1])
+ * @param n number of values
+ * @param p probability in [0, 1]
+ * @returns the p-quantile, or undefined when n = 0
+ */
+export function percentileSelect(a: Float64Array, n: number, p: number): number | undefined {
+  if (n === 0) return undefined;
+  const h = (n - 1) * p;
+  const lo = Math.floor(h);
+  selectInPlace(a, lo, 0, n - 1);
+  const vLo = a[lo]!;
+  if (lo + 1 >= n || h === lo) return vLo;
+  let vHi = Number.POSITIVE_INFINITY;
+  for (let i = lo + 1; i < n; i++) if (a[i]! < vHi) vHi = a[i]!;
+  return vLo + (h - lo) * (vHi - vLo);
 }

@@ -2,9 +2,11 @@ import type { NaturalSpline } from "./naturalSpline.ts";
 
 /** Knots with merged ties: weighted means of y, summed weights. */
 export interface KnotData {
-  x: number[];
-  y: number[];
-  w: number[];
+  x: ArrayLike<number>;
+  y: ArrayLike<number>;
+  w: ArrayLike<number>;
+  /** Number of knots in use (arrays may be longer workspaces). */
+  n?: number;
 }
 
 /**
@@ -16,99 +18,165 @@ export interface KnotData {
  * @param y ordinates
  * @param w non-negative weights
  * @param tieTol abscissae closer than this are merged (same unit as x)
- * @returns merged knot data
+ * @param out optional workspace arrays of length ≥ x.length (reused in loops)
+ * @returns merged knot data (n = number of knots)
  */
-export function mergeKnots(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<number>, tieTol: number): KnotData {
-  const out: KnotData = { x: [], y: [], w: [] };
+export function mergeKnots(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  tieTol: number,
+  out?: { x: Float64Array; y: Float64Array; w: Float64Array },
+): KnotData & { x: Float64Array; y: Float64Array; w: Float64Array; n: number } {
+  const o = out ?? { x: new Float64Array(x.length), y: new Float64Array(x.length), w: new Float64Array(x.length) };
+  let n = 0;
   let sx = 0, sy = 0, sw = 0, anchor = Number.NaN;
-  const flush = (): void => {
-    if (sw > 0) {
-      out.x.push(sx / sw);
-      out.y.push(sy / sw);
-      out.w.push(sw);
-    }
-    sx = sy = sw = 0;
-  };
-  for (let i = 0; i < x.length; i++) {
-    const wi = w[i]!;
-    if (!(wi > 0)) continue;
-    if (!(Math.abs(x[i]! - anchor) <= tieTol)) {
-      flush();
+  for (let i = 0; i <= x.length; i++) {
+    const wi = i < x.length ? w[i]! : 0;
+    if (i < x.length && !(wi > 0)) continue;
+    if (i === x.length || !(Math.abs(x[i]! - anchor) <= tieTol)) {
+      if (sw > 0) {
+        o.x[n] = sx / sw;
+        o.y[n] = sy / sw;
+        o.w[n] = sw;
+        n++;
+      }
+      sx = sy = sw = 0;
+      if (i === x.length) break;
       anchor = x[i]!;
     }
     sx += wi * x[i]!;
     sy += wi * y[i]!;
     sw += wi;
   }
-  flush();
-  return out;
+  return { x: o.x, y: o.y, w: o.w, n };
+}
+
+/** Result of one Reinsch fit. */
+export interface ReinschFit {
+  spline: NaturalSpline;
+  /** tr H, the effective degrees of freedom (only when requested). */
+  edf: number;
+  /** Σ w·(y − f)². */
+  rss: number;
 }
 
 /**
  * Penalised cubic smoothing spline for a given smoothing parameter λ by the
  * Reinsch algorithm: minimises Σ w_i·(y_i − f(x_i))² + λ·∫ f''(x)² dx. Solves
- * (R + λ·Qᵀ W⁻¹ Q)·γ = Qᵀ y (pentadiagonal) and sets f = y − λ·W⁻¹ Q γ.
- * O(n) per fit, so it runs inside bootstrap loops.
+ * (R + λ·Qᵀ W⁻¹ Q)·γ = Qᵀ y (pentadiagonal, banded LDLᵀ) and sets f = y − λ·W⁻¹ Q γ.
+ * Optionally returns tr H = n − λ·Σ_i w_i⁻¹ (Q B⁻¹ Qᵀ)_ii from the central band of B⁻¹
+ * (Hutchinson & de Hoog 1985). O(n) per fit, so it runs inside bootstrap loops.
  *
  * @param k knot data (strictly increasing x, positive weights), at least 3 knots
- * @param lambda smoothing parameter ≥ 0 (units of w·y²·x³/y² — scale with the data)
- * @returns the natural cubic spline
+ * @param lambda smoothing parameter ≥ 0
+ * @param withTrace also compute tr H
+ * @param out optional spline to overwrite (reused in loops)
+ * @returns spline, edf (NaN unless withTrace) and weighted RSS
  * @throws RangeError for fewer than 3 knots, non-increasing knots or negative λ
- * @see Reinsch, C.H. (1967) Smoothing by spline functions. Numer. Math. 10, 177–183;
- *      Green, P.J. & Silverman, B.W. (1994) Nonparametric Regression and Generalized Linear Models, §2.3.3.
+ * @see Reinsch, C.H. (1967) Numer. Math. 10, 177–183; Green, P.J. & Silverman, B.W. (1994)
+ *      Nonparametric Regression and Generalized Linear Models, §2.3.3; Hutchinson, M.F. &
+ *      de Hoog, F.R. (1985) Numer. Math. 47, 99–106.
  */
-export function fitSmoothingSpline(k: KnotData, lambda: number): NaturalSpline {
-  const n = k.x.length;
-  if (n < 3) throw new RangeError(`fitSmoothingSpline: need ≥ 3 knots, got ${n}`);
-  if (!(lambda >= 0)) throw new RangeError(`fitSmoothingSpline: lambda must be ≥ 0, got ${lambda}`);
-  const h = new Float64Array(n - 1);
-  for (let i = 0; i < n - 1; i++) {
-    h[i] = k.x[i + 1]! - k.x[i]!;
-    if (!(h[i]! > 0)) throw new RangeError(`fitSmoothingSpline: knots must increase (index ${i})`);
-  }
+export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?: NaturalSpline): ReinschFit {
+  const n = k.n ?? k.x.length;
+  if (n < 3) throw new RangeError(`reinschFit: need ≥ 3 knots, got ${n}`);
+  if (!(lambda >= 0)) throw new RangeError(`reinschFit: lambda must be ≥ 0, got ${lambda}`);
+  const x = k.x, y = k.y, w = k.w;
   const m = n - 2;
-  const d = k.w.map((v) => 1 / v);
-  // Column j (0-based, interior knot j+1) of Q has rows j, j+1, j+2.
-  const qa = (j: number): number => 1 / h[j]!; // row j
-  const qb = (j: number): number => -1 / h[j]! - 1 / h[j + 1]!; // row j+1
-  const qc = (j: number): number => 1 / h[j + 1]!; // row j+2
-  const b0 = new Float64Array(m);
-  const b1 = new Float64Array(m);
-  const b2 = new Float64Array(m);
-  const rhs = new Float64Array(m);
-  for (let j = 0; j < m; j++) {
-    b0[j] = (h[j]! + h[j + 1]!) / 3 + lambda * (qa(j) ** 2 * d[j]! + qb(j) ** 2 * d[j + 1]! + qc(j) ** 2 * d[j + 2]!);
-    if (j + 1 < m) b1[j] = h[j + 1]! / 6 + lambda * (qb(j) * qa(j + 1) * d[j + 1]! + qc(j) * qb(j + 1) * d[j + 2]!);
-    if (j + 2 < m) b2[j] = lambda * qc(j) * qa(j + 2) * d[j + 2]!;
-    rhs[j] = k.y[j]! * qa(j) + k.y[j + 1]! * qb(j) + k.y[j + 2]! * qc(j);
+  const S = scratch(n);
+  const { h, qa, qb, qc, dd, e, f, z } = S;
+  for (let i = 0; i < n - 1; i++) {
+    h[i] = x[i + 1]! - x[i]!;
+    if (!(h[i]! > 0)) throw new RangeError(`reinschFit: knots must increase (index ${i})`);
   }
-  const g = solvePentadiagonal(b0, b1, b2, rhs);
-  const gamma = new Array<number>(n).fill(0);
-  for (let j = 0; j < m; j++) gamma[j + 1] = g[j]!;
-  const values = new Array<number>(n);
+  // Column j of Q (interior knot j+1) has rows j, j+1, j+2: qa, qb, qc.
+  for (let j = 0; j < m; j++) {
+    qa[j] = 1 / h[j]!;
+    qc[j] = 1 / h[j + 1]!;
+    qb[j] = -qa[j]! - qc[j]!;
+  }
+  for (let j = 0; j < m; j++) {
+    const d0 = 1 / w[j]!, d1 = 1 / w[j + 1]!, d2 = 1 / w[j + 2]!;
+    const b0 = (h[j]! + h[j + 1]!) / 3 + lambda * (qa[j]! * qa[j]! * d0 + qb[j]! * qb[j]! * d1 + qc[j]! * qc[j]! * d2);
+    const rhs = y[j]! * qa[j]! + y[j + 1]! * qb[j]! + y[j + 2]! * qc[j]!;
+    // Band entries B[j][j-1] and B[j][j-2] (from columns j-1 and j-2).
+    const b1 = j >= 1 ? h[j]! / 6 + lambda * (qb[j - 1]! * qa[j]! * d0 + qc[j - 1]! * qb[j]! * d1) : 0;
+    const b2 = j >= 2 ? lambda * qc[j - 2]! * qa[j]! * d0 : 0;
+    f[j] = j >= 2 ? b2 / dd[j - 2]! : 0;
+    e[j] = j >= 1 ? (b1 - (j >= 2 ? f[j]! * e[j - 1]! * dd[j - 2]! : 0)) / dd[j - 1]! : 0;
+    dd[j] = b0 - (j >= 2 ? f[j]! * f[j]! * dd[j - 2]! : 0) - (j >= 1 ? e[j]! * e[j]! * dd[j - 1]! : 0);
+    z[j] = rhs - (j >= 1 ? e[j]! * z[j - 1]! : 0) - (j >= 2 ? f[j]! * z[j - 2]! : 0);
+  }
+  for (let j = 0; j < m; j++) z[j] = z[j]! / dd[j]!;
+  for (let j = m - 1; j >= 0; j--) z[j] = z[j]! - (j + 1 < m ? e[j + 1]! * z[j + 1]! : 0) - (j + 2 < m ? f[j + 2]! * z[j + 2]! : 0);
+  const spline = out && out.knots.length >= n ? out : { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: n };
+  spline.count = n;
+  const gamma = spline.secondDerivs;
+  gamma[0] = 0;
+  gamma[n - 1] = 0;
+  for (let j = 0; j < m; j++) gamma[j + 1] = z[j]!;
+  let rss = 0;
   for (let i = 0; i < n; i++) {
     let qg = 0;
     if (i > 0) qg += (gamma[i - 1]! - gamma[i]!) / h[i - 1]!;
     if (i < n - 1) qg += (gamma[i + 1]! - gamma[i]!) / h[i]!;
-    values[i] = k.y[i]! - lambda * d[i]! * qg;
+    const v = y[i]! - (lambda * qg) / w[i]!;
+    spline.values[i] = v;
+    spline.knots[i] = x[i]!;
+    rss += w[i]! * (y[i]! - v) ** 2;
   }
-  return { knots: [...k.x], values, secondDerivs: gamma };
+  if (!withTrace) return { spline, edf: Number.NaN, rss };
+  // Central band of Σ = B⁻¹ from B = L·D·Lᵀ, bottom-up: s0 = Σ[j][j], s1 = Σ[j][j+1], s2 = Σ[j][j+2].
+  const { s0, s1, s2 } = S;
+  for (let j = m - 1; j >= 0; j--) {
+    const l1 = j + 1 < m ? e[j + 1]! : 0;
+    const l2 = j + 2 < m ? f[j + 2]! : 0;
+    const S11 = j + 1 < m ? s0[j + 1]! : 0, S12 = j + 1 < m ? s1[j + 1]! : 0, S22 = j + 2 < m ? s0[j + 2]! : 0;
+    s1[j] = -l1 * S11 - l2 * S12;
+    s2[j] = -l1 * S12 - l2 * S22;
+    s0[j] = 1 / dd[j]! - l1 * s1[j]! - l2 * s2[j]!;
+  }
+  let tr = 0;
+  for (let i = 0; i < n; i++) {
+    // Row i of Q has columns i−2 (qc), i−1 (qb), i (qa); (Q Σ Qᵀ)_ii over that 3×3 block.
+    const a = i - 2;
+    const c2 = a >= 0 && a < m ? qc[a]! : 0;
+    const c1 = i - 1 >= 0 && i - 1 < m ? qb[i - 1]! : 0;
+    const c0 = i < m ? qa[i]! : 0;
+    let q = 0;
+    if (c2 !== 0) q += c2 * c2 * s0[a]! + (c1 !== 0 ? 2 * c2 * c1 * s1[a]! : 0) + (c0 !== 0 ? 2 * c2 * c0 * s2[a]! : 0);
+    if (c1 !== 0) q += c1 * c1 * s0[i - 1]! + (c0 !== 0 ? 2 * c1 * c0 * s1[i - 1]! : 0);
+    if (c0 !== 0) q += c0 * c0 * s0[i]!;
+    tr += q / w[i]!;
+  }
+  return { spline, edf: n - lambda * tr, rss };
 }
 
-/** Solves a symmetric positive-definite pentadiagonal system by banded LDLᵀ. */
-function solvePentadiagonal(b0: Float64Array, b1: Float64Array, b2: Float64Array, rhs: Float64Array): Float64Array {
-  const m = b0.length;
-  const dd = new Float64Array(m);
-  const e = new Float64Array(m); // L[i][i-1]
-  const f = new Float64Array(m); // L[i][i-2]
-  for (let i = 0; i < m; i++) {
-    f[i] = i >= 2 ? b2[i - 2]! / dd[i - 2]! : 0;
-    e[i] = i >= 1 ? (b1[i - 1]! - (i >= 2 ? f[i]! * e[i - 1]! * dd[i - 2]! : 0)) / dd[i - 1]! : 0;
-    dd[i] = b0[i]! - (i >= 2 ? f[i]! ** 2 * dd[i - 2]! : 0) - (i >= 1 ? e[i]! ** 2 * dd[i - 1]! : 0);
+interface Scratch {
+  size: number;
+  h: Float64Array; qa: Float64Array; qb: Float64Array; qc: Float64Array;
+  dd: Float64Array; e: Float64Array; f: Float64Array; z: Float64Array;
+  s0: Float64Array; s1: Float64Array; s2: Float64Array;
+}
+let SCRATCH: Scratch | undefined;
+
+/** Module-level work arrays (single-threaded reuse keeps bootstrap loops free of garbage). */
+function scratch(n: number): Scratch {
+  if (!SCRATCH || SCRATCH.size < n) {
+    const a = (): Float64Array => new Float64Array(n);
+    SCRATCH = { size: n, h: a(), qa: a(), qb: a(), qc: a(), dd: a(), e: a(), f: a(), z: a(), s0: a(), s1: a(), s2: a() };
   }
-  const z = new Float64Array(m);
-  for (let i = 0; i < m; i++) z[i] = rhs[i]! - (i >= 1 ? e[i]! * z[i - 1]! : 0) - (i >= 2 ? f[i]! * z[i - 2]! : 0);
-  for (let i = 0; i < m; i++) z[i]! /= dd[i]!;
-  for (let i = m - 1; i >= 0; i--) z[i] = z[i]! - (i + 1 < m ? e[i + 1]! * z[i + 1]! : 0) - (i + 2 < m ? f[i + 2]! * z[i + 2]! : 0);
-  return z;
+  return SCRATCH;
+}
+
+/**
+ * Smoothing spline for a given λ (see {@link reinschFit}).
+ *
+ * @param k knot data (≥ 3 knots); lambda ≥ 0
+ * @param out optional spline to overwrite
+ * @returns the natural cubic spline
+ */
+export function fitSmoothingSpline(k: KnotData, lambda: number, out?: NaturalSpline): NaturalSpline {
+  return reinschFit(k, lambda, false, out).spline;
 }
