@@ -1,4 +1,5 @@
 import type { BenchCase } from "../benchCase.ts";
+import { mixingBench } from "./mixing.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
-export const benchCases: BenchCase[] = [];
+export const benchCases: BenchCase[] = [mixingBench];
