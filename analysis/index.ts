@@ -191,6 +191,24 @@ export { SCREENING_CAUTION } from "./pipeline/caution.ts";
 // --- end pipeline ---
 
 // --- compare ---
+export type {
+  ComparableSurvey,
+  EstimateDifference,
+  IntrusionRow,
+  ReferenceScaling,
+  DischargeScaling,
+  ConstituentShift,
+  SurveyComparison,
+} from "./compare/types.ts";
+export { compareSurveys } from "./compare/compareSurveys.ts";
+export type { CompareOptions } from "./compare/compareSurveys.ts";
+export { constituentShift } from "./compare/constituentShift.ts";
+export type { ShiftSide } from "./compare/constituentShift.ts";
+export { differenceOfEstimates, differenceWithoutInterval, DIFFERENCE_INTERVAL_METHOD } from "./compare/differenceOfEstimates.ts";
+export { dischargeScaling, REFERENCE_SCALINGS } from "./compare/dischargeScaling.ts";
+export { surveyProfile, kmAtSalinity, kmEstimateOfSalinity } from "./compare/salinityKm.ts";
+export { comparisonToCsv, COMPARISON_CSV_COLUMNS } from "./compare/comparisonCsv.ts";
+export { formatSignificant, formatFixed, MINUS } from "./compare/formatNumber.ts";
 // --- end compare ---
 
 // --- report ---
