@@ -21,7 +21,11 @@ export const demoCommand: Command = {
   summary: "write the invented demo estuary (surveys, centerline, basemap, truth)",
   help: HELP,
   async run(args, io) {
-    const { values } = parseArgs({ args, options: { out: { type: "string" }, seed: { type: "string" } }, strict: true });
+    const { values } = parseArgs({
+      args,
+      options: { out: { type: "string" }, seed: { type: "string" } },
+      strict: true,
+    });
     if (values.out === undefined || values.out === "") throw new UsageError("missing --out <dir>");
     let seed = DEFAULT_SEED;
     if (values.seed !== undefined) {

@@ -1,6 +1,7 @@
 import type { Command } from "../command.ts";
+import { analyzeCommand } from "./analyze.ts";
 import { demoCommand } from "./demo.ts";
 import { salinityCommand } from "./salinity.ts";
 
 /** Every subcommand of `brackline`, in the order `--help` lists them. */
-export const commands: Command[] = [demoCommand, salinityCommand];
+export const commands: Command[] = [analyzeCommand, demoCommand, salinityCommand];
