@@ -102,7 +102,7 @@ export function basemapGeojson(main: ChannelLine, tributary: Tributary): object 
   const mainBand = band(mainPts, (i) => drawnWidthKm(mainX[i]));
   // tributary band, from 0.4 km inside the main channel to 0.4 km past its upstream end
   const tp = tributary.line.localKm;
-  const t0: Xy = [tp[0][0] - 0.4 * (tp[1][0] - tp[0][0]) / 0.2, tp[0][1] - 0.4 * (tp[1][1] - tp[0][1]) / 0.2];
+  const t0: Xy = [tp[0][0] - (0.4 * (tp[1][0] - tp[0][0])) / 0.2, tp[0][1] - (0.4 * (tp[1][1] - tp[0][1])) / 0.2];
   const tn = tp.length - 1;
   const tEnd: Xy = [tp[tn][0] + (tp[tn][0] - tp[tn - 1][0]) * 2, tp[tn][1] + (tp[tn][1] - tp[tn - 1][1]) * 2];
   const tribPts: Xy[] = [t0, ...tp, tEnd];

@@ -66,7 +66,12 @@ export function solveConstituent(salt: SalinityField, c: ConstituentCase): Const
  */
 export function runSurveyModel(spec: SurveySpec, lengthKm: number): SurveyModel {
   const k = dispersionM2s(spec.dischargeM3s);
-  const grid = buildGrid(lengthKm + RIVER_REACH_KM, MODEL_CELLS, (x) => areaM2(DEMO_CHANNEL, x), () => k);
+  const grid = buildGrid(
+    lengthKm + RIVER_REACH_KM,
+    MODEL_CELLS,
+    (x) => areaM2(DEMO_CHANNEL, x),
+    () => k,
+  );
   const salt = solveSalinity(grid, spec.dischargeM3s, spec.seaSalinity, spec.riverSalinity);
   const profiles: Record<string, ConstituentProfile> = {};
   for (const [name, c] of Object.entries(spec.constituents)) profiles[name] = solveConstituent(salt, c);

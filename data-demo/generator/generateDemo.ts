@@ -15,6 +15,7 @@ import { buildMainStem, buildTributary } from "./centerline.ts";
 import { centerlineGeojson } from "./centerlineGeojson.ts";
 import { csvField } from "./format.ts";
 import { runSurveyModel } from "./forwardModel.ts";
+import { stableJson } from "./json.ts";
 import { seededRandom } from "./random.ts";
 import { sampleSurvey, SURVEY_COLUMNS, type SampleRow } from "./samples.ts";
 import { SURVEYS } from "./scenario.ts";
@@ -24,14 +25,6 @@ import { truthDocument } from "./truth.ts";
 
 /** Seed of the committed demo files. */
 export const DEFAULT_SEED = 1974;
-
-/**
- * Serialises JSON with 1-space indentation but keeps numeric coordinate pairs on one line.
- */
-export function stableJson(value: unknown): string {
-  const text = JSON.stringify(value, null, 1);
-  return `${text.replace(/\[\s*(-?[\d.e+-]+),\s*(-?[\d.e+-]+)\s*\]/g, "[$1,$2]")}\n`;
-}
 
 function csv(rows: SampleRow[]): string {
   const lines = [SURVEY_COLUMNS.map(csvField).join(",")];

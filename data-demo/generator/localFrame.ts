@@ -23,7 +23,10 @@ export function toLonLat(eastKm: number, northKm: number): [number, number] {
 
 /** [lon, lat] → local km (east, north). */
 export function toLocalKm(lonLat: [number, number]): [number, number] {
-  return [((lonLat[0] - MOUTH_LON_LAT[0]) * M_PER_DEG_LON) / 1000, ((lonLat[1] - MOUTH_LON_LAT[1]) * M_PER_DEG_LAT) / 1000];
+  return [
+    ((lonLat[0] - MOUTH_LON_LAT[0]) * M_PER_DEG_LON) / 1000,
+    ((lonLat[1] - MOUTH_LON_LAT[1]) * M_PER_DEG_LAT) / 1000,
+  ];
 }
 
 /** Rounds a coordinate pair to `decimals` decimal degrees (6 ≈ 0.1 m). */

@@ -69,7 +69,10 @@ export function sampleSurvey(model: SurveyModel, plans: StationPlan[], rng: Seed
     const frac = (sTrue - spec.riverSalinity) / (spec.seaSalinity - spec.riverSalinity);
     const temp = spec.temperatureRiverC + (spec.temperatureSeaC - spec.temperatureRiverC) * frac + rng.normal() * 0.05;
     const ph =
-      spec.pHRiver + (spec.pHSea - spec.pHRiver) * frac - spec.pHDip * (sTrue / 2) * Math.exp(1 - sTrue / 2) + rng.normal() * 0.01;
+      spec.pHRiver +
+      (spec.pHSea - spec.pHRiver) * frac -
+      spec.pHDip * (sTrue / 2) * Math.exp(1 - sTrue / 2) +
+      rng.normal() * 0.01;
     const cells: Record<string, string> = {
       survey: spec.id,
       station: plan.id,

@@ -87,15 +87,27 @@ function cases(river: Record<string, number>, sea: Record<string, number>): Reco
     Cu: { riverConc: river.Cu, seaConc: sea.Cu, reaction: removal(0.35, river.Cu, 0.3, 10, 0.8) },
     Ni: { riverConc: river.Ni, seaConc: sea.Ni, reaction: removal(0.3, river.Ni, 0.3, 10, 0.8) },
     // Cd: desorption, flux × 3, maximum at mid salinity (Elbaz-Poulichet et al. 1987, CONFIRMED-2nd range × 2–20)
-    Cd: { riverConc: river.Cd, seaConc: sea.Cd, reaction: { deltaConc: 2 * river.Cd, fromSalinity: 3, toSalinity: 16, shape: 1 } },
+    Cd: {
+      riverConc: river.Cd,
+      seaConc: sea.Cd,
+      reaction: { deltaConc: 2 * river.Cd, fromSalinity: 3, toSalinity: 16, shape: 1 },
+    },
     // Ba: desorption, C*0 − C0 = +35 nmol/L at low salinity (Stecher & Kogut 1999: 30–40 nM)
-    Ba: { riverConc: river.Ba, seaConc: sea.Ba, reaction: { deltaConc: 35, fromSalinity: 2, toSalinity: 10, shape: 1 } },
+    Ba: {
+      riverConc: river.Ba,
+      seaConc: sea.Ba,
+      reaction: { deltaConc: 35, fromSalinity: 2, toSalinity: 10, shape: 1 },
+    },
     // Si: conservative (Boyle et al. 1974; Fanning & Pilson 1973)
     Si: { riverConc: river.Si, seaConc: sea.Si },
     // NO3: near-conservative, 5 % removal spread over S 1–20
     NO3: { riverConc: river.NO3, seaConc: sea.NO3, reaction: removal(0.05, river.NO3, 1, 20, 1) },
     // PO4: small low-salinity release (buffering by desorption from particles), +10 % over S 0.3–5
-    PO4: { riverConc: river.PO4, seaConc: sea.PO4, reaction: { deltaConc: 0.1 * river.PO4, fromSalinity: 0.3, toSalinity: 5, shape: 1 } },
+    PO4: {
+      riverConc: river.PO4,
+      seaConc: sea.PO4,
+      reaction: { deltaConc: 0.1 * river.PO4, fromSalinity: 0.3, toSalinity: 5, shape: 1 },
+    },
   };
 }
 

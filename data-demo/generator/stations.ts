@@ -74,7 +74,16 @@ export function planStations(model: SurveyModel, main: ChannelLine, rng: SeededR
     const offsetM = side * magnitude;
     const { local, tangent } = pointAlong(main, xKm);
     const normal: [number, number] = [tangent[1], -tangent[0]];
-    const lonLat = roundLonLat(toLonLat(local[0] + (normal[0] * offsetM) / 1000, local[1] + (normal[1] * offsetM) / 1000), 5);
-    return { id: `${spec.stationPrefix}${String(i + 1).padStart(2, "0")}`, alongChannelKm: xKm, offsetM, lonLat, offChannel };
+    const lonLat = roundLonLat(
+      toLonLat(local[0] + (normal[0] * offsetM) / 1000, local[1] + (normal[1] * offsetM) / 1000),
+      5,
+    );
+    return {
+      id: `${spec.stationPrefix}${String(i + 1).padStart(2, "0")}`,
+      alongChannelKm: xKm,
+      offsetM,
+      lonLat,
+      offChannel,
+    };
   });
 }

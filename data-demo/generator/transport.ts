@@ -54,12 +54,15 @@ export function solveSteadyTransport(
   productionPerNode?: number[],
 ): SteadyProfile {
   const n = grid.xKm.length - 1;
-  if (!(dischargeM3s > 0)) throw new RangeError(`solveSteadyTransport(): dischargeM3s must be > 0, got ${dischargeM3s}`);
+  if (!(dischargeM3s > 0))
+    throw new RangeError(`solveSteadyTransport(): dischargeM3s must be > 0, got ${dischargeM3s}`);
   if (n < 2 || grid.faceAreaM2.length !== n || grid.faceDispersionM2s.length !== n) {
     throw new RangeError(`solveSteadyTransport(): grid needs N+1 nodes and N faces, got ${n + 1} nodes`);
   }
   if (productionPerNode && productionPerNode.length !== n + 1) {
-    throw new RangeError(`solveSteadyTransport(): productionPerNode must have ${n + 1} entries, got ${productionPerNode.length}`);
+    throw new RangeError(
+      `solveSteadyTransport(): productionPerNode must have ${n + 1} entries, got ${productionPerNode.length}`,
+    );
   }
   const q = dischargeM3s;
   const hM = (grid.xKm[n] * 1000) / n;

@@ -23,7 +23,11 @@ import { isohalineKm } from "./salinityModel.ts";
 export type TruthClass = "conservative" | "removal-then-conservative" | "maximum-then-conservative" | "addition";
 
 /** Interior concentration maximum of a model profile within the mapped channel, if any. */
-function interiorMaximum(model: SurveyModel, name: string, lengthKm: number): { salinity: number; conc: number } | undefined {
+function interiorMaximum(
+  model: SurveyModel,
+  name: string,
+  lengthKm: number,
+): { salinity: number; conc: number } | undefined {
   const conc = model.profiles[name].conc;
   const x = model.salt.grid.xKm;
   const river = model.spec.constituents[name].riverConc;
@@ -44,8 +48,13 @@ function surveyTruth(model: SurveyModel, plans: StationPlan[], rows: SampleRow[]
     const prof = model.profiles[c.name];
     const delta = prof.effectiveEndmember - cc.riverConc;
     const max = interiorMaximum(model, c.name, lengthKm);
-    const cls: TruthClass =
-      !cc.reaction ? "conservative" : delta < 0 ? "removal-then-conservative" : max ? "maximum-then-conservative" : "addition";
+    const cls: TruthClass = !cc.reaction
+      ? "conservative"
+      : delta < 0
+        ? "removal-then-conservative"
+        : max
+          ? "maximum-then-conservative"
+          : "addition";
     constituents[c.name] = {
       unit: c.unit,
       riverEndmember: roundTo(cc.riverConc, 6),
@@ -108,17 +117,19 @@ export function truthDocument(
     note: INVENTED_DATA_NOTE,
     seed,
     definitions: {
-      true:
-        "Values of the noise-free forward model (data-demo/generator), not of the noisy station data; an analysis recovers them only within its uncertainty.",
+      true: "Values of the noise-free forward model (data-demo/generator), not of the noisy station data; an analysis recovers them only within its uncertainty.",
       riverEndmember: "Concentration imposed at the head boundary (river water at S = riverSalinity).",
       seaEndmember: "Concentration imposed at the mouth boundary (S = seaSalinity).",
       effectiveRiverEndmember:
         "Prescribed C*0 at the mouth = riverEndmember + reaction change; equals the net seaward flux through the mouth divided by Q (Boyle et al. 1974; mixing-methods.md §1.2 Eq. 3). effectiveRiverEndmemberFromModelFlux is the finite-difference check.",
       percentChange: "100·(effectiveRiverEndmember − riverEndmember)/riverEndmember; negative = net removal.",
-      reactionZoneSalinity: "Salinity interval where the prescribed reaction acts; conservative mixing beyond its upper end.",
-      maximumSalinity: "Salinity of the model concentration maximum inside the estuary, null when the profile has none.",
+      reactionZoneSalinity:
+        "Salinity interval where the prescribed reaction acts; conservative mixing beyond its upper end.",
+      maximumSalinity:
+        "Salinity of the model concentration maximum inside the estuary, null when the profile has none.",
       saltIntrusionKm: "Along-channel distance from the mouth of the model isohaline S = 2 (also S = 1, 10).",
-      alongChannelKm: "Distance along the main-stem centerline (haversine, mean Earth radius) from the mouth to the station's foot point.",
+      alongChannelKm:
+        "Distance along the main-stem centerline (haversine, mean Earth radius) from the mouth to the station's foot point.",
       offsetM: "Signed perpendicular distance of the station from the centerline (+ = right looking landward).",
     },
     model: {
