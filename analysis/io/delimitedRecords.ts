@@ -38,10 +38,12 @@ export function parseDelimitedText(text: string, dialect: TextDialect, sink: Rec
   const parsed = Papa.parse<string[]>(stripBom(text), { delimiter: dialect.delimiter, skipEmptyLines: false });
   const errs = errorsByRow(parsed.errors, 1);
   let blank = 0;
+  const last = parsed.data.length - 1;
   parsed.data.forEach((fields, i) => {
     const row = i + 1;
     if (fields.length === 1 && fields[0].trim() === "") {
-      blank += 1;
+      // The empty record after a final line break is not a blank line.
+      if (i !== last || fields[0] !== "") blank += 1;
       return;
     }
     sink({ fields, row, parseErrors: errs.get(row) ?? [] });
