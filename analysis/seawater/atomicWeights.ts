@@ -66,7 +66,9 @@ export const ATOMIC_WEIGHTS: Readonly<Record<string, AtomicWeight>> = Object.fre
 export function atomicWeight(element: string): number {
   const entry = Object.hasOwn(ATOMIC_WEIGHTS, element) ? ATOMIC_WEIGHTS[element] : undefined;
   if (!entry) {
-    throw new RangeError(`atomicWeight: unknown element "${element}" (known: ${Object.keys(ATOMIC_WEIGHTS).join(", ")})`);
+    throw new RangeError(
+      `atomicWeight: unknown element "${element}" (known: ${Object.keys(ATOMIC_WEIGHTS).join(", ")})`,
+    );
   }
   return entry.gPerMol;
 }

@@ -63,13 +63,23 @@ export function lnKbDickson1990(s: number, tK: number): number {
   const sq = Math.sqrt(s);
   return (
     (-8966.9 - 2890.53 * sq - 77.942 * s + 1.728 * s * sq - 0.0996 * s * s) / tK +
-    148.0248 + 137.1942 * sq + 1.62142 * s - (24.4344 + 25.085 * sq + 0.2474 * s) * Math.log(tK) + 0.053105 * sq * tK
+    148.0248 +
+    137.1942 * sq +
+    1.62142 * s -
+    (24.4344 + 25.085 * sq + 0.2474 * s) * Math.log(tK) +
+    0.053105 * sq * tK
   );
 }
 
 /** ln KW, total scale (Millero 1995, GCA 59, 661–677, with the DOE 1994 constant 148.96502). */
 export function lnKwMillero1995(s: number, tK: number): number {
-  return 148.96502 - 13847.26 / tK - 23.6521 * Math.log(tK) + (118.67 / tK - 5.977 + 1.0495 * Math.log(tK)) * Math.sqrt(s) - 0.01615 * s;
+  return (
+    148.96502 -
+    13847.26 / tK -
+    23.6521 * Math.log(tK) +
+    (118.67 / tK - 5.977 + 1.0495 * Math.log(tK)) * Math.sqrt(s) -
+    0.01615 * s
+  );
 }
 
 /** ln KS (HSO4⁻), free scale, mol/kg-soln (Dickson 1990, J. Chem. Thermodyn. 22, 113–127), I by the DOE form. */
@@ -77,10 +87,14 @@ export function lnKsDickson1990(s: number, tK: number): number {
   const i = (19.924 * s) / (1000 - 1.005 * s);
   const lnT = Math.log(tK);
   return (
-    -4276.1 / tK + 141.328 - 23.093 * lnT +
+    -4276.1 / tK +
+    141.328 -
+    23.093 * lnT +
     (-13856 / tK + 324.57 - 47.986 * lnT) * Math.sqrt(i) +
     (35474 / tK - 771.54 + 114.723 * lnT) * i -
-    (2698 / tK) * Math.pow(i, 1.5) + (1776 / tK) * i * i + Math.log(1 - 0.001005 * s)
+    (2698 / tK) * Math.pow(i, 1.5) +
+    (1776 / tK) * i * i +
+    Math.log(1 - 0.001005 * s)
   );
 }
 

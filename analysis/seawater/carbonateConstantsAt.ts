@@ -23,11 +23,18 @@ import {
  * @see Millero, F.J., 2010. Carbonate constants for estuarine waters. Mar. Freshwater Res. 61, 139–142.
  * @see Dickson, A.G., Sabine, C.L., Christian, J.R., 2007. PICES Spec. Publ. 3, ch. 5.
  */
-export function carbonateConstantsAt(salinity: number, temperatureC: number, k1k2Set: CarbonateK1K2Set = "millero2010"): CarbonateConstants {
+export function carbonateConstantsAt(
+  salinity: number,
+  temperatureC: number,
+  k1k2Set: CarbonateK1K2Set = "millero2010",
+): CarbonateConstants {
   const fn = "carbonateConstantsAt";
-  if (!Number.isFinite(salinity) || salinity < 0 || salinity > 50) throw new RangeError(`${fn}: salinity must be within 0…50, got ${salinity}`);
-  if (!Number.isFinite(temperatureC) || temperatureC < -2 || temperatureC > 40) throw new RangeError(`${fn}: temperatureC must be within −2…40, got ${temperatureC}`);
-  if (k1k2Set !== "millero2010" && k1k2Set !== "lueker2000") throw new RangeError(`${fn}: unknown k1k2Set "${String(k1k2Set)}"`);
+  if (!Number.isFinite(salinity) || salinity < 0 || salinity > 50)
+    throw new RangeError(`${fn}: salinity must be within 0…50, got ${salinity}`);
+  if (!Number.isFinite(temperatureC) || temperatureC < -2 || temperatureC > 40)
+    throw new RangeError(`${fn}: temperatureC must be within −2…40, got ${temperatureC}`);
+  if (k1k2Set !== "millero2010" && k1k2Set !== "lueker2000")
+    throw new RangeError(`${fn}: unknown k1k2Set "${String(k1k2Set)}"`);
   const s = salinity;
   const tK = temperatureC + 273.15;
   const ksFree = Math.exp(lnKsDickson1990(s, tK));

@@ -44,7 +44,8 @@ export interface CarbonateMixingSeries extends SeriesSet {
 export function carbonatePhAlongMixingLine(input: CarbonateMixingInput): CarbonateMixingSeries {
   const fn = "carbonatePhAlongMixingLine";
   const { river, sea } = input;
-  if (!(sea.salinity > river.salinity)) throw new RangeError(`${fn}: sea.salinity (${sea.salinity}) must exceed river.salinity (${river.salinity})`);
+  if (!(sea.salinity > river.salinity))
+    throw new RangeError(`${fn}: sea.salinity (${sea.salinity}) must exceed river.salinity (${river.salinity})`);
   checkGrid(fn, "salinityGrid", input.salinityGrid, river.salinity, sea.salinity);
   const set = input.k1k2Set ?? "millero2010";
   const tempAt = (f: number): number => {
@@ -74,7 +75,9 @@ export function carbonatePhAlongMixingLine(input: CarbonateMixingInput): Carbona
     }
   }
   const warnings = [...new Set(pts.flatMap((p) => p.r.warnings))];
-  warnings.push("Organic alkalinity, phosphate, silicate and activity corrections in river water are neglected (chemistry-constants.md §8.2 caveats)");
+  warnings.push(
+    "Organic alkalinity, phosphate, silicate and activity corrections in river water are neglected (chemistry-constants.md §8.2 caveats)",
+  );
   return {
     x: [...input.salinityGrid],
     xLabel: "Practical salinity",
@@ -83,8 +86,18 @@ export function carbonatePhAlongMixingLine(input: CarbonateMixingInput): Carbona
       { key: "pH_T", label: "pH (total scale)", unit: "pH_T", values: pH },
       { key: "TA", label: "Total alkalinity", unit: "µmol/kg", values: pts.map((p) => p.ta) },
       { key: "DIC", label: "Dissolved inorganic carbon", unit: "µmol/kg", values: pts.map((p) => p.dic) },
-      { key: "pK1_T", label: "pK1 (total scale)", unit: "", values: pts.map((p) => -Math.log10(p.r.constants.k1Total)) },
-      { key: "pK2_T", label: "pK2 (total scale)", unit: "", values: pts.map((p) => -Math.log10(p.r.constants.k2Total)) },
+      {
+        key: "pK1_T",
+        label: "pK1 (total scale)",
+        unit: "",
+        values: pts.map((p) => -Math.log10(p.r.constants.k1Total)),
+      },
+      {
+        key: "pK2_T",
+        label: "pK2 (total scale)",
+        unit: "",
+        values: pts.map((p) => -Math.log10(p.r.constants.k2Total)),
+      },
     ],
     warnings,
     source:

@@ -42,9 +42,17 @@ export function alkalinityAt(hTotal: number, dicMolKg: number, c: CarbonateConst
  * @throws {RangeError} for non-finite or negative TA/DIC and the ranges of carbonateConstantsAt
  * @see Dickson, A.G., Sabine, C.L., Christian, J.R., 2007. Guide to Best Practices for Ocean CO2 Measurements. PICES Spec. Publ. 3.
  */
-export function carbonatePhFromTaDic(salinity: number, temperatureC: number, taUmolKg: number, dicUmolKg: number, k1k2Set: CarbonateK1K2Set = "millero2010"): CarbonateState | undefined {
-  if (!Number.isFinite(taUmolKg) || taUmolKg < 0) throw new RangeError(`carbonatePhFromTaDic: taUmolKg must be ≥ 0, got ${taUmolKg}`);
-  if (!Number.isFinite(dicUmolKg) || dicUmolKg < 0) throw new RangeError(`carbonatePhFromTaDic: dicUmolKg must be ≥ 0, got ${dicUmolKg}`);
+export function carbonatePhFromTaDic(
+  salinity: number,
+  temperatureC: number,
+  taUmolKg: number,
+  dicUmolKg: number,
+  k1k2Set: CarbonateK1K2Set = "millero2010",
+): CarbonateState | undefined {
+  if (!Number.isFinite(taUmolKg) || taUmolKg < 0)
+    throw new RangeError(`carbonatePhFromTaDic: taUmolKg must be ≥ 0, got ${taUmolKg}`);
+  if (!Number.isFinite(dicUmolKg) || dicUmolKg < 0)
+    throw new RangeError(`carbonatePhFromTaDic: dicUmolKg must be ≥ 0, got ${dicUmolKg}`);
   const c = carbonateConstantsAt(salinity, temperatureC, k1k2Set);
   const ta = taUmolKg * 1e-6;
   const dic = dicUmolKg * 1e-6;
@@ -61,7 +69,8 @@ export function carbonatePhFromTaDic(salinity: number, temperatureC: number, taU
   const h = Math.pow(10, -pHTotal);
   const den = h * h + c.k1Total * h + c.k1Total * c.k2Total;
   const warnings: string[] = [];
-  if (k1k2Set === "lueker2000" && (salinity < 19 || salinity > 43)) warnings.push(`Lueker et al. (2000) K1, K2 used at S = ${salinity}, outside their range (≈ 19–43)`);
+  if (k1k2Set === "lueker2000" && (salinity < 19 || salinity > 43))
+    warnings.push(`Lueker et al. (2000) K1, K2 used at S = ${salinity}, outside their range (≈ 19–43)`);
   return {
     pHTotal,
     pHFree: pHTotal - Math.log10(c.totalToFree),

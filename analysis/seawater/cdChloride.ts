@@ -54,21 +54,29 @@ const CL_KEYS = ["CdCl+", "CdCl2", "CdCl3-", "CdCl4-2"];
  * @see Turner, D.R., Whitfield, M., Dickson, A.G., 1981. Geochim. Cosmochim. Acta 45, 855–881 (method; from memory).
  * @see Powell, K.J. et al., 2011. Pure Appl. Chem. 83, 1163–1214 (chloro-complexes dominate Cd in seawater).
  */
-export function cdChlorideSpeciation(set: CdChlorideSet, conditions: WaterConditions, options: CdSpeciationOptions = {}): CdSpeciation {
+export function cdChlorideSpeciation(
+  set: CdChlorideSet,
+  conditions: WaterConditions,
+  options: CdSpeciationOptions = {},
+): CdSpeciation {
   checkConditions("cdChlorideSpeciation", conditions);
   const t = conditions.temperatureC;
   const warnings: string[] = [];
   const ionicStrength = resolveIonicStrength(conditions, options.mixing);
   const w = daviesValidityWarning(ionicStrength);
   if (w) warnings.push(w);
-  if (!set.deltaHKcalMol && Math.abs(t - 25) > 0.5) warnings.push(`${set.label}: no enthalpies; 25 °C constants used at ${t} °C`);
+  if (!set.deltaHKcalMol && Math.abs(t - 25) > 0.5)
+    warnings.push(`${set.label}: no enthalpies; 25 °C constants used at ${t} °C`);
   let cl = options.chlorideMolKgH2O;
   if (cl === undefined) {
     const sea = options.mixing?.seaSalinity ?? 35;
     const s = Math.min(Math.max(conditions.salinity, options.mixing?.riverSalinity ?? 0), sea);
-    cl = majorIonsAtSalinity(s, options.mixing).molalityKgH2O["Cl-"] * (conditions.salinity > sea ? conditions.salinity / sea : 1);
+    cl =
+      majorIonsAtSalinity(s, options.mixing).molalityKgH2O["Cl-"] *
+      (conditions.salinity > sea ? conditions.salinity / sea : 1);
   }
-  if (!Number.isFinite(cl) || cl < 0) throw new RangeError(`cdChlorideSpeciation: chlorideMolKgH2O must be ≥ 0, got ${cl}`);
+  if (!Number.isFinite(cl) || cl < 0)
+    throw new RangeError(`cdChlorideSpeciation: chlorideMolKgH2O must be ≥ 0, got ${cl}`);
   const davies: DaviesOptions = { temperatureC: t, ...options.davies };
   const lg = (z: number): number => daviesLogGamma(z, ionicStrength, davies);
   const logBetaConditional = set.logBeta25.map((lb, i) => {
@@ -79,10 +87,19 @@ export function cdChlorideSpeciation(set: CdChlorideSet, conditions: WaterCondit
   const terms: Record<string, number> = { "Cd+2": 1 };
   logBetaConditional.forEach((lb, i) => (terms[CL_KEYS[i]] = Math.pow(10, lb) * Math.pow(cl, i + 1)));
   for (const l of options.extraLigands ?? []) {
-    if (!Number.isFinite(l.molKgH2O) || l.molKgH2O < 0) throw new RangeError(`cdChlorideSpeciation: ligand ${l.key} molKgH2O must be ≥ 0, got ${l.molKgH2O}`);
+    if (!Number.isFinite(l.molKgH2O) || l.molKgH2O < 0)
+      throw new RangeError(`cdChlorideSpeciation: ligand ${l.key} molKgH2O must be ≥ 0, got ${l.molKgH2O}`);
     terms[l.key] = Math.pow(10, l.logK0 + lg(2) + lg(l.ligandCharge) - lg(2 + l.ligandCharge)) * l.molKgH2O;
   }
   const sum = Object.values(terms).reduce((a, b) => a + b, 0);
   const fractions = Object.fromEntries(Object.entries(terms).map(([k, v]) => [k, v / sum]));
-  return { fractions, freeFraction: 1 / sum, sideReactionCoefficient: sum, logBetaConditional, ionicStrength, chlorideMolKgH2O: cl, warnings };
+  return {
+    fractions,
+    freeFraction: 1 / sum,
+    sideReactionCoefficient: sum,
+    logBetaConditional,
+    ionicStrength,
+    chlorideMolKgH2O: cl,
+    warnings,
+  };
 }

@@ -40,10 +40,19 @@ function rtxForSalinity(salinity: number, t68C: number): number {
  * @see Fofonoff, N.P., Millard, R.C., 1983. UNESCO Tech. Pap. Mar. Sci. 44 (CNDR).
  * @see IOC, SCOR, IAPSO, 2010. TEOS-10 Manual (GSW `gsw_C_from_SP`).
  */
-export function conductivityFromPracticalSalinity(salinity: number, temperatureC: number, pressureDbar: number): number {
+export function conductivityFromPracticalSalinity(
+  salinity: number,
+  temperatureC: number,
+  pressureDbar: number,
+): number {
   const fn = "conductivityFromPracticalSalinity";
-  for (const [name, v] of [["salinity", salinity], ["temperatureC", temperatureC], ["pressureDbar", pressureDbar]] as const) {
-    if (typeof v !== "number" || !Number.isFinite(v)) throw new TypeError(`${fn}: ${name} must be a finite number, got ${String(v)}`);
+  for (const [name, v] of [
+    ["salinity", salinity],
+    ["temperatureC", temperatureC],
+    ["pressureDbar", pressureDbar],
+  ] as const) {
+    if (typeof v !== "number" || !Number.isFinite(v))
+      throw new TypeError(`${fn}: ${name} must be a finite number, got ${String(v)}`);
   }
   if (salinity < 0 || salinity > 50) throw new RangeError(`${fn}: salinity must be within 0…50, got ${salinity}`);
   if (pressureDbar < 0) throw new RangeError(`${fn}: pressureDbar must be ≥ 0 (sea pressure), got ${pressureDbar}`);

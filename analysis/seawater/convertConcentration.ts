@@ -38,8 +38,14 @@ function resolve(unit: string | CanonicalUnit, arg: string): CanonicalUnit {
  * @see CIAAW, 2021. Standard atomic weights; Millero & Poisson (1981) EOS-80 density.
  * @example convertConcentration(1, "µg/L", "nmol/kg", { element: "Cd", salinity: 35, temperatureC: 20 }) // ≈ 8.681
  */
-export function convertConcentration(value: number, fromUnit: string | CanonicalUnit, toUnit: string | CanonicalUnit, context: ConversionContext = {}): number {
-  if (typeof value !== "number" || !Number.isFinite(value)) throw new TypeError(`${FN}: value must be a finite number, got ${String(value)}`);
+export function convertConcentration(
+  value: number,
+  fromUnit: string | CanonicalUnit,
+  toUnit: string | CanonicalUnit,
+  context: ConversionContext = {},
+): number {
+  if (typeof value !== "number" || !Number.isFinite(value))
+    throw new TypeError(`${FN}: value must be a finite number, got ${String(value)}`);
   const from = resolve(fromUnit, "fromUnit");
   const to = resolve(toUnit, "toUnit");
   if (from.atom && to.atom && from.atom !== to.atom) {
@@ -53,17 +59,23 @@ export function convertConcentration(value: number, fromUnit: string | Canonical
   if (from.quantity !== to.quantity) {
     const element = unitAtom ?? context.element;
     if (element === undefined) {
-      throw new RangeError(`${FN}: converting "${from.symbol}" to "${to.symbol}" needs context.element (which element the value counts)`);
+      throw new RangeError(
+        `${FN}: converting "${from.symbol}" to "${to.symbol}" needs context.element (which element the value counts)`,
+      );
     }
     const m = atomicWeight(element);
     x = from.quantity === "mass" ? x / m : x * m;
   } else if (from.quantity === "mass" && from.atom !== to.atom && context.element === undefined) {
-    throw new RangeError(`${FN}: "${from.symbol}" to "${to.symbol}" changes the atom label of a mass; give context.element to confirm the mass is of ${unitAtom}`);
+    throw new RangeError(
+      `${FN}: "${from.symbol}" to "${to.symbol}" changes the atom label of a mass; give context.element to confirm the mass is of ${unitAtom}`,
+    );
   }
   if (from.basis !== to.basis) {
     const { salinity, temperatureC } = context;
     if (salinity === undefined || temperatureC === undefined) {
-      throw new RangeError(`${FN}: converting "${from.symbol}" to "${to.symbol}" needs context.salinity and context.temperatureC (density), got salinity=${String(salinity)}, temperatureC=${String(temperatureC)}`);
+      throw new RangeError(
+        `${FN}: converting "${from.symbol}" to "${to.symbol}" needs context.salinity and context.temperatureC (density), got salinity=${String(salinity)}, temperatureC=${String(temperatureC)}`,
+      );
     }
     const litresPerKg = 1000 / densityEos80(salinity, temperatureC, 0);
     x = from.basis === "perLitre" ? x * litresPerKg : x / litresPerKg;

@@ -90,7 +90,13 @@ export function daviesValidityWarning(ionicStrength: number): string | undefined
  * @throws {RangeError} as daviesLogGamma
  * @see Stumm, W., Morgan, J.J., 1996. Aquatic Chemistry, 3rd ed., ch. 3 (from memory).
  */
-export function conditionalLogK(logK0: number, reactantCharges: readonly number[], productCharges: readonly number[], ionicStrength: number, options: DaviesOptions = {}): number {
+export function conditionalLogK(
+  logK0: number,
+  reactantCharges: readonly number[],
+  productCharges: readonly number[],
+  ionicStrength: number,
+  options: DaviesOptions = {},
+): number {
   let out = logK0;
   for (const z of reactantCharges) out += daviesLogGamma(z, ionicStrength, options);
   for (const z of productCharges) out -= daviesLogGamma(z, ionicStrength, options);

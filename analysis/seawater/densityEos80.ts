@@ -30,15 +30,24 @@ export function eos80SecantBulkModulusBar(salinity: number, temperatureC: number
   const p = pressureDbar / 10;
   const s15 = s * Math.sqrt(s);
   const kw = poly(t, [19652.21, 148.4206, -2.327105, 1.360477e-2, -5.155288e-5]);
-  const k0 = kw + poly(t, [54.6746, -0.603459, 1.09987e-2, -6.167e-5]) * s + poly(t, [7.944e-2, 1.6483e-2, -5.3009e-4]) * s15;
-  const a = poly(t, [3.239908, 1.43713e-3, 1.16092e-4, -5.77905e-7]) + poly(t, [2.2838e-3, -1.0981e-5, -1.6078e-6]) * s + 1.91075e-4 * s15;
+  const k0 =
+    kw + poly(t, [54.6746, -0.603459, 1.09987e-2, -6.167e-5]) * s + poly(t, [7.944e-2, 1.6483e-2, -5.3009e-4]) * s15;
+  const a =
+    poly(t, [3.239908, 1.43713e-3, 1.16092e-4, -5.77905e-7]) +
+    poly(t, [2.2838e-3, -1.0981e-5, -1.6078e-6]) * s +
+    1.91075e-4 * s15;
   const b = poly(t, [8.50935e-5, -6.12293e-6, 5.2787e-8]) + poly(t, [-9.9348e-7, 2.0816e-8, 9.1697e-10]) * s;
   return k0 + a * p + b * p * p;
 }
 
 function validate(fn: string, s: number, t: number, p: number): void {
-  for (const [name, v] of [["salinity", s], ["temperatureC", t], ["pressureDbar", p]] as const) {
-    if (typeof v !== "number" || !Number.isFinite(v)) throw new TypeError(`${fn}: ${name} must be a finite number, got ${String(v)}`);
+  for (const [name, v] of [
+    ["salinity", s],
+    ["temperatureC", t],
+    ["pressureDbar", p],
+  ] as const) {
+    if (typeof v !== "number" || !Number.isFinite(v))
+      throw new TypeError(`${fn}: ${name} must be a finite number, got ${String(v)}`);
   }
   if (s < 0) throw new RangeError(`${fn}: salinity must be ≥ 0, got ${s}`);
   if (p < 0) throw new RangeError(`${fn}: pressureDbar must be ≥ 0, got ${p}`);

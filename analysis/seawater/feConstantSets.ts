@@ -39,7 +39,8 @@ const SETS: Record<FeConstantSetId, FeConstantSet> = {
   stefansson2007: {
     id: "stefansson2007",
     label: "Stefánsson 2007, I = 0 (25 °C only)",
-    source: "Stefánsson, A., 2007. Iron(III) hydrolysis and solubility at 25 °C. Environ. Sci. Technol. 41, 6117–6123, doi:10.1021/es070174h (abstract: log*β −2.19, −5.76, −14.30, −21.71; 2-line ferrihydrite log*Ks0 3.50)",
+    source:
+      "Stefánsson, A., 2007. Iron(III) hydrolysis and solubility at 25 °C. Environ. Sci. Technol. 41, 6117–6123, doi:10.1021/es070174h (abstract: log*β −2.19, −5.76, −14.30, −21.71; 2-line ferrihydrite log*Ks0 3.50)",
     medium: "infiniteDilution",
     solid: "2-line ferrihydrite",
     logBeta: () => [-2.19, -5.76, -14.3, -21.71],
@@ -73,6 +74,7 @@ export const FE_CONSTANT_SETS: Readonly<Record<FeConstantSetId, FeConstantSet>> 
  */
 export function feConstantSet(id: string): FeConstantSet {
   const set = Object.hasOwn(FE_CONSTANT_SETS, id) ? FE_CONSTANT_SETS[id as FeConstantSetId] : undefined;
-  if (!set) throw new RangeError(`feConstantSet: unknown set "${id}" (known: ${Object.keys(FE_CONSTANT_SETS).join(", ")})`);
+  if (!set)
+    throw new RangeError(`feConstantSet: unknown set "${id}" (known: ${Object.keys(FE_CONSTANT_SETS).join(", ")})`);
   return set;
 }

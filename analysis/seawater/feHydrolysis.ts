@@ -41,20 +41,28 @@ export interface FeConditionalConstants {
  * @throws {TypeError|RangeError} for invalid conditions
  * @see Baes & Mesmer (1976); Liu & Millero (2002), Mar. Chem. 77, 43–54; Stefánsson (2007), ES&T 41, 6117.
  */
-export function feConditionalConstants(set: FeConstantSet, conditions: WaterConditions, options: FeSpeciationOptions = {}): FeConditionalConstants {
+export function feConditionalConstants(
+  set: FeConstantSet,
+  conditions: WaterConditions,
+  options: FeSpeciationOptions = {},
+): FeConditionalConstants {
   checkConditions("feConditionalConstants", conditions);
   const t = conditions.temperatureC;
   const warnings: string[] = [];
   const [tMin, tMax] = set.temperatureRangeC;
   if (t < tMin - 1e-9 || t > tMax + 1e-9) {
-    warnings.push(`${set.label}: constants known for ${tMin === tMax ? `${tMin} °C only` : `${tMin}…${tMax} °C`}; used unchanged at ${t} °C`);
+    warnings.push(
+      `${set.label}: constants known for ${tMin === tMax ? `${tMin} °C only` : `${tMin}…${tMax} °C`}; used unchanged at ${t} °C`,
+    );
   }
   const raw = set.logBeta(t);
   if (set.medium === "seawater") {
     if (conditions.salinity < 30) {
       warnings.push(`${set.label}: constants measured in seawater (S ≈ 36) applied at S = ${conditions.salinity}`);
     }
-    warnings.push(`${set.label}: pH must be on the constants' concentration scale (most likely free [H⁺]; not verified)`);
+    warnings.push(
+      `${set.label}: pH must be on the constants' concentration scale (most likely free [H⁺]; not verified)`,
+    );
     return { logBeta: [0, ...raw], logKs0: set.logKs0(t), logGammaFe: 0, ionicStrength: Number.NaN, warnings };
   }
   const ionicStrength = resolveIonicStrength(conditions, options.mixing);
@@ -62,7 +70,9 @@ export function feConditionalConstants(set: FeConstantSet, conditions: WaterCond
   const w = daviesValidityWarning(ionicStrength);
   if (w) warnings.push(w);
   const lgFe = daviesLogGamma(3, ionicStrength, davies);
-  const logBeta = [0, ...raw].map((lb, n) => (lb === undefined ? undefined : lb + lgFe - daviesLogGamma(FE_CHARGES[n], ionicStrength, davies)));
+  const logBeta = [0, ...raw].map((lb, n) =>
+    lb === undefined ? undefined : lb + lgFe - daviesLogGamma(FE_CHARGES[n], ionicStrength, davies),
+  );
   return { logBeta, logKs0: set.logKs0(t), logGammaFe: lgFe, ionicStrength, warnings };
 }
 
@@ -89,8 +99,14 @@ export interface FeSpeciation {
  * @throws {RangeError} for a pH outside 0…14; TypeError/RangeError for invalid conditions
  * @see Baes, C.F., Mesmer, R.E., 1976. The Hydrolysis of Cations. Wiley.
  */
-export function feSpeciation(pH: number, set: FeConstantSet, conditions: WaterConditions, options: FeSpeciationOptions = {}): FeSpeciation {
-  if (!Number.isFinite(pH) || pH < 0 || pH > 14) throw new RangeError(`feSpeciation: pH must be within 0…14, got ${pH}`);
+export function feSpeciation(
+  pH: number,
+  set: FeConstantSet,
+  conditions: WaterConditions,
+  options: FeSpeciationOptions = {},
+): FeSpeciation {
+  if (!Number.isFinite(pH) || pH < 0 || pH > 14)
+    throw new RangeError(`feSpeciation: pH must be within 0…14, got ${pH}`);
   const constants = feConditionalConstants(set, conditions, options);
   return speciateWith(pH, constants);
 }

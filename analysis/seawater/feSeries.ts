@@ -1,5 +1,11 @@
 import { feConstantSet, type FeConstantSet } from "./feConstantSets.ts";
-import { FE_SPECIES, FE_SPECIES_LABELS, feConditionalConstants, speciateWith, type FeSpeciationOptions } from "./feHydrolysis.ts";
+import {
+  FE_SPECIES,
+  FE_SPECIES_LABELS,
+  feConditionalConstants,
+  speciateWith,
+  type FeSpeciationOptions,
+} from "./feHydrolysis.ts";
 import { checkGrid } from "./grid.ts";
 import type { SeriesSet } from "./plotSeries.ts";
 import type { PredominanceBoundary } from "./predominance.ts";
@@ -25,7 +31,12 @@ export interface FeSpeciationSeries extends SeriesSet {
  * @throws {RangeError} for an unknown set, a bad grid value or invalid conditions
  * @see Baes & Mesmer (1976); Liu & Millero (2002) Mar. Chem. 77, 43–54; Stefánsson (2007) ES&T 41, 6117–6123.
  */
-export function feSpeciationVsPh(constantSet: FeConstantSet | string, conditions: WaterConditions, pHGrid: readonly number[], options: FeSpeciationOptions = {}): FeSpeciationSeries {
+export function feSpeciationVsPh(
+  constantSet: FeConstantSet | string,
+  conditions: WaterConditions,
+  pHGrid: readonly number[],
+  options: FeSpeciationOptions = {},
+): FeSpeciationSeries {
   const set = typeof constantSet === "string" ? feConstantSet(constantSet) : constantSet;
   checkGrid("feSpeciationVsPh", "pHGrid", pHGrid, 0, 14);
   const constants = feConditionalConstants(set, conditions, options);

@@ -7,7 +7,8 @@
  * @throws {RangeError} when n is not an integer ≥ 2 or start/end are not finite
  */
 export function linearGrid(start: number, end: number, n: number): number[] {
-  if (!Number.isFinite(start) || !Number.isFinite(end)) throw new RangeError(`linearGrid: start and end must be finite, got ${start}, ${end}`);
+  if (!Number.isFinite(start) || !Number.isFinite(end))
+    throw new RangeError(`linearGrid: start and end must be finite, got ${start}, ${end}`);
   if (!Number.isInteger(n) || n < 2) throw new RangeError(`linearGrid: n must be an integer ≥ 2, got ${n}`);
   return Array.from({ length: n }, (_, i) => (i === n - 1 ? end : start + ((end - start) * i) / (n - 1)));
 }

@@ -6,7 +6,8 @@ export const SEA_SALT_MOLAR_MASS_G_MOL = 31.4038218;
 export const SEA_SALT_VALENCE_FACTOR = 1.2452898;
 
 function checkSp(fn: string, salinity: number): void {
-  if (typeof salinity !== "number" || !Number.isFinite(salinity)) throw new TypeError(`${fn}: salinity must be a finite number, got ${String(salinity)}`);
+  if (typeof salinity !== "number" || !Number.isFinite(salinity))
+    throw new TypeError(`${fn}: salinity must be a finite number, got ${String(salinity)}`);
   if (salinity < 0 || salinity > 50) throw new RangeError(`${fn}: salinity must be within 0…50, got ${salinity}`);
 }
 

@@ -24,14 +24,27 @@ export function majorIonsVsSalinity(salinityGrid: readonly number[], options: Ma
   checkGrid("majorIonsVsSalinity", "salinityGrid", salinityGrid, options.riverSalinity ?? 0, options.seaSalinity ?? 35);
   const states = salinityGrid.map((s) => majorIonsAtSalinity(s, options));
   const river = options.river ?? WORLD_AVERAGE_RIVER;
-  const warnings = river === WORLD_AVERAGE_RIVER ? ["River end-member is a world-average composition (from memory), not this river's data"] : [];
+  const warnings =
+    river === WORLD_AVERAGE_RIVER
+      ? ["River end-member is a world-average composition (from memory), not this river's data"]
+      : [];
   return {
     x: [...salinityGrid],
     xLabel: "Practical salinity",
     xUnit: "",
     series: [
-      ...IONS.map(([key, label]) => ({ key, label, unit: "mmol/kg", values: states.map((st) => 1000 * st.molKg[key]) })),
-      { key: "ionicStrength", label: "Ionic strength", unit: "mol/kg-H2O", values: states.map((st) => st.ionicStrength) },
+      ...IONS.map(([key, label]) => ({
+        key,
+        label,
+        unit: "mmol/kg",
+        values: states.map((st) => 1000 * st.molKg[key]),
+      })),
+      {
+        key: "ionicStrength",
+        label: "Ionic strength",
+        unit: "mol/kg-H2O",
+        values: states.map((st) => st.ionicStrength),
+      },
     ],
     warnings,
     source: `Millero, F.J., Feistel, R., Wright, D.G., McDougall, T.J., 2008. Deep-Sea Res. I 55, 50–72 (Table 4), mixed with: ${river.source}`,

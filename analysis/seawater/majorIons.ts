@@ -56,7 +56,8 @@ export function majorIonsAtSalinity(salinity: number, options: MajorIonOptions =
   let saltGKg = f * U_PS_G_KG * sS;
   for (const s of REFERENCE_COMPOSITION) molKg[s.species] = (f * s.molKg * sS) / 35;
   for (const [ion, m] of Object.entries(river.molKg)) {
-    if (CHARGE[ion] === undefined) throw new RangeError(`majorIonsAtSalinity: river ion "${ion}" is not a reference species`);
+    if (CHARGE[ion] === undefined)
+      throw new RangeError(`majorIonsAtSalinity: river ion "${ion}" is not a reference species`);
     molKg[ion] = (molKg[ion] ?? 0) + (1 - f) * m;
     saltGKg += (1 - f) * m * (RIVER_ION_MOLAR_MASS_G_MOL[ion] ?? 0);
   }

@@ -28,7 +28,11 @@ function finite(fn: string, name: string, value: number): void {
  * @see IOC, SCOR, IAPSO, 2010. TEOS-10 Manual (GSW `gsw_SP_from_C`, Hill continuity ratio).
  * @example practicalSalinityFromConductivity(42.914, 15 / 1.00024, 0) // ≈ 35
  */
-export function practicalSalinityFromConductivity(conductivityMsCm: number, temperatureC: number, pressureDbar: number): number {
+export function practicalSalinityFromConductivity(
+  conductivityMsCm: number,
+  temperatureC: number,
+  pressureDbar: number,
+): number {
   const fn = "practicalSalinityFromConductivity";
   finite(fn, "conductivityMsCm", conductivityMsCm);
   finite(fn, "temperatureC", temperatureC);

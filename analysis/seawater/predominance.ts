@@ -28,7 +28,8 @@ export function predominanceBoundaries(logBeta: readonly (number | undefined)[])
       const bj = logBeta[j];
       if (bj === undefined) continue;
       const pH = (bi - bj) / (j - i);
-      if (!best || pH < best.pH - 1e-12 || (Math.abs(pH - best.pH) <= 1e-12 && j > best.above)) best = { below: i, above: j, pH };
+      if (!best || pH < best.pH - 1e-12 || (Math.abs(pH - best.pH) <= 1e-12 && j > best.above))
+        best = { below: i, above: j, pH };
     }
     if (!best) break;
     out.push(best);

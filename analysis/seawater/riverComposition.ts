@@ -21,7 +21,7 @@ const MOLAR_MASS_G_MOL: Record<string, number> = {
 };
 
 /** Density of fresh water at 20 °C used for mg/L → mol/kg of the default river: 998.2 kg/m³ (EOS-80, S = 0). */
-const RIVER_DENSITY_KG_L = 0.99820;
+const RIVER_DENSITY_KG_L = 0.9982;
 
 /**
  * Builds a river composition from mass concentrations [mg/L].
@@ -32,12 +32,21 @@ const RIVER_DENSITY_KG_L = 0.99820;
  * @returns composition in mol/kg
  * @throws {RangeError} for an unknown ion key or a negative/non-finite concentration
  */
-export function riverCompositionFromMgL(name: string, source: string, mgL: Readonly<Record<string, number>>, densityKgL = RIVER_DENSITY_KG_L): RiverComposition {
+export function riverCompositionFromMgL(
+  name: string,
+  source: string,
+  mgL: Readonly<Record<string, number>>,
+  densityKgL = RIVER_DENSITY_KG_L,
+): RiverComposition {
   const molKg: Record<string, number> = {};
   for (const [ion, c] of Object.entries(mgL)) {
     const m = MOLAR_MASS_G_MOL[ion];
-    if (m === undefined) throw new RangeError(`riverCompositionFromMgL: unknown ion "${ion}" (known: ${Object.keys(MOLAR_MASS_G_MOL).join(", ")})`);
-    if (!Number.isFinite(c) || c < 0) throw new RangeError(`riverCompositionFromMgL: ${ion} must be a finite concentration ≥ 0, got ${c}`);
+    if (m === undefined)
+      throw new RangeError(
+        `riverCompositionFromMgL: unknown ion "${ion}" (known: ${Object.keys(MOLAR_MASS_G_MOL).join(", ")})`,
+      );
+    if (!Number.isFinite(c) || c < 0)
+      throw new RangeError(`riverCompositionFromMgL: ${ion} must be a finite concentration ≥ 0, got ${c}`);
     molKg[ion] = c / 1000 / m / densityKgL;
   }
   return { name, source, molKg: Object.freeze(molKg) };

@@ -10,7 +10,8 @@ export const REFERENCE_SALINITY_35_G_KG = 35.16504;
 export const U_PS_G_KG = REFERENCE_SALINITY_35_G_KG / 35;
 
 function check(fn: string, name: string, v: number, min: number): void {
-  if (typeof v !== "number" || !Number.isFinite(v)) throw new TypeError(`${fn}: ${name} must be a finite number, got ${String(v)}`);
+  if (typeof v !== "number" || !Number.isFinite(v))
+    throw new TypeError(`${fn}: ${name} must be a finite number, got ${String(v)}`);
   if (v < min) throw new RangeError(`${fn}: ${name} must be ≥ ${min}, got ${v}`);
 }
 

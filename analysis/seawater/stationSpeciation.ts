@@ -54,24 +54,57 @@ export interface StationSpeciationResult {
  * @throws {RangeError|TypeError} for invalid inputs (naming the field) or unknown set ids
  * @see feSpeciation, cdChlorideSpeciation, majorIonsAtSalinity for formulas and citations.
  */
-export function stationSpeciation(water: StationWater, options: StationSpeciationOptions = {}): StationSpeciationResult {
-  if (!water || !Number.isFinite(water.pH)) throw new TypeError(`stationSpeciation: pH must be a finite number, got ${String(water?.pH)}`);
+export function stationSpeciation(
+  water: StationWater,
+  options: StationSpeciationOptions = {},
+): StationSpeciationResult {
+  if (!water || !Number.isFinite(water.pH))
+    throw new TypeError(`stationSpeciation: pH must be a finite number, got ${String(water?.pH)}`);
   const conditions = { salinity: water.salinity, temperatureC: water.temperatureC };
   const ionicStrength = resolveIonicStrength(conditions, options.mixing);
   const sea = options.mixing?.seaSalinity ?? 35;
-  const majorIons = water.salinity <= sea && water.salinity >= (options.mixing?.riverSalinity ?? 0) ? majorIonsAtSalinity(water.salinity, options.mixing) : undefined;
-  const feSet = typeof options.feConstantSet === "object" ? options.feConstantSet : feConstantSet(options.feConstantSet ?? "baesMesmer1976");
+  const majorIons =
+    water.salinity <= sea && water.salinity >= (options.mixing?.riverSalinity ?? 0)
+      ? majorIonsAtSalinity(water.salinity, options.mixing)
+      : undefined;
+  const feSet =
+    typeof options.feConstantSet === "object"
+      ? options.feConstantSet
+      : feConstantSet(options.feConstantSet ?? "baesMesmer1976");
   let cdSet: CdChlorideSet | undefined;
   if (typeof options.cdConstantSet === "object") cdSet = options.cdConstantSet;
   else cdSet = CD_CHLORIDE_SETS[(options.cdConstantSet ?? "wateq4f") as keyof typeof CD_CHLORIDE_SETS];
   if (!cdSet) throw new RangeError(`stationSpeciation: unknown cdConstantSet "${String(options.cdConstantSet)}"`);
-  const fe = feSpeciation(water.pH, feSet, { ...conditions, ionicStrength }, { davies: options.davies, mixing: options.mixing });
-  const cd = cdChlorideSpeciation(cdSet, { ...conditions, ionicStrength }, { davies: options.davies, mixing: options.mixing });
+  const fe = feSpeciation(
+    water.pH,
+    feSet,
+    { ...conditions, ionicStrength },
+    { davies: options.davies, mixing: options.mixing },
+  );
+  const cd = cdChlorideSpeciation(
+    cdSet,
+    { ...conditions, ionicStrength },
+    { davies: options.davies, mixing: options.mixing },
+  );
   const warnings = [...new Set([...fe.constants.warnings, ...cd.warnings])];
   const scale = options.pHScale ?? "unknown";
   if (feSet.medium === "infiniteDilution" && scale !== "nbs") {
-    warnings.push(`pH (${scale} scale) used as −log a_H⁺ with I = 0 constants; scale differences of ≈ 0.1 pH are possible in seawater`);
+    warnings.push(
+      `pH (${scale} scale) used as −log a_H⁺ with I = 0 constants; scale differences of ≈ 0.1 pH are possible in seawater`,
+    );
   }
-  if (!majorIons) warnings.push(`Salinity ${water.salinity} above the sea end-member (${sea}); Reference-Composition seawater assumed`);
-  return { input: { ...water }, majorIons, ionicStrength, fe, cd, freeCdFraction: cd.freeFraction, warnings, caution: SPECIATION_CAUTION };
+  if (!majorIons)
+    warnings.push(
+      `Salinity ${water.salinity} above the sea end-member (${sea}); Reference-Composition seawater assumed`,
+    );
+  return {
+    input: { ...water },
+    majorIons,
+    ionicStrength,
+    fe,
+    cd,
+    freeCdFraction: cd.freeFraction,
+    warnings,
+    caution: SPECIATION_CAUTION,
+  };
 }

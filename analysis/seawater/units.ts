@@ -24,7 +24,13 @@ export interface CanonicalUnit {
   atom?: "N" | "P" | "Si";
 }
 
-const PREFIXES: ReadonlyArray<[string, number]> = [["p", 1e-12], ["n", 1e-9], ["µ", 1e-6], ["m", 1e-3], ["", 1]];
+const PREFIXES: ReadonlyArray<[string, number]> = [
+  ["p", 1e-12],
+  ["n", 1e-9],
+  ["µ", 1e-6],
+  ["m", 1e-3],
+  ["", 1],
+];
 const ATOMS = [undefined, "N", "P", "Si"] as const;
 
 function buildTable(): Record<string, CanonicalUnit> {
@@ -35,7 +41,9 @@ function buildTable(): Record<string, CanonicalUnit> {
         for (const atom of ATOMS) {
           const q = quantity === "mass" ? "g" : "mol";
           const symbol = `${prefix}${q}${atom ? ` ${atom}` : ""}/${basis === "perLitre" ? "L" : "kg"}`;
-          out[symbol] = Object.freeze(atom ? { symbol, quantity, basis, toBase: factor, atom } : { symbol, quantity, basis, toBase: factor });
+          out[symbol] = Object.freeze(
+            atom ? { symbol, quantity, basis, toBase: factor, atom } : { symbol, quantity, basis, toBase: factor },
+          );
         }
       }
     }
@@ -62,7 +70,13 @@ const WORDS: ReadonlyArray<[RegExp, string]> = [
   [/\b(litres?|liters?)\b/g, "l"],
   [/\bkilograms?\b/g, "kg"],
 ];
-const MOLAR_WORDS: Record<string, string> = { picomolar: "p", nanomolar: "n", micromolar: "µ", millimolar: "m", molar: "" };
+const MOLAR_WORDS: Record<string, string> = {
+  picomolar: "p",
+  nanomolar: "n",
+  micromolar: "µ",
+  millimolar: "m",
+  molar: "",
+};
 const ATOM_OF: Record<string, "N" | "P" | "Si"> = { n: "N", p: "P", si: "Si" };
 
 function normalise(text: string): string {
@@ -119,14 +133,23 @@ function recognise(text: string): { unit?: CanonicalUnit; reason: string } {
   for (const [re, rep] of WORDS) low = low.replace(re, rep);
   low = low.replace(/ ?\/ ?/g, "/").replace(/ per /g, "/");
   const m =
-    /^([pnuµm]?)(g|mol)(?:[ _-]?(n|p|si)(?![a-z]))?(?:\/(l|kg|m3|m\^3|m³|dm3|dm³)|[ ](l\^?-1|kg\^?-1|m\^?-3|dm\^?-3))(?: (?:as )?(n|p|si))?$/.exec(low);
+    /^([pnuµm]?)(g|mol)(?:[ _-]?(n|p|si)(?![a-z]))?(?:\/(l|kg|m3|m\^3|m³|dm3|dm³)|[ ](l\^?-1|kg\^?-1|m\^?-3|dm\^?-3))(?: (?:as )?(n|p|si))?$/.exec(
+      low,
+    );
   if (!m) return { reason: "unknown" };
   const den = (m[4] ?? m[5]).replace(/\^?-\d$/, "");
   const perM3 = den.startsWith("m");
   return lookup(m[1], m[2] as "g" | "mol", den === "kg" ? "kg" : "L", perM3 ? 1e-3 : 1, m[3], m[6]);
 }
 
-function lookup(prefix: string, q: "g" | "mol", den: "L" | "kg", scale: number, atomA: string | undefined, atomB: string | undefined) {
+function lookup(
+  prefix: string,
+  q: "g" | "mol",
+  den: "L" | "kg",
+  scale: number,
+  atomA: string | undefined,
+  atomB: string | undefined,
+) {
   if (atomA && atomB && atomA !== atomB) return { reason: "ambiguous (two different atoms)" };
   const atomKey = atomA ?? atomB;
   const atom = atomKey ? ATOM_OF[atomKey] : undefined;

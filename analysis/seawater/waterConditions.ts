@@ -40,7 +40,9 @@ export function resolveIonicStrength(conditions: WaterConditions, mixing: MajorI
  */
 export function checkConditions(fn: string, c: WaterConditions): void {
   if (!c || typeof c !== "object") throw new TypeError(`${fn}: conditions must be an object, got ${String(c)}`);
-  if (typeof c.salinity !== "number" || !Number.isFinite(c.salinity)) throw new TypeError(`${fn}: salinity must be a finite number, got ${String(c.salinity)}`);
+  if (typeof c.salinity !== "number" || !Number.isFinite(c.salinity))
+    throw new TypeError(`${fn}: salinity must be a finite number, got ${String(c.salinity)}`);
   if (c.salinity < 0 || c.salinity > 50) throw new RangeError(`${fn}: salinity must be within 0…50, got ${c.salinity}`);
-  if (typeof c.temperatureC !== "number" || !Number.isFinite(c.temperatureC)) throw new TypeError(`${fn}: temperatureC must be a finite number, got ${String(c.temperatureC)}`);
+  if (typeof c.temperatureC !== "number" || !Number.isFinite(c.temperatureC))
+    throw new TypeError(`${fn}: temperatureC must be a finite number, got ${String(c.temperatureC)}`);
 }

@@ -38,7 +38,13 @@ Screening analysis, not a compliance assessment: defer to local regulations and 
 
 const MAX_MESSAGES = 50;
 
-function readNumber(text: string | undefined, col: ColumnPlan, file: string, row: number, problems: string[]): number | undefined {
+function readNumber(
+  text: string | undefined,
+  col: ColumnPlan,
+  file: string,
+  row: number,
+  problems: string[],
+): number | undefined {
   const t = (text ?? "").trim();
   const where = `${file}: row ${row}, column "${col.header}"`;
   if (t === "") {
@@ -63,7 +69,12 @@ export const salinityCommand: Command = {
       args,
       allowPositionals: true,
       strict: true,
-      options: { cond: { type: "string" }, temp: { type: "string" }, pres: { type: "string" }, pressure: { type: "string" } },
+      options: {
+        cond: { type: "string" },
+        temp: { type: "string" },
+        pres: { type: "string" },
+        pressure: { type: "string" },
+      },
     });
     if (positionals.length !== 1) throw new UsageError(`expected one CSV file, got ${positionals.length}`);
     const file = positionals[0];
@@ -84,7 +95,11 @@ export const salinityCommand: Command = {
     const rows = parsed.data;
     if (rows.length === 0) throw new InputError(`${file}: row 1: the file is empty (no header row)`);
     const headers = rows[0];
-    const plan = planColumns(headers, file, { conductivity: values.cond, temperature: values.temp, pressure: values.pres });
+    const plan = planColumns(headers, file, {
+      conductivity: values.cond,
+      temperature: values.temp,
+      pressure: values.pres,
+    });
     const notes = [plan.cond.note, plan.temp.note, plan.pres?.note].filter((n): n is string => n !== undefined);
     if (!plan.pres) notes.push(`no pressure column; using ${fixedPressure} dbar for every row (--pressure to change)`);
     const outName = headers.some((h) => h.trim().toLowerCase() === "salinity") ? "salinity_pss78" : "salinity";
@@ -99,8 +114,14 @@ export const salinityCommand: Command = {
       const p = plan.pres ? readNumber(row[plan.pres.index], plan.pres, file, rowNumber, problems) : fixedPressure;
       let s = "";
       if (c !== undefined && t !== undefined && p !== undefined) {
-        if (c < 0) problems.push(`${file}: row ${rowNumber}, column "${plan.cond.header}": value "${row[plan.cond.index]}" is a negative conductivity`);
-        else if (p < 0) problems.push(`${file}: row ${rowNumber}, column "${plan.pres?.header ?? "--pressure"}": value "${plan.pres ? row[plan.pres.index] : fixedPressure}" is a negative pressure`);
+        if (c < 0)
+          problems.push(
+            `${file}: row ${rowNumber}, column "${plan.cond.header}": value "${row[plan.cond.index]}" is a negative conductivity`,
+          );
+        else if (p < 0)
+          problems.push(
+            `${file}: row ${rowNumber}, column "${plan.pres?.header ?? "--pressure"}": value "${plan.pres ? row[plan.pres.index] : fixedPressure}" is a negative pressure`,
+          );
         else {
           const sp = practicalSalinityFromConductivity(c, t, p);
           const note = pss78ValidityNote(sp, t, p);
@@ -115,7 +136,8 @@ export const salinityCommand: Command = {
     for (const m of problems.slice(0, MAX_MESSAGES)) io.err(m);
     if (problems.length > MAX_MESSAGES) io.err(`… and ${problems.length - MAX_MESSAGES} more messages`);
     if (rows.length === 1) throw new InputError(`${file}: row 2: no data rows after the header`);
-    if (converted === 0) throw new InputError(`${file}: no row could be converted (${rows.length - 1} data rows; see the messages above)`);
+    if (converted === 0)
+      throw new InputError(`${file}: no row could be converted (${rows.length - 1} data rows; see the messages above)`);
     io.out(Papa.unparse(out, { newline: "\n" }));
     return 0;
   },

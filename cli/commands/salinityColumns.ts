@@ -22,12 +22,48 @@ export function splitHeader(header: string): { name: string; unit?: string } {
 
 type Role = "conductivity" | "temperature" | "pressure";
 
-const CONDUCTIVITY_UNITS: Record<string, number> = { "ms/cm": 1, mscm: 1, "ms cm-1": 1, "mmho/cm": 1, "s/m": 10, sm: 10, "s m-1": 10, "µs/cm": 1e-3, "us/cm": 1e-3, uscm: 1e-3, "µs cm-1": 1e-3, "us cm-1": 1e-3, "µmho/cm": 1e-3, "umho/cm": 1e-3, "ms/m": 0.01 };
-const TEMPERATURE_UNITS: Record<string, "C" | "K"> = { "°c": "C", degc: "C", "deg c": "C", c: "C", "º c": "C", "ºc": "C", "degrees celsius": "C", celsius: "C", k: "K", kelvin: "K", its90: "C", "its-90": "C" };
+const CONDUCTIVITY_UNITS: Record<string, number> = {
+  "ms/cm": 1,
+  mscm: 1,
+  "ms cm-1": 1,
+  "mmho/cm": 1,
+  "s/m": 10,
+  sm: 10,
+  "s m-1": 10,
+  "µs/cm": 1e-3,
+  "us/cm": 1e-3,
+  uscm: 1e-3,
+  "µs cm-1": 1e-3,
+  "us cm-1": 1e-3,
+  "µmho/cm": 1e-3,
+  "umho/cm": 1e-3,
+  "ms/m": 0.01,
+};
+const TEMPERATURE_UNITS: Record<string, "C" | "K"> = {
+  "°c": "C",
+  degc: "C",
+  "deg c": "C",
+  c: "C",
+  "º c": "C",
+  ºc: "C",
+  "degrees celsius": "C",
+  celsius: "C",
+  k: "K",
+  kelvin: "K",
+  its90: "C",
+  "its-90": "C",
+};
 const PRESSURE_UNITS: Record<string, number> = { dbar: 1, db: 1, decibar: 1, bar: 10, kpa: 0.1, mpa: 100 };
 
 function normUnit(u: string): string {
-  return u.normalize("NFKC").replace(/\u03bc/g, "µ").replace(/[⁻−]/g, "-").replace(/¹/g, "1").replace(/\s+/g, " ").trim().toLowerCase();
+  return u
+    .normalize("NFKC")
+    .replace(/\u03bc/g, "µ")
+    .replace(/[⁻−]/g, "-")
+    .replace(/¹/g, "1")
+    .replace(/\s+/g, " ")
+    .trim()
+    .toLowerCase();
 }
 
 function unitKind(u: string): Role | undefined {
@@ -39,19 +75,29 @@ function unitKind(u: string): Role | undefined {
 }
 
 const NAME: Record<Role, RegExp> = {
-  conductivity: /^(c|c0|c1|cond|cndc|ec|conductivity|in[ -]?situ conductivity|electrical conductivity|sea water conductivity)$/,
-  temperature: /^(t|t0|t1|t90|t68|temp|temperature|water temp|water temperature|in[ -]?situ temperature|sea water temperature|tv290c)$/,
+  conductivity:
+    /^(c|c0|c1|cond|cndc|ec|conductivity|in[ -]?situ conductivity|electrical conductivity|sea water conductivity)$/,
+  temperature:
+    /^(t|t0|t1|t90|t68|temp|temperature|water temp|water temperature|in[ -]?situ temperature|sea water temperature|tv290c)$/,
   pressure: /^(p|pres|press|pressure|prdm|prm|sea pressure|sea water pressure)$/,
 };
 const SPECIFIC_CONDUCTANCE = /spec|spcond|sp[ ._-]?cond|c25|@ ?25|25 ?°?c|sc25|^sc$/;
 
 /** Finds the conductivity, temperature and pressure columns of a header row (or the ones named by the user). */
-export function planColumns(headers: string[], file: string, chosen: Partial<Record<Role, string>>): { cond: ColumnPlan; temp: ColumnPlan; pres?: ColumnPlan } {
+export function planColumns(
+  headers: string[],
+  file: string,
+  chosen: Partial<Record<Role, string>>,
+): { cond: ColumnPlan; temp: ColumnPlan; pres?: ColumnPlan } {
   const find = (role: Role): ColumnPlan | undefined => {
     let hits: number[];
     if (chosen[role] !== undefined) {
-      hits = headers.map((h, i) => [h.replace(/^\uFEFF/, "").trim(), i] as const).filter(([h]) => h === chosen[role]).map(([, i]) => i);
-      if (hits.length === 0) throw new InputError(`${file}: row 1: no column "${chosen[role]}" (headers: ${headers.join(", ")})`);
+      hits = headers
+        .map((h, i) => [h.replace(/^\uFEFF/, "").trim(), i] as const)
+        .filter(([h]) => h === chosen[role])
+        .map(([, i]) => i);
+      if (hits.length === 0)
+        throw new InputError(`${file}: row 1: no column "${chosen[role]}" (headers: ${headers.join(", ")})`);
     } else {
       hits = headers
         .map((h, i) => [splitHeader(h).name.toLowerCase().replace(/[_.]+/g, " ").trim(), i] as const)
@@ -60,7 +106,9 @@ export function planColumns(headers: string[], file: string, chosen: Partial<Rec
     }
     if (hits.length > 1) {
       const names = hits.map((i) => `"${headers[i]}"`).join(", ");
-      throw new InputError(`${file}: row 1: several columns look like ${role}: ${names}; choose one with --${role.slice(0, 4)} "<header>"`);
+      throw new InputError(
+        `${file}: row 1: several columns look like ${role}: ${names}; choose one with --${role.slice(0, 4)} "<header>"`,
+      );
     }
     if (hits.length === 0) return undefined;
     return plan(role, hits[0], headers[hits[0]], file);
@@ -68,11 +116,18 @@ export function planColumns(headers: string[], file: string, chosen: Partial<Rec
   const cond = find("conductivity");
   if (!cond) {
     const sc = headers.find((h) => SPECIFIC_CONDUCTANCE.test(h.toLowerCase()));
-    const hint = sc ? ` ("${sc}" looks like specific conductance at 25 °C, which PSS-78 cannot use: it needs in situ conductivity)` : "";
-    throw new InputError(`${file}: row 1: no conductivity column found${hint}; headers: ${headers.join(", ")}; name it with --cond "<header>"`);
+    const hint = sc
+      ? ` ("${sc}" looks like specific conductance at 25 °C, which PSS-78 cannot use: it needs in situ conductivity)`
+      : "";
+    throw new InputError(
+      `${file}: row 1: no conductivity column found${hint}; headers: ${headers.join(", ")}; name it with --cond "<header>"`,
+    );
   }
   const temp = find("temperature");
-  if (!temp) throw new InputError(`${file}: row 1: no temperature column found; headers: ${headers.join(", ")}; name it with --temp "<header>"`);
+  if (!temp)
+    throw new InputError(
+      `${file}: row 1: no temperature column found; headers: ${headers.join(", ")}; name it with --temp "<header>"`,
+    );
   return { cond, temp, pres: find("pressure") };
 }
 
@@ -80,7 +135,9 @@ function plan(role: Role, index: number, header: string, file: string): ColumnPl
   const { unit } = splitHeader(header);
   const where = `${file}: row 1, column "${header}"`;
   if (role === "conductivity" && SPECIFIC_CONDUCTANCE.test(header.toLowerCase())) {
-    throw new InputError(`${where}: specific conductance (referenced to 25 °C) cannot give PSS-78 salinity; in situ conductivity is needed`);
+    throw new InputError(
+      `${where}: specific conductance (referenced to 25 °C) cannot give PSS-78 salinity; in situ conductivity is needed`,
+    );
   }
   if (unit === undefined || unit.trim() === "") {
     const assumed = { conductivity: "mS/cm", temperature: "°C (ITS-90)", pressure: "dbar" }[role];
@@ -89,17 +146,31 @@ function plan(role: Role, index: number, header: string, file: string): ColumnPl
   const n = normUnit(unit);
   if (role === "conductivity" && n in CONDUCTIVITY_UNITS) {
     const f = CONDUCTIVITY_UNITS[n];
-    return { index, header, toWorking: (x) => x * f, note: f === 1 ? undefined : `column "${header}" converted from ${unit} to mS/cm (×${f})` };
+    return {
+      index,
+      header,
+      toWorking: (x) => x * f,
+      note: f === 1 ? undefined : `column "${header}" converted from ${unit} to mS/cm (×${f})`,
+    };
   }
   if (role === "pressure" && n in PRESSURE_UNITS) {
     const f = PRESSURE_UNITS[n];
-    return { index, header, toWorking: (x) => x * f, note: f === 1 ? undefined : `column "${header}" converted from ${unit} to dbar (×${f})` };
+    return {
+      index,
+      header,
+      toWorking: (x) => x * f,
+      note: f === 1 ? undefined : `column "${header}" converted from ${unit} to dbar (×${f})`,
+    };
   }
   if (role === "temperature" && (n in TEMPERATURE_UNITS || /68/.test(n))) {
     const ipts68 = /68/.test(header);
     const kelvin = TEMPERATURE_UNITS[n] === "K";
     const toC = (x: number) => (kelvin ? x - 273.15 : x);
-    const note = ipts68 ? `column "${header}" read as IPTS-68 and converted to ITS-90 (t90 = t68/1.00024)` : kelvin ? `column "${header}" converted from K to °C` : undefined;
+    const note = ipts68
+      ? `column "${header}" read as IPTS-68 and converted to ITS-90 (t90 = t68/1.00024)`
+      : kelvin
+        ? `column "${header}" converted from K to °C`
+        : undefined;
     return { index, header, toWorking: (x) => (ipts68 ? toC(x) / 1.00024 : toC(x)), note };
   }
   throw new InputError(`${where}: unit "${unit}" not understood for ${role}`);

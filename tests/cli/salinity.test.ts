@@ -59,7 +59,10 @@ describe("brackline salinity", () => {
   });
 
   it("reports bad cells with file, row, column and value on stderr, leaves that salinity empty and exits 0 when other rows converted", async () => {
-    const file = fixture("bad.csv", "station,Conductivity (mS/cm),Temperature (°C),Pressure (dbar)\nA,30,15,0\nB,abc,15,0\nC,30,,0\nD,-1,15,0\n");
+    const file = fixture(
+      "bad.csv",
+      "station,Conductivity (mS/cm),Temperature (°C),Pressure (dbar)\nA,30,15,0\nB,abc,15,0\nC,30,,0\nD,-1,15,0\n",
+    );
     const r = await run(["salinity", file]);
     expect(r.code).toBe(0);
     const t = table(r.out);

@@ -50,7 +50,13 @@ describe("carbonateConstantsAt() check values at S = 35, 25 °C (from memory, as
 describe("carbonatePhFromTaDic()", () => {
   for (const c of ref.singlePoint) {
     it(`gives pH_T = ${c.expected} for TA 2300, DIC 2000 µmol/kg with ${c.inputs.set} (${c.source})`, () => {
-      const r = carbonatePhFromTaDic(c.inputs.S, c.inputs.temperatureC, c.inputs.TA, c.inputs.DIC, c.inputs.set as "lueker2000" | "millero2010");
+      const r = carbonatePhFromTaDic(
+        c.inputs.S,
+        c.inputs.temperatureC,
+        c.inputs.TA,
+        c.inputs.DIC,
+        c.inputs.set as "lueker2000" | "millero2010",
+      );
       expectWithin(r?.pHTotal, c.expected, c.tol, c.source);
     });
   }
@@ -73,8 +79,19 @@ describe("carbonatePhFromTaDic()", () => {
 describe("carbonatePhAlongMixingLine()", () => {
   const m = ref.mixingLine;
   const grid = m.expected.map((r) => r.S);
-  const mill = carbonatePhAlongMixingLine({ river: m.inputs.river, sea: m.inputs.sea, salinityGrid: grid, temperatureC: 25 });
-  const luek = carbonatePhAlongMixingLine({ river: m.inputs.river, sea: m.inputs.sea, salinityGrid: grid.filter((s) => s >= 20), temperatureC: 25, k1k2Set: "lueker2000" });
+  const mill = carbonatePhAlongMixingLine({
+    river: m.inputs.river,
+    sea: m.inputs.sea,
+    salinityGrid: grid,
+    temperatureC: 25,
+  });
+  const luek = carbonatePhAlongMixingLine({
+    river: m.inputs.river,
+    sea: m.inputs.sea,
+    salinityGrid: grid.filter((s) => s >= 20),
+    temperatureC: 25,
+    k1k2Set: "lueker2000",
+  });
   const series = (key: string) => mill.series.find((s) => s.key === key)?.values ?? [];
   m.expected.forEach((row, i) => {
     it(`at S = ${row.S}: TA ${row.TA}, DIC ${row.DIC}, pK1 ${row.pK1}, pK2 ${row.pK2}, pH_T ${row.pH_millero2010} (Millero 2010) (${m.source})`, () => {
@@ -92,7 +109,12 @@ describe("carbonatePhAlongMixingLine()", () => {
     }
   });
   it("shows the pH minimum at low salinity (S < 2, pH_T < 7.5735) on a fine grid (chemistry-constants.md §8.2)", () => {
-    const fine = carbonatePhAlongMixingLine({ river: m.inputs.river, sea: m.inputs.sea, salinityGrid: linearGrid(0, 35, 71), temperatureC: 25 });
+    const fine = carbonatePhAlongMixingLine({
+      river: m.inputs.river,
+      sea: m.inputs.sea,
+      salinityGrid: linearGrid(0, 35, 71),
+      temperatureC: 25,
+    });
     expect(fine.minimum).toBeDefined();
     expect(fine.minimum?.salinity ?? 99).toBeLessThan(2);
     expect(fine.minimum?.salinity ?? 0).toBeGreaterThan(0);
@@ -104,11 +126,22 @@ describe("carbonatePhAlongMixingLine()", () => {
       sea: { ...m.inputs.sea, temperatureC: 20 },
       salinityGrid: [10],
     });
-    expectWithin(r.series[0].values[0], carbonatePhFromTaDic(10, 20, 1371.4285714285713, 1335.7142857142858)?.pHTotal ?? 0, 1e-9, "pH at 20 °C");
+    expectWithin(
+      r.series[0].values[0],
+      carbonatePhFromTaDic(10, 20, 1371.4285714285713, 1335.7142857142858)?.pHTotal ?? 0,
+      1e-9,
+      "pH at 20 °C",
+    );
   });
   it("throws RangeError without temperature, with reversed end-members, or a grid value outside them", () => {
-    expect(() => carbonatePhAlongMixingLine({ river: m.inputs.river, sea: m.inputs.sea, salinityGrid: [5] })).toThrow(/temperatureC/);
-    expect(() => carbonatePhAlongMixingLine({ river: m.inputs.sea, sea: m.inputs.river, salinityGrid: [5], temperatureC: 25 })).toThrow(/sea.salinity/);
-    expect(() => carbonatePhAlongMixingLine({ river: m.inputs.river, sea: m.inputs.sea, salinityGrid: [40], temperatureC: 25 })).toThrow(/salinityGrid\[0\]/);
+    expect(() => carbonatePhAlongMixingLine({ river: m.inputs.river, sea: m.inputs.sea, salinityGrid: [5] })).toThrow(
+      /temperatureC/,
+    );
+    expect(() =>
+      carbonatePhAlongMixingLine({ river: m.inputs.sea, sea: m.inputs.river, salinityGrid: [5], temperatureC: 25 }),
+    ).toThrow(/sea.salinity/);
+    expect(() =>
+      carbonatePhAlongMixingLine({ river: m.inputs.river, sea: m.inputs.sea, salinityGrid: [40], temperatureC: 25 }),
+    ).toThrow(/salinityGrid\[0\]/);
   });
 });

@@ -6,7 +6,12 @@ import { CD_CHLORIDE_SETS, type CdChlorideSet } from "../../analysis/seawater/cd
 import { cdSpeciationVsSalinity } from "../../analysis/seawater/cdSeries.ts";
 import { daviesActivityCoefficient } from "../../analysis/seawater/davies.ts";
 
-const fixtureSet: CdChlorideSet = { id: "fixture", label: "sheet §4.2 fixture", source: ref.seawater.source, logBeta25: ref.seawater.inputs.logBeta };
+const fixtureSet: CdChlorideSet = {
+  id: "fixture",
+  label: "sheet §4.2 fixture",
+  source: ref.seawater.source,
+  logBeta25: ref.seawater.inputs.logBeta,
+};
 
 describe("cdChlorideSpeciation() in seawater", () => {
   const r = cdChlorideSpeciation(fixtureSet, { salinity: 35, temperatureC: 25 }, { davies: { A: 0.5085 } });
@@ -15,7 +20,9 @@ describe("cdChlorideSpeciation() in seawater", () => {
     expectWithin(r.chlorideMolKgH2O, 0.5657647, 1e-7, "Cl");
   });
   it(`gives log βc = 1.486, 1.860, 1.660, 0.976 (${ref.seawater.source})`, () => {
-    r.logBetaConditional.forEach((x, i) => expectWithin(x, ref.seawater.expected.logBetaConditional[i], ref.seawater.tol.logBetaConditional, `βc${i + 1}`));
+    r.logBetaConditional.forEach((x, i) =>
+      expectWithin(x, ref.seawater.expected.logBetaConditional[i], ref.seawater.tol.logBetaConditional, `βc${i + 1}`),
+    );
   });
   for (const [k, v] of Object.entries(ref.seawater.expected.percent)) {
     it(`gives ${k} = ${v} % (${ref.seawater.source})`, () => {
@@ -30,7 +37,11 @@ describe("cdChlorideSpeciation() in seawater", () => {
     expect(r.warnings.join(" ")).toMatch(/validity/);
   });
   it("with the WATEQ4F set (no CdCl₄²⁻) free Cd²⁺ is 2–3 % of inorganic Cd, as in Turner et al. 1981 / Byrne et al. 1988 (from memory, 2.5–3 %)", () => {
-    const w = cdChlorideSpeciation(CD_CHLORIDE_SETS.wateq4f, { salinity: 35, temperatureC: 25 }, { davies: { A: 0.5085 } });
+    const w = cdChlorideSpeciation(
+      CD_CHLORIDE_SETS.wateq4f,
+      { salinity: 35, temperatureC: 25 },
+      { davies: { A: 0.5085 } },
+    );
     expect(w.freeFraction).toBeGreaterThan(0.015);
     expect(w.freeFraction).toBeLessThan(0.035);
     expect(Object.keys(w.fractions)).toEqual(["Cd+2", "CdCl+", "CdCl2", "CdCl3-"]);
@@ -44,7 +55,10 @@ describe("cdChlorideSpeciation() in a low-chloride river", () => {
     expectWithin(daviesActivityCoefficient(2, 0.00195, { A: 0.5085 }), ref.gammas.expected[1], ref.gammas.tol, "γ2");
   });
   it(`gives Cd²⁺ 98.45 %, CdCl⁺ 1.55 % for chloride only (${ref.riverChlorideOnly.source})`, () => {
-    const r = cdChlorideSpeciation(fixtureSet, base, { davies: { A: 0.5085 }, chlorideMolKgH2O: ref.riverChlorideOnly.inputs.chlorideMolKgH2O });
+    const r = cdChlorideSpeciation(fixtureSet, base, {
+      davies: { A: 0.5085 },
+      chlorideMolKgH2O: ref.riverChlorideOnly.inputs.chlorideMolKgH2O,
+    });
     expectWithin(100 * r.fractions["Cd+2"], 98.45, ref.riverChlorideOnly.tol, "Cd");
     expectWithin(100 * r.fractions["CdCl+"], 1.55, ref.riverChlorideOnly.tol, "CdCl");
   });
@@ -65,7 +79,12 @@ describe("cdChlorideSpeciation() in a low-chloride river", () => {
     expectWithin(100 * r.fractions["Cd+2"], e["Cd+2"], tol, "Cd");
     expectWithin(100 * r.fractions["CdHCO3+"], e["CdHCO3+"], tol, "CdHCO3");
     expectWithin(100 * r.fractions["CdSO4"], e.CdSO4, tol, "CdSO4");
-    expectWithin(100 * (r.fractions["CdCl+"] + r.fractions["CdCl2"] + r.fractions["CdCl3-"] + r.fractions["CdCl4-2"]), e.chloro, tol, "Σ chloro");
+    expectWithin(
+      100 * (r.fractions["CdCl+"] + r.fractions["CdCl2"] + r.fractions["CdCl3-"] + r.fractions["CdCl4-2"]),
+      e.chloro,
+      tol,
+      "Σ chloro",
+    );
     expectWithin(100 * r.fractions["CdCO3"], e.CdCO3, 0.006, "CdCO3");
   });
   it("throws RangeError for negative chloride", () => {
@@ -87,7 +106,12 @@ describe("cdSpeciationVsSalinity()", () => {
   });
   it("sums to 100 % at every salinity and warns once about Davies above I = 0.5", () => {
     for (let i = 0; i < 6; i++) {
-      expectWithin(r.series.filter((s) => s.unit === "%").reduce((a, s) => a + s.values[i], 0), 100, 1e-9, `Σ at ${r.x[i]}`);
+      expectWithin(
+        r.series.filter((s) => s.unit === "%").reduce((a, s) => a + s.values[i], 0),
+        100,
+        1e-9,
+        `Σ at ${r.x[i]}`,
+      );
     }
     expect(r.warnings.filter((w) => /Davies/.test(w)).length).toBe(1);
   });

@@ -22,7 +22,12 @@ describe("conductivityFromPracticalSalinity()", () => {
 
   for (const c of gsw.C_from_SP) {
     it(`matches ${c.source} for SP = ${c.inputs.SP} within 1e-9 mS/cm`, () => {
-      expectWithin(conductivityFromPracticalSalinity(c.inputs.SP, c.inputs.t90, c.inputs.pDbar), c.expected, c.tol, c.source);
+      expectWithin(
+        conductivityFromPracticalSalinity(c.inputs.SP, c.inputs.t90, c.inputs.pDbar),
+        c.expected,
+        c.tol,
+        c.source,
+      );
     });
   }
 

@@ -8,10 +8,20 @@ import { densityEos80 } from "../../analysis/seawater/densityEos80.ts";
 describe("convertConcentration() mass ↔ amount", () => {
   for (const c of ref.cases) {
     it(`converts 1 µg/L ${c.inputs.element} to ${c.expected} nmol/L (${c.source})`, () => {
-      expectWithin(convertConcentration(1, c.inputs.from, c.inputs.to, { element: c.inputs.element }), c.expected, c.tol, c.source);
+      expectWithin(
+        convertConcentration(1, c.inputs.from, c.inputs.to, { element: c.inputs.element }),
+        c.expected,
+        c.tol,
+        c.source,
+      );
     });
     it(`converts 1 nmol/L ${c.inputs.element} back to µg/L = M/1000 (${c.source})`, () => {
-      expectWithinRel(convertConcentration(1, "nmol/L", "µg/L", { element: c.inputs.element }), atomicWeight(c.inputs.element) / 1000, 1e-12, c.source);
+      expectWithinRel(
+        convertConcentration(1, "nmol/L", "µg/L", { element: c.inputs.element }),
+        atomicWeight(c.inputs.element) / 1000,
+        1e-12,
+        c.source,
+      );
     });
   }
 
@@ -48,17 +58,37 @@ describe("convertConcentration() per litre ↔ per kilogram", () => {
   for (const c of ref.perKg) {
     it(`converts 1 µg/L Cd at S = 35, 20 °C to ${c.expected} nmol/kg (${c.source})`, () => {
       const { element, salinity, temperatureC } = c.inputs;
-      expectWithin(convertConcentration(1, c.inputs.from, c.inputs.to, { element, salinity, temperatureC }), c.expected, c.tol, c.source);
+      expectWithin(
+        convertConcentration(1, c.inputs.from, c.inputs.to, { element, salinity, temperatureC }),
+        c.expected,
+        c.tol,
+        c.source,
+      );
     });
   }
 
   it("uses EOS-80 1000/ρ factors within 7e-6 (EOS-80 − TEOS-10 ≤ 0.005 kg/m³) of the TEOS-10 table of chemistry-constants.md §7.3", () => {
     const table: Array<[number, number, number]> = [
-      [0, 20, 1.001796], [5, 20, 0.997994], [10, 20, 0.994239], [20, 20, 0.986812], [30, 20, 0.979472], [35, 20, 0.975833],
-      [0, 25, 1.002961], [5, 25, 0.999191], [10, 25, 0.995466], [20, 25, 0.988094], [30, 25, 0.980805], [35, 25, 0.977189],
+      [0, 20, 1.001796],
+      [5, 20, 0.997994],
+      [10, 20, 0.994239],
+      [20, 20, 0.986812],
+      [30, 20, 0.979472],
+      [35, 20, 0.975833],
+      [0, 25, 1.002961],
+      [5, 25, 0.999191],
+      [10, 25, 0.995466],
+      [20, 25, 0.988094],
+      [30, 25, 0.980805],
+      [35, 25, 0.977189],
     ];
     for (const [s, t, f] of table) {
-      expectWithin(convertConcentration(1, "nmol/L", "nmol/kg", { salinity: s, temperatureC: t }), f, 7e-6, `S=${s}, t=${t}`);
+      expectWithin(
+        convertConcentration(1, "nmol/L", "nmol/kg", { salinity: s, temperatureC: t }),
+        f,
+        7e-6,
+        `S=${s}, t=${t}`,
+      );
     }
   });
 

@@ -1,7 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { expectWithin } from "../helpers/tolerance.ts";
 import ref from "../reference/davies.json";
-import { conditionalLogK, daviesActivityCoefficient, daviesValidityWarning, debyeHuckelA } from "../../analysis/seawater/davies.ts";
+import {
+  conditionalLogK,
+  daviesActivityCoefficient,
+  daviesValidityWarning,
+  debyeHuckelA,
+} from "../../analysis/seawater/davies.ts";
 
 describe("daviesActivityCoefficient() (Davies 1962, 0.3 I)", () => {
   for (const c of ref.gamma) {

@@ -12,7 +12,9 @@ const PYTHON = "/usr/bin/python3";
 const probe = spawnSync(PYTHON, ["-c", "import gsw; print(gsw.__version__)"], { encoding: "utf8" });
 const haveGsw = probe.status === 0;
 if (!haveGsw) {
-  console.log("gswCrossCheck: skipped — Debian python3-gsw not importable by /usr/bin/python3 (apt-get install -y python3-gsw)");
+  console.log(
+    "gswCrossCheck: skipped — Debian python3-gsw not importable by /usr/bin/python3 (apt-get install -y python3-gsw)",
+  );
 }
 
 const SCRIPT = `
@@ -26,40 +28,58 @@ out = {
 json.dump(out, sys.stdout)
 `;
 
-describe.skipIf(!haveGsw)(`cross-check against Debian python3-gsw ${haveGsw ? probe.stdout.trim() : ""} (TEOS-10 GSW, IOC/SCOR/IAPSO 2010)`, () => {
-  const u = randomUniform.source(randomLcg(78));
-  const n = 400;
-  const C = Array.from({ length: n }, u(0.05, 65));
-  const S = Array.from({ length: n }, u(0.02, 42));
-  const t = Array.from({ length: n }, u(-2, 35));
-  const p = Array.from({ length: n }, u(0, 6000));
-  const run = () => {
-    const r = spawnSync(PYTHON, ["-c", SCRIPT], { input: JSON.stringify({ C, S, t, p }), encoding: "utf8" });
-    if (r.status !== 0) throw new Error(`python3-gsw failed: ${r.stderr}`);
-    return JSON.parse(r.stdout) as { sp: (number | null)[]; c: number[]; rho: number[] };
-  };
-  const ref = haveGsw ? run() : { sp: [], c: [], rho: [] };
+describe.skipIf(!haveGsw)(
+  `cross-check against Debian python3-gsw ${haveGsw ? probe.stdout.trim() : ""} (TEOS-10 GSW, IOC/SCOR/IAPSO 2010)`,
+  () => {
+    const u = randomUniform.source(randomLcg(78));
+    const n = 400;
+    const C = Array.from({ length: n }, u(0.05, 65));
+    const S = Array.from({ length: n }, u(0.02, 42));
+    const t = Array.from({ length: n }, u(-2, 35));
+    const p = Array.from({ length: n }, u(0, 6000));
+    const run = () => {
+      const r = spawnSync(PYTHON, ["-c", SCRIPT], { input: JSON.stringify({ C, S, t, p }), encoding: "utf8" });
+      if (r.status !== 0) throw new Error(`python3-gsw failed: ${r.stderr}`);
+      return JSON.parse(r.stdout) as { sp: (number | null)[]; c: number[]; rho: number[] };
+    };
+    const ref = haveGsw ? run() : { sp: [], c: [], rho: [] };
 
-  it("practicalSalinityFromConductivity() equals gsw.SP_from_C within 1e-10 on 400 seeded random (C, t90, p) points, Hill branch included", () => {
-    let compared = 0;
-    for (let i = 0; i < n; i++) {
-      const expected = ref.sp[i];
-      if (expected === null || !Number.isFinite(expected) || expected > 42) continue; // GSW returns NaN below 0
-      compared++;
-      expectWithin(practicalSalinityFromConductivity(C[i], t[i], p[i]), expected, 1e-10, `C=${C[i]}, t=${t[i]}, p=${p[i]}`);
-    }
-    expectWithin(compared, n, n / 2, "at least half of the points compared");
-  });
+    it("practicalSalinityFromConductivity() equals gsw.SP_from_C within 1e-10 on 400 seeded random (C, t90, p) points, Hill branch included", () => {
+      let compared = 0;
+      for (let i = 0; i < n; i++) {
+        const expected = ref.sp[i];
+        if (expected === null || !Number.isFinite(expected) || expected > 42) continue; // GSW returns NaN below 0
+        compared++;
+        expectWithin(
+          practicalSalinityFromConductivity(C[i], t[i], p[i]),
+          expected,
+          1e-10,
+          `C=${C[i]}, t=${t[i]}, p=${p[i]}`,
+        );
+      }
+      expectWithin(compared, n, n / 2, "at least half of the points compared");
+    });
 
-  it("conductivityFromPracticalSalinity() equals gsw.C_from_SP within 1e-9 mS/cm on 400 seeded random (S, t90, p) points", () => {
-    for (let i = 0; i < n; i++) {
-      expectWithin(conductivityFromPracticalSalinity(S[i], t[i], p[i]), ref.c[i], 1e-9, `S=${S[i]}, t=${t[i]}, p=${p[i]}`);
-    }
-  });
+    it("conductivityFromPracticalSalinity() equals gsw.C_from_SP within 1e-9 mS/cm on 400 seeded random (S, t90, p) points", () => {
+      for (let i = 0; i < n; i++) {
+        expectWithin(
+          conductivityFromPracticalSalinity(S[i], t[i], p[i]),
+          ref.c[i],
+          1e-9,
+          `S=${S[i]}, t=${t[i]}, p=${p[i]}`,
+        );
+      }
+    });
 
-  it("densityEos80(S, t90, 0) agrees with TEOS-10 gsw.rho_t_exact(SR, t90, 0) within 0.01 kg/m³ (chemistry-constants.md §7.3)", () => {
-    for (let i = 0; i < n; i++) {
-      expectWithin(densityEos80(S[i], t[i], 0), ref.rho[i], 0.01, `S=${S[i]} (SR=${referenceSalinityFromPractical(S[i])}), t=${t[i]}`);
-    }
-  });
-});
+    it("densityEos80(S, t90, 0) agrees with TEOS-10 gsw.rho_t_exact(SR, t90, 0) within 0.01 kg/m³ (chemistry-constants.md §7.3)", () => {
+      for (let i = 0; i < n; i++) {
+        expectWithin(
+          densityEos80(S[i], t[i], 0),
+          ref.rho[i],
+          0.01,
+          `S=${S[i]} (SR=${referenceSalinityFromPractical(S[i])}), t=${t[i]}`,
+        );
+      }
+    });
+  },
+);

@@ -3,15 +3,29 @@ import { expectWithin } from "../helpers/tolerance.ts";
 import unesco from "../reference/pss78-unesco1983.json";
 import gsw from "../reference/gsw-examples.json";
 import fixtures from "../reference/pss78-fixture-table.json";
-import { practicalSalinityFromConductivity, practicalSalinityFromRt, pss78ValidityNote } from "../../analysis/seawater/practicalSalinity.ts";
+import {
+  practicalSalinityFromConductivity,
+  practicalSalinityFromRt,
+  pss78ValidityNote,
+} from "../../analysis/seawater/practicalSalinity.ts";
 import { PSS78, C3515_MS_CM } from "../../analysis/seawater/pss78Coefficients.ts";
 import { hillRatioAtSp2 } from "../../analysis/seawater/hillExtension.ts";
 import { t68FromT90, t90FromT68 } from "../../analysis/seawater/temperatureScale.ts";
 
 describe("PSS-78 coefficients", () => {
   it("Σa = 35 and Σb = 0 (coefficient-entry self-test, chemistry-constants.md §1.1)", () => {
-    expectWithin(PSS78.a.reduce((s, x) => s + x, 0), 35, 1e-12, "Σa");
-    expectWithin(PSS78.b.reduce((s, x) => s + x, 0), 0, 1e-12, "Σb");
+    expectWithin(
+      PSS78.a.reduce((s, x) => s + x, 0),
+      35,
+      1e-12,
+      "Σa",
+    );
+    expectWithin(
+      PSS78.b.reduce((s, x) => s + x, 0),
+      0,
+      1e-12,
+      "Σb",
+    );
   });
   it("C(35, t68 = 15, 0) = 42.914 mS/cm (Culkin & Smith 1980, GSW-C gsw_c3515)", () => {
     expect(C3515_MS_CM).toBe(42.914);
@@ -27,29 +41,49 @@ describe("practicalSalinityFromConductivity()", () => {
   for (const c of unesco.forward) {
     it(`matches ${c.source}: R = ${c.inputs.R}, t68 = ${c.inputs.t68}, p = ${c.inputs.pDbar} → S = ${c.expected}`, () => {
       const t90 = c.inputs.t68 / 1.00024;
-      expectWithin(practicalSalinityFromConductivity(c.inputs.R * C3515_MS_CM, t90, c.inputs.pDbar), c.expected, c.tol, c.source);
+      expectWithin(
+        practicalSalinityFromConductivity(c.inputs.R * C3515_MS_CM, t90, c.inputs.pDbar),
+        c.expected,
+        c.tol,
+        c.source,
+      );
     });
   }
 
-  it("reproduces the UNESCO 1983 40/40/10000 case exactly with R = 1.8880911555787682 (chemistry-constants.md §1.4)", () => {
-    expectWithin(practicalSalinityFromConductivity(1.8880911555787682 * 42.914, 40 / 1.00024, 10000), 40, 1e-9, "S");
+  it("reproduces the UNESCO 1983 40/40/10000 case exactly with R = 1.888091155578768 (chemistry-constants.md §1.4)", () => {
+    expectWithin(practicalSalinityFromConductivity(1.888091155578768 * 42.914, 40 / 1.00024, 10000), 40, 1e-9, "S");
   });
 
   for (const c of gsw.SP_from_C) {
     it(`matches ${c.source} for C = ${c.inputs.C} within 1e-10`, () => {
-      expectWithin(practicalSalinityFromConductivity(c.inputs.C, c.inputs.t90, c.inputs.pDbar), c.expected, c.tol, c.source);
+      expectWithin(
+        practicalSalinityFromConductivity(c.inputs.C, c.inputs.t90, c.inputs.pDbar),
+        c.expected,
+        c.tol,
+        c.source,
+      );
     });
   }
 
   for (const c of fixtures.cases) {
     it(`matches ${c.source}: C = ${c.inputs.C}, t90 = ${c.inputs.t90}, p = ${c.inputs.pDbar}`, () => {
-      expectWithin(practicalSalinityFromConductivity(c.inputs.C, c.inputs.t90, c.inputs.pDbar), c.expected, c.tol, c.source);
+      expectWithin(
+        practicalSalinityFromConductivity(c.inputs.C, c.inputs.t90, c.inputs.pDbar),
+        c.expected,
+        c.tol,
+        c.source,
+      );
     });
   }
 
   for (const c of fixtures.hill) {
     it(`Hill et al. 1986 extension with GSW ratio matches ${c.source}, C = ${c.inputs.C} mS/cm`, () => {
-      expectWithin(practicalSalinityFromConductivity(c.inputs.C, c.inputs.t90, c.inputs.pDbar), c.expected, c.tol, c.source);
+      expectWithin(
+        practicalSalinityFromConductivity(c.inputs.C, c.inputs.t90, c.inputs.pDbar),
+        c.expected,
+        c.tol,
+        c.source,
+      );
     });
   }
 
@@ -72,7 +106,8 @@ describe("practicalSalinityFromConductivity()", () => {
 
   it("returns 0 for zero conductivity and never a negative salinity for near-pure water (documented clamp; common practice)", () => {
     expectWithin(practicalSalinityFromConductivity(0, 10, 0), 0, 1e-15, "C = 0");
-    for (const c of [1e-6, 1e-4, 1e-3, 2e-3]) expect(practicalSalinityFromConductivity(c, 25, 0)).toBeGreaterThanOrEqual(0);
+    for (const c of [1e-6, 1e-4, 1e-3, 2e-3])
+      expect(practicalSalinityFromConductivity(c, 25, 0)).toBeGreaterThanOrEqual(0);
   });
 
   it("throws RangeError/TypeError naming the argument for negative conductivity, negative pressure or NaN", () => {

@@ -1,7 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { expectWithin } from "../helpers/tolerance.ts";
 import { REFERENCE_COMPOSITION, referenceCompositionSummary } from "../../analysis/seawater/referenceComposition.ts";
-import { SEA_SALT_MOLAR_MASS_G_MOL, SEA_SALT_VALENCE_FACTOR, ionicStrengthDoe, ionicStrengthFromSalinity } from "../../analysis/seawater/ionicStrength.ts";
+import {
+  SEA_SALT_MOLAR_MASS_G_MOL,
+  SEA_SALT_VALENCE_FACTOR,
+  ionicStrengthDoe,
+  ionicStrengthFromSalinity,
+} from "../../analysis/seawater/ionicStrength.ts";
 import {
   chlorinityFromSalinity,
   practicalSalinityFromKnudsen,
@@ -39,8 +44,12 @@ describe("ionicStrengthFromSalinity() (TEOS-10 Manual Table L.1; GSW gsw_ionic_s
     expectWithin(ionicStrengthFromSalinity((34.7118 * 35) / 35.16504), 0.712981183609951, 1e-12, "GSW example");
   });
   const table: Array<[number, number, number]> = [
-    [1, 0.019941, 0.019944], [5, 0.100106, 0.100123], [10, 0.201227, 0.201263],
-    [20, 0.406581, 0.406654], [35, 0.72263, 0.722763], [40, 0.830185, 0.83034],
+    [1, 0.019941, 0.019944],
+    [5, 0.100106, 0.100123],
+    [10, 0.201227, 0.201263],
+    [20, 0.406581, 0.406654],
+    [35, 0.72263, 0.722763],
+    [40, 0.830185, 0.83034],
   ];
   for (const [sp, gsw, doe] of table) {
     it(`gives I(${sp}) = ${gsw} (GSW form) and ${doe} (DOE 1994 form) as in chemistry-constants.md §2.2`, () => {
@@ -49,7 +58,8 @@ describe("ionicStrengthFromSalinity() (TEOS-10 Manual Table L.1; GSW gsw_ionic_s
     });
   }
   it("equals 19.92054·SP/(1000 − 1.004715·SP) (exact algebra, chemistry-constants.md §2.2) within 1e-6", () => {
-    for (const sp of [0.5, 7, 18, 33]) expectWithin(ionicStrengthFromSalinity(sp), (19.92054 * sp) / (1000 - 1.004715 * sp), 1e-6, `SP=${sp}`);
+    for (const sp of [0.5, 7, 18, 33])
+      expectWithin(ionicStrengthFromSalinity(sp), (19.92054 * sp) / (1000 - 1.004715 * sp), 1e-6, `SP=${sp}`);
   });
   it("throws RangeError for salinity outside 0…50", () => {
     expect(() => ionicStrengthFromSalinity(-1)).toThrow(/salinity/);

@@ -8,7 +8,12 @@ import { linearGrid } from "../../analysis/seawater/grid.ts";
 describe("stationSpeciation()", () => {
   it("combines ionic strength from the mixing model, Fe(III) and Cd speciation consistently with the single functions", () => {
     const r = stationSpeciation({ pH: 7.8, salinity: 12, temperatureC: 18 }, { davies: { A: 0.5085 } });
-    const fe = feSpeciation(7.8, FE_CONSTANT_SETS.baesMesmer1976, { salinity: 12, temperatureC: 18 }, { davies: { A: 0.5085 } });
+    const fe = feSpeciation(
+      7.8,
+      FE_CONSTANT_SETS.baesMesmer1976,
+      { salinity: 12, temperatureC: 18 },
+      { davies: { A: 0.5085 } },
+    );
     expectWithin(r.fe.fractions["Fe(OH)3"], fe.fractions["Fe(OH)3"], 1e-14, "Fe(OH)3");
     expectWithin(r.ionicStrength, r.majorIons?.ionicStrength ?? -1, 1e-15, "I");
     expectWithin(r.freeCdFraction, r.cd.fractions["Cd+2"], 1e-15, "free Cd");
@@ -16,8 +21,12 @@ describe("stationSpeciation()", () => {
     expect(r.caution).toMatch(/not a compliance/);
   });
   it("warns about the pH scale with I = 0 constants unless the pH is on the NBS scale", () => {
-    expect(stationSpeciation({ pH: 8, salinity: 30, temperatureC: 15 }, { pHScale: "total" }).warnings.join(" ")).toMatch(/total scale/);
-    expect(stationSpeciation({ pH: 8, salinity: 5, temperatureC: 15 }, { pHScale: "nbs" }).warnings.join(" ")).not.toMatch(/scale/);
+    expect(
+      stationSpeciation({ pH: 8, salinity: 30, temperatureC: 15 }, { pHScale: "total" }).warnings.join(" "),
+    ).toMatch(/total scale/);
+    expect(
+      stationSpeciation({ pH: 8, salinity: 5, temperatureC: 15 }, { pHScale: "nbs" }).warnings.join(" "),
+    ).not.toMatch(/scale/);
   });
   it("handles salinity above the sea end-member with a warning", () => {
     const r = stationSpeciation({ pH: 8.1, salinity: 37, temperatureC: 25 });
