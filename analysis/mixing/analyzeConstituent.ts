@@ -76,7 +76,8 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
   const curve = fitCurve(used);
   if (!evidence || !curve)
     return insufficient(`Fewer than 4 distinct salinities for ${name}: no curve can be fitted.`, { endmembers, dilutionLine: line, deviations: devs });
-  const tangent = seawardTangent(used, curve.scatterFactor, curve.spline)!;
+  const tangent = seawardTangent(used, curve.scatterFactor);
+  if (!tangent) return insufficient(`No seaward tangent could be fitted for ${name}.`, { endmembers, dilutionLine: line, deviations: devs, evidence });
   const result = analyzeShape({ used, options, precision, river, sea, line, curve, tangent, nonConservative: isNonConservative(evidence), quadCoef: evidence.quadraticCoefficient, warnings });
   const all = [...warnings, ...result.warnings];
   return {

@@ -125,7 +125,7 @@ export function analyzeShape(p: ShapeInput): {
   }
   const cStarLocal = new Float64Array(G);
   for (let i = 0; i < G; i++) cStarLocal[i] = f[i]! - (grid[i]! - sr) * d1[i]!;
-  const rp = rateProfile(grid, d2, cStarLocal, sr, o);
+  const rp = rateProfile(grid, d2, cStarLocal, sr, o, cStar);
   warnings.push(...rp.warnings);
   const band = (arr: number[]): number[] => Array.from(grid, (s, i) => {
     const v = interpolate(bGrid, arr, s);

@@ -1,9 +1,9 @@
 import { randomLcg, randomNormal } from "d3-random";
-import { evaluateSpline, evaluateSplineGrid } from "../stats/naturalSpline.ts";
+import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitSmoothingSpline, mergeKnots } from "../stats/smoothingSpline.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import type { TangentLine } from "./result.ts";
-import { lineInInterval } from "./tangent.ts";
+import { endTangent, lineInInterval } from "./tangent.ts";
 import { interiorMaximum, zoneFromCurve } from "./zoneAndMaximum.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
@@ -47,7 +47,7 @@ export interface BootstrapResult {
  * Seeded bootstrap over stations (resampling with replacement, as multinomial counts on
  * the salinity-ordered stations) and over the end-member standard deviations (normal draws).
  * Each replicate refits the smoothing spline at the full-data λ, refits the seaward tangent
- * line on the full-data segment interval, and recomputes C*₀, % change, zone limits and the
+ * line on the full-data segment interval (or the local end quadratic), and recomputes C*₀, % change, zone limits and the
  * maximum. Intervals are percentile intervals; random numbers come from d3-random's
  * randomLcg(seed), so equal seeds give equal results.
  *
@@ -72,12 +72,12 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const curves = new Float64Array(D * G).fill(Number.NaN);
   const counts = new Uint16Array(n);
   const wc = new Float64Array(n);
+  const wEnd = new Float64Array(n);
   const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
   const splineWs = { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: 0 };
   const f = new Float64Array(G);
   const d2 = new Float64Array(G);
   const rhoWork = new Float64Array(G);
-  const sMax = b.x[n - 1]!;
   let usable = 0;
   for (let d = 0; d < D; d++) {
     counts.fill(0);
@@ -92,8 +92,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     let line: [number, number] | undefined;
     if (b.tangent.method === "segment") line = lineInInterval(b.x, b.y, b.wTangent, counts, b.tangent.fromSalinity, b.tangent.toSalinity);
     else {
-      const p = evaluateSpline(spline, sMax);
-      line = [p.value - p.d1 * sMax, p.d1];
+      for (let i = 0; i < n; i++) wEnd[i] = b.x[i]! >= b.tangent.fromSalinity ? b.wTangent[i]! * counts[i]! : 0;
+      line = endTangent(b.x, b.y, wEnd);
     }
     if (!line) continue;
     usable++;

@@ -18,17 +18,21 @@ function gradientFromKm(toKm: (s: number) => number[], s: number, sMin: number, 
 
 /**
  * Reaction-rate profile R(S) on the curve grid (Eq. 4) with the integrated check
- * ∫A·R dx = Q·[C*₀(S₂) − C*₀(S₁)] (Eq. 5). The integral is taken over salinity,
+ * ∫A·R dx = Q·[C*₀(S₂) − C*₀(S₁)] (Eq. 5), comparing two independent routes: the rates
+ * from the curve's curvature against the tangent-method C*₀ at the seaward end minus the
+ * curve's local C*₀ at the landward end. A large difference flags curvature the
+ * curve misses (e.g. the natural spline's zero curvature at its ends). The integral is taken over salinity,
  * A·R·(dx/dS), with A from the option or, when only K is given, from Eq. 2′
  * (A = Q·(S − S_r)/(K·dS/dx)).
  *
  * @param grid salinity grid; d2 C'' and cStarLocal the local C*₀(S) on the grid
  * @param riverSalinity S_r
  * @param opts analysis options (Q, A or K, gradient source, unit)
+ * @param effective tangent-method C*₀ (seaward end of Eq. 5)
  * @returns the profile, or undefined (with a warning) when inputs are missing
  * @see mixing-methods.md §1.3, Eqs. 2′, 4 and 5 (DERIVED+VERIFIED).
  */
-export function rateProfile(grid: Float64Array, d2: Float64Array, cStarLocal: Float64Array, riverSalinity: number, opts: AnalyzeOptions): { profile?: RateProfile; warnings: MixingWarning[] } {
+export function rateProfile(grid: Float64Array, d2: Float64Array, cStarLocal: Float64Array, riverSalinity: number, opts: AnalyzeOptions, effective: number): { profile?: RateProfile; warnings: MixingWarning[] } {
   const q = opts.riverDischargeM3s;
   const { crossSectionM2: aOpt, dispersionM2s: kOpt } = opts;
   if (q === undefined || (aOpt === undefined && kOpt === undefined)) return { warnings: [] };
@@ -70,7 +74,7 @@ export function rateProfile(grid: Float64Array, d2: Float64Array, cStarLocal: Fl
   if (first < 0 || last <= first) return { warnings: [] };
   const toMol = fac ?? 1;
   const integratedMolS = integral * toMol;
-  const expectedMolS = q * (cStarLocal[last]! - cStarLocal[first]!) * toMol;
+  const expectedMolS = q * (effective - cStarLocal[first]!) * toMol;
   return {
     profile: {
       salinity,

@@ -170,7 +170,7 @@ export interface RateProfile {
   formula: string;
   /** ∫A·R dx over the profile [mol/s], from the rates. */
   integratedMolS: number;
-  /** Q·[C*₀(S₂) − C*₀(S₁)] over the same interval [mol/s] (Eq. 5). */
+  /** Q·[C*₀ (tangent method) − C*₀(S₁) (curve at the landward end)] [mol/s] (Eq. 5). */
   expectedMolS: number;
   /** |integrated − expected|/max(|expected|, tiny). */
   relativeDifference: number;

@@ -2,8 +2,6 @@ import type { TangentLine } from "./result.ts";
 import type { PreparedSample } from "./prepareSamples.ts";
 import { polyFit } from "../stats/polyFit.ts";
 import { chiSquareUpperP, fUpperP } from "../stats/distributions.ts";
-import type { NaturalSpline } from "../stats/naturalSpline.ts";
-import { evaluateSpline } from "../stats/naturalSpline.ts";
 import { ALPHA } from "./evidence.ts";
 
 /** Fewest stations of a seaward linear segment (the F-test needs m − 3 ≥ 1). */
@@ -18,16 +16,18 @@ export const MIN_SEGMENT_STATIONS = 4;
  * (1) χ² of the weighted line fit with σ_eff = σ·max(1, √χ²_ν of the smoother) has p ≥ 0.05, and
  * (2) the nested F-test quadratic vs linear on the segment has p ≥ 0.05 (residuals below
  *     1e-6·σ count as exactly linear). The longest passing segment wins.
- * When no segment passes, the tangent of the fitted curve at the seaward-most station is
- * used instead ("curve-tangent": reactions continue to the mouth).
+ * When no segment passes, reactions continue to the mouth and the tangent at the seaward-most
+ * station is taken from a weighted quadratic fitted to the seaward quarter of the stations (at
+ * least 5): "curve-tangent", with [fromSalinity, toSalinity] the window of that local fit. A local
+ * quadratic is used rather than the spline because a natural spline has zero curvature at its
+ * ends, which biases the end slope.
  *
  * @param used prepared samples sorted by salinity
  * @param scatterFactor max(1, √χ²_ν) of the smoother residuals
- * @param spline fitted curve (for the fallback)
- * @returns the tangent line
+ * @returns the tangent line (undefined only when even the local quadratic cannot be fitted)
  * @see Boyle et al. (1974) GCA 38, 1719–1728; mixing-methods.md §1.2 (recipe) and §1.6 item 5.
  */
-export function seawardTangent(used: readonly PreparedSample[], scatterFactor: number, spline: NaturalSpline | undefined): TangentLine | undefined {
+export function seawardTangent(used: readonly PreparedSample[], scatterFactor: number): TangentLine | undefined {
   const n = used.length;
   const x = used.map((s) => s.salinity);
   const y = used.map((s) => s.conc);
@@ -49,10 +49,28 @@ export function seawardTangent(used: readonly PreparedSample[], scatterFactor: n
     if (chiOk && curvOk) best = lineOf(lin.coef[0]!, lin.coef[1]!, xs[0]!, xs[m - 1]!, "segment", m);
   }
   if (best) return best;
-  if (!spline) return undefined;
-  const sMax = x[n - 1]!;
-  const p = evaluateSpline(spline, sMax);
-  return lineOf(p.value - p.d1 * sMax, p.d1, sMax, sMax, "curve-tangent", 0);
+  const m = Math.min(n, Math.max(END_FIT_MIN_STATIONS, Math.ceil(n / 4)));
+  const t = endTangent(x.slice(n - m), y.slice(n - m), w.slice(n - m));
+  return t ? lineOf(t[0], t[1], x[n - m]!, x[n - 1]!, "curve-tangent", m) : undefined;
+}
+
+/** Fewest stations of the local quadratic behind a "curve-tangent". */
+export const END_FIT_MIN_STATIONS = 5;
+
+/**
+ * Tangent at the last abscissa of a weighted quadratic fit: [intercept, slope] of
+ * C = (a + b·S_e + c·S_e²) + (b + 2c·S_e)·(S − S_e).
+ *
+ * @returns [intercept, slope], or undefined when the quadratic cannot be fitted
+ */
+export function endTangent(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<number>): [number, number] | undefined {
+  const q = polyFit(x, y, w, 2);
+  if (!q) return undefined;
+  let se = Number.NEGATIVE_INFINITY;
+  for (let i = 0; i < x.length; i++) if (w[i]! > 0 && x[i]! > se) se = x[i]!;
+  const [a, b, c] = q.coef as [number, number, number];
+  const slope = b + 2 * c * se;
+  return [a + b * se + c * se * se - slope * se, slope];
 }
 
 function lineOf(intercept: number, slope: number, from: number, to: number, method: TangentLine["method"], nStations: number): TangentLine {

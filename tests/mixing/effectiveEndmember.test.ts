@@ -1,0 +1,78 @@
+import { describe, it } from "vitest";
+import { expectWithin, expectWithinRel } from "../helpers/tolerance.ts";
+import { effectiveEndmemberAt, percentChange } from "../../analysis/mixing/effectiveEndmember.ts";
+import { analyzeConstituent } from "../../analysis/mixing/analyzeConstituent.ts";
+import { CASES, caseBConc, samplesOf } from "./helpers/cases.ts";
+
+const B = CASES.caseB;
+const C = CASES.caseC;
+const dB = (s: number): number => (0.005 - 1) / 35 + (s < 15 ? (-27 / 15) * (1 - s / 15) ** 2 : 0);
+
+describe("effective river end-member by the tangent method (Boyle et al. 1974; mixing-methods.md §1.2 Eq. 3)", () => {
+  it("effectiveEndmemberAt() reproduces the local C*₀(S) table of the Fe flocculation curve (mixing-methods.md §7.2 case B) within 1e-6", () => {
+    B.inputs.salinity.forEach((s, i) => {
+      expectWithin(effectiveEndmemberAt(caseBConc(s), dB(s), s, 0), B.expected.localEffective[i]!, B.tol.table!, `C*₀(${s})`);
+      expectWithin(caseBConc(s), B.inputs.conc[i]!, B.tol.table!, `C(${s}) of the tabulated curve`);
+    });
+  });
+
+  it("effectiveEndmemberAt() two-point form (C_a·S_b − C_b·S_a)/(S_b − S_a) at S = 20 and 30 gives 1.000 (mixing-methods.md §7.2 case B)", () => {
+    const [ca, cb] = [caseBConc(20), caseBConc(30)];
+    const slope = (cb - ca) / 10;
+    expectWithin(effectiveEndmemberAt(ca, slope, 20), 1, 1e-12, "two-point C*₀");
+    expectWithin(effectiveEndmemberAt(ca, slope, 20), (ca * 30 - cb * 20) / (30 - 20), 1e-12, "equals the printed two-point formula");
+  });
+
+  it("analyzeConstituent() finds the seaward segment S ≥ 15 and C*₀ = 1.000000 µmol/kg within 1e-9 (Boyle et al. 1974; mixing-methods.md §7.2 case B)", () => {
+    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), { name: "Fe", unit: "µmol/kg", riverDischargeM3s: B.inputs.dischargeM3s, seed: 3 });
+    expectWithin(r.tangent?.fromSalinity, 15, 0, "segment start");
+    expectWithin(r.tangent?.slope, B.expected.segmentSlope!, 1e-8, "segment slope");
+    expectWithin(r.effectiveEndmember?.value, B.expected.effective!, B.tol.effective!, "C*₀");
+    expectWithin(r.percentChange?.value, B.expected.percentChange!, 1e-7, "% change (negative = removal)");
+    expectWithin(r.class === "removal-then-conservative" ? 1 : 0, 1, 0, `class ${r.class}`);
+  });
+
+  it("analyzeConstituent() fluxes with Q = 100 m³/s: 1000 / 100 / −900 mmol/s and 8.64 kmol/d, 3.154e6 mol/yr (mixing-methods.md §7.2 case B)", () => {
+    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), { name: "Fe", unit: "µmol/kg", riverDischargeM3s: 100, bootstrapDraws: 200, seed: 3 });
+    const f = r.flux!;
+    expectWithin(f.grossRiver.value * 1000, B.expected.grossRiverMmolS!, 1e-9, "gross river [mmol/s]");
+    expectWithin(f.effectiveExport.value * 1000, B.expected.effectiveExportMmolS!, 1e-7, "effective export [mmol/s]");
+    expectWithin(f.netChange.value * 1000, -B.expected.sinkMmolS!, 1e-7, "net change = −sink [mmol/s]");
+    expectWithin((f.effectiveExport.value * 86400) / 1000, B.expected.effectiveExportKmolD!, 1e-9, "effective export [kmol/d]");
+    expectWithinRel(f.effectiveExport.value * 86400 * 365, B.expected.effectiveExportMolYr!, 1e-3, "effective export [mol/yr]");
+    expectWithin(r.warnings.some((w) => w.code === "per-kg-as-per-litre") ? 1 : 0, 1, 0, "per-kg shortcut is warned about (mixing-methods.md §0)");
+  });
+
+  it("analyzeConstituent() with densityKgM3 = 1025 scales per-kg fluxes by 1.025 (mixing-methods.md §0: 1 µmol/kg ≈ 1.025 µmol/L at S ≈ 35)", () => {
+    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), { name: "Fe", unit: "µmol/kg", riverDischargeM3s: 100, densityKgM3: 1025, bootstrapDraws: 0 });
+    expectWithin(r.flux!.grossRiver.value * 1000, 1025, 1e-9, "gross river [mmol/s]");
+  });
+
+  it("percentChange() of case C: C*₀(35) = 88.75 from C(S) = 150 − 5.892857·S + 0.05·S² gives −40.83 % (mixing-methods.md §7.2 case C)", () => {
+    const { a, b, c } = C.inputs as { a: number; b: number; c: number };
+    const s = 35;
+    const eff = effectiveEndmemberAt(a + b * s + c * s * s, b + 2 * c * s, s, 0);
+    expectWithin(eff, C.expected.effectiveAt35!, C.tol.effective!, "C*₀(35)");
+    expectWithin(percentChange(eff, a), C.expected.percentChange!, C.tol.percent!, "% change");
+    expectWithin(a + b * 17.5 + c * 17.5 ** 2, C.expected.concAt17_5!, 1e-3, "C(17.5)");
+  });
+
+  it("analyzeConstituent() on dense exact case C data (no linear seaward segment) uses the curve tangent at the mouth: C*₀ within 1 % of 88.75 (mixing-methods.md §7.2 case C)", () => {
+    const s = Array.from({ length: 71 }, (_, i) => i * 0.5);
+    const { a, b, c } = C.inputs as { a: number; b: number; c: number };
+    const r = analyzeConstituent(samplesOf(s, s.map((v) => a + b * v + c * v * v)), { name: "Si", unit: "µmol/kg", bootstrapDraws: 0 });
+    expectWithin(r.tangent?.method === "curve-tangent" ? 1 : 0, 1, 0, `tangent method ${r.tangent?.method}`);
+    expectWithinRel(r.effectiveEndmember?.value, C.expected.effectiveAt35!, 0.01, "C*₀ at the mouth");
+    expectWithin(r.class === "removal" ? 1 : 0, 1, 0, `class ${r.class}`);
+  });
+
+  it("percentChange() rejects a non-positive river value with a RangeError naming the function", () => {
+    let msg = "";
+    try {
+      percentChange(1, 0);
+    } catch (e) {
+      msg = (e as Error).message;
+    }
+    expectWithin(msg.startsWith("percentChange:") ? 1 : 0, 1, 0, `message "${msg}"`);
+  });
+});
