@@ -27,7 +27,7 @@ export function createWorkspace(name?: string): WorkspaceDocument {
  * Writes a workspace document as JSON text after validating it against the current schema.
  *
  * @param ws the workspace document
- * @returns pretty-printed JSON (2-space indent)
+ * @returns pretty-printed JSON (2-space indent, keys in schema order)
  * @throws TypeError naming the first invalid path when the document does not match the schema
  *   (e.g. a non-finite number, which JSON cannot hold)
  */
@@ -37,7 +37,8 @@ export function exportWorkspace(ws: WorkspaceDocument): string {
     const first = checked.error.issues[0];
     throw new TypeError(`exportWorkspace(): ws.${first?.path.join(".") ?? ""} is invalid: ${first?.message ?? "schema mismatch"}`);
   }
-  return JSON.stringify(ws, null, 2);
+  // The validated copy has the schema's key order, so export(import(export(ws))) is byte-identical.
+  return JSON.stringify(checked.data, null, 2);
 }
 
 function zodIssues(error: z.ZodError, prefix: string): ImportIssue[] {

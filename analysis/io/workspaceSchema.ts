@@ -61,9 +61,15 @@ const lineGeometry = z.union([
   z.object({ type: z.literal("LineString"), coordinates: z.array(position).min(2) }),
   z.object({ type: z.literal("MultiLineString"), coordinates: z.array(z.array(position).min(2)) }),
 ]);
-const lineFeature = z.looseObject({ type: z.literal("Feature"), geometry: lineGeometry, properties: z.record(z.string(), z.json()).nullable() });
-/** Channel centerline: a GeoJSON (RFC 7946) line feature or a collection of them. */
-export const centerlineSchema = z.union([lineFeature, z.looseObject({ type: z.literal("FeatureCollection"), features: z.array(lineFeature) })]);
+const markerGeometry = z.object({ type: z.literal("Point"), coordinates: position });
+const properties = z.record(z.string(), z.json()).nullable();
+const lineFeature = z.looseObject({ type: z.literal("Feature"), geometry: lineGeometry, properties });
+const anyFeature = z.looseObject({ type: z.literal("Feature"), geometry: z.union([lineGeometry, markerGeometry]), properties });
+/**
+ * Channel centerline: a GeoJSON (RFC 7946) line feature, or a collection of line features that may
+ * also hold Point markers (mouth, head).
+ */
+export const centerlineSchema = z.union([lineFeature, z.looseObject({ type: z.literal("FeatureCollection"), features: z.array(anyFeature) })]);
 
 const layerChoice = z.union([
   z.object({ kind: z.enum(["all", "surface", "bottom", "depthAveraged"]) }),
