@@ -2,7 +2,7 @@ import type { PreparedSample } from "./prepareSamples.ts";
 import type { NaturalSpline } from "../stats/naturalSpline.ts";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitSmoothingSpline, mergeKnots } from "../stats/smoothingSpline.ts";
-import { GCV_ALPHA, minimiseGcv, precisionFloorLambda, splinePath } from "../stats/splineGcv.ts";
+import { GCV_ALPHA, minimiseGcv, minimiseUbre, splinePath } from "../stats/splineGcv.ts";
 import { chiSquareUpperP } from "../stats/distributions.ts";
 import { runsTest } from "../stats/runsTest.ts";
 
@@ -24,8 +24,10 @@ export const TIE_FRACTION = 1e-6;
  * generalised cross-validation. Rule (documented choice): λ_GCV minimises GCV with
  * α = 1.4 (against undersmoothing); if its residuals show lack of fit (χ² vs precision
  * p < 0.01 AND runs test p < 0.05) plain GCV (α = 1) is used instead; finally
- * λ = max(λ_GCV, λ_floor), λ_floor being the largest λ whose residuals stay within
- * analytical precision (RSS_w/(n − edf) ≤ 1). Chosen over a fixed polynomial because it
+ * λ = max(λ_GCV, λ_UBRE), λ_UBRE minimising the unbiased risk with the analytical
+ * precision as known σ, so the curve never chases differences smaller than the precision
+ * warrants (noise-free input) while GCV guards against scatter beyond the stated precision.
+ * Chosen over a fixed polynomial because it
  * follows a steep low-salinity removal curve or a mid-salinity maximum, and over
  * interpolation because the GCV penalty keeps it from inventing wiggles; it also gives
  * continuous first and second derivatives for the tangent and the rate (Eq. 4).
@@ -48,7 +50,7 @@ export function fitCurve(used: readonly PreparedSample[]): CurveFitResult | unde
     g = minimiseGcv(path, 1);
     alpha = 1;
   }
-  const floor = precisionFloorLambda(path);
+  const floor = minimiseUbre(path).lambda;
   const lambda = Math.max(g.lambda, floor);
   const edf = path.at(Math.log(lambda), 1).edf;
   const spline = fitSmoothingSpline(knots, lambda);
@@ -62,7 +64,7 @@ export function fitCurve(used: readonly PreparedSample[]): CurveFitResult | unde
     lambda,
     edf,
     scatterFactor: Math.max(1, Math.sqrt(rss / dof)),
-    method: `cubic smoothing spline weighted by 1/σ², λ by generalised cross-validation (α = ${alpha})${lambda > g.lambda ? ", raised to the analytical-precision floor" : ""}`,
+    method: `cubic smoothing spline weighted by 1/σ², λ by generalised cross-validation (α = ${alpha})${lambda > g.lambda ? ", raised to the analytical-precision (UBRE) choice" : ""}`,
   };
 }
 

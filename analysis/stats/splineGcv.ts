@@ -68,12 +68,17 @@ export function splinePath(k: KnotData): SplinePath {
  * @returns the chosen λ with edf, score and RSS
  */
 export function minimiseGcv(path: SplinePath, alpha: number): GcvChoice {
-  const [lo, hi] = path.range;
+  return minimiseScore(path.range, (logL) => path.at(logL, alpha));
+}
+
+/** Grid-then-golden-section minimisation of a score over log λ (score in the gcv field). */
+function minimiseScore(range: [number, number], score: (logL: number) => GcvChoice): GcvChoice {
+  const [lo, hi] = range;
   const N = 45;
-  let best = path.at(lo, alpha);
+  let best = score(lo);
   let bestI = 0;
   for (let i = 1; i < N; i++) {
-    const c = path.at(lo + ((hi - lo) * i) / (N - 1), alpha);
+    const c = score(lo + ((hi - lo) * i) / (N - 1));
     if (c.gcv < best.gcv) {
       best = c;
       bestI = i;
@@ -85,21 +90,21 @@ export function minimiseGcv(path: SplinePath, alpha: number): GcvChoice {
   const phi = (Math.sqrt(5) - 1) / 2;
   let c1 = b - phi * (b - a);
   let c2 = a + phi * (b - a);
-  let f1 = path.at(c1, alpha);
-  let f2 = path.at(c2, alpha);
+  let f1 = score(c1);
+  let f2 = score(c2);
   for (let it = 0; it < 30; it++) {
     if (f1.gcv < f2.gcv) {
       b = c2;
       c2 = c1;
       f2 = f1;
       c1 = b - phi * (b - a);
-      f1 = path.at(c1, alpha);
+      f1 = score(c1);
     } else {
       a = c1;
       c1 = c2;
       f1 = f2;
       c2 = a + phi * (b - a);
-      f2 = path.at(c2, alpha);
+      f2 = score(c2);
     }
   }
   const refined = f1.gcv < f2.gcv ? f1 : f2;
@@ -107,25 +112,18 @@ export function minimiseGcv(path: SplinePath, alpha: number): GcvChoice {
 }
 
 /**
- * Largest λ whose residuals are still within analytical precision, RSS_w/(n − tr H) ≤ 1
- * (weights 1/σ²): smoothing at least this much never chases differences smaller than
- * the precision. Bisection on log λ; returns 0 when even interpolation-level fits exceed it.
+ * Minimises the unbiased risk estimate with known unit variance (weights 1/σ²),
+ * UBRE(λ) = RSS_w/n − 1 + 2·tr H/n (Mallows' C_p form): the λ that fits the data as
+ * closely as, but not closer than, their analytical precision warrants.
  *
  * @param path the spline path (weights must be 1/σ²)
- * @returns λ_floor
+ * @returns the chosen λ (gcv field holds the UBRE score)
+ * @see Craven, P. & Wahba, G. (1979) Numer. Math. 31, 377–403 (§ on known variance); Mallows, C.L. (1973) Technometrics 15, 661–675.
  */
-export function precisionFloorLambda(path: SplinePath): number {
-  const ok = (logL: number): boolean => {
+export function minimiseUbre(path: SplinePath): GcvChoice {
+  const ubre = (logL: number): GcvChoice => {
     const c = path.at(logL, 1);
-    return c.rss / Math.max(path.n - c.edf, 1e-9) <= 1;
+    return { ...c, gcv: c.rss / path.n - 1 + (2 * c.edf) / path.n };
   };
-  let [lo, hi] = path.range;
-  if (ok(hi)) return Math.exp(hi);
-  if (!ok(lo)) return 0;
-  for (let it = 0; it < 40; it++) {
-    const mid = 0.5 * (lo + hi);
-    if (ok(mid)) lo = mid;
-    else hi = mid;
-  }
-  return Math.exp(lo);
+  return minimiseScore(path.range, ubre);
 }

@@ -47,6 +47,7 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
       name: "Si",
       unit: "µmol/L",
       precision: { relative: 0.001, absolute: 0 },
+      river: { conc: a!, salinity: 0 },
       riverDischargeM3s: Q,
       crossSectionM2: A,
       dispersionM2s: K,
