@@ -92,11 +92,12 @@ describe("BehaviourTable", () => {
     expect(container.querySelector("tr.selected")?.getAttribute("data-constituent")).toBe("Si");
   });
 
-  it("BehaviourTable shows the screening caution under the table", () => {
+  it("BehaviourTable shows the analysis' screening caution under the table", () => {
     const { container } = setup();
     const caution = container.querySelector(".caution")?.textContent ?? "";
-    expect(caution).toContain("Screening analysis, not a compliance assessment");
-    expect(caution).toContain("local regulations and licensed practice");
+    expect(caution).toMatch(/^Screening analysis, not a compliance/);
+    expect(caution).toContain("Defer to local regulations");
+    expect(caution).toContain("licensed practice");
   });
 
   it("BehaviourTable markup matches the saved snapshot", () => {

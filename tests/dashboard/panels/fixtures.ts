@@ -131,7 +131,10 @@ export function fixtureAnalysis(): SurveyAnalysisView {
       saltIntrusionSalinity: 2,
       isohalines: [{ salinity: 2, km: [31] }],
       salinityRange: [0.1, 33.5],
+      nStations: 12,
     },
+    warnings: [],
+    caution: "Screening analysis, not a compliance or health assessment (test fixture). Defer to local regulations and licensed practice.",
     stations,
     constituents: [fe, ba, si],
   };

@@ -2,7 +2,7 @@
  * Props contract of the dashboard panels: the survey analysis as the panels
  * read it. Every number here comes from `analysis/`; panels only lay it out.
  */
-import type { StationPlacement, SurveyFacts } from "../../../../analysis/pipeline/surveyAnalysis.ts";
+import type { StationPlacement, SurveyAnalysis, SurveyFacts } from "../../../../analysis/pipeline/surveyAnalysis.ts";
 import type {
   BehaviourClass,
   ConstituentAnalysis,
@@ -31,6 +31,7 @@ export type {
   ReactionZone,
   StationDeviation,
   StationPlacement,
+  SurveyAnalysis,
   SurveyFacts,
 };
 
@@ -52,12 +53,12 @@ export interface ObservationPoint {
  */
 export type ConstituentAnalysisView = ConstituentAnalysis & { observations?: ObservationPoint[] };
 
-/** The survey analysis result the panels take as `analysis`. */
-export interface SurveyAnalysisView {
-  survey: SurveyFacts;
-  stations: StationPlacement[];
-  constituents: ConstituentAnalysisView[];
-}
+/**
+ * The survey analysis result the panels take as `analysis`: a
+ * {@link SurveyAnalysis} (from analyzeSurvey) is one as it stands; the shell
+ * may add observations per constituent to draw QC-rejected values.
+ */
+export type SurveyAnalysisView = Omit<SurveyAnalysis, "constituents"> & { constituents: ConstituentAnalysisView[] };
 
 /** Props every panel takes. */
 export interface PanelProps {
