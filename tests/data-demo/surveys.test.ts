@@ -132,4 +132,20 @@ describe("demo survey CSV files (invented data)", () => {
   it("surveys/README.md states that the data are invented", () => {
     expect(read("surveys/README.md")).toMatch(/INVENTED DEMO DATA/);
   });
+
+  it("temperature is ~9–11 °C (wet) and ~18–22 °C (dry); pH runs from ~7.3 (river) through a low-salinity minimum to ~8.05 (sea) (invented, common practice)", () => {
+    const col = (f: typeof wet, c: string) => f.rows.map((r) => Number(r[c]));
+    for (const t of col(wet, "temperature_C")) expectWithin(t, 10, 1.5, "wet temperature [°C]");
+    for (const t of col(dry, "temperature_C")) expectWithin(t, 20, 2, "dry temperature [°C]");
+    for (const f of [wet, dry]) {
+      const ph = col(f, "pH");
+      const sal = col(f, "salinity");
+      const river = ph[ph.length - 1];
+      expectWithin(river, 7.3, 0.15, "river pH");
+      expectWithin(ph[0], 8.05, 0.05, "sea pH");
+      const iMin = ph.indexOf(Math.min(...ph));
+      expectWithin(sal[iMin], 2.5, 2, "salinity of the pH minimum");
+      expect(ph[iMin] < river - 0.1).toBe(true);
+    }
+  });
 });
