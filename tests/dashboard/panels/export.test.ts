@@ -154,7 +154,7 @@ describe("ExportMenu", () => {
     return { saved, menu, selection };
   }
 
-  async function openMenu(menu: ReturnType<typeof render>) {
+  async function openMenu(menu: { container: HTMLElement }) {
     const details = menu.container.querySelector("details")!;
     details.open = true;
     await fireEvent(details, new Event("toggle"));
