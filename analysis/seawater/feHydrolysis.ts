@@ -26,6 +26,7 @@ export interface FeConditionalConstants {
   logKs0: number;
   /** log10 γ(Fe³⁺) applied to the solubility (0 for seawater sets). */
   logGammaFe: number;
+  /** Ionic strength of the water [mol/kg-H2O] (applied through Davies only for I = 0 sets). */
   ionicStrength: number;
   warnings: string[];
 }
@@ -56,6 +57,7 @@ export function feConditionalConstants(
     );
   }
   const raw = set.logBeta(t);
+  const ionicStrength = resolveIonicStrength(conditions, options.mixing);
   if (set.medium === "seawater") {
     if (conditions.salinity < 30) {
       warnings.push(`${set.label}: constants measured in seawater (S ≈ 36) applied at S = ${conditions.salinity}`);
@@ -63,9 +65,8 @@ export function feConditionalConstants(
     warnings.push(
       `${set.label}: pH must be on the constants' concentration scale (most likely free [H⁺]; not verified)`,
     );
-    return { logBeta: [0, ...raw], logKs0: set.logKs0(t), logGammaFe: 0, ionicStrength: Number.NaN, warnings };
+    return { logBeta: [0, ...raw], logKs0: set.logKs0(t), logGammaFe: 0, ionicStrength, warnings };
   }
-  const ionicStrength = resolveIonicStrength(conditions, options.mixing);
   const davies: DaviesOptions = { temperatureC: t, ...options.davies };
   const w = daviesValidityWarning(ionicStrength);
   if (w) warnings.push(w);
@@ -111,7 +112,13 @@ export function feSpeciation(
   return speciateWith(pH, constants);
 }
 
-/** Speciation for precomputed conditional constants (used by the series functions). */
+/**
+ * Speciation at one pH for precomputed conditional constants (used by the series functions so the
+ * constants are computed once per chart); formulas as {@link feSpeciation}.
+ * @param pH pH on the scale of the constants
+ * @param constants result of {@link feConditionalConstants}
+ * @returns fractions, solubility [log mol/kg] and predominance boundaries
+ */
 export function speciateWith(pH: number, constants: FeConditionalConstants): FeSpeciation {
   const terms = constants.logBeta.map((lb, n) => (lb === undefined ? Number.NEGATIVE_INFINITY : lb + n * pH));
   const top = Math.max(...terms);

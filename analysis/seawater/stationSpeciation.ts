@@ -93,10 +93,13 @@ export function stationSpeciation(
       `pH (${scale} scale) used as −log a_H⁺ with I = 0 constants; scale differences of ≈ 0.1 pH are possible in seawater`,
     );
   }
-  if (!majorIons)
+  if (!majorIons) {
     warnings.push(
-      `Salinity ${water.salinity} above the sea end-member (${sea}); Reference-Composition seawater assumed`,
+      water.salinity > sea
+        ? `Salinity ${water.salinity} above the sea end-member (${sea}); Reference-Composition seawater assumed`
+        : `Salinity ${water.salinity} below the river end-member; the river composition is used`,
     );
+  }
   return {
     input: { ...water },
     majorIons,

@@ -13,8 +13,8 @@ export interface WaterConditions {
 
 /**
  * Ionic strength for a speciation: the given value, else the major-ion mixing model (river to
- * Reference-Composition sea) at the salinity, else (salinity above the sea end-member) the TEOS-10
- * Reference-Composition ionic strength.
+ * Reference-Composition sea) at the salinity (a salinity below the river end-member is taken as the
+ * river's), else (salinity above the sea end-member) the TEOS-10 Reference-Composition ionic strength.
  * @param conditions salinity, temperature [°C] and optional ionic strength [mol/kg-H2O]
  * @param mixing options of the major-ion mixing model
  * @returns ionic strength [mol/kg-H2O]
@@ -36,6 +36,8 @@ export function resolveIonicStrength(conditions: WaterConditions, mixing: MajorI
 
 /**
  * Checks a {@link WaterConditions} object.
+ * @param fn name of the calling function (for the message)
+ * @param c the conditions to check
  * @throws {TypeError} when salinity or temperatureC is not a finite number; {RangeError} when salinity < 0 or > 50
  */
 export function checkConditions(fn: string, c: WaterConditions): void {
