@@ -14,7 +14,7 @@ function finite(fn: string, name: string, value: number): void {
  * t68 = 1.00024·t90; R = C/42.914; Rt = R/(Rp·rt(t68)); S = Σ a_i Rt^(i/2) + f(t68)·Σ b_i Rt^(i/2);
  * below S = 2 the Hill et al. (1986) extension, multiplied by the GSW continuity ratio so that it equals
  * PSS-78 at S = 2. Valid 2 ≤ S ≤ 42 (PSS-78) and 0 ≤ S < 2 (Hill); see {@link pss78ValidityNote}.
- * For near-pure water (C ≲ 0.003 mS/cm at 0–30 °C) the Hill formula dips to −0.0003…0; Brackline returns 0
+ * For near-pure water (C ≲ 0.001–0.002 mS/cm, i.e. 1–2 µS/cm, at 0–30 °C) the Hill formula dips to −0.0003…0; Brackline returns 0
  * there (GSW returns an invalid value), since that is zero salinity within the formula's accuracy.
  *
  * @param conductivityMsCm in situ conductivity [mS/cm] (1 S/m = 10 mS/cm)
