@@ -129,7 +129,7 @@ export function truthDocument(
         "Salinity of the model concentration maximum inside the estuary, null when the profile has none.",
       saltIntrusionKm: "Along-channel distance from the mouth of the model isohaline S = 2 (also S = 1, 10).",
       alongChannelKm:
-        "Distance along the main-stem centerline (haversine, mean Earth radius) from the mouth to the station's foot point.",
+        "Distance along the main-stem centerline (haversine, mean Earth radius) from the mouth to the station's foot point; the offset is perpendicular to the local segment, so near a bend vertex a nearest-point projection can differ by a few tens of metres.",
       offsetM: "Signed perpendicular distance of the station from the centerline (+ = right looking landward).",
     },
     model: {
