@@ -102,7 +102,7 @@ export function analyzeShape(p: ShapeInput): {
   const cls = classify(p.nonConservative, cStar - river.conc, p.quadCoef, tangent, sMin, sMax, im >= 0);
   const toKm = (a: number, b: number): Array<[number, number]> => o.salinityToKm?.(a, b) ?? [];
   let zone: ConstituentAnalysis["reactionZone"];
-  const z = cls === "conservative" ? undefined : zoneFromCurve(grid, d2, sr);
+  const z = cls === "conservative" ? undefined : zoneFromCurve(grid, d2, sr, undefined, tangent.method === "segment" ? tangent.fromSalinity : undefined);
   if (z) {
     zone = { salinity: [z.from, z.to], km: toKm(z.from, z.to), kind: z.kind, salinityLower: estimateOf(z.from, bs.zoneLower, "salinity"), salinityUpper: estimateOf(z.to, bs.zoneUpper, "salinity") };
     const inZone = used.filter((s) => s.salinity >= z.from && s.salinity <= z.to).length;

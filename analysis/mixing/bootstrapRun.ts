@@ -3,7 +3,8 @@ import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitSmoothingSpline, mergeKnots } from "../stats/smoothingSpline.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import type { TangentLine } from "./result.ts";
-import { endTangent, lineInInterval } from "./tangent.ts";
+import { endFitStations, endTangent, MIN_SEGMENT_STATIONS, SEGMENT_ALPHA } from "./tangent.ts";
+import { scanSegments, segmentCriticals } from "./segmentScan.ts";
 import { interiorMaximum, zoneFromCurve } from "./zoneAndMaximum.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
@@ -46,8 +47,9 @@ export interface BootstrapResult {
 /**
  * Seeded bootstrap over stations (resampling with replacement, as multinomial counts on
  * the salinity-ordered stations) and over the end-member standard deviations (normal draws).
- * Each replicate refits the smoothing spline at the full-data λ, refits the seaward tangent
- * line on the full-data segment interval (or the local end quadratic), and recomputes C*₀, % change, zone limits and the
+ * Each replicate refits the smoothing spline at the full-data λ, re-selects the seaward linear
+ * segment (so the intervals include the uncertainty of the break) or falls back to the local
+ * end quadratic, and recomputes C*₀, % change, zone limits and the
  * maximum. Intervals are percentile intervals; random numbers come from d3-random's
  * randomLcg(seed), so equal seeds give equal results.
  *
@@ -73,6 +75,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const counts = new Uint16Array(n);
   const wc = new Float64Array(n);
   const wEnd = new Float64Array(n);
+  const crit = segmentCriticals(n, SEGMENT_ALPHA);
+  const mEnd = endFitStations(n);
   const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
   const splineWs = { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: 0 };
   const f = new Float64Array(G);
@@ -90,9 +94,11 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     const spline = fitSmoothingSpline(knots, b.lambda, splineWs);
     evaluateSplineGrid(spline, b.grid, f, undefined, d2);
     let line: [number, number] | undefined;
-    if (b.tangent.method === "segment") line = lineInInterval(b.x, b.y, b.wTangent, counts, b.tangent.fromSalinity, b.tangent.toSalinity);
+    const scan = scanSegments(b.x, b.y, b.wTangent, counts, MIN_SEGMENT_STATIONS, crit);
+    const segStart = scan.start >= 0 ? b.x[scan.start]! : undefined;
+    if (scan.start >= 0) line = [scan.intercept, scan.slope];
     else {
-      for (let i = 0; i < n; i++) wEnd[i] = b.x[i]! >= b.tangent.fromSalinity ? b.wTangent[i]! * counts[i]! : 0;
+      for (let i = 0; i < n; i++) wEnd[i] = i >= n - mEnd ? b.wTangent[i]! * counts[i]! : 0;
       line = endTangent(b.x, b.y, wEnd);
     }
     if (!line) continue;
@@ -101,7 +107,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     eff[d] = line[0] + line[1] * b.river.salinity;
     c0[d] = cr;
     if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
-    const zone = zoneFromCurve(b.grid, d2, b.river.salinity, rhoWork);
+    const zone = zoneFromCurve(b.grid, d2, b.river.salinity, rhoWork, segStart);
     if (zone) {
       zLo[d] = zone.from;
       zHi[d] = zone.to;

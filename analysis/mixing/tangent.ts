@@ -1,21 +1,27 @@
 import type { TangentLine } from "./result.ts";
 import type { PreparedSample } from "./prepareSamples.ts";
 import { polyFit } from "../stats/polyFit.ts";
-import { chiSquareUpperP, fUpperP } from "../stats/distributions.ts";
-import { ALPHA } from "./evidence.ts";
+import { scanSegments, segmentCriticals } from "./segmentScan.ts";
+
+/**
+ * Significance level of the segment linearity tests. Deliberately lenient towards rejection
+ * (0.2, not 0.05): accepting a slightly curved segment biases C*₀, which the bootstrap cannot see,
+ * while rejecting a straight one only shortens the segment (documented choice).
+ */
+export const SEGMENT_ALPHA = 0.2;
 
 /** Fewest stations of a seaward linear segment (the F-test needs m − 3 ≥ 1). */
 export const MIN_SEGMENT_STATIONS = 4;
 
 /**
  * Finds the seaward linear segment and its tangent line (segmented regression with a
- * straight seaward segment and a free landward part).
+ * straight seaward segment and a free landward part), scanned by {@link scanSegments}.
  *
  * The break is the lowest station salinity S_b such that the stations with S ≥ S_b
  * (at least {@link MIN_SEGMENT_STATIONS}) are consistent with one straight line:
- * (1) χ² of the weighted line fit with σ_eff = σ·max(1, √χ²_ν of the smoother) has p ≥ 0.05, and
- * (2) the nested F-test quadratic vs linear on the segment has p ≥ 0.05 (residuals below
- *     1e-6·σ count as exactly linear). The longest passing segment wins.
+ * (1) χ² of the weighted line fit with σ_eff = σ·max(1, √χ²_ν of the smoother) has p ≥ 0.2, and
+ * (2) the nested F-test quadratic vs linear on the segment has p ≥ 0.2 (residuals below
+ *     1e-10 of the segment variance count as exactly linear). The longest passing segment wins.
  * When no segment passes, reactions continue to the mouth and the tangent at the seaward-most
  * station is taken from a weighted quadratic fitted to the seaward quarter of the stations (at
  * least 5): "curve-tangent", with [fromSalinity, toSalinity] the window of that local fit. A local
@@ -32,26 +38,20 @@ export function seawardTangent(used: readonly PreparedSample[], scatterFactor: n
   const x = used.map((s) => s.salinity);
   const y = used.map((s) => s.conc);
   const w = used.map((s) => 1 / (s.sigma * scatterFactor) ** 2);
-  let best: TangentLine | undefined;
-  for (let j = n - MIN_SEGMENT_STATIONS; j >= 0; j--) {
-    const xs = x.slice(j);
-    const ys = y.slice(j);
-    const ws = w.slice(j);
-    const m = xs.length;
-    const lin = polyFit(xs, ys, ws, 1);
-    const quad = polyFit(xs, ys, ws, 2);
-    if (!lin || !quad) continue;
-    const exact = lin.rss < 1e-12 * m;
-    const chiOk = exact || chiSquareUpperP(lin.rss, m - 2) >= ALPHA;
-    const dq = Math.max(0, lin.rss - quad.rss);
-    const F = quad.rss > 0 ? dq / (quad.rss / (m - 3)) : dq > 0 ? Number.POSITIVE_INFINITY : 0;
-    const curvOk = exact || fUpperP(F, 1, m - 3) >= ALPHA;
-    if (chiOk && curvOk) best = lineOf(lin.coef[0]!, lin.coef[1]!, xs[0]!, xs[m - 1]!, "segment", m);
+  const scan = scanSegments(x, y, w, undefined, MIN_SEGMENT_STATIONS, segmentCriticals(n, SEGMENT_ALPHA));
+  if (scan.start >= 0) {
+    const j = scan.start;
+    const lin = polyFit(x.slice(j), y.slice(j), w.slice(j), 1);
+    if (lin) return lineOf(lin.coef[0]!, lin.coef[1]!, x[j]!, x[n - 1]!, "segment", n - j);
   }
-  if (best) return best;
-  const m = Math.min(n, Math.max(END_FIT_MIN_STATIONS, Math.ceil(n / 4)));
+  const m = endFitStations(n);
   const t = endTangent(x.slice(n - m), y.slice(n - m), w.slice(n - m));
   return t ? lineOf(t[0], t[1], x[n - m]!, x[n - 1]!, "curve-tangent", m) : undefined;
+}
+
+/** Stations of the local end quadratic: the seaward quarter, at least {@link END_FIT_MIN_STATIONS}. */
+export function endFitStations(n: number): number {
+  return Math.min(n, Math.max(END_FIT_MIN_STATIONS, Math.ceil(n / 4)));
 }
 
 /** Fewest stations of the local quadratic behind a "curve-tangent". */
@@ -75,30 +75,4 @@ export function endTangent(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayL
 
 function lineOf(intercept: number, slope: number, from: number, to: number, method: TangentLine["method"], nStations: number): TangentLine {
   return { slope, intercept, fromSalinity: from, toSalinity: to, salinityRange: [from, to], method, nStations };
-}
-
-/**
- * Weighted straight line through the stations of a fixed salinity interval, with
- * bootstrap counts as extra weights (used inside the bootstrap loop).
- *
- * @returns [intercept, slope], or undefined when fewer than 2 distinct salinities carry weight
- */
-export function lineInInterval(x: Float64Array, y: Float64Array, w: Float64Array, counts: Uint16Array, from: number, to: number): [number, number] | undefined {
-  let sw = 0, sx = 0, sy = 0, sxx = 0, sxy = 0;
-  for (let i = 0; i < x.length; i++) {
-    const c = counts[i]!;
-    if (c === 0 || x[i]! < from || x[i]! > to) continue;
-    const wi = w[i]! * c;
-    sw += wi;
-    sx += wi * x[i]!;
-    sy += wi * y[i]!;
-    sxx += wi * x[i]! * x[i]!;
-    sxy += wi * x[i]! * y[i]!;
-  }
-  if (sw === 0) return undefined;
-  const mx = sx / sw;
-  const vxx = sxx / sw - mx * mx;
-  if (!(vxx > 1e-12 * (1 + mx * mx))) return undefined;
-  const slope = (sxy / sw - mx * (sy / sw)) / vxx;
-  return [sy / sw - slope * mx, slope];
 }

@@ -6,11 +6,14 @@ export const ZONE_THRESHOLD = 0.05;
  * Eqs. 3–5: Q·dC*₀/dS = −Q·(S − S_r)·d²C/dS², so ρ(S) = −(S − S_r)·C''(S) (ρ < 0 removal).
  * The dominant sign is that of ∫ρ dS; the zone is the contiguous salinity interval
  * around the peak of that sign where ρ stays ≥ 5 % of the peak (documented choice).
+ * When a straight seaward segment starts at S_b, the search is limited to S ≤ S_b and the
+ * zone ends at S_b (conservative beyond it).
  *
  * @param grid ascending salinities
  * @param d2 d²C/dS² on the grid
  * @param riverSalinity S_r
  * @param work optional scratch array of length ≥ grid.length
+ * @param segmentStart S_b of the seaward linear segment, when there is one
  * @returns [from, to] salinity and kind, or undefined when there is no curvature
  * @see mixing-methods.md §1.3 (Eqs. 4–5, DERIVED+VERIFIED).
  */
@@ -19,8 +22,13 @@ export function zoneFromCurve(
   d2: ArrayLike<number>,
   riverSalinity: number,
   work?: Float64Array,
+  segmentStart?: number,
 ): { from: number; to: number; kind: "removal" | "addition" } | undefined {
-  const G = grid.length;
+  let G = grid.length;
+  if (segmentStart !== undefined) {
+    while (G > 0 && grid[G - 1]! > segmentStart + 1e-9) G--;
+    if (G < 2) return undefined;
+  }
   let total = 0;
   let maxAbs = 0;
   let maxAbsSigned = 0;
@@ -43,7 +51,7 @@ export function zoneFromCurve(
   let hi = peak;
   while (lo > 0 && sign * rho[lo - 1]! >= thr) lo--;
   while (hi < G - 1 && sign * rho[hi + 1]! >= thr) hi++;
-  return { from: grid[lo]!, to: grid[hi]!, kind: sign < 0 ? "removal" : "addition" };
+  return { from: grid[lo]!, to: segmentStart ?? grid[hi]!, kind: sign < 0 ? "removal" : "addition" };
 }
 
 /**
