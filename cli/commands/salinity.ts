@@ -18,7 +18,8 @@ Columns are recognised from their headers, e.g. "Conductivity (mS/cm)", "cond_mS
 "Temperature (°C)", "temp", "Pressure (dbar)", "pres". Units in the header are converted: S/m, µS/cm,
 mS/m and mmho/cm for conductivity; K or IPTS-68 ("t68") for temperature; bar, kPa, MPa for pressure.
 A column without a unit is taken as mS/cm, °C (ITS-90) or dbar (a note says so). Specific conductance
-(referenced to 25 °C) is refused: PSS-78 needs in situ conductivity.
+(referenced to 25 °C) is refused: PSS-78 needs in situ conductivity. "EC" columns are not picked
+automatically (often referenced to 25 °C); name one with --cond if it holds in situ conductivity.
 
 Options:
   --cond <header>    use this column as conductivity
@@ -101,7 +102,11 @@ export const salinityCommand: Command = {
       pressure: values.pres,
     });
     const notes = [plan.cond.note, plan.temp.note, plan.pres?.note].filter((n): n is string => n !== undefined);
-    if (!plan.pres) notes.push(`no pressure column; using ${fixedPressure} dbar for every row (--pressure to change)`);
+    if (!plan.pres) {
+      const depth = headers.find((h) => /^depth\b/i.test(h.trim()));
+      const hint = depth ? `; depth in m ≈ pressure in dbar, use --pres "${depth}" to take it` : "";
+      notes.push(`no pressure column; using ${fixedPressure} dbar for every row (--pressure to change)${hint}`);
+    }
     const outName = headers.some((h) => h.trim().toLowerCase() === "salinity") ? "salinity_pss78" : "salinity";
     const problems: string[] = [];
     const out: string[][] = [[...headers, outName]];

@@ -57,6 +57,7 @@ const PRESSURE_UNITS: Record<string, number> = { dbar: 1, db: 1, decibar: 1, bar
 
 function normUnit(u: string): string {
   return u
+    .replace(/its-?90|[,;]/gi, " ")
     .normalize("NFKC")
     .replace(/\u03bc/g, "µ")
     .replace(/[⁻−]/g, "-")
@@ -76,7 +77,8 @@ function unitKind(u: string): Role | undefined {
 
 const NAME: Record<Role, RegExp> = {
   conductivity:
-    /^(c|c0|c1|cond|cndc|ec|conductivity|in[ -]?situ conductivity|electrical conductivity|sea water conductivity)$/,
+    // "EC"/"electrical conductivity" is not picked automatically: in water-quality files it is often referenced to 25 °C.
+    /^(c|c0|c1|cond|cndc|conductivity|in[ -]?situ conductivity|sea water conductivity)$/,
   temperature:
     /^(t|t0|t1|t90|t68|temp|temperature|water temp|water temperature|in[ -]?situ temperature|sea water temperature|tv290c)$/,
   pressure: /^(p|pres|press|pressure|prdm|prm|sea pressure|sea water pressure)$/,
@@ -151,6 +153,14 @@ function plan(role: Role, index: number, header: string, file: string): ColumnPl
       header,
       toWorking: (x) => x * f,
       note: f === 1 ? undefined : `column "${header}" converted from ${unit} to mS/cm (×${f})`,
+    };
+  }
+  if (role === "pressure" && n === "m") {
+    return {
+      index,
+      header,
+      toWorking: (x) => x,
+      note: `column "${header}" is a depth in m, taken as dbar (about 1 % apart; common practice)`,
     };
   }
   if (role === "pressure" && n in PRESSURE_UNITS) {

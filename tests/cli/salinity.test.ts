@@ -110,6 +110,19 @@ describe("brackline salinity", () => {
     expectWithin(Number(t[1][3]), 40.0000516292, 1e-8, "S at 1000 dbar");
   });
 
+  it("does not pick an 'EC' column automatically and takes a depth column chosen with --pres as dbar, with notes", async () => {
+    const ec = await run(["salinity", fixture("ec.csv", "EC (mS/cm),temp\n30,15\n")]);
+    expect(ec.code).toBe(2);
+    const file = fixture("depth.csv", 'Depth (m),Conductivity (mS/cm),"Temperature (°C, ITS-90)"\n1000,35.2039,2\n');
+    const hinted = await run(["salinity", file]);
+    expect(hinted.err).toMatch(/--pres "Depth \(m\)"/);
+    const r = await run(["salinity", file, "--pres", "Depth (m)"]);
+    expect(r.code).toBe(0);
+    expect(r.err).toMatch(/depth in m, taken as dbar/);
+    // chemistry-constants.md §1.6 row 12 (python3-gsw): 1000 dbar → 40.0000516292
+    expectWithin(Number(table(r.out)[1][3]), 40.0000516292, 1e-8, "S");
+  });
+
   it("prints help with the exit-code policy, and exits 64 without a file or with an unknown option", async () => {
     const h = await run(["salinity", "--help"]);
     expect(h.code).toBe(0);
