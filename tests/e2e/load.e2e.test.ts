@@ -28,7 +28,7 @@ describe.skipIf(skipBrowser)("dashboard loads the invented demo estuary (headles
   it("shows the product name, the caution line and both demo surveys in the survey switcher", async () => {
     await expect(s.page.locator("h1").textContent()).resolves.toBe("Brackline");
     const caution = await s.page.locator('[data-testid="caution"]').textContent();
-    expect(caution).toContain("not a compliance assessment");
+    expect(caution).toContain("Screening analysis, not a compliance");
     expect(caution).toContain("licensed practice");
     const options = await s.page.locator('[data-testid="survey-select"] option').allTextContents();
     expect(options.length).toBe(2);

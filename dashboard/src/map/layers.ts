@@ -12,7 +12,8 @@ export const INK: RGBA = [33, 41, 48, 255];
 const CHANNEL: RGBA = [52, 84, 102, 230];
 const REMOVAL: RGBA = [230, 97, 1, 120];
 const ADDITION: RGBA = [94, 60, 153, 120];
-const HALO: RGBA = [250, 250, 247, 230];
+const HALO: RGBA = [250, 250, 247, 235];
+const ISOHALINE: RGBA = [20, 110, 140, 255];
 
 export interface LayerState {
   data: MapData;
@@ -21,6 +22,19 @@ export interface LayerState {
   selected: ReadonlySet<string>;
   hovered: string | null;
 }
+
+/** Screen offset [px] of a label set `distancePx` beside the channel (side +1 = right looking upstream). */
+export function besideChannel(bearingDeg: number, side: 1 | -1, distancePx: number): [number, number] {
+  const b = ((bearingDeg + side * 90) * Math.PI) / 180;
+  return [Math.sin(b) * distancePx, -Math.cos(b) * distancePx];
+}
+
+/** Text anchor that keeps a label clear of its point on the side it is offset to. */
+function anchorFor(offset: [number, number]): "start" | "end" | "middle" {
+  return Math.abs(offset[0]) < 4 ? "middle" : offset[0] > 0 ? "start" : "end";
+}
+
+const LABEL_FONT = "system-ui, -apple-system, 'Segoe UI', Roboto, 'Liberation Sans', sans-serif";
 
 function colourValue(data: MapData, s: MapStation): number | undefined {
   return data.colouring === "deviation" ? s.deviation : s.salinity;
@@ -63,17 +77,20 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
       }),
       new TextLayer({
         id: "km-labels",
-        data: data.channel.ticks.filter((t) => t.major),
+        data: data.channel.ticks.filter((t) => t.major && t.km > 0),
         getPosition: (t) => t.lonLat,
-        getText: (t) => `${t.km} km`,
-        getSize: 11,
-        getColor: CHANNEL,
-        getPixelOffset: [0, -12],
+        getText: (t) => t.label,
+        getSize: 12,
+        getColor: INK,
+        getPixelOffset: (t) => besideChannel(t.bearingDeg, 1, 16),
+        getTextAnchor: (t) => anchorFor(besideChannel(t.bearingDeg, 1, 16)),
+        getAlignmentBaseline: "center",
         characterSet: "auto",
-        fontFamily: "system-ui, sans-serif",
-        outlineWidth: 3,
+        fontFamily: LABEL_FONT,
+        fontWeight: 600,
+        outlineWidth: 4,
         outlineColor: HALO,
-        fontSettings: { sdf: true },
+        fontSettings: { sdf: true, fontSize: 48, buffer: 6 },
       }),
     );
   }
@@ -89,23 +106,26 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
         stroked: true,
         filled: true,
         getFillColor: HALO,
-        getLineColor: CHANNEL,
-        getLineWidth: 1.5,
+        getLineColor: ISOHALINE,
+        getLineWidth: 2,
         lineWidthUnits: "pixels",
       }),
       new TextLayer({
         id: "isohaline-labels",
         data: isohalines,
         getPosition: (d) => d.lonLat,
-        getText: (d) => `S ${d.salinity}`,
-        getSize: 11,
-        getColor: CHANNEL,
-        getPixelOffset: [0, 14],
+        getText: (d) => `S = ${d.salinity}`,
+        getSize: 12,
+        getColor: ISOHALINE,
+        getPixelOffset: (d) => besideChannel(d.bearingDeg, -1, 16),
+        getTextAnchor: (d) => anchorFor(besideChannel(d.bearingDeg, -1, 16)),
+        getAlignmentBaseline: "center",
         characterSet: "auto",
-        fontFamily: "system-ui, sans-serif",
-        outlineWidth: 3,
+        fontFamily: LABEL_FONT,
+        fontWeight: 600,
+        outlineWidth: 4,
         outlineColor: HALO,
-        fontSettings: { sdf: true },
+        fontSettings: { sdf: true, fontSize: 48, buffer: 6 },
       }),
     );
   }
@@ -148,11 +168,11 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
       getColor: INK,
       getPixelOffset: [0, -16],
       characterSet: "auto",
-      fontFamily: "system-ui, sans-serif",
-      fontWeight: 600,
-      outlineWidth: 3,
+      fontFamily: LABEL_FONT,
+      fontWeight: 700,
+      outlineWidth: 4,
       outlineColor: HALO,
-      fontSettings: { sdf: true },
+      fontSettings: { sdf: true, fontSize: 48, buffer: 6 },
     }),
   );
   if (zone && zone.maximumPoints.length > 0) {
@@ -178,10 +198,11 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
         getColor: [94, 60, 153, 255],
         getPixelOffset: [0, 24],
         characterSet: "auto",
-        fontFamily: "system-ui, sans-serif",
-        outlineWidth: 3,
+        fontFamily: LABEL_FONT,
+        fontWeight: 600,
+        outlineWidth: 4,
         outlineColor: HALO,
-        fontSettings: { sdf: true },
+        fontSettings: { sdf: true, fontSize: 48, buffer: 6 },
       }),
     );
   }

@@ -13,6 +13,8 @@ import type { WorkerResponse } from "../worker/protocol.ts";
 import type { DemoBundle } from "../lib/demoData.ts";
 import type { MapData, MapStation } from "../map/mapData.ts";
 import { deviationsById, placementsById } from "../lib/analysisView.ts";
+import { withObservations } from "../panels/lib/observations.ts";
+import type { SurveyAnalysisView } from "../panels/lib/types.ts";
 
 /** Parses GeoJSON text for the basemap, reporting (not throwing) problems. */
 function parseGeoJson(text: string | undefined): FeatureCollection | undefined {
@@ -31,6 +33,10 @@ export class AppState {
   readonly survey: Survey | undefined = $derived(this.workspace.surveys[this.selection.surveyIndex]);
   /** The active survey's analysis (undefined while the worker works). */
   readonly analysis = $derived(this.workspace.analyses[this.selection.surveyIndex]);
+  /** The analysis as the panels take it: with every observation, QC-rejected ones included, for drawing. */
+  readonly panelAnalysis: SurveyAnalysisView | undefined = $derived(
+    this.analysis && this.survey ? withObservations(this.analysis, this.survey) : undefined,
+  );
   readonly overlay = $derived(this.workspace.overlays[this.selection.surveyIndex]);
   readonly constituents = $derived(this.survey?.constituents ?? []);
   readonly unit = $derived(this.constituents.find((c) => c.name === this.selection.constituent)?.unit ?? "");

@@ -6,12 +6,14 @@ import type { Survey } from "../../../analysis/index.ts";
 import type { WorkerRequest, WorkerResponse } from "./protocol.ts";
 import type { AnalysisSettings } from "../state/settings.svelte.ts";
 import { analyse, readChannel, readSurveys, type Channel } from "./engine.ts";
+import type { ChannelOverlay } from "./overlay.ts";
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 
 let latestId = 0;
 let surveys: Survey[] = [];
 let channel: Channel = undefined;
+let channelOverlay: ChannelOverlay | undefined;
 
 function post(message: WorkerResponse): void {
   scope.postMessage(message);
@@ -29,17 +31,26 @@ function messageOf(error: unknown): string {
 async function analyseAll(id: number, settings: AnalysisSettings): Promise<void> {
   const total = surveys.length;
   for (let i = 0; i < total; i++) {
-    post({ type: "progress", id, stage: `Analysing ${surveys[i].name}`, done: i, total });
+    post({ type: "progress", id, stage: `Analysing ${surveys[i].name}`, done: i * 100, total: total * 100 });
     await yieldToQueue();
     if (id !== latestId) return;
     try {
-      const { analysis, overlay } = analyse(surveys[i], channel, settings);
+      const name = surveys[i].name;
+      const { analysis, overlay } = analyse(surveys[i], channel, channelOverlay, settings, (fraction, label) =>
+        post({
+          type: "progress",
+          id,
+          stage: `${name}: ${label}`,
+          done: Math.round((i + fraction) * 100),
+          total: total * 100,
+        }),
+      );
       post({ type: "analysis", id, surveyIndex: i, analysis, overlay });
     } catch (error) {
       post({ type: "error", id, message: `Survey "${surveys[i].name}": ${messageOf(error)}` });
     }
   }
-  post({ type: "progress", id, stage: "Analysis complete", done: total, total });
+  post({ type: "progress", id, stage: "Analysis complete", done: 1, total: 1 });
   post({ type: "done", id });
 }
 
@@ -63,6 +74,7 @@ async function handle(request: WorkerRequest): Promise<void> {
     }
     surveys = read.surveys;
     channel = built?.channel;
+    channelOverlay = built?.overlay;
     post({
       type: "loaded",
       id: request.id,

@@ -1,29 +1,32 @@
 /**
  * The worker's bridge to analysis/: reads files, builds the channel and
- * analyses one survey. The only dashboard file that calls analysis functions,
- * so the same code runs here as in Node and the CLI.
+ * analyses one survey with `analyzeSurvey`, then places the results on the
+ * channel (km ticks, zones, maxima, isohalines) with analysis/geometry. The
+ * only dashboard file that calls analysis functions; the same code runs in
+ * Node and the CLI.
  */
-import type { ImportIssue, Survey } from "../../../analysis/index.ts";
-import { readSurveyText } from "../../../analysis/io/readSurvey.ts";
+import type { ImportIssue, Survey, SurveyAnalysis } from "../../../analysis/index.ts";
+import { analyzeSurvey, readSurveyText } from "../../../analysis/index.ts";
+import type { ConstituentSettings } from "../../../analysis/index.ts";
 import { buildChannelNetwork } from "../../../analysis/geometry/buildNetwork.ts";
-import { projectLonLatArrays } from "../../../analysis/geometry/projectBulk.ts";
+import { kmTicks } from "../../../analysis/geometry/kmTicks.ts";
+import { channelStretch } from "../../../analysis/geometry/channelStretch.ts";
+import { pointAtKm } from "../../../analysis/geometry/alongChannel.ts";
 import type { CenterlineGeoJson } from "../../../analysis/geometry/geojsonInput.ts";
 import type { ChannelNetwork } from "../../../analysis/geometry/types.ts";
-import type { StationPlacement } from "../../../analysis/pipeline/surveyAnalysis.ts";
-import type { SurveyAnalysisView } from "../panels/lib/types.ts";
 import type { AnalysisSettings } from "../state/settings.svelte.ts";
 import type { TextFile } from "../lib/demoData.ts";
-import type { ChannelOverlay, SurveyOverlay } from "./overlay.ts";
-import { emptySurveyOverlay } from "./overlay.ts";
+import type { ChannelOverlay, ConstituentOverlay, LonLat, SurveyOverlay } from "./overlay.ts";
 
 /** The survey analysis as the panels and the map read it. */
-export type AnalysisResult = SurveyAnalysisView;
+export type AnalysisResult = SurveyAnalysis;
 
 /** The channel network, built once per load. */
 export type Channel = ChannelNetwork | undefined;
 
-/** Stations farther than this from the centerline are flagged off-channel [m]. */
-const OFF_CHANNEL_M = 2000;
+/** Tick spacing on the map [km]; every `MAJOR_EVERY`-th tick is labelled. */
+const TICK_SPACING_KM = 1;
+const MAJOR_EVERY = 5;
 
 export interface ReadResult {
   surveys: Survey[];
@@ -73,60 +76,96 @@ export function readChannel(file: TextFile | undefined): { channel: Channel; ove
   if (!file) return undefined;
   const { lines, mouth } = splitCenterline(JSON.parse(file.text));
   const network = buildChannelNetwork(lines, { mouth: mouth ?? "start" });
+  const ticks = kmTicks(network, TICK_SPACING_KM).features.map((f) => ({
+    km: f.properties.km,
+    lonLat: f.geometry.coordinates,
+    major: Math.round(f.properties.km / TICK_SPACING_KM) % MAJOR_EVERY === 0,
+    label: f.properties.label,
+    branchId: f.properties.branchId,
+    bearingDeg: f.properties.bearingDeg,
+  }));
   return {
     channel: network,
     overlay: {
       paths: network.branches.map((b) => ({ branchId: b.id, path: b.coordinates })),
-      ticks: [],
+      ticks,
     },
   };
 }
 
-function placements(survey: Survey, network: Channel): StationPlacement[] {
-  const n = survey.stations.length;
-  const lon = new Float64Array(n);
-  const lat = new Float64Array(n);
-  survey.stations.forEach((s, i) => {
-    lon[i] = s.lonLat ? s.lonLat[0] : NaN;
-    lat[i] = s.lonLat ? s.lonLat[1] : NaN;
-  });
-  const proj = network ? projectLonLatArrays(network, lon, lat) : undefined;
-  return survey.stations.map((s, i) => {
-    const placed = proj !== undefined && proj.branchIndex[i] >= 0;
-    return {
-      id: s.id,
-      lonLat: s.lonLat,
-      alongChannelKm: placed ? proj.alongChannelKm[i] : undefined,
-      offsetM: placed ? proj.offsetM[i] : undefined,
-      branchId: placed && network ? network.branches[proj.branchIndex[i]].id : undefined,
-      nearestLonLat: placed ? [proj.nearestLon[i], proj.nearestLat[i]] : undefined,
-      offChannel: !placed || Math.abs(proj.offsetM[i]) > OFF_CHANNEL_M,
-      salinity: s.salinity.accepted ? s.salinity.value : undefined,
-      temperatureC: s.temperatureC?.accepted ? s.temperatureC.value : undefined,
-      pH: s.pH?.accepted ? s.pH.value : undefined,
-      time: s.time,
-      depthM: s.depthM,
+/** Per-constituent settings for analyzeSurvey from the dashboard's settings. */
+function constituentSettings(settings: AnalysisSettings): Record<string, ConstituentSettings> {
+  const out: Record<string, ConstituentSettings> = {};
+  const names = new Set([...Object.keys(settings.endmemberOverrides), ...Object.keys(settings.precisionPercent)]);
+  for (const name of names) {
+    const o = settings.endmemberOverrides[name];
+    const rel = settings.precisionPercent[name];
+    out[name] = {
+      ...(o?.river ? { river: o.river } : {}),
+      ...(o?.sea ? { sea: o.sea } : {}),
+      ...(rel !== undefined ? { precision: { relative: rel / 100, absolute: 0 } } : {}),
     };
-  });
+  }
+  return out;
 }
 
-/** Analyses one survey end to end. */
+/** Points of the channel at each km (main stem), skipping any km outside it. */
+function pointsAtKm(network: ChannelNetwork, kms: number[]): LonLat[] {
+  const out: LonLat[] = [];
+  for (const km of kms) {
+    try {
+      out.push(pointAtKm(network, km));
+    } catch {
+      // A km beyond the main stem has no point to draw; the panels still report it.
+    }
+  }
+  return out;
+}
+
+/** The reaction zones, maxima and isohalines of one analysis, placed on the channel. */
+function surveyOverlay(analysis: SurveyAnalysis, network: Channel, ticks: ChannelOverlay["ticks"]): SurveyOverlay {
+  if (!network) return { isohalines: [], constituents: {} };
+  const mainTicks = ticks.filter((t) => t.branchId === network.mainBranchId);
+  /** Direction of the main stem near a km, from the nearest tick (for placing labels only). */
+  const bearingNear = (km: number): number =>
+    mainTicks.reduce((best, t) => (Math.abs(t.km - km) < Math.abs(best.km - km) ? t : best), mainTicks[0])
+      ?.bearingDeg ?? 0;
+  const isohalines = analysis.survey.isohalines.flatMap((iso) =>
+    iso.km.flatMap((km) =>
+      pointsAtKm(network, [km]).map((lonLat) => ({ salinity: iso.salinity, km, lonLat, bearingDeg: bearingNear(km) })),
+    ),
+  );
+  const constituents: Record<string, ConstituentOverlay> = {};
+  for (const c of analysis.constituents) {
+    const zonePaths: LonLat[][] = [];
+    for (const range of c.reactionZone?.km ?? []) {
+      const g = channelStretch(network, [Math.min(...range), Math.max(...range)], network.mainBranchId);
+      if (g?.type === "LineString") zonePaths.push(g.coordinates as LonLat[]);
+      else if (g?.type === "MultiLineString") zonePaths.push(...(g.coordinates as LonLat[][]));
+    }
+    constituents[c.name] = {
+      zonePaths,
+      zoneKind: c.reactionZone?.kind,
+      maximumPoints: pointsAtKm(network, c.maximum?.km ?? []),
+    };
+  }
+  return { isohalines, constituents };
+}
+
+/** Analyses one survey end to end; `onStep` reports progress as a fraction with a label. */
 export function analyse(
   survey: Survey,
   channel: Channel,
+  channelOverlay: ChannelOverlay | undefined,
   settings: AnalysisSettings,
+  onStep?: (fraction: number, label: string) => void,
 ): { analysis: AnalysisResult; overlay: SurveyOverlay } {
-  const analysis: AnalysisResult = {
-    survey: {
-      name: survey.name,
-      startDate: survey.startDate,
-      endDate: survey.endDate,
-      riverDischargeM3s: settings.riverDischargeM3s ?? survey.riverDischargeM3s,
-      saltIntrusionSalinity: settings.saltIntrusionSalinity,
-      isohalines: [],
-    },
-    stations: placements(survey, channel),
-    constituents: [],
-  };
-  return { analysis, overlay: emptySurveyOverlay() };
+  const analysis = analyzeSurvey(survey, {
+    network: channel,
+    saltIntrusionSalinity: settings.saltIntrusionSalinity,
+    riverDischargeM3s: settings.riverDischargeM3s,
+    settings: constituentSettings(settings),
+    onProgress: onStep,
+  });
+  return { analysis, overlay: surveyOverlay(analysis, channel, channelOverlay?.ticks ?? []) };
 }

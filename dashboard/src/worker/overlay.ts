@@ -8,7 +8,15 @@ export type LonLat = [number, number];
 /** The channel network as drawn: one path per branch, and km ticks from the mouth. */
 export interface ChannelOverlay {
   paths: Array<{ branchId: string; path: LonLat[] }>;
-  ticks: Array<{ km: number; lonLat: LonLat; major: boolean }>;
+  ticks: Array<{
+    km: number;
+    lonLat: LonLat;
+    major: boolean;
+    label: string;
+    branchId: string;
+    /** Channel direction looking upstream, clockwise from north [deg]; used to set labels beside the channel. */
+    bearingDeg: number;
+  }>;
 }
 
 /** Where one constituent's reaction zone and maximum lie on the channel. */
@@ -22,7 +30,7 @@ export interface ConstituentOverlay {
 
 /** One survey's overlay: isohaline crossings and per-constituent zones. */
 export interface SurveyOverlay {
-  isohalines: Array<{ salinity: number; km: number; lonLat: LonLat }>;
+  isohalines: Array<{ salinity: number; km: number; lonLat: LonLat; bearingDeg: number }>;
   constituents: Record<string, ConstituentOverlay>;
 }
 
