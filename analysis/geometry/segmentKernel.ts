@@ -8,7 +8,7 @@
  *
  * @see Torge, W. & Müller, J. (2012) Geodesy, 4th ed., ch. 4 (radii of curvature; from memory).
  */
-import { DEG_TO_RAD, WGS84_E2, meridionalRadiusM, primeVerticalRadiusM } from "./ellipsoid.ts";
+import { DEG_TO_RAD, WGS84_A_M, WGS84_E2 } from "./ellipsoid.ts";
 
 /** The segment end arrays the kernel reads. */
 export interface SegmentEnds {
@@ -58,12 +58,14 @@ export class NearestSegmentTracker {
     const phi = latDeg * DEG_TO_RAD;
     const s = Math.sin(phi);
     const c = Math.cos(phi);
-    const m = meridionalRadiusM(phi);
-    const n = primeVerticalRadiusM(phi);
+    const w2 = 1 - WGS84_E2 * s * s;
+    const w = Math.sqrt(w2);
+    const n = WGS84_A_M / w; // prime-vertical radius N(φ)
+    const m = (WGS84_A_M * (1 - WGS84_E2)) / (w2 * w); // meridional radius M(φ)
     this.cx = n * c;
     this.dcx = -0.5 * m * s;
     this.cy = m;
-    this.dcy = (0.5 * 3 * WGS84_E2 * m * s * c) / (1 - WGS84_E2 * s * s);
+    this.dcy = (0.5 * 3 * WGS84_E2 * m * s * c) / w2;
     this.bestD2 = Number.POSITIVE_INFINITY;
     this.bestSeg = -1;
   }

@@ -1,5 +1,6 @@
 import type { BenchCase } from "../benchCase.ts";
 import { mixingBench } from "./mixing.ts";
+import { projectionBench } from "./projection.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
-export const benchCases: BenchCase[] = [mixingBench];
+export const benchCases: BenchCase[] = [mixingBench, projectionBench];

@@ -23,7 +23,8 @@ const net = buildChannelNetwork(fc, { mouth: "start" });
 
 describe("positions by chainage on a geodesic network (geographiclib reference, Karney 2013)", () => {
   it("pointAtKm() on the main stem lies within 1 m of geographiclib Direct at 0, 7.5 and 30 km", () => {
-    for (const km of [0, 7.5, 30]) expectWithin(inverseM(pointAtKm(net, km), direct(mouth, 70, km * 1000).lonLat), 0, 1, `pointAtKm(${km})`);
+    for (const km of [0, 7.5, 30])
+      expectWithin(inverseM(pointAtKm(net, km), direct(mouth, 70, km * 1000).lonLat), 0, 1, `pointAtKm(${km})`);
   });
 
   it("pointAtKm() on a tributary: above the confluence on the tributary, below it on the main stem", () => {
@@ -63,17 +64,31 @@ describe("channelStretch() and kmTicks() for the map (GeoJSON RFC 7946)", () => 
   it("kmTicks() places a tick every 5 km (main 0–30, T 15) with labels and bearings within 0.1° of the geodesic azimuth", () => {
     const t = kmTicks(net, 5);
     expect(t.features.map((f) => `${f.properties.branchId}:${f.properties.label}`)).toEqual([
-      "main:0 km", "main:5 km", "main:10 km", "main:15 km", "main:20 km", "main:25 km", "main:30 km", "T:15 km",
+      "main:0 km",
+      "main:5 km",
+      "main:10 km",
+      "main:15 km",
+      "main:20 km",
+      "main:25 km",
+      "main:30 km",
+      "T:15 km",
     ]);
     const f5 = t.features[1]!;
     expectWithin(inverseM(f5.geometry.coordinates, direct(mouth, 70, 5000).lonLat), 0, 1, "tick at 5 km");
     const az = direct(mouth, 70, 5000).azi;
     expectWithin(f5.properties.bearingDeg, az, 0.1, "bearing at 5 km");
-    expectWithin(t.features[7]!.properties.bearingDeg, (azimuthDeg(conf, trib[trib.length - 1]!) + 360) % 360, 0.1, "bearing on T");
+    expectWithin(
+      t.features[7]!.properties.bearingDeg,
+      (azimuthDeg(conf, trib[trib.length - 1]!) + 360) % 360,
+      0.1,
+      "bearing on T",
+    );
   });
 
   it("kmTicks() labels fractional spacing without rounding (0.25 km) and rejects spacing ≤ 0", () => {
-    const labels = kmTicks(net, 0.25).features.slice(0, 4).map((f) => f.properties.label);
+    const labels = kmTicks(net, 0.25)
+      .features.slice(0, 4)
+      .map((f) => f.properties.label);
     expect(labels).toEqual(["0 km", "0.25 km", "0.5 km", "0.75 km"]);
     expect(() => kmTicks(net, 0)).toThrow(/spacingKm must be a positive number/);
   });

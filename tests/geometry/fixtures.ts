@@ -5,7 +5,11 @@ import geodesic from "geographiclib-geodesic";
 export const geod = geodesic.Geodesic.WGS84;
 
 /** Point at distance sM along the geodesic from [lon, lat] at azimuth aziDeg, with the azimuth there. */
-export function direct(lonLat: [number, number], aziDeg: number, sM: number): { lonLat: [number, number]; azi: number } {
+export function direct(
+  lonLat: [number, number],
+  aziDeg: number,
+  sM: number,
+): { lonLat: [number, number]; azi: number } {
   const r = geod.Direct(lonLat[1], lonLat[0], aziDeg, sM);
   return { lonLat: [r.lon2!, r.lat2!], azi: r.azi2! };
 }
@@ -21,7 +25,12 @@ export function azimuthDeg(a: [number, number], b: [number, number]): number {
 }
 
 /** Vertices every stepM along a geodesic from start, for lengthM. */
-export function geodesicLine(start: [number, number], aziDeg: number, lengthM: number, stepM: number): [number, number][] {
+export function geodesicLine(
+  start: [number, number],
+  aziDeg: number,
+  lengthM: number,
+  stepM: number,
+): [number, number][] {
   const n = Math.round(lengthM / stepM);
   return Array.from({ length: n + 1 }, (_, i) => direct(start, aziDeg, (lengthM * i) / n).lonLat);
 }

@@ -24,7 +24,10 @@ describe("channel length on the WGS84 ellipsoid", () => {
       const dist = 10 + 1990 * rng();
       const az = 360 * rng();
       const b = (() => {
-        const r = { lon: lon + (dist / 111000) * Math.sin((az * Math.PI) / 180) / Math.cos((lat * Math.PI) / 180), lat: lat + (dist / 111000) * Math.cos((az * Math.PI) / 180) };
+        const r = {
+          lon: lon + ((dist / 111000) * Math.sin((az * Math.PI) / 180)) / Math.cos((lat * Math.PI) / 180),
+          lat: lat + (dist / 111000) * Math.cos((az * Math.PI) / 180),
+        };
         return [r.lon, r.lat] as [number, number];
       })();
       if (Math.abs(b[1]) > 85) continue;
@@ -37,7 +40,12 @@ describe("channel length on the WGS84 ellipsoid", () => {
     const coords = meanderLine(randomLcg(3), [-76.5, 35.0], 5000, 20);
     const net = buildChannelNetwork({ type: "LineString", coordinates: coords }, { mouth: "start" });
     expectWithinRel(net.totalLengthKm * 1000, geodesicLengthM(coords), 1e-6, "meander length");
-    expectWithinRel(net.branches[0]!.vertexKm[2500]! * 1000, geodesicLengthM(coords.slice(0, 2501)), 1e-6, "chainage of vertex 2500");
+    expectWithinRel(
+      net.branches[0]!.vertexKm[2500]! * 1000,
+      geodesicLengthM(coords.slice(0, 2501)),
+      1e-6,
+      "chainage of vertex 2500",
+    );
   });
 
   it("buildChannelNetwork() length of a 300 km line with 30 km segments at 60° N matches geographiclib (Karney 2013) within 0.1 % (long segments are densified)", () => {

@@ -33,7 +33,14 @@ describe("suggestMouth() from projected station salinity (higher salinity = seaw
 
   it("suggestMouth() returns undefined with fewer than 3 stations having position and salinity", () => {
     const net = buildChannelNetwork({ type: "LineString", coordinates: coords }, { mouth: "start" });
-    expect(suggestMouth(net, [stations[0]!, stations[1]!, { lonLat: undefined, salinity: 30 }, { lonLat: stations[2]!.lonLat }])).toBeUndefined();
+    expect(
+      suggestMouth(net, [
+        stations[0]!,
+        stations[1]!,
+        { lonLat: undefined, salinity: 30 },
+        { lonLat: stations[2]!.lonLat },
+      ]),
+    ).toBeUndefined();
   });
 
   it("spearmanRho() uses mid-ranks for ties: x = [1, 2, 2, 3], y = [1, 3, 2, 4] gives 0.9487 (hand-worked, Spearman 1904)", () => {

@@ -18,7 +18,11 @@ const ditch = geodesicLine(ditchStart, 200, 1000, 100);
 const fc: LineFeatureCollection = {
   type: "FeatureCollection",
   features: [
-    { type: "Feature", geometry: { type: "LineString", coordinates: [...creek].reverse() }, properties: { name: "Creek" } },
+    {
+      type: "Feature",
+      geometry: { type: "LineString", coordinates: [...creek].reverse() },
+      properties: { name: "Creek" },
+    },
     { type: "Feature", geometry: { type: "LineString", coordinates: main }, properties: { id: "main", role: "main" } },
     { type: "Feature", geometry: { type: "LineString", coordinates: ditch }, properties: { id: "Ditch" } },
   ],
@@ -61,7 +65,13 @@ describe("buildChannelNetwork() with tributaries (hand-built geodesic network, g
 
   it("buildChannelNetwork() throws a RangeError naming a branch that joins nothing", () => {
     const stray = geodesicLine(direct(mouth, 135, 5000).lonLat, 135, 2000, 500);
-    const bad: LineFeatureCollection = { type: "FeatureCollection", features: [fc.features[1]!, { type: "Feature", geometry: { type: "LineString", coordinates: stray }, properties: { id: "Stray" } }] };
+    const bad: LineFeatureCollection = {
+      type: "FeatureCollection",
+      features: [
+        fc.features[1]!,
+        { type: "Feature", geometry: { type: "LineString", coordinates: stray }, properties: { id: "Stray" } },
+      ],
+    };
     expect(() => buildChannelNetwork(bad, { mouth: "start" })).toThrow(/'Stray'.*does not join/);
   });
 
@@ -69,7 +79,10 @@ describe("buildChannelNetwork() with tributaries (hand-built geodesic network, g
     const dup: LineFeatureCollection = { type: "FeatureCollection", features: [fc.features[1]!, fc.features[1]!] };
     expect(() => buildChannelNetwork(dup)).toThrow(/'main' occurs more than once/);
     expect(() => buildChannelNetwork(fc, { mainBranchId: "Nope" })).toThrow(/mainBranchId 'Nope'/);
-    const twoMains: LineFeatureCollection = { type: "FeatureCollection", features: [fc.features[1]!, { ...fc.features[0]!, properties: { name: "Creek", role: "main" } }] };
+    const twoMains: LineFeatureCollection = {
+      type: "FeatureCollection",
+      features: [fc.features[1]!, { ...fc.features[0]!, properties: { name: "Creek", role: "main" } }],
+    };
     expect(() => buildChannelNetwork(twoMains)).toThrow(/2 lines have properties.role "main"/);
   });
 });
@@ -83,7 +96,10 @@ describe("buildChannelNetwork() mouth options", () => {
   });
 
   it("mouth: [lon, lat] picks the nearer end and warns when the point is far from both ends", () => {
-    const near = buildChannelNetwork({ type: "LineString", coordinates: main }, { mouth: [main[main.length - 1]![0] + 0.001, main[main.length - 1]![1]] });
+    const near = buildChannelNetwork(
+      { type: "LineString", coordinates: main },
+      { mouth: [main[main.length - 1]![0] + 0.001, main[main.length - 1]![1]] },
+    );
     expect(near.branches[0]!.reversed).toBe(true);
     expect(near.warnings).toEqual([]);
     const far = buildChannelNetwork({ type: "LineString", coordinates: main }, { mouth: [mouth[0] - 0.2, mouth[1]] });
@@ -100,7 +116,10 @@ describe("buildChannelNetwork() mouth options", () => {
 
 describe("antimeridian and high-latitude handling", () => {
   const start: [number, number] = [179.8, -17];
-  const line = geodesicLine(start, 80, 50_000, 1000).map(([lon, lat]): [number, number] => [lon > 180 ? lon - 360 : lon, lat]);
+  const line = geodesicLine(start, 80, 50_000, 1000).map(([lon, lat]): [number, number] => [
+    lon > 180 ? lon - 360 : lon,
+    lat,
+  ]);
 
   it("buildChannelNetwork() unwraps a line crossing ±180° and matches the geographiclib length (Karney 2013) within 1e-6 relative", () => {
     expect(line.some(([lon]) => lon < 0)).toBe(true);
@@ -116,14 +135,34 @@ describe("antimeridian and high-latitude handling", () => {
   });
 
   it("buildChannelNetwork() joins a MultiLineString split at the antimeridian (RFC 7946 §3.1.9) into one branch", () => {
-    const split = { type: "MultiLineString" as const, coordinates: [[[179.5, -17], [180, -16.9]], [[-180, -16.9], [-179.5, -16.8]]] };
+    const split = {
+      type: "MultiLineString" as const,
+      coordinates: [
+        [
+          [179.5, -17],
+          [180, -16.9],
+        ],
+        [
+          [-180, -16.9],
+          [-179.5, -16.8],
+        ],
+      ],
+    };
     const net = buildChannelNetwork(split, { mouth: "start" });
     expect(net.branches).toHaveLength(1);
     expect(net.branches[0]!.coordinates.map((c) => c[0])).toEqual([179.5, 180, 180.5]);
   });
 
   it("buildChannelNetwork() rejects latitudes beyond ±85° with a RangeError naming the position", () => {
-    expect(() => buildChannelNetwork({ type: "LineString", coordinates: [[0, 84], [1, 86]] })).toThrow(/position 1 has latitude 86°, beyond ±85°/);
+    expect(() =>
+      buildChannelNetwork({
+        type: "LineString",
+        coordinates: [
+          [0, 84],
+          [1, 86],
+        ],
+      }),
+    ).toThrow(/position 1 has latitude 86°, beyond ±85°/);
   });
 
   it("buildChannelNetwork() rejects malformed input with a TypeError", () => {

@@ -8,7 +8,12 @@ import { NearestSegmentTracker } from "../../analysis/geometry/segmentKernel.ts"
 import { direct, geodesicLine, inverseM, meanderLine } from "./fixtures.ts";
 
 describe("projection onto a straight geodesic channel (geographiclib reference, Karney 2013)", () => {
-  for (const [lat0, az] of [[51, 60], [0.2, 135], [-33, 10], [70, 250]] as const) {
+  for (const [lat0, az] of [
+    [51, 60],
+    [0.2, 135],
+    [-33, 10],
+    [70, 250],
+  ] as const) {
     it(`projectLonLatArrays() at ${lat0}° latitude, azimuth ${az}°: chainage, |offset| and nearest point within 1 m of geographiclib Direct for offsets up to 2 km`, () => {
       const mouth: [number, number] = [10, lat0];
       const coords = geodesicLine(mouth, az, 30_000, 250);
@@ -109,7 +114,10 @@ describe("projectStations() flags and keeps every station", () => {
   const sea = direct([-1, 50], 270, 400).lonLat;
 
   it("projectStations() warns for an off-channel station (3 km > 2 km default) naming it and its offset, and keeps it", () => {
-    const r = projectStations(net, [{ id: "S1", lonLat: on }, { id: "S9", lonLat: far }]);
+    const r = projectStations(net, [
+      { id: "S1", lonLat: on },
+      { id: "S9", lonLat: far },
+    ]);
     expect(r.projections.map((p) => p.offChannel)).toEqual([false, true]);
     const w = r.warnings.find((x) => x.code === "offChannel");
     expect(w?.message).toContain("S9");

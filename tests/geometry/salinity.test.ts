@@ -17,7 +17,10 @@ const { S0, eFoldingKm } = exp.inputs;
 /** Stations every stationSpacingKm on a straight 60 km geodesic channel, 150 m off alternately left and right. */
 function exponentialSurvey(noise?: () => number): SalinityPoint[] {
   const mouth: [number, number] = [4.0, 52.0];
-  const net = buildChannelNetwork({ type: "LineString", coordinates: geodesicLine(mouth, 100, 65_000, 500) }, { mouth: "start" });
+  const net = buildChannelNetwork(
+    { type: "LineString", coordinates: geodesicLine(mouth, 100, 65_000, 500) },
+    { mouth: "start" },
+  );
   const stations = Array.from({ length: exp.inputs.reachKm / exp.inputs.stationSpacingKm + 1 }, (_, i) => {
     const foot = direct(mouth, 100, i * exp.inputs.stationSpacingKm * 1000);
     return { id: `E${i}`, lonLat: direct(foot.lonLat, foot.azi + (i % 2 ? 90 : -90), 150).lonLat };
@@ -88,7 +91,11 @@ describe("non-monotonic salinity (tributary or tide change): every crossing plus
 
   it("salinityIntervalToKm() maps [12.5, 14] to three stretches (hand-worked 2.75–2.9375, 3.1667–3.6667, 4.1429–4.3571 km) with a multipleStretches warning", () => {
     const r = salinityIntervalToKm(fitSalinityProfile(pts)!, [12.5, 14]);
-    const want = [[2.75, 2.9375], [3 + 0.5 / 3, 3 + 2 / 3], [4 + 1 / 7, 4 + 2.5 / 7]];
+    const want = [
+      [2.75, 2.9375],
+      [3 + 0.5 / 3, 3 + 2 / 3],
+      [4 + 1 / 7, 4 + 2.5 / 7],
+    ];
     expect(r.intervalsKm).toHaveLength(3);
     want.forEach(([a, b], i) => {
       expectWithin(r.intervalsKm[i]![0], a!, 1e-9, `stretch ${i} start`);
@@ -98,7 +105,10 @@ describe("non-monotonic salinity (tributary or tide change): every crossing plus
   });
 
   it("saltIntrusionLengthKm() is undefined with a reason when salt reaches beyond the surveyed reach", () => {
-    const p = fitSalinityProfile([{ km: 0, salinity: 30 }, { km: 5, salinity: 10 }])!;
+    const p = fitSalinityProfile([
+      { km: 0, salinity: 30 },
+      { km: 5, salinity: 10 },
+    ])!;
     const r = saltIntrusionLengthKm(p, 2);
     expect(r.km).toBeUndefined();
     expect(r.warnings[0]?.message).toMatch(/beyond the surveyed reach/);
@@ -106,8 +116,17 @@ describe("non-monotonic salinity (tributary or tide change): every crossing plus
   });
 
   it("fitSalinityProfile() returns undefined with fewer than 2 distinct km and warns for invalid points", () => {
-    expect(fitSalinityProfile([{ km: 1, salinity: 3 }, { km: 1, salinity: 4 }])).toBeUndefined();
-    const p = fitSalinityProfile([{ km: 0, salinity: 9 }, { km: 1, salinity: Number.NaN, id: "BAD" }, { km: 2, salinity: 4 }])!;
+    expect(
+      fitSalinityProfile([
+        { km: 1, salinity: 3 },
+        { km: 1, salinity: 4 },
+      ]),
+    ).toBeUndefined();
+    const p = fitSalinityProfile([
+      { km: 0, salinity: 9 },
+      { km: 1, salinity: Number.NaN, id: "BAD" },
+      { km: 2, salinity: 4 },
+    ])!;
     expect(p.warnings[0]?.message).toContain("BAD");
     expect(p.nPoints).toBe(2);
   });
