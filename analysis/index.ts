@@ -122,6 +122,8 @@ export type { CdChlorideSet } from "./seawater/cdChlorideSets.ts";
 export { cdChlorideSpeciation } from "./seawater/cdChloride.ts";
 export type { CdSpeciation, CdSpeciationOptions, CdExtraLigand } from "./seawater/cdChloride.ts";
 export { cdSpeciationVsSalinity } from "./seawater/cdSeries.ts";
+export { cdFreeFractionByStation } from "./seawater/cdStations.ts";
+export type { CdStationInput, CdStationResult } from "./seawater/cdStations.ts";
 export { carbonateConstantsAt } from "./seawater/carbonateConstantsAt.ts";
 export type { CarbonateConstants, CarbonateK1K2Set } from "./seawater/carbonateConstants.ts";
 export { carbonatePhFromTaDic } from "./seawater/carbonatePh.ts";

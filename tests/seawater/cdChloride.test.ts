@@ -4,6 +4,7 @@ import ref from "../reference/cd-chloride.json";
 import { cdChlorideSpeciation } from "../../analysis/seawater/cdChloride.ts";
 import { CD_CHLORIDE_SETS, type CdChlorideSet } from "../../analysis/seawater/cdChlorideSets.ts";
 import { cdSpeciationVsSalinity } from "../../analysis/seawater/cdSeries.ts";
+import { cdFreeFractionByStation } from "../../analysis/seawater/cdStations.ts";
 import { daviesActivityCoefficient } from "../../analysis/seawater/davies.ts";
 
 const fixtureSet: CdChlorideSet = {
@@ -117,5 +118,28 @@ describe("cdSpeciationVsSalinity()", () => {
   });
   it("throws RangeError for an unknown set id", () => {
     expect(() => cdSpeciationVsSalinity("llnl", [0], 25)).toThrow(/"llnl"/);
+  });
+});
+
+describe("cdFreeFractionByStation()", () => {
+  it("gives each station the free-Cd²⁺ fraction of cdChlorideSpeciation at its salinity and temperature", () => {
+    const stations = [
+      { id: "R1", salinity: 0.2, temperatureC: 18 },
+      { id: "M5", salinity: 14, temperatureC: 16 },
+    ];
+    const r = cdFreeFractionByStation(stations, "wateq4f", { davies: { A: 0.5085 } });
+    expect(r.map((x) => x.id)).toEqual(["R1", "M5"]);
+    const direct = cdChlorideSpeciation(
+      CD_CHLORIDE_SETS.wateq4f,
+      { salinity: 14, temperatureC: 16 },
+      { davies: { A: 0.5085 } },
+    );
+    expectWithin(r[1].freeFraction, direct.freeFraction, 1e-15, "M5");
+    expect(r[0].freeFraction).toBeGreaterThan(r[1].freeFraction);
+  });
+  it("names the station in the error for an invalid salinity", () => {
+    expect(() => cdFreeFractionByStation([{ id: "X9", salinity: -1, temperatureC: 10 }], "wateq4f")).toThrow(
+      /station "X9"/,
+    );
   });
 });
