@@ -23,11 +23,17 @@ export interface ColourScale {
   ticks: Array<{ value: number; label: string }>;
 }
 
+/** Removal (below the line) and addition (above) colours, taken from the same diverging scheme. */
+export const REMOVAL_CSS = interpolatePuOr(0.2);
+export const ADDITION_CSS = interpolatePuOr(0.8);
+export const ADDITION_DARK_CSS = interpolatePuOr(0.95);
+
 const NO_VALUE: RGBA = [150, 150, 150, 200];
 
-function toRgba(css: string): RGBA {
+/** A CSS colour as deck.gl RGBA (alpha 0–255). */
+export function toRgba(css: string, alpha = 235): RGBA {
   const c = color(css)?.rgb();
-  return c ? [Math.round(c.r), Math.round(c.g), Math.round(c.b), 235] : NO_VALUE;
+  return c ? [Math.round(c.r), Math.round(c.g), Math.round(c.b), alpha] : NO_VALUE;
 }
 
 function formatTick(value: number): string {
@@ -57,8 +63,8 @@ export function salinityScale(maxSalinity: number | undefined): ColourScale {
 }
 
 /**
- * Deviation from the dilution line, symmetric about zero: orange = below the
- * line (removal), purple = above (addition).
+ * Deviation from the dilution line, symmetric about zero: purple = below the
+ * line (removal), orange = above (addition).
  */
 export function deviationScale(maxAbsDeviation: number | undefined, constituent: string, unit: string): ColourScale {
   const m = maxAbsDeviation && maxAbsDeviation > 0 ? maxAbsDeviation : 1;

@@ -5,13 +5,14 @@
 import type { Layer } from "@deck.gl/core";
 import { LineLayer, PathLayer, ScatterplotLayer, TextLayer } from "@deck.gl/layers";
 import type { MapData, MapStation } from "./mapData.ts";
-import type { ColourScale, RGBA } from "./colour.ts";
+import { ADDITION_CSS, ADDITION_DARK_CSS, REMOVAL_CSS, toRgba, type ColourScale, type RGBA } from "./colour.ts";
 import type { LonLat } from "../worker/overlay.ts";
 
 export const INK: RGBA = [33, 41, 48, 255];
 const CHANNEL: RGBA = [52, 84, 102, 230];
-const REMOVAL: RGBA = [230, 97, 1, 120];
-const ADDITION: RGBA = [94, 60, 153, 120];
+const REMOVAL: RGBA = toRgba(REMOVAL_CSS, 140);
+const ADDITION: RGBA = toRgba(ADDITION_CSS, 140);
+const MAXIMUM: RGBA = toRgba(ADDITION_DARK_CSS, 255);
 const HALO: RGBA = [250, 250, 247, 235];
 const ISOHALINE: RGBA = [20, 110, 140, 255];
 
@@ -185,7 +186,7 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
         radiusUnits: "pixels",
         stroked: true,
         filled: false,
-        getLineColor: [94, 60, 153, 255],
+        getLineColor: MAXIMUM,
         getLineWidth: 3,
         lineWidthUnits: "pixels",
       }),
@@ -195,7 +196,7 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
         getPosition: (p) => p,
         getText: () => "maximum",
         getSize: 12,
-        getColor: [94, 60, 153, 255],
+        getColor: MAXIMUM,
         getPixelOffset: [0, 24],
         characterSet: "auto",
         fontFamily: LABEL_FONT,

@@ -1,0 +1,54 @@
+import { describe, expect, it } from "vitest";
+import { decimateStations } from "../../../dashboard/src/map/decimate.ts";
+import { deviationScale, salinityScale } from "../../../dashboard/src/map/colour.ts";
+import { besideChannel } from "../../../dashboard/src/map/layers.ts";
+import type { MapStation } from "../../../dashboard/src/map/mapData.ts";
+import { expectWithin } from "../../helpers/tolerance.ts";
+import { randomLcg, randomUniform } from "d3-random";
+
+function stations(n: number): MapStation[] {
+  const u = randomUniform.source(randomLcg(42))(0, 1);
+  return Array.from({ length: n }, (_, i) => ({ id: `S${i}`, lonLat: [u(), u()] as [number, number] }));
+}
+
+describe("decimateStations() thins dense data for software WebGL (TOOLCHAIN.md: ~100k points is too slow)", () => {
+  it("returns small sets unchanged", () => {
+    const few = stations(100);
+    expect(decimateStations(few, new Set())).toBe(few);
+  });
+
+  it("keeps at most one station per grid cell and never drops a selected one", () => {
+    const many = stations(50_000);
+    const keep = new Set(["S123", "S45678"]);
+    const out = decimateStations(many, keep, 2500);
+    expect(out.length).toBeLessThanOrEqual(2500 + keep.size);
+    expect(out.length).toBeGreaterThan(1000);
+    for (const id of keep) expect(out.some((s) => s.id === id)).toBe(true);
+  });
+});
+
+describe("map colour scales state their units and stay symmetric (common practice)", () => {
+  it("salinityScale() spans 0 to at least 35 and names PSS-78", () => {
+    const s = salinityScale(33.5);
+    expect(s.domain).toEqual([0, 35]);
+    expect(s.title).toContain("PSS-78");
+    expect(s.rgba(undefined)).toEqual([150, 150, 150, 200]);
+  });
+
+  it("deviationScale() is symmetric about zero and carries the constituent's unit", () => {
+    const s = deviationScale(12.5, "Ba", "nmol/L");
+    expect(s.domain).toEqual([-12.5, 12.5]);
+    expect(s.title).toBe("Ba observed − dilution line (nmol/L)");
+    expect(s.rgba(-12.5)).not.toEqual(s.rgba(12.5));
+  });
+});
+
+describe("besideChannel() sets labels perpendicular to the channel (screen y grows downward)", () => {
+  it("for a channel running north, the right side is east (+x) and the left is west", () => {
+    const [xr, yr] = besideChannel(0, 1, 10);
+    expectWithin(xr, 10, 1e-12, "right x");
+    expectWithin(yr, 0, 1e-12, "right y");
+    const [xl] = besideChannel(0, -1, 10);
+    expectWithin(xl, -10, 1e-12, "left x");
+  });
+});
