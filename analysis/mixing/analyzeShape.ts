@@ -99,7 +99,7 @@ export function analyzeShape(p: ShapeInput): {
   if (river.conc > 0) percent = estimateOf((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
   else warnings.push({ code: "river-nonpositive", message: `River end-member ${river.conc} ${unit} is not positive: no % change.` });
   const im = interiorMaximum(grid, f);
-  const cls = classify(p.nonConservative, cStar - river.conc, p.quadCoef, tangent, sMin, sMax, im >= 0);
+  const cls = classify(p.nonConservative, cStar - river.conc, p.quadCoef, tangent, sMin, sMax, im >= 0, n);
   const toKm = (a: number, b: number): Array<[number, number]> => o.salinityToKm?.(a, b) ?? [];
   let zone: ConstituentAnalysis["reactionZone"];
   const z = cls === "conservative" ? undefined : zoneFromCurve(grid, d2, sr, undefined, tangent.method === "segment" ? tangent.fromSalinity : undefined);

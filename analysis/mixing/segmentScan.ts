@@ -1,4 +1,5 @@
 import jStat from "jstat";
+import { runsCritical } from "../stats/runsTest.ts";
 
 /** Critical values of the seaward-segment tests for each segment size m. */
 export interface SegmentCriticals {
@@ -6,6 +7,24 @@ export interface SegmentCriticals {
   f: Float64Array;
   /** χ²(m − 2) upper-α critical value, indexed by m. */
   chi2: Float64Array;
+  alpha: number;
+}
+
+/** Runs test of the residual signs of stations [start, n−1] about a line (duplicates extend a run). */
+function tooFewRuns(x: ArrayLike<number>, y: ArrayLike<number>, counts: ArrayLike<number> | undefined, start: number, intercept: number, slope: number, alpha: number): boolean {
+  let n1 = 0, n2 = 0, runs = 0, last = 0;
+  for (let i = start; i < x.length; i++) {
+    const c = counts ? counts[i]! : 1;
+    if (c === 0) continue;
+    const r = y[i]! - (intercept + slope * x[i]!);
+    const sgn = r > 0 ? 1 : r < 0 ? -1 : 0;
+    if (sgn === 0) continue;
+    if (sgn > 0) n1 += c;
+    else n2 += c;
+    if (sgn !== last) runs++;
+    last = sgn;
+  }
+  return n1 > 0 && n2 > 0 && runs <= runsCritical(n1, n2, alpha);
 }
 
 /**
@@ -23,7 +42,7 @@ export function segmentCriticals(maxM: number, alpha: number): SegmentCriticals 
     f[m] = jStat.centralF.inv(1 - alpha, 1, m - 3);
     chi2[m] = jStat.chisquare.inv(1 - alpha, m - 2);
   }
-  return { f, chi2 };
+  return { f, chi2, alpha };
 }
 
 /** Result of a segment scan: start index and the segment's weighted line. */
@@ -40,8 +59,9 @@ export interface SegmentScan {
  * Scans seaward segments [i, n−1] from the mouth landward with running weighted sums
  * (O(1) per candidate) and returns the longest one that is consistent with a straight
  * line: χ² of the line fit below its critical value AND the nested F-test quadratic vs
- * linear below its critical value (residuals below 1e-10 of the segment's variance count
- * as exactly linear). Salinity is centred on the seaward-most station for stability.
+ * linear below its critical value AND no Wald–Wolfowitz "too few runs" in the residual signs
+ * (which catches curvature confined to part of the segment); residuals below 1e-10 of the
+ * segment's variance count as exactly linear. Salinity is centred on the seaward-most station for stability.
  *
  * @param x ascending salinities; y concentrations; w weights 1/σ_eff²
  * @param counts multiplicities (bootstrap) or undefined for 1 each
@@ -89,7 +109,7 @@ export function scanSegments(x: ArrayLike<number>, y: ArrayLike<number>, w: Arra
       }
       const dq = Math.max(0, rssLin - rssQuad);
       const F = rssQuad > 0 ? dq / (rssQuad / (m - 3)) : dq > 0 ? Number.POSITIVE_INFINITY : 0;
-      pass = rssLin <= crit.chi2[m]! && F <= crit.f[m]!;
+      pass = rssLin <= crit.chi2[m]! && F <= crit.f[m]! && !tooFewRuns(x, y, counts, i, a - b * x0, b, crit.alpha);
     }
     if (pass) {
       best.start = i;

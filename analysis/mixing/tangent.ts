@@ -21,7 +21,8 @@ export const MIN_SEGMENT_STATIONS = 4;
  * (at least {@link MIN_SEGMENT_STATIONS}) are consistent with one straight line:
  * (1) χ² of the weighted line fit with σ_eff = σ·max(1, √χ²_ν of the smoother) has p ≥ 0.2, and
  * (2) the nested F-test quadratic vs linear on the segment has p ≥ 0.2 (residuals below
- *     1e-10 of the segment variance count as exactly linear). The longest passing segment wins.
+ *     1e-10 of the segment variance count as exactly linear), and (3) the runs test of the
+ *     residual signs is not significant at 0.2. The longest passing segment wins.
  * When no segment passes, reactions continue to the mouth and the tangent at the seaward-most
  * station is taken from a weighted quadratic fitted to the seaward quarter of the stations (at
  * least 5): "curve-tangent", with [fromSalinity, toSalinity] the window of that local fit. A local

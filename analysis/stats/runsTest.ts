@@ -59,3 +59,29 @@ export function runsTest(residuals: ArrayLike<number>): RunsTestResult {
   for (let r = 2; r <= runs; r++) p += runsPmf(r, n1, n2);
   return { runs, nPositive: n1, nNegative: n2, pTooFew: Math.min(1, Math.max(0, p)) };
 }
+
+const CRIT_CACHE = new Map<string, number>();
+
+/**
+ * Critical number of runs: the largest r with P(R ≤ r) ≤ α under random ordering
+ * (exact distribution as in {@link runsTest}); a sequence with runs ≤ r is "too few runs".
+ * Cached per (n1, n2, α) for use in loops.
+ *
+ * @param n1 positives (≥ 1); n2 negatives (≥ 1); alpha significance level
+ * @returns the critical r (0 when even 2 runs are not significant)
+ * @see Wald & Wolfowitz (1940) Ann. Math. Stat. 11, 147–162.
+ */
+export function runsCritical(n1: number, n2: number, alpha: number): number {
+  const key = `${n1},${n2},${alpha}`;
+  const hit = CRIT_CACHE.get(key);
+  if (hit !== undefined) return hit;
+  let cum = 0;
+  let crit = 0;
+  for (let r = 2; r <= n1 + n2; r++) {
+    cum += runsPmf(r, n1, n2);
+    if (cum <= alpha) crit = r;
+    else break;
+  }
+  CRIT_CACHE.set(key, crit);
+  return crit;
+}
