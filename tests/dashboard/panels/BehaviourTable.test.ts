@@ -23,7 +23,9 @@ describe("BehaviourTable", () => {
     expect(fe.textContent).toContain("Removed in the estuary");
     expect(fe.textContent).toContain("(low confidence)");
     expect(fe.textContent).toContain("nmol/L");
-    expect(container.querySelector("tr[data-constituent='Ba']")?.textContent).toContain("Mid-estuary maximum, then conservative");
+    expect(container.querySelector("tr[data-constituent='Ba']")?.textContent).toContain(
+      "Mid-estuary maximum, then conservative",
+    );
   });
 
   it("BehaviourTable prints % change and C*₀ with their 95 % intervals, zone in salinity and km, and the maximum", () => {
@@ -43,7 +45,10 @@ describe("BehaviourTable", () => {
     const fe = container.querySelector("tr[data-constituent='Fe']") as HTMLElement;
     const details = fe.querySelector("details")!;
     expect(details.querySelector("summary")?.textContent).toBe("2 warnings");
-    expect([...details.querySelectorAll("li")].map((li) => li.getAttribute("data-code"))).toEqual(["few-stations-in-zone", "censored-values"]);
+    expect([...details.querySelectorAll("li")].map((li) => li.getAttribute("data-code"))).toEqual([
+      "few-stations-in-zone",
+      "censored-values",
+    ]);
     expect(container.querySelector("tr[data-constituent='Ba'] .warnings")?.textContent?.trim()).toBe("none");
   });
 
@@ -81,7 +86,9 @@ describe("BehaviourTable", () => {
     expect(selection.constituent).toBe("Ba");
     expect(ba.classList.contains("selected")).toBe(true);
     expect(ba.getAttribute("aria-current")).toBe("true");
-    await fireEvent.click(within(container.querySelector("tr[data-constituent='Si']") as HTMLElement).getByRole("button", { name: "Si" }));
+    await fireEvent.click(
+      within(container.querySelector("tr[data-constituent='Si']") as HTMLElement).getByRole("button", { name: "Si" }),
+    );
     expect(selection.constituent).toBe("Si");
   });
 
@@ -102,6 +109,6 @@ describe("BehaviourTable", () => {
 
   it("BehaviourTable markup matches the saved snapshot", () => {
     const { container } = setup();
-    expectMarkupSnapshot(container.querySelector(".behaviour-table")!.outerHTML, "behaviour-table", "html");
+    expectMarkupSnapshot(container.querySelector(".behaviour-table")!.outerHTML, "behaviour-table", "html.snap");
   });
 });

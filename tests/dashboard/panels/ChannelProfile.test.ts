@@ -31,7 +31,12 @@ describe("ChannelProfile", () => {
 
   it("ChannelProfile puts the river on the left and the mouth on the right", () => {
     const { svg } = setup();
-    const x = (id: string) => Number(svg.querySelector(`.point[data-station='${id}'] circle, .point[data-station='${id}'] path`)?.getAttribute("cx") ?? NaN);
+    const x = (id: string) =>
+      Number(
+        svg
+          .querySelector(`.point[data-station='${id}'] circle, .point[data-station='${id}'] path`)
+          ?.getAttribute("cx") ?? NaN,
+      );
     expect(x("S01")).toBeLessThan(x("S11"));
   });
 

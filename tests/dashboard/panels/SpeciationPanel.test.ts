@@ -17,8 +17,14 @@ const carbonate = {
 function setup(withCarbonate = false) {
   const selection = new Selection();
   selection.selectStations(["S03"]);
-  const r = render(SpeciationPanel, { analysis: fixtureAnalysis(), selection, idPrefix: "t", ...(withCarbonate ? { carbonate } : {}) });
-  const chart = (name: string) => r.container.querySelector(`svg[data-export-name='speciation-${name}']`) as SVGSVGElement;
+  const r = render(SpeciationPanel, {
+    analysis: fixtureAnalysis(),
+    selection,
+    idPrefix: "t",
+    ...(withCarbonate ? { carbonate } : {}),
+  });
+  const chart = (name: string) =>
+    r.container.querySelector(`svg[data-export-name='speciation-${name}']`) as SVGSVGElement;
   return { selection, chart, ...r };
 }
 
@@ -56,7 +62,9 @@ describe("SpeciationPanel", () => {
     flushSync();
     const after = chart("fe").querySelector(".series")?.getAttribute("d");
     expect(after).not.toBe(before);
-    const expected = feSpeciationVsPh("stefansson2007", { salinity: 1.2, temperatureC: 12 }, linearGrid(3, 10, 141), { mixing: { riverSalinity: 0, seaSalinity: 35 } });
+    const expected = feSpeciationVsPh("stefansson2007", { salinity: 1.2, temperatureC: 12 }, linearGrid(3, 10, 141), {
+      mixing: { riverSalinity: 0, seaSalinity: 35 },
+    });
     expect(chart("fe").querySelectorAll(".series")).toHaveLength(expected.series.length);
     expect(chart("fe").querySelector("desc")?.textContent).toContain("Stefánsson 2007");
   });

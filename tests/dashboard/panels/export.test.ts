@@ -42,7 +42,9 @@ describe("csv", () => {
 
 describe("export", () => {
   it("exportFileName() builds brackline-<survey>-<constituent>-<panel>.<ext> with plain slugs", () => {
-    expect(exportFileName("Wet season 2025-03", "mixing", "svg", "Fe")).toBe("brackline-wet-season-2025-03-fe-mixing.svg");
+    expect(exportFileName("Wet season 2025-03", "mixing", "svg", "Fe")).toBe(
+      "brackline-wet-season-2025-03-fe-mixing.svg",
+    );
     expect(exportFileName("Été à Brest", "results", "csv")).toBe("brackline-ete-a-brest-results.csv");
     expect(slug("///")).toBe("survey");
   });
@@ -110,7 +112,11 @@ describe("export", () => {
       drawImage: (_img: unknown, _x: number, _y: number, w: number, h: number) => calls.push(`drawImage ${w}x${h}`),
     };
     vi.spyOn(HTMLCanvasElement.prototype, "getContext").mockReturnValue(ctx as unknown as CanvasRenderingContext2D);
-    const toBlob = vi.spyOn(HTMLCanvasElement.prototype, "toBlob").mockImplementation(function (this: HTMLCanvasElement, cb, type) {
+    const toBlob = vi.spyOn(HTMLCanvasElement.prototype, "toBlob").mockImplementation(function (
+      this: HTMLCanvasElement,
+      cb,
+      type,
+    ) {
       calls.push(`toBlob ${type} ${this.width}x${this.height}`);
       cb(new Blob(["png"], { type: "image/png" }));
     });
@@ -126,14 +132,23 @@ describe("export", () => {
 
   it("mapCanvasToPngBlob() composites the map canvases in order at the first one's size", async () => {
     const drawn: Array<[unknown, number, number]> = [];
-    const ctx = { fillStyle: "", fillRect: () => undefined, drawImage: (c: unknown, _x: number, _y: number, w: number, h: number) => drawn.push([c, w, h]) };
+    const ctx = {
+      fillStyle: "",
+      fillRect: () => undefined,
+      drawImage: (c: unknown, _x: number, _y: number, w: number, h: number) => drawn.push([c, w, h]),
+    };
     vi.spyOn(HTMLCanvasElement.prototype, "getContext").mockReturnValue(ctx as unknown as CanvasRenderingContext2D);
-    vi.spyOn(HTMLCanvasElement.prototype, "toBlob").mockImplementation((cb) => cb(new Blob(["png"], { type: "image/png" })));
+    vi.spyOn(HTMLCanvasElement.prototype, "toBlob").mockImplementation((cb) =>
+      cb(new Blob(["png"], { type: "image/png" })),
+    );
     const base = Object.assign(document.createElement("canvas"), { width: 800, height: 600 });
     const overlay = Object.assign(document.createElement("canvas"), { width: 800, height: 600 });
     const blob = await mapCanvasToPngBlob([base, overlay]);
     expect(blob.type).toBe("image/png");
-    expect(drawn).toEqual([[base, 800, 600], [overlay, 800, 600]]);
+    expect(drawn).toEqual([
+      [base, 800, 600],
+      [overlay, 800, 600],
+    ]);
     await expect(mapCanvasToPngBlob([])).rejects.toThrow(/no canvas/);
   });
 });
@@ -178,7 +193,10 @@ describe("ExportMenu", () => {
     await fireEvent.click(menu.getByRole("button", { name: "Results table (CSV)" }));
     await fireEvent.click(menu.getByRole("button", { name: "Full results (JSON)" }));
     await waitFor(() => expect(saved).toHaveLength(2));
-    expect(saved.map((s) => s.name)).toEqual(["brackline-invented-test-survey-results.csv", "brackline-invented-test-survey-results.json"]);
+    expect(saved.map((s) => s.name)).toEqual([
+      "brackline-invented-test-survey-results.csv",
+      "brackline-invented-test-survey-results.json",
+    ]);
     expect((await saved[0].blob.text()).split("\r\n")[0]).toMatch(/^survey,constituent,unit,class/);
     expect(menu.queryByRole("button", { name: "Map view (PNG)" })).toBeNull();
     menu.unmount();
@@ -191,6 +209,10 @@ describe("ExportMenu", () => {
     // jsdom has no 2D canvas context
     vi.spyOn(HTMLCanvasElement.prototype, "getContext").mockReturnValue(null);
     await fireEvent.click(menu.getByRole("button", { name: "Map view (PNG)" }));
-    await waitFor(() => expect(menu.getByRole("status").textContent).toMatch(/^Could not export brackline-invented-test-survey-map\.png: .*no 2D canvas context/));
+    await waitFor(() =>
+      expect(menu.getByRole("status").textContent).toMatch(
+        /^Could not export brackline-invented-test-survey-map\.png: .*no 2D canvas context/,
+      ),
+    );
   });
 });

@@ -3,7 +3,11 @@
  * INVENTED for layout testing only; they are not measurements and were not
  * produced by the analysis (panels only draw what they are given).
  */
-import type { ConstituentAnalysisView, StationPlacement, SurveyAnalysisView } from "../../../dashboard/src/panels/lib/types.ts";
+import type {
+  ConstituentAnalysisView,
+  StationPlacement,
+  SurveyAnalysisView,
+} from "../../../dashboard/src/panels/lib/types.ts";
 
 const salinities = [0.1, 0.5, 1.2, 2.5, 4.0, 6.5, 9.0, 13.0, 18.0, 24.0, 29.0, 33.5];
 const kms = [42, 38, 35, 31, 28, 24, 20, 16, 12, 8, 4, 0.5];
@@ -21,8 +25,22 @@ export const stations: StationPlacement[] = ids.map((id, i) => ({
   temperatureC: 12,
 }));
 
-const river = (conc: number) => ({ salinity: 0.1, conc, concSd: conc * 0.05, n: 2, source: "data" as const, stationIds: ["S01", "S02"] });
-const sea = (conc: number) => ({ salinity: 33.5, conc, concSd: conc * 0.05, n: 1, source: "data" as const, stationIds: ["S12"] });
+const river = (conc: number) => ({
+  salinity: 0.1,
+  conc,
+  concSd: conc * 0.05,
+  n: 2,
+  source: "data" as const,
+  stationIds: ["S01", "S02"],
+});
+const sea = (conc: number) => ({
+  salinity: 33.5,
+  conc,
+  concSd: conc * 0.05,
+  n: 1,
+  source: "data" as const,
+  stationIds: ["S12"],
+});
 
 function deviations(observed: number[], line: (s: number) => number, censored: number[] = []) {
   return ids.map((id, i) => {
@@ -47,7 +65,13 @@ export const fe: ConstituentAnalysisView = {
   name: "Fe",
   unit: "nmol/L",
   endmembers: { river: river(800), sea: sea(5) },
-  dilutionLine: { slope: (5 - 800) / 33.4, intercept: 800 - ((5 - 800) / 33.4) * 0.1, river: river(800), sea: sea(5), unit: "nmol/L" },
+  dilutionLine: {
+    slope: (5 - 800) / 33.4,
+    intercept: 800 - ((5 - 800) / 33.4) * 0.1,
+    river: river(800),
+    sea: sea(5),
+    unit: "nmol/L",
+  },
   deviations: deviations(feObserved, feLine, [11]),
   fit: {
     salinity: [0, 5, 10, 15, 20, 25, 30, 33.5],
@@ -60,7 +84,15 @@ export const fe: ConstituentAnalysisView = {
     lambda: 1,
     edf: 4,
   },
-  tangent: { slope: -7.1, intercept: 243, fromSalinity: 9, toSalinity: 33.5, salinityRange: [9, 33.5], method: "segment", nStations: 6 },
+  tangent: {
+    slope: -7.1,
+    intercept: 243,
+    fromSalinity: 9,
+    toSalinity: 33.5,
+    salinityRange: [9, 33.5],
+    method: "segment",
+    nStations: 6,
+  },
   class: "removal",
   confidence: "low",
   effectiveEndmember: { value: 243, lower: 221, upper: 266, unit: "nmol/L" },
@@ -117,7 +149,9 @@ export const si: ConstituentAnalysisView = {
   class: "conservative",
   confidence: "normal",
   percentChange: { value: 0.4, lower: -3.1, upper: 3.8, unit: "%" },
-  warnings: [{ code: "endmember-variability", message: "River end-member varies by 8 % between the two freshest stations." }],
+  warnings: [
+    { code: "endmember-variability", message: "River end-member varies by 8 % between the two freshest stations." },
+  ],
 };
 
 /** The fixed analysis every panel test renders. */
@@ -134,7 +168,8 @@ export function fixtureAnalysis(): SurveyAnalysisView {
       nStations: 12,
     },
     warnings: [],
-    caution: "Screening analysis, not a compliance or health assessment (test fixture). Defer to local regulations and licensed practice.",
+    caution:
+      "Screening analysis, not a compliance or health assessment (test fixture). Defer to local regulations and licensed practice.",
     stations,
     constituents: [fe, ba, si],
   };

@@ -31,8 +31,8 @@ export function expectSvgSnapshot(markup: string, name: string): void {
   expectMarkupSnapshot(markup, name, "svg");
 }
 
-/** As {@link expectSvgSnapshot} for other markup (e.g. "html" tables). */
-export function expectMarkupSnapshot(markup: string, name: string, ext: "svg" | "html"): void {
+/** As {@link expectSvgSnapshot} for other markup ("html.snap" for HTML tables, kept out of the formatter). */
+export function expectMarkupSnapshot(markup: string, name: string, ext: "svg" | "html.snap"): void {
   const actual = normaliseSvg(markup);
   const path = join(dir, `${name}.${ext}`);
   const changed = join(dir, `${name}-changed.${ext}`);

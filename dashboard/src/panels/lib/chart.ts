@@ -25,4 +25,3 @@ export interface ChartMarker {
   label: string;
   colour?: string;
 }
-

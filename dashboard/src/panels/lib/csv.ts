@@ -13,7 +13,8 @@ export function csvField(v: CsvValue): string {
 /** A whole CSV document: header row, then the rows, each line ending in CRLF. */
 export function toCsv(header: readonly string[], rows: ReadonlyArray<readonly CsvValue[]>): string {
   for (const [i, r] of rows.entries()) {
-    if (r.length !== header.length) throw new RangeError(`toCsv(): row ${i} has ${r.length} fields, header has ${header.length}`);
+    if (r.length !== header.length)
+      throw new RangeError(`toCsv(): row ${i} has ${r.length} fields, header has ${header.length}`);
   }
   return [header, ...rows].map((r) => r.map(csvField).join(",") + "\r\n").join("");
 }

@@ -21,7 +21,12 @@ export function slug(text: string, fallback = "survey"): string {
 
 /** brackline-<survey>[-<constituent>]-<what>.<ext> */
 export function exportFileName(surveyName: string, what: string, ext: string, constituent?: string): string {
-  const parts = ["brackline", slug(surveyName), ...(constituent ? [slug(constituent, "constituent")] : []), slug(what, "export")];
+  const parts = [
+    "brackline",
+    slug(surveyName),
+    ...(constituent ? [slug(constituent, "constituent")] : []),
+    slug(what, "export"),
+  ];
   return `${parts.join("-")}.${ext}`;
 }
 
@@ -135,25 +140,68 @@ export async function mapCanvasToPngBlob(canvases: HTMLCanvasElement | readonly 
 /** Summary table: one row per constituent with class, estimates and 95 % limits, zone, maximum, warnings. */
 export function resultsCsv(analysis: SurveyAnalysisView): string {
   const header = [
-    "survey", "constituent", "unit", "class", "class_description", "confidence",
-    "percent_change", "percent_change_lower", "percent_change_upper",
-    "effective_river_endmember", "effective_river_endmember_lower", "effective_river_endmember_upper",
-    "river_salinity", "river_conc", "sea_salinity", "sea_conc",
-    "zone_kind", "zone_salinity_from", "zone_salinity_to", "zone_km",
-    "maximum_salinity", "maximum_salinity_lower", "maximum_salinity_upper", "maximum_km",
-    "maximum_excess", "maximum_excess_lower", "maximum_excess_upper",
-    "warning_count", "warning_codes", "warnings",
+    "survey",
+    "constituent",
+    "unit",
+    "class",
+    "class_description",
+    "confidence",
+    "percent_change",
+    "percent_change_lower",
+    "percent_change_upper",
+    "effective_river_endmember",
+    "effective_river_endmember_lower",
+    "effective_river_endmember_upper",
+    "river_salinity",
+    "river_conc",
+    "sea_salinity",
+    "sea_conc",
+    "zone_kind",
+    "zone_salinity_from",
+    "zone_salinity_to",
+    "zone_km",
+    "maximum_salinity",
+    "maximum_salinity_lower",
+    "maximum_salinity_upper",
+    "maximum_km",
+    "maximum_excess",
+    "maximum_excess_lower",
+    "maximum_excess_upper",
+    "warning_count",
+    "warning_codes",
+    "warnings",
   ];
   const rows = analysis.constituents.map((c) => [
-    analysis.survey.name, c.name, c.unit, c.class, behaviourLabel[c.class], c.confidence,
-    c.percentChange?.value, c.percentChange?.lower, c.percentChange?.upper,
-    c.effectiveEndmember?.value, c.effectiveEndmember?.lower, c.effectiveEndmember?.upper,
-    c.dilutionLine?.river.salinity, c.dilutionLine?.river.conc, c.dilutionLine?.sea.salinity, c.dilutionLine?.sea.conc,
-    c.reactionZone?.kind, c.reactionZone?.salinity[0], c.reactionZone?.salinity[1],
+    analysis.survey.name,
+    c.name,
+    c.unit,
+    c.class,
+    behaviourLabel[c.class],
+    c.confidence,
+    c.percentChange?.value,
+    c.percentChange?.lower,
+    c.percentChange?.upper,
+    c.effectiveEndmember?.value,
+    c.effectiveEndmember?.lower,
+    c.effectiveEndmember?.upper,
+    c.dilutionLine?.river.salinity,
+    c.dilutionLine?.river.conc,
+    c.dilutionLine?.sea.salinity,
+    c.dilutionLine?.sea.conc,
+    c.reactionZone?.kind,
+    c.reactionZone?.salinity[0],
+    c.reactionZone?.salinity[1],
     c.reactionZone?.km.map(([a, b]) => `${a}-${b}`).join(";"),
-    c.maximum?.salinity.value, c.maximum?.salinity.lower, c.maximum?.salinity.upper, c.maximum?.km.join(";"),
-    c.maximum?.excess.value, c.maximum?.excess.lower, c.maximum?.excess.upper,
-    c.warnings.length, c.warnings.map((w) => w.code).join(";"), c.warnings.map((w) => w.message).join(" | "),
+    c.maximum?.salinity.value,
+    c.maximum?.salinity.lower,
+    c.maximum?.salinity.upper,
+    c.maximum?.km.join(";"),
+    c.maximum?.excess.value,
+    c.maximum?.excess.lower,
+    c.maximum?.excess.upper,
+    c.warnings.length,
+    c.warnings.map((w) => w.code).join(";"),
+    c.warnings.map((w) => w.message).join(" | "),
   ]);
   return toCsv(header, rows);
 }
@@ -162,13 +210,33 @@ export function resultsCsv(analysis: SurveyAnalysisView): string {
 export function deviationsCsv(analysis: SurveyAnalysisView): string {
   const byId = placementsById(analysis);
   const header = [
-    "survey", "constituent", "unit", "station", "salinity", "along_channel_km",
-    "observed", "expected_on_dilution_line", "deviation", "deviation_percent", "significant", "below_detection",
+    "survey",
+    "constituent",
+    "unit",
+    "station",
+    "salinity",
+    "along_channel_km",
+    "observed",
+    "expected_on_dilution_line",
+    "deviation",
+    "deviation_percent",
+    "significant",
+    "below_detection",
   ];
   const rows = analysis.constituents.flatMap((c) =>
     c.deviations.map((d) => [
-      analysis.survey.name, c.name, c.unit, d.stationId, d.salinity, byId.get(d.stationId)?.alongChannelKm,
-      d.observed, d.expected, d.deviation, d.deviationPercent, d.significant, d.censored,
+      analysis.survey.name,
+      c.name,
+      c.unit,
+      d.stationId,
+      d.salinity,
+      byId.get(d.stationId)?.alongChannelKm,
+      d.observed,
+      d.expected,
+      d.deviation,
+      d.deviationPercent,
+      d.significant,
+      d.censored,
     ]),
   );
   return toCsv(header, rows);

@@ -43,3 +43,8 @@ export function layoutLegend(items: readonly LegendItem[], width: number): { pla
   }
   return { placed, height: items.length ? y + LEGEND_ROW_PX : 0 };
 }
+
+/** Places a label starting at `x` + 4, or right-aligned at `right` − 4 when it would run past `right`. */
+export function fitLabel(x: number, text: string, right: number): { x: number; anchor: "start" | "end" } {
+  return x + 4 + text.length * CHAR_PX > right ? { x: right - 4, anchor: "end" } : { x: x + 4, anchor: "start" };
+}

@@ -36,19 +36,14 @@ export function mixingModel(c: ConstituentAnalysisView | undefined, frame: Frame
   const fit = c?.fit;
   const eff = c?.effectiveEndmember;
   const riverS = line?.river.salinity ?? c?.endmembers?.river.salinity ?? 0;
-  const xDomain = extent([
-    0,
-    ...obs.map((o) => o.salinity),
-    line?.sea.salinity,
-    ...(fit?.salinity ?? []),
-  ]);
+  const xDomain = extent([0, ...obs.map((o) => o.salinity), line?.sea.salinity, ...(fit?.salinity ?? [])]);
   const yDomain = extent([
     0,
     ...obs.map((o) => o.value),
     line?.river.conc,
     line?.sea.conc,
-    ...(fit?.upper ?? []),
-    ...(fit?.lower ?? []),
+    // The band is clipped to the frame rather than allowed to stretch the axis.
+    ...(fit?.conc ?? []),
     eff?.upper,
     eff?.lower,
   ]);
@@ -81,7 +76,12 @@ export function mixingModel(c: ConstituentAnalysisView | undefined, frame: Frame
     };
   }
   if (eff) {
-    model.effective = { px: round(x(riverS)), py: round(y(eff.value)), pyLower: round(y(eff.lower)), pyUpper: round(y(eff.upper)) };
+    model.effective = {
+      px: round(x(riverS)),
+      py: round(y(eff.value)),
+      pyLower: round(y(eff.lower)),
+      pyUpper: round(y(eff.upper)),
+    };
   }
   const z = c?.reactionZone;
   if (z) {
@@ -91,7 +91,11 @@ export function mixingModel(c: ConstituentAnalysisView | undefined, frame: Frame
   }
   const m = c?.maximum;
   if (m) {
-    model.maximum = { px: round(x(m.salinity.value)), pxLower: round(x(m.salinity.lower)), pxUpper: round(x(m.salinity.upper)) };
+    model.maximum = {
+      px: round(x(m.salinity.value)),
+      pxLower: round(x(m.salinity.lower)),
+      pxUpper: round(x(m.salinity.upper)),
+    };
   }
   return model;
 }

@@ -59,7 +59,13 @@ export function surveyObservations(survey: Survey, name: string): ObservationPoi
     const s = st.salinity.value;
     if (!cell || s === undefined || !Number.isFinite(s)) continue;
     if (cell.status === "measured" && cell.value !== undefined) {
-      out.push({ stationId: st.id, salinity: s, value: cell.value, kind: cell.accepted ? "measured" : "rejected", original: cell.original });
+      out.push({
+        stationId: st.id,
+        salinity: s,
+        value: cell.value,
+        kind: cell.accepted ? "measured" : "rejected",
+        original: cell.original,
+      });
     } else if (cell.status === "belowDetection" && cell.detectionLimit !== undefined) {
       out.push({
         stationId: st.id,

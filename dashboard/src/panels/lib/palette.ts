@@ -117,7 +117,11 @@ export function deviationColour(deviationPercent: number, limitPercent = 50): st
 }
 
 /** Evenly spaced stops of a colour function for legends and map ramps. */
-export function rampStops(colour: (t: number) => string, domain: readonly [number, number], n = 9): Array<[number, string]> {
+export function rampStops(
+  colour: (t: number) => string,
+  domain: readonly [number, number],
+  n = 9,
+): Array<[number, string]> {
   if (!(n >= 2)) throw new RangeError(`rampStops(): n must be ≥ 2, got ${n}`);
   const [lo, hi] = domain;
   return Array.from({ length: n }, (_, i) => {

@@ -16,7 +16,12 @@ export function toSvgPoint(svg: SVGSVGElement, clientX: number, clientY: number)
 }
 
 /** Index of the screen point nearest (px, py) within `radius` pixels, or -1. */
-export function nearestIndex(points: ReadonlyArray<{ px: number; py: number }>, px: number, py: number, radius = 8): number {
+export function nearestIndex(
+  points: ReadonlyArray<{ px: number; py: number }>,
+  px: number,
+  py: number,
+  radius = 8,
+): number {
   let best = -1;
   let bestD = radius * radius;
   for (let i = 0; i < points.length; i++) {

@@ -30,7 +30,11 @@ export interface ProfileModel {
 }
 
 /** Builds scales and geometry of the channel profile for one constituent. */
-export function profileModel(analysis: SurveyAnalysisView, c: ConstituentAnalysisView | undefined, frame: Frame): ProfileModel {
+export function profileModel(
+  analysis: SurveyAnalysisView,
+  c: ConstituentAnalysisView | undefined,
+  frame: Frame,
+): ProfileModel {
   const byId = placementsById(analysis);
   const obs = observationsOf(c);
   const placed = obs.flatMap((o) => {
@@ -70,6 +74,10 @@ export function profileModel(analysis: SurveyAnalysisView, c: ConstituentAnalysi
 }
 
 /** Station ids whose screen x lies within [a, b] (a brushed stretch of channel). */
-export function idsInScreenRange(points: ReadonlyArray<{ stationId: string; px: number }>, a: number, b: number): string[] {
+export function idsInScreenRange(
+  points: ReadonlyArray<{ stationId: string; px: number }>,
+  a: number,
+  b: number,
+): string[] {
   return [...new Set(points.filter((p) => p.px >= a && p.px <= b).map((p) => p.stationId))];
 }

@@ -67,7 +67,10 @@ export function linear(
     lo -= pad;
     hi += pad;
   }
-  return scaleLinear().domain([lo, hi]).range(range).nice(options.ticks ?? 6);
+  return scaleLinear()
+    .domain([lo, hi])
+    .range(range)
+    .nice(options.ticks ?? 6);
 }
 
 /** SVG path through the points, lifting the pen over non-finite values (d3-shape line). */

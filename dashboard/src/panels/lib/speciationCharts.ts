@@ -13,7 +13,14 @@ export function toChartSeries(
 ): ChartSeries[] {
   return set.series
     .filter((s) => pick(s.key))
-    .map((s, i) => ({ key: s.key, label: s.label, x: set.x, y: s.values, colour: categorical[i % categorical.length], ...style(s.key) }));
+    .map((s, i) => ({
+      key: s.key,
+      label: s.label,
+      x: set.x,
+      y: s.values,
+      colour: categorical[i % categorical.length],
+      ...style(s.key),
+    }));
 }
 
 /** Fe(III) species fractions at the station, largest first: "Fe(OH)₂⁺ 62 %". */
@@ -35,7 +42,9 @@ export function salinityMarker(m: SpeciationModel, label: string): ChartMarker[]
 /** Marker at the focus station's measured pH on the Fe(III) chart. */
 export function pHMarker(m: SpeciationModel): ChartMarker[] {
   const pH = m.station?.pH;
-  return m.station && pH !== undefined && Number.isFinite(pH) ? [{ x: pH, label: `${m.station.id}: pH ${formatFixed(pH, 2)}`, colour: roles.selected }] : [];
+  return m.station && pH !== undefined && Number.isFinite(pH)
+    ? [{ x: pH, label: `${m.station.id}: pH ${formatFixed(pH, 2)}`, colour: roles.selected }]
+    : [];
 }
 
 /** Measured pH of the stations as clickable points. */
@@ -53,7 +62,11 @@ export function measuredPhPoints(m: SpeciationModel, isSelected: (id: string) =>
 export function expectedPhSeries(m: SpeciationModel): ChartSeries[] {
   if (!m.carbonate?.ok) return [];
   const set = m.carbonate.value;
-  return toChartSeries(set, (k) => k === "pH_T", () => ({ label: "Expected pH, conservative mixing (total scale)", colour: roles.fit, width: 2 }));
+  return toChartSeries(
+    set,
+    (k) => k === "pH_T",
+    () => ({ label: "Expected pH, conservative mixing (total scale)", colour: roles.fit, width: 2 }),
+  );
 }
 
 /** Every validity note from the analysis, without repeats. */

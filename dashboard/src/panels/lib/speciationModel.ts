@@ -67,7 +67,11 @@ export interface SpeciationModel {
 }
 
 /** The station speciation is shown for: the first selected (or else hovered) station with a salinity. */
-export function focusStation(analysis: SurveyAnalysisView, selectedIds: Iterable<string>, hoveredId: string | null): StationPlacement | undefined {
+export function focusStation(
+  analysis: SurveyAnalysisView,
+  selectedIds: Iterable<string>,
+  hoveredId: string | null,
+): StationPlacement | undefined {
   const byId = new Map(analysis.stations.map((s) => [s.id, s]));
   for (const id of [...selectedIds, ...(hoveredId ? [hoveredId] : [])]) {
     const s = byId.get(id);
@@ -77,7 +81,11 @@ export function focusStation(analysis: SurveyAnalysisView, selectedIds: Iterable
 }
 
 /** Runs the speciation functions of analysis/seawater for the panel. */
-export function speciationModel(analysis: SurveyAnalysisView, station: StationPlacement | undefined, settings: SpeciationSettings): SpeciationModel {
+export function speciationModel(
+  analysis: SurveyAnalysisView,
+  station: StationPlacement | undefined,
+  settings: SpeciationSettings,
+): SpeciationModel {
   const salinity = station?.salinity ?? settings.salinityRange[0];
   const temperatureAssumed = station?.temperatureC === undefined || !Number.isFinite(station.temperatureC);
   const temperatureC = temperatureAssumed ? settings.defaultTemperatureC : (station?.temperatureC as number);
@@ -88,11 +96,20 @@ export function speciationModel(analysis: SurveyAnalysisView, station: StationPl
     salinity,
     temperatureC,
     temperatureAssumed,
-    fe: attempt(() => feSpeciationVsPh(settings.feSetId, { salinity, temperatureC }, linearGrid(settings.pHRange[0], settings.pHRange[1], 141), { mixing })),
+    fe: attempt(() =>
+      feSpeciationVsPh(
+        settings.feSetId,
+        { salinity, temperatureC },
+        linearGrid(settings.pHRange[0], settings.pHRange[1], 141),
+        { mixing },
+      ),
+    ),
     cd: attempt(() => cdSpeciationVsSalinity(settings.cdSetId, sGrid, temperatureC, { mixing })),
     ions: attempt(() => majorIonsVsSalinity(sGrid, mixing)),
     measuredPh: analysis.stations
-      .filter((s) => s.pH !== undefined && s.salinity !== undefined && Number.isFinite(s.pH) && Number.isFinite(s.salinity))
+      .filter(
+        (s) => s.pH !== undefined && s.salinity !== undefined && Number.isFinite(s.pH) && Number.isFinite(s.salinity),
+      )
       .map((s) => ({ stationId: s.id, salinity: s.salinity as number, pH: s.pH as number })),
   };
   const carb = settings.carbonate;
@@ -102,14 +119,18 @@ export function speciationModel(analysis: SurveyAnalysisView, station: StationPl
         river: carb.river,
         sea: carb.sea,
         salinityGrid: linearGrid(carb.river.salinity, carb.sea.salinity, 71),
-        temperatureC: carb.river.temperatureC === undefined || carb.sea.temperatureC === undefined ? temperatureC : undefined,
+        temperatureC:
+          carb.river.temperatureC === undefined || carb.sea.temperatureC === undefined ? temperatureC : undefined,
       }),
     );
   }
   if (station && station.pH !== undefined && Number.isFinite(station.pH)) {
     const pH = station.pH;
     model.atStation = attempt(() =>
-      stationSpeciation({ pH, salinity, temperatureC }, { feConstantSet: settings.feSetId, cdConstantSet: settings.cdSetId, mixing }),
+      stationSpeciation(
+        { pH, salinity, temperatureC },
+        { feConstantSet: settings.feSetId, cdConstantSet: settings.cdSetId, mixing },
+      ),
     );
   }
   return model;

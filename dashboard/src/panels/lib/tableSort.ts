@@ -28,7 +28,11 @@ export function sortValue(c: ConstituentAnalysisView, key: SortKey): string | nu
 }
 
 /** Rows sorted by `key` in `direction`; ties keep their original order; missing values last. */
-export function sortRows(rows: readonly ConstituentAnalysisView[], key: SortKey, direction: SortDirection): ConstituentAnalysisView[] {
+export function sortRows(
+  rows: readonly ConstituentAnalysisView[],
+  key: SortKey,
+  direction: SortDirection,
+): ConstituentAnalysisView[] {
   const sign = direction === "ascending" ? 1 : -1;
   return rows
     .map((row, i) => ({ row, i, v: sortValue(row, key) }))
