@@ -34,7 +34,13 @@ export interface CarbonateConstants {
   k1k2Set: CarbonateK1K2Set;
 }
 
-/** Millero (2010) pK1, pK2 on the seawater scale (Mar. Freshwater Res. 61, 139–142, Tables 2–3; from memory). */
+/**
+ * Millero (2010) pK1, pK2 on the seawater scale, S = 0–50.
+ * @param s practical salinity
+ * @param tK temperature [K]
+ * @returns [pK1, pK2] (SWS, mol/kg-soln)
+ * @see Millero, F.J., 2010. Mar. Freshwater Res. 61, 139–142, Tables 2–3 (from memory).
+ */
 export function millero2010PkSws(s: number, tK: number): [number, number] {
   const sq = Math.sqrt(s);
   const lnT = Math.log(tK);
@@ -49,7 +55,13 @@ export function millero2010PkSws(s: number, tK: number): [number, number] {
   return [pk10 + a1 + b1 / tK + c1 * lnT, pk20 + a2 + b2 / tK + c2 * lnT];
 }
 
-/** Lueker, Dickson & Keeling (2000) pK1, pK2 on the total scale (Mar. Chem. 70, 105–119). */
+/**
+ * Lueker, Dickson & Keeling (2000) pK1, pK2 on the total scale, valid S ≈ 19–43.
+ * @param s practical salinity
+ * @param tK temperature [K]
+ * @returns [pK1, pK2] (total, mol/kg-soln)
+ * @see Lueker, T.J., Dickson, A.G., Keeling, C.D., 2000. Mar. Chem. 70, 105–119 (from memory).
+ */
 export function lueker2000PkTotal(s: number, tK: number): [number, number] {
   const lnT = Math.log(tK);
   return [
@@ -58,7 +70,13 @@ export function lueker2000PkTotal(s: number, tK: number): [number, number] {
   ];
 }
 
-/** ln KB, total scale (Dickson 1990, Deep-Sea Res. 37, 755–766). */
+/**
+ * ln KB (boric acid), total scale.
+ * @param s practical salinity
+ * @param tK temperature [K]
+ * @returns ln KB [ln mol/kg-soln]
+ * @see Dickson, A.G., 1990. Deep-Sea Res. 37, 755–766 (from memory).
+ */
 export function lnKbDickson1990(s: number, tK: number): number {
   const sq = Math.sqrt(s);
   return (
@@ -71,7 +89,13 @@ export function lnKbDickson1990(s: number, tK: number): number {
   );
 }
 
-/** ln KW, total scale (Millero 1995, GCA 59, 661–677, with the DOE 1994 constant 148.96502). */
+/**
+ * ln KW (water), total scale, with the DOE (1994) constant 148.96502 (Millero 1995 printed 148.9802).
+ * @param s practical salinity
+ * @param tK temperature [K]
+ * @returns ln KW [ln (mol/kg-soln)²]
+ * @see Millero, F.J., 1995. Geochim. Cosmochim. Acta 59, 661–677; DOE, 1994 (from memory).
+ */
 export function lnKwMillero1995(s: number, tK: number): number {
   return (
     148.96502 -
@@ -82,7 +106,13 @@ export function lnKwMillero1995(s: number, tK: number): number {
   );
 }
 
-/** ln KS (HSO4⁻), free scale, mol/kg-soln (Dickson 1990, J. Chem. Thermodyn. 22, 113–127), I by the DOE form. */
+/**
+ * ln KS (HSO4⁻), free scale, mol/kg-soln, with I = 19.924 S/(1000 − 1.005 S) (the form it was fitted with).
+ * @param s practical salinity
+ * @param tK temperature [K]
+ * @returns ln KS
+ * @see Dickson, A.G., 1990. J. Chem. Thermodyn. 22, 113–127 (from memory).
+ */
 export function lnKsDickson1990(s: number, tK: number): number {
   const i = (19.924 * s) / (1000 - 1.005 * s);
   const lnT = Math.log(tK);
@@ -98,12 +128,24 @@ export function lnKsDickson1990(s: number, tK: number): number {
   );
 }
 
-/** ln KF (HF), free scale (Perez & Fraga 1987, Mar. Chem. 21, 161–168). */
+/**
+ * ln KF (HF), free scale.
+ * @param s practical salinity
+ * @param tK temperature [K]
+ * @returns ln KF [ln mol/kg-soln]
+ * @see Perez, F.F., Fraga, F., 1987. Mar. Chem. 21, 161–168 (from memory).
+ */
 export function lnKfPerezFraga1987(s: number, tK: number): number {
   return 874 / tK - 9.68 + 0.111 * Math.sqrt(s);
 }
 
-/** ln K0, CO2 solubility [mol kg⁻¹ atm⁻¹] (Weiss 1974, Mar. Chem. 2, 203–215). */
+/**
+ * ln K0, CO2 solubility.
+ * @param s practical salinity
+ * @param tK temperature [K]
+ * @returns ln K0 [ln mol kg⁻¹ atm⁻¹]
+ * @see Weiss, R.F., 1974. Mar. Chem. 2, 203–215 (from memory).
+ */
 export function lnK0Weiss1974(s: number, tK: number): number {
   const t = tK / 100;
   return -60.2409 + 93.4517 / t + 23.3585 * Math.log(t) + s * (0.023517 - 0.023656 * t + 0.0047036 * t * t);

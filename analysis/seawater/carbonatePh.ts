@@ -16,7 +16,15 @@ export interface CarbonateState {
   warnings: string[];
 }
 
-/** Total alkalinity [mol/kg] implied by pH_T for given DIC and constants (DSC 2007 ch. 2 TA definition, no P, Si, organics). */
+/**
+ * Total alkalinity implied by [H⁺]_T for a given DIC: carbonate + borate + hydroxide − free H⁺ − HSO4⁻ − HF
+ * (no phosphate, silicate or organic alkalinity).
+ * @param hTotal [H⁺] on the total scale [mol/kg]
+ * @param dicMolKg dissolved inorganic carbon [mol/kg]
+ * @param c constants from carbonateConstantsAt
+ * @returns total alkalinity [mol/kg]
+ * @see Dickson, A.G., Sabine, C.L., Christian, J.R., 2007. PICES Spec. Publ. 3, ch. 2 (TA definition; from memory).
+ */
 export function alkalinityAt(hTotal: number, dicMolKg: number, c: CarbonateConstants): number {
   const h = hTotal;
   const hFree = h * c.totalToFree;
