@@ -18,7 +18,10 @@ export function applyMapping(
   mapping: ColumnMapping,
   options: ReadSurveyOptions,
 ): ImportResult {
-  const router = new RecordRouter({ delimiter: mapping.delimiter ?? ",", decimalComma: options.decimalComma ?? mapping.decimalComma ?? false }, { ...options, mapping });
+  const router = new RecordRouter(
+    { delimiter: mapping.delimiter ?? ",", decimalComma: options.decimalComma ?? mapping.decimalComma ?? false },
+    { ...options, mapping },
+  );
   router.push({ fields: [...headers], row: 1, parseErrors: [] });
   rows.forEach((r, i) => router.push({ fields: [...r], row: i + 2, parseErrors: [] }));
   return router.finish(0);

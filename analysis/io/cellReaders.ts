@@ -39,7 +39,15 @@ export function readValueCell(
 ): ValueCell {
   const cell = parseValueText(text, { decimalComma: ctx.decimalComma });
   if (cell.status === "invalid") {
-    ctx.issues.push(makeIssue(ctx.file, ctx.row, header, text, "a number, a below-detection mark (<0.05, BDL, ND) or a missing marker (blank, NA, -999)"));
+    ctx.issues.push(
+      makeIssue(
+        ctx.file,
+        ctx.row,
+        header,
+        text,
+        "a number, a below-detection mark (<0.05, BDL, ND) or a missing marker (blank, NA, -999)",
+      ),
+    );
   } else if (cell.status === "measured" && limits !== undefined && cell.value !== undefined) {
     if (cell.value < limits[0] || cell.value > limits[1]) {
       ctx.issues.push(makeIssue(ctx.file, ctx.row, header, text, `a value between ${limits[0]} and ${limits[1]}`));
@@ -50,7 +58,16 @@ export function readValueCell(
     cell.qcFlag = flag.text;
     const decision = readQcFlag(flag.text, ctx.flagMap);
     if (decision === undefined) {
-      ctx.issues.push(makeIssue(ctx.file, ctx.row, flag.header, flag.text, "a known QC flag (1/2 good, 3/4 bad, 9 missing, A/R, good/bad); value set aside", "warning"));
+      ctx.issues.push(
+        makeIssue(
+          ctx.file,
+          ctx.row,
+          flag.header,
+          flag.text,
+          "a known QC flag (1/2 good, 3/4 bad, 9 missing, A/R, good/bad); value set aside",
+          "warning",
+        ),
+      );
       cell.accepted = false;
     } else if (decision !== "accept") cell.accepted = false;
   }
@@ -65,6 +82,7 @@ export function readValueCell(
 export function readNumberCell(ctx: CellContext, header: string, text: string, min = -Infinity): number | undefined {
   const cell = parseValueText(text, { decimalComma: ctx.decimalComma });
   if (cell.status === "measured" && cell.value !== undefined && cell.value >= min) return cell.value;
-  if (cell.status !== "missing") ctx.issues.push(makeIssue(ctx.file, ctx.row, header, text, min === 0 ? "a number ≥ 0" : "a number", "warning"));
+  if (cell.status !== "missing")
+    ctx.issues.push(makeIssue(ctx.file, ctx.row, header, text, min === 0 ? "a number ≥ 0" : "a number", "warning"));
   return undefined;
 }

@@ -36,11 +36,16 @@ const UNIT_MS: Record<string, number> = {
  */
 export function parseCfTimeUnits(units: string, calendar?: string): CfTimeUnit | undefined {
   if (calendar !== undefined && !/^(standard|gregorian|proleptic_gregorian)$/i.test(calendar.trim())) return undefined;
-  const m = /^\s*(\w+)\s+since\s+(\d{1,4})-(\d{1,2})-(\d{1,2})(?:[ T](\d{1,2}):(\d{1,2})(?::(\d{1,2}(?:\.\d+)?))?)?\s*(Z|UTC|[+-]\d{1,2}(?::?\d{2})?)?\s*$/i.exec(units);
+  const m =
+    /^\s*(\w+)\s+since\s+(\d{1,4})-(\d{1,2})-(\d{1,2})(?:[ T](\d{1,2}):(\d{1,2})(?::(\d{1,2}(?:\.\d+)?))?)?\s*(Z|UTC|[+-]\d{1,2}(?::?\d{2})?)?\s*$/i.exec(
+      units,
+    );
   if (m === null) return undefined;
   const msPerUnit = UNIT_MS[m[1].toLowerCase()];
   if (msPerUnit === undefined) return undefined;
-  let epochMs = Date.UTC(Number(m[2]), Number(m[3]) - 1, Number(m[4]), Number(m[5] ?? 0), Number(m[6] ?? 0), 0) + Number(m[7] ?? 0) * 1000;
+  let epochMs =
+    Date.UTC(Number(m[2]), Number(m[3]) - 1, Number(m[4]), Number(m[5] ?? 0), Number(m[6] ?? 0), 0) +
+    Number(m[7] ?? 0) * 1000;
   if (Number(m[2]) < 100) epochMs = new Date(epochMs).setUTCFullYear(Number(m[2]));
   const zone = m[8];
   if (zone !== undefined && /^[+-]/.test(zone)) {

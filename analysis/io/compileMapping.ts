@@ -47,7 +47,13 @@ export function compileMapping(
   parseUnit: UnitParser = canonicalUnitText,
 ): { compiled: CompiledMapping; issues: ImportIssue[] } {
   const issues: ImportIssue[] = [];
-  const compiled: CompiledMapping = { headers: [...headers], single: {}, constituents: [], flagOf: new Map(), constituentList: [] };
+  const compiled: CompiledMapping = {
+    headers: [...headers],
+    single: {},
+    constituents: [],
+    flagOf: new Map(),
+    constituentList: [],
+  };
   const indexOf = (h: string): number => {
     const exact = headers.indexOf(h);
     return exact >= 0 ? exact : headers.findIndex((x) => x.trim().toLowerCase() === h.trim().toLowerCase());
@@ -56,13 +62,17 @@ export function compileMapping(
   for (const col of mapping.columns) {
     const i = indexOf(col.header);
     if (i < 0) {
-      if (col.role !== "ignore") issues.push(makeIssue(file, 0, col.header, "", `column "${col.header}" named in the mapping`, "warning"));
+      if (col.role !== "ignore")
+        issues.push(makeIssue(file, 0, col.header, "", `column "${col.header}" named in the mapping`, "warning"));
       continue;
     }
     if (col.role === "ignore") continue;
     if (col.role === "flag") {
       const target = col.flagFor === undefined ? -1 : indexOf(col.flagFor);
-      if (target < 0) issues.push(makeIssue(file, 0, col.header, col.flagFor ?? "", "the value column this flag belongs to", "warning"));
+      if (target < 0)
+        issues.push(
+          makeIssue(file, 0, col.header, col.flagFor ?? "", "the value column this flag belongs to", "warning"),
+        );
       else compiled.flagOf.set(target, i);
       continue;
     }
@@ -70,7 +80,15 @@ export function compileMapping(
       const unit = col.unit === undefined ? undefined : concentrationUnitText(col.unit);
       if (unit === undefined) {
         const found = col.unit ?? col.unitText ?? "";
-        issues.push(makeIssue(file, 0, col.header, found, "a concentration unit from the units table (e.g. nmol/L, µmol/kg, µg/L; ppm/ppb/ppt are ambiguous) — set it in the column mapping; column not imported"));
+        issues.push(
+          makeIssue(
+            file,
+            0,
+            col.header,
+            found,
+            "a concentration unit from the units table (e.g. nmol/L, µmol/kg, µg/L; ppm/ppb/ppt are ambiguous) — set it in the column mapping; column not imported",
+          ),
+        );
         continue;
       }
       const name = col.name ?? col.header;
@@ -94,16 +112,30 @@ export function compileMapping(
     if (role === "conductivity") {
       const u = col.unit === undefined ? undefined : parseUnit(col.unit);
       const f = u === undefined ? undefined : COND_FACTOR[u];
-      if (f === undefined) issues.push(makeIssue(file, 0, col.header, col.unit ?? "", "a conductivity unit (mS/cm, µS/cm or S/m)"));
+      if (f === undefined)
+        issues.push(makeIssue(file, 0, col.header, col.unit ?? "", "a conductivity unit (mS/cm, µS/cm or S/m)"));
       else compiled.conductivityToMScm = f;
     }
   }
   const s = compiled.single;
-  if ((s.x !== undefined || s.y !== undefined) && (mapping.epsg === undefined || projDefinition(mapping.epsg) === undefined)) {
-    issues.push(makeIssue(file, 0, headers[s.x ?? s.y ?? 0] ?? "", String(mapping.epsg ?? ""), "a supported EPSG code for the x/y columns (e.g. 27700, 2154, 25832, 326xx/327xx)"));
+  if (
+    (s.x !== undefined || s.y !== undefined) &&
+    (mapping.epsg === undefined || projDefinition(mapping.epsg) === undefined)
+  ) {
+    issues.push(
+      makeIssue(
+        file,
+        0,
+        headers[s.x ?? s.y ?? 0] ?? "",
+        String(mapping.epsg ?? ""),
+        "a supported EPSG code for the x/y columns (e.g. 27700, 2154, 25832, 326xx/327xx)",
+      ),
+    );
   }
-  if (s.station === undefined) issues.push(makeIssue(file, 0, "", "", "a station column; rows are named by their row number", "warning"));
-  if (s.salinity === undefined && s.conductivity === undefined) issues.push(makeIssue(file, 0, "", "", "a salinity (or conductivity) column", "warning"));
+  if (s.station === undefined)
+    issues.push(makeIssue(file, 0, "", "", "a station column; rows are named by their row number", "warning"));
+  if (s.salinity === undefined && s.conductivity === undefined)
+    issues.push(makeIssue(file, 0, "", "", "a salinity (or conductivity) column", "warning"));
   return { compiled, issues };
 }
 

@@ -84,13 +84,61 @@ export const CONSTITUENT_SYNONYMS: Readonly<Record<string, string>> = {
 
 /** Element symbols accepted as constituent names (trace metals and major ions common in estuarine work). */
 export const ELEMENT_SYMBOLS: readonly string[] = [
-  "Fe", "Mn", "Cu", "Ni", "Cd", "Ba", "Zn", "Pb", "Co", "U", "Mo", "Al", "As", "Cr", "Hg", "Sr", "Li",
-  "V", "Ra", "Ca", "Mg", "Na", "K", "B", "Si", "P", "N", "Ag", "Sb", "Se", "Ti", "W", "Rb", "Cs", "Nd",
-  "Ga", "Ge", "Sn", "Tl", "Th", "Y", "La", "Ce",
+  "Fe",
+  "Mn",
+  "Cu",
+  "Ni",
+  "Cd",
+  "Ba",
+  "Zn",
+  "Pb",
+  "Co",
+  "U",
+  "Mo",
+  "Al",
+  "As",
+  "Cr",
+  "Hg",
+  "Sr",
+  "Li",
+  "V",
+  "Ra",
+  "Ca",
+  "Mg",
+  "Na",
+  "K",
+  "B",
+  "Si",
+  "P",
+  "N",
+  "Ag",
+  "Sb",
+  "Se",
+  "Ti",
+  "W",
+  "Rb",
+  "Cs",
+  "Nd",
+  "Ga",
+  "Ge",
+  "Sn",
+  "Tl",
+  "Th",
+  "Y",
+  "La",
+  "Ce",
 ];
 
 /** Qualifier words removed before lookup and kept in the name: "Discrete Chlorophyll-a" → "Chla (discrete)". */
-export const NAME_QUALIFIERS: readonly string[] = ["dissolved", "total", "filtered", "discrete", "calculated", "particulate", "labile"];
+export const NAME_QUALIFIERS: readonly string[] = [
+  "dissolved",
+  "total",
+  "filtered",
+  "discrete",
+  "calculated",
+  "particulate",
+  "labile",
+];
 
 function key(text: string): string {
   return text.toLowerCase().replace(/[\s\-._]/g, "");

@@ -8,7 +8,15 @@
  * @returns "shape-<count>-<8 hex digits>"
  */
 export function fileShapeSignature(headers: readonly string[]): string {
-  const norm = headers.map((h) => h.replace(/^\uFEFF/, "").trim().toLowerCase().replace(/\s+/g, " ")).sort();
+  const norm = headers
+    .map((h) =>
+      h
+        .replace(/^\uFEFF/, "")
+        .trim()
+        .toLowerCase()
+        .replace(/\s+/g, " "),
+    )
+    .sort();
   const text = norm.join("\n");
   let hash = 0x811c9dc5;
   for (let i = 0; i < text.length; i += 1) {
@@ -25,7 +33,10 @@ export function fileShapeSignature(headers: readonly string[]): string {
  * @param saved mappings saved earlier
  * @returns the first saved mapping whose shape matches, or undefined
  */
-export function findSavedMapping<T extends { shape: string }>(headers: readonly string[], saved: readonly T[]): T | undefined {
+export function findSavedMapping<T extends { shape: string }>(
+  headers: readonly string[],
+  saved: readonly T[],
+): T | undefined {
   const shape = fileShapeSignature(headers);
   return saved.find((m) => m.shape === shape);
 }

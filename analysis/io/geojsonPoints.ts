@@ -36,18 +36,39 @@ export function readGeoJsonPoints(input: string | object, options: ReadSurveyOpt
       doc = JSON.parse(input.replace(/^\uFEFF/, "")) as unknown;
     } catch (err) {
       doc = undefined;
-      early.push(makeIssue(file, 0, "", input.slice(0, 80), `valid JSON (${err instanceof Error ? err.message : "parse error"})`));
+      early.push(
+        makeIssue(
+          file,
+          0,
+          "",
+          input.slice(0, 80),
+          `valid JSON (${err instanceof Error ? err.message : "parse error"})`,
+        ),
+      );
     }
   }
   let features: unknown[] = [];
   if (isObject(doc) && doc.type === "FeatureCollection" && Array.isArray(doc.features)) features = doc.features;
   else if (isObject(doc) && doc.type === "Feature") features = [doc];
-  else if (doc !== undefined) early.push(makeIssue(file, 0, "", cellText(isObject(doc) ? (doc.type ?? "") : ""), "a GeoJSON FeatureCollection of Point features"));
+  else if (doc !== undefined)
+    early.push(
+      makeIssue(
+        file,
+        0,
+        "",
+        cellText(isObject(doc) ? (doc.type ?? "") : ""),
+        "a GeoJSON FeatureCollection of Point features",
+      ),
+    );
   const propNames: string[] = [];
   const seen = new Set<string>();
   for (const f of features) {
     if (!isObject(f) || !isObject(f.properties)) continue;
-    for (const k of Object.keys(f.properties)) if (!seen.has(k)) (seen.add(k), propNames.push(k));
+    for (const k of Object.keys(f.properties)) {
+      if (seen.has(k)) continue;
+      seen.add(k);
+      propNames.push(k);
+    }
   }
   const lonName = seen.has("longitude") ? "geometry longitude" : "longitude";
   const latName = seen.has("latitude") ? "geometry latitude" : "latitude";
@@ -63,11 +84,22 @@ export function readGeoJsonPoints(input: string | object, options: ReadSurveyOpt
     if (isObject(geom) && geom.type === "Point" && Array.isArray(geom.coordinates) && geom.coordinates.length >= 2) {
       lon = cellText(geom.coordinates[0]);
       lat = cellText(geom.coordinates[1]);
-    } else early.push(makeIssue(file, row, "geometry", cellText(isObject(geom) ? (geom.type ?? "") : ""), "a Point geometry with [lon, lat]", "warning"));
+    } else
+      early.push(
+        makeIssue(
+          file,
+          row,
+          "geometry",
+          cellText(isObject(geom) ? (geom.type ?? "") : ""),
+          "a Point geometry with [lon, lat]",
+          "warning",
+        ),
+      );
     router.push({ fields: [...propNames.map((k) => cellText(props[k])), lon, lat], row, parseErrors: [] });
   });
   const result = router.finish(0);
-  if (features.length === 0 && early.length === 0) early.push(makeIssue(file, 0, "", "", "at least one feature", "warning"));
+  if (features.length === 0 && early.length === 0)
+    early.push(makeIssue(file, 0, "", "", "at least one feature", "warning"));
   result.issues.unshift(...early);
   return result;
 }

@@ -4,10 +4,7 @@ import { makeIssue } from "./importSummary.ts";
 
 /** How rows are split into surveys. */
 export type SurveyGrouping =
-  | { by: "column" }
-  | { by: "dateGap"; gapDays?: number }
-  | { by: "date" }
-  | { by: "file"; name?: string };
+  { by: "column" } | { by: "dateGap"; gapDays?: number } | { by: "date" } | { by: "file"; name?: string };
 
 /** Default gap between sampling days that starts a new survey [days] (common practice for cruise data). */
 export const DEFAULT_SURVEY_GAP_DAYS = 3;
@@ -16,7 +13,10 @@ const dayMs = 86_400_000;
 const dayOf = (time: string): string => time.slice(0, 10);
 
 function dates(stations: readonly ImportedStation[]): string[] {
-  return stations.map((s) => s.time).filter((t): t is string => t !== undefined).sort();
+  return stations
+    .map((s) => s.time)
+    .filter((t): t is string => t !== undefined)
+    .sort();
 }
 
 /**
@@ -53,21 +53,45 @@ export function groupSurveys(
   else if (grouping.by === "column") {
     for (const s of stations) add(s.surveyLabel ?? "(no survey label)", s);
     const unl = stations.filter((s) => s.surveyLabel === undefined);
-    if (unl.length > 0) issues.push(makeIssue(file, unl[0].sourceRow, "survey", "", `a survey label (${unl.length} rows grouped as "(no survey label)")`, "warning"));
+    if (unl.length > 0)
+      issues.push(
+        makeIssue(
+          file,
+          unl[0].sourceRow,
+          "survey",
+          "",
+          `a survey label (${unl.length} rows grouped as "(no survey label)")`,
+          "warning",
+        ),
+      );
   } else {
     const gap = grouping.by === "date" ? 0 : (grouping.gapDays ?? DEFAULT_SURVEY_GAP_DAYS);
-    if (!Number.isFinite(gap) || gap < 0) throw new RangeError(`groupSurveys(): gapDays must be a finite number ≥ 0, got ${gap}`);
-    const dated = stations.filter((s) => s.time !== undefined).sort((a, b) => ((a.time as string) < (b.time as string) ? -1 : 1));
+    if (!Number.isFinite(gap) || gap < 0)
+      throw new RangeError(`groupSurveys(): gapDays must be a finite number ≥ 0, got ${gap}`);
+    const dated = stations
+      .filter((s) => s.time !== undefined)
+      .sort((a, b) => ((a.time as string) < (b.time as string) ? -1 : 1));
     let name = "";
     let lastDay = Number.NEGATIVE_INFINITY;
     for (const s of dated) {
       const day = Date.parse(`${dayOf(s.time as string)}T00:00:00Z`);
-      if (name === "" || (grouping.by === "date" ? day !== lastDay : day - lastDay > gap * dayMs)) name = dayOf(s.time as string);
+      if (name === "" || (grouping.by === "date" ? day !== lastDay : day - lastDay > gap * dayMs))
+        name = dayOf(s.time as string);
       lastDay = day;
       add(name, s);
     }
     for (const s of undated) add("(undated)", s);
-    if (undated.length > 0) issues.push(makeIssue(file, undated[0].sourceRow, "date", "", `a sampling date (${undated.length} rows grouped as "(undated)")`, "warning"));
+    if (undated.length > 0)
+      issues.push(
+        makeIssue(
+          file,
+          undated[0].sourceRow,
+          "date",
+          "",
+          `a sampling date (${undated.length} rows grouped as "(undated)")`,
+          "warning",
+        ),
+      );
   }
   const surveys: Survey[] = [];
   for (const [name, members] of groups) {
@@ -83,12 +107,27 @@ export function groupSurveys(
     else if (rowsQ.length > 0) {
       const mean = rowsQ.reduce((a, b) => a + b, 0) / rowsQ.length;
       if (rowsQ.some((x) => Math.abs(x - mean) > 0.01 * Math.abs(mean))) {
-        issues.push(makeIssue(file, members[0].sourceRow, "discharge", rowsQ.join(", ").slice(0, 200), `one river discharge per survey; survey "${name}" uses the mean ${mean}`, "warning"));
+        issues.push(
+          makeIssue(
+            file,
+            members[0].sourceRow,
+            "discharge",
+            rowsQ.join(", ").slice(0, 200),
+            `one river discharge per survey; survey "${name}" uses the mean ${mean}`,
+            "warning",
+          ),
+        );
       }
       survey.riverDischargeM3s = mean;
     }
     surveys.push(survey);
   }
-  surveys.sort((a, b) => ((a.startDate ?? "\uffff") < (b.startDate ?? "\uffff") ? -1 : (a.startDate ?? "\uffff") > (b.startDate ?? "\uffff") ? 1 : 0));
+  surveys.sort((a, b) =>
+    (a.startDate ?? "\uffff") < (b.startDate ?? "\uffff")
+      ? -1
+      : (a.startDate ?? "\uffff") > (b.startDate ?? "\uffff")
+        ? 1
+        : 0,
+  );
   return { surveys, issues };
 }

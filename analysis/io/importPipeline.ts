@@ -62,7 +62,11 @@ export interface ImportResult {
  * Default conductivity conversion: PSS-78 practical salinity (with the Hill et al. 1986 extension
  * below S = 2) from the shared seawater core; undefined where the inputs are outside its domain.
  */
-export function pss78Salinity(conductivityMScm: number, temperatureC: number, pressureDbar: number): number | undefined {
+export function pss78Salinity(
+  conductivityMScm: number,
+  temperatureC: number,
+  pressureDbar: number,
+): number | undefined {
   try {
     return practicalSalinityFromConductivity(conductivityMScm, temperatureC, Math.max(0, pressureDbar));
   } catch {
@@ -78,8 +82,18 @@ export function chooseMapping(headers: string[], sample: string[][], options: Re
 }
 
 /** Compiles the mapping and creates the row reader, adding file-level issues. */
-export function startRows(headers: string[], mapping: ColumnMapping, dialect: TextDialect, options: ReadSurveyOptions): { reader: RowReader; compiled: CompiledMapping } {
-  const { compiled, issues } = compileMapping(headers, mapping, options.fileName, options.parseUnit ?? canonicalUnitText);
+export function startRows(
+  headers: string[],
+  mapping: ColumnMapping,
+  dialect: TextDialect,
+  options: ReadSurveyOptions,
+): { reader: RowReader; compiled: CompiledMapping } {
+  const { compiled, issues } = compileMapping(
+    headers,
+    mapping,
+    options.fileName,
+    options.parseUnit ?? canonicalUnitText,
+  );
   const reader = createRowReader(compiled, mapping, {
     file: options.fileName,
     decimalComma: dialect.decimalComma,
@@ -112,12 +126,27 @@ export function finishImport(
   const layered = selectLayer(rows, options.layer ?? { kind: "all" }, file);
   issues.push(...layered.issues);
   const noPos = new Map<string, ImportedStation>();
-  for (const st of layered.stations) if (st.lonLat === undefined && !noPos.has(normaliseStationId(st.id).id)) noPos.set(normaliseStationId(st.id).id, st);
+  for (const st of layered.stations)
+    if (st.lonLat === undefined && !noPos.has(normaliseStationId(st.id).id))
+      noPos.set(normaliseStationId(st.id).id, st);
   for (const st of noPos.values()) {
-    const hint = st.distanceKm !== undefined ? `; the file's along-channel distance ${st.distanceKm} km is kept` : "; it can be placed by its along-axis label or a station table";
-    issues.push(makeIssue(file, st.sourceRow, stationHeader, st.id, `a position for station ${st.id} (latitude/longitude, x/y or a station table)${hint}`, "warning"));
+    const hint =
+      st.distanceKm !== undefined
+        ? `; the file's along-channel distance ${st.distanceKm} km is kept`
+        : "; it can be placed by its along-axis label or a station table";
+    issues.push(
+      makeIssue(
+        file,
+        st.sourceRow,
+        stationHeader,
+        st.id,
+        `a position for station ${st.id} (latitude/longitude, x/y or a station table)${hint}`,
+        "warning",
+      ),
+    );
   }
-  const grouping: SurveyGrouping = options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
+  const grouping: SurveyGrouping =
+    options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
   const grouped = groupSurveys(layered.stations, grouping, compiled.constituentList, file, options.riverDischargeM3s);
   issues.push(...grouped.issues);
   options.onProgress?.(1);

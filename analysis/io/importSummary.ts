@@ -75,7 +75,8 @@ export function mergeSummaries(a: ImportSummary, b: ImportSummary): ImportSummar
     out.rowsRejected += s.rowsRejected;
     out.valuesRejectedByFlag += s.valuesRejectedByFlag;
     out.blankLines += s.blankLines;
-    for (const [k, n] of Object.entries(s.rejectedByReason)) out.rejectedByReason[k] = (out.rejectedByReason[k] ?? 0) + n;
+    for (const [k, n] of Object.entries(s.rejectedByReason))
+      out.rejectedByReason[k] = (out.rejectedByReason[k] ?? 0) + n;
     for (const k of Object.keys(out.valuesByStatus) as CellStatus[]) out.valuesByStatus[k] += s.valuesByStatus[k];
   }
   return out;

@@ -32,12 +32,15 @@ export function combineCells(cells: readonly ValueCell[]): ValueCell {
     return cell;
   }
   const first = cells.find((c) => c.status !== "missing") ?? cells[0];
-  return first === undefined ? { value: undefined, original, status: "missing", accepted: true } : { ...first, original };
+  return first === undefined
+    ? { value: undefined, original, status: "missing", accepted: true }
+    : { ...first, original };
 }
 
 function pick(rows: ImportedStation[], choice: LayerChoice): ImportedStation[] {
   if (choice.kind === "depthAveraged" || choice.kind === "all") return rows;
-  if (choice.kind === "depthRange") return rows.filter((r) => r.depthM !== undefined && r.depthM >= choice.minM && r.depthM <= choice.maxM);
+  if (choice.kind === "depthRange")
+    return rows.filter((r) => r.depthM !== undefined && r.depthM >= choice.minM && r.depthM <= choice.maxM);
   const label = choice.kind;
   const labelled = rows.filter((r) => r.layer === label);
   if (labelled.length > 0) return labelled;
@@ -52,9 +55,17 @@ function merge(rows: ImportedStation[], layer: ImportedStation["layer"]): Import
   const first = rows[0];
   const keys = [...new Set(rows.flatMap((r) => Object.keys(r.values)))];
   const values: Record<string, ValueCell> = {};
-  for (const k of keys) values[k] = combineCells(rows.map((r) => r.values[k] ?? { value: undefined, original: "", status: "missing", accepted: true }));
+  for (const k of keys)
+    values[k] = combineCells(
+      rows.map((r) => r.values[k] ?? { value: undefined, original: "", status: "missing", accepted: true }),
+    );
   const depths = rows.map((r) => r.depthM).filter((d): d is number => d !== undefined);
-  const out: ImportedStation = { ...first, values, salinity: combineCells(rows.map((r) => r.salinity)), contributingRows: rows.map((r) => r.sourceRow) };
+  const out: ImportedStation = {
+    ...first,
+    values,
+    salinity: combineCells(rows.map((r) => r.salinity)),
+    contributingRows: rows.map((r) => r.sourceRow),
+  };
   if (layer !== undefined) out.layer = layer;
   if (depths.length > 0) out.depthM = depths.reduce((a, b) => a + b, 0) / depths.length;
   else delete out.depthM;
@@ -79,8 +90,15 @@ function merge(rows: ImportedStation[], layer: ImportedStation["layer"]): Import
  * @returns one station per group and a warning for each group with no row in the layer
  * @throws RangeError when a depth range has minM > maxM or non-finite bounds
  */
-export function selectLayer(rows: readonly ImportedStation[], choice: LayerChoice, file: string): { stations: ImportedStation[]; issues: ImportIssue[] } {
-  if (choice.kind === "depthRange" && !(Number.isFinite(choice.minM) && Number.isFinite(choice.maxM) && choice.minM <= choice.maxM)) {
+export function selectLayer(
+  rows: readonly ImportedStation[],
+  choice: LayerChoice,
+  file: string,
+): { stations: ImportedStation[]; issues: ImportIssue[] } {
+  if (
+    choice.kind === "depthRange" &&
+    !(Number.isFinite(choice.minM) && Number.isFinite(choice.maxM) && choice.minM <= choice.maxM)
+  ) {
     throw new RangeError(`selectLayer(): depth range needs finite minM ≤ maxM, got ${choice.minM}…${choice.maxM}`);
   }
   if (choice.kind === "all") return { stations: [...rows], issues: [] };
@@ -93,12 +111,22 @@ export function selectLayer(rows: readonly ImportedStation[], choice: LayerChoic
   }
   const stations: ImportedStation[] = [];
   const issues: ImportIssue[] = [];
-  const layerName = choice.kind === "depthAveraged" ? "depthAveraged" : choice.kind === "depthRange" ? "depthRange" : choice.kind;
+  const layerName =
+    choice.kind === "depthAveraged" ? "depthAveraged" : choice.kind === "depthRange" ? "depthRange" : choice.kind;
   for (const g of groups.values()) {
     const chosen = pick(g, choice);
     if (chosen.length === 0) {
       const rowsText = g.map((r) => r.sourceRow).join(", ");
-      issues.push(makeIssue(file, g[0].sourceRow, "", `station ${g[0].id} at ${g[0].time ?? "unknown time"} (rows ${rowsText})`, `a sample in the chosen layer (${layerName})`, "warning"));
+      issues.push(
+        makeIssue(
+          file,
+          g[0].sourceRow,
+          "",
+          `station ${g[0].id} at ${g[0].time ?? "unknown time"} (rows ${rowsText})`,
+          `a sample in the chosen layer (${layerName})`,
+          "warning",
+        ),
+      );
       continue;
     }
     stations.push(merge(chosen, layerName));

@@ -2,9 +2,10 @@ import type { NetCDFReader } from "netcdfjs";
 import type { ImportIssue } from "../survey/survey.ts";
 import { cfTimeToIso, parseCfTimeUnits } from "./cfTime.ts";
 import type { ColumnAssignment, ColumnRole } from "./columnMapping.ts";
-import { normaliseConstituentName } from "./constituentNames.ts";
 import { makeIssue } from "./importSummary.ts";
 import { concentrationUnitText } from "./unitText.ts";
+import type { NcVar } from "./netcdfCf.ts";
+import { attr, constituentName, DEFAULT_FILL, ROLE_BY_STANDARD_NAME } from "./netcdfCf.ts";
 
 /** One netCDF variable laid out as a text column. */
 export interface NetcdfColumn {
@@ -16,39 +17,6 @@ export interface NetcdfColumn {
   text: (row: number) => string;
 }
 
-interface Attr {
-  name: string;
-  value: string | number | number[];
-}
-interface Var {
-  name: string;
-  dimensions: number[];
-  attributes: Attr[];
-  type: string;
-}
-
-/** netCDF default fill values (NetCDF Users Guide, "Fill Values"; from memory). */
-const DEFAULT_FILL: Record<string, number> = { byte: -127, short: -32767, int: -2147483647, float: 9.969209968386869e36, double: 9.969209968386869e36 };
-
-const ROLE_BY_STANDARD_NAME: Record<string, ColumnRole> = {
-  time: "dateTime",
-  latitude: "latitude",
-  longitude: "longitude",
-  depth: "depth",
-  sea_water_practical_salinity: "salinity",
-  sea_water_salinity: "salinity",
-  sea_water_temperature: "temperature",
-  sea_water_ph_reported_on_total_scale: "pH",
-  sea_water_electrical_conductivity: "conductivity",
-  platform_name: "station",
-  platform_id: "station",
-};
-
-const attr = (v: Var, name: string): string | number | undefined => {
-  const a = v.attributes.find((x) => x.name === name);
-  return a === undefined || Array.isArray(a.value) ? undefined : a.value;
-};
-
 /** Mapping entry for a netCDF column. */
 export function cfColumn(c: NetcdfColumn): ColumnAssignment {
   const out: ColumnAssignment = { header: c.header, role: c.role, reason: "CF attributes" };
@@ -58,18 +26,6 @@ export function cfColumn(c: NetcdfColumn): ColumnAssignment {
   return out;
 }
 
-function constituentName(v: Var): string {
-  const sn = String(attr(v, "standard_name") ?? "");
-  const m = /concentration_of_(.+?)_in_sea_water/.exec(sn);
-  const candidates = [m?.[1]?.replace(/^(dissolved_)/, ""), v.name, String(attr(v, "long_name") ?? "")];
-  for (const c of candidates) {
-    if (c === undefined || c === "") continue;
-    const n = normaliseConstituentName(c.replace(/_/g, " ")) ?? normaliseConstituentName(c);
-    if (n !== undefined) return n;
-  }
-  return v.name;
-}
-
 /**
  * Lays the variables of a CF station/profile file out as text columns over the rows spanned by the
  * salinity variable's dimensions (see readNetcdfStations).
@@ -77,18 +33,21 @@ function constituentName(v: Var): string {
  * @param reader an opened netcdfjs reader
  * @returns the columns, the row count and issues, or an error text when no data variable is found
  */
-export function netcdfColumns(reader: NetCDFReader): { columns: NetcdfColumn[]; rowCount: number; issues: ImportIssue[] } | { error: string } {
-  const vars = reader.variables as unknown as Var[];
+export function netcdfColumns(
+  reader: NetCDFReader,
+): { columns: NetcdfColumn[]; rowCount: number; issues: ImportIssue[] } | { error: string } {
+  const vars = reader.variables as unknown as NcVar[];
   const dims = reader.dimensions;
   const recId = reader.recordDimension.id;
   const size = (d: number): number => (d === recId ? reader.recordDimension.length : (dims[d]?.size ?? 0));
   const issues: ImportIssue[] = [];
-  const sn = (v: Var): string => String(attr(v, "standard_name") ?? "");
+  const sn = (v: NcVar): string => String(attr(v, "standard_name") ?? "");
   const main =
     vars.find((v) => ROLE_BY_STANDARD_NAME[sn(v)] === "salinity") ??
     vars.find((v) => ROLE_BY_STANDARD_NAME[sn(v)] === "temperature") ??
     vars.find((v) => ROLE_BY_STANDARD_NAME[sn(v)] === "conductivity");
-  if (main === undefined) return { error: "no variable with standard_name sea_water_practical_salinity or sea_water_temperature" };
+  if (main === undefined)
+    return { error: "no variable with standard_name sea_water_practical_salinity or sea_water_temperature" };
   const mainDims = main.dimensions;
   const rowCount = mainDims.reduce((a, d) => a * size(d), 1);
   const coordOf = (row: number): number[] => {
@@ -114,17 +73,38 @@ export function netcdfColumns(reader: NetCDFReader): { columns: NetcdfColumn[]; 
       for (const d of own) i = i * size(d) + c[mainDims.indexOf(d)];
       return i;
     };
-    const fill = [attr(v, "_FillValue"), attr(v, "missing_value"), DEFAULT_FILL[v.type]].filter((x): x is number => typeof x === "number");
-    const role: ColumnRole = attr(v, "cf_role") === "timeseries_id" || attr(v, "cf_role") === "profile_id" ? "station" : (ROLE_BY_STANDARD_NAME[sn(v)] ?? "ignore");
+    const fill = [attr(v, "_FillValue"), attr(v, "missing_value"), DEFAULT_FILL[v.type]].filter(
+      (x): x is number => typeof x === "number",
+    );
+    const role: ColumnRole =
+      attr(v, "cf_role") === "timeseries_id" || attr(v, "cf_role") === "profile_id"
+        ? "station"
+        : (ROLE_BY_STANDARD_NAME[sn(v)] ?? "ignore");
     const unitsAttr = attr(v, "units");
     const unitText = typeof unitsAttr === "string" ? unitsAttr : undefined;
-    const time = role === "dateTime" && unitText !== undefined ? parseCfTimeUnits(unitText, String(attr(v, "calendar") ?? "standard")) : undefined;
-    if (role === "dateTime" && time === undefined) issues.push(makeIssue("", 0, v.name, unitText ?? "", "CF time units like \"days since 1970-01-01\" (standard calendar)"));
+    const time =
+      role === "dateTime" && unitText !== undefined
+        ? parseCfTimeUnits(unitText, String(attr(v, "calendar") ?? "standard"))
+        : undefined;
+    if (role === "dateTime" && time === undefined)
+      issues.push(
+        makeIssue("", 0, v.name, unitText ?? "", 'CF time units like "days since 1970-01-01" (standard calendar)'),
+      );
     const text = (row: number): string => {
       const i = indexOf(row);
-      if (isChar) return raw.slice(i * strlen, (i + 1) * strlen).join("").replace(/\0/g, "").trim();
+      if (isChar)
+        return raw
+          .slice(i * strlen, (i + 1) * strlen)
+          .join("")
+          .replace(/\0/g, "")
+          .trim();
       const x = raw[i];
-      if (typeof x !== "number" || fill.some((f) => x === f || Math.abs(x - f) <= Math.abs(f) * 1e-6) || !Number.isFinite(x)) return "";
+      if (
+        typeof x !== "number" ||
+        fill.some((f) => x === f || Math.abs(x - f) <= Math.abs(f) * 1e-6) ||
+        !Number.isFinite(x)
+      )
+        return "";
       if (role === "dateTime") return time === undefined ? String(x) : (cfTimeToIso(x, time) ?? String(x));
       return v.type === "float" ? String(Number(x.toPrecision(7))) : String(x);
     };
@@ -139,7 +119,16 @@ export function netcdfColumns(reader: NetCDFReader): { columns: NetcdfColumn[]; 
   if (!columns.some((c) => c.role === "station")) {
     // No station id variable: number the stations along the first dimension of the data.
     columns.unshift({ header: "station (index)", role: "station", text: (row) => String((coordOf(row)[0] ?? 0) + 1) });
-    issues.push(makeIssue("", 0, "station (index)", "", "a station id variable (cf_role timeseries_id or profile_id); stations are numbered 1, 2, … instead", "warning"));
+    issues.push(
+      makeIssue(
+        "",
+        0,
+        "station (index)",
+        "",
+        "a station id variable (cf_role timeseries_id or profile_id); stations are numbered 1, 2, … instead",
+        "warning",
+      ),
+    );
   }
   return { columns, rowCount, issues };
 }

@@ -35,8 +35,11 @@ export function readNetcdfStations(buffer: ArrayBuffer | Uint8Array, options: Re
   if (reader === undefined || built === undefined || "error" in built) {
     const router = new RecordRouter({ delimiter: ",", decimalComma: false }, options);
     const result = router.finish(0);
-    const why = reader === undefined ? failure : built !== undefined && "error" in built ? built.error : "unreadable variables";
-    result.issues.unshift(makeIssue(file, 0, "", why.slice(0, 200), "a netCDF-3 file with CF station or profile variables"));
+    const why =
+      reader === undefined ? failure : built !== undefined && "error" in built ? built.error : "unreadable variables";
+    result.issues.unshift(
+      makeIssue(file, 0, "", why.slice(0, 200), "a netCDF-3 file with CF station or profile variables"),
+    );
     return result;
   }
   const { columns, rowCount } = built;
@@ -45,7 +48,8 @@ export function readNetcdfStations(buffer: ArrayBuffer | Uint8Array, options: Re
   const mapping: ColumnMapping = options.mapping ?? { shape: fileShapeSignature(headers), columns: assignments };
   const router = new RecordRouter({ delimiter: ",", decimalComma: false }, { ...options, mapping });
   router.push({ fields: headers, row: 1, parseErrors: [] });
-  for (let r = 0; r < rowCount; r += 1) router.push({ fields: columns.map((c) => c.text(r)), row: r + 2, parseErrors: [] });
+  for (let r = 0; r < rowCount; r += 1)
+    router.push({ fields: columns.map((c) => c.text(r)), row: r + 2, parseErrors: [] });
   const result = router.finish(0);
   result.issues.unshift(...built.issues.map((i) => ({ ...i, file })));
   return result;

@@ -52,7 +52,10 @@ export const DEFAULT_FLAG_MAP: Readonly<Record<string, FlagDecision>> = {
  * @param map flag map (keys lower-case); defaults to {@link DEFAULT_FLAG_MAP}
  * @returns the decision, "accept" for a blank flag, or undefined for an unknown flag
  */
-export function readQcFlag(text: string, map: Readonly<Record<string, FlagDecision>> = DEFAULT_FLAG_MAP): FlagDecision | undefined {
+export function readQcFlag(
+  text: string,
+  map: Readonly<Record<string, FlagDecision>> = DEFAULT_FLAG_MAP,
+): FlagDecision | undefined {
   const t = text.trim().toLowerCase().replace(/\.0+$/, "");
   if (t.length === 0) return "accept";
   return map[t];
@@ -87,5 +90,7 @@ export function flagTarget(header: string, headers: readonly string[]): string |
 
 /** True for a row-level flag header: "flag", "qc", "qc_flag", "quality", "quality_flag", "row_flag". */
 export function isRowFlagHeader(header: string): boolean {
-  return /^(flag|qc|qf|qc[\s_-]?flag|quality|quality[\s_-]?flag|row[\s_-]?flag|sample[\s_-]?flag)$/i.test(header.trim());
+  return /^(flag|qc|qf|qc[\s_-]?flag|quality|quality[\s_-]?flag|row[\s_-]?flag|sample[\s_-]?flag)$/i.test(
+    header.trim(),
+  );
 }

@@ -31,12 +31,15 @@ export function readSurveyText(text: string, options: ReadSurveyOptions): Import
 }
 
 /** Text in pieces: a WHATWG ReadableStream or any (async) iterable of strings or UTF-8 bytes. */
-export type TextChunkSource = ReadableStream<Uint8Array | string> | AsyncIterable<Uint8Array | string> | Iterable<Uint8Array | string>;
+export type TextChunkSource =
+  ReadableStream<Uint8Array | string> | AsyncIterable<Uint8Array | string> | Iterable<Uint8Array | string>;
 
 async function* decodeChunks(source: TextChunkSource, counter: { size: number }): AsyncGenerator<string> {
   const decoder = new TextDecoder("utf-8");
   const iterable: AsyncIterable<Uint8Array | string> | Iterable<Uint8Array | string> =
-    typeof (source as ReadableStream).getReader === "function" ? readAll(source as ReadableStream<Uint8Array | string>) : (source as AsyncIterable<Uint8Array | string>);
+    typeof (source as ReadableStream).getReader === "function"
+      ? readAll(source as ReadableStream<Uint8Array | string>)
+      : (source as AsyncIterable<Uint8Array | string>);
   for await (const chunk of iterable) {
     counter.size += chunk.length;
     yield typeof chunk === "string" ? chunk : decoder.decode(chunk, { stream: true });
@@ -67,7 +70,10 @@ async function* readAll<T>(stream: ReadableStream<T>): AsyncGenerator<T> {
  * @param options as for readSurveyText, plus totalSize for progress
  * @returns a promise of the same result readSurveyText gives for the whole text
  */
-export async function readSurveyStream(source: TextChunkSource, options: ReadSurveyOptions & { totalSize?: number }): Promise<ImportResult> {
+export async function readSurveyStream(
+  source: TextChunkSource,
+  options: ReadSurveyOptions & { totalSize?: number },
+): Promise<ImportResult> {
   const counter = { size: 0 };
   const chunks = decodeChunks(source, counter);
   let head = "";
@@ -91,7 +97,8 @@ export async function readSurveyStream(source: TextChunkSource, options: ReadSur
   const blank = await parseDelimitedChunks(all(), dialect, router.push, () => {
     handed += 1;
     if (total === undefined || total <= 0) return;
-    const sizeSoFar = handed <= early0 ? Math.min(counter.size, (counter.size * handed) / Math.max(early0, 1)) : counter.size;
+    const sizeSoFar =
+      handed <= early0 ? Math.min(counter.size, (counter.size * handed) / Math.max(early0, 1)) : counter.size;
     options.onProgress?.(Math.min(1, sizeSoFar / total));
   });
   return router.finish(blank);

@@ -28,12 +28,25 @@ export class RecordRouter {
   start(): void {
     if (this.reader !== undefined) return;
     const [head, ...rest] = this.buffer;
-    this.headers = head === undefined ? [] : head.fields.map((h, i) => (h.trim() === "" ? `column ${i + 1}` : h.trim()));
-    this.mapping = chooseMapping(this.headers, rest.map((r) => r.fields), this.options);
+    this.headers =
+      head === undefined ? [] : head.fields.map((h, i) => (h.trim() === "" ? `column ${i + 1}` : h.trim()));
+    this.mapping = chooseMapping(
+      this.headers,
+      rest.map((r) => r.fields),
+      this.options,
+    );
     const { reader, compiled } = startRows(this.headers, this.mapping, this.dialect, this.options);
     this.reader = reader;
     this.compiled = compiled;
-    if (head === undefined) reader.issues.push({ file: this.options.fileName, row: 0, column: "", value: "", expected: "a header row and data rows (the file is empty)", severity: "error" });
+    if (head === undefined)
+      reader.issues.push({
+        file: this.options.fileName,
+        row: 0,
+        column: "",
+        value: "",
+        expected: "a header row and data rows (the file is empty)",
+        severity: "error",
+      });
     for (const r of rest) reader.read(r);
     this.buffer = [];
   }
@@ -42,8 +55,22 @@ export class RecordRouter {
     const reader = this.reader as RowReader;
     reader.summary.blankLines = blankLines;
     if (this.headers.length > 0 && reader.summary.rowsRead === 0) {
-      reader.issues.push({ file: this.options.fileName, row: 1, column: "", value: this.headers.join(",").slice(0, 200), expected: "data rows below the header", severity: "warning" });
+      reader.issues.push({
+        file: this.options.fileName,
+        row: 1,
+        column: "",
+        value: this.headers.join(",").slice(0, 200),
+        expected: "data rows below the header",
+        severity: "warning",
+      });
     }
-    return finishImport(reader, this.compiled as CompiledMapping, this.mapping as ColumnMapping, this.headers, this.dialect, this.options);
+    return finishImport(
+      reader,
+      this.compiled as CompiledMapping,
+      this.mapping as ColumnMapping,
+      this.headers,
+      this.dialect,
+      this.options,
+    );
   }
 }

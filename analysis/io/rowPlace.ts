@@ -33,7 +33,12 @@ const LAYER_WORDS: Record<string, "surface" | "bottom" | "middle"> = {
  * @param fields the row's fields
  * @returns the fields that could be read
  */
-export function readRowPlace(ctx: CellContext, compiled: CompiledMapping, mapping: ColumnMapping, fields: readonly string[]): RowPlace {
+export function readRowPlace(
+  ctx: CellContext,
+  compiled: CompiledMapping,
+  mapping: ColumnMapping,
+  fields: readonly string[],
+): RowPlace {
   const s = compiled.single;
   const h = (i: number): string => compiled.headers[i] ?? "";
   const text = (i: number | undefined): string => (i === undefined ? "" : (fields[i] ?? ""));
@@ -43,11 +48,22 @@ export function readRowPlace(ctx: CellContext, compiled: CompiledMapping, mappin
     let timeText: string | undefined;
     if (s.time !== undefined && text(s.time).trim() !== "") {
       if (parseTimeOfDay(text(s.time)) === undefined) {
-        ctx.issues.push(makeIssue(ctx.file, ctx.row, h(s.time), text(s.time), "a time of day (HH:MM, HH:MM:SS or HMM)", "warning"));
+        ctx.issues.push(
+          makeIssue(ctx.file, ctx.row, h(s.time), text(s.time), "a time of day (HH:MM, HH:MM:SS or HMM)", "warning"),
+        );
       } else timeText = text(s.time);
     }
     const dt = parseDateTimeText(text(dateIdx), mapping.dateOrder, timeText, mapping.timeZone);
-    if (dt === undefined) ctx.issues.push(makeIssue(ctx.file, ctx.row, h(dateIdx), text(dateIdx), "a date (ISO 8601 or numeric in the mapping's day/month/year order)"));
+    if (dt === undefined)
+      ctx.issues.push(
+        makeIssue(
+          ctx.file,
+          ctx.row,
+          h(dateIdx),
+          text(dateIdx),
+          "a date (ISO 8601 or numeric in the mapping's day/month/year order)",
+        ),
+      );
     else out.time = dt.iso;
   } else if (dateIdx !== undefined) {
     ctx.issues.push(makeIssue(ctx.file, ctx.row, h(dateIdx), "", "a sampling date", "warning"));
@@ -59,15 +75,45 @@ export function readRowPlace(ctx: CellContext, compiled: CompiledMapping, mappin
     const lon = parseCoordinateText(lonT, "longitude", ctx.decimalComma);
     if (lat !== undefined && lon !== undefined) out.lonLat = [lon, lat];
     else {
-      if (lat === undefined) ctx.issues.push(makeIssue(ctx.file, ctx.row, s.latitude === undefined ? "" : h(s.latitude), latT, "a latitude (decimal degrees or degrees-minutes like 45°12.5'N)", "warning"));
-      if (lon === undefined) ctx.issues.push(makeIssue(ctx.file, ctx.row, s.longitude === undefined ? "" : h(s.longitude), lonT, "a longitude (decimal degrees or degrees-minutes like 2°03.1'W)", "warning"));
+      if (lat === undefined)
+        ctx.issues.push(
+          makeIssue(
+            ctx.file,
+            ctx.row,
+            s.latitude === undefined ? "" : h(s.latitude),
+            latT,
+            "a latitude (decimal degrees or degrees-minutes like 45°12.5'N)",
+            "warning",
+          ),
+        );
+      if (lon === undefined)
+        ctx.issues.push(
+          makeIssue(
+            ctx.file,
+            ctx.row,
+            s.longitude === undefined ? "" : h(s.longitude),
+            lonT,
+            "a longitude (decimal degrees or degrees-minutes like 2°03.1'W)",
+            "warning",
+          ),
+        );
     }
   } else if (s.x !== undefined && s.y !== undefined && mapping.epsg !== undefined) {
     const x = parseNumberText(text(s.x), { decimalComma: ctx.decimalComma });
     const y = parseNumberText(text(s.y), { decimalComma: ctx.decimalComma });
     const ll = x === undefined || y === undefined ? undefined : projectedToLonLat(x, y, mapping.epsg);
     if (ll !== undefined) out.lonLat = ll;
-    else ctx.issues.push(makeIssue(ctx.file, ctx.row, h(s.x), `${text(s.x)} ${text(s.y)}`, `projected x/y in EPSG:${mapping.epsg}`, "warning"));
+    else
+      ctx.issues.push(
+        makeIssue(
+          ctx.file,
+          ctx.row,
+          h(s.x),
+          `${text(s.x)} ${text(s.y)}`,
+          `projected x/y in EPSG:${mapping.epsg}`,
+          "warning",
+        ),
+      );
   }
   if (s.depth !== undefined) {
     const d = readNumberCell(ctx, h(s.depth), text(s.depth), 0);
@@ -80,7 +126,16 @@ export function readRowPlace(ctx: CellContext, compiled: CompiledMapping, mappin
     if (layer !== undefined) out.layer = layer;
     if (depth !== undefined && out.depthM === undefined) out.depthM = depth;
     if (layer === undefined && depth === undefined && label !== "" && label.toUpperCase() !== "NA") {
-      ctx.issues.push(makeIssue(ctx.file, ctx.row, h(s.depthLabel), label, "a layer label (S/surface, B/bottom, M/mid) or a label listed in the mapping", "warning"));
+      ctx.issues.push(
+        makeIssue(
+          ctx.file,
+          ctx.row,
+          h(s.depthLabel),
+          label,
+          "a layer label (S/surface, B/bottom, M/mid) or a label listed in the mapping",
+          "warning",
+        ),
+      );
     }
   }
   return out;

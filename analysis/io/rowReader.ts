@@ -9,9 +9,10 @@ import { countRejected, emptySummary, makeIssue } from "./importSummary.ts";
 import type { FlagDecision } from "./qcFlags.ts";
 import { DEFAULT_FLAG_MAP, readQcFlag } from "./qcFlags.ts";
 import { readRowPlace } from "./rowPlace.ts";
+import type { SalinityFromConductivity } from "./conductivitySalinity.ts";
+import { salinityFromConductivityCell } from "./conductivitySalinity.ts";
 
-/** Practical salinity from conductivity [mS/cm], temperature [°C] and pressure [dbar]. */
-export type SalinityFromConductivity = (conductivityMScm: number, temperatureC: number, pressureDbar: number) => number | undefined;
+export type { SalinityFromConductivity };
 
 /** Options for reading rows. */
 export interface RowReaderOptions {
@@ -41,7 +42,11 @@ const VALUE_ROLES = ["salinity", "temperature", "pH", "conductivity"] as const;
  * @param options file name, decimal comma, flag map, conductivity conversion
  * @returns the reader; read() never throws on bad data
  */
-export function createRowReader(compiled: CompiledMapping, mapping: ColumnMapping, options: RowReaderOptions): RowReader {
+export function createRowReader(
+  compiled: CompiledMapping,
+  mapping: ColumnMapping,
+  options: RowReaderOptions,
+): RowReader {
   const issues: ImportIssue[] = [];
   const stations: ImportedStation[] = [];
   const summary = emptySummary();
@@ -58,9 +63,21 @@ export function createRowReader(compiled: CompiledMapping, mapping: ColumnMappin
     const { fields, row } = record;
     summary.rowsRead += 1;
     const ctx: CellContext = { file: options.file, row, decimalComma: options.decimalComma, flagMap, issues };
-    for (const e of record.parseErrors) issues.push(makeIssue(options.file, row, "", fields.join(",").slice(0, 120), `well-formed delimited text (${e})`, "warning"));
+    for (const e of record.parseErrors)
+      issues.push(
+        makeIssue(
+          options.file,
+          row,
+          "",
+          fields.join(",").slice(0, 120),
+          `well-formed delimited text (${e})`,
+          "warning",
+        ),
+      );
     if (fields.length !== width) {
-      issues.push(makeIssue(options.file, row, "", String(fields.length), `${width} fields as in the header row`, "warning"));
+      issues.push(
+        makeIssue(options.file, row, "", String(fields.length), `${width} fields as in the header row`, "warning"),
+      );
     }
     const cellText = (i: number | undefined): string => (i === undefined ? "" : (fields[i] ?? ""));
     const flagged = (i: number): { text: string; header: string } | undefined => {
@@ -83,7 +100,9 @@ export function createRowReader(compiled: CompiledMapping, mapping: ColumnMappin
       if (d !== "accept") {
         const reason = d === undefined ? "unknown row QC flag" : "row QC flag rejects";
         countRejected(summary, reason);
-        issues.push(makeIssue(options.file, row, header(s.rowFlag), rowFlag, "a row QC flag that accepts the row", "warning"));
+        issues.push(
+          makeIssue(options.file, row, header(s.rowFlag), rowFlag, "a row QC flag that accepts the row", "warning"),
+        );
         return;
       }
     }
@@ -97,7 +116,8 @@ export function createRowReader(compiled: CompiledMapping, mapping: ColumnMappin
       cells[role] = c;
     }
     let salinity = cells.salinity;
-    if (salinity === undefined) salinity = salinityFromConductivityCell(ctx, cells, compiled, options, place.depthM);
+    if (salinity === undefined)
+      salinity = salinityFromConductivityCell(ctx, cells, compiled, options.salinityFromConductivity, place.depthM);
     const values: Record<string, ValueCell> = {};
     for (const c of compiled.constituents) {
       const cell = readValueCell(ctx, header(c.index), cellText(c.index), flagged(c.index));
@@ -121,26 +141,4 @@ export function createRowReader(compiled: CompiledMapping, mapping: ColumnMappin
     summary.rowsAccepted += 1;
   };
   return { read, stations, issues, summary };
-}
-
-function salinityFromConductivityCell(
-  ctx: CellContext,
-  cells: Partial<Record<string, ValueCell>>,
-  compiled: CompiledMapping,
-  options: RowReaderOptions,
-  depthM: number | undefined,
-): ValueCell {
-  const cond = cells.conductivity;
-  const missing: ValueCell = { value: undefined, original: cond?.original ?? "", status: "missing", accepted: true };
-  if (cond === undefined || cond.status !== "measured" || cond.value === undefined) return cond === undefined ? missing : { ...cond };
-  const t = cells.temperature?.value;
-  const f = compiled.conductivityToMScm;
-  if (options.salinityFromConductivity === undefined || t === undefined || f === undefined) return missing;
-  // Pressure from depth: 1 m ≈ 1 dbar (common practice for shallow estuarine samples).
-  const sp = options.salinityFromConductivity(cond.value * f, t, depthM ?? 0);
-  if (sp === undefined || !Number.isFinite(sp)) {
-    ctx.issues.push(makeIssue(ctx.file, ctx.row, compiled.headers[compiled.single.conductivity ?? 0] ?? "", cond.original, "a conductivity that converts to practical salinity"));
-    return { value: undefined, original: cond.original, status: "invalid", accepted: false };
-  }
-  return { value: sp, original: cond.original, status: "measured", accepted: cond.accepted };
 }

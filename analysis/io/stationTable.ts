@@ -44,7 +44,12 @@ export function readStationTable(text: string, options: { fileName: string; mapp
   const records: { fields: string[]; row: number }[] = [];
   parseDelimitedText(text, dialect, (r) => records.push(r));
   const headers = records.length > 0 ? records[0].fields.map((h) => h.trim()) : [];
-  const mapping = options.mapping ?? suggestMapping(headers, records.slice(1, 30).map((r) => r.fields));
+  const mapping =
+    options.mapping ??
+    suggestMapping(
+      headers,
+      records.slice(1, 30).map((r) => r.fields),
+    );
   const { compiled } = compileMapping(headers, mapping, file);
   const issues: ImportIssue[] = [];
   const nameIdx = headers.findIndex((h) => /^(name|station name|site name|location)$/i.test(h));
@@ -69,7 +74,17 @@ export function readStationTable(text: string, options: { fileName: string; mapp
     }
     const key = normaliseStationId(id).id;
     const prev = seen.get(key);
-    if (prev !== undefined) issues.push(makeIssue(file, rec.row, headers[idIdx ?? 0], id, `a station id not already used (row ${prev}); first row kept`, "warning"));
+    if (prev !== undefined)
+      issues.push(
+        makeIssue(
+          file,
+          rec.row,
+          headers[idIdx ?? 0],
+          id,
+          `a station id not already used (row ${prev}); first row kept`,
+          "warning",
+        ),
+      );
     else {
       seen.set(key, rec.row);
       stations.push(st);
@@ -107,12 +122,25 @@ export function joinStationTable(
       reported.add(key);
     };
     if (rec === undefined) {
-      once(`missing ${norm.id}`, makeIssue(file, r.sourceRow, column, r.id, `a station id listed in ${table.file}`, "warning"));
+      once(
+        `missing ${norm.id}`,
+        makeIssue(file, r.sourceRow, column, r.id, `a station id listed in ${table.file}`, "warning"),
+      );
       return r;
     }
     if (rec.id.trim() !== r.id.trim()) {
       const how = [...new Set([...norm.changes, ...normaliseStationId(rec.id).changes])].join(", ") || "case";
-      once(`norm ${r.id}`, makeIssue(file, r.sourceRow, column, r.id, `matched station "${rec.id}" of ${table.file} after normalising (${how})`, "warning"));
+      once(
+        `norm ${r.id}`,
+        makeIssue(
+          file,
+          r.sourceRow,
+          column,
+          r.id,
+          `matched station "${rec.id}" of ${table.file} after normalising (${how})`,
+          "warning",
+        ),
+      );
     }
     const out: ImportedStation = { ...r };
     if (out.lonLat === undefined && rec.lonLat !== undefined) out.lonLat = rec.lonLat;

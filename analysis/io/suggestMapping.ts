@@ -28,7 +28,11 @@ const ROLE_PATTERNS: ReadonlyArray<[ColumnRole, RegExp]> = [
 ];
 
 function simplify(name: string): string {
-  return name.toLowerCase().replace(/[_\-.,:/]+/g, " ").replace(/\s+/g, " ").trim();
+  return name
+    .toLowerCase()
+    .replace(/[_\-.,:/]+/g, " ")
+    .replace(/\s+/g, " ")
+    .trim();
 }
 
 function looksLikeLabels(values: readonly string[]): boolean {
@@ -83,8 +87,16 @@ export function suggestMapping(
     const name = normaliseConstituentName(parts.name);
     if (name !== undefined) {
       const conc = parts.unitText === undefined ? undefined : concentrationUnitText(parts.unitText);
-      const unitFields = { ...(conc !== undefined ? { unit: conc } : {}), ...(parts.unitText !== undefined ? { unitText: parts.unitText } : {}) };
-      const why = conc !== undefined ? `unit ${conc}` : parts.unitText !== undefined ? `unknown unit "${parts.unitText}"` : "no unit in header";
+      const unitFields = {
+        ...(conc !== undefined ? { unit: conc } : {}),
+        ...(parts.unitText !== undefined ? { unitText: parts.unitText } : {}),
+      };
+      const why =
+        conc !== undefined
+          ? `unit ${conc}`
+          : parts.unitText !== undefined
+            ? `unknown unit "${parts.unitText}"`
+            : "no unit in header";
       return { header, role: "constituent", name, ...unitFields, reason: `constituent ${name}, ${why}` };
     }
     return { header, role: "ignore", reason: "not recognised" };

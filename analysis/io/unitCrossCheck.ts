@@ -7,8 +7,20 @@ import { makeIssue } from "./importSummary.ts";
 
 /** The element a constituent's amount or mass counts (carbon for DOC/POC, nitrogen for DON/PN, ...). */
 export const COUNTED_ELEMENT: Readonly<Record<string, string>> = {
-  DOC: "C", POC: "C", DIC: "C", DON: "N", PN: "N", PON: "N", DIN: "N", NO3: "N", NO2: "N", NH4: "N",
-  "NO3+NO2": "N", DOP: "P", PO4: "P", Si: "Si",
+  DOC: "C",
+  POC: "C",
+  DIC: "C",
+  DON: "N",
+  PN: "N",
+  PON: "N",
+  DIN: "N",
+  NO3: "N",
+  NO2: "N",
+  NH4: "N",
+  "NO3+NO2": "N",
+  DOP: "P",
+  PO4: "P",
+  Si: "Si",
 };
 
 /** Relative disagreement above which two columns of one constituent are reported (common practice: 5 %). */
@@ -44,7 +56,11 @@ function expectedRatio(fromUnit: string, toUnit: string, element: string | undef
  * @param file file name for issues
  * @returns one warning per inconsistent pair
  */
-export function crossCheckUnits(stations: readonly ImportedStation[], columns: readonly ConstituentColumn[], file: string): ImportIssue[] {
+export function crossCheckUnits(
+  stations: readonly ImportedStation[],
+  columns: readonly ConstituentColumn[],
+  file: string,
+): ImportIssue[] {
   const issues: ImportIssue[] = [];
   for (let i = 0; i < columns.length; i += 1) {
     for (let j = i + 1; j < columns.length; j += 1) {
@@ -59,7 +75,14 @@ export function crossCheckUnits(stations: readonly ImportedStation[], columns: r
       for (const s of stations) {
         const va = s.values[a.key];
         const vb = s.values[b.key];
-        if (va?.status === "measured" && vb?.status === "measured" && va.value !== undefined && vb.value !== undefined && vb.value > 0 && va.value > 0) {
+        if (
+          va?.status === "measured" &&
+          vb?.status === "measured" &&
+          va.value !== undefined &&
+          vb.value !== undefined &&
+          vb.value > 0 &&
+          va.value > 0
+        ) {
           ratios.push(va.value / vb.value);
         }
       }

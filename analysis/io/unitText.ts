@@ -10,7 +10,6 @@ import { parseUnit } from "../seawater/units.ts";
 /** Turns unit text into a canonical unit string, or undefined when the text is not a known unit. */
 export type UnitParser = (text: string) => string | undefined;
 
-
 const FIXED: Record<string, string> = {
   c: "°C",
   degc: "°C",

@@ -23,7 +23,17 @@ export const MISSING_MARKERS: readonly string[] = [
 ];
 
 /** Below-detection words without a limit (compared case-insensitively, dots and spaces ignored). */
-export const BELOW_DETECTION_WORDS: readonly string[] = ["bdl", "nd", "<dl", "<lod", "bd", "<loq", "belowdl", "lod", "dl"];
+export const BELOW_DETECTION_WORDS: readonly string[] = [
+  "bdl",
+  "nd",
+  "<dl",
+  "<lod",
+  "bd",
+  "<loq",
+  "belowdl",
+  "lod",
+  "dl",
+];
 
 const NUMBER_DOT = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 const NUMBER_COMMA = /^[+-]?(\d+,?\d*|,\d+)([eE][+-]?\d+)?$/;
@@ -83,7 +93,8 @@ export function parseValueText(text: string, options: NumberTextOptions = {}): V
   const original = text;
   const v = parseNumberText(text, options);
   if (v !== undefined) {
-    if (v === -999 || v === -9999 || v === -99999) return { value: undefined, original, status: "missing", accepted: true };
+    if (v === -999 || v === -9999 || v === -99999)
+      return { value: undefined, original, status: "missing", accepted: true };
     return { value: v, original, status: "measured", accepted: true };
   }
   if (isMissingText(text)) return { value: undefined, original, status: "missing", accepted: true };

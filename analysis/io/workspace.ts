@@ -35,7 +35,9 @@ export function exportWorkspace(ws: WorkspaceDocument): string {
   const checked = workspaceSchema.safeParse(ws);
   if (!checked.success) {
     const first = checked.error.issues[0];
-    throw new TypeError(`exportWorkspace(): ws.${first?.path.join(".") ?? ""} is invalid: ${first?.message ?? "schema mismatch"}`);
+    throw new TypeError(
+      `exportWorkspace(): ws.${first?.path.join(".") ?? ""} is invalid: ${first?.message ?? "schema mismatch"}`,
+    );
   }
   // The validated copy has the schema's key order, so export(import(export(ws))) is byte-identical.
   return JSON.stringify(checked.data, null, 2);
@@ -60,7 +62,9 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
   try {
     doc = JSON.parse(text.replace(/^\uFEFF/, "")) as unknown;
   } catch (err) {
-    issues.push(makeIssue(FILE, 0, "", text.slice(0, 80), `JSON text (${err instanceof Error ? err.message : "parse error"})`));
+    issues.push(
+      makeIssue(FILE, 0, "", text.slice(0, 80), `JSON text (${err instanceof Error ? err.message : "parse error"})`),
+    );
     return { workspace: undefined, issues };
   }
   if (typeof doc !== "object" || doc === null || Array.isArray(doc)) {
@@ -73,7 +77,15 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
     return { workspace: undefined, issues };
   }
   if (version > WORKSPACE_VERSION) {
-    issues.push(makeIssue(FILE, 0, "version", String(version), `version ${WORKSPACE_VERSION} or older (written by a newer Brackline)`));
+    issues.push(
+      makeIssue(
+        FILE,
+        0,
+        "version",
+        String(version),
+        `version ${WORKSPACE_VERSION} or older (written by a newer Brackline)`,
+      ),
+    );
     return { workspace: undefined, issues };
   }
   while (version < WORKSPACE_VERSION) {
@@ -92,7 +104,11 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
   if (Array.isArray(record.surveys)) {
     record.surveys = record.surveys.filter((s, i) => {
       const r = surveySchema.safeParse(s);
-      if (!r.success) issues.push(...zodIssues(r.error, `surveys.${i}.`), makeIssue(FILE, 0, `surveys.${i}`, "", "a valid survey; this survey was left out", "warning"));
+      if (!r.success)
+        issues.push(
+          ...zodIssues(r.error, `surveys.${i}.`),
+          makeIssue(FILE, 0, `surveys.${i}`, "", "a valid survey; this survey was left out", "warning"),
+        );
       return r.success;
     });
   }

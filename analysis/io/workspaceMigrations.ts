@@ -26,7 +26,8 @@ export const workspaceV1Schema = z.looseObject({
  */
 export function migrateV1toV2(doc: z.infer<typeof workspaceV1Schema>): Record<string, unknown> {
   const line = doc.centerline ?? [];
-  const centerline = line.length >= 2 ? { type: "Feature", geometry: { type: "LineString", coordinates: line }, properties: {} } : null;
+  const centerline =
+    line.length >= 2 ? { type: "Feature", geometry: { type: "LineString", coordinates: line }, properties: {} } : null;
   const mappings = Object.entries(doc.mappings ?? {}).map(([shape, m]) => ({ ...m, shape }));
   const settings: Record<string, unknown> = {};
   if (doc.surveyGapDays !== undefined) settings.grouping = { by: "dateGap", gapDays: doc.surveyGapDays };
@@ -45,6 +46,8 @@ export function migrateV1toV2(doc: z.infer<typeof workspaceV1Schema>): Record<st
 }
 
 /** Migration steps: from version n to n + 1. */
-export const WORKSPACE_MIGRATIONS: Readonly<Record<number, { schema: z.ZodType; migrate: (doc: never) => Record<string, unknown> }>> = {
+export const WORKSPACE_MIGRATIONS: Readonly<
+  Record<number, { schema: z.ZodType; migrate: (doc: never) => Record<string, unknown> }>
+> = {
   1: { schema: workspaceV1Schema, migrate: migrateV1toV2 as (doc: never) => Record<string, unknown> },
 };

@@ -64,12 +64,19 @@ const lineGeometry = z.union([
 const markerGeometry = z.object({ type: z.literal("Point"), coordinates: position });
 const properties = z.record(z.string(), z.json()).nullable();
 const lineFeature = z.looseObject({ type: z.literal("Feature"), geometry: lineGeometry, properties });
-const anyFeature = z.looseObject({ type: z.literal("Feature"), geometry: z.union([lineGeometry, markerGeometry]), properties });
+const anyFeature = z.looseObject({
+  type: z.literal("Feature"),
+  geometry: z.union([lineGeometry, markerGeometry]),
+  properties,
+});
 /**
  * Channel centerline: a GeoJSON (RFC 7946) line feature, or a collection of line features that may
  * also hold Point markers (mouth, head).
  */
-export const centerlineSchema = z.union([lineFeature, z.looseObject({ type: z.literal("FeatureCollection"), features: z.array(anyFeature) })]);
+export const centerlineSchema = z.union([
+  lineFeature,
+  z.looseObject({ type: z.literal("FeatureCollection"), features: z.array(anyFeature) }),
+]);
 
 const layerChoice = z.union([
   z.object({ kind: z.enum(["all", "surface", "bottom", "depthAveraged"]) }),
@@ -94,7 +101,9 @@ export const workspaceSettingsSchema = z.looseObject({
 const endmember = z.object({ salinity: finite, conc: finite, concSd: finite.optional() });
 /** Analysis choices (end-member overrides, precision, discharge, constants). Unknown keys are kept. */
 export const analysisChoicesSchema = z.looseObject({
-  endmemberOverrides: z.record(z.string(), z.object({ river: endmember.optional(), sea: endmember.optional() })).optional(),
+  endmemberOverrides: z
+    .record(z.string(), z.object({ river: endmember.optional(), sea: endmember.optional() }))
+    .optional(),
   precisionPercent: z.record(z.string(), finite).optional(),
   riverDischargeM3s: finite.optional(),
   constantSet: z.string().optional(),

@@ -31,7 +31,10 @@ describe("parseCoordinateText (decimal degrees, degrees-minutes, degrees-minutes
     ["-45 N", "latitude"],
     ["abc", "latitude"],
     ["", "longitude"],
-  ] as const)("parseCoordinateText(%j, %s) is undefined (out of range, wrong hemisphere or not a coordinate)", (text, axis) => {
-    expect(parseCoordinateText(text, axis)).toBeUndefined();
-  });
+  ] as const)(
+    "parseCoordinateText(%j, %s) is undefined (out of range, wrong hemisphere or not a coordinate)",
+    (text, axis) => {
+      expect(parseCoordinateText(text, axis)).toBeUndefined();
+    },
+  );
 });

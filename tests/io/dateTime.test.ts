@@ -19,9 +19,12 @@ describe("date and time parsing (ISO 8601 output)", () => {
     expect(parseDateTimeText("2016-01-21", "MDY", "13:46", "+01:00")?.iso).toBe("2016-01-21T12:46:00Z");
   });
 
-  it.each(["2/30/2016", "13/13/2016", "2016-02-30", "hello", "2016-01-21T25:00", "1/2"])("parseDateTimeText(%j) is undefined (no such date)", (t) => {
-    expect(parseDateTimeText(t, "MDY")).toBeUndefined();
-  });
+  it.each(["2/30/2016", "13/13/2016", "2016-02-30", "hello", "2016-01-21T25:00", "1/2"])(
+    "parseDateTimeText(%j) is undefined (no such date)",
+    (t) => {
+      expect(parseDateTimeText(t, "MDY")).toBeUndefined();
+    },
+  );
 
   it("parseTimeOfDay() reads HMM, HHMM, HH:MM, HH:MM:SS and rejects 2460", () => {
     expect(parseTimeOfDay("804")).toBe("08:04:00");

@@ -17,7 +17,15 @@ describe.skipIf(both === undefined)("readSurveyText() on the invented demo surve
     expect(r.summary.rowsRead).toBe(64);
     expect(r.surveys.map((s) => `${s.name}:${s.stations.length}`)).toEqual(["wet-2025-03:34", "dry-2025-09:30"]);
     expect(r.surveys[0].constituents.map((c) => `${c.name} ${c.unit}`)).toEqual([
-      "Fe nmol/L", "Mn nmol/L", "Cu nmol/L", "Ni nmol/L", "Cd nmol/L", "Ba nmol/L", "Si µmol/L", "NO3 µmol/L", "PO4 µmol/L",
+      "Fe nmol/L",
+      "Mn nmol/L",
+      "Cu nmol/L",
+      "Ni nmol/L",
+      "Cd nmol/L",
+      "Ba nmol/L",
+      "Si µmol/L",
+      "NO3 µmol/L",
+      "PO4 µmol/L",
     ]);
   });
 

@@ -7,7 +7,10 @@ describe("detectDialect (delimiter and decimal separator)", () => {
     expect(detectDialect(text)).toEqual({ delimiter: ",", decimalComma: false });
   });
   it("detectDialect() finds semicolons with decimal commas", () => {
-    expect(detectDialect("station;salinity;Fe (nmol/L)\nA;12,5;<0,05\nB;30,1;3,2\n")).toEqual({ delimiter: ";", decimalComma: true });
+    expect(detectDialect("station;salinity;Fe (nmol/L)\nA;12,5;<0,05\nB;30,1;3,2\n")).toEqual({
+      delimiter: ";",
+      decimalComma: true,
+    });
   });
   it("detectDialect() finds semicolons with decimal points", () => {
     expect(detectDialect("station;salinity\nA;12.5\nB;30.1\n")).toEqual({ delimiter: ";", decimalComma: false });

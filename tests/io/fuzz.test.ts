@@ -8,14 +8,79 @@ import { readNetcdfStations } from "../../analysis/io/netcdfStations.ts";
 import { importWorkspace } from "../../analysis/io/workspace.ts";
 
 type Rnd = () => number;
-const pick = <T,>(r: Rnd, xs: readonly T[]): T => xs[Math.floor(r() * xs.length)];
+const pick = <T>(r: Rnd, xs: readonly T[]): T => xs[Math.floor(r() * xs.length)];
 const int = (r: Rnd, n: number): number => Math.floor(r() * n);
 
-const HEADERS = ["station", "survey", "date", "time", "date_time", "latitude", "longitude", "x (EPSG:32633)", "y (EPSG:32633)", "depth_m", "Depth", "salinity", "Cond (mS/cm)", "temperature_C", "pH", "Fe (nmol/L)", "Fe_flag", "Silicate_uM", "NO3 [µmol/l]", "Cd_ngL", "Ba, nmol kg-1", "flag", "discharge (m3/s)", "Cu (ppb)", "", "station"];
+const HEADERS = [
+  "station",
+  "survey",
+  "date",
+  "time",
+  "date_time",
+  "latitude",
+  "longitude",
+  "x (EPSG:32633)",
+  "y (EPSG:32633)",
+  "depth_m",
+  "Depth",
+  "salinity",
+  "Cond (mS/cm)",
+  "temperature_C",
+  "pH",
+  "Fe (nmol/L)",
+  "Fe_flag",
+  "Silicate_uM",
+  "NO3 [µmol/l]",
+  "Cd_ngL",
+  "Ba, nmol kg-1",
+  "flag",
+  "discharge (m3/s)",
+  "Cu (ppb)",
+  "",
+  "station",
+];
 const HOSTILE = [
-  "<script>alert(1)</script>", "<img src=x onerror=alert(1)>", "=HYPERLINK(\"http://x\")", "'; DROP TABLE s;--", "\u0000\u0001\u0002", "\uFEFF", "\u202Eevil",
-  "1e308", "-1e308", "1e999", "9".repeat(400), "NaN", "Infinity", "-0", "0x1F", "١٢٣", "１２", "<0.05", "< 0,05", "BDL", "n.d.", "NA", "-999", "",
-  "45°12.5'N", "200 61 X", "2/30/2016", "2016-13-01", "25:61", "\"", "\"\"\"", "a\nb", "\r", "\t", ";", ",", "S", "B", "4", "9", "Z",
+  "<script>alert(1)</script>",
+  "<img src=x onerror=alert(1)>",
+  '=HYPERLINK("http://x")',
+  "'; DROP TABLE s;--",
+  "\u0000\u0001\u0002",
+  "\uFEFF",
+  "\u202Eevil",
+  "1e308",
+  "-1e308",
+  "1e999",
+  "9".repeat(400),
+  "NaN",
+  "Infinity",
+  "-0",
+  "0x1F",
+  "١٢٣",
+  "１２",
+  "<0.05",
+  "< 0,05",
+  "BDL",
+  "n.d.",
+  "NA",
+  "-999",
+  "",
+  "45°12.5'N",
+  "200 61 X",
+  "2/30/2016",
+  "2016-13-01",
+  "25:61",
+  '"',
+  '"""',
+  "a\nb",
+  "\r",
+  "\t",
+  ";",
+  ",",
+  "S",
+  "B",
+  "4",
+  "9",
+  "Z",
 ];
 
 function cell(r: Rnd): string {
@@ -74,63 +139,105 @@ function brokenInvariants(res: ImportResult, file: string, text: string): string
   const bad: string[] = [];
   const s = res.summary;
   const lastRow = 2 + text.length;
-  if (s.rowsRead !== expectedRows(text, res.dialect.delimiter)) bad.push(`rowsRead ${s.rowsRead} ≠ papaparse data records`);
+  if (s.rowsRead !== expectedRows(text, res.dialect.delimiter))
+    bad.push(`rowsRead ${s.rowsRead} ≠ papaparse data records`);
   if (s.rowsRead !== s.rowsAccepted + s.rowsRejected) bad.push("rowsRead ≠ accepted + rejected");
-  if (Object.values(s.rejectedByReason).reduce((a, b) => a + b, 0) !== s.rowsRejected) bad.push("rejectedByReason does not sum to rowsRejected");
+  if (Object.values(s.rejectedByReason).reduce((a, b) => a + b, 0) !== s.rowsRejected)
+    bad.push("rejectedByReason does not sum to rowsRejected");
   const kept = res.surveys.flatMap((sv) => sv.stations.map((st) => st.sourceRow));
   if (kept.length !== s.rowsAccepted) bad.push("stations ≠ rowsAccepted");
   for (const i of res.issues) {
-    if (i.file !== file || !Number.isInteger(i.row) || i.row < 0 || i.row > lastRow || typeof i.column !== "string" || typeof i.value !== "string" || i.value.length > 201) {
+    if (
+      i.file !== file ||
+      !Number.isInteger(i.row) ||
+      i.row < 0 ||
+      i.row > lastRow ||
+      typeof i.column !== "string" ||
+      typeof i.value !== "string" ||
+      i.value.length > 201
+    ) {
       bad.push(`malformed issue ${JSON.stringify(i).slice(0, 200)}`);
     }
     if (i.severity !== "error" && i.severity !== "warning") bad.push("bad severity");
   }
-  for (const sv of res.surveys) for (const st of sv.stations) if (st.salinity.value !== undefined && !Number.isFinite(st.salinity.value)) bad.push("non-finite salinity");
+  for (const sv of res.surveys)
+    for (const st of sv.stations)
+      if (st.salinity.value !== undefined && !Number.isFinite(st.salinity.value)) bad.push("non-finite salinity");
   // every rejected row has an issue naming the file, that row and a column
   const keptSet = new Set(kept);
-  const rejectedWithIssue = new Set(res.issues.filter((i) => i.row > 1 && !keptSet.has(i.row) && i.column !== "").map((i) => i.row));
-  if (rejectedWithIssue.size !== s.rowsRejected) bad.push(`${s.rowsRejected} rejected rows but ${rejectedWithIssue.size} with a row/column issue`);
+  const rejectedWithIssue = new Set(
+    res.issues.filter((i) => i.row > 1 && !keptSet.has(i.row) && i.column !== "").map((i) => i.row),
+  );
+  if (rejectedWithIssue.size !== s.rowsRejected)
+    bad.push(`${s.rowsRejected} rejected rows but ${rejectedWithIssue.size} with a row/column issue`);
   return bad;
 }
 
 describe("fuzz: 10,000 seeded malformed and hostile delimited files (d3-random randomLcg seed 20261202)", () => {
-  it("readSurveyText() never throws, drops no row silently (rowsRead = papaparse's data records = accepted + rejected), and every issue names file/row/column", { timeout: 240_000 }, () => {
-    const r = randomLcg(20261202);
-    let rejectedSeen = 0;
-    const failures: string[] = [];
-    for (let n = 0; n < 10_000; n += 1) {
-      const text = makeInput(r);
-      const file = `fuzz-${n}.csv`;
-      try {
-        const res = readSurveyText(text, { fileName: file, layer: { kind: "all" } });
-        for (const b of brokenInvariants(res, file, text)) failures.push(`#${n} ${b}: ${JSON.stringify(text.slice(0, 100))}`);
-        rejectedSeen += res.summary.rowsRejected;
-      } catch (err) {
-        failures.push(`#${n} threw ${String(err)}: ${JSON.stringify(text.slice(0, 100))}`);
+  it(
+    "readSurveyText() never throws, drops no row silently (rowsRead = papaparse's data records = accepted + rejected), and every issue names file/row/column",
+    { timeout: 240_000 },
+    () => {
+      const r = randomLcg(20261202);
+      let rejectedSeen = 0;
+      const failures: string[] = [];
+      for (let n = 0; n < 10_000; n += 1) {
+        const text = makeInput(r);
+        const file = `fuzz-${n}.csv`;
+        try {
+          const res = readSurveyText(text, { fileName: file, layer: { kind: "all" } });
+          for (const b of brokenInvariants(res, file, text))
+            failures.push(`#${n} ${b}: ${JSON.stringify(text.slice(0, 100))}`);
+          rejectedSeen += res.summary.rowsRejected;
+        } catch (err) {
+          failures.push(`#${n} threw ${String(err)}: ${JSON.stringify(text.slice(0, 100))}`);
+        }
       }
-    }
-    expect(failures.slice(0, 10)).toEqual([]);
-    expect(rejectedSeen).toBeGreaterThan(100);
-  });
+      expect(failures.slice(0, 10)).toEqual([]);
+      expect(rejectedSeen).toBeGreaterThan(100);
+    },
+  );
 
   it("readGeoJsonPoints(), readNetcdfStations() and importWorkspace() never throw on 1,500 seeded hostile inputs", () => {
     const r = randomLcg(7);
     for (let n = 0; n < 500; n += 1) {
-      const props = Object.fromEntries(Array.from({ length: int(r, 5) }, () => [pick(r, HEADERS), r() < 0.5 ? cell(r) : r() * 1e6]));
-      const geom = pick(r, [null, { type: "Point", coordinates: [r() * 400 - 200, r() * 200 - 100] }, { type: "Point", coordinates: ["x", {}] }, { type: "Polygon" }, 5]);
-      const doc = pick(r, [{ type: "FeatureCollection", features: [{ type: "Feature", geometry: geom, properties: props }, null, 3] }, { type: "Feature", geometry: geom, properties: null }, [], "text"]);
+      const props = Object.fromEntries(
+        Array.from({ length: int(r, 5) }, () => [pick(r, HEADERS), r() < 0.5 ? cell(r) : r() * 1e6]),
+      );
+      const geom = pick(r, [
+        null,
+        { type: "Point", coordinates: [r() * 400 - 200, r() * 200 - 100] },
+        { type: "Point", coordinates: ["x", {}] },
+        { type: "Polygon" },
+        5,
+      ]);
+      const doc = pick(r, [
+        { type: "FeatureCollection", features: [{ type: "Feature", geometry: geom, properties: props }, null, 3] },
+        { type: "Feature", geometry: geom, properties: null },
+        [],
+        "text",
+      ]);
       const text = r() < 0.2 ? JSON.stringify(doc).slice(0, int(r, 40)) : JSON.stringify(doc);
       const res = readGeoJsonPoints(text, { fileName: "f.geojson" });
       expect(res.summary.rowsRead).toBe(res.summary.rowsAccepted + res.summary.rowsRejected);
       expect(res.issues.every((i) => i.file === "f.geojson")).toBe(true);
     }
     for (let n = 0; n < 500; n += 1) {
-      const bytes = Uint8Array.from({ length: int(r, 400) }, (_, i) => (i < 4 && r() < 0.7 ? [67, 68, 70, 1][i] : int(r, 256)));
+      const bytes = Uint8Array.from({ length: int(r, 400) }, (_, i) =>
+        i < 4 && r() < 0.7 ? [67, 68, 70, 1][i] : int(r, 256),
+      );
       const res = readNetcdfStations(bytes, { fileName: "f.nc" });
       expect(res.summary.rowsRead).toBe(res.summary.rowsAccepted + res.summary.rowsRejected);
     }
     for (let n = 0; n < 500; n += 1) {
-      const doc = pick(r, [{ version: 1, surveys: [cell(r)] }, { version: 2, format: "brackline-workspace" }, { version: int(r, 5) - 1 }, [cell(r)], cell(r), null]);
+      const doc = pick(r, [
+        { version: 1, surveys: [cell(r)] },
+        { version: 2, format: "brackline-workspace" },
+        { version: int(r, 5) - 1 },
+        [cell(r)],
+        cell(r),
+        null,
+      ]);
       expect(() => importWorkspace(r() < 0.3 ? String(doc) : JSON.stringify(doc))).not.toThrow();
     }
   });

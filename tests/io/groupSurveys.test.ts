@@ -13,13 +13,19 @@ E,,5,50
 describe("survey grouping", () => {
   it("readSurveyText() splits by date gaps longer than 3 days (default) and keeps undated rows in their own survey with a warning", () => {
     const r = readSurveyText(dated, { fileName: "g.csv" });
-    expect(r.surveys.map((s) => `${s.name}:${s.stations.map((x) => x.id).join("")}`)).toEqual(["2024-05-01:ABC", "2024-05-09:D", "(undated):E"]);
+    expect(r.surveys.map((s) => `${s.name}:${s.stations.map((x) => x.id).join("")}`)).toEqual([
+      "2024-05-01:ABC",
+      "2024-05-09:D",
+      "(undated):E",
+    ]);
     expect(r.surveys[0].endDate).toBe("2024-05-04");
     expect(r.issues.some((i) => i.expected.includes("(undated)"))).toBe(true);
   });
 
   it("readSurveyText() with gapDays 1 splits 2024-05-02 → 05-04 into two surveys; 'date' makes one per calendar day", () => {
-    expect(readSurveyText(dated, { fileName: "g.csv", grouping: { by: "dateGap", gapDays: 1 } }).surveys.length).toBe(4);
+    expect(readSurveyText(dated, { fileName: "g.csv", grouping: { by: "dateGap", gapDays: 1 } }).surveys.length).toBe(
+      4,
+    );
     expect(readSurveyText(dated, { fileName: "g.csv", grouping: { by: "date" } }).surveys.length).toBe(5);
   });
 
@@ -33,9 +39,14 @@ describe("survey grouping", () => {
   it("readSurveyText() takes discharge from the option (number or by survey name) and groups by the survey column or by file", () => {
     const text = "survey,station,salinity\nwet,A,1\ndry,B,2\nwet,C,3\n";
     const r = readSurveyText(text, { fileName: "s.csv", riverDischargeM3s: { wet: 450 } });
-    expect(r.surveys.map((s) => `${s.name}:${s.stations.length}:${s.riverDischargeM3s}`)).toEqual(["wet:2:450", "dry:1:undefined"]);
+    expect(r.surveys.map((s) => `${s.name}:${s.stations.length}:${s.riverDischargeM3s}`)).toEqual([
+      "wet:2:450",
+      "dry:1:undefined",
+    ]);
     const f = readSurveyText(text, { fileName: "s.csv", grouping: { by: "file", name: "All" }, riverDischargeM3s: 60 });
     expect(f.surveys.map((s) => `${s.name}:${s.stations.length}:${s.riverDischargeM3s}`)).toEqual(["All:3:60"]);
-    expect(() => readSurveyText(text, { fileName: "s.csv", grouping: { by: "dateGap", gapDays: -1 } })).toThrow(RangeError);
+    expect(() => readSurveyText(text, { fileName: "s.csv", grouping: { by: "dateGap", gapDays: -1 } })).toThrow(
+      RangeError,
+    );
   });
 });

@@ -14,17 +14,101 @@ function profileFile(): Uint8Array {
       { name: "z", size: 3 },
       { name: "name_strlen", size: 8 },
     ],
-    attrs: [{ name: "Conventions", value: "CF-1.11" }, { name: "featureType", value: "profile" }],
+    attrs: [
+      { name: "Conventions", value: "CF-1.11" },
+      { name: "featureType", value: "profile" },
+    ],
     vars: [
-      { name: "station_name", dims: ["station", "name_strlen"], type: "char", attrs: [{ name: "cf_role", value: "profile_id" }], data: ["ST01", "ST02"] },
-      { name: "time", dims: ["station"], type: "double", attrs: [{ name: "standard_name", value: "time" }, { name: "units", value: "days since 1970-01-01 00:00:00" }], data: [20089.5, 20090.25] },
-      { name: "lat", dims: ["station"], type: "double", attrs: [{ name: "standard_name", value: "latitude" }, { name: "units", value: "degrees_north" }], data: [45.1, 45.2] },
-      { name: "lon", dims: ["station"], type: "double", attrs: [{ name: "standard_name", value: "longitude" }, { name: "units", value: "degrees_east" }], data: [-1.5, -1.4] },
-      { name: "depth", dims: ["z"], type: "float", attrs: [{ name: "standard_name", value: "depth" }, { name: "units", value: "m" }, { name: "positive", value: "down" }], data: [0.5, 5, 10] },
-      { name: "PSAL", dims: ["station", "z"], type: "float", attrs: [{ name: "standard_name", value: "sea_water_practical_salinity" }, { name: "units", value: "1" }, { name: "_FillValue", type: "float", value: FILL }], data: [5.2, 12.5, 20.1, 15, FILL, 30.25] },
-      { name: "TEMP", dims: ["station", "z"], type: "float", attrs: [{ name: "standard_name", value: "sea_water_temperature" }, { name: "units", value: "degree_Celsius" }], data: [14, 13.5, 13, 12, 11.5, 11] },
-      { name: "silicate", dims: ["station", "z"], type: "double", attrs: [{ name: "standard_name", value: "mole_concentration_of_silicate_in_sea_water" }, { name: "units", value: "umol/L" }], data: [80, 60, 40, 30, 20, 5] },
-      { name: "Fe", dims: ["station", "z"], type: "double", attrs: [{ name: "long_name", value: "dissolved iron" }, { name: "units", value: "nmol/L" }, { name: "missing_value", value: -1 }], data: [120, 90, -1, 50, 40, 10] },
+      {
+        name: "station_name",
+        dims: ["station", "name_strlen"],
+        type: "char",
+        attrs: [{ name: "cf_role", value: "profile_id" }],
+        data: ["ST01", "ST02"],
+      },
+      {
+        name: "time",
+        dims: ["station"],
+        type: "double",
+        attrs: [
+          { name: "standard_name", value: "time" },
+          { name: "units", value: "days since 1970-01-01 00:00:00" },
+        ],
+        data: [20089.5, 20090.25],
+      },
+      {
+        name: "lat",
+        dims: ["station"],
+        type: "double",
+        attrs: [
+          { name: "standard_name", value: "latitude" },
+          { name: "units", value: "degrees_north" },
+        ],
+        data: [45.1, 45.2],
+      },
+      {
+        name: "lon",
+        dims: ["station"],
+        type: "double",
+        attrs: [
+          { name: "standard_name", value: "longitude" },
+          { name: "units", value: "degrees_east" },
+        ],
+        data: [-1.5, -1.4],
+      },
+      {
+        name: "depth",
+        dims: ["z"],
+        type: "float",
+        attrs: [
+          { name: "standard_name", value: "depth" },
+          { name: "units", value: "m" },
+          { name: "positive", value: "down" },
+        ],
+        data: [0.5, 5, 10],
+      },
+      {
+        name: "PSAL",
+        dims: ["station", "z"],
+        type: "float",
+        attrs: [
+          { name: "standard_name", value: "sea_water_practical_salinity" },
+          { name: "units", value: "1" },
+          { name: "_FillValue", type: "float", value: FILL },
+        ],
+        data: [5.2, 12.5, 20.1, 15, FILL, 30.25],
+      },
+      {
+        name: "TEMP",
+        dims: ["station", "z"],
+        type: "float",
+        attrs: [
+          { name: "standard_name", value: "sea_water_temperature" },
+          { name: "units", value: "degree_Celsius" },
+        ],
+        data: [14, 13.5, 13, 12, 11.5, 11],
+      },
+      {
+        name: "silicate",
+        dims: ["station", "z"],
+        type: "double",
+        attrs: [
+          { name: "standard_name", value: "mole_concentration_of_silicate_in_sea_water" },
+          { name: "units", value: "umol/L" },
+        ],
+        data: [80, 60, 40, 30, 20, 5],
+      },
+      {
+        name: "Fe",
+        dims: ["station", "z"],
+        type: "double",
+        attrs: [
+          { name: "long_name", value: "dissolved iron" },
+          { name: "units", value: "nmol/L" },
+          { name: "missing_value", value: -1 },
+        ],
+        data: [120, 90, -1, 50, 40, 10],
+      },
     ],
   });
 }
@@ -51,7 +135,9 @@ describe("readNetcdfStations (CF-netCDF, fixture written by a netCDF-3 classic w
   });
 
   it("readNetcdfStations() reports a non-netCDF buffer as a file-level error instead of throwing", () => {
-    const r = readNetcdfStations(new TextEncoder().encode("<html><script>alert(1)</script></html>"), { fileName: "fake.nc" });
+    const r = readNetcdfStations(new TextEncoder().encode("<html><script>alert(1)</script></html>"), {
+      fileName: "fake.nc",
+    });
     expect(r.surveys.flatMap((s) => s.stations)).toEqual([]);
     expect(r.issues.some((i) => i.severity === "error" && i.file === "fake.nc" && i.row === 0)).toBe(true);
   });

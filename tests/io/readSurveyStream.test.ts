@@ -5,10 +5,12 @@ import { expectWithin } from "../helpers/tolerance.ts";
 
 function bigCsv(rows: number): string {
   const rnd = randomLcg(42);
-  const lines = ["survey,station,date_time,latitude,longitude,salinity,\"Fe (nmol/L)\",note"];
+  const lines = ['survey,station,date_time,latitude,longitude,salinity,"Fe (nmol/L)",note'];
   for (let i = 0; i < rows; i += 1) {
     const s = (rnd() * 35).toFixed(3);
-    lines.push(`S${Math.floor(i / 500)},ST${i},2025-03-${String(1 + (Math.floor(i / 500) % 28)).padStart(2, "0")}T10:00:00Z,45.${i % 1000},-1.${i % 997},${s},${i % 7 === 0 ? "<0.05" : (rnd() * 100).toFixed(2)},"quoted, with ""comma"" and\nnewline"`);
+    lines.push(
+      `S${Math.floor(i / 500)},ST${i},2025-03-${String(1 + (Math.floor(i / 500) % 28)).padStart(2, "0")}T10:00:00Z,45.${i % 1000},-1.${i % 997},${s},${i % 7 === 0 ? "<0.05" : (rnd() * 100).toFixed(2)},"quoted, with ""comma"" and\nnewline"`,
+    );
   }
   return `${lines.join("\n")}\n`;
 }
@@ -39,7 +41,11 @@ describe("readSurveyStream (papaparse chunked parsing with progress)", () => {
       },
     });
     const progress: number[] = [];
-    const r = await readSurveyStream(stream, { fileName: "bytes.csv", totalSize: bytes.length, onProgress: (f) => progress.push(f) });
+    const r = await readSurveyStream(stream, {
+      fileName: "bytes.csv",
+      totalSize: bytes.length,
+      onProgress: (f) => progress.push(f),
+    });
     expect(r.headers).toEqual(["station", "salinity", "Si (µmol/L)"]);
     expect(r.surveys[0].constituents[0].unit).toBe("µmol/L");
     expect(progress.length).toBeGreaterThan(10);

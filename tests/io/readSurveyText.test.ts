@@ -5,7 +5,8 @@ import { expectWithin } from "../helpers/tolerance.ts";
 
 describe("readSurveyText (delimited survey files and their quirks)", () => {
   it("readSurveyText() reads a semicolon file with decimal commas and a UTF-8 BOM", () => {
-    const text = "\uFEFFStation;Date;Lat;Lon;Salinity;Fe (nmol/L)\nA1;21.03.2024;45,5;-1,25;12,5;<0,05\nA2;22.03.2024;45,6;-1,30;30,1;3,2\n";
+    const text =
+      "\uFEFFStation;Date;Lat;Lon;Salinity;Fe (nmol/L)\nA1;21.03.2024;45,5;-1,25;12,5;<0,05\nA2;22.03.2024;45,6;-1,30;30,1;3,2\n";
     const r = readSurveyText(text, { fileName: "semi.csv" });
     expect(r.dialect).toEqual({ delimiter: ";", decimalComma: true });
     expect(r.headers[0]).toBe("Station");
@@ -20,7 +21,8 @@ describe("readSurveyText (delimited survey files and their quirks)", () => {
   });
 
   it("readSurveyText() reads a tab-separated file with quoted fields holding delimiters, quotes and newlines", () => {
-    const text = 'station\tsalinity\tnote\tSi (µmol/L)\n"S 1"\t5.0\t"has\ttab and ""quotes""\nand a newline"\t40\nS2\t10\tplain\t30\n';
+    const text =
+      'station\tsalinity\tnote\tSi (µmol/L)\n"S 1"\t5.0\t"has\ttab and ""quotes""\nand a newline"\t40\nS2\t10\tplain\t30\n';
     const r = readSurveyText(text, { fileName: "tabs.tsv" });
     const st = r.surveys.flatMap((s) => s.stations);
     expect(st.map((s) => s.id)).toEqual(["S 1", "S2"]);
@@ -32,8 +34,22 @@ describe("readSurveyText (delimited survey files and their quirks)", () => {
     const text = "station,salinity,Fe (nmol/L)\nA,12.5,abc\nB,-3,4\n";
     const r = readSurveyText(text, { fileName: "bad.csv" });
     expect(r.summary.rowsAccepted).toBe(2);
-    expect(r.issues).toContainEqual({ file: "bad.csv", row: 2, column: "Fe (nmol/L)", value: "abc", expected: expect.any(String), severity: "error" });
-    expect(r.issues).toContainEqual({ file: "bad.csv", row: 3, column: "salinity", value: "-3", expected: "a value between 0 and 70", severity: "error" });
+    expect(r.issues).toContainEqual({
+      file: "bad.csv",
+      row: 2,
+      column: "Fe (nmol/L)",
+      value: "abc",
+      expected: expect.any(String),
+      severity: "error",
+    });
+    expect(r.issues).toContainEqual({
+      file: "bad.csv",
+      row: 3,
+      column: "salinity",
+      value: "-3",
+      expected: "a value between 0 and 70",
+      severity: "error",
+    });
     const a = r.surveys[0].stations[0];
     expect(a.values.Fe).toEqual({ value: undefined, original: "abc", status: "invalid", accepted: false });
     expect(r.summary.valuesByStatus.invalid).toBe(2);
@@ -43,12 +59,18 @@ describe("readSurveyText (delimited survey files and their quirks)", () => {
     const text = "station,salinity,flag\nA,1,1\n,2,1\nC,3,4\nD,4,Z\n";
     const r = readSurveyText(text, { fileName: "rows.csv" });
     expect(r.summary).toMatchObject({ rowsRead: 4, rowsAccepted: 1, rowsRejected: 3 });
-    expect(r.summary.rejectedByReason).toEqual({ "missing station id": 1, "row QC flag rejects": 1, "unknown row QC flag": 1 });
-    for (const row of [3, 4, 5]) expect(r.issues.some((i) => i.row === row && i.file === "rows.csv" && i.column !== "")).toBe(true);
+    expect(r.summary.rejectedByReason).toEqual({
+      "missing station id": 1,
+      "row QC flag rejects": 1,
+      "unknown row QC flag": 1,
+    });
+    for (const row of [3, 4, 5])
+      expect(r.issues.some((i) => i.row === row && i.file === "rows.csv" && i.column !== "")).toBe(true);
   });
 
   it("readSurveyText() maps <name>_flag, <name>_qc and flag_<name> columns onto their values and keeps the original flag", () => {
-    const text = "station,salinity,Fe (nmol/L),Fe_flag,Si_uM,Si_qc,flag_Mn,Mn (nmol/L)\nA,1,5,1,30,3,A,7\nB,2,6,4,31,2,R,8\n";
+    const text =
+      "station,salinity,Fe (nmol/L),Fe_flag,Si_uM,Si_qc,flag_Mn,Mn (nmol/L)\nA,1,5,1,30,3,A,7\nB,2,6,4,31,2,R,8\n";
     const r = readSurveyText(text, { fileName: "flags.csv" });
     const [a, b] = r.surveys[0].stations;
     expect([a.values.Fe.accepted, b.values.Fe.accepted]).toEqual([true, false]);
@@ -60,7 +82,9 @@ describe("readSurveyText (delimited survey files and their quirks)", () => {
 
   it("readSurveyText() reports a constituent whose header unit is unknown as an error and does not import it (never a guess)", () => {
     const r = readSurveyText("station,salinity,Cu (ppb),Zn (nmol/L)\nA,1,3,4\n", { fileName: "units.csv" });
-    expect(r.issues).toContainEqual(expect.objectContaining({ file: "units.csv", row: 0, column: "Cu (ppb)", value: "ppb", severity: "error" }));
+    expect(r.issues).toContainEqual(
+      expect.objectContaining({ file: "units.csv", row: 0, column: "Cu (ppb)", value: "ppb", severity: "error" }),
+    );
     expect(Object.keys(r.surveys[0].stations[0].values)).toEqual(["Zn"]);
   });
 
@@ -95,7 +119,12 @@ describe("readSurveyText (delimited survey files and their quirks)", () => {
 
   it("readSurveyText() reuses a saved mapping for a file of the same shape (headers in another order)", () => {
     const m = suggestMapping(["stn", "salinity", "iron"], []);
-    const fixed = { ...m, columns: m.columns.map((c) => (c.header === "iron" ? { ...c, role: "constituent" as const, name: "Fe", unit: "nmol/L" } : c)) };
+    const fixed = {
+      ...m,
+      columns: m.columns.map((c) =>
+        c.header === "iron" ? { ...c, role: "constituent" as const, name: "Fe", unit: "nmol/L" } : c,
+      ),
+    };
     const r = readSurveyText("iron,stn,salinity\n5,A,1\n", { fileName: "again.csv", savedMappings: [fixed] });
     expectWithin(r.surveys[0].stations[0].values.Fe.value, 5, 0, "Fe through the saved mapping");
   });

@@ -15,7 +15,8 @@ const y2016 = readIfExists(path.join(dir, "2016ver.3.0SanFranciscoBayWaterQualit
 const y2020 = readIfExists(path.join(dir, "wqdata20.csv"));
 const y2022 = readIfExists(path.join(dir, "wqdata22.csv"));
 const present = stationsText !== undefined && y2016 !== undefined && y2020 !== undefined && y2022 !== undefined;
-if (!present) console.warn(`${dir} is incomplete or absent (../shared not mounted): San Francisco Bay real-data tests skipped`);
+if (!present)
+  console.warn(`${dir} is incomplete or absent (../shared not mounted): San Francisco Bay real-data tests skipped`);
 
 /** Units the 2016–2019 headers leave out, as printed in the 2020–2022 headers (SOURCE.md): set by the user in the mapping. */
 const UNITS_2016: Record<string, string> = {
@@ -46,9 +47,19 @@ describe.skipIf(!present)("USGS San Francisco Bay files with the station table j
   it("2016 file (BOM, M/D/YY dates, HMM times, no header units): reports each unit-less constituent, then imports 7102 rows in 20 sampling dates once the user sets the units", () => {
     const raw = readSurveyText(y2016 ?? "", { fileName: "2016.csv", stationTable: table });
     expect(raw.headers[0]).toBe("Date");
-    expect(raw.issues.filter((i) => i.row === 0 && i.severity === "error").map((i) => i.column)).toEqual(Object.keys(UNITS_2016));
-    const mapping: ColumnMapping = { ...raw.mapping, columns: raw.mapping.columns.map((c) => (UNITS_2016[c.header] ? { ...c, unit: UNITS_2016[c.header] } : c)) };
-    const r = readSurveyText(y2016 ?? "", { fileName: "2016.csv", stationTable: table, mapping, grouping: { by: "date" } });
+    expect(raw.issues.filter((i) => i.row === 0 && i.severity === "error").map((i) => i.column)).toEqual(
+      Object.keys(UNITS_2016),
+    );
+    const mapping: ColumnMapping = {
+      ...raw.mapping,
+      columns: raw.mapping.columns.map((c) => (UNITS_2016[c.header] ? { ...c, unit: UNITS_2016[c.header] } : c)),
+    };
+    const r = readSurveyText(y2016 ?? "", {
+      fileName: "2016.csv",
+      stationTable: table,
+      mapping,
+      grouping: { by: "date" },
+    });
     expect(r.issues.filter((i) => i.severity === "error")).toEqual([]);
     expect(r.summary).toMatchObject({ rowsRead: 7102, rowsAccepted: 7102, rowsRejected: 0 });
     expect(r.surveys.length).toBe(20);
@@ -64,17 +75,33 @@ describe.skipIf(!present)("USGS San Francisco Bay files with the station table j
 
   it("2016 nutrients at 1–2 m (SOURCE.md): the 0.5–2.5 m layer gives one station per cast, averaging only measured cells, so every cast with a silicate sample keeps it", () => {
     const raw = readSurveyText(y2016 ?? "", { fileName: "2016.csv" });
-    const mapping: ColumnMapping = { ...raw.mapping, columns: raw.mapping.columns.map((c) => (UNITS_2016[c.header] ? { ...c, unit: UNITS_2016[c.header] } : c)) };
-    const all = readSurveyText(y2016 ?? "", { fileName: "2016.csv", mapping, grouping: { by: "date" } }).surveys.flatMap((s) => s.stations);
-    const castsWithSi = new Set(all.filter((x) => x.values.Si.status === "measured" && (x.depthM ?? 99) <= 2.5 && (x.depthM ?? 0) >= 0.5).map((x) => `${x.id}|${x.time}`));
-    const r = readSurveyText(y2016 ?? "", { fileName: "2016.csv", stationTable: table, mapping, layer: { kind: "depthRange", minM: 0.5, maxM: 2.5 } });
+    const mapping: ColumnMapping = {
+      ...raw.mapping,
+      columns: raw.mapping.columns.map((c) => (UNITS_2016[c.header] ? { ...c, unit: UNITS_2016[c.header] } : c)),
+    };
+    const all = readSurveyText(y2016 ?? "", {
+      fileName: "2016.csv",
+      mapping,
+      grouping: { by: "date" },
+    }).surveys.flatMap((s) => s.stations);
+    const castsWithSi = new Set(
+      all
+        .filter((x) => x.values.Si.status === "measured" && (x.depthM ?? 99) <= 2.5 && (x.depthM ?? 0) >= 0.5)
+        .map((x) => `${x.id}|${x.time}`),
+    );
+    const r = readSurveyText(y2016 ?? "", {
+      fileName: "2016.csv",
+      stationTable: table,
+      mapping,
+      layer: { kind: "depthRange", minM: 0.5, maxM: 2.5 },
+    });
     const casts = r.surveys.flatMap((s) => s.stations) as ImportedStation[];
     expect(casts.every((c) => c.layer === "depthRange" && (c.contributingRows?.length ?? 0) >= 1)).toBe(true);
     expect(casts.filter((c) => c.values.Si.status === "measured").length).toBe(castsWithSi.size);
     expect(castsWithSi.size).toBeGreaterThan(150);
   });
 
-  it("2020 file (all values quoted, units in headers): ids like \"2.0\" join station \"2\" (reported once for each of the 36 such ids; \"29.5\" matches as written), distance and units kept", () => {
+  it('2020 file (all values quoted, units in headers): ids like "2.0" join station "2" (reported once for each of the 36 such ids; "29.5" matches as written), distance and units kept', () => {
     const r = readSurveyText(y2020 ?? "", { fileName: "wqdata20.csv", stationTable: table, grouping: { by: "date" } });
     expect(r.issues.filter((i) => i.severity === "error")).toEqual([]);
     expect(r.summary).toMatchObject({ rowsRead: 3507, rowsAccepted: 3507 });

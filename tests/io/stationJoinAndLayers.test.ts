@@ -6,7 +6,10 @@ import { readStationTable } from "../../analysis/io/stationTable.ts";
 import type { ImportedStation } from "../../analysis/io/importSummary.ts";
 import { expectWithin } from "../helpers/tolerance.ts";
 
-const table = readStationTable("Station,Name,Latitude,Longitude\n007,Pier,45.1,-1.5\nB2,Buoy,45.2,-1.4\n12,Far,45.3,-1.3\n", { fileName: "stations.csv" });
+const table = readStationTable(
+  "Station,Name,Latitude,Longitude\n007,Pier,45.1,-1.5\nB2,Buoy,45.2,-1.4\n12,Far,45.3,-1.3\n",
+  { fileName: "stations.csv" },
+);
 
 const profiles = `station,date,depth_m,salinity,Fe (nmol/L)
 7,2024-05-01,0.5,10,100
@@ -41,7 +44,8 @@ describe("station table join and layer selection", () => {
     expect(s.map((x) => `${x.id}@${x.depthM}`)).toEqual(["7@0.5", "b2@1", "99@1"]);
     expect(s[0].contributingRows).toEqual([2]);
     expect(s[0].layer).toBe("surface");
-    const b = readSurveyText(profiles, { fileName: "p.csv", layer: { kind: "bottom" } }).surveys[0].stations as ImportedStation[];
+    const b = readSurveyText(profiles, { fileName: "p.csv", layer: { kind: "bottom" } }).surveys[0]
+      .stations as ImportedStation[];
     expect(b.map((x) => `${x.id}@${x.depthM}`)).toEqual(["7@10", "b2@3", "99@1"]);
   });
 
@@ -63,7 +67,10 @@ describe("station table join and layer selection", () => {
   });
 
   it("selectLayer('surface') uses S/B layer labels when there is no numeric depth (labels as in NRE_Stats.csv)", () => {
-    const r = readSurveyText("Station,Date,Depth,Sal_ppt\n0,7/20/2015,S,0.07\n0,7/20/2015,B,0.09\n", { fileName: "sb.csv", layer: { kind: "surface" } });
+    const r = readSurveyText("Station,Date,Depth,Sal_ppt\n0,7/20/2015,S,0.07\n0,7/20/2015,B,0.09\n", {
+      fileName: "sb.csv",
+      layer: { kind: "surface" },
+    });
     expect(r.surveys[0].stations.map((s) => s.salinity.original)).toEqual(["0.07"]);
   });
 

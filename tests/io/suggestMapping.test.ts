@@ -8,9 +8,39 @@ const roles = (headers: string[], rows: string[][] = []): Record<string, string>
 
 describe("suggestMapping (automatic column recognition)", () => {
   it("suggestMapping() recognises the demo columns (survey, station, ISO date_time, lat/lon, depth, salinity, temperature, pH, constituents, flag)", () => {
-    const headers = ["survey", "station", "date_time", "latitude", "longitude", "depth_m", "salinity", "temperature_C", "pH", "Fe (nmol/L)", "Si (µmol/L)", "Cu_flag", "Cu (nmol/L)"];
-    const m = suggestMapping(headers, [["S", "A", "2025-03-18T07:30:00Z", "45", "-35", "1", "3", "11", "8", "5", "3", "1", "2"]]);
-    expect(m.columns.map((c) => c.role)).toEqual(["survey", "station", "dateTime", "latitude", "longitude", "depth", "salinity", "temperature", "pH", "constituent", "constituent", "flag", "constituent"]);
+    const headers = [
+      "survey",
+      "station",
+      "date_time",
+      "latitude",
+      "longitude",
+      "depth_m",
+      "salinity",
+      "temperature_C",
+      "pH",
+      "Fe (nmol/L)",
+      "Si (µmol/L)",
+      "Cu_flag",
+      "Cu (nmol/L)",
+    ];
+    const m = suggestMapping(headers, [
+      ["S", "A", "2025-03-18T07:30:00Z", "45", "-35", "1", "3", "11", "8", "5", "3", "1", "2"],
+    ]);
+    expect(m.columns.map((c) => c.role)).toEqual([
+      "survey",
+      "station",
+      "dateTime",
+      "latitude",
+      "longitude",
+      "depth",
+      "salinity",
+      "temperature",
+      "pH",
+      "constituent",
+      "constituent",
+      "flag",
+      "constituent",
+    ]);
     expect(m.columns[11].flagFor).toBe("Cu (nmol/L)");
     expect(columnMappingSchema.safeParse(JSON.parse(JSON.stringify(m))).success).toBe(true);
   });
@@ -22,11 +52,28 @@ describe("suggestMapping (automatic column recognition)", () => {
   });
 
   it("suggestMapping() turns a Depth column of S/B labels into a layer-label column", () => {
-    expect(roles(["Station", "Depth"], [["0", "S"], ["0", "B"]]).Depth).toBe("depthLabel");
+    expect(
+      roles(
+        ["Station", "Depth"],
+        [
+          ["0", "S"],
+          ["0", "B"],
+        ],
+      ).Depth,
+    ).toBe("depthLabel");
   });
 
   it("suggestMapping() finds conductivity, discharge, distance, x/y and a row flag; ignores unknown columns", () => {
-    const r = roles(["Cond (mS/cm)", "River discharge (m3/s)", "Distance from Sta. 36 (km)", "Easting", "Northing", "QC_flag", "Season", "DO_Sat"]);
+    const r = roles([
+      "Cond (mS/cm)",
+      "River discharge (m3/s)",
+      "Distance from Sta. 36 (km)",
+      "Easting",
+      "Northing",
+      "QC_flag",
+      "Season",
+      "DO_Sat",
+    ]);
     expect(r).toEqual({
       "Cond (mS/cm)": "conductivity",
       "River discharge (m3/s)": "discharge",

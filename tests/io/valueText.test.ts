@@ -3,13 +3,16 @@ import { parseNumberText, parseValueText } from "../../analysis/io/valueText.ts"
 import { expectWithin } from "../helpers/tolerance.ts";
 
 describe("parseValueText (cell text → ValueCell, common practice for exchanged water-quality tables)", () => {
-  it.each(["<0.05", "< 0.05", "<=0.05"])("parseValueText(%j) is below detection with limit 0.05 and keeps the original", (t) => {
-    const c = parseValueText(t);
-    expect(c.status).toBe("belowDetection");
-    expectWithin(c.detectionLimit, 0.05, 1e-15, `limit of ${t}`);
-    expect(c.original).toBe(t);
-    expect(c.value).toBeUndefined();
-  });
+  it.each(["<0.05", "< 0.05", "<=0.05"])(
+    "parseValueText(%j) is below detection with limit 0.05 and keeps the original",
+    (t) => {
+      const c = parseValueText(t);
+      expect(c.status).toBe("belowDetection");
+      expectWithin(c.detectionLimit, 0.05, 1e-15, `limit of ${t}`);
+      expect(c.original).toBe(t);
+      expect(c.value).toBeUndefined();
+    },
+  );
 
   it("parseValueText() reads '<0,05' with decimal comma as limit 0.05", () => {
     expectWithin(parseValueText("<0,05", { decimalComma: true }).detectionLimit, 0.05, 1e-15, "decimal comma limit");
@@ -26,12 +29,15 @@ describe("parseValueText (cell text → ValueCell, common practice for exchanged
     expect(parseValueText(t).status).toBe("missing");
   });
 
-  it.each(["abc", "1.2.3", "12,5", "<script>", "1e999", "Infinity", "0x10", "--5"])("parseValueText(%j) is invalid and not accepted", (t) => {
-    const c = parseValueText(t);
-    expect(c.status).toBe("invalid");
-    expect(c.accepted).toBe(false);
-    expect(c.original).toBe(t);
-  });
+  it.each(["abc", "1.2.3", "12,5", "<script>", "1e999", "Infinity", "0x10", "--5"])(
+    "parseValueText(%j) is invalid and not accepted",
+    (t) => {
+      const c = parseValueText(t);
+      expect(c.status).toBe("invalid");
+      expect(c.accepted).toBe(false);
+      expect(c.original).toBe(t);
+    },
+  );
 
   it("parseNumberText() reads dot and comma decimals, exponents and signs", () => {
     expectWithin(parseNumberText("12.5"), 12.5, 0, "dot");

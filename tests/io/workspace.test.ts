@@ -16,11 +16,45 @@ function sampleWorkspace() {
   const ws = createWorkspace("Test estuary");
   ws.surveys = r.surveys;
   ws.mappings = [r.mapping];
-  ws.imports = [{ file: "s.csv", shape: r.mapping.shape, rowsRead: r.summary.rowsRead, rowsAccepted: r.summary.rowsAccepted, rowsRejected: r.summary.rowsRejected, issues: r.issues }];
+  ws.imports = [
+    {
+      file: "s.csv",
+      shape: r.mapping.shape,
+      rowsRead: r.summary.rowsRead,
+      rowsAccepted: r.summary.rowsAccepted,
+      rowsRejected: r.summary.rowsRejected,
+      issues: r.issues,
+    },
+  ];
   const centerline = readIfExists(path.join(repoRoot, "data-demo/centerline.geojson"));
-  ws.centerline = centerline === undefined ? { type: "Feature", geometry: { type: "LineString", coordinates: [[-1.5, 45], [-1.4, 45.3]] }, properties: {} } : JSON.parse(centerline);
-  ws.settings = { layer: { kind: "depthRange", minM: 0, maxM: 2 }, grouping: { by: "dateGap", gapDays: 3 }, colouring: "deviation", useTiles: false };
-  ws.analysis = { endmemberOverrides: { Fe: { river: { salinity: 0, conc: 120.5, concSd: 3 } } }, precisionPercent: { Fe: 5 }, riverDischargeM3s: 450, constantSet: "default", saltIntrusionSalinity: 2, futureChoice: { nested: [1, "two"] } };
+  ws.centerline =
+    centerline === undefined
+      ? {
+          type: "Feature",
+          geometry: {
+            type: "LineString",
+            coordinates: [
+              [-1.5, 45],
+              [-1.4, 45.3],
+            ],
+          },
+          properties: {},
+        }
+      : JSON.parse(centerline);
+  ws.settings = {
+    layer: { kind: "depthRange", minM: 0, maxM: 2 },
+    grouping: { by: "dateGap", gapDays: 3 },
+    colouring: "deviation",
+    useTiles: false,
+  };
+  ws.analysis = {
+    endmemberOverrides: { Fe: { river: { salinity: 0, conc: 120.5, concSd: 3 } } },
+    precisionPercent: { Fe: 5 },
+    riverDischargeM3s: 450,
+    constantSet: "default",
+    saltIntrusionSalinity: 2,
+    futureChoice: { nested: [1, "two"] },
+  };
   return ws;
 }
 
@@ -40,8 +74,19 @@ describe("workspace document (zod schema, versions, migrations)", () => {
       version: 1,
       name: "old",
       surveys: sampleWorkspace().surveys,
-      centerline: [[-1.5, 45], [-1.45, 45.1], [-1.4, 45.3]],
-      mappings: { "shape-2-0000abcd": { columns: [{ header: "stn", role: "station" }, { header: "sal", role: "salinity" }] } },
+      centerline: [
+        [-1.5, 45],
+        [-1.45, 45.1],
+        [-1.4, 45.3],
+      ],
+      mappings: {
+        "shape-2-0000abcd": {
+          columns: [
+            { header: "stn", role: "station" },
+            { header: "sal", role: "salinity" },
+          ],
+        },
+      },
       surveyGapDays: 5,
       analysis: { constantSet: "default" },
     };
@@ -50,7 +95,11 @@ describe("workspace document (zod schema, versions, migrations)", () => {
     expect(r.issues).toEqual([expect.objectContaining({ column: "version", value: "1", severity: "warning" })]);
     const ws = r.workspace!;
     expect(ws.version).toBe(2);
-    expect(ws.centerline).toEqual({ type: "Feature", geometry: { type: "LineString", coordinates: v1.centerline }, properties: {} });
+    expect(ws.centerline).toEqual({
+      type: "Feature",
+      geometry: { type: "LineString", coordinates: v1.centerline },
+      properties: {},
+    });
     expect(ws.mappings).toEqual([{ shape: "shape-2-0000abcd", columns: v1.mappings["shape-2-0000abcd"].columns }]);
     expect(ws.settings).toEqual({ grouping: { by: "dateGap", gapDays: 5 } });
     expect(ws.surveys).toEqual(v1.surveys);
