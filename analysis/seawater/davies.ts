@@ -71,6 +71,7 @@ export function daviesLogGamma(charge: number, ionicStrength: number, options: D
  * The caution to show when Davies is used beyond its range, else undefined.
  * @param ionicStrength I [mol/kg-H2O]
  * @returns warning text or undefined
+ * @see Stumm, W., Morgan, J.J., 1996. Aquatic Chemistry, 3rd ed. (Davies validity I < 0.5; from memory).
  */
 export function daviesValidityWarning(ionicStrength: number): string | undefined {
   return ionicStrength > DAVIES_MAX_IONIC_STRENGTH

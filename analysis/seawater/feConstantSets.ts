@@ -71,6 +71,7 @@ export const FE_CONSTANT_SETS: Readonly<Record<FeConstantSetId, FeConstantSet>> 
  * @param id set id ("baesMesmer1976", "stefansson2007", "liuMillero2002")
  * @returns the constant set
  * @throws {RangeError} naming the id when unknown
+ * @see FE_CONSTANT_SETS for the citation of each set.
  */
 export function feConstantSet(id: string): FeConstantSet {
   const set = Object.hasOwn(FE_CONSTANT_SETS, id) ? FE_CONSTANT_SETS[id as FeConstantSetId] : undefined;

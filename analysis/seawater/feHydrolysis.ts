@@ -118,6 +118,7 @@ export function feSpeciation(
  * @param pH pH on the scale of the constants
  * @param constants result of {@link feConditionalConstants}
  * @returns fractions, solubility [log mol/kg] and predominance boundaries
+ * @see Baes, C.F., Mesmer, R.E., 1976. The Hydrolysis of Cations. Wiley.
  */
 export function speciateWith(pH: number, constants: FeConditionalConstants): FeSpeciation {
   const terms = constants.logBeta.map((lb, n) => (lb === undefined ? Number.NEGATIVE_INFINITY : lb + n * pH));

@@ -5,6 +5,7 @@
  * @param n number of values (≥ 2)
  * @returns the grid
  * @throws {RangeError} when n is not an integer ≥ 2 or start/end are not finite
+ * @see common practice (evenly spaced plot axis).
  */
 export function linearGrid(start: number, end: number, n: number): number[] {
   if (!Number.isFinite(start) || !Number.isFinite(end))
@@ -16,6 +17,7 @@ export function linearGrid(start: number, end: number, n: number): number[] {
 /**
  * Checks an axis array: non-empty, all finite, within [min, max].
  * @throws {TypeError} when not an array; {RangeError} naming the function, argument and first bad value
+ * @see common practice (argument checking).
  */
 export function checkGrid(fn: string, name: string, grid: readonly number[], min: number, max: number): void {
   if (!Array.isArray(grid)) throw new TypeError(`${fn}: ${name} must be an array of numbers, got ${typeof grid}`);

@@ -6,6 +6,7 @@ import { PSS78, pss78Polynomial, pss78PolynomialDerivative, pss78TemperatureFact
  * @param sPss78 plain PSS-78 salinity at (Rt, t)
  * @param rt conductivity ratio Rt (dimensionless)
  * @param t68C temperature [°C, IPTS-68]
+ * @see Hill, K.D., Dauphinee, T.M., Woods, D.J., 1986. IEEE J. Oceanic Eng. OE-11(1), 109–112; GSW-C `gsw_sp_from_c`.
  */
 export function hillRaw(sPss78: number, rt: number, t68C: number): number {
   const x = 400 * rt;
@@ -18,6 +19,7 @@ export function hillRaw(sPss78: number, rt: number, t68C: number): number {
 /**
  * √Rt at which the plain PSS-78 polynomial gives S = 2 (safeguarded Newton iteration).
  * @param t68C temperature [°C, IPTS-68]
+ * @see IOC, SCOR, IAPSO, 2010. TEOS-10 Manual (GSW `gsw_hill_ratio_at_sp2`).
  */
 export function rtxAtSp2(t68C: number): number {
   let lo = 0.05;
@@ -51,6 +53,7 @@ export function hillRatioAtSp2(t68C: number): number {
  * @param rt Rt (dimensionless, ≥ 0)
  * @param t68C temperature [°C, IPTS-68]
  * @returns practical salinity, or NaN for Rt < 0 (callers check)
+ * @see Hill, K.D., Dauphinee, T.M., Woods, D.J., 1986. IEEE J. Oceanic Eng. OE-11(1), 109–112; GSW-C `gsw_sp_from_c`.
  */
 export function salinityFromRtT68(rt: number, t68C: number): number {
   if (!(rt >= 0)) return Number.NaN;

@@ -42,6 +42,7 @@ export function predominanceBoundaries(logBeta: readonly (number | undefined)[])
  * Stepwise crossover pH values pH_n = log β_(n−1) − log β_n (where species n−1 and n are equal), n = 1…N.
  * @param logBeta log10 *β_0…*β_N
  * @returns crossover pH per step (undefined where a species is absent)
+ * @see Stumm, W., Morgan, J.J., 1996. Aquatic Chemistry, 3rd ed. (from memory).
  */
 export function stepwiseCrossovers(logBeta: readonly (number | undefined)[]): (number | undefined)[] {
   const out: (number | undefined)[] = [];

@@ -21,6 +21,7 @@ export const C3515_MS_CM = 42.914;
 /**
  * Temperature part of PSS-78, f(t) = (t68 − 15)/(1 + k(t68 − 15)).
  * @param t68C temperature [°C, IPTS-68]
+ * @see Fofonoff, N.P., Millard, R.C., 1983. UNESCO Tech. Pap. Mar. Sci. 44 (SAL78).
  */
 export function pss78TemperatureFactor(t68C: number): number {
   return (t68C - 15) / (1 + PSS78.k * (t68C - 15));
@@ -31,6 +32,7 @@ export function pss78TemperatureFactor(t68C: number): number {
  * @param rtx √Rt (dimensionless)
  * @param t68C temperature [°C, IPTS-68]
  * @returns practical salinity of the plain PSS-78 polynomial
+ * @see Fofonoff, N.P., Millard, R.C., 1983. UNESCO Tech. Pap. Mar. Sci. 44 (SAL78).
  */
 export function pss78Polynomial(rtx: number, t68C: number): number {
   const { a, b } = PSS78;
@@ -40,7 +42,8 @@ export function pss78Polynomial(rtx: number, t68C: number): number {
   return sa + ft * sb;
 }
 
-/** dS/dX of {@link pss78Polynomial}. */
+/** dS/dX of {@link pss78Polynomial}. * @see Fofonoff, N.P., Millard, R.C., 1983. UNESCO Tech. Pap. Mar. Sci. 44 (SAL78).
+ */
 export function pss78PolynomialDerivative(rtx: number, t68C: number): number {
   const { a, b } = PSS78;
   const ft = pss78TemperatureFactor(t68C);
@@ -52,6 +55,7 @@ export function pss78PolynomialDerivative(rtx: number, t68C: number): number {
 /**
  * rt(t) = C(35, t68, 0)/C(35, 15, 0), the PSS-78 temperature ratio of standard seawater.
  * @param t68C temperature [°C, IPTS-68]
+ * @see Fofonoff, N.P., Millard, R.C., 1983. UNESCO Tech. Pap. Mar. Sci. 44 (SAL78).
  */
 export function pss78Rt35(t68C: number): number {
   const { c } = PSS78;
@@ -63,6 +67,7 @@ export function pss78Rt35(t68C: number): number {
  * @param r conductivity ratio C/C(35, 15, 0)
  * @param t68C temperature [°C, IPTS-68]
  * @param pDbar sea pressure [dbar]
+ * @see Fofonoff, N.P., Millard, R.C., 1983. UNESCO Tech. Pap. Mar. Sci. 44 (SAL78).
  */
 export function pss78Rp(r: number, t68C: number, pDbar: number): number {
   const { d, e } = PSS78;

@@ -31,6 +31,7 @@ const RIVER_DENSITY_KG_L = 0.9982;
  * @param densityKgL water density [kg/L] (default 0.9982, fresh water at 20 °C)
  * @returns composition in mol/kg
  * @throws {RangeError} for an unknown ion key or a negative/non-finite concentration
+ * @see CIAAW, 2021. Standard atomic weights (molar masses of the ions).
  */
 export function riverCompositionFromMgL(
   name: string,

@@ -109,6 +109,7 @@ export function parseUnit(text: string): CanonicalUnit | undefined {
  * @returns the canonical unit
  * @throws {RangeError} naming the unit text and saying whether it is unknown or ambiguous
  * @throws {TypeError} when text is not a string
+ * @see units.ts module comment for the accepted and rejected forms.
  */
 export function parseUnitOrThrow(text: string): CanonicalUnit {
   if (typeof text !== "string") throw new TypeError(`parseUnitOrThrow: text must be a string, got ${typeof text}`);

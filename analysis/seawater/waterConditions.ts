@@ -19,6 +19,7 @@ export interface WaterConditions {
  * @param mixing options of the major-ion mixing model
  * @returns ionic strength [mol/kg-H2O]
  * @throws {RangeError|TypeError} for non-finite or negative inputs (naming the field)
+ * @see Millero et al. (2008) Deep-Sea Res. I 55, 50–72; TEOS-10 Manual Table L.1.
  */
 export function resolveIonicStrength(conditions: WaterConditions, mixing: MajorIonOptions = {}): number {
   checkConditions("resolveIonicStrength", conditions);
@@ -39,6 +40,7 @@ export function resolveIonicStrength(conditions: WaterConditions, mixing: MajorI
  * @param fn name of the calling function (for the message)
  * @param c the conditions to check
  * @throws {TypeError} when salinity or temperatureC is not a finite number; {RangeError} when salinity < 0 or > 50
+ * @see common practice (argument checking).
  */
 export function checkConditions(fn: string, c: WaterConditions): void {
   if (!c || typeof c !== "object") throw new TypeError(`${fn}: conditions must be an object, got ${String(c)}`);
