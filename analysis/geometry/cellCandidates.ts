@@ -18,6 +18,12 @@ export interface CellList {
   lowerM: Float64Array;
 }
 
+/** Where a cell's list sits in the shared pool: pairs [lowerM, segment id] from `start`, `length` pairs. */
+interface PoolRef {
+  start: number;
+  length: number;
+}
+
 /** Anisotropy g = N cos φ / M of the local metric at |φ| [deg]. */
 export function anisotropy(absLatDeg: number): number {
   const phi = absLatDeg * DEG_TO_RAD;
@@ -41,16 +47,21 @@ export type IndexBox = [number, number, number, number];
 
 /** Lazily filled cache of cell candidate lists for one network and one bulk call. */
 export class CellCandidateCache {
-  private readonly lists: CellList[] = [];
-  /** Dense grid over the network box (+ margin): slot of each cell's list, −1 until built. */
-  private readonly slot: Int32Array;
-  private readonly outside = new Map<string, CellList>();
+  /** All built lists, interleaved [lowerM, segment id] pairs, in build order. */
+  pool = new Float64Array(1024);
+  private used = 0;
+  /** Dense grid over the network box (+ margin): pool start of each cell's list (−1 until built) and its length. */
+  private readonly slotStart: Int32Array;
+  private readonly slotLen: Int32Array;
+  private readonly outside = new Map<string, PoolRef>();
   private readonly nx: number;
   private readonly ny: number;
   private readonly gx0: number;
   private readonly gy0: number;
   /** Cell size in index degrees. */
   readonly cellDeg: number;
+  /** Length (pairs) of the list returned by the last {@link get}. */
+  lastLength = 0;
 
   constructor(
     private readonly index: Flatbush,
@@ -73,29 +84,50 @@ export class CellCandidateCache {
     this.cellDeg = cell;
     this.nx = Math.ceil((w + 2 * margin) / cell);
     this.ny = Math.ceil((h + 2 * margin) / cell);
-    this.slot = new Int32Array(this.nx * this.ny).fill(-1);
+    this.slotStart = new Int32Array(this.nx * this.ny).fill(-1);
+    this.slotLen = new Int32Array(this.nx * this.ny);
   }
 
-  /** The candidate list of the cell holding index point (x, y). */
-  get(x: number, y: number): CellList {
+  /** Pool start (in doubles) of the list of the cell holding index point (x, y); its length is left in lastLength. */
+  get(x: number, y: number): number {
     const ix = Math.floor((x - this.gx0) / this.cellDeg);
     const iy = Math.floor((y - this.gy0) / this.cellDeg);
     if (ix >= 0 && iy >= 0 && ix < this.nx && iy < this.ny) {
       const k = iy * this.nx + ix;
-      const at = this.slot[k]!;
-      if (at >= 0) return this.lists[at]!;
-      const list = this.build(ix, iy);
-      this.slot[k] = this.lists.length;
-      this.lists.push(list);
-      return list;
+      const at = this.slotStart[k]!;
+      if (at >= 0) {
+        this.lastLength = this.slotLen[k]!;
+        return at;
+      }
+      const ref = this.store(this.build(ix, iy));
+      this.slotStart[k] = ref.start;
+      this.slotLen[k] = this.lastLength = ref.length;
+      return ref.start;
     }
     const key = `${ix},${iy}`;
-    let list = this.outside.get(key);
-    if (!list) {
-      list = this.build(ix, iy);
-      this.outside.set(key, list);
+    let ref = this.outside.get(key);
+    if (!ref) {
+      ref = this.store(this.build(ix, iy));
+      this.outside.set(key, ref);
     }
-    return list;
+    this.lastLength = ref.length;
+    return ref.start;
+  }
+
+  private store(list: CellList): PoolRef {
+    const n = list.seg.length;
+    if (this.used + 2 * n > this.pool.length) {
+      const grown = new Float64Array(Math.max(2 * this.pool.length, this.used + 2 * n));
+      grown.set(this.pool.subarray(0, this.used));
+      this.pool = grown;
+    }
+    const start = this.used;
+    for (let j = 0; j < n; j++) {
+      this.pool[start + 2 * j] = list.lowerM[j]!;
+      this.pool[start + 2 * j + 1] = list.seg[j]!;
+    }
+    this.used += 2 * n;
+    return { start, length: n };
   }
 
   private build(ix: number, iy: number): CellList {
@@ -124,12 +156,12 @@ export class CellCandidateCache {
   }
 }
 
-/** Run the tracker over a cell list, stopping once the lower bound exceeds the best distance. */
-export function testCellList(list: CellList, tracker: NearestSegmentTracker): void {
-  const { seg, lowerM } = list;
-  for (let j = 0; j < seg.length; j++) {
-    const lo = lowerM[j]!;
+/** Run the tracker over a pooled cell list, stopping once the lower bound exceeds the best distance. */
+export function testCellList(pool: Float64Array, start: number, length: number, tracker: NearestSegmentTracker): void {
+  const end = start + 2 * length;
+  for (let j = start; j < end; j += 2) {
+    const lo = pool[j]!;
     if (lo * lo > tracker.bestD2) break;
-    tracker.test(seg[j]!);
+    tracker.test(pool[j + 1]!);
   }
 }

@@ -105,7 +105,9 @@ export function projectLonLatArrays(
     return Math.sqrt(centreTracker.bestD2);
   };
   const box: IndexBox = [index.minX, index.minY, index.maxX, index.maxY];
-  const cells = new CellCandidateCache(index, k, network.maxAbsLatDeg, box, 4 * pieceM, centreDistM);
+  // cell size: about a dozen pieces (measured optimum on a 20 m-vertex meander), kept within 50 m – 2 km
+  const cellM = Math.min(2000, Math.max(50, 12 * pieceM));
+  const cells = new CellCandidateCache(index, k, network.maxAbsLatDeg, box, cellM, centreDistM);
   const tracker = new NearestSegmentTracker(s);
   const { alongChannelKm, offsetM, branchIndex, nearestLon, nearestLat, beyondEndM } = out;
   const { lon0, lat0, lon1, lat1, km0, km1, branch, atMouth, atHead } = s;
@@ -125,7 +127,8 @@ export function projectLonLatArrays(
     }
     const lonW = wrapNear(lon, centre);
     tracker.reset(lonW, lat);
-    testCellList(cells.get(lonW * k, lat), tracker);
+    const at = cells.get(lonW * k, lat);
+    testCellList(cells.pool, at, cells.lastLength, tracker);
     const i = tracker.bestSeg;
     const t = tracker.bestT;
     const d = Math.sqrt(tracker.bestD2);

@@ -39,16 +39,18 @@ export class NearestSegmentTracker {
   /** Length of the best segment in the point's plane [m]. */
   bestLenM = 0;
 
-  private readonly lon0: Float64Array;
-  private readonly lat0: Float64Array;
-  private readonly lon1: Float64Array;
-  private readonly lat1: Float64Array;
+  /** Segment ends interleaved [lon0, lat0, lon1, lat1] per segment (one cache line per test). */
+  private readonly ends: Float64Array;
 
   constructor(seg: SegmentEnds) {
-    this.lon0 = seg.lon0;
-    this.lat0 = seg.lat0;
-    this.lon1 = seg.lon1;
-    this.lat1 = seg.lat1;
+    const n = seg.lon0.length;
+    this.ends = new Float64Array(4 * n);
+    for (let i = 0; i < n; i++) {
+      this.ends[4 * i] = seg.lon0[i]!;
+      this.ends[4 * i + 1] = seg.lat0[i]!;
+      this.ends[4 * i + 2] = seg.lon1[i]!;
+      this.ends[4 * i + 3] = seg.lat1[i]!;
+    }
   }
 
   /** Start a new query point (degrees; longitude already in the segments' unwrapped frame). */
@@ -78,11 +80,13 @@ export class NearestSegmentTracker {
     const dcx = this.dcx;
     const cy = this.cy;
     const dcy = this.dcy;
-    const f0 = (this.lat0[i]! - latP) * DEG_TO_RAD;
-    const ax = (this.lon0[i]! - lonP) * DEG_TO_RAD * (cx + dcx * f0);
+    const e = this.ends;
+    const o = 4 * i;
+    const f0 = (e[o + 1]! - latP) * DEG_TO_RAD;
+    const ax = (e[o]! - lonP) * DEG_TO_RAD * (cx + dcx * f0);
     const ay = f0 * (cy + dcy * f0);
-    const f1 = (this.lat1[i]! - latP) * DEG_TO_RAD;
-    const bx = (this.lon1[i]! - lonP) * DEG_TO_RAD * (cx + dcx * f1);
+    const f1 = (e[o + 3]! - latP) * DEG_TO_RAD;
+    const bx = (e[o + 2]! - lonP) * DEG_TO_RAD * (cx + dcx * f1);
     const by = f1 * (cy + dcy * f1);
     const ux = bx - ax;
     const uy = by - ay;
