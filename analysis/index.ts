@@ -64,7 +64,30 @@ export type {
   BehaviourClass,
   ReactionZone,
   MidEstuarineMaximum,
+  ConstituentAnalysis,
+  FitCurve,
+  TangentLine,
+  MixingEvidence,
+  FluxSummary,
+  RateProfile,
 } from "./mixing/result.ts";
+export type { MixingSample, AnalyzeOptions, EndmemberOverride, Precision } from "./mixing/options.ts";
+export { analyzeConstituent, MIN_STATIONS, MIN_SALINITY_SPAN } from "./mixing/analyzeConstituent.ts";
+export { dilutionLine, dilutionAt, deviations } from "./mixing/dilutionLine.ts";
+export { endmemberFromData, RIVER_GROUP_DS, SEA_GROUP_DS } from "./mixing/endmembers.ts";
+export { effectiveEndmemberAt, percentChange } from "./mixing/effectiveEndmember.ts";
+export { reactionRate } from "./mixing/reactionRate.ts";
+export { DEFAULT_PRECISION, FALLBACK_PRECISION, defaultPrecision, sigmaOf } from "./mixing/precision.ts";
+export { molarFactor, toMolPerM3 } from "./mixing/units.ts";
+export type { MolarUnit } from "./mixing/units.ts";
+export { polyFit } from "./stats/polyFit.ts";
+export type { PolyFit } from "./stats/polyFit.ts";
+export { runsTest } from "./stats/runsTest.ts";
+export type { RunsTestResult } from "./stats/runsTest.ts";
+export { fitSmoothingSpline, mergeKnots } from "./stats/smoothingSpline.ts";
+export { evaluateSpline, evaluateSplineGrid } from "./stats/naturalSpline.ts";
+export type { NaturalSpline, SplinePoint } from "./stats/naturalSpline.ts";
+export { interval95, percentileSorted } from "./stats/percentile.ts";
 // --- end mixing ---
 
 // --- seawater ---
@@ -116,6 +139,7 @@ export type { FeSpeciation, FeSpeciationOptions, FeConditionalConstants } from "
 export { predominanceBoundaries, stepwiseCrossovers } from "./seawater/predominance.ts";
 export type { PredominanceBoundary } from "./seawater/predominance.ts";
 export { feSpeciationVsPh } from "./seawater/feSeries.ts";
+export { feSolubilityLiuMillero2002NmolKg, ionicStrengthLiuMillero2002 } from "./seawater/feSolubilityLiuMillero.ts";
 export type { FeSpeciationSeries } from "./seawater/feSeries.ts";
 export { CD_CHLORIDE_SETS } from "./seawater/cdChlorideSets.ts";
 export type { CdChlorideSet } from "./seawater/cdChlorideSets.ts";
