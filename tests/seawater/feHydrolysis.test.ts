@@ -5,6 +5,10 @@ import { FE_CONSTANT_SETS, feConstantSet } from "../../analysis/seawater/feConst
 import { FE_SPECIES, feConditionalConstants, feSpeciation } from "../../analysis/seawater/feHydrolysis.ts";
 import { feSpeciationVsPh } from "../../analysis/seawater/feSeries.ts";
 import { stepwiseCrossovers } from "../../analysis/seawater/predominance.ts";
+import {
+  feSolubilityLiuMillero2002NmolKg,
+  ionicStrengthLiuMillero2002,
+} from "../../analysis/seawater/feSolubilityLiuMillero.ts";
 
 const at = (set: string, I: number | undefined) => ({
   salinity: 35,
@@ -131,5 +135,16 @@ describe("feSpeciationVsPh()", () => {
     expect(() => feSpeciationVsPh("baesMesmer1976", { salinity: 0, temperatureC: 25 }, [7, Number.NaN])).toThrow(
       /pHGrid\[1\]/,
     );
+  });
+});
+
+describe("feSolubilityLiuMillero2002NmolKg()", () => {
+  it("gives 0.33 nM at S = 35, 25 °C (Liu & Millero 2002 fit, chemistry-constants.md §3.2; abstract: 0.3–0.5 nM)", () => {
+    expectWithin(feSolubilityLiuMillero2002NmolKg(35, 25), 0.33, 0.005, "Fe(III) solubility");
+  });
+  it("uses I = 19.9225·S/(1000 − 1.005·S) (Liu & Millero 2002 abstract): 0.7227088 at S = 35 (the sheet's §2.2 prints 0.722711, 2e-6 off)", () => {
+    expectWithin(ionicStrengthLiuMillero2002(35), (19.9225 * 35) / (1000 - 1.005 * 35), 1e-15, "I exact");
+    expectWithin(ionicStrengthLiuMillero2002(35), 0.722711, 3e-6, "I vs sheet");
+    expect(() => ionicStrengthLiuMillero2002(-2)).toThrow(/salinity/);
   });
 });
