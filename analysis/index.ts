@@ -140,7 +140,6 @@ export { predominanceBoundaries, stepwiseCrossovers } from "./seawater/predomina
 export type { PredominanceBoundary } from "./seawater/predominance.ts";
 export { feSpeciationVsPh } from "./seawater/feSeries.ts";
 export { feSolubilityLiuMillero2002NmolKg, ionicStrengthLiuMillero2002 } from "./seawater/feSolubilityLiuMillero.ts";
-export { feSolubilityLiuMillero2002NmolKg, ionicStrengthLiuMillero2002 } from "./seawater/feSolubilityLiuMillero.ts";
 export type { FeSpeciationSeries } from "./seawater/feSeries.ts";
 export { CD_CHLORIDE_SETS } from "./seawater/cdChlorideSets.ts";
 export type { CdChlorideSet } from "./seawater/cdChlorideSets.ts";
