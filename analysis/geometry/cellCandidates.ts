@@ -10,7 +10,7 @@
  */
 import type Flatbush from "flatbush";
 import type { NearestSegmentTracker } from "./segmentKernel.ts";
-import { DEG_TO_RAD, WGS84_A_M, WGS84_E2 } from "./ellipsoid.ts";
+import { M_MAX_DEG, anisotropy, indexDegPerM } from "./indexMetric.ts";
 
 /** Candidate list of one cell: segment ids and lower bounds of their distance to the cell [m]. */
 export interface CellList {
@@ -22,24 +22,6 @@ export interface CellList {
 interface PoolRef {
   start: number;
   length: number;
-}
-
-/** Anisotropy g = N cos φ / M of the local metric at |φ| [deg]. */
-export function anisotropy(absLatDeg: number): number {
-  const phi = absLatDeg * DEG_TO_RAD;
-  const s = Math.sin(phi);
-  return (Math.cos(phi) * (1 - WGS84_E2 * s * s)) / (1 - WGS84_E2);
-}
-
-const M_MIN_DEG = WGS84_A_M * (1 - WGS84_E2) * DEG_TO_RAD; // metres per degree of meridian, equator
-const M_MAX_DEG = (WGS84_A_M / Math.sqrt(1 - WGS84_E2)) * DEG_TO_RAD; // at the pole
-
-/**
- * Index degrees per metre, an upper bound valid between latitudes up to maxAbsLatDeg:
- * a true distance D spans at most D·indexDegPerM(...) in index space.
- */
-export function indexDegPerM(lonScale: number, maxAbsLatDeg: number): number {
-  return (Math.max(1, lonScale / anisotropy(maxAbsLatDeg)) * 1.01) / M_MIN_DEG;
 }
 
 /** Grid extent in index degrees: [minX, minY, maxX, maxY]. */

@@ -5,7 +5,8 @@ import type Flatbush from "flatbush";
 import type { ChannelNetwork } from "./types.ts";
 import { NearestSegmentTracker } from "./segmentKernel.ts";
 import { segmentIndexOf } from "./segmentIndex.ts";
-import { CellCandidateCache, indexDegPerM, testCellList, type IndexBox } from "./cellCandidates.ts";
+import { CellCandidateCache, testCellList, type IndexBox } from "./cellCandidates.ts";
+import { indexDegPerM } from "./indexMetric.ts";
 import { MAX_ABS_LAT_DEG, normalizeLon, wrapNear } from "./lonLat.ts";
 
 /** Result of {@link projectLonLatArrays}; element i belongs to input point i. */
