@@ -1,3 +1,4 @@
+import { requireOptions, requireStringArray } from "./argChecks.ts";
 import type { ColumnMapping } from "./columnMapping.ts";
 import type { ImportResult, ReadSurveyOptions } from "./importPipeline.ts";
 import { RecordRouter } from "./recordRouter.ts";
@@ -11,6 +12,7 @@ import { RecordRouter } from "./recordRouter.ts";
  * @param mapping the mapping to apply
  * @param options file name and the other reader options (decimal comma via options.decimalComma)
  * @returns the same result readSurveyText gives; never throws on bad data
+ * @throws TypeError when headers is not an array of strings or options.fileName is missing
  */
 export function applyMapping(
   headers: readonly string[],
@@ -18,6 +20,8 @@ export function applyMapping(
   mapping: ColumnMapping,
   options: ReadSurveyOptions,
 ): ImportResult {
+  requireStringArray("applyMapping", "headers", headers);
+  requireOptions("applyMapping", options);
   const router = new RecordRouter(
     { delimiter: mapping.delimiter ?? ",", decimalComma: options.decimalComma ?? mapping.decimalComma ?? false },
     { ...options, mapping },

@@ -1,3 +1,4 @@
+import { requireOptions } from "./argChecks.ts";
 import type { ImportResult, ReadSurveyOptions } from "./importPipeline.ts";
 import { makeIssue } from "./importSummary.ts";
 import { RecordRouter } from "./recordRouter.ts";
@@ -26,8 +27,10 @@ function isObject(v: unknown): v is Record<string, Json> {
  * @param input GeoJSON text or an already parsed object
  * @param options as for readSurveyText
  * @returns surveys, issues, summary, mapping and headers
+ * @throws TypeError when options.fileName is missing
  */
 export function readGeoJsonPoints(input: string | object, options: ReadSurveyOptions): ImportResult {
+  requireOptions("readGeoJsonPoints", options);
   const file = options.fileName;
   let doc: unknown = input;
   const early: ReturnType<typeof makeIssue>[] = [];

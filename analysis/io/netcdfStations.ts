@@ -1,3 +1,4 @@
+import { requireOptions } from "./argChecks.ts";
 import { NetCDFReader } from "netcdfjs";
 import type { ColumnAssignment, ColumnMapping } from "./columnMapping.ts";
 import { fileShapeSignature } from "./fileShape.ts";
@@ -20,9 +21,14 @@ import { cfColumn, netcdfColumns } from "./netcdfColumns.ts";
  * @param buffer the file bytes (ArrayBuffer or Uint8Array)
  * @param options as for readSurveyText (a given mapping replaces the CF-derived one)
  * @returns surveys, issues, summary, mapping and headers
+ * @throws TypeError when buffer is not an ArrayBuffer/Uint8Array or options.fileName is missing
  * @see Eaton, B. et al., 2023. NetCDF Climate and Forecast (CF) Metadata Conventions 1.11, §4 and ch. 9 (discrete sampling geometries).
  */
 export function readNetcdfStations(buffer: ArrayBuffer | Uint8Array, options: ReadSurveyOptions): ImportResult {
+  requireOptions("readNetcdfStations", options);
+  if (!(buffer instanceof ArrayBuffer) && !(buffer instanceof Uint8Array)) {
+    throw new TypeError(`readNetcdfStations(): buffer must be an ArrayBuffer or Uint8Array, got ${typeof buffer}`);
+  }
   const file = options.fileName;
   let reader: NetCDFReader | undefined;
   let failure = "";

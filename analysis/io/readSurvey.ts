@@ -1,3 +1,4 @@
+import { requireOptions, requireString } from "./argChecks.ts";
 import type { TextDialect } from "./dialect.ts";
 import { detectDialect, stripBom } from "./dialect.ts";
 import { parseDelimitedChunks, parseDelimitedText } from "./delimitedRecords.ts";
@@ -16,13 +17,17 @@ function dialectFor(sample: string, options: ReadSurveyOptions): TextDialect {
  * Reads a survey file given as text (CSV, TSV or semicolon-separated with decimal comma; UTF-8
  * with or without BOM; quoted fields) with papaparse, following the confirmed, saved or suggested
  * column mapping. Never throws on bad data: every problem is an ImportIssue with file, row, column
- * and value, and every data row is counted as accepted or rejected in the summary.
+ * and value, and every data row is counted as accepted or rejected in the summary. Row numbers count
+ * records (header = 1), so a quoted field spanning lines does not shift them.
  *
  * @param text the file content
  * @param options file name, mapping, station table, layer, grouping, discharge, progress
  * @returns surveys, issues, summary, the mapping used, headers and dialect
+ * @throws TypeError when text is not a string or options.fileName is missing (caller mistakes)
  */
 export function readSurveyText(text: string, options: ReadSurveyOptions): ImportResult {
+  requireString("readSurveyText", "text", text);
+  requireOptions("readSurveyText", options);
   const clean = stripBom(text);
   const dialect = dialectFor(clean.slice(0, 65536), options);
   const router = new RecordRouter(dialect, options);
@@ -69,11 +74,18 @@ async function* readAll<T>(stream: ReadableStream<T>): AsyncGenerator<T> {
  * @param source the file in chunks (split anywhere, also inside quoted fields)
  * @param options as for readSurveyText, plus totalSize for progress
  * @returns a promise of the same result readSurveyText gives for the whole text
+ * @throws TypeError when the source is not a stream or iterable, or options.fileName is missing
  */
 export async function readSurveyStream(
   source: TextChunkSource,
   options: ReadSurveyOptions & { totalSize?: number },
 ): Promise<ImportResult> {
+  requireOptions("readSurveyStream", options);
+  if (source === null || typeof source !== "object") {
+    throw new TypeError(
+      `readSurveyStream(): source must be a ReadableStream or an iterable of chunks, got ${typeof source}`,
+    );
+  }
   const counter = { size: 0 };
   const chunks = decodeChunks(source, counter);
   let head = "";

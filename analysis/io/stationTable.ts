@@ -1,3 +1,4 @@
+import { requireOptions, requireString } from "./argChecks.ts";
 import type { ImportIssue } from "../survey/survey.ts";
 import type { ColumnMapping } from "./columnMapping.ts";
 import { compileMapping } from "./compileMapping.ts";
@@ -37,8 +38,11 @@ export interface StationTable {
  * @param text file content (UTF-8 text, BOM allowed)
  * @param options file name and optional confirmed mapping
  * @returns the table, never throws on bad data
+ * @throws TypeError when text is not a string or options.fileName is missing
  */
 export function readStationTable(text: string, options: { fileName: string; mapping?: ColumnMapping }): StationTable {
+  requireString("readStationTable", "text", text);
+  requireOptions("readStationTable", options);
   const file = options.fileName;
   const dialect = detectDialect(text.slice(0, 65536));
   const records: { fields: string[]; row: number }[] = [];

@@ -1,3 +1,4 @@
+import { requireStringArray } from "./argChecks.ts";
 import type { ColumnAssignment, ColumnMapping, ColumnRole } from "./columnMapping.ts";
 import { normaliseConstituentName } from "./constituentNames.ts";
 import { fileShapeSignature } from "./fileShape.ts";
@@ -57,12 +58,14 @@ function looksLikeDateTime(values: readonly string[]): boolean {
  * @param sampleRows a few data rows (arrays of cell text in header order) for value-based checks
  * @param parseUnit unit reader (defaults to the built-in header unit reader)
  * @returns a JSON-serialisable mapping to confirm or correct
+ * @throws TypeError when headers is not an array of strings
  */
 export function suggestMapping(
   headers: readonly string[],
   sampleRows: readonly (readonly string[])[] = [],
   parseUnit: UnitParser = canonicalUnitText,
 ): ColumnMapping {
+  requireStringArray("suggestMapping", "headers", headers);
   const used = new Set<ColumnRole>();
   const columns: ColumnAssignment[] = headers.map((header, i) => {
     const samples = sampleRows.map((r) => r[i] ?? "");
