@@ -238,4 +238,30 @@ export { formatSignificant, formatFixed, MINUS } from "./compare/formatNumber.ts
 // --- end compare ---
 
 // --- report ---
+export { buildBriefing, BRIEFING_CAUTION } from "./report/buildBriefing.ts";
+export { renderBriefingHtml } from "./report/renderHtml.ts";
+export type {
+  BriefingDocument,
+  BriefingInput,
+  BriefingSurvey,
+  BriefingComparison,
+  BriefingFigure,
+  BriefingTable,
+  ProvenanceFile,
+} from "./report/briefingTypes.ts";
+export { constituentFindings, zoneWhere } from "./report/findings.ts";
+export type { Finding } from "./report/findings.ts";
+export { escapeHtml, html, joinHtml, SafeHtml } from "./report/html.ts";
+export type { HtmlValue } from "./report/html.ts";
+export { fractionInWords, multipleInWords, constituentWords, classWords } from "./report/wording.ts";
+export { mapSvg } from "./report/mapSvg.ts";
+export type { MapInput, MapZone } from "./report/mapSvg.ts";
+export { fitProjection } from "./report/mapProjection.ts";
+export type { MapProjection } from "./report/mapProjection.ts";
+export { readBasemap } from "./report/basemap.ts";
+export type { BasemapShape } from "./report/basemap.ts";
+export { mixingPlotSvg } from "./report/mixingPlotSvg.ts";
+export { profilePlotSvg } from "./report/profilePlotSvg.ts";
+export { zoneStripSvg } from "./report/zoneStripSvg.ts";
+export type { ZoneRow } from "./report/zoneStripSvg.ts";
 // --- end report ---
