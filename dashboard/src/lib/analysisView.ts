@@ -2,8 +2,7 @@
  * Reads the parts of a survey analysis the shell and the map show. Keeps the
  * shape of the analysis result in one place on the dashboard side.
  */
-import type { StationDeviation } from "../../../analysis/index.ts";
-import type { StationPlacement } from "../../../analysis/pipeline/surveyAnalysis.ts";
+import type { StationDeviation, StationPlacement } from "../../../analysis/index.ts";
 import type { AnalysisResult } from "../worker/engine.ts";
 
 /** Stations as placed on the channel, by id. */

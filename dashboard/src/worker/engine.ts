@@ -5,15 +5,20 @@
  * only dashboard file that calls analysis functions; the same code runs in
  * Node and the CLI.
  */
-import type { ImportIssue, Survey, SurveyAnalysis } from "../../../analysis/index.ts";
-import { analyzeSurvey, readSurveyText } from "../../../analysis/index.ts";
-import type { ConstituentSettings } from "../../../analysis/index.ts";
-import { buildChannelNetwork } from "../../../analysis/geometry/buildNetwork.ts";
-import { kmTicks } from "../../../analysis/geometry/kmTicks.ts";
-import { channelStretch } from "../../../analysis/geometry/channelStretch.ts";
-import { pointAtKm } from "../../../analysis/geometry/alongChannel.ts";
-import type { CenterlineGeoJson } from "../../../analysis/geometry/geojsonInput.ts";
-import type { ChannelNetwork } from "../../../analysis/geometry/types.ts";
+import {
+  analyzeSurvey,
+  buildChannelNetwork,
+  channelStretch,
+  kmTicks,
+  pointAtKm,
+  readSurveyText,
+  type CenterlineGeoJson,
+  type ChannelNetwork,
+  type ConstituentSettings,
+  type ImportIssue,
+  type Survey,
+  type SurveyAnalysis,
+} from "../../../analysis/index.ts";
 import type { AnalysisSettings } from "../state/settings.svelte.ts";
 import type { TextFile } from "../lib/demoData.ts";
 import type { ChannelOverlay, ConstituentOverlay, LonLat, SurveyOverlay } from "./overlay.ts";
