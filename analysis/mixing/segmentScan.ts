@@ -45,6 +45,18 @@ export function segmentCriticals(maxM: number, alpha: number): SegmentCriticals 
   return { f, chi2, alpha };
 }
 
+let PASS_I = new Int32Array(64);
+let PASS_A = new Float64Array(64);
+let PASS_B = new Float64Array(64);
+let PASS_M = new Int32Array(64);
+/** Grows the module-level candidate buffers (single-threaded reuse inside bootstrap loops). */
+function growPass(n: number): void {
+  PASS_I = new Int32Array(n);
+  PASS_A = new Float64Array(n);
+  PASS_B = new Float64Array(n);
+  PASS_M = new Int32Array(n);
+}
+
 /** Result of a segment scan: start index and the segment's weighted line. */
 export interface SegmentScan {
   /** Index of the first (most landward) station of the longest passing segment; −1 when none. */
@@ -77,6 +89,8 @@ export function scanSegments(x: ArrayLike<number>, y: ArrayLike<number>, w: Arra
   let m = 0;
   let distinct = 0;
   const best: SegmentScan = { start: -1, intercept: Number.NaN, slope: Number.NaN, m: 0 };
+  if (PASS_I.length < n) growPass(n);
+  let nPass = 0;
   for (let i = n - 1; i >= 0; i--) {
     const c = counts ? counts[i]! : 1;
     if (c === 0) continue;
@@ -109,14 +123,24 @@ export function scanSegments(x: ArrayLike<number>, y: ArrayLike<number>, w: Arra
       }
       const dq = Math.max(0, rssLin - rssQuad);
       const F = rssQuad > 0 ? dq / (rssQuad / (m - 3)) : dq > 0 ? Number.POSITIVE_INFINITY : 0;
-      pass = rssLin <= crit.chi2[m]! && F <= crit.f[m]! && !tooFewRuns(x, y, counts, i, a - b * x0, b, crit.alpha);
+      pass = rssLin <= crit.chi2[m]! && F <= crit.f[m]!;
     }
     if (pass) {
-      best.start = i;
-      best.intercept = a - b * x0;
-      best.slope = b;
-      best.m = m;
+      PASS_I[nPass] = i;
+      PASS_A[nPass] = a - b * x0;
+      PASS_B[nPass] = b;
+      PASS_M[nPass] = m;
+      nPass++;
     }
+  }
+  // The runs test (O(m)) only for the longest candidates, until one passes.
+  for (let k = nPass - 1; k >= 0; k--) {
+    if (tooFewRuns(x, y, counts, PASS_I[k]!, PASS_A[k]!, PASS_B[k]!, crit.alpha)) continue;
+    best.start = PASS_I[k]!;
+    best.intercept = PASS_A[k]!;
+    best.slope = PASS_B[k]!;
+    best.m = PASS_M[k]!;
+    break;
   }
   return best;
 }

@@ -59,19 +59,34 @@ export function endFitStations(n: number): number {
 export const END_FIT_MIN_STATIONS = 5;
 
 /**
- * Tangent at the last abscissa of a weighted quadratic fit: [intercept, slope] of
- * C = (a + b·S_e + c·S_e²) + (b + 2c·S_e)·(S − S_e).
+ * Tangent at the last abscissa S_e of a weighted quadratic fit C = q0 + q1·u + q2·u²,
+ * u = S − S_e: [intercept, slope] of C = q0 + q1·(S − S_e). Stations with x sorted
+ * ascending (the distinct-salinity count assumes it).
  *
  * @returns [intercept, slope], or undefined when the quadratic cannot be fitted
  */
 export function endTangent(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<number>): [number, number] | undefined {
-  const q = polyFit(x, y, w, 2);
-  if (!q) return undefined;
   let se = Number.NEGATIVE_INFINITY;
   for (let i = 0; i < x.length; i++) if (w[i]! > 0 && x[i]! > se) se = x[i]!;
-  const [a, b, c] = q.coef as [number, number, number];
-  const slope = b + 2 * c * se;
-  return [a + b * se + c * se * se - slope * se, slope];
+  // Weighted normal equations in u = S − S_e, solved by Cramer's rule (no allocation: runs in the bootstrap).
+  let s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, sy = 0, suy = 0, su2y = 0, distinct = 0, last = Number.NaN;
+  for (let i = 0; i < x.length; i++) {
+    const wi = w[i]!;
+    if (!(wi > 0)) continue;
+    if (x[i] !== last) distinct++;
+    last = x[i]!;
+    const u = x[i]! - se;
+    const u2 = u * u;
+    s0 += wi; s1 += wi * u; s2 += wi * u2; s3 += wi * u2 * u; s4 += wi * u2 * u2;
+    sy += wi * y[i]!; suy += wi * u * y[i]!; su2y += wi * u2 * y[i]!;
+  }
+  if (distinct < 3) return undefined;
+  const d = s0 * (s2 * s4 - s3 * s3) - s1 * (s1 * s4 - s3 * s2) + s2 * (s1 * s3 - s2 * s2);
+  if (!(Math.abs(d) > 0)) return undefined;
+  const q0 = (sy * (s2 * s4 - s3 * s3) - s1 * (suy * s4 - s3 * su2y) + s2 * (suy * s3 - s2 * su2y)) / d;
+  const q1 = (s0 * (suy * s4 - su2y * s3) - sy * (s1 * s4 - s3 * s2) + s2 * (s1 * su2y - suy * s2)) / d;
+  // At u = 0 the value is q0 and the slope q1.
+  return [q0 - q1 * se, q1];
 }
 
 function lineOf(intercept: number, slope: number, from: number, to: number, method: TangentLine["method"], nStations: number): TangentLine {

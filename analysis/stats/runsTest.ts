@@ -60,7 +60,7 @@ export function runsTest(residuals: ArrayLike<number>): RunsTestResult {
   return { runs, nPositive: n1, nNegative: n2, pTooFew: Math.min(1, Math.max(0, p)) };
 }
 
-const CRIT_CACHE = new Map<string, number>();
+const CRIT_CACHE = new Map<number, Map<number, number>>();
 
 /**
  * Critical number of runs: the largest r with P(R ≤ r) ≤ α under random ordering
@@ -72,8 +72,10 @@ const CRIT_CACHE = new Map<string, number>();
  * @see Wald & Wolfowitz (1940) Ann. Math. Stat. 11, 147–162.
  */
 export function runsCritical(n1: number, n2: number, alpha: number): number {
-  const key = `${n1},${n2},${alpha}`;
-  const hit = CRIT_CACHE.get(key);
+  let byAlpha = CRIT_CACHE.get(alpha);
+  if (!byAlpha) CRIT_CACHE.set(alpha, (byAlpha = new Map<number, number>()));
+  const key = n1 * 1_000_003 + n2;
+  const hit = byAlpha.get(key);
   if (hit !== undefined) return hit;
   let cum = 0;
   let crit = 0;
@@ -82,6 +84,6 @@ export function runsCritical(n1: number, n2: number, alpha: number): number {
     if (cum <= alpha) crit = r;
     else break;
   }
-  CRIT_CACHE.set(key, crit);
+  byAlpha.set(key, crit);
   return crit;
 }
