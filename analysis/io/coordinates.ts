@@ -20,6 +20,8 @@ const HEMI_SIGN: Record<string, number> = { N: 1, S: -1, E: 1, W: -1, O: 1 };
  * @returns decimal degrees (latitude −90…90, longitude −180…180), or undefined when not readable
  */
 export function parseCoordinateText(text: string, axis: CoordinateAxis, decimalComma = false): number | undefined {
+  const plain = parseNumberText(text, { decimalComma });
+  if (plain !== undefined) return Math.abs(plain) <= (axis === "latitude" ? 90 : 180) ? plain : undefined;
   let t = text.trim().toUpperCase();
   if (t.length === 0 || t.length > 40) return undefined;
   let sign = 1;

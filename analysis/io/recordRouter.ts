@@ -30,11 +30,17 @@ export class RecordRouter {
     const [head, ...rest] = this.buffer;
     this.headers =
       head === undefined ? [] : head.fields.map((h, i) => (h.trim() === "" ? `column ${i + 1}` : h.trim()));
-    this.mapping = chooseMapping(
+    const chosen = chooseMapping(
       this.headers,
       rest.map((r) => r.fields),
       this.options,
     );
+    // Record the dialect the file was read with, so a saved mapping replays it.
+    this.mapping = {
+      ...chosen,
+      delimiter: chosen.delimiter ?? this.dialect.delimiter,
+      decimalComma: chosen.decimalComma ?? this.dialect.decimalComma,
+    };
     const { reader, compiled } = startRows(this.headers, this.mapping, this.dialect, this.options);
     this.reader = reader;
     this.compiled = compiled;
