@@ -79,7 +79,7 @@ export function mapSvg(input: MapInput, id: string): SafeHtml {
   }
   if (input.intrusion && input.intrusion.km <= main.kmEnd && input.intrusion.km >= 0) {
     const [x, y] = p.project(pointAtKm(network, input.intrusion.km).map((v, i) => (i === 0 ? wrap(v, ref) : v)));
-    out.push(html`<path d="M${c1(x)} ${c1(y - 4)}L${c1(x - 6)} ${c1(y - 15)}L${c1(x + 6)} ${c1(y - 15)}Z" fill="#d9480f" stroke="#fff" stroke-width="0.8"/><text class="mark" x="${c1(x)}" y="${c1(y - 18)}" text-anchor="middle">S = ${formatSignificant(input.intrusion.salinity, 3)} at km ${formatSignificant(input.intrusion.km, 3)}</text>`);
+    out.push(html`<path d="M${c1(x)} ${c1(y - 4)}L${c1(x - 6)} ${c1(y - 15)}L${c1(x + 6)} ${c1(y - 15)}Z" fill="#d9480f" stroke="#fff" stroke-width="0.8"/><text class="mark" x="${c1(x - 9)}" y="${c1(y - 8)}" text-anchor="end">S = ${formatSignificant(input.intrusion.salinity, 3)} at km ${formatSignificant(input.intrusion.km, 3)}</text>`);
   }
   const byKm = [...stations].sort((a, b) => (a.alongChannelKm ?? 0) - (b.alongChannelKm ?? 0));
   byKm.forEach((s, i) => {
@@ -90,7 +90,8 @@ export function mapSvg(input: MapInput, id: string): SafeHtml {
   for (const s of input.basemap ?? [])
     if (s.point) {
       const [x, y] = p.project([wrap(s.point[0], ref), s.point[1]]);
-      out.push(html`<circle cx="${c1(x)}" cy="${c1(y)}" r="2" fill="#555"/><text class="place" x="${c1(x + 4)}" y="${c1(y + 3)}">${s.name ?? ""}</text>`);
+      const end = x > W - 6 * (s.name ?? "").length - 10;
+      out.push(html`<circle cx="${c1(x)}" cy="${c1(y)}" r="2" fill="#555"/><text class="place" x="${c1(end ? x - 4 : x + 4)}" y="${c1(y + 3)}" text-anchor="${end ? "end" : "start"}">${s.name ?? ""}</text>`);
     }
   const barKm = niceKm((W * 0.22) / p.unitsPerKm);
   const barW = barKm * p.unitsPerKm;

@@ -60,15 +60,13 @@ describe("compareSurveys() on the invented demo surveys (data-demo truth.json, g
     expect(shift("Ba").zone!.kmSeaward!.value).toBeGreaterThan(0);
   });
 
-  // Skipped until the mixing engine places the dry-season Fe zone (it currently reports S 33.75–33.75) and
-  // finds the Ba maximum (it currently classes Ba as plain "addition"): the comparison can only shift what it is given.
-  it.skip("compareSurveys() moves the Fe removal zone landward in the dry survey (truth.json: zone S 0.2–15 in both surveys)", () => {
+  it("compareSurveys() moves the Fe removal zone landward in the dry survey (truth.json: zone S 0.2–15 in both surveys)", () => {
     const z = shift("Fe").zone!;
     expect(z.kmLandward!.value).toBeGreaterThan(0);
     expect(z.kmSeaward!.value).toBeGreaterThan(0);
   });
 
-  it.skip("compareSurveys() moves the Ba maximum landward in the dry survey (truth.json maximumSalinity 4.8 wet / 4.5 dry)", () => {
+  it("compareSurveys() moves the Ba maximum landward in the dry survey (truth.json maximumSalinity 4.8 wet / 4.5 dry)", () => {
     expect(shift("Ba").maximum!.km!.value).toBeGreaterThan(0);
   });
 
