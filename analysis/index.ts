@@ -84,7 +84,9 @@ export { polyFit } from "./stats/polyFit.ts";
 export type { PolyFit } from "./stats/polyFit.ts";
 export { runsTest } from "./stats/runsTest.ts";
 export type { RunsTestResult } from "./stats/runsTest.ts";
-export { fitSmoothingSpline, mergeKnots } from "./stats/smoothingSpline.ts";
+export { fitSmoothingSpline } from "./stats/smoothingSpline.ts";
+export { mergeKnots } from "./stats/knotData.ts";
+export type { KnotData } from "./stats/knotData.ts";
 export { evaluateSpline, evaluateSplineGrid } from "./stats/naturalSpline.ts";
 export type { NaturalSpline, SplinePoint } from "./stats/naturalSpline.ts";
 export { interval95, percentileSorted } from "./stats/percentile.ts";
@@ -265,3 +267,22 @@ export { profilePlotSvg } from "./report/profilePlotSvg.ts";
 export { zoneStripSvg } from "./report/zoneStripSvg.ts";
 export type { ZoneRow } from "./report/zoneStripSvg.ts";
 // --- end report ---
+
+// --- underway ---
+export { readUnderwayText, readUnderwayStream } from "./underway/readUnderway.ts";
+export type { ReadUnderwayOptions } from "./underway/recordReader.ts";
+export { CELL_MEASURED, CELL_MISSING, CELL_INVALID, CELL_DERIVED } from "./underway/types.ts";
+export type { UnderwayCellStatus, UnderwayRole, UnderwayColumn, UnderwayData, UnderwaySummary, UnderwayImport } from "./underway/types.ts";
+export { underwayColumnRoles } from "./underway/headerRoles.ts";
+export type { UnderwayColumnRole } from "./underway/headerRoles.ts";
+export { IssueLog, DEFAULT_ISSUE_CAP } from "./underway/issueLog.ts";
+export { projectUnderway } from "./underway/projectUnderway.ts";
+export type { UnderwayProjection } from "./underway/projectUnderway.ts";
+export { binUnderway } from "./underway/binUnderway.ts";
+export type { UnderwayBin, UnderwayBins, UnderwayBinOptions } from "./underway/binUnderway.ts";
+export type { BinStats } from "./underway/runningStats.ts";
+export { binsToSurvey } from "./underway/binsToSurvey.ts";
+export type { BinsToSurveyOptions } from "./underway/binsToSurvey.ts";
+export { decimatePoints } from "./underway/decimatePoints.ts";
+export type { DecimateOptions, DecimatedPoints } from "./underway/decimatePoints.ts";
+// --- end underway ---
