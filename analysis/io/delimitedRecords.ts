@@ -126,7 +126,7 @@ export function parseDelimitedChunks(
     let row = 0;
     let blank = 0;
     const stream = toStreamLike(chunks, onChunk);
-    Papa.parse(stream as unknown as NodeJS.ReadableStream, {
+    Papa.parse(stream as unknown as Papa.LocalFile, {
       delimiter: dialect.delimiter,
       skipEmptyLines: false,
       step: (result: Papa.ParseStepResult<string[]>) => {
