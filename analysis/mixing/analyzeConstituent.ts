@@ -1,4 +1,4 @@
-import type { ConstituentAnalysis, Estimate, MixingWarning } from "./result.ts";
+import type { ConstituentAnalysis, MixingWarning } from "./result.ts";
 import type { AnalyzeOptions, MixingSample } from "./options.ts";
 import { validateOptions } from "./validateOptions.ts";
 import { defaultPrecision, sigmaOf } from "./precision.ts";
@@ -41,7 +41,10 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
   const dp = defaultPrecision(name, unit);
   const precision = options.precision ?? dp.precision;
   if (!options.precision && !dp.fromTable)
-    warnings.push({ code: "default-precision", message: `No precision given and none tabulated for ${name}: assumed 5 % relative. Enter your laboratory's precision.` });
+    warnings.push({
+      code: "default-precision",
+      message: `No precision given and none tabulated for ${name}: assumed 5 % relative. Enter your laboratory's precision.`,
+    });
   const prep = prepareSamples(fn, samples, precision, options.censoredFraction ?? 0.5);
   warnings.push(...prep.warnings);
   const used = prep.used;
@@ -52,17 +55,23 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
     class: "insufficient-data",
     warnings: [...warnings, { code: "insufficient-data", message }],
   });
-  if (used.length > 0 && used.every((s) => s.censored)) return insufficient(`All ${used.length} values of ${name} are below detection: no mixing behaviour can be inferred.`);
-  if (used.length < 2) return insufficient(`${used.length} usable station(s) for ${name}; the analysis needs at least ${MIN_STATIONS}.`);
+  if (used.length > 0 && used.every((s) => s.censored))
+    return insufficient(
+      `All ${used.length} values of ${name} are below detection: no mixing behaviour can be inferred.`,
+    );
+  if (used.length < 2)
+    return insufficient(`${used.length} usable station(s) for ${name}; the analysis needs at least ${MIN_STATIONS}.`);
   const sMin = used[0]!.salinity;
   const sMax = used[used.length - 1]!.salinity;
-  if (sMax - sMin < MIN_SALINITY_SPAN) return insufficient(`Salinity spans only ${sMin}–${sMax} (< ${MIN_SALINITY_SPAN}): no mixing gradient to analyse.`);
+  if (sMax - sMin < MIN_SALINITY_SPAN)
+    return insufficient(`Salinity spans only ${sMin}–${sMax} (< ${MIN_SALINITY_SPAN}): no mixing gradient to analyse.`);
   const sig = (c: number): number => sigmaOf(precision, c);
   let river = endmemberFromData(used, "river");
   let sea = endmemberFromData(used, "sea");
   if (options.river) river = applyOverride(fn, "river", river, options.river, sig);
   if (options.sea) sea = applyOverride(fn, "sea", sea, options.sea, sig);
-  if (!(sea.salinity > river.salinity)) return insufficient(`Sea end-member salinity ${sea.salinity} is not above river salinity ${river.salinity}.`);
+  if (!(sea.salinity > river.salinity))
+    return insufficient(`Sea end-member salinity ${sea.salinity} is not above river salinity ${river.salinity}.`);
   const rv = riverVariability(river, sig(river.conc), options);
   warnings.push(...rv.warnings);
   if (rv.widenedSd !== undefined) river = { ...river, concSd: Math.max(river.concSd, rv.widenedSd) };
@@ -71,14 +80,39 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
   const endmembers = { river, sea };
   warnings.push(...surveyPitfalls(sMin, sMax, used.length, options));
   if (used.length < MIN_STATIONS)
-    return insufficient(`${used.length} usable stations for ${name}; curve, tangent and class need at least ${MIN_STATIONS}.`, { endmembers, dilutionLine: line, deviations: devs });
+    return insufficient(
+      `${used.length} usable stations for ${name}; curve, tangent and class need at least ${MIN_STATIONS}.`,
+      { endmembers, dilutionLine: line, deviations: devs },
+    );
   const evidence = mixingEvidence(used, devs, prep.nCensored, k);
   const curve = fitCurve(used);
   if (!evidence || !curve)
-    return insufficient(`Fewer than 4 distinct salinities for ${name}: no curve can be fitted.`, { endmembers, dilutionLine: line, deviations: devs });
+    return insufficient(`Fewer than 4 distinct salinities for ${name}: no curve can be fitted.`, {
+      endmembers,
+      dilutionLine: line,
+      deviations: devs,
+    });
   const tangent = seawardTangent(used, curve.scatterFactor);
-  if (!tangent) return insufficient(`No seaward tangent could be fitted for ${name}.`, { endmembers, dilutionLine: line, deviations: devs, evidence });
-  const result = analyzeShape({ used, options, precision, river, sea, line, curve, tangent, nonConservative: isNonConservative(evidence), quadCoef: evidence.quadraticCoefficient, warnings });
+  if (!tangent)
+    return insufficient(`No seaward tangent could be fitted for ${name}.`, {
+      endmembers,
+      dilutionLine: line,
+      deviations: devs,
+      evidence,
+    });
+  const result = analyzeShape({
+    used,
+    options,
+    precision,
+    river,
+    sea,
+    line,
+    curve,
+    tangent,
+    nonConservative: isNonConservative(evidence),
+    quadCoef: evidence.quadraticCoefficient,
+    warnings,
+  });
   const all = [...warnings, ...result.warnings];
   return {
     name,

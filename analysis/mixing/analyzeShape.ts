@@ -1,4 +1,12 @@
-import type { BehaviourClass, ConstituentAnalysis, DilutionLine, Endmember, FitCurve, MixingWarning, TangentLine } from "./result.ts";
+import type {
+  BehaviourClass,
+  ConstituentAnalysis,
+  DilutionLine,
+  Endmember,
+  FitCurve,
+  MixingWarning,
+  TangentLine,
+} from "./result.ts";
 import type { AnalyzeOptions, Precision } from "./options.ts";
 import type { PreparedSample } from "./prepareSamples.ts";
 import type { CurveFitResult } from "./curveFit.ts";
@@ -93,25 +101,47 @@ export function analyzeShape(p: ShapeInput): {
     seed,
   });
   if (draws > 0 && bs.usable < 0.9 * draws)
-    warnings.push({ code: "bootstrap-degenerate", message: `Only ${bs.usable} of ${draws} bootstrap draws were usable; intervals are rough.` });
+    warnings.push({
+      code: "bootstrap-degenerate",
+      message: `Only ${bs.usable} of ${draws} bootstrap draws were usable; intervals are rough.`,
+    });
   const effective = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = estimateOf((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
-  else warnings.push({ code: "river-nonpositive", message: `River end-member ${river.conc} ${unit} is not positive: no % change.` });
+  else
+    warnings.push({
+      code: "river-nonpositive",
+      message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,
+    });
   const im = interiorMaximum(grid, f);
   const cls = classify(p.nonConservative, cStar - river.conc, p.quadCoef, tangent, sMin, sMax, im >= 0, n);
   const toKm = (a: number, b: number): Array<[number, number]> => o.salinityToKm?.(a, b) ?? [];
   let zone: ConstituentAnalysis["reactionZone"];
-  const z = cls === "conservative" ? undefined : zoneFromCurve(grid, d2, sr, undefined, tangent.method === "segment" ? tangent.fromSalinity : undefined);
+  const z =
+    cls === "conservative"
+      ? undefined
+      : zoneFromCurve(grid, d2, sr, undefined, tangent.method === "segment" ? tangent.fromSalinity : undefined);
   if (z) {
-    zone = { salinity: [z.from, z.to], km: toKm(z.from, z.to), kind: z.kind, salinityLower: estimateOf(z.from, bs.zoneLower, "salinity"), salinityUpper: estimateOf(z.to, bs.zoneUpper, "salinity") };
+    zone = {
+      salinity: [z.from, z.to],
+      km: toKm(z.from, z.to),
+      kind: z.kind,
+      salinityLower: estimateOf(z.from, bs.zoneLower, "salinity"),
+      salinityUpper: estimateOf(z.to, bs.zoneUpper, "salinity"),
+    };
     const inZone = used.filter((s) => s.salinity >= z.from && s.salinity <= z.to).length;
     if (inZone < MIN_ZONE_STATIONS)
-      warnings.push({ code: "few-stations-in-zone", message: `Only ${inZone} station(s) lie inside the reaction zone S = ${z.from.toFixed(1)}–${z.to.toFixed(1)}; its position and the rate are poorly resolved. Sample the low-salinity region more densely.` });
+      warnings.push({
+        code: "few-stations-in-zone",
+        message: `Only ${inZone} station(s) lie inside the reaction zone S = ${z.from.toFixed(1)}–${z.to.toFixed(1)}; its position and the rate are poorly resolved. Sample the low-salinity region more densely.`,
+      });
   }
   let maximum: ConstituentAnalysis["maximum"];
   const q = o.riverDischargeM3s;
-  const fl = q !== undefined && percent !== undefined ? fluxSummary(q, unit, estimateOf(river.conc, bs.riverConc, unit), effective, bs.netDelta, sr, o.densityKgM3) : undefined;
+  const fl =
+    q !== undefined && percent !== undefined
+      ? fluxSummary(q, unit, estimateOf(river.conc, bs.riverConc, unit), effective, bs.netDelta, sr, o.densityKgM3)
+      : undefined;
   if (fl) warnings.push(...fl.warnings);
   if (im >= 0 && (cls === "addition" || cls === "maximum-then-conservative")) {
     const s = grid[im]!;
@@ -127,10 +157,11 @@ export function analyzeShape(p: ShapeInput): {
   for (let i = 0; i < G; i++) cStarLocal[i] = f[i]! - (grid[i]! - sr) * d1[i]!;
   const rp = rateProfile(grid, d2, cStarLocal, sr, o, cStar);
   warnings.push(...rp.warnings);
-  const band = (arr: number[]): number[] => Array.from(grid, (s, i) => {
-    const v = interpolate(bGrid, arr, s);
-    return Number.isFinite(v) ? v : f[i]!;
-  });
+  const band = (arr: number[]): number[] =>
+    Array.from(grid, (s, i) => {
+      const v = interpolate(bGrid, arr, s);
+      return Number.isFinite(v) ? v : f[i]!;
+    });
   return {
     cls,
     fit: {

@@ -1,6 +1,7 @@
 import { randomLcg, randomNormal } from "d3-random";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
-import { fitSmoothingSpline, mergeKnots } from "../stats/smoothingSpline.ts";
+import { fitSmoothingSpline } from "../stats/smoothingSpline.ts";
+import { mergeKnots } from "../stats/knotData.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import type { TangentLine } from "./result.ts";
 import { endFitStations, endTangent, MIN_SEGMENT_STATIONS, SEGMENT_ALPHA } from "./tangent.ts";
@@ -78,7 +79,12 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const crit = segmentCriticals(n, SEGMENT_ALPHA);
   const mEnd = endFitStations(n);
   const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
-  const splineWs = { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: 0 };
+  const splineWs = {
+    knots: new Float64Array(n),
+    values: new Float64Array(n),
+    secondDerivs: new Float64Array(n),
+    count: 0,
+  };
   const f = new Float64Array(G);
   const d2 = new Float64Array(G);
   const rhoWork = new Float64Array(G);

@@ -23,11 +23,23 @@ export const TAIL_MIN_FRACTION = 0.25;
  * @param nStations number of stations analysed
  * @returns the class
  */
-export function classify(nonConservative: boolean, netDelta: number, quadCoef: number, tangent: TangentLine, sMin: number, sMax: number, hasInteriorMax: boolean, nStations: number): BehaviourClass {
+export function classify(
+  nonConservative: boolean,
+  netDelta: number,
+  quadCoef: number,
+  tangent: TangentLine,
+  sMin: number,
+  sMax: number,
+  hasInteriorMax: boolean,
+  nStations: number,
+): BehaviourClass {
   if (!nonConservative) return "conservative";
   const removal = netDelta !== 0 ? netDelta < 0 : quadCoef > 0;
   const range = sMax - sMin;
-  const tail = tangent.method === "segment" && sMax - tangent.fromSalinity >= TAIL_MIN_FRACTION * range && nStations - tangent.nStations >= MIN_LANDWARD_STATIONS;
+  const tail =
+    tangent.method === "segment" &&
+    sMax - tangent.fromSalinity >= TAIL_MIN_FRACTION * range &&
+    nStations - tangent.nStations >= MIN_LANDWARD_STATIONS;
   if (removal) return tail ? "removal-then-conservative" : "removal";
   return tail && hasInteriorMax ? "maximum-then-conservative" : "addition";
 }

@@ -1,7 +1,8 @@
 import type { PreparedSample } from "./prepareSamples.ts";
 import type { NaturalSpline } from "../stats/naturalSpline.ts";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
-import { fitSmoothingSpline, mergeKnots } from "../stats/smoothingSpline.ts";
+import { fitSmoothingSpline } from "../stats/smoothingSpline.ts";
+import { mergeKnots } from "../stats/knotData.ts";
 import { GCV_ALPHA, minimiseGcv, minimiseUbre, splinePath } from "../stats/splineGcv.ts";
 import { chiSquareUpperP } from "../stats/distributions.ts";
 import { runsTest } from "../stats/runsTest.ts";
@@ -39,7 +40,12 @@ export const TIE_FRACTION = 1e-6;
 export function fitCurve(used: readonly PreparedSample[]): CurveFitResult | undefined {
   const x = used.map((s) => s.salinity);
   const range = x[x.length - 1]! - x[0]!;
-  const knots = mergeKnots(x, used.map((s) => s.conc), used.map((s) => 1 / (s.sigma * s.sigma)), TIE_FRACTION * range);
+  const knots = mergeKnots(
+    x,
+    used.map((s) => s.conc),
+    used.map((s) => 1 / (s.sigma * s.sigma)),
+    TIE_FRACTION * range,
+  );
   if (knots.n < 4) return undefined;
   const path = splinePath(knots);
   let g = minimiseGcv(path, GCV_ALPHA);

@@ -13,7 +13,8 @@ import type { PreparedSample } from "./prepareSamples.ts";
  * @see Liss, P.S. (1976) in Burton & Liss (eds) Estuarine Chemistry, 93–130 (mixing-methods.md §1.1, Eq. 1).
  */
 export function dilutionLine(river: Endmember, sea: Endmember, unit: string): DilutionLine {
-  if (!(sea.salinity > river.salinity)) throw new RangeError(`dilutionLine: sea salinity (${sea.salinity}) must exceed river salinity (${river.salinity})`);
+  if (!(sea.salinity > river.salinity))
+    throw new RangeError(`dilutionLine: sea salinity (${sea.salinity}) must exceed river salinity (${river.salinity})`);
   const slope = (sea.conc - river.conc) / (sea.salinity - river.salinity);
   return { slope, intercept: river.conc - slope * river.salinity, river, sea, unit };
 }

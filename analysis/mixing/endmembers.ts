@@ -47,10 +47,18 @@ export function endmemberFromData(used: readonly PreparedSample[], which: "river
  * @returns the override end-member (source "override", n = 0)
  * @throws RangeError for non-finite or negative values
  */
-export function applyOverride(fn: string, which: "river" | "sea", data: Endmember | undefined, o: EndmemberOverride, sigmaOfConc: (c: number) => number): Endmember {
+export function applyOverride(
+  fn: string,
+  which: "river" | "sea",
+  data: Endmember | undefined,
+  o: EndmemberOverride,
+  sigmaOfConc: (c: number) => number,
+): Endmember {
   if (!Number.isFinite(o.conc)) throw new RangeError(`${fn}: options.${which}.conc must be finite, got ${o.conc}`);
-  if (o.concSd !== undefined && !(o.concSd >= 0)) throw new RangeError(`${fn}: options.${which}.concSd must be ≥ 0, got ${o.concSd}`);
-  if (o.salinity !== undefined && !(o.salinity >= 0 && o.salinity < 50)) throw new RangeError(`${fn}: options.${which}.salinity must be in [0, 50), got ${o.salinity}`);
+  if (o.concSd !== undefined && !(o.concSd >= 0))
+    throw new RangeError(`${fn}: options.${which}.concSd must be ≥ 0, got ${o.concSd}`);
+  if (o.salinity !== undefined && !(o.salinity >= 0 && o.salinity < 50))
+    throw new RangeError(`${fn}: options.${which}.salinity must be in [0, 50), got ${o.salinity}`);
   const salinity = o.salinity ?? data?.salinity ?? (which === "river" ? 0 : 35);
   return { salinity, conc: o.conc, concSd: o.concSd ?? sigmaOfConc(o.conc), n: 0, source: "override", stationIds: [] };
 }

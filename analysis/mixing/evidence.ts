@@ -23,7 +23,12 @@ export const ALPHA = 0.05;
  * @returns evidence, or undefined when the fits cannot be made (too few distinct salinities)
  * @see Boyle et al. (1974) GCA 38, 1719–1728; Wald & Wolfowitz (1940) Ann. Math. Stat. 11, 147–162.
  */
-export function mixingEvidence(used: readonly PreparedSample[], devs: readonly StationDeviation[], nCensored: number, k: number): MixingEvidence | undefined {
+export function mixingEvidence(
+  used: readonly PreparedSample[],
+  devs: readonly StationDeviation[],
+  nCensored: number,
+  k: number,
+): MixingEvidence | undefined {
   const n = used.length;
   const x = used.map((s) => s.salinity);
   const y = used.map((s) => s.conc);

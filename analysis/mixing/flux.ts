@@ -33,7 +33,10 @@ export function fluxSummary(
   const warnings: MixingWarning[] = [];
   const mu = molarFactor(unit);
   if (!mu) {
-    warnings.push({ code: "flux-unit", message: `Fluxes need a molar concentration unit (e.g. nmol/L, µmol/kg); "${unit}" is not one, so no flux is given.` });
+    warnings.push({
+      code: "flux-unit",
+      message: `Fluxes need a molar concentration unit (e.g. nmol/L, µmol/kg); "${unit}" is not one, so no flux is given.`,
+    });
     return { warnings };
   }
   let rho = 1000;
@@ -47,12 +50,18 @@ export function fluxSummary(
       note = "; per-kg treated as per-L (ρ = 1000 kg/m³)";
     } else {
       rho = typeof density === "number" ? density : density(riverSalinity);
-      if (!(rho > 900 && rho < 1100)) throw new RangeError(`analyzeConstituent: densityKgM3 must be in (900, 1100) kg/m³, got ${rho}`);
+      if (!(rho > 900 && rho < 1100))
+        throw new RangeError(`analyzeConstituent: densityKgM3 must be in (900, 1100) kg/m³, got ${rho}`);
       note = `; per-kg converted with ρ(S_r) = ${rho.toFixed(2)} kg/m³`;
     }
   }
   const fac = toMolPerM3(unit, rho)!;
-  const est = (v: number, lo: number, hi: number): Estimate => ({ value: q * fac * v, lower: q * fac * lo, upper: q * fac * hi, unit: "mol/s" });
+  const est = (v: number, lo: number, hi: number): Estimate => ({
+    value: q * fac * v,
+    lower: q * fac * lo,
+    upper: q * fac * hi,
+    unit: "mol/s",
+  });
   const d = cStar.value - c0.value;
   return {
     flux: {

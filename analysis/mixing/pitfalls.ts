@@ -9,7 +9,13 @@ export const RIVER_END_MAX_S = 1;
 export const SEA_END_MIN_S = 20;
 
 /** Warning codes that set the analysis confidence to "low". */
-export const LOW_CONFIDENCE_CODES = new Set(["endmember-variability", "few-stations-in-zone", "salinity-range", "non-monotonic-salinity", "few-stations"]);
+export const LOW_CONFIDENCE_CODES = new Set([
+  "endmember-variability",
+  "few-stations-in-zone",
+  "salinity-range",
+  "non-monotonic-salinity",
+  "few-stations",
+]);
 
 /**
  * End-member variability against flushing time (Loder & Reichard 1981): a conservative
@@ -24,7 +30,11 @@ export const LOW_CONFIDENCE_CODES = new Set(["endmember-variability", "few-stati
  * @returns warnings and a widened river sd (the spread within the flushing time), or undefined
  * @see Loder, T.C. & Reichard, R.P. (1981) Estuaries 4, 64–69 (from memory); Cifuentes et al. (1990) ECSS 30, 411–427.
  */
-export function riverVariability(river: Endmember, sigma: number, opts: AnalyzeOptions): { warnings: MixingWarning[]; widenedSd?: number } {
+export function riverVariability(
+  river: Endmember,
+  sigma: number,
+  opts: AnalyzeOptions,
+): { warnings: MixingWarning[]; widenedSd?: number } {
   const warnings: MixingWarning[] = [];
   const limit = Math.max(2 * sigma, RIVER_VARIABILITY_FRACTION * Math.abs(river.conc));
   let widenedSd: number | undefined;
@@ -50,7 +60,10 @@ export function riverVariability(river: Endmember, sigma: number, opts: AnalyzeO
       });
     }
   } else if (opts.flushingTimeDays !== undefined && river.n < 2) {
-    warnings.push({ code: "endmember-history-unknown", message: `Flushing time ${fmt(opts.flushingTimeDays)} d given but no river history or repeated river samples: river variability over that time cannot be checked.` });
+    warnings.push({
+      code: "endmember-history-unknown",
+      message: `Flushing time ${fmt(opts.flushingTimeDays)} d given but no river history or repeated river samples: river variability over that time cannot be checked.`,
+    });
   }
   return { warnings, widenedSd };
 }
@@ -67,10 +80,26 @@ export function riverVariability(river: Endmember, sigma: number, opts: AnalyzeO
 export function surveyPitfalls(sMin: number, sMax: number, n: number, opts: AnalyzeOptions): MixingWarning[] {
   const w: MixingWarning[] = [];
   if (sMin > RIVER_END_MAX_S || sMax < SEA_END_MIN_S)
-    w.push({ code: "salinity-range", message: `Stations span S = ${fmt(sMin)}–${fmt(sMax)}, which does not cover the estuary from river (S < ${RIVER_END_MAX_S}) to sea (S ≥ ${SEA_END_MIN_S}); end-members are extrapolated and reactions outside the range are missed.` });
-  if (n < 8) w.push({ code: "few-stations", message: `Only ${n} stations: curvature and reaction zones are poorly constrained.` });
-  if (opts.salinityNonMonotonic) w.push({ code: "non-monotonic-salinity", message: "Salinity does not increase monotonically seaward along the channel (side inputs, a second branch or a tidal snapshot); a salinity interval can map to several channel stretches and the two-end-member model may not apply." });
-  w.push({ code: "steady-state-assumed", message: "One survey is a snapshot: the mixing analysis assumes steady river flow, end-members and reactions over at least one flushing time, which a single survey cannot prove (Officer 1979; Regnier et al. 1998). Screening analysis, not a compliance assessment." });
+    w.push({
+      code: "salinity-range",
+      message: `Stations span S = ${fmt(sMin)}–${fmt(sMax)}, which does not cover the estuary from river (S < ${RIVER_END_MAX_S}) to sea (S ≥ ${SEA_END_MIN_S}); end-members are extrapolated and reactions outside the range are missed.`,
+    });
+  if (n < 8)
+    w.push({
+      code: "few-stations",
+      message: `Only ${n} stations: curvature and reaction zones are poorly constrained.`,
+    });
+  if (opts.salinityNonMonotonic)
+    w.push({
+      code: "non-monotonic-salinity",
+      message:
+        "Salinity does not increase monotonically seaward along the channel (side inputs, a second branch or a tidal snapshot); a salinity interval can map to several channel stretches and the two-end-member model may not apply.",
+    });
+  w.push({
+    code: "steady-state-assumed",
+    message:
+      "One survey is a snapshot: the mixing analysis assumes steady river flow, end-members and reactions over at least one flushing time, which a single survey cannot prove (Officer 1979; Regnier et al. 1998). Screening analysis, not a compliance assessment.",
+  });
   return w;
 }
 

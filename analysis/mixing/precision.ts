@@ -38,7 +38,9 @@ export const FALLBACK_PRECISION: Precision = { relative: 0.05, absolute: 0 };
  * @returns the precision and whether it came from the table
  */
 export function defaultPrecision(name: string, unit: string): { precision: Precision; fromTable: boolean } {
-  const key = Object.keys(DEFAULT_PRECISION).find((k) => k === name) ?? Object.keys(DEFAULT_PRECISION).find((k) => k.toLowerCase() === name.toLowerCase());
+  const key =
+    Object.keys(DEFAULT_PRECISION).find((k) => k === name) ??
+    Object.keys(DEFAULT_PRECISION).find((k) => k.toLowerCase() === name.toLowerCase());
   if (!key) return { precision: FALLBACK_PRECISION, fromTable: false };
   const d = DEFAULT_PRECISION[key]!;
   const from = molarFactor(d.unit);

@@ -29,14 +29,20 @@ export interface PreparedSample {
  * @returns prepared samples (ascending salinity), counts and warnings
  * @throws TypeError when samples is not an array; RangeError for a bad censoredFraction
  */
-export function prepareSamples(fn: string, samples: readonly MixingSample[], precision: Precision, censoredFraction: number): {
+export function prepareSamples(
+  fn: string,
+  samples: readonly MixingSample[],
+  precision: Precision,
+  censoredFraction: number,
+): {
   used: PreparedSample[];
   nCensored: number;
   nRejected: number;
   warnings: MixingWarning[];
 } {
   if (!Array.isArray(samples)) throw new TypeError(`${fn}: samples must be an array, got ${typeof samples}`);
-  if (!(censoredFraction > 0 && censoredFraction <= 1)) throw new RangeError(`${fn}: censoredFraction must be in (0, 1], got ${censoredFraction}`);
+  if (!(censoredFraction > 0 && censoredFraction <= 1))
+    throw new RangeError(`${fn}: censoredFraction must be in (0, 1], got ${censoredFraction}`);
   const warnings: MixingWarning[] = [];
   const used: PreparedSample[] = [];
   let nRejected = 0;
@@ -61,11 +67,20 @@ export function prepareSamples(fn: string, samples: readonly MixingSample[], pre
       invalid.push(`${s.stationId} (S = ${s.salinity}, C = ${s.conc})`);
       continue;
     }
-    used.push({ stationId: s.stationId, salinity: s.salinity, conc, censored: s.censored, sigma: Math.max(sigma, sigmaOf(precision, conc)) });
+    used.push({
+      stationId: s.stationId,
+      salinity: s.salinity,
+      conc,
+      censored: s.censored,
+      sigma: Math.max(sigma, sigmaOf(precision, conc)),
+    });
   }
   used.sort((a, b) => a.salinity - b.salinity);
   if (invalid.length > 0)
-    warnings.push({ code: "invalid-sample", message: `${invalid.length} sample(s) left out because salinity or concentration is not a valid number: ${invalid.slice(0, 5).join(", ")}${invalid.length > 5 ? ", …" : ""}.` });
+    warnings.push({
+      code: "invalid-sample",
+      message: `${invalid.length} sample(s) left out because salinity or concentration is not a valid number: ${invalid.slice(0, 5).join(", ")}${invalid.length > 5 ? ", …" : ""}.`,
+    });
   if (nCensored > 0) {
     const rule = `${Math.round(censoredFraction * 100)} % of the detection limit (DL${censoredFraction === 0.5 ? "/2" : ""}), weighted with σ = DL/√12`;
     warnings.push({

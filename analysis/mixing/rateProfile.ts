@@ -32,18 +32,36 @@ function gradientFromKm(toKm: (s: number) => number[], s: number, sMin: number, 
  * @returns the profile, or undefined (with a warning) when inputs are missing
  * @see mixing-methods.md §1.3, Eqs. 2′, 4 and 5 (DERIVED+VERIFIED).
  */
-export function rateProfile(grid: Float64Array, d2: Float64Array, cStarLocal: Float64Array, riverSalinity: number, opts: AnalyzeOptions, effective: number): { profile?: RateProfile; warnings: MixingWarning[] } {
+export function rateProfile(
+  grid: Float64Array,
+  d2: Float64Array,
+  cStarLocal: Float64Array,
+  riverSalinity: number,
+  opts: AnalyzeOptions,
+  effective: number,
+): { profile?: RateProfile; warnings: MixingWarning[] } {
   const q = opts.riverDischargeM3s;
   const { crossSectionM2: aOpt, dispersionM2s: kOpt } = opts;
   if (q === undefined || (aOpt === undefined && kOpt === undefined)) return { warnings: [] };
   const G = grid.length;
   const sMin = grid[0]!;
   const sMax = grid[G - 1]!;
-  const val = (v: number | ((s: number) => number) | undefined, s: number): number | undefined => (typeof v === "function" ? v(s) : v);
-  const gradAt = (s: number): number | undefined => opts.salinityGradientPerM?.(s) ?? (opts.salinityToKmPoint ? gradientFromKm(opts.salinityToKmPoint, s, sMin, sMax) : undefined);
+  const val = (v: number | ((s: number) => number) | undefined, s: number): number | undefined =>
+    typeof v === "function" ? v(s) : v;
+  const gradAt = (s: number): number | undefined =>
+    opts.salinityGradientPerM?.(s) ??
+    (opts.salinityToKmPoint ? gradientFromKm(opts.salinityToKmPoint, s, sMin, sMax) : undefined);
   const bothAK = aOpt !== undefined && kOpt !== undefined;
   if (!bothAK && gradAt(0.5 * (sMin + sMax)) === undefined)
-    return { warnings: [{ code: "rate-needs-gradient", message: "The reaction-rate profile needs dS/dx (a salinity-gradient function or the channel geometry) when only one of cross-section and dispersion is given; no profile computed." }] };
+    return {
+      warnings: [
+        {
+          code: "rate-needs-gradient",
+          message:
+            "The reaction-rate profile needs dS/dx (a salinity-gradient function or the channel geometry) when only one of cross-section and dispersion is given; no profile computed.",
+        },
+      ],
+    };
   const fac = toMolPerM3(opts.unit, 1000);
   const salinity: number[] = [];
   const rate: number[] = [];
@@ -58,7 +76,15 @@ export function rateProfile(grid: Float64Array, d2: Float64Array, cStarLocal: Fl
     const a = val(aOpt, s);
     const k = val(kOpt, s);
     const g = bothAK ? undefined : gradAt(s);
-    const r = reactionRate({ salinity: s, riverSalinity, d2: d2[i]!, dischargeM3s: q, crossSectionM2: a, dispersionM2s: k, gradientPerM: g });
+    const r = reactionRate({
+      salinity: s,
+      riverSalinity,
+      d2: d2[i]!,
+      dischargeM3s: q,
+      crossSectionM2: a,
+      dispersionM2s: k,
+      gradientPerM: g,
+    });
     salinity.push(s);
     rate.push(r);
     // A·R·dx/dS; by Eq. 2′ this equals −Q·(S − S_r)·C'' whichever inputs were given.
@@ -85,6 +111,14 @@ export function rateProfile(grid: Float64Array, d2: Float64Array, cStarLocal: Fl
       expectedMolS,
       relativeDifference: Math.abs(integratedMolS - expectedMolS) / Math.max(Math.abs(expectedMolS), 1e-30),
     },
-    warnings: fac === undefined ? [{ code: "rate-unit", message: `"${opts.unit}" is not a molar unit; the integrated check is in ${opts.unit}·m³/s, not mol/s.` }] : [],
+    warnings:
+      fac === undefined
+        ? [
+            {
+              code: "rate-unit",
+              message: `"${opts.unit}" is not a molar unit; the integrated check is in ${opts.unit}·m³/s, not mol/s.`,
+            },
+          ]
+        : [],
   };
 }

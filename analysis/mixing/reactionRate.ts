@@ -28,12 +28,20 @@ export function reactionRate(p: {
 }): number {
   const sr = p.riverSalinity ?? 0;
   const ds = p.salinity - sr;
-  for (const [k, v] of Object.entries({ dischargeM3s: p.dischargeM3s, crossSectionM2: p.crossSectionM2, dispersionM2s: p.dispersionM2s, gradientPerM: p.gradientPerM }))
-    if (v !== undefined && !(v > 0 && Number.isFinite(v))) throw new RangeError(`reactionRate: ${k} must be > 0, got ${v}`);
+  for (const [k, v] of Object.entries({
+    dischargeM3s: p.dischargeM3s,
+    crossSectionM2: p.crossSectionM2,
+    dispersionM2s: p.dispersionM2s,
+    gradientPerM: p.gradientPerM,
+  }))
+    if (v !== undefined && !(v > 0 && Number.isFinite(v)))
+      throw new RangeError(`reactionRate: ${k} must be > 0, got ${v}`);
   if (!Number.isFinite(p.d2)) throw new RangeError(`reactionRate: d2 must be finite, got ${p.d2}`);
   const { dischargeM3s: q, crossSectionM2: a, dispersionM2s: k, gradientPerM: g } = p;
   if (k !== undefined && g !== undefined) return -k * g * g * p.d2;
   if (q !== undefined && a !== undefined && g !== undefined) return -((q * ds) / a) * g * p.d2;
   if (q !== undefined && a !== undefined && k !== undefined) return -((q * q * ds * ds) / (k * a * a)) * p.d2;
-  throw new RangeError("reactionRate: give dispersionM2s + gradientPerM, or dischargeM3s + crossSectionM2 with gradientPerM or dispersionM2s");
+  throw new RangeError(
+    "reactionRate: give dispersionM2s + gradientPerM, or dischargeM3s + crossSectionM2 with gradientPerM or dispersionM2s",
+  );
 }

@@ -11,8 +11,19 @@ export interface SegmentCriticals {
 }
 
 /** Runs test of the residual signs of stations [start, n−1] about a line (duplicates extend a run). */
-function tooFewRuns(x: ArrayLike<number>, y: ArrayLike<number>, counts: ArrayLike<number> | undefined, start: number, intercept: number, slope: number, alpha: number): boolean {
-  let n1 = 0, n2 = 0, runs = 0, last = 0;
+function tooFewRuns(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  counts: ArrayLike<number> | undefined,
+  start: number,
+  intercept: number,
+  slope: number,
+  alpha: number,
+): boolean {
+  let n1 = 0,
+    n2 = 0,
+    runs = 0,
+    last = 0;
   for (let i = start; i < x.length; i++) {
     const c = counts ? counts[i]! : 1;
     if (c === 0) continue;
@@ -82,10 +93,25 @@ export interface SegmentScan {
  * @returns the scan result
  * @see mixing-methods.md §1.6 items 3 and 5 (nested F-test; segmented regression).
  */
-export function scanSegments(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<number>, counts: ArrayLike<number> | undefined, minStations: number, crit: SegmentCriticals): SegmentScan {
+export function scanSegments(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  counts: ArrayLike<number> | undefined,
+  minStations: number,
+  crit: SegmentCriticals,
+): SegmentScan {
   const n = x.length;
   const x0 = x[n - 1]!;
-  let s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, sy = 0, sxy = 0, sx2y = 0, syy = 0;
+  let s0 = 0,
+    s1 = 0,
+    s2 = 0,
+    s3 = 0,
+    s4 = 0,
+    sy = 0,
+    sxy = 0,
+    sx2y = 0,
+    syy = 0;
   let m = 0;
   let distinct = 0;
   const best: SegmentScan = { start: -1, intercept: Number.NaN, slope: Number.NaN, m: 0 };
@@ -98,8 +124,15 @@ export function scanSegments(x: ArrayLike<number>, y: ArrayLike<number>, w: Arra
     const u = x[i]! - x0;
     const u2 = u * u;
     const yi = y[i]!;
-    s0 += wi; s1 += wi * u; s2 += wi * u2; s3 += wi * u2 * u; s4 += wi * u2 * u2;
-    sy += wi * yi; sxy += wi * u * yi; sx2y += wi * u2 * yi; syy += wi * yi * yi;
+    s0 += wi;
+    s1 += wi * u;
+    s2 += wi * u2;
+    s3 += wi * u2 * u;
+    s4 += wi * u2 * u2;
+    sy += wi * yi;
+    sxy += wi * u * yi;
+    sx2y += wi * u2 * yi;
+    syy += wi * yi * yi;
     m += c;
     distinct++;
     if (distinct < minStations || m >= crit.f.length) continue;

@@ -65,11 +65,24 @@ export const END_FIT_MIN_STATIONS = 5;
  *
  * @returns [intercept, slope], or undefined when the quadratic cannot be fitted
  */
-export function endTangent(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<number>): [number, number] | undefined {
+export function endTangent(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+): [number, number] | undefined {
   let se = Number.NEGATIVE_INFINITY;
   for (let i = 0; i < x.length; i++) if (w[i]! > 0 && x[i]! > se) se = x[i]!;
   // Weighted normal equations in u = S − S_e, solved by Cramer's rule (no allocation: runs in the bootstrap).
-  let s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, sy = 0, suy = 0, su2y = 0, distinct = 0, last = Number.NaN;
+  let s0 = 0,
+    s1 = 0,
+    s2 = 0,
+    s3 = 0,
+    s4 = 0,
+    sy = 0,
+    suy = 0,
+    su2y = 0,
+    distinct = 0,
+    last = Number.NaN;
   for (let i = 0; i < x.length; i++) {
     const wi = w[i]!;
     if (!(wi > 0)) continue;
@@ -77,8 +90,14 @@ export function endTangent(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayL
     last = x[i]!;
     const u = x[i]! - se;
     const u2 = u * u;
-    s0 += wi; s1 += wi * u; s2 += wi * u2; s3 += wi * u2 * u; s4 += wi * u2 * u2;
-    sy += wi * y[i]!; suy += wi * u * y[i]!; su2y += wi * u2 * y[i]!;
+    s0 += wi;
+    s1 += wi * u;
+    s2 += wi * u2;
+    s3 += wi * u2 * u;
+    s4 += wi * u2 * u2;
+    sy += wi * y[i]!;
+    suy += wi * u * y[i]!;
+    su2y += wi * u2 * y[i]!;
   }
   if (distinct < 3) return undefined;
   const d = s0 * (s2 * s4 - s3 * s3) - s1 * (s1 * s4 - s3 * s2) + s2 * (s1 * s3 - s2 * s2);
@@ -89,6 +108,13 @@ export function endTangent(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayL
   return [q0 - q1 * se, q1];
 }
 
-function lineOf(intercept: number, slope: number, from: number, to: number, method: TangentLine["method"], nStations: number): TangentLine {
+function lineOf(
+  intercept: number,
+  slope: number,
+  from: number,
+  to: number,
+  method: TangentLine["method"],
+  nStations: number,
+): TangentLine {
   return { slope, intercept, fromSalinity: from, toSalinity: to, salinityRange: [from, to], method, nStations };
 }

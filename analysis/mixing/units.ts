@@ -6,7 +6,7 @@ export interface MolarUnit {
   per: "L" | "kg" | "m3";
 }
 
-const PREFIX: Record<string, number> = { "": 1, m: 1e-3, "µ": 1e-6, "μ": 1e-6, u: 1e-6, n: 1e-9, p: 1e-12, f: 1e-15 };
+const PREFIX: Record<string, number> = { "": 1, m: 1e-3, µ: 1e-6, μ: 1e-6, u: 1e-6, n: 1e-9, p: 1e-12, f: 1e-15 };
 
 /**
  * Parses a molar concentration unit such as "nmol/L", "µmol kg-1", "uM", "nM".

@@ -62,7 +62,7 @@ export function evaluateInterval(s: NaturalSpline, i: number, x: number): Spline
   const g0 = s.secondDerivs[i]!;
   const g1 = s.secondDerivs[i + 1]!;
   return {
-    value: a * f0 + b * f1 + ((a * a * a - a) * g0 + (b * b * b - b) * g1) * (h * h) / 6,
+    value: a * f0 + b * f1 + (((a * a * a - a) * g0 + (b * b * b - b) * g1) * (h * h)) / 6,
     d1: (f1 - f0) / h - ((3 * a * a - 1) * h * g0) / 6 + ((3 * b * b - 1) * h * g1) / 6,
     d2: a * g0 + b * g1,
   };
@@ -77,7 +77,13 @@ export function evaluateInterval(s: NaturalSpline, i: number, x: number): Spline
  * @param d1 output first derivatives, or undefined
  * @param d2 output second derivatives, or undefined
  */
-export function evaluateSplineGrid(s: NaturalSpline, grid: ArrayLike<number>, value: Float64Array, d1?: Float64Array, d2?: Float64Array): void {
+export function evaluateSplineGrid(
+  s: NaturalSpline,
+  grid: ArrayLike<number>,
+  value: Float64Array,
+  d1?: Float64Array,
+  d2?: Float64Array,
+): void {
   const t = s.knots;
   const n = s.count;
   let i = 0;
@@ -95,8 +101,11 @@ export function evaluateSplineGrid(s: NaturalSpline, grid: ArrayLike<number>, va
     const h = t[i + 1]! - t0;
     const a = (t[i + 1]! - x) / h;
     const b = (x - t0) / h;
-    const f0 = s.values[i]!, f1 = s.values[i + 1]!, g0 = s.secondDerivs[i]!, g1 = s.secondDerivs[i + 1]!;
-    value[g] = a * f0 + b * f1 + ((a * a * a - a) * g0 + (b * b * b - b) * g1) * (h * h) / 6;
+    const f0 = s.values[i]!,
+      f1 = s.values[i + 1]!,
+      g0 = s.secondDerivs[i]!,
+      g1 = s.secondDerivs[i + 1]!;
+    value[g] = a * f0 + b * f1 + (((a * a * a - a) * g0 + (b * b * b - b) * g1) * (h * h)) / 6;
     if (d1) d1[g] = (f1 - f0) / h - ((3 * a * a - 1) * h * g0) / 6 + ((3 * b * b - 1) * h * g1) / 6;
     if (d2) d2[g] = a * g0 + b * g1;
   }

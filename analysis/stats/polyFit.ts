@@ -24,9 +24,15 @@ export interface PolyFit {
  * @throws RangeError when the arrays differ in length or a weight is negative
  * @see Draper, N.R. & Smith, H. (1998) Applied Regression Analysis, 3rd ed., ch. 9 (weighted least squares).
  */
-export function polyFit(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<number>, degree: 1 | 2): PolyFit | undefined {
+export function polyFit(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  degree: 1 | 2,
+): PolyFit | undefined {
   const n = x.length;
-  if (y.length !== n || w.length !== n) throw new RangeError(`polyFit: x, y and w must have equal lengths (${n}, ${y.length}, ${w.length})`);
+  if (y.length !== n || w.length !== n)
+    throw new RangeError(`polyFit: x, y and w must have equal lengths (${n}, ${y.length}, ${w.length})`);
   let sw = 0;
   let swx = 0;
   let used = 0;
@@ -67,9 +73,21 @@ export function polyFit(x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike
     rss += w[i]! * e * e;
   }
   // Un-centre: y = c0 + c1(x−xm) + c2(x−xm)².
-  const T = m === 3 ? [[1, -xm, xm * xm], [0, 1, -2 * xm], [0, 0, 1]] : [[1, -xm], [0, 1]];
+  const T =
+    m === 3
+      ? [
+          [1, -xm, xm * xm],
+          [0, 1, -2 * xm],
+          [0, 0, 1],
+        ]
+      : [
+          [1, -xm],
+          [0, 1],
+        ];
   const coef = T.map((row) => row.reduce((s, v, k) => s + v * cc[k]!, 0));
-  const cov = T.map((row) => T.map((col) => row.reduce((s, v, i) => s + v * inv[i]!.reduce((t, q, j) => t + q * col[j]!, 0), 0)));
+  const cov = T.map((row) =>
+    T.map((col) => row.reduce((s, v, i) => s + v * inv[i]!.reduce((t, q, j) => t + q * col[j]!, 0), 0)),
+  );
   return { coef, rss: Math.max(0, rss), n: used, covUnscaled: cov };
 }
 

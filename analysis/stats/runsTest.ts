@@ -23,7 +23,10 @@ function runsPmf(r: number, n1: number, n2: number): number {
     return 2 * Math.exp(logChoose(n1 - 1, k - 1) + logChoose(n2 - 1, k - 1) - lTotal);
   }
   const k = (r - 1) / 2;
-  return Math.exp(logChoose(n1 - 1, k) + logChoose(n2 - 1, k - 1) - lTotal) + Math.exp(logChoose(n1 - 1, k - 1) + logChoose(n2 - 1, k) - lTotal);
+  return (
+    Math.exp(logChoose(n1 - 1, k) + logChoose(n2 - 1, k - 1) - lTotal) +
+    Math.exp(logChoose(n1 - 1, k - 1) + logChoose(n2 - 1, k) - lTotal)
+  );
 }
 
 /**

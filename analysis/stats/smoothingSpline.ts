@@ -1,56 +1,5 @@
 import type { NaturalSpline } from "./naturalSpline.ts";
-
-/** Knots with merged ties: weighted means of y, summed weights. */
-export interface KnotData {
-  x: ArrayLike<number>;
-  y: ArrayLike<number>;
-  w: ArrayLike<number>;
-  /** Number of knots in use (arrays may be longer workspaces). */
-  n?: number;
-}
-
-/**
- * Merges (near-)tied abscissae into one knot (weighted mean of y, summed weight)
- * and drops zero-weight points, which leaves the penalised least-squares
- * solution unchanged. Input must be sorted by x.
- *
- * @param x ascending abscissae
- * @param y ordinates
- * @param w non-negative weights
- * @param tieTol abscissae closer than this are merged (same unit as x)
- * @param out optional workspace arrays of length ≥ x.length (reused in loops)
- * @returns merged knot data (n = number of knots)
- */
-export function mergeKnots(
-  x: ArrayLike<number>,
-  y: ArrayLike<number>,
-  w: ArrayLike<number>,
-  tieTol: number,
-  out?: { x: Float64Array; y: Float64Array; w: Float64Array },
-): KnotData & { x: Float64Array; y: Float64Array; w: Float64Array; n: number } {
-  const o = out ?? { x: new Float64Array(x.length), y: new Float64Array(x.length), w: new Float64Array(x.length) };
-  let n = 0;
-  let sx = 0, sy = 0, sw = 0, anchor = Number.NaN;
-  for (let i = 0; i <= x.length; i++) {
-    const wi = i < x.length ? w[i]! : 0;
-    if (i < x.length && !(wi > 0)) continue;
-    if (i === x.length || !(Math.abs(x[i]! - anchor) <= tieTol)) {
-      if (sw > 0) {
-        o.x[n] = sx / sw;
-        o.y[n] = sy / sw;
-        o.w[n] = sw;
-        n++;
-      }
-      sx = sy = sw = 0;
-      if (i === x.length) break;
-      anchor = x[i]!;
-    }
-    sx += wi * x[i]!;
-    sy += wi * y[i]!;
-    sw += wi;
-  }
-  return { x: o.x, y: o.y, w: o.w, n };
-}
+import type { KnotData } from "./knotData.ts";
 
 /** Result of one Reinsch fit. */
 export interface ReinschFit {
@@ -82,7 +31,9 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
   const n = k.n ?? k.x.length;
   if (n < 3) throw new RangeError(`reinschFit: need ≥ 3 knots, got ${n}`);
   if (!(lambda >= 0)) throw new RangeError(`reinschFit: lambda must be ≥ 0, got ${lambda}`);
-  const x = k.x, y = k.y, w = k.w;
+  const x = k.x,
+    y = k.y,
+    w = k.w;
   const m = n - 2;
   const S = scratch(n);
   const { h, qa, qb, qc, dd, e, f, z } = S;
@@ -97,7 +48,9 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
     qb[j] = -qa[j]! - qc[j]!;
   }
   for (let j = 0; j < m; j++) {
-    const d0 = 1 / w[j]!, d1 = 1 / w[j + 1]!, d2 = 1 / w[j + 2]!;
+    const d0 = 1 / w[j]!,
+      d1 = 1 / w[j + 1]!,
+      d2 = 1 / w[j + 2]!;
     const b0 = (h[j]! + h[j + 1]!) / 3 + lambda * (qa[j]! * qa[j]! * d0 + qb[j]! * qb[j]! * d1 + qc[j]! * qc[j]! * d2);
     const rhs = y[j]! * qa[j]! + y[j + 1]! * qb[j]! + y[j + 2]! * qc[j]!;
     // Band entries B[j][j-1] and B[j][j-2] (from columns j-1 and j-2).
@@ -109,8 +62,12 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
     z[j] = rhs - (j >= 1 ? e[j]! * z[j - 1]! : 0) - (j >= 2 ? f[j]! * z[j - 2]! : 0);
   }
   for (let j = 0; j < m; j++) z[j] = z[j]! / dd[j]!;
-  for (let j = m - 1; j >= 0; j--) z[j] = z[j]! - (j + 1 < m ? e[j + 1]! * z[j + 1]! : 0) - (j + 2 < m ? f[j + 2]! * z[j + 2]! : 0);
-  const spline = out && out.knots.length >= n ? out : { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: n };
+  for (let j = m - 1; j >= 0; j--)
+    z[j] = z[j]! - (j + 1 < m ? e[j + 1]! * z[j + 1]! : 0) - (j + 2 < m ? f[j + 2]! * z[j + 2]! : 0);
+  const spline =
+    out && out.knots.length >= n
+      ? out
+      : { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: n };
   spline.count = n;
   const gamma = spline.secondDerivs;
   gamma[0] = 0;
@@ -132,7 +89,9 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
   for (let j = m - 1; j >= 0; j--) {
     const l1 = j + 1 < m ? e[j + 1]! : 0;
     const l2 = j + 2 < m ? f[j + 2]! : 0;
-    const S11 = j + 1 < m ? s0[j + 1]! : 0, S12 = j + 1 < m ? s1[j + 1]! : 0, S22 = j + 2 < m ? s0[j + 2]! : 0;
+    const S11 = j + 1 < m ? s0[j + 1]! : 0,
+      S12 = j + 1 < m ? s1[j + 1]! : 0,
+      S22 = j + 2 < m ? s0[j + 2]! : 0;
     s1[j] = -l1 * S11 - l2 * S12;
     s2[j] = -l1 * S12 - l2 * S22;
     s0[j] = 1 / dd[j]! - l1 * s1[j]! - l2 * s2[j]!;
@@ -155,9 +114,17 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
 
 interface Scratch {
   size: number;
-  h: Float64Array; qa: Float64Array; qb: Float64Array; qc: Float64Array;
-  dd: Float64Array; e: Float64Array; f: Float64Array; z: Float64Array;
-  s0: Float64Array; s1: Float64Array; s2: Float64Array;
+  h: Float64Array;
+  qa: Float64Array;
+  qb: Float64Array;
+  qc: Float64Array;
+  dd: Float64Array;
+  e: Float64Array;
+  f: Float64Array;
+  z: Float64Array;
+  s0: Float64Array;
+  s1: Float64Array;
+  s2: Float64Array;
 }
 let SCRATCH: Scratch | undefined;
 
@@ -165,7 +132,20 @@ let SCRATCH: Scratch | undefined;
 function scratch(n: number): Scratch {
   if (!SCRATCH || SCRATCH.size < n) {
     const a = (): Float64Array => new Float64Array(n);
-    SCRATCH = { size: n, h: a(), qa: a(), qb: a(), qc: a(), dd: a(), e: a(), f: a(), z: a(), s0: a(), s1: a(), s2: a() };
+    SCRATCH = {
+      size: n,
+      h: a(),
+      qa: a(),
+      qb: a(),
+      qc: a(),
+      dd: a(),
+      e: a(),
+      f: a(),
+      z: a(),
+      s0: a(),
+      s1: a(),
+      s2: a(),
+    };
   }
   return SCRATCH;
 }

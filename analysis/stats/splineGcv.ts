@@ -1,4 +1,4 @@
-import type { KnotData } from "./smoothingSpline.ts";
+import type { KnotData } from "./knotData.ts";
 import { reinschFit } from "./smoothingSpline.ts";
 
 /** Smoothing parameter chosen by generalised cross-validation. */

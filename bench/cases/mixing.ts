@@ -27,7 +27,13 @@ function survey(): Array<{ name: string; unit: string; samples: MixingSample[] }
 function runAll(data: ReturnType<typeof survey>, draws: number): number {
   let checksum = 0;
   for (const c of data) {
-    const r = analyzeConstituent(c.samples, { name: c.name, unit: c.unit, bootstrapDraws: draws, seed: 42, riverDischargeM3s: 100 });
+    const r = analyzeConstituent(c.samples, {
+      name: c.name,
+      unit: c.unit,
+      bootstrapDraws: draws,
+      seed: 42,
+      riverDischargeM3s: 100,
+    });
     checksum += r.effectiveEndmember?.value ?? 0;
   }
   return checksum;

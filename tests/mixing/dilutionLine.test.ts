@@ -5,7 +5,14 @@ import { analyzeConstituent } from "../../analysis/mixing/analyzeConstituent.ts"
 import type { Endmember } from "../../analysis/mixing/result.ts";
 import { CASES, caseBConc, samplesOf } from "./helpers/cases.ts";
 
-const em = (salinity: number, conc: number): Endmember => ({ salinity, conc, concSd: 0, n: 0, source: "override", stationIds: [] });
+const em = (salinity: number, conc: number): Endmember => ({
+  salinity,
+  conc,
+  concSd: 0,
+  n: 0,
+  source: "override",
+  stationIds: [],
+});
 const A = CASES.caseA;
 const B = CASES.caseB;
 
@@ -17,21 +24,40 @@ describe("theoretical dilution line (Liss 1976; mixing-methods.md §1.1 Eq. 1)",
   });
 
   it("dilutionLine() with river salinity 0.2 gives C_TDL(17.5) = 77.9167 (mixing-methods.md §7.2 case A)", () => {
-    const line = dilutionLine(em(A.inputs.riverSalinityAlt!, A.inputs.riverConc!), em(A.inputs.seaSalinity!, A.inputs.seaConc!), "µmol/kg");
-    expectWithin(dilutionAt(line, A.inputs.salinity!), A.expected.tdlRiverSalinityAlt!, A.tol.tdl!, "C_TDL(17.5), S_r = 0.2");
+    const line = dilutionLine(
+      em(A.inputs.riverSalinityAlt!, A.inputs.riverConc!),
+      em(A.inputs.seaSalinity!, A.inputs.seaConc!),
+      "µmol/kg",
+    );
+    expectWithin(
+      dilutionAt(line, A.inputs.salinity!),
+      A.expected.tdlRiverSalinityAlt!,
+      A.tol.tdl!,
+      "C_TDL(17.5), S_r = 0.2",
+    );
   });
 
   it("analyzeConstituent() with river override at S_r = 0.2 places the station at S = 17.5 on 77.9167 (mixing-methods.md §7.2 case A)", () => {
     const s = [0.2, 5, 10, 17.5, 25, 30, 35];
     const line = dilutionLine(em(0.2, 150), em(35, 5), "µmol/kg");
-    const r = analyzeConstituent(samplesOf(s, s.map((v) => dilutionAt(line, v))), { name: "Si", unit: "µmol/kg", river: { conc: 150, salinity: 0.2 }, bootstrapDraws: 0 });
+    const r = analyzeConstituent(
+      samplesOf(
+        s,
+        s.map((v) => dilutionAt(line, v)),
+      ),
+      { name: "Si", unit: "µmol/kg", river: { conc: 150, salinity: 0.2 }, bootstrapDraws: 0 },
+    );
     const d = r.deviations.find((x) => x.salinity === 17.5)!;
     expectWithin(d.expected, A.expected.tdlRiverSalinityAlt!, A.tol.tdl!, "expected at 17.5");
     expectWithin(d.deviation, 0, 1e-9, "conservative data deviate by 0");
   });
 
   it("deviations() at S = 10 in the Fe flocculation curve: TDL 7.1443, ΔC = −6.0952, significant (mixing-methods.md §7.2 case B)", () => {
-    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), { name: "Fe", unit: "µmol/kg", bootstrapDraws: 0 });
+    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), {
+      name: "Fe",
+      unit: "µmol/kg",
+      bootstrapDraws: 0,
+    });
     const d = r.deviations.find((x) => x.salinity === 10)!;
     expectWithin(d.expected, B.expected.tdlAt10!, B.tol.tdl!, "TDL at S = 10");
     expectWithin(d.deviation, B.expected.deviationAt10!, B.tol.tdl!, "ΔC at S = 10");
@@ -42,7 +68,14 @@ describe("theoretical dilution line (Liss 1976; mixing-methods.md §1.1 Eq. 1)",
   it("deviations() are not significant when within k·σ: 1 % offsets with 5 % precision (common practice, k = 2)", () => {
     const s = [0, 5, 10, 15, 20, 25, 30, 35];
     const c = s.map((v, i) => (150 - (145 * v) / 35) * (1 + (i % 2 ? 0.01 : -0.01)));
-    const r = analyzeConstituent(samplesOf(s, c), { name: "Si", unit: "µmol/L", precision: { relative: 0.05, absolute: 0 }, river: { conc: 150, salinity: 0 }, sea: { conc: 5, salinity: 35 }, bootstrapDraws: 0 });
+    const r = analyzeConstituent(samplesOf(s, c), {
+      name: "Si",
+      unit: "µmol/L",
+      precision: { relative: 0.05, absolute: 0 },
+      river: { conc: 150, salinity: 0 },
+      sea: { conc: 5, salinity: 35 },
+      bootstrapDraws: 0,
+    });
     expectWithin(r.deviations.filter((d) => d.significant).length, 0, 0, "significant deviations");
   });
 });

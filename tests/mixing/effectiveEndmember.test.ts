@@ -11,7 +11,12 @@ const dB = (s: number): number => (0.005 - 1) / 35 + (s < 15 ? (-27 / 15) * (1 -
 describe("effective river end-member by the tangent method (Boyle et al. 1974; mixing-methods.md §1.2 Eq. 3)", () => {
   it("effectiveEndmemberAt() reproduces the local C*₀(S) table of the Fe flocculation curve (mixing-methods.md §7.2 case B) within 1e-6", () => {
     B.inputs.salinity.forEach((s, i) => {
-      expectWithin(effectiveEndmemberAt(caseBConc(s), dB(s), s, 0), B.expected.localEffective[i]!, B.tol.table!, `C*₀(${s})`);
+      expectWithin(
+        effectiveEndmemberAt(caseBConc(s), dB(s), s, 0),
+        B.expected.localEffective[i]!,
+        B.tol.table!,
+        `C*₀(${s})`,
+      );
       expectWithin(caseBConc(s), B.inputs.conc[i]!, B.tol.table!, `C(${s}) of the tabulated curve`);
     });
   });
@@ -20,11 +25,21 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
     const [ca, cb] = [caseBConc(20), caseBConc(30)];
     const slope = (cb - ca) / 10;
     expectWithin(effectiveEndmemberAt(ca, slope, 20), 1, 1e-12, "two-point C*₀");
-    expectWithin(effectiveEndmemberAt(ca, slope, 20), (ca * 30 - cb * 20) / (30 - 20), 1e-12, "equals the printed two-point formula");
+    expectWithin(
+      effectiveEndmemberAt(ca, slope, 20),
+      (ca * 30 - cb * 20) / (30 - 20),
+      1e-12,
+      "equals the printed two-point formula",
+    );
   });
 
   it("analyzeConstituent() finds the seaward segment S ≥ 15 and C*₀ = 1.000000 µmol/kg within 1e-9 (Boyle et al. 1974; mixing-methods.md §7.2 case B)", () => {
-    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), { name: "Fe", unit: "µmol/kg", riverDischargeM3s: B.inputs.dischargeM3s, seed: 3 });
+    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), {
+      name: "Fe",
+      unit: "µmol/kg",
+      riverDischargeM3s: B.inputs.dischargeM3s,
+      seed: 3,
+    });
     expectWithin(r.tangent?.fromSalinity, 15, 0, "segment start");
     expectWithin(r.tangent?.slope, B.expected.segmentSlope!, 1e-8, "segment slope");
     expectWithin(r.effectiveEndmember?.value, B.expected.effective!, B.tol.effective!, "C*₀");
@@ -33,18 +48,45 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
   });
 
   it("analyzeConstituent() fluxes with Q = 100 m³/s: 1000 / 100 / −900 mmol/s and 8.64 kmol/d, 3.154e6 mol/yr (mixing-methods.md §7.2 case B)", () => {
-    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), { name: "Fe", unit: "µmol/kg", riverDischargeM3s: 100, bootstrapDraws: 200, seed: 3 });
+    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), {
+      name: "Fe",
+      unit: "µmol/kg",
+      riverDischargeM3s: 100,
+      bootstrapDraws: 200,
+      seed: 3,
+    });
     const f = r.flux!;
     expectWithin(f.grossRiver.value * 1000, B.expected.grossRiverMmolS!, 1e-9, "gross river [mmol/s]");
     expectWithin(f.effectiveExport.value * 1000, B.expected.effectiveExportMmolS!, 1e-7, "effective export [mmol/s]");
     expectWithin(f.netChange.value * 1000, -B.expected.sinkMmolS!, 1e-7, "net change = −sink [mmol/s]");
-    expectWithin((f.effectiveExport.value * 86400) / 1000, B.expected.effectiveExportKmolD!, 1e-9, "effective export [kmol/d]");
-    expectWithinRel(f.effectiveExport.value * 86400 * 365, B.expected.effectiveExportMolYr!, 1e-3, "effective export [mol/yr]");
-    expectWithin(r.warnings.some((w) => w.code === "per-kg-as-per-litre") ? 1 : 0, 1, 0, "per-kg shortcut is warned about (mixing-methods.md §0)");
+    expectWithin(
+      (f.effectiveExport.value * 86400) / 1000,
+      B.expected.effectiveExportKmolD!,
+      1e-9,
+      "effective export [kmol/d]",
+    );
+    expectWithinRel(
+      f.effectiveExport.value * 86400 * 365,
+      B.expected.effectiveExportMolYr!,
+      1e-3,
+      "effective export [mol/yr]",
+    );
+    expectWithin(
+      r.warnings.some((w) => w.code === "per-kg-as-per-litre") ? 1 : 0,
+      1,
+      0,
+      "per-kg shortcut is warned about (mixing-methods.md §0)",
+    );
   });
 
   it("analyzeConstituent() with densityKgM3 = 1025 scales per-kg fluxes by 1.025 (mixing-methods.md §0: 1 µmol/kg ≈ 1.025 µmol/L at S ≈ 35)", () => {
-    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), { name: "Fe", unit: "µmol/kg", riverDischargeM3s: 100, densityKgM3: 1025, bootstrapDraws: 0 });
+    const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), {
+      name: "Fe",
+      unit: "µmol/kg",
+      riverDischargeM3s: 100,
+      densityKgM3: 1025,
+      bootstrapDraws: 0,
+    });
     expectWithin(r.flux!.grossRiver.value * 1000, 1025, 1e-9, "gross river [mmol/s]");
   });
 
@@ -60,7 +102,13 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
   it("analyzeConstituent() on dense exact case C data (no linear seaward segment) uses the curve tangent at the mouth: C*₀ within 1 % of 88.75 (mixing-methods.md §7.2 case C)", () => {
     const s = Array.from({ length: 71 }, (_, i) => i * 0.5);
     const { a, b, c } = C.inputs as { a: number; b: number; c: number };
-    const r = analyzeConstituent(samplesOf(s, s.map((v) => a + b * v + c * v * v)), { name: "Si", unit: "µmol/kg", bootstrapDraws: 0 });
+    const r = analyzeConstituent(
+      samplesOf(
+        s,
+        s.map((v) => a + b * v + c * v * v),
+      ),
+      { name: "Si", unit: "µmol/kg", bootstrapDraws: 0 },
+    );
     expectWithin(r.tangent?.method === "curve-tangent" ? 1 : 0, 1, 0, `tangent method ${r.tangent?.method}`);
     expectWithinRel(r.effectiveEndmember?.value, C.expected.effectiveAt35!, 0.01, "C*₀ at the mouth");
     expectWithin(r.class === "removal" ? 1 : 0, 1, 0, `class ${r.class}`);

@@ -7,7 +7,13 @@ import { stationSalinities, synthSamples, type SyntheticSpec } from "./helpers/s
 // Seeded synthetic surveys (invented) shaped after published behaviour; 30 stations, 3 % noise.
 const S = stationSalinities(30);
 function run(name: string, unit: string, spec: SyntheticSpec, seed: number) {
-  return analyzeConstituent(synthSamples(spec, S, 0.03, seed), { name, unit, riverDischargeM3s: 100, seed, bootstrapDraws: 500 });
+  return analyzeConstituent(synthSamples(spec, S, 0.03, seed), {
+    name,
+    unit,
+    riverDischargeM3s: 100,
+    seed,
+    bootstrapDraws: 500,
+  });
 }
 const inInterval = (v: number, e: { lower: number; upper: number }): number => (v >= e.lower && v <= e.upper ? 1 : 0);
 
@@ -16,7 +22,12 @@ describe("plausibility against published estuarine behaviour (mixing-methods.md 
     const r = run("Fe", "nmol/L", { c0: 1000, cStar: 75, cSea: 2, sBreak: 15 }, 21);
     expectWithin(r.class === "removal-then-conservative" ? 1 : 0, 1, 0, `class ${r.class}`);
     expectWithin(r.percentChange!.value, -91.5, 3.5, "% change");
-    expectWithin(inInterval(-92.5, r.percentChange!), 1, 0, `true −92.5 % in [${r.percentChange!.lower}, ${r.percentChange!.upper}]`);
+    expectWithin(
+      inInterval(-92.5, r.percentChange!),
+      1,
+      0,
+      `true −92.5 % in [${r.percentChange!.lower}, ${r.percentChange!.upper}]`,
+    );
     expectWithin(r.reactionZone!.salinity[1] <= 18 ? 1 : 0, 1, 0, `zone ends at ${r.reactionZone!.salinity[1]} ≤ 18`);
     expectWithin(r.reactionZone!.kind === "removal" ? 1 : 0, 1, 0, "zone kind");
     expectWithin(r.flux!.netChange.value < 0 ? 1 : 0, 1, 0, "net flux is a sink");
@@ -26,18 +37,31 @@ describe("plausibility against published estuarine behaviour (mixing-methods.md 
     ["Cu", 20, 2],
     ["Ni", 12, 3],
     ["Mn", 300, 3],
-  ])("%s removal of 40 %% is recovered within ±6 %% and classed as removal (Sholkovitz 1978: Cu 40, Ni 40, Mn 25–45 %%)", (name, c0, cSea) => {
-    const r = run(name, "nmol/L", { c0, cStar: 0.6 * c0, cSea, sBreak: 15 }, 31);
-    expectWithin(r.class.startsWith("removal") ? 1 : 0, 1, 0, `class ${r.class}`);
-    expectWithin(r.percentChange!.value, -40, 6, "% change");
-  });
+  ])(
+    "%s removal of 40 %% is recovered within ±6 %% and classed as removal (Sholkovitz 1978: Cu 40, Ni 40, Mn 25–45 %%)",
+    (name, c0, cSea) => {
+      const r = run(name, "nmol/L", { c0, cStar: 0.6 * c0, cSea, sBreak: 15 }, 31);
+      expectWithin(r.class.startsWith("removal") ? 1 : 0, 1, 0, `class ${r.class}`);
+      expectWithin(r.percentChange!.value, -40, 6, "% change");
+    },
+  );
 
   it("Ba desorption (+35 nmol/L, conservative beyond S = 10) is classed maximum-then-conservative with C*₀ − C₀ within the Delaware 30–40 nmol/L (Stecher & Kogut 1999; Nozaki et al. 2001 conservative at S > 10)", () => {
     const r = run("Ba", "nmol/L", { c0: 170, cStar: 205, cSea: 45, sBreak: 10 }, 41);
     expectWithin(r.class === "maximum-then-conservative" ? 1 : 0, 1, 0, `class ${r.class}`);
     expectWithin(r.effectiveEndmember!.value - r.endmembers!.river.conc, 35, 7, "C*₀ − C₀ [nmol/L] (3 % noise)");
-    expectWithin(inInterval(205, r.effectiveEndmember!), 1, 0, `generator C*₀ 205 in [${r.effectiveEndmember!.lower}, ${r.effectiveEndmember!.upper}]`);
-    expectWithin(r.maximum!.conservativeBeyondSalinity! <= 12 ? 1 : 0, 1, 0, `conservative beyond S = ${r.maximum!.conservativeBeyondSalinity} (the claim: conservative at S > 10)`);
+    expectWithin(
+      inInterval(205, r.effectiveEndmember!),
+      1,
+      0,
+      `generator C*₀ 205 in [${r.effectiveEndmember!.lower}, ${r.effectiveEndmember!.upper}]`,
+    );
+    expectWithin(
+      r.maximum!.conservativeBeyondSalinity! <= 12 ? 1 : 0,
+      1,
+      0,
+      `conservative beyond S = ${r.maximum!.conservativeBeyondSalinity} (the claim: conservative at S > 10)`,
+    );
     expectWithin(r.maximum!.salinity.value < 10 ? 1 : 0, 1, 0, `maximum at S = ${r.maximum!.salinity.value} < 10`);
     expectWithin(r.maximum!.excess.value > 0 ? 1 : 0, 1, 0, "excess above the dilution line");
   });
@@ -61,7 +85,12 @@ describe("plausibility against published estuarine behaviour (mixing-methods.md 
     const samples = synthSamples({ c0: 1000, cStar: 75, cSea: 2, sBreak: 15 }, S, 0.03, 71);
     const x = samples.map((s) => s.salinity);
     const y = samples.map((s) => s.conc);
-    const line = polyFit(x, y, x.map(() => 1), 1)!;
+    const line = polyFit(
+      x,
+      y,
+      x.map(() => 1),
+      1,
+    )!;
     const mean = y.reduce((a, b) => a + b, 0) / y.length;
     const r2 = 1 - line.rss / y.reduce((a, b) => a + (b - mean) ** 2, 0);
     expectWithin(r2 > 0.6 ? 1 : 0, 1, 0, `r² = ${r2}`);

@@ -23,8 +23,18 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
   });
 
   it("reactionRate() is negative (removal) for d²C/dS² > 0 and positive (production) for d²C/dS² < 0 (mixing-methods.md §0 sign convention)", () => {
-    expectWithin(Math.sign(reactionRate({ salinity: 10, d2: 0.1, dispersionM2s: 500, gradientPerM: 1e-3 })), -1, 0, "concave up");
-    expectWithin(Math.sign(reactionRate({ salinity: 10, d2: -0.1, dispersionM2s: 500, gradientPerM: 1e-3 })), 1, 0, "concave down");
+    expectWithin(
+      Math.sign(reactionRate({ salinity: 10, d2: 0.1, dispersionM2s: 500, gradientPerM: 1e-3 })),
+      -1,
+      0,
+      "concave up",
+    );
+    expectWithin(
+      Math.sign(reactionRate({ salinity: 10, d2: -0.1, dispersionM2s: 500, gradientPerM: 1e-3 })),
+      1,
+      0,
+      "concave down",
+    );
   });
 
   it("∫A·R dx over the case C estuary = Q·(C*₀(35) − C₀) = −6125 mmol/s by quadrature along x (mixing-methods.md §7.2 case C, Eq. 5)", () => {
@@ -34,7 +44,8 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
     for (let i = 0; i < N; i++) {
       const x = xLand + ((i + 0.5) * -xLand) / N;
       const s = 35 * Math.exp((U * x) / K!);
-      integral += A! * reactionRate({ salinity: s, d2: 2 * c!, dispersionM2s: K, gradientPerM: gradient(s) }) * (-xLand / N);
+      integral +=
+        A! * reactionRate({ salinity: s, d2: 2 * c!, dispersionM2s: K, gradientPerM: gradient(s) }) * (-xLand / N);
     }
     expectWithin(integral, C.expected.integratedMmolS!, C.tol.integrated!, "∫A·R dx [mmol/s]");
     expectWithin(Q! * (C.expected.effectiveAt35! - a!), C.expected.integratedMmolS!, 1e-9, "Q·ΔC*₀ [mmol/s]");
@@ -43,16 +54,22 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
 
   it("analyzeConstituent() rate profile on dense case C data: R(17.5) within 3 %, Q·ΔC*₀ within 1 % and ∫A·R dx within 8 % of −6125 mmol/s (natural-spline end effect) (mixing-methods.md §7.2 case C)", () => {
     const s = Array.from({ length: 141 }, (_, i) => i * 0.25);
-    const r = analyzeConstituent(samplesOf(s, s.map((v) => a! + b! * v + c! * v * v)), {
-      name: "Si",
-      unit: "µmol/L",
-      precision: { relative: 0.001, absolute: 0 },
-      river: { conc: a!, salinity: 0 },
-      riverDischargeM3s: Q,
-      crossSectionM2: A,
-      dispersionM2s: K,
-      bootstrapDraws: 0,
-    });
+    const r = analyzeConstituent(
+      samplesOf(
+        s,
+        s.map((v) => a! + b! * v + c! * v * v),
+      ),
+      {
+        name: "Si",
+        unit: "µmol/L",
+        precision: { relative: 0.001, absolute: 0 },
+        river: { conc: a!, salinity: 0 },
+        riverDischargeM3s: Q,
+        crossSectionM2: A,
+        dispersionM2s: K,
+        bootstrapDraws: 0,
+      },
+    );
     const p = r.rateProfile!;
     const i = p.salinity.findIndex((v) => Math.abs(v - 17.5) < 1e-9);
     expectWithinRel(p.rate[i], C.expected.rateAt17_5!, 0.03, "R(17.5) from the fitted curve");
@@ -64,15 +81,21 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
   it("analyzeConstituent() derives dS/dx from the salinityToKmPoint callback when only K is given (mixing-methods.md Eq. 4, K form)", () => {
     const s = Array.from({ length: 141 }, (_, i) => i * 0.25);
     const toKm = (sal: number): number[] => [-((K! / U) * Math.log(Math.max(sal, 1e-9) / 35)) / 1000];
-    const r = analyzeConstituent(samplesOf(s, s.map((v) => a! + b! * v + c! * v * v)), {
-      name: "Si",
-      unit: "µmol/L",
-      precision: { relative: 0.001, absolute: 0 },
-      riverDischargeM3s: Q,
-      dispersionM2s: K,
-      salinityToKmPoint: toKm,
-      bootstrapDraws: 0,
-    });
+    const r = analyzeConstituent(
+      samplesOf(
+        s,
+        s.map((v) => a! + b! * v + c! * v * v),
+      ),
+      {
+        name: "Si",
+        unit: "µmol/L",
+        precision: { relative: 0.001, absolute: 0 },
+        riverDischargeM3s: Q,
+        dispersionM2s: K,
+        salinityToKmPoint: toKm,
+        bootstrapDraws: 0,
+      },
+    );
     const p = r.rateProfile!;
     const i = p.salinity.findIndex((v) => Math.abs(v - 17.5) < 1e-9);
     expectWithinRel(p.rate[i], C.expected.rateAt17_5!, 0.03, "R(17.5), K and dS/dx from km");

@@ -22,7 +22,12 @@ describe("bootstrap determinism and intervals (Efron & Tibshirani 1993; seeded r
     const b = analyzeConstituent(fe, { name: "Fe", unit: "nmol/L", seed: 123, bootstrapDraws: 300 });
     const c = analyzeConstituent(fe, { name: "Fe", unit: "nmol/L", seed: 124, bootstrapDraws: 300 });
     expectWithin(JSON.stringify(a) === JSON.stringify(b) ? 1 : 0, 1, 0, "same seed → same JSON");
-    expectWithin(a.effectiveEndmember!.lower === c.effectiveEndmember!.lower ? 0 : 1, 1, 0, "different seed → different lower limit");
+    expectWithin(
+      a.effectiveEndmember!.lower === c.effectiveEndmember!.lower ? 0 : 1,
+      1,
+      0,
+      "different seed → different lower limit",
+    );
     expectWithin(a.bootstrap!.usable, 300, 15, "usable draws");
   });
 
@@ -40,18 +45,45 @@ describe("bootstrap determinism and intervals (Efron & Tibshirani 1993; seeded r
 
 describe("degenerate inputs give insufficient-data with a message, never NaN (Brackline rules)", () => {
   const cases: Array<[string, MixingSample[]]> = [
-    ["two stations", [{ stationId: "a", salinity: 0, conc: 10, censored: false, accepted: true }, { stationId: "b", salinity: 30, conc: 1, censored: false, accepted: true }]],
-    ["no salinity range", S.map((_, i) => ({ stationId: `s${i}`, salinity: 12.3, conc: 5 + i, censored: false, accepted: true }))],
-    ["all below detection", S.map((s, i) => ({ stationId: `s${i}`, salinity: s, conc: 0.025, censored: true, detectionLimit: 0.05, accepted: true }))],
+    [
+      "two stations",
+      [
+        { stationId: "a", salinity: 0, conc: 10, censored: false, accepted: true },
+        { stationId: "b", salinity: 30, conc: 1, censored: false, accepted: true },
+      ],
+    ],
+    [
+      "no salinity range",
+      S.map((_, i) => ({ stationId: `s${i}`, salinity: 12.3, conc: 5 + i, censored: false, accepted: true })),
+    ],
+    [
+      "all below detection",
+      S.map((s, i) => ({
+        stationId: `s${i}`,
+        salinity: s,
+        conc: 0.025,
+        censored: true,
+        detectionLimit: 0.05,
+        accepted: true,
+      })),
+    ],
     ["no samples", []],
     ["all rejected by QC", fe.map((x) => ({ ...x, accepted: false }))],
   ];
-  it.each(cases)("analyzeConstituent() with %s returns class insufficient-data, a warning and only finite numbers", (_, samples) => {
-    const r = analyzeConstituent(samples, { name: "Cd", unit: "nmol/L", riverDischargeM3s: 100 });
-    expectWithin(r.class === "insufficient-data" ? 1 : 0, 1, 0, `class ${r.class}`);
-    expectWithin(r.warnings.some((w) => w.code === "insufficient-data" && w.message.length > 20) ? 1 : 0, 1, 0, "explaining warning");
-    expectWithin(numbers(r).every(Number.isFinite) ? 1 : 0, 1, 0, "all numbers finite");
-  });
+  it.each(cases)(
+    "analyzeConstituent() with %s returns class insufficient-data, a warning and only finite numbers",
+    (_, samples) => {
+      const r = analyzeConstituent(samples, { name: "Cd", unit: "nmol/L", riverDischargeM3s: 100 });
+      expectWithin(r.class === "insufficient-data" ? 1 : 0, 1, 0, `class ${r.class}`);
+      expectWithin(
+        r.warnings.some((w) => w.code === "insufficient-data" && w.message.length > 20) ? 1 : 0,
+        1,
+        0,
+        "explaining warning",
+      );
+      expectWithin(numbers(r).every(Number.isFinite) ? 1 : 0, 1, 0, "all numbers finite");
+    },
+  );
 
   it("analyzeConstituent() with four stations keeps end-members and the dilution line but gives no class (MIN_STATIONS = 5)", () => {
     const four = [fe[0]!, fe[8]!, fe[16]!, fe[24]!];
@@ -68,19 +100,33 @@ describe("degenerate inputs give insufficient-data with a message, never NaN (Br
     } catch (e) {
       msg = `${(e as Error).name}: ${(e as Error).message}`;
     }
-    expectWithin(msg.includes("RangeError: analyzeConstituent: options.riverDischargeM3s") && msg.includes("-5") ? 1 : 0, 1, 0, msg);
+    expectWithin(
+      msg.includes("RangeError: analyzeConstituent: options.riverDischargeM3s") && msg.includes("-5") ? 1 : 0,
+      1,
+      0,
+      msg,
+    );
   });
 });
 
 describe("below-detection values (common practice: DL/2 substitution, stated, never zero)", () => {
   it("analyzeConstituent() replaces censored values by DL/2, weights them with σ = DL/√12 and says so in a warning", () => {
-    const cd = synthSamples({ c0: 0.3, cStar: 0.9, cSea: 0.02, sBreak: 15 }, S, 0.03, 4).map((x) => (x.conc < 0.05 ? { ...x, conc: 0, censored: true, detectionLimit: 0.05 } : x));
+    const cd = synthSamples({ c0: 0.3, cStar: 0.9, cSea: 0.02, sBreak: 15 }, S, 0.03, 4).map((x) =>
+      x.conc < 0.05 ? { ...x, conc: 0, censored: true, detectionLimit: 0.05 } : x,
+    );
     const nCens = cd.filter((x) => x.censored).length;
     const r = analyzeConstituent(cd, { name: "Cd", unit: "nmol/L", bootstrapDraws: 0 });
     expectWithin(nCens > 0 ? 1 : 0, 1, 0, "some censored values in the test data");
-    r.deviations.filter((d) => d.censored).forEach((d) => expectWithin(d.observed, 0.025, 1e-15, `substitute at ${d.stationId}`));
+    r.deviations
+      .filter((d) => d.censored)
+      .forEach((d) => expectWithin(d.observed, 0.025, 1e-15, `substitute at ${d.stationId}`));
     const w = r.warnings.find((x) => x.code === "censored-substituted");
-    expectWithin(w && w.message.includes(String(nCens)) && w.message.includes("DL/2") ? 1 : 0, 1, 0, w?.message ?? "no warning");
+    expectWithin(
+      w && w.message.includes(String(nCens)) && w.message.includes("DL/2") ? 1 : 0,
+      1,
+      0,
+      w?.message ?? "no warning",
+    );
   });
 });
 
@@ -100,7 +146,12 @@ describe("channel positions come through callbacks only (Brackline rule: mixing 
     });
     expectWithin(calls.length >= 1 ? 1 : 0, 1, 0, "salinityToKm called");
     expectWithin(r.reactionZone!.km.length, 1, 0, "zone km intervals");
-    expectWithin(r.maximum!.km[0]!, -10 * Math.log(r.maximum!.salinity.value / 35), 1e-9, "maximum km from the callback");
+    expectWithin(
+      r.maximum!.km[0]!,
+      -10 * Math.log(r.maximum!.salinity.value / 35),
+      1e-9,
+      "maximum km from the callback",
+    );
   });
 
   it("no file in analysis/mixing imports analysis/geometry", () => {

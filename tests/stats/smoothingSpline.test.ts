@@ -1,7 +1,8 @@
 import { describe, it } from "vitest";
 import { randomLcg, randomNormal } from "d3-random";
 import { expectWithin } from "../helpers/tolerance.ts";
-import { mergeKnots, reinschFit } from "../../analysis/stats/smoothingSpline.ts";
+import { reinschFit } from "../../analysis/stats/smoothingSpline.ts";
+import { mergeKnots } from "../../analysis/stats/knotData.ts";
 import { evaluateSpline } from "../../analysis/stats/naturalSpline.ts";
 import { minimiseGcv, splinePath } from "../../analysis/stats/splineGcv.ts";
 import { polyFit } from "../../analysis/stats/polyFit.ts";
@@ -33,8 +34,14 @@ describe("smoothing spline (Reinsch 1967; Green & Silverman 1994 §2.3)", () => 
 
   it("reinschFit() with λ → ∞ tends to the weighted least-squares straight line (null space of the penalty) within 1e-5", () => {
     const fit = reinschFit(k, 1e12, true);
-    const line = polyFit(Array.from(k.x.subarray(0, k.n)), Array.from(k.y.subarray(0, k.n)), Array.from(k.w.subarray(0, k.n)), 1)!;
-    for (let i = 0; i < k.n; i++) expectWithin(fit.spline.values[i], line.coef[0]! + line.coef[1]! * k.x[i]!, 1e-5, `knot ${i}`);
+    const line = polyFit(
+      Array.from(k.x.subarray(0, k.n)),
+      Array.from(k.y.subarray(0, k.n)),
+      Array.from(k.w.subarray(0, k.n)),
+      1,
+    )!;
+    for (let i = 0; i < k.n; i++)
+      expectWithin(fit.spline.values[i], line.coef[0]! + line.coef[1]! * k.x[i]!, 1e-5, `knot ${i}`);
     expectWithin(fit.edf, 2, 1e-5, "edf of a straight line");
   });
 
@@ -46,7 +53,8 @@ describe("smoothing spline (Reinsch 1967; Green & Silverman 1994 §2.3)", () => 
       let pen = 0;
       for (let i = 0; i < k.n - 1; i++) {
         const h = k.x[i + 1]! - k.x[i]!;
-        const g0 = f.secondDerivs[i]!, g1 = f.secondDerivs[i + 1]!;
+        const g0 = f.secondDerivs[i]!,
+          g1 = f.secondDerivs[i + 1]!;
         pen += (h * (g0 * g0 + g0 * g1 + g1 * g1)) / 3;
       }
       return vals.reduce((s, v, i) => s + k.w[i]! * (k.y[i]! - v) ** 2, 0) + lambda * pen;
@@ -64,7 +72,12 @@ describe("smoothing spline (Reinsch 1967; Green & Silverman 1994 §2.3)", () => 
   it("evaluateSpline() reproduces an exact quadratic's first and second derivative between knots of a dense interpolant (calculus) within 1e-3", () => {
     const xs = Array.from({ length: 36 }, (_, i) => i);
     const q = (s: number): number => 150 - 5.892857 * s + 0.05 * s * s;
-    const kk = mergeKnots(xs, xs.map(q), xs.map(() => 1), 1e-9);
+    const kk = mergeKnots(
+      xs,
+      xs.map(q),
+      xs.map(() => 1),
+      1e-9,
+    );
     const sp = reinschFit(kk, 1e-10, false).spline;
     const p = evaluateSpline(sp, 17.5);
     expectWithin(p.value, q(17.5), 1e-3, "value");

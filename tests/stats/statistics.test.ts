@@ -71,6 +71,11 @@ describe("weighted polynomial fit (Draper & Smith 1998)", () => {
     expectWithin(q.coef[1], -3, 1e-9, "b");
     expectWithin(q.coef[2], 0.5, 1e-10, "c");
     expectWithin(q.n, 5, 0, "points with weight");
-    expectWithin(polyFit([1, 1, 1], [1, 2, 3], [1, 1, 1], 1) === undefined ? 1 : 0, 1, 0, "undefined without distinct x");
+    expectWithin(
+      polyFit([1, 1, 1], [1, 2, 3], [1, 1, 1], 1) === undefined ? 1 : 0,
+      1,
+      0,
+      "undefined without distinct x",
+    );
   });
 });

@@ -4,16 +4,32 @@ import type { MixingSample } from "../../../analysis/mixing/options.ts";
 
 interface CaseFile {
   caseA: { inputs: Record<string, number>; expected: Record<string, number>; tol: Record<string, number> };
-  caseB: { inputs: { salinity: number[]; conc: number[]; dischargeM3s: number }; expected: Record<string, number> & { localEffective: number[] }; tol: Record<string, number> };
+  caseB: {
+    inputs: { salinity: number[]; conc: number[]; dischargeM3s: number };
+    expected: Record<string, number> & { localEffective: number[] };
+    tol: Record<string, number>;
+  };
   caseC: { inputs: Record<string, number>; expected: Record<string, number>; tol: Record<string, number> };
-  caseF: { inputs: Record<string, number>; expected: { days: number[]; apparentEffective: number[] }; tol: Record<string, number> };
+  caseF: {
+    inputs: Record<string, number>;
+    expected: { days: number[]; apparentEffective: number[] };
+    tol: Record<string, number>;
+  };
 }
 
-export const CASES = JSON.parse(readFileSync(new URL("../../reference/mixing-cases.json", import.meta.url), "utf8")) as CaseFile;
+export const CASES = JSON.parse(
+  readFileSync(new URL("../../reference/mixing-cases.json", import.meta.url), "utf8"),
+) as CaseFile;
 
 /** Samples from parallel salinity/concentration arrays. */
 export function samplesOf(salinity: number[], conc: number[], prefix = "S"): MixingSample[] {
-  return salinity.map((s, i) => ({ stationId: `${prefix}${i + 1}`, salinity: s, conc: conc[i]!, censored: false, accepted: true }));
+  return salinity.map((s, i) => ({
+    stationId: `${prefix}${i + 1}`,
+    salinity: s,
+    conc: conc[i]!,
+    censored: false,
+    accepted: true,
+  }));
 }
 
 /** Case B curve: C(S) = 1 + (0.005 − 1)·S/35 + 9·(1 − S/15)³ for S < 15 (mixing-methods.md §7.2). */

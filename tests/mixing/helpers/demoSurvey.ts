@@ -13,7 +13,8 @@ export function demoSamples(file: string, name: string): { samples: MixingSample
     const text = row[col]!.trim();
     const censored = text.startsWith("<");
     const value = Number(censored ? text.slice(1) : text);
-    if (!Number.isFinite(value) || !Number.isFinite(Number(row.salinity))) throw new Error(`demoSamples: ${file} row ${i + 2} column ${col}: "${text}"`);
+    if (!Number.isFinite(value) || !Number.isFinite(Number(row.salinity)))
+      throw new Error(`demoSamples: ${file} row ${i + 2} column ${col}: "${text}"`);
     const flag = row[`${name}_flag`];
     return {
       stationId: row.station!,
