@@ -71,7 +71,13 @@ export function surveySection(a: ComparableSurvey, ctx: SectionContext): Briefin
     ["Salt intrusion", f.saltIntrusionKm !== undefined ? `S = ${f.saltIntrusionSalinity} at ${formatSignificant(f.saltIntrusionKm, 3)} km from the mouth` : "not located"],
     ["Isohalines", f.isohalines.filter((h) => h.km.length).map((h) => `S ${h.salinity}: km ${h.km.map((k) => formatSignificant(k, 3)).join(", ")}`).join("; ") || "—"],
   ];
-  const findings = a.constituents.flatMap(constituentFindings);
+  const all = a.constituents.flatMap(constituentFindings);
+  // C*₀ sentences are in the results table; a low-confidence reason shared by several constituents is said once.
+  const lowBy = new Map<string, string[]>();
+  for (const x of all) if (x.text.startsWith("Confidence is low: ")) lowBy.set(x.text, [...(lowBy.get(x.text) ?? []), x.constituent ?? ""]);
+  const findings = all.filter((x) => x.strength !== "context" && !x.text.startsWith("Confidence is low: "));
+  for (const [text, names] of lowBy)
+    findings.push({ strength: "uncertain", text: `Confidence is low for ${names.join(", ")}: ${text.slice("Confidence is low: ".length)}` });
   if (f.saltIntrusionKm !== undefined)
     findings.unshift({
       strength: "context",
