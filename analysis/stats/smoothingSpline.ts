@@ -36,32 +36,37 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
     w = k.w;
   const m = n - 2;
   const S = scratch(n);
-  const { h, qa, qb, qc, dd, e, f, z } = S;
+  const { h, ih, qa, qb, qc, dd, e, f, z } = S;
   for (let i = 0; i < n - 1; i++) {
     h[i] = x[i + 1]! - x[i]!;
     if (!(h[i]! > 0)) throw new RangeError(`reinschFit: knots must increase (index ${i})`);
+    ih[i] = 1 / h[i]!;
   }
   // Column j of Q (interior knot j+1) has rows j, j+1, j+2: qa, qb, qc.
   for (let j = 0; j < m; j++) {
-    qa[j] = 1 / h[j]!;
-    qc[j] = 1 / h[j + 1]!;
+    qa[j] = ih[j]!;
+    qc[j] = ih[j + 1]!;
     qb[j] = -qa[j]! - qc[j]!;
   }
+  const iw = S.iw;
+  for (let i = 0; i < n; i++) iw[i] = 1 / w[i]!;
+  const idd = S.s0; // 1/dd, reused before the trace band overwrites s0
   for (let j = 0; j < m; j++) {
-    const d0 = 1 / w[j]!,
-      d1 = 1 / w[j + 1]!,
-      d2 = 1 / w[j + 2]!;
+    const d0 = iw[j]!,
+      d1 = iw[j + 1]!,
+      d2 = iw[j + 2]!;
     const b0 = (h[j]! + h[j + 1]!) / 3 + lambda * (qa[j]! * qa[j]! * d0 + qb[j]! * qb[j]! * d1 + qc[j]! * qc[j]! * d2);
     const rhs = y[j]! * qa[j]! + y[j + 1]! * qb[j]! + y[j + 2]! * qc[j]!;
     // Band entries B[j][j-1] and B[j][j-2] (from columns j-1 and j-2).
     const b1 = j >= 1 ? h[j]! / 6 + lambda * (qb[j - 1]! * qa[j]! * d0 + qc[j - 1]! * qb[j]! * d1) : 0;
     const b2 = j >= 2 ? lambda * qc[j - 2]! * qa[j]! * d0 : 0;
-    f[j] = j >= 2 ? b2 / dd[j - 2]! : 0;
-    e[j] = j >= 1 ? (b1 - (j >= 2 ? f[j]! * e[j - 1]! * dd[j - 2]! : 0)) / dd[j - 1]! : 0;
+    f[j] = j >= 2 ? b2 * idd[j - 2]! : 0;
+    e[j] = j >= 1 ? (b1 - (j >= 2 ? f[j]! * e[j - 1]! * dd[j - 2]! : 0)) * idd[j - 1]! : 0;
     dd[j] = b0 - (j >= 2 ? f[j]! * f[j]! * dd[j - 2]! : 0) - (j >= 1 ? e[j]! * e[j]! * dd[j - 1]! : 0);
+    idd[j] = 1 / dd[j]!;
     z[j] = rhs - (j >= 1 ? e[j]! * z[j - 1]! : 0) - (j >= 2 ? f[j]! * z[j - 2]! : 0);
   }
-  for (let j = 0; j < m; j++) z[j] = z[j]! / dd[j]!;
+  for (let j = 0; j < m; j++) z[j] = z[j]! * idd[j]!;
   for (let j = m - 1; j >= 0; j--)
     z[j] = z[j]! - (j + 1 < m ? e[j + 1]! * z[j + 1]! : 0) - (j + 2 < m ? f[j + 2]! * z[j + 2]! : 0);
   const spline =
@@ -76,9 +81,9 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
   let rss = 0;
   for (let i = 0; i < n; i++) {
     let qg = 0;
-    if (i > 0) qg += (gamma[i - 1]! - gamma[i]!) / h[i - 1]!;
-    if (i < n - 1) qg += (gamma[i + 1]! - gamma[i]!) / h[i]!;
-    const v = y[i]! - (lambda * qg) / w[i]!;
+    if (i > 0) qg += (gamma[i - 1]! - gamma[i]!) * ih[i - 1]!;
+    if (i < n - 1) qg += (gamma[i + 1]! - gamma[i]!) * ih[i]!;
+    const v = y[i]! - lambda * qg * iw[i]!;
     spline.values[i] = v;
     spline.knots[i] = x[i]!;
     rss += w[i]! * (y[i]! - v) ** 2;
@@ -125,6 +130,8 @@ interface Scratch {
   s0: Float64Array;
   s1: Float64Array;
   s2: Float64Array;
+  ih: Float64Array;
+  iw: Float64Array;
 }
 let SCRATCH: Scratch | undefined;
 
@@ -145,6 +152,8 @@ function scratch(n: number): Scratch {
       s0: a(),
       s1: a(),
       s2: a(),
+      ih: a(),
+      iw: a(),
     };
   }
   return SCRATCH;
