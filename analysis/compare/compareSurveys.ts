@@ -19,7 +19,9 @@ function intrusionRow(a: ComparableSurvey): IntrusionRow {
     ...(f.riverDischargeM3s !== undefined ? { dischargeM3s: f.riverDischargeM3s } : {}),
     ...(f.saltIntrusionKm !== undefined ? { saltIntrusionKm: f.saltIntrusionKm } : {}),
     saltIntrusionSalinity: f.saltIntrusionSalinity,
-    isohalinesKm: f.isohalines.map((h) => (h.km.length ? { salinity: h.salinity, km: Math.max(...h.km) } : { salinity: h.salinity })),
+    isohalinesKm: f.isohalines.map((h) =>
+      h.km.length ? { salinity: h.salinity, km: Math.max(...h.km) } : { salinity: h.salinity },
+    ),
   };
 }
 
@@ -27,13 +29,24 @@ function scalings(rows: IntrusionRow[], warnings: MixingWarning[]): DischargeSca
   const withQ = rows.filter((r) => r.dischargeM3s !== undefined && r.dischargeM3s > 0);
   const missing = rows.filter((r) => !withQ.includes(r)).map((r) => r.survey);
   if (missing.length)
-    warnings.push({ code: "no-discharge", message: `River discharge not given for ${missing.join(", ")}: ${missing.length === 1 ? "it is" : "they are"} left out of the discharge scaling.` });
+    warnings.push({
+      code: "no-discharge",
+      message: `River discharge not given for ${missing.join(", ")}: ${missing.length === 1 ? "it is" : "they are"} left out of the discharge scaling.`,
+    });
   const out: DischargeScaling[] = [];
   const s0 = rows[0]?.saltIntrusionSalinity ?? 2;
   const intr = withQ.filter((r) => r.saltIntrusionKm !== undefined && r.saltIntrusionKm > 0);
-  const main = dischargeScaling(intr.map((r) => ({ dischargeM3s: r.dischargeM3s!, lengthKm: r.saltIntrusionKm! })), `salt intrusion (S = ${s0})`, s0);
+  const main = dischargeScaling(
+    intr.map((r) => ({ dischargeM3s: r.dischargeM3s!, lengthKm: r.saltIntrusionKm! })),
+    `salt intrusion (S = ${s0})`,
+    s0,
+  );
   if (main) out.push(main);
-  else if (withQ.length >= 2) warnings.push({ code: "no-scaling", message: "Fewer than two surveys with distinct discharges and a salt-intrusion length: no discharge exponent." });
+  else if (withQ.length >= 2)
+    warnings.push({
+      code: "no-scaling",
+      message: "Fewer than two surveys with distinct discharges and a salt-intrusion length: no discharge exponent.",
+    });
   const shared = (rows[0]?.isohalinesKm ?? []).map((h) => h.salinity).filter((s) => s !== s0);
   for (const s of shared) {
     const pts = withQ.flatMap((r) => {
@@ -62,10 +75,15 @@ function scalings(rows: IntrusionRow[], warnings: MixingWarning[]): DischargeSca
  * @see mixing-methods.md §5.1, §5.3 (scalings); Boyle et al. (1974) (C*₀, fluxes).
  */
 export function compareSurveys(analyses: readonly ComparableSurvey[], options: CompareOptions = {}): SurveyComparison {
-  if (!Array.isArray(analyses) || analyses.length < 2) throw new RangeError(`compareSurveys: analyses must hold at least 2 surveys, got ${Array.isArray(analyses) ? analyses.length : typeof analyses}`);
+  if (!Array.isArray(analyses) || analyses.length < 2)
+    throw new RangeError(
+      `compareSurveys: analyses must hold at least 2 surveys, got ${Array.isArray(analyses) ? analyses.length : typeof analyses}`,
+    );
   const refIndex = options.referenceIndex ?? 0;
   if (!Number.isInteger(refIndex) || refIndex < 0 || refIndex >= analyses.length)
-    throw new RangeError(`compareSurveys: options.referenceIndex must be an integer 0…${analyses.length - 1}, got ${refIndex}`);
+    throw new RangeError(
+      `compareSurveys: options.referenceIndex must be an integer 0…${analyses.length - 1}, got ${refIndex}`,
+    );
   const warnings: MixingWarning[] = [];
   const ordered: ComparableSurvey[] = [analyses[refIndex]!, ...analyses.filter((_, i) => i !== refIndex)];
   const rows = ordered.map(intrusionRow);
@@ -78,16 +96,26 @@ export function compareSurveys(analyses: readonly ComparableSurvey[], options: C
     for (const ca of ref.constituents) {
       const cb = later.constituents.find((c) => c.name === ca.name);
       if (!cb) {
-        warnings.push({ code: "constituent-missing", message: `${ca.name} is in ${ref.survey.name} but not in ${later.survey.name}: not compared.` });
+        warnings.push({
+          code: "constituent-missing",
+          message: `${ca.name} is in ${ref.survey.name} but not in ${later.survey.name}: not compared.`,
+        });
         continue;
       }
-      const shift = constituentShift({ survey: ref.survey.name, profile: refProfile, analysis: ca }, { survey: later.survey.name, profile: laterProfile, analysis: cb });
+      const shift = constituentShift(
+        { survey: ref.survey.name, profile: refProfile, analysis: ca },
+        { survey: later.survey.name, profile: laterProfile, analysis: cb },
+      );
       shifts.push(shift);
-      if (shift.classChanged) classChanges.push({ name: ca.name, survey: later.survey.name, from: ca.class, to: cb.class });
+      if (shift.classChanged)
+        classChanges.push({ name: ca.name, survey: later.survey.name, from: ca.class, to: cb.class });
     }
     for (const cb of later.constituents)
       if (!ref.constituents.some((c) => c.name === cb.name))
-        warnings.push({ code: "constituent-missing", message: `${cb.name} is in ${later.survey.name} but not in ${ref.survey.name}: not compared.` });
+        warnings.push({
+          code: "constituent-missing",
+          message: `${cb.name} is in ${later.survey.name} but not in ${ref.survey.name}: not compared.`,
+        });
   }
   return {
     surveys: analyses.map((a) => a.survey.name),

@@ -18,7 +18,8 @@ export const COMPARISON_CSV_COLUMNS = [
   "note",
 ] as const;
 
-const num = (x: number | undefined): string => (x === undefined || !Number.isFinite(x) ? "" : String(Number(x.toPrecision(8))));
+const num = (x: number | undefined): string =>
+  x === undefined || !Number.isFinite(x) ? "" : String(Number(x.toPrecision(8)));
 
 /**
  * The comparison as one long CSV table (RFC 4180 quoting by papaparse): intrusion rows per
@@ -34,12 +35,42 @@ export function comparisonToCsv(c: SurveyComparison): string {
     rows.push(COMPARISON_CSV_COLUMNS.map((k) => r[k] ?? ""));
   };
   for (const r of c.intrusion) {
-    push({ section: "intrusion", reference_survey: c.referenceSurvey, survey: r.survey, quantity: "river_discharge", unit: "m3/s", survey_value: num(r.dischargeM3s) });
-    push({ section: "intrusion", reference_survey: c.referenceSurvey, survey: r.survey, quantity: `salt_intrusion_S${r.saltIntrusionSalinity}`, unit: "km", survey_value: num(r.saltIntrusionKm) });
-    for (const h of r.isohalinesKm) push({ section: "intrusion", reference_survey: c.referenceSurvey, survey: r.survey, quantity: `isohaline_S${h.salinity}`, unit: "km", survey_value: num(h.km) });
+    push({
+      section: "intrusion",
+      reference_survey: c.referenceSurvey,
+      survey: r.survey,
+      quantity: "river_discharge",
+      unit: "m3/s",
+      survey_value: num(r.dischargeM3s),
+    });
+    push({
+      section: "intrusion",
+      reference_survey: c.referenceSurvey,
+      survey: r.survey,
+      quantity: `salt_intrusion_S${r.saltIntrusionSalinity}`,
+      unit: "km",
+      survey_value: num(r.saltIntrusionKm),
+    });
+    for (const h of r.isohalinesKm)
+      push({
+        section: "intrusion",
+        reference_survey: c.referenceSurvey,
+        survey: r.survey,
+        quantity: `isohaline_S${h.salinity}`,
+        unit: "km",
+        survey_value: num(h.km),
+      });
   }
   for (const s of c.scaling)
-    push({ section: "scaling", quantity: `exponent_n_${s.quantity}`, unit: "1", survey_value: num(s.exponent), difference_lower95: num(s.lower), difference_upper95: num(s.upper), note: s.note });
+    push({
+      section: "scaling",
+      quantity: `exponent_n_${s.quantity}`,
+      unit: "1",
+      survey_value: num(s.exponent),
+      difference_lower95: num(s.lower),
+      difference_upper95: num(s.upper),
+      note: s.note,
+    });
   for (const s of c.shifts) {
     const d = (quantity: string, e: EstimateDifference | undefined): void => {
       if (!e) return;
@@ -58,7 +89,16 @@ export function comparisonToCsv(c: SurveyComparison): string {
         exceeds_uncertainty: e.method === "no-interval" ? "" : String(e.exceedsUncertainty),
       });
     };
-    push({ section: "constituent", reference_survey: s.referenceSurvey, survey: s.survey, constituent: s.name, quantity: "class", reference_value: s.classReference, survey_value: s.classSurvey, note: s.classChanged ? "class changed" : "" });
+    push({
+      section: "constituent",
+      reference_survey: s.referenceSurvey,
+      survey: s.survey,
+      constituent: s.name,
+      quantity: "class",
+      reference_value: s.classReference,
+      survey_value: s.classSurvey,
+      note: s.classChanged ? "class changed" : "",
+    });
     d("zone_salinity_from", s.zone?.salinityFrom);
     d("zone_salinity_to", s.zone?.salinityTo);
     d("zone_km_seaward", s.zone?.kmSeaward);

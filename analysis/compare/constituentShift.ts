@@ -33,11 +33,19 @@ function zoneKm(side: ShiftSide): { seaward?: Estimate; landward?: Estimate } {
   return { ...(seaward ? { seaward } : {}), ...(landward ? { landward } : {}) };
 }
 
-function sentence(label: string, d: EstimateDifference | undefined, unit: string, moveWords?: [string, string]): string | undefined {
+function sentence(
+  label: string,
+  d: EstimateDifference | undefined,
+  unit: string,
+  moveWords?: [string, string],
+): string | undefined {
   if (!d) return undefined;
   const v = formatSignificant(Math.abs(d.value), 2);
   const dir = moveWords ? (d.value >= 0 ? moveWords[0] : moveWords[1]) : d.value >= 0 ? "up" : "down";
-  const range = d.method === "no-interval" ? "" : ` (approx. 95 % interval ${formatSignificant(d.lower, 2, true)} to ${formatSignificant(d.upper, 2, true)} ${unit})`;
+  const range =
+    d.method === "no-interval"
+      ? ""
+      : ` (approx. 95 % interval ${formatSignificant(d.lower, 2, true)} to ${formatSignificant(d.upper, 2, true)} ${unit})`;
   return `${label} ${dir} by ${v} ${unit}${range}: ${d.statement}.`;
 }
 
@@ -57,7 +65,8 @@ function sentence(label: string, d: EstimateDifference | undefined, unit: string
 export function constituentShift(ref: ShiftSide, later: ShiftSide): ConstituentShift {
   const a = ref.analysis;
   const b = later.analysis;
-  if (a.name !== b.name) throw new RangeError(`constituentShift: constituent names differ ("${a.name}" vs "${b.name}")`);
+  if (a.name !== b.name)
+    throw new RangeError(`constituentShift: constituent names differ ("${a.name}" vs "${b.name}")`);
   const warnings: MixingWarning[] = [];
   const out: ConstituentShift = {
     name: a.name,
@@ -70,9 +79,13 @@ export function constituentShift(ref: ShiftSide, later: ShiftSide): ConstituentS
     statements: [],
     warnings,
   };
-  if (a.class !== b.class) out.statements.push(`${a.name} changed class from ${a.class} (${ref.survey}) to ${b.class} (${later.survey}).`);
+  if (a.class !== b.class)
+    out.statements.push(`${a.name} changed class from ${a.class} (${ref.survey}) to ${b.class} (${later.survey}).`);
   if (a.unit !== b.unit) {
-    warnings.push({ code: "unit-mismatch", message: `${a.name} is in ${a.unit} in ${ref.survey} but ${b.unit} in ${later.survey}: concentrations not compared.` });
+    warnings.push({
+      code: "unit-mismatch",
+      message: `${a.name} is in ${a.unit} in ${ref.survey} but ${b.unit} in ${later.survey}: concentrations not compared.`,
+    });
     return out;
   }
   if (a.reactionZone && b.reactionZone) {
@@ -84,8 +97,14 @@ export function constituentShift(ref: ShiftSide, later: ShiftSide): ConstituentS
     const kmLandward = diff(ka.landward, kb.landward);
     out.zone = {
       kind: za.kind === zb.kind ? za.kind : "changed",
-      salinityFrom: diff(za.salinityLower ?? point(za.salinity[0], "salinity"), zb.salinityLower ?? point(zb.salinity[0], "salinity"))!,
-      salinityTo: diff(za.salinityUpper ?? point(za.salinity[1], "salinity"), zb.salinityUpper ?? point(zb.salinity[1], "salinity"))!,
+      salinityFrom: diff(
+        za.salinityLower ?? point(za.salinity[0], "salinity"),
+        zb.salinityLower ?? point(zb.salinity[0], "salinity"),
+      )!,
+      salinityTo: diff(
+        za.salinityUpper ?? point(za.salinity[1], "salinity"),
+        zb.salinityUpper ?? point(zb.salinity[1], "salinity"),
+      )!,
       ...(kmSeaward ? { kmSeaward } : {}),
       ...(kmLandward ? { kmLandward } : {}),
     };
@@ -97,11 +116,26 @@ export function constituentShift(ref: ShiftSide, later: ShiftSide): ConstituentS
       if (s) out.statements.push(s);
   }
   if (a.maximum && b.maximum) {
-    const kmA = kmEstimateOfSalinity(ref.profile, a.maximum.salinity, a.maximum.km.length ? Math.max(...a.maximum.km) : undefined);
-    const kmB = kmEstimateOfSalinity(later.profile, b.maximum.salinity, b.maximum.km.length ? Math.max(...b.maximum.km) : undefined);
+    const kmA = kmEstimateOfSalinity(
+      ref.profile,
+      a.maximum.salinity,
+      a.maximum.km.length ? Math.max(...a.maximum.km) : undefined,
+    );
+    const kmB = kmEstimateOfSalinity(
+      later.profile,
+      b.maximum.salinity,
+      b.maximum.km.length ? Math.max(...b.maximum.km) : undefined,
+    );
     const km = diff(kmA, kmB);
-    out.maximum = { salinity: diff(a.maximum.salinity, b.maximum.salinity)!, ...(km ? { km } : {}), excess: diff(a.maximum.excess, b.maximum.excess)! };
-    for (const s of [sentence(`${a.name} maximum moved`, km, "km", ["landward", "seaward"]), sentence(`${a.name} maximum salinity went`, out.maximum.salinity, "(salinity)")])
+    out.maximum = {
+      salinity: diff(a.maximum.salinity, b.maximum.salinity)!,
+      ...(km ? { km } : {}),
+      excess: diff(a.maximum.excess, b.maximum.excess)!,
+    };
+    for (const s of [
+      sentence(`${a.name} maximum moved`, km, "km", ["landward", "seaward"]),
+      sentence(`${a.name} maximum salinity went`, out.maximum.salinity, "(salinity)"),
+    ])
       if (s) out.statements.push(s);
   }
   const cStar = diff(a.effectiveEndmember, b.effectiveEndmember);
@@ -112,6 +146,10 @@ export function constituentShift(ref: ShiftSide, later: ShiftSide): ConstituentS
   if (pct) out.percentChange = pct;
   if (net) out.netFlux = net;
   if (exp) out.effectiveExport = exp;
-  for (const s of [sentence(`${a.name} C*₀ went`, cStar, a.unit), sentence(`${a.name} % change went`, pct, "percentage points")]) if (s) out.statements.push(s);
+  for (const s of [
+    sentence(`${a.name} C*₀ went`, cStar, a.unit),
+    sentence(`${a.name} % change went`, pct, "percentage points"),
+  ])
+    if (s) out.statements.push(s);
   return out;
 }

@@ -37,7 +37,8 @@ export function differenceOfEstimates(reference: Estimate, later: Estimate, unit
   const widened = [reference, later].filter((e) => e.lower > e.value || e.upper < e.value).length;
   reference = checkEstimate(fn, "reference", reference);
   later = checkEstimate(fn, "later", later);
-  if (reference.unit !== later.unit) throw new RangeError(`${fn}: units differ ("${reference.unit}" vs "${later.unit}")`);
+  if (reference.unit !== later.unit)
+    throw new RangeError(`${fn}: units differ ("${reference.unit}" vs "${later.unit}")`);
   const value = later.value - reference.value;
   const lower = value - Math.hypot(later.value - later.lower, reference.upper - reference.value);
   const upper = value + Math.hypot(later.upper - later.value, reference.value - reference.lower);
@@ -51,7 +52,9 @@ export function differenceOfEstimates(reference: Estimate, later: Estimate, unit
     later: later.value,
     exceedsUncertainty: exceeds,
     method: "quadrature-of-half-widths",
-    statement: exceeds ? "larger than the uncertainty" : "within the uncertainty (cannot be distinguished from no change)",
+    statement: exceeds
+      ? "larger than the uncertainty"
+      : "within the uncertainty (cannot be distinguished from no change)",
     ...(widened ? { note: "an input 95 % interval did not contain its estimate and was widened to include it" } : {}),
   };
 }

@@ -1,16 +1,31 @@
 import jStat from "jstat";
 import type { DischargeScaling, ReferenceScaling } from "./types.ts";
+import { formatFixed } from "./formatNumber.ts";
 
 /** Published discharge scalings of the salt-intrusion length L ∝ Q^n (mixing-methods.md §5.1, §5.3). */
 export const REFERENCE_SCALINGS: readonly ReferenceScaling[] = [
-  { exponent: -1, label: "classical, constant dispersion K (steady 1-D advection–dispersion)", source: "mixing-methods.md §5.1, Eq. 6 (derived)" },
-  { exponent: -1 / 3, label: "classical, dispersion from gravitational circulation", source: "Hansen & Rattray (1965); Chatwin (1976), as given in mixing-methods.md §5.1 (from memory there)" },
-  { exponent: -1 / 7, label: "observed, X2 in northern San Francisco Bay (stratified)", source: "Monismith et al. (2002) J. Phys. Oceanogr. 32, 3003–3019, as given in mixing-methods.md §5.3 (exponent from memory there)" },
+  {
+    exponent: -1,
+    label: "classical, constant dispersion K (steady 1-D advection–dispersion)",
+    source: "mixing-methods.md §5.1, Eq. 6 (derived)",
+  },
+  {
+    exponent: -1 / 3,
+    label: "classical, dispersion from gravitational circulation",
+    source: "Hansen & Rattray (1965); Chatwin (1976), as given in mixing-methods.md §5.1 (from memory there)",
+  },
+  {
+    exponent: -1 / 7,
+    label: "observed, X2 in northern San Francisco Bay (stratified)",
+    source:
+      "Monismith et al. (2002) J. Phys. Oceanogr. 32, 3003–3019, as given in mixing-methods.md §5.3 (exponent from memory there)",
+  },
 ];
 
 function describe(n: number): string {
   const [k1, k3, k7] = [-1, -1 / 3, -1 / 7];
-  if (n > 0) return "Intrusion grew with discharge here, opposite to every steady scaling: other differences between the surveys (tide, wind, sampling) dominate.";
+  if (n > 0)
+    return "Intrusion grew with discharge here, opposite to every steady scaling: other differences between the surveys (tide, wind, sampling) dominate.";
   if (n < k1) return "Steeper than even the constant-dispersion −1 scaling.";
   if (n <= k3) return "Between the constant-dispersion −1 and the gravitational-circulation −1/3 scalings.";
   if (n <= k7) return "Between the classical −1/3 and the −1/7 observed in northern San Francisco Bay.";
@@ -30,9 +45,14 @@ function describe(n: number): string {
  * @throws RangeError for non-positive discharge or length
  * @see mixing-methods.md §5.1 (Eq. 6, Hansen & Rattray 1965, Chatwin 1976) and §5.3 (Monismith et al. 2002).
  */
-export function dischargeScaling(points: ReadonlyArray<{ dischargeM3s: number; lengthKm: number }>, quantity: string, salinity: number): DischargeScaling | undefined {
+export function dischargeScaling(
+  points: ReadonlyArray<{ dischargeM3s: number; lengthKm: number }>,
+  quantity: string,
+  salinity: number,
+): DischargeScaling | undefined {
   for (const p of points) {
-    if (!(p.dischargeM3s > 0)) throw new RangeError(`dischargeScaling: dischargeM3s must be > 0 m³/s, got ${p.dischargeM3s}`);
+    if (!(p.dischargeM3s > 0))
+      throw new RangeError(`dischargeScaling: dischargeM3s must be > 0 m³/s, got ${p.dischargeM3s}`);
     if (!(p.lengthKm > 0)) throw new RangeError(`dischargeScaling: lengthKm must be > 0 km, got ${p.lengthKm}`);
   }
   const n = points.length;
@@ -59,7 +79,7 @@ export function dischargeScaling(points: ReadonlyArray<{ dischargeM3s: number; l
     references: [...REFERENCE_SCALINGS],
     note: "",
   };
-  let limits = "";
+  let limits: string;
   if (n >= 3) {
     let rss = 0;
     for (let i = 0; i < n; i++) rss += (y[i]! - my - slope * (x[i]! - mx)) ** 2;
@@ -67,12 +87,12 @@ export function dischargeScaling(points: ReadonlyArray<{ dischargeM3s: number; l
     const t = jStat.studentt.inv(0.975, n - 2);
     out.lower = slope - t * se;
     out.upper = slope + t * se;
-    limits = `Fitted to ${n} surveys; 95 % interval ${out.lower.toFixed(2)} to ${out.upper.toFixed(2)}.`;
+    limits = `Fitted to ${n} surveys; 95 % interval ${formatFixed(out.lower, 2)} to ${formatFixed(out.upper, 2)}.`;
   } else {
     limits = "Two surveys fix n exactly and give no estimate of its uncertainty.";
   }
   out.note =
-    `Apparent n = ${slope.toFixed(2)} for ${quantity}. ${describe(slope)} ${limits} ` +
+    `Apparent n = ${formatFixed(slope, 2)} for ${quantity} (L ∝ Qⁿ). ${describe(slope)} ${limits} ` +
     "Surveys also differ in tide, wind and season, so n is descriptive of these surveys, not a property of the estuary. " +
     "Reference scalings: −1 and −1/3 are classical theory; −1/7 is an observation from one estuary.";
   return out;

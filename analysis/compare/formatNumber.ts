@@ -18,7 +18,8 @@ export const MINUS = "\u2212";
  * @throws RangeError for digits outside 1…10
  */
 export function formatSignificant(x: number, digits = 3, signed = false): string {
-  if (!(digits >= 1 && digits <= 10 && Number.isInteger(digits))) throw new RangeError(`formatSignificant: digits must be an integer 1…10, got ${digits}`);
+  if (!(digits >= 1 && digits <= 10 && Number.isInteger(digits)))
+    throw new RangeError(`formatSignificant: digits must be an integer 1…10, got ${digits}`);
   if (!Number.isFinite(x)) return "—";
   if (x === 0 || Object.is(x, -0)) return "0";
   const sign = x < 0 ? MINUS : signed ? "+" : "";
@@ -26,7 +27,9 @@ export function formatSignificant(x: number, digits = 3, signed = false): string
   if (a < 1e-4 || a >= 1e7) {
     const [m, e] = a.toExponential(digits - 1).split("e");
     const mant = m!.includes(".") ? m!.replace(/0+$/, "").replace(/\.$/, "") : m!;
-    const sup = String(Number(e)).replace(/-/g, "⁻").replace(/\d/g, (d) => "⁰¹²³⁴⁵⁶⁷⁸⁹"[Number(d)]!);
+    const sup = String(Number(e))
+      .replace(/-/g, "⁻")
+      .replace(/\d/g, (d) => "⁰¹²³⁴⁵⁶⁷⁸⁹"[Number(d)]!);
     return `${sign}${mant}×10${sup}`;
   }
   let t = Number(a.toPrecision(digits)).toString();
@@ -44,7 +47,8 @@ export function formatSignificant(x: number, digits = 3, signed = false): string
  * @throws RangeError for decimals outside 0…10
  */
 export function formatFixed(x: number, decimals: number, signed = false): string {
-  if (!(decimals >= 0 && decimals <= 10 && Number.isInteger(decimals))) throw new RangeError(`formatFixed: decimals must be an integer 0…10, got ${decimals}`);
+  if (!(decimals >= 0 && decimals <= 10 && Number.isInteger(decimals)))
+    throw new RangeError(`formatFixed: decimals must be an integer 0…10, got ${decimals}`);
   if (!Number.isFinite(x)) return "—";
   const t = Math.abs(x).toFixed(decimals);
   if (Number(t) === 0) return t;

@@ -14,7 +14,11 @@ import type { ComparableSurvey } from "./types.ts";
 export function surveyProfile(a: ComparableSurvey): SalinityProfile | undefined {
   if (a.salinityProfile) return a.salinityProfile;
   const pts = a.stations.flatMap((s) =>
-    !s.offChannel && s.alongChannelKm !== undefined && Number.isFinite(s.alongChannelKm) && s.salinity !== undefined && Number.isFinite(s.salinity)
+    !s.offChannel &&
+    s.alongChannelKm !== undefined &&
+    Number.isFinite(s.alongChannelKm) &&
+    s.salinity !== undefined &&
+    Number.isFinite(s.salinity)
       ? [{ km: s.alongChannelKm, salinity: s.salinity, id: s.id }]
       : [],
   );
@@ -46,7 +50,11 @@ export function kmAtSalinity(profile: SalinityProfile | undefined, salinity: num
  * @param kmValue optional point value [km] to use instead of the mapped value (the pipeline's own position)
  * @returns km estimate (unit "km"), or undefined when the value cannot be placed
  */
-export function kmEstimateOfSalinity(profile: SalinityProfile | undefined, s: Estimate, kmValue?: number): Estimate | undefined {
+export function kmEstimateOfSalinity(
+  profile: SalinityProfile | undefined,
+  s: Estimate,
+  kmValue?: number,
+): Estimate | undefined {
   const v = kmValue ?? kmAtSalinity(profile, s.value);
   if (v === undefined || !Number.isFinite(v)) return undefined;
   const a = kmAtSalinity(profile, s.lower) ?? v;

@@ -11,7 +11,8 @@ export interface BasemapShape {
   point?: [number, number];
 }
 
-const isPos = (p: unknown): p is number[] => Array.isArray(p) && p.length >= 2 && Number.isFinite(p[0]) && Number.isFinite(p[1]);
+const isPos = (p: unknown): p is number[] =>
+  Array.isArray(p) && p.length >= 2 && Number.isFinite(p[0]) && Number.isFinite(p[1]);
 const isRing = (r: unknown): r is number[][] => Array.isArray(r) && r.length >= 3 && r.every(isPos);
 
 /**
@@ -25,7 +26,10 @@ export function readBasemap(geojson: unknown): BasemapShape[] {
   const fc = geojson as { type?: unknown; features?: unknown };
   if (!fc || fc.type !== "FeatureCollection" || !Array.isArray(fc.features)) return [];
   const out: BasemapShape[] = [];
-  for (const f of fc.features as Array<{ geometry?: { type?: unknown; coordinates?: unknown }; properties?: Record<string, unknown> | null }>) {
+  for (const f of fc.features as Array<{
+    geometry?: { type?: unknown; coordinates?: unknown };
+    properties?: Record<string, unknown> | null;
+  }>) {
     const g = f?.geometry;
     const props = f?.properties ?? {};
     const kind = typeof props.kind === "string" ? props.kind : "land";
@@ -33,9 +37,14 @@ export function readBasemap(geojson: unknown): BasemapShape[] {
     if (!g) continue;
     if (g.type === "Polygon" && Array.isArray(g.coordinates) && g.coordinates.every(isRing))
       out.push({ kind, ...(name ? { name } : {}), polygons: [g.coordinates as number[][][]] });
-    else if (g.type === "MultiPolygon" && Array.isArray(g.coordinates) && g.coordinates.every((p) => Array.isArray(p) && p.every(isRing)))
+    else if (
+      g.type === "MultiPolygon" &&
+      Array.isArray(g.coordinates) &&
+      g.coordinates.every((p) => Array.isArray(p) && p.every(isRing))
+    )
       out.push({ kind, ...(name ? { name } : {}), polygons: g.coordinates as number[][][][] });
-    else if (g.type === "Point" && isPos(g.coordinates) && name) out.push({ kind, name, point: [g.coordinates[0]!, g.coordinates[1]!] });
+    else if (g.type === "Point" && isPos(g.coordinates) && name)
+      out.push({ kind, name, point: [g.coordinates[0]!, g.coordinates[1]!] });
   }
   return out;
 }

@@ -69,9 +69,18 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
   const analyses: ReadonlyArray<ComparableSurvey & { caution?: string }> = input.analyses;
   const key = input.keyConstituents ?? keyConstituents(analyses[0]!, input.maxKeyConstituents ?? 4);
   const basemap = readBasemap(input.basemap);
-  const surveys = analyses.map((a, i) => surveySection(a, { ...(input.network ? { network: input.network } : {}), basemap, keyConstituents: key, idPrefix: `s${i}` }));
+  const surveys = analyses.map((a, i) =>
+    surveySection(a, {
+      ...(input.network ? { network: input.network } : {}),
+      basemap,
+      keyConstituents: key,
+      idPrefix: `s${i}`,
+    }),
+  );
   const comparison = input.comparison ?? (analyses.length >= 2 ? compareSurveys(analyses) : undefined);
-  const maxKm = input.network?.branches[0]?.kmEnd ?? Math.max(1, ...analyses.flatMap((a) => a.stations.map((s: StationPlacement) => s.alongChannelKm ?? 0)));
+  const maxKm =
+    input.network?.branches[0]?.kmEnd ??
+    Math.max(1, ...analyses.flatMap((a) => a.stations.map((s: StationPlacement) => s.alongChannelKm ?? 0)));
   const cmp = comparison ? comparisonSection(comparison, analyses, maxKm) : undefined;
   const summary: string[] = [];
   for (const s of surveys) {
@@ -80,8 +89,12 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
       .filter((c: ConstituentAnalysis) => key.includes(c.name) && c.percentChange)
       .map((c: ConstituentAnalysis) => `${c.name} ${formatSignificant(c.percentChange!.value, 2, true)} %`)
       .join(", ");
-    const intr = a.survey.saltIntrusionKm !== undefined ? `salt (S = ${a.survey.saltIntrusionSalinity}) reached ${formatSignificant(a.survey.saltIntrusionKm, 3)} km from the mouth` : "salt intrusion not located";
-    const q = a.survey.riverDischargeM3s !== undefined ? ` at ${formatSignificant(a.survey.riverDischargeM3s, 3)} m³/s` : "";
+    const intr =
+      a.survey.saltIntrusionKm !== undefined
+        ? `salt (S = ${a.survey.saltIntrusionSalinity}) reached ${formatSignificant(a.survey.saltIntrusionKm, 3)} km from the mouth`
+        : "salt intrusion not located";
+    const q =
+      a.survey.riverDischargeM3s !== undefined ? ` at ${formatSignificant(a.survey.riverDischargeM3s, 3)} m³/s` : "";
     summary.push(`${s.name}${q}: ${intr}${changes ? `; net change river → sea: ${changes}` : ""}.`);
   }
   const firstClear = surveys[0]!.findings.find((f) => f.strength === "clear" && f.constituent);
@@ -89,7 +102,11 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
   if (cmp) summary.push(...cmp.findings.slice(0, 2));
   const fitMethod = analyses.flatMap((a) => a.constituents).find((c) => c.fit)?.fit?.method;
   const boot = input.bootstrap ?? analyses.flatMap((a) => a.constituents).find((c) => c.bootstrap)?.bootstrap;
-  const cautions = [BRIEFING_CAUTION, analyses[0]!.caution ?? SCREENING_CAUTION, "Each survey is a snapshot of one day; the intervals describe sampling and analytical scatter, not changes between days, tides or seasons."];
+  const cautions = [
+    BRIEFING_CAUTION,
+    analyses[0]!.caution ?? SCREENING_CAUTION,
+    "Each survey is a snapshot of one day; the intervals describe sampling and analytical scatter, not changes between days, tides or seasons.",
+  ];
   if (input.dataNotice) cautions.unshift(input.dataNotice);
   return {
     title: input.title ?? "Estuarine mixing briefing",

@@ -57,6 +57,13 @@ export function intervalCrossesZero(e: Estimate): boolean {
  */
 export function fluxText(molS: number): string {
   const perDay = Math.abs(molS) * 86400;
-  const [v, u] = perDay >= 1e6 ? [perDay / 1e6, "Mmol/d"] : perDay >= 1e3 ? [perDay / 1e3, "kmol/d"] : perDay >= 1 ? [perDay, "mol/d"] : [perDay * 1e3, "mmol/d"];
+  const [v, u] =
+    perDay >= 1e6
+      ? [perDay / 1e6, "Mmol/d"]
+      : perDay >= 1e3
+        ? [perDay / 1e3, "kmol/d"]
+        : perDay >= 1
+          ? [perDay, "mol/d"]
+          : [perDay * 1e3, "mmol/d"];
   return `${formatSignificant(Math.abs(molS), 2)} mol/s (${formatSignificant(v, 2)} ${u})`;
 }

@@ -5,7 +5,14 @@
 import type { ConstituentAnalysis, Estimate } from "../mixing/result.ts";
 import { LOW_CONFIDENCE_CODES } from "../mixing/pitfalls.ts";
 import { formatSignificant } from "../compare/formatNumber.ts";
-import { estimateInline, estimateText, fluxText, intervalCrossesZero, intervalText, unitSuffix } from "./estimateText.ts";
+import {
+  estimateInline,
+  estimateText,
+  fluxText,
+  intervalCrossesZero,
+  intervalText,
+  unitSuffix,
+} from "./estimateText.ts";
 import { constituentWords, fractionInWords, multipleInWords } from "./wording.ts";
 
 /** One finding sentence and how firmly the data support it. */
@@ -25,11 +32,13 @@ export function zoneWhere(c: ConstituentAnalysis): string {
   if (!z || !(z.salinity[1] - z.salinity[0] > 0.05)) return "";
   const s = ` where salinity rises from ${formatSignificant(z.salinity[0], 2)} to ${formatSignificant(z.salinity[1], 2)}`;
   const ends = z.km.flat();
-  if (!ends.length) return ` at salinities ${formatSignificant(z.salinity[0], 2)} to ${formatSignificant(z.salinity[1], 2)}`;
+  if (!ends.length)
+    return ` at salinities ${formatSignificant(z.salinity[0], 2)} to ${formatSignificant(z.salinity[1], 2)}`;
   const land = Math.max(...ends);
   const sea = Math.min(...ends);
   if (Math.round(land) === Math.round(sea)) return ` near km ${km0(land)},${s}`;
-  const split = z.km.length > 1 ? " (in more than one stretch, as salinity does not rise steadily along the channel)" : "";
+  const split =
+    z.km.length > 1 ? " (in more than one stretch, as salinity does not rise steadily along the channel)" : "";
   return ` between km ${km0(land)} and km ${km0(sea)}${split},${s}`;
 }
 
@@ -72,7 +81,13 @@ export function constituentFindings(c: ConstituentAnalysis): Finding[] {
   const who = constituentWords(c.name);
   if (c.class === "insufficient-data") {
     const why = c.warnings.find((w) => w.code === "insufficient-data")?.message;
-    return [{ constituent: c.name, strength: "insufficient", text: `${cap(who)}: too few usable data to judge its mixing behaviour${why ? ` (${why})` : ""}.` }];
+    return [
+      {
+        constituent: c.name,
+        strength: "insufficient",
+        text: `${cap(who)}: too few usable data to judge its mixing behaviour${why ? ` (${why})` : ""}.`,
+      },
+    ];
   }
   const out: Finding[] = [];
   const p = c.percentChange;
@@ -83,13 +98,20 @@ export function constituentFindings(c: ConstituentAnalysis): Finding[] {
       text: `${cap(who)} mixes conservatively: the stations follow the dilution line within analytical precision${p ? ` (net change ${estimateInline(p, 2, true)})` : ""}.`,
     });
   } else if (p) out.push(netChangeSentence(c, p));
-  else out.push({ constituent: c.name, strength: "uncertain", text: `${cap(who)} departs from the dilution line (${c.class}), but no effective river end-member could be estimated.` });
+  else
+    out.push({
+      constituent: c.name,
+      strength: "uncertain",
+      text: `${cap(who)} departs from the dilution line (${c.class}), but no effective river end-member could be estimated.`,
+    });
   const mx = c.maximum;
   if (mx) {
     const lo = Math.round(Math.min(...mx.km));
     const hi = Math.round(Math.max(...mx.km));
     const kms = mx.km.length ? (lo === hi ? ` near km ${lo},` : ` near km ${lo}–${hi},`) : "";
-    const ex = intervalCrossesZero(mx.excess) ? "an excess over the dilution line that cannot be distinguished from zero" : `${estimateText(mx.excess, 2)} above the dilution line`;
+    const ex = intervalCrossesZero(mx.excess)
+      ? "an excess over the dilution line that cannot be distinguished from zero"
+      : `${estimateText(mx.excess, 2)} above the dilution line`;
     out.push({
       constituent: c.name,
       strength: intervalCrossesZero(mx.excess) ? "uncertain" : "clear",
@@ -117,6 +139,7 @@ export function constituentFindings(c: ConstituentAnalysis): Finding[] {
       text: `Effective river end-member C*₀ = ${estimateText(c.effectiveEndmember, 3)} against a river value of ${formatSignificant(c.endmembers.river.conc, 3)}${unitSuffix(c.unit)}.`,
     });
   const low = c.warnings.find((w) => LOW_CONFIDENCE_CODES.has(w.code));
-  if (c.confidence === "low" && low) out.push({ constituent: c.name, strength: "uncertain", text: `Confidence is low: ${low.message}` });
+  if (c.confidence === "low" && low)
+    out.push({ constituent: c.name, strength: "uncertain", text: `Confidence is low: ${low.message}` });
   return out;
 }

@@ -28,19 +28,25 @@ const EARTH_RADIUS_KM = 6371.0088;
  * @throws RangeError without any finite point
  * @see Snyder, J.P. (1987) Map Projections — A Working Manual, USGS PP 1395, §12 (equidistant cylindrical).
  */
-export function fitProjection(points: ReadonlyArray<readonly number[]>, width: number, options: { padFraction?: number; minHeight?: number; maxHeight?: number } = {}): MapProjection {
+export function fitProjection(
+  points: ReadonlyArray<readonly number[]>,
+  width: number,
+  options: { padFraction?: number; minHeight?: number; maxHeight?: number } = {},
+): MapProjection {
   const pts = points.filter((p) => Number.isFinite(p[0]) && Number.isFinite(p[1]));
   if (!pts.length) throw new RangeError("fitProjection: points must hold at least one finite [lon, lat]");
   const lons = pts.map((p) => p[0]!);
   const lats = pts.map((p) => p[1]!);
-  let [w, e, s, n] = [Math.min(...lons), Math.max(...lons), Math.min(...lats), Math.max(...lats)];
-  const lat0 = (s + n) / 2;
+  const [w0, e, s, n0] = [Math.min(...lons), Math.max(...lons), Math.min(...lats), Math.max(...lats)];
+  let w = w0;
+  let n = n0;
+  const lat0 = (s + n0) / 2;
   const k = Math.cos((lat0 * Math.PI) / 180);
   let dx = Math.max((e - w) * k, 1e-4);
-  let dy = Math.max(n - s, 1e-4);
+  let dy = Math.max(n0 - s, 1e-4);
   const pad = options.padFraction ?? 0.08;
-  const cx = (w + e) / 2;
-  const cy = (s + n) / 2;
+  const cx = (w0 + e) / 2;
+  const cy = (s + n0) / 2;
   dx *= 1 + 2 * pad;
   dy *= 1 + 2 * pad;
   const minH = options.minHeight ?? 260;

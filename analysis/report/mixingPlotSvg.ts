@@ -26,42 +26,94 @@ export function mixingPlotSvg(c: ConstituentAnalysis, id: string): SafeHtml | un
   const river = c.endmembers?.river;
   const sea = c.endmembers?.sea;
   const xs = [0, ...d.map((p) => p.salinity), sea?.salinity ?? 0];
-  const ys = [0, ...d.map((p) => p.observed), ...(fit ? fit.upper : []), river?.conc ?? 0, c.effectiveEndmember?.upper ?? 0];
-  const f = makeFrame([0, extentOf(xs, [0, 35])[1]], [0, extentOf(ys, [0, 1])[1] * 1.04], { width: W, height: H, top: 26 });
+  const ys = [
+    0,
+    ...d.map((p) => p.observed),
+    ...(fit ? fit.upper : []),
+    river?.conc ?? 0,
+    c.effectiveEndmember?.upper ?? 0,
+  ];
+  const f = makeFrame([0, extentOf(xs, [0, 35])[1]], [0, extentOf(ys, [0, 1])[1] * 1.04], {
+    width: W,
+    height: H,
+    top: 26,
+  });
   const clip = `${id}-clip`;
   const parts: SafeHtml[] = [];
   const z = c.reactionZone;
   if (z) {
     const a = f.x(z.salinity[0]);
     const b = f.x(z.salinity[1]);
-    parts.push(html`<rect class="zone" x="${c1(a)}" y="${c1(f.top)}" width="${c1(Math.max(0.5, b - a))}" height="${c1(f.height - f.bottom - f.top)}"/>`);
+    parts.push(
+      html`<rect
+        class="zone"
+        x="${c1(a)}"
+        y="${c1(f.top)}"
+        width="${c1(Math.max(0.5, b - a))}"
+        height="${c1(f.height - f.bottom - f.top)}"
+      />`,
+    );
   }
   if (fit) {
     const up = linePath(f, fit.salinity, fit.upper);
     const lo = linePath(f, [...fit.salinity].reverse(), [...fit.lower].reverse()).replace(/^M/, "L");
-    parts.push(html`<path class="band" d="${up}${lo}Z" fill="${PALETTE[1]}" fill-opacity="0.16"/>`);
-    parts.push(html`<path d="${linePath(f, fit.salinity, fit.conc)}" fill="none" stroke="${PALETTE[1]}" stroke-width="1.6"/>`);
+    parts.push(html`<path class="band" d="${up}${lo}Z" fill="${PALETTE[1]}" fill-opacity="0.16" />`);
+    parts.push(
+      html`<path d="${linePath(f, fit.salinity, fit.conc)}" fill="none" stroke="${PALETTE[1]}" stroke-width="1.6" />`,
+    );
   }
   const line = c.dilutionLine;
   if (line) {
     const s0 = line.river.salinity;
     const s1 = line.sea.salinity;
-    parts.push(html`<path d="${linePath(f, [s0, s1], [line.intercept + line.slope * s0, line.intercept + line.slope * s1])}" fill="none" stroke="#555" stroke-width="1.2" stroke-dasharray="5 3"/>`);
+    parts.push(
+      html`<path
+        d="${linePath(f, [s0, s1], [line.intercept + line.slope * s0, line.intercept + line.slope * s1])}"
+        fill="none"
+        stroke="#555"
+        stroke-width="1.2"
+        stroke-dasharray="5 3"
+      />`,
+    );
   }
   const t = c.tangent;
   if (t && river && c.class !== "conservative") {
     const s0 = river.salinity;
-    parts.push(html`<path d="${linePath(f, [s0, t.toSalinity], [t.intercept + t.slope * s0, t.intercept + t.slope * t.toSalinity])}" fill="none" stroke="${PALETTE[4]}" stroke-width="1.2" stroke-dasharray="2 2"/>`);
+    parts.push(
+      html`<path
+        d="${linePath(f, [s0, t.toSalinity], [t.intercept + t.slope * s0, t.intercept + t.slope * t.toSalinity])}"
+        fill="none"
+        stroke="${PALETTE[4]}"
+        stroke-width="1.2"
+        stroke-dasharray="2 2"
+      />`,
+    );
     const e = c.effectiveEndmember;
     if (e) {
       const px = c1(f.x(s0));
-      parts.push(html`<line x1="${px}" x2="${px}" y1="${c1(f.y(e.lower))}" y2="${c1(f.y(e.upper))}" stroke="${PALETTE[4]}" stroke-width="1.4"/><rect x="${c1(f.x(s0) - 3)}" y="${c1(f.y(e.value) - 3)}" width="6" height="6" fill="${PALETTE[4]}"/>`);
+      parts.push(
+        html`<line
+            x1="${px}"
+            x2="${px}"
+            y1="${c1(f.y(e.lower))}"
+            y2="${c1(f.y(e.upper))}"
+            stroke="${PALETTE[4]}"
+            stroke-width="1.4"
+          /><rect x="${c1(f.x(s0) - 3)}" y="${c1(f.y(e.value) - 3)}" width="6" height="6" fill="${PALETTE[4]}" />`,
+      );
     }
   }
   const pts = d.map((p) =>
     p.censored
-      ? html`<circle cx="${c1(f.x(p.salinity))}" cy="${c1(f.y(p.observed))}" r="2.4" fill="#fff" stroke="#222" stroke-width="0.9"/>`
-      : html`<circle cx="${c1(f.x(p.salinity))}" cy="${c1(f.y(p.observed))}" r="2.4" fill="#222"/>`,
+      ? html`<circle
+          cx="${c1(f.x(p.salinity))}"
+          cy="${c1(f.y(p.observed))}"
+          r="2.4"
+          fill="#fff"
+          stroke="#222"
+          stroke-width="0.9"
+        />`
+      : html`<circle cx="${c1(f.x(p.salinity))}" cy="${c1(f.y(p.observed))}" r="2.4" fill="#222" />`,
   );
   const legend = legendSvg(f, [
     { label: "stations", color: "#222", mark: "dot" },
@@ -71,5 +123,15 @@ export function mixingPlotSvg(c: ConstituentAnalysis, id: string): SafeHtml | un
   ]);
   const x0 = f.left;
   const y0 = f.top;
-  return html`<svg viewBox="0 0 ${W} ${H}" class="plot" role="img" aria-labelledby="${id}-t"><title id="${id}-t">${c.name} against salinity: stations, dilution line and fitted curve</title><defs><clipPath id="${clip}"><rect x="${c1(x0)}" y="${c1(y0)}" width="${c1(W - f.right - x0)}" height="${c1(H - f.bottom - y0)}"/></clipPath></defs>${axesSvg(f, "Salinity (PSS-78)", `${c.name} (${c.unit})`)}<g clip-path="url(#${clip})">${joinHtml(parts)}${joinHtml(pts)}</g>${legend}</svg>`;
+  return html`<svg viewBox="0 0 ${W} ${H}" class="plot" role="img" aria-labelledby="${id}-t">
+    <title id="${id}-t">${c.name} against salinity: stations, dilution line and fitted curve</title>
+    <defs>
+      <clipPath id="${clip}">
+        <rect x="${c1(x0)}" y="${c1(y0)}" width="${c1(W - f.right - x0)}" height="${c1(H - f.bottom - y0)}" />
+      </clipPath>
+    </defs>
+    ${axesSvg(f, "Salinity (PSS-78)", `${c.name} (${c.unit})`)}
+    <g clip-path="url(#${clip})">${joinHtml(parts)}${joinHtml(pts)}</g>
+    ${legend}
+  </svg>`;
 }

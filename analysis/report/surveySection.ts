@@ -27,7 +27,8 @@ export interface SectionContext {
 }
 
 const f2 = (x: number): string => formatSignificant(x, 2);
-const kmRange = (km: Array<[number, number]>): string => km.map(([a, b]) => `${formatSignificant(a, 3)}–${formatSignificant(b, 3)}`).join(", ");
+const kmRange = (km: Array<[number, number]>): string =>
+  km.map(([a, b]) => `${formatSignificant(a, 3)}–${formatSignificant(b, 3)}`).join(", ");
 
 /** Date part (YYYY-MM-DD) of an ISO 8601 time. */
 export const datePart = (iso: string | undefined): string | undefined => (iso ? iso.slice(0, 10) : undefined);
@@ -38,14 +39,27 @@ function resultsTable(a: ComparableSurvey): BriefingTable {
     classWords(c.class),
     c.percentChange ? estimateText(c.percentChange, 2, true) : "—",
     c.effectiveEndmember ? estimateText(c.effectiveEndmember, 3) : "—",
-    c.reactionZone ? `${f2(c.reactionZone.salinity[0])}–${f2(c.reactionZone.salinity[1])} (${c.reactionZone.kind})` : "—",
+    c.reactionZone
+      ? `${f2(c.reactionZone.salinity[0])}–${f2(c.reactionZone.salinity[1])} (${c.reactionZone.kind})`
+      : "—",
     c.reactionZone && c.reactionZone.km.length ? kmRange(c.reactionZone.km) : "—",
-    c.maximum ? `S ${f2(c.maximum.salinity.value)}${c.maximum.km.length ? `, km ${c.maximum.km.map((k) => formatSignificant(k, 3)).join(", ")}` : ""}` : "—",
+    c.maximum
+      ? `S ${f2(c.maximum.salinity.value)}${c.maximum.km.length ? `, km ${c.maximum.km.map((k) => formatSignificant(k, 3)).join(", ")}` : ""}`
+      : "—",
     c.confidence,
   ]);
   return {
     caption: `Results by constituent, survey ${a.survey.name}`,
-    header: ["Constituent (unit)", "Behaviour", "Net change, % (95 % interval)", "C*₀ (95 % interval)", "Reaction zone, salinity", "Zone, km from mouth", "Maximum", "Confidence"],
+    header: [
+      "Constituent (unit)",
+      "Behaviour",
+      "Net change, % (95 % interval)",
+      "C*₀ (95 % interval)",
+      "Reaction zone, salinity",
+      "Zone, km from mouth",
+      "Maximum",
+      "Confidence",
+    ],
     rows,
     note: "Net change = 100·(C*₀ − C₀)/C₀: negative = removal in the estuary, positive = addition. Salinity is practical salinity (PSS-78, no unit).",
   };
@@ -65,19 +79,46 @@ export function surveySection(a: ComparableSurvey, ctx: SectionContext): Briefin
   const dates = [datePart(f.startDate), datePart(f.endDate)].filter((d): d is string => !!d);
   const facts: Array<[string, string]> = [
     ["Sampling dates", dates.length ? [...new Set(dates)].join(" to ") : "not given"],
-    ["River discharge", f.riverDischargeM3s !== undefined ? `${formatSignificant(f.riverDischargeM3s, 3)} m³/s` : "not given (no fluxes)"],
-    ["Stations", `${a.stations.length} samples, ${placed} placed on the channel${off.length ? `, off the channel: ${off.join(", ")}` : ""}`],
-    ["Salinity range", f.salinityRange ? `${formatSignificant(f.salinityRange[0], 3)} to ${formatSignificant(f.salinityRange[1], 3)} (PSS-78)` : "—"],
-    ["Salt intrusion", f.saltIntrusionKm !== undefined ? `S = ${f.saltIntrusionSalinity} at ${formatSignificant(f.saltIntrusionKm, 3)} km from the mouth` : "not located"],
-    ["Isohalines", f.isohalines.filter((h) => h.km.length).map((h) => `S ${h.salinity}: km ${h.km.map((k) => formatSignificant(k, 3)).join(", ")}`).join("; ") || "—"],
+    [
+      "River discharge",
+      f.riverDischargeM3s !== undefined ? `${formatSignificant(f.riverDischargeM3s, 3)} m³/s` : "not given (no fluxes)",
+    ],
+    [
+      "Stations",
+      `${a.stations.length} samples, ${placed} placed on the channel${off.length ? `, off the channel: ${off.join(", ")}` : ""}`,
+    ],
+    [
+      "Salinity range",
+      f.salinityRange
+        ? `${formatSignificant(f.salinityRange[0], 3)} to ${formatSignificant(f.salinityRange[1], 3)} (PSS-78)`
+        : "—",
+    ],
+    [
+      "Salt intrusion",
+      f.saltIntrusionKm !== undefined
+        ? `S = ${f.saltIntrusionSalinity} at ${formatSignificant(f.saltIntrusionKm, 3)} km from the mouth`
+        : "not located",
+    ],
+    [
+      "Isohalines",
+      f.isohalines
+        .filter((h) => h.km.length)
+        .map((h) => `S ${h.salinity}: km ${h.km.map((k) => formatSignificant(k, 3)).join(", ")}`)
+        .join("; ") || "—",
+    ],
   ];
   const all = a.constituents.flatMap(constituentFindings);
   // C*₀ sentences are in the results table; a low-confidence reason shared by several constituents is said once.
   const lowBy = new Map<string, string[]>();
-  for (const x of all) if (x.text.startsWith("Confidence is low: ")) lowBy.set(x.text, [...(lowBy.get(x.text) ?? []), x.constituent ?? ""]);
+  for (const x of all)
+    if (x.text.startsWith("Confidence is low: "))
+      lowBy.set(x.text, [...(lowBy.get(x.text) ?? []), x.constituent ?? ""]);
   const findings = all.filter((x) => x.strength !== "context" && !x.text.startsWith("Confidence is low: "));
   for (const [text, names] of lowBy)
-    findings.push({ strength: "uncertain", text: `Confidence is low for ${names.join(", ")}: ${text.slice("Confidence is low: ".length)}` });
+    findings.push({
+      strength: "uncertain",
+      text: `Confidence is low for ${names.join(", ")}: ${text.slice("Confidence is low: ".length)}`,
+    });
   if (f.saltIntrusionKm !== undefined)
     findings.unshift({
       strength: "context",
@@ -85,15 +126,35 @@ export function surveySection(a: ComparableSurvey, ctx: SectionContext): Briefin
     });
   const figures: BriefingFigure[] = [];
   const id = ctx.idPrefix;
-  const key = ctx.keyConstituents.map((n) => a.constituents.find((c) => c.name === n)).filter((c): c is ConstituentAnalysis => !!c);
+  const key = ctx.keyConstituents
+    .map((n) => a.constituents.find((c) => c.name === n))
+    .filter((c): c is ConstituentAnalysis => !!c);
   if (ctx.network) {
-    const zones = key.filter((c) => c.reactionZone?.km.length).map((c, i) => ({ label: `${c.name} ${c.reactionZone!.kind} zone`, color: PALETTE[(i + 2) % PALETTE.length]!, km: c.reactionZone!.km }));
+    const zones = key
+      .filter((c) => c.reactionZone?.km.length)
+      .map((c, i) => ({
+        label: `${c.name} ${c.reactionZone!.kind} zone`,
+        color: PALETTE[(i + 2) % PALETTE.length]!,
+        km: c.reactionZone!.km,
+      }));
     figures.push({
       id: `${id}-map`,
       size: "wide",
       title: `Map of the estuary, survey ${f.name}`,
-      caption: "Channel centerline with distance marks from the mouth, stations (red ring: off the channel), the salt-intrusion point and reaction zones of the key constituents as coloured stretches. Local equirectangular projection, north up.",
-      svg: mapSvg({ network: ctx.network, basemap: ctx.basemap, stations: a.stations, zones, ...(f.saltIntrusionKm !== undefined ? { intrusion: { km: f.saltIntrusionKm, salinity: f.saltIntrusionSalinity } } : {}) }, `${id}-map`),
+      caption:
+        "Channel centerline with distance marks from the mouth, stations (red ring: off the channel), the salt-intrusion point and reaction zones of the key constituents as coloured stretches. Local equirectangular projection, north up.",
+      svg: mapSvg(
+        {
+          network: ctx.network,
+          basemap: ctx.basemap,
+          stations: a.stations,
+          zones,
+          ...(f.saltIntrusionKm !== undefined
+            ? { intrusion: { km: f.saltIntrusionKm, salinity: f.saltIntrusionSalinity } }
+            : {}),
+        },
+        `${id}-map`,
+      ),
       legend: zones.map((z) => ({ label: z.label, color: z.color })),
     });
   }
@@ -102,9 +163,15 @@ export function surveySection(a: ComparableSurvey, ctx: SectionContext): Briefin
     id: `${id}-zones`,
     size: "wide",
     title: "Where each constituent reacts along the channel",
-    caption: "Bars: reaction zones placed on the channel through the salinity profile; diamonds: mid-estuarine maxima; dashed line: salt intrusion.",
+    caption:
+      "Bars: reaction zones placed on the channel through the salinity profile; diamonds: mid-estuarine maxima; dashed line: salt intrusion.",
     svg: zoneStripSvg(
-      a.constituents.map((c) => ({ label: `${c.name} (${c.class === "insufficient-data" ? "too little data" : c.reactionZone?.kind ?? c.class})`, ...(c.reactionZone ? { kind: c.reactionZone.kind } : {}), km: c.reactionZone?.km ?? [], maximumKm: c.maximum?.km ?? [] })),
+      a.constituents.map((c) => ({
+        label: `${c.name} (${c.class === "insufficient-data" ? "too little data" : (c.reactionZone?.kind ?? c.class)})`,
+        ...(c.reactionZone ? { kind: c.reactionZone.kind } : {}),
+        km: c.reactionZone?.km ?? [],
+        maximumKm: c.maximum?.km ?? [],
+      })),
       maxKm,
       f.saltIntrusionKm !== undefined ? [{ km: f.saltIntrusionKm, label: `S = ${f.saltIntrusionSalinity}` }] : [],
       `${id}-zones`,
@@ -118,9 +185,28 @@ export function surveySection(a: ComparableSurvey, ctx: SectionContext): Briefin
     const m = mixingPlotSvg(c, `${id}-mix${i}`);
     const p = profilePlotSvg(c, a.stations, `${id}-prof${i}`);
     const name = constituentWords(c.name).replace(/^./, (ch) => ch.toUpperCase());
-    if (m) figures.push({ id: `${id}-mix${i}`, size: "half", svg: m, title: `${name} against salinity`, caption: "Dashed: theoretical dilution line; blue: fitted curve with 95 % band; orange: seaward tangent and C*₀ with its interval; shaded: reaction zone; open circles: below detection." });
-    if (p) figures.push({ id: `${id}-prof${i}`, size: "half", svg: p, title: `${name} along the channel`, caption: "Concentration (dots, left axis) and salinity (grey, right axis) against distance from the mouth; shaded: reaction zone." });
+    if (m)
+      figures.push({
+        id: `${id}-mix${i}`,
+        size: "half",
+        svg: m,
+        title: `${name} against salinity`,
+        caption:
+          "Dashed: theoretical dilution line; blue: fitted curve with 95 % band; orange: seaward tangent and C*₀ with its interval; shaded: reaction zone; open circles: below detection.",
+      });
+    if (p)
+      figures.push({
+        id: `${id}-prof${i}`,
+        size: "half",
+        svg: p,
+        title: `${name} along the channel`,
+        caption:
+          "Concentration (dots, left axis) and salinity (grey, right axis) against distance from the mouth; shaded: reaction zone.",
+      });
   });
-  const warnings = (a.warnings ?? []).map((w) => w.message).filter((m, i, all) => all.indexOf(m) === i).slice(0, 12);
+  const warnings = (a.warnings ?? [])
+    .map((w) => w.message)
+    .filter((m, i, all) => all.indexOf(m) === i)
+    .slice(0, 12);
   return { name: f.name, heading: `Survey ${f.name}`, facts, findings, figures, table: resultsTable(a), warnings };
 }

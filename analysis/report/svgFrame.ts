@@ -7,7 +7,16 @@ import { formatSignificant } from "../compare/formatNumber.ts";
 import { html, joinHtml, type SafeHtml } from "./html.ts";
 
 /** Colours of the briefing (own choice; colour-blind-distinguishable pairs). */
-export const PALETTE = ["#b2182b", "#2166ac", "#1b7837", "#762a83", "#b35806", "#35978f", "#8c510a", "#4d4d4d"] as const;
+export const PALETTE = [
+  "#b2182b",
+  "#2166ac",
+  "#1b7837",
+  "#762a83",
+  "#b35806",
+  "#35978f",
+  "#8c510a",
+  "#4d4d4d",
+] as const;
 
 /** A chart area with its scales. */
 export interface PlotFrame {
@@ -48,13 +57,23 @@ export function extentOf(values: readonly number[], fallback: [number, number]):
  * @param yDomain data range on y
  * @param size width/height of the whole SVG (viewBox units) and margins
  */
-export function makeFrame(xDomain: [number, number], yDomain: [number, number], size: { width: number; height: number; left?: number; right?: number; top?: number; bottom?: number }): PlotFrame {
+export function makeFrame(
+  xDomain: [number, number],
+  yDomain: [number, number],
+  size: { width: number; height: number; left?: number; right?: number; top?: number; bottom?: number },
+): PlotFrame {
   const left = size.left ?? 48;
   const right = size.right ?? 12;
   const top = size.top ?? 22;
   const bottom = size.bottom ?? 34;
-  const x = scaleLinear().domain(xDomain).range([left, size.width - right]).nice(6);
-  const y = scaleLinear().domain(yDomain).range([size.height - bottom, top]).nice(5);
+  const x = scaleLinear()
+    .domain(xDomain)
+    .range([left, size.width - right])
+    .nice(6);
+  const y = scaleLinear()
+    .domain(yDomain)
+    .range([size.height - bottom, top])
+    .nice(5);
   return { width: size.width, height: size.height, left, right, top, bottom, x, y };
 }
 
@@ -87,9 +106,42 @@ export function axesSvg(frame: PlotFrame, xLabel: string, yLabel: string): SafeH
   const x0 = left;
   const x1 = width - right;
   const y0 = height - bottom;
-  const xt = x.ticks(6).map((t) => html`<line class="grid" x1="${c1(x(t))}" x2="${c1(x(t))}" y1="${c1(top)}" y2="${c1(y0)}"/><text class="tick" x="${c1(x(t))}" y="${c1(y0 + 11)}" text-anchor="middle">${formatSignificant(t, 4)}</text>`);
-  const yt = y.ticks(5).map((t) => html`<line class="grid" x1="${c1(x0)}" x2="${c1(x1)}" y1="${c1(y(t))}" y2="${c1(y(t))}"/><text class="tick" x="${c1(x0 - 4)}" y="${c1(y(t) + 3)}" text-anchor="end">${formatSignificant(t, 4)}</text>`);
-  return html`<g class="axes">${joinHtml(xt)}${joinHtml(yt)}<rect class="frame" x="${c1(x0)}" y="${c1(top)}" width="${c1(x1 - x0)}" height="${c1(y0 - top)}"/><text class="label" x="${c1((x0 + x1) / 2)}" y="${c1(height - 4)}" text-anchor="middle">${xLabel}</text><text class="label" transform="translate(11 ${c1((top + y0) / 2)}) rotate(-90)" text-anchor="middle">${yLabel}</text></g>`;
+  const xt = x
+    .ticks(6)
+    .map(
+      (t) =>
+        html`<line class="grid" x1="${c1(x(t))}" x2="${c1(x(t))}" y1="${c1(top)}" y2="${c1(y0)}" /><text
+            class="tick"
+            x="${c1(x(t))}"
+            y="${c1(y0 + 11)}"
+            text-anchor="middle"
+            >${formatSignificant(t, 4)}</text
+          >`,
+    );
+  const yt = y
+    .ticks(5)
+    .map(
+      (t) =>
+        html`<line class="grid" x1="${c1(x0)}" x2="${c1(x1)}" y1="${c1(y(t))}" y2="${c1(y(t))}" /><text
+            class="tick"
+            x="${c1(x0 - 4)}"
+            y="${c1(y(t) + 3)}"
+            text-anchor="end"
+            >${formatSignificant(t, 4)}</text
+          >`,
+    );
+  return html`<g class="axes"
+    >${joinHtml(xt)}${joinHtml(yt)}<rect
+      class="frame"
+      x="${c1(x0)}"
+      y="${c1(top)}"
+      width="${c1(x1 - x0)}"
+      height="${c1(y0 - top)}"
+    /><text class="label" x="${c1((x0 + x1) / 2)}" y="${c1(height - 4)}" text-anchor="middle">${xLabel}</text
+    ><text class="label" transform="translate(11 ${c1((top + y0) / 2)}) rotate(-90)" text-anchor="middle"
+      >${yLabel}</text
+    ></g
+  >`;
 }
 
 /**
@@ -98,18 +150,29 @@ export function axesSvg(frame: PlotFrame, xLabel: string, yLabel: string): SafeH
  * @param frame the frame
  * @param items label, colour and mark ("line", "dash", "dot", "band")
  */
-export function legendSvg(frame: PlotFrame, items: ReadonlyArray<{ label: string; color: string; mark: "line" | "dash" | "dot" | "band" | "open" }>): SafeHtml {
+export function legendSvg(
+  frame: PlotFrame,
+  items: ReadonlyArray<{ label: string; color: string; mark: "line" | "dash" | "dot" | "band" | "open" }>,
+): SafeHtml {
   let xPos = frame.left;
   const parts = items.map((it) => {
     const yy = frame.top - 9;
     const mark =
       it.mark === "dot"
-        ? html`<circle cx="${c1(xPos + 5)}" cy="${c1(yy)}" r="2.6" fill="${it.color}"/>`
+        ? html`<circle cx="${c1(xPos + 5)}" cy="${c1(yy)}" r="2.6" fill="${it.color}" />`
         : it.mark === "open"
-          ? html`<circle cx="${c1(xPos + 5)}" cy="${c1(yy)}" r="2.6" fill="#fff" stroke="${it.color}"/>`
+          ? html`<circle cx="${c1(xPos + 5)}" cy="${c1(yy)}" r="2.6" fill="#fff" stroke="${it.color}" />`
           : it.mark === "band"
-            ? html`<rect x="${c1(xPos)}" y="${c1(yy - 3)}" width="10" height="6" fill="${it.color}"/>`
-            : html`<line x1="${c1(xPos)}" x2="${c1(xPos + 10)}" y1="${c1(yy)}" y2="${c1(yy)}" stroke="${it.color}" stroke-width="1.6"${it.mark === "dash" ? html` stroke-dasharray="3 2"` : ""}/>`;
+            ? html`<rect x="${c1(xPos)}" y="${c1(yy - 3)}" width="10" height="6" fill="${it.color}" />`
+            : html`<line
+                x1="${c1(xPos)}"
+                x2="${c1(xPos + 10)}"
+                y1="${c1(yy)}"
+                y2="${c1(yy)}"
+                stroke="${it.color}"
+                stroke-width="1.6"
+                ${it.mark === "dash" ? html` stroke-dasharray="3 2"` : ""}
+              />`;
     const g = html`${mark}<text class="legend" x="${c1(xPos + 13)}" y="${c1(yy + 3)}">${it.label}</text>`;
     xPos += 18 + it.label.length * 4.3;
     return g;

@@ -36,7 +36,19 @@ export function fractionInWords(f: number): string {
   return hit ? `about ${hit[1]}` : `about ${Math.round(f * 100)} %`;
 }
 
-const MULTIPLES = ["", "", "twice", "three times", "four times", "five times", "six times", "seven times", "eight times", "nine times", "ten times"];
+const MULTIPLES = [
+  "",
+  "",
+  "twice",
+  "three times",
+  "four times",
+  "five times",
+  "six times",
+  "seven times",
+  "eight times",
+  "nine times",
+  "ten times",
+];
 
 /**
  * A ratio m > 1 in words: "about twice", "about three times" (within ±0.15 of a whole number up

@@ -4,7 +4,13 @@ import { basename } from "node:path";
 import { parseArgs } from "node:util";
 import type { Command, CommandIo } from "../command.ts";
 import type { CenterlineGeoJson, ChannelNetwork, ProvenanceFile, SurveyAnalysis } from "../../analysis/index.ts";
-import { analyzeSurvey, buildChannelNetwork, compareSurveys, comparisonToCsv, SCREENING_CAUTION } from "../../analysis/index.ts";
+import {
+  analyzeSurvey,
+  buildChannelNetwork,
+  compareSurveys,
+  comparisonToCsv,
+  SCREENING_CAUTION,
+} from "../../analysis/index.ts";
 import { describeImport, loadSurveys, parseCount, parseDischarge } from "../loadInputs.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 
@@ -20,7 +26,9 @@ export function readGeoJsonFile(path: string, role: ProvenanceFile["role"]): Map
   try {
     bytes = readFileSync(path);
   } catch (error) {
-    throw new InputError(`${path}: cannot read ${role} (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`);
+    throw new InputError(
+      `${path}: cannot read ${role} (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`,
+    );
   }
   let geojson: MapFile["geojson"];
   try {
@@ -28,7 +36,10 @@ export function readGeoJsonFile(path: string, role: ProvenanceFile["role"]): Map
   } catch (error) {
     throw new InputError(`${path}: row 1, column -: not valid JSON (${(error as Error).message})`);
   }
-  return { geojson, file: { name: basename(path), role, bytes: bytes.length, sha256: createHash("sha256").update(bytes).digest("hex") } };
+  return {
+    geojson,
+    file: { name: basename(path), role, bytes: bytes.length, sha256: createHash("sha256").update(bytes).digest("hex") },
+  };
 }
 
 /**
@@ -36,17 +47,27 @@ export function readGeoJsonFile(path: string, role: ProvenanceFile["role"]): Map
  * Point with properties.role "mouth" gives the mouth unless --mouth says otherwise.
  */
 export function channelFromFile(map: MapFile, path: string, mouth?: string): ChannelNetwork {
-  const features = Array.isArray(map.geojson.features) ? (map.geojson.features as Array<{ geometry?: { type?: string; coordinates?: unknown }; properties?: { role?: unknown } | null }>) : undefined;
+  const features = Array.isArray(map.geojson.features)
+    ? (map.geojson.features as Array<{
+        geometry?: { type?: string; coordinates?: unknown };
+        properties?: { role?: unknown } | null;
+      }>)
+    : undefined;
   let mouthOption: "start" | "end" | [number, number] | undefined;
   if (mouth === "start" || mouth === "end") mouthOption = mouth;
   else if (mouth !== undefined) {
     const parts = mouth.split(",").map(Number);
-    if (parts.length !== 2 || parts.some((x) => !Number.isFinite(x))) throw new UsageError(`--mouth: expected "start", "end" or "lon,lat"; got "${mouth}"`);
+    if (parts.length !== 2 || parts.some((x) => !Number.isFinite(x)))
+      throw new UsageError(`--mouth: expected "start", "end" or "lon,lat"; got "${mouth}"`);
     mouthOption = [parts[0]!, parts[1]!];
   }
-  const mouthPoint = features?.find((f) => f.geometry?.type === "Point" && f.properties?.role === "mouth")?.geometry?.coordinates;
-  if (!mouthOption && Array.isArray(mouthPoint) && mouthPoint.length >= 2) mouthOption = [Number(mouthPoint[0]), Number(mouthPoint[1])];
-  const lines = features ? { ...map.geojson, features: features.filter((f) => f.geometry?.type !== "Point") } : map.geojson;
+  const mouthPoint = features?.find((f) => f.geometry?.type === "Point" && f.properties?.role === "mouth")?.geometry
+    ?.coordinates;
+  if (!mouthOption && Array.isArray(mouthPoint) && mouthPoint.length >= 2)
+    mouthOption = [Number(mouthPoint[0]), Number(mouthPoint[1])];
+  const lines = features
+    ? { ...map.geojson, features: features.filter((f) => f.geometry?.type !== "Point") }
+    : map.geojson;
   try {
     return buildChannelNetwork(lines as unknown as CenterlineGeoJson, mouthOption ? { mouth: mouthOption } : {});
   } catch (error) {
@@ -88,7 +109,12 @@ export function analyzeFiles(
   });
   const files = paths.map((p): ProvenanceFile => {
     const bytes = readFileSync(p);
-    return { name: basename(p), role: "survey", bytes: bytes.length, sha256: createHash("sha256").update(bytes).digest("hex") };
+    return {
+      name: basename(p),
+      role: "survey",
+      bytes: bytes.length,
+      sha256: createHash("sha256").update(bytes).digest("hex"),
+    };
   });
   return { analyses, files, draws, seed };
 }
@@ -118,16 +144,27 @@ export const compareCommand: Command = {
   summary: "compare surveys: salt intrusion vs discharge, shifts of reaction zones, maxima and C*0",
   help,
   async run(args, io) {
-    const { values, positionals } = parseArgs({ args, allowPositionals: true, options: { ...SURVEY_OPTIONS, format: { type: "string", default: "json" }, out: { type: "string" } } });
-    if (values.format !== "json" && values.format !== "csv") throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
+    const { values, positionals } = parseArgs({
+      args,
+      allowPositionals: true,
+      options: { ...SURVEY_OPTIONS, format: { type: "string", default: "json" }, out: { type: "string" } },
+    });
+    if (values.format !== "json" && values.format !== "csv")
+      throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
     if (positionals.length === 0) throw new UsageError("give the survey files to compare");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     const network = channelFromFile(readGeoJsonFile(values.centerline, "centerline"), values.centerline, values.mouth);
     const { analyses } = analyzeFiles(positionals, values, network, io);
-    if (analyses.length < 2) throw new InputError(`${positionals.join(", ")}: ${analyses.length} survey found; compare needs at least 2 (one per file, or a survey column)`);
+    if (analyses.length < 2)
+      throw new InputError(
+        `${positionals.join(", ")}: ${analyses.length} survey found; compare needs at least 2 (one per file, or a survey column)`,
+      );
     io.err(`comparing ${analyses.length} surveys against ${analyses[0]!.survey.name}`);
     const comparison = compareSurveys(analyses);
-    const text = values.format === "csv" ? comparisonToCsv(comparison) : `${JSON.stringify({ caution: SCREENING_CAUTION, comparison }, null, 2)}\n`;
+    const text =
+      values.format === "csv"
+        ? comparisonToCsv(comparison)
+        : `${JSON.stringify({ caution: SCREENING_CAUTION, comparison }, null, 2)}\n`;
     if (values.out) writeFileSync(values.out, text);
     else io.out(text);
     return 0;

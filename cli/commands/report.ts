@@ -33,10 +33,15 @@ ${SCREENING_CAUTION}`;
 
 /** The invented-data or other disclaimer carried by a GeoJSON file (top-level "disclaimer", else an "INVENTED" note). */
 export function dataNoticeOf(maps: readonly MapFile[]): string | undefined {
-  for (const m of maps) if (typeof m.geojson.disclaimer === "string" && m.geojson.disclaimer.trim()) return m.geojson.disclaimer.trim();
+  for (const m of maps)
+    if (typeof m.geojson.disclaimer === "string" && m.geojson.disclaimer.trim()) return m.geojson.disclaimer.trim();
   for (const m of maps) {
-    const fs = Array.isArray(m.geojson.features) ? (m.geojson.features as Array<{ properties?: { note?: unknown } | null }>) : [];
-    const note = fs.map((f) => f.properties?.note).find((n): n is string => typeof n === "string" && /invented/i.test(n));
+    const fs = Array.isArray(m.geojson.features)
+      ? (m.geojson.features as Array<{ properties?: { note?: unknown } | null }>)
+      : [];
+    const note = fs
+      .map((f) => f.properties?.note)
+      .find((n): n is string => typeof n === "string" && /invented/i.test(n));
     if (note) return note;
   }
   return undefined;
@@ -50,7 +55,13 @@ export const reportCommand: Command = {
     const { values, positionals } = parseArgs({
       args,
       allowPositionals: true,
-      options: { ...SURVEY_OPTIONS, basemap: { type: "string" }, out: { type: "string" }, title: { type: "string" }, date: { type: "string" } },
+      options: {
+        ...SURVEY_OPTIONS,
+        basemap: { type: "string" },
+        out: { type: "string" },
+        title: { type: "string" },
+        date: { type: "string" },
+      },
     });
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");

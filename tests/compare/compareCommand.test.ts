@@ -10,14 +10,30 @@ async function run(argv: string[]): Promise<{ code: number; out: string; err: st
 }
 
 const files = [`${DEMO_DIR}surveys/wet-2025-03.csv`, `${DEMO_DIR}surveys/dry-2025-09.csv`];
-const common = ["--centerline", `${DEMO_DIR}centerline.geojson`, "--discharge", "wet-2025-03=450,dry-2025-09=60", "--draws", "40", "--seed", "3"];
+const common = [
+  "--centerline",
+  `${DEMO_DIR}centerline.geojson`,
+  "--discharge",
+  "wet-2025-03=450,dry-2025-09=60",
+  "--draws",
+  "40",
+  "--seed",
+  "3",
+];
 
 describe("brackline compare", () => {
   it("brackline compare writes JSON with the comparison (intrusion wet < dry, exponent, shifts), progress on stderr, identical for the same seed", async () => {
     const a = await run(["compare", ...files, ...common]);
     expect(a.code, a.err).toBe(0);
     expect(a.err).toMatch(/analysing survey 1\/2: wet-2025-03/);
-    const json = JSON.parse(a.out) as { caution: string; comparison: { intrusion: Array<{ saltIntrusionKm: number }>; scaling: Array<{ exponent: number }>; shifts: unknown[] } };
+    const json = JSON.parse(a.out) as {
+      caution: string;
+      comparison: {
+        intrusion: Array<{ saltIntrusionKm: number }>;
+        scaling: Array<{ exponent: number }>;
+        shifts: unknown[];
+      };
+    };
     expect(json.caution).toMatch(/Screening analysis/);
     expect(json.comparison.intrusion[0]!.saltIntrusionKm).toBeLessThan(json.comparison.intrusion[1]!.saltIntrusionKm);
     expect(json.comparison.scaling[0]!.exponent).toBeLessThan(0);

@@ -38,7 +38,9 @@ describe("compareSurveys() on the invented demo surveys (data-demo truth.json, g
       const d = shift(name).effectiveEndmember!;
       const want = D.constituents[name]!.effectiveRiverEndmember - W.constituents[name]!.effectiveRiverEndmember;
       expect(Math.sign(d.value), `${name} sign of C*₀ change`).toBe(Math.sign(want));
-      expect(d.lower <= want && want <= d.upper, `${name}: true change ${want} inside [${d.lower}, ${d.upper}]`).toBe(true);
+      expect(d.lower <= want && want <= d.upper, `${name}: true change ${want} inside [${d.lower}, ${d.upper}]`).toBe(
+        true,
+      );
     }
   });
 
@@ -73,8 +75,12 @@ describe("compareSurveys() on the invented demo surveys (data-demo truth.json, g
   it("comparisonToCsv() writes one header and a row per intrusion quantity and constituent quantity", () => {
     const csv = comparisonToCsv(c);
     const lines = csv.trimEnd().split("\n");
-    expect(lines[0]).toBe("section,reference_survey,survey,constituent,quantity,unit,reference_value,survey_value,difference,difference_lower95,difference_upper95,exceeds_uncertainty,note");
+    expect(lines[0]).toBe(
+      "section,reference_survey,survey,constituent,quantity,unit,reference_value,survey_value,difference,difference_lower95,difference_upper95,exceeds_uncertainty,note",
+    );
     expect(lines.filter((l) => l.startsWith("intrusion,")).length).toBe(2 * (2 + 5));
-    expect(lines.some((l) => l.startsWith("constituent,wet-2025-03,dry-2025-09,Fe,effective_endmember,nmol/L,"))).toBe(true);
+    expect(lines.some((l) => l.startsWith("constituent,wet-2025-03,dry-2025-09,Fe,effective_endmember,nmol/L,"))).toBe(
+      true,
+    );
   });
 });

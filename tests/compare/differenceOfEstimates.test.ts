@@ -27,14 +27,27 @@ describe("differenceOfEstimates", () => {
   });
 
   it("differenceOfEstimates() widens an interval that misses its estimate and says so (common practice)", () => {
-    const d = differenceOfEstimates({ value: 5, lower: 1, upper: 2, unit: "salinity" }, { value: 5, lower: 4, upper: 6, unit: "salinity" });
+    const d = differenceOfEstimates(
+      { value: 5, lower: 1, upper: 2, unit: "salinity" },
+      { value: 5, lower: 4, upper: 6, unit: "salinity" },
+    );
     expectWithin(d.upper, Math.hypot(1, 4), 1e-12, "upper uses the widened reference lower half-width 4");
     expect(d.note).toMatch(/widened/);
   });
 
   it("differenceOfEstimates() rejects mixed units and non-finite values with RangeError naming the function", () => {
-    expect(() => differenceOfEstimates({ value: 1, lower: 0, upper: 2, unit: "nmol/L" }, { value: 1, lower: 0, upper: 2, unit: "µmol/L" })).toThrow(/differenceOfEstimates: units differ/);
-    expect(() => differenceOfEstimates({ value: Number.NaN, lower: 0, upper: 2, unit: "x" }, { value: 1, lower: 0, upper: 2, unit: "x" })).toThrow(RangeError);
+    expect(() =>
+      differenceOfEstimates(
+        { value: 1, lower: 0, upper: 2, unit: "nmol/L" },
+        { value: 1, lower: 0, upper: 2, unit: "µmol/L" },
+      ),
+    ).toThrow(/differenceOfEstimates: units differ/);
+    expect(() =>
+      differenceOfEstimates(
+        { value: Number.NaN, lower: 0, upper: 2, unit: "x" },
+        { value: 1, lower: 0, upper: 2, unit: "x" },
+      ),
+    ).toThrow(RangeError);
   });
 
   it("differenceWithoutInterval() never claims to exceed an unknown uncertainty", () => {

@@ -8,7 +8,11 @@ const x2Km = (q: number, aM2: number, kM2s: number): number => ((kM2s / (q / aM2
 describe("dischargeScaling", () => {
   it("dischargeScaling() recovers n = −1 for constant K (mixing-methods.md §5.1 Eq. 6: x₂ = 28.62 km at Q = 100 m³/s, A = 2000 m², K = 500 m²/s) within 1e-12", () => {
     expectWithin(x2Km(100, 2000, 500), 28.62, 0.005, "§5.1 check value x₂");
-    const s = dischargeScaling([100, 200, 400].map((q) => ({ dischargeM3s: q, lengthKm: x2Km(q, 2000, 500) })), "salt intrusion (S = 2)", 2)!;
+    const s = dischargeScaling(
+      [100, 200, 400].map((q) => ({ dischargeM3s: q, lengthKm: x2Km(q, 2000, 500) })),
+      "salt intrusion (S = 2)",
+      2,
+    )!;
     expectWithin(s.exponent, -1, 1e-12, "exponent");
     expectWithin(s.lower, -1, 1e-9, "interval collapses on an exact power law (lower)");
     expectWithin(s.upper, -1, 1e-9, "interval collapses on an exact power law (upper)");
@@ -16,14 +20,28 @@ describe("dischargeScaling", () => {
   });
 
   it("dischargeScaling() of two surveys with X2 ratio 0.9057 at doubled Q gives n = −1/7 (mixing-methods.md §5.3 check, Monismith et al. 2002) within 1e-4", () => {
-    const s = dischargeScaling([{ dischargeM3s: 100, lengthKm: 60 }, { dischargeM3s: 200, lengthKm: 60 * 0.9057 }], "X2", 2)!;
+    const s = dischargeScaling(
+      [
+        { dischargeM3s: 100, lengthKm: 60 },
+        { dischargeM3s: 200, lengthKm: 60 * 0.9057 },
+      ],
+      "X2",
+      2,
+    )!;
     expectWithin(s.exponent, -1 / 7, 1e-4, "exponent");
     expect(s.lower).toBeUndefined();
     expect(s.note).toMatch(/Two surveys fix n exactly/);
   });
 
   it("dischargeScaling() of doubled Q with ratio 2^(−1/3) = 0.7937 gives n = −1/3 (mixing-methods.md §5.3 check) within 1e-4 and lists the three reference scalings", () => {
-    const s = dischargeScaling([{ dischargeM3s: 50, lengthKm: 30 }, { dischargeM3s: 100, lengthKm: 30 * 0.7937 }], "L", 2)!;
+    const s = dischargeScaling(
+      [
+        { dischargeM3s: 50, lengthKm: 30 },
+        { dischargeM3s: 100, lengthKm: 30 * 0.7937 },
+      ],
+      "L",
+      2,
+    )!;
     expectWithin(s.exponent, -1 / 3, 1e-4, "exponent");
     expect(REFERENCE_SCALINGS.map((r) => r.exponent)).toEqual([-1, -1 / 3, -1 / 7]);
     expect(s.references).toHaveLength(3);
@@ -31,7 +49,18 @@ describe("dischargeScaling", () => {
 
   it("dischargeScaling() returns undefined for one survey or one discharge, and throws RangeError for Q ≤ 0", () => {
     expect(dischargeScaling([{ dischargeM3s: 10, lengthKm: 5 }], "L", 2)).toBeUndefined();
-    expect(dischargeScaling([{ dischargeM3s: 10, lengthKm: 5 }, { dischargeM3s: 10, lengthKm: 6 }], "L", 2)).toBeUndefined();
-    expect(() => dischargeScaling([{ dischargeM3s: 0, lengthKm: 5 }], "L", 2)).toThrow(/dischargeScaling: dischargeM3s/);
+    expect(
+      dischargeScaling(
+        [
+          { dischargeM3s: 10, lengthKm: 5 },
+          { dischargeM3s: 10, lengthKm: 6 },
+        ],
+        "L",
+        2,
+      ),
+    ).toBeUndefined();
+    expect(() => dischargeScaling([{ dischargeM3s: 0, lengthKm: 5 }], "L", 2)).toThrow(
+      /dischargeScaling: dischargeM3s/,
+    );
   });
 });

@@ -17,7 +17,13 @@ const notice = "INVENTED DEMO DATA: test notice.";
 beforeAll(() => {
   analyses = demoAnalyses(200);
   const { network } = demoCenterline();
-  doc = buildBriefing({ analyses, network, basemap: demoBasemap(), dataNotice: notice, files: [{ name: "wet-2025-03.csv", role: "survey", bytes: 1 }] });
+  doc = buildBriefing({
+    analyses,
+    network,
+    basemap: demoBasemap(),
+    dataNotice: notice,
+    files: [{ name: "wet-2025-03.csv", role: "survey", bytes: 1 }],
+  });
   text = renderBriefingHtml(doc);
 });
 
@@ -38,7 +44,18 @@ describe("renderBriefingHtml() on the invented demo surveys", () => {
 
   it("renderBriefingHtml() text is readable without script (jsdom, scripts disabled): summary, findings, table, methods, cautions, invented-data notice", () => {
     const t = bodyText(text);
-    for (const s of ["In brief", "Findings", "Results by constituent", "Comparison of the surveys", "Data provenance", "Methods", "References", "Cautions", notice]) expect(t).toContain(s);
+    for (const s of [
+      "In brief",
+      "Findings",
+      "Results by constituent",
+      "Comparison of the surveys",
+      "Data provenance",
+      "Methods",
+      "References",
+      "Cautions",
+      notice,
+    ])
+      expect(t).toContain(s);
     expect(t).toContain("Screening analysis, not a compliance assessment");
     expect(t).toContain("defer to local regulations and licensed practice");
     expect(t).toContain("Boyle, E., Collier, R., Dengler, A.T., Edmond, J.M., Ng, A.C., Stallard, R.F. (1974)");
@@ -49,17 +66,26 @@ describe("renderBriefingHtml() on the invented demo surveys", () => {
   it("Fe finding states the removal in words matching truth.json (−92.5 % → 'nine tenths') with the estimated % change and interval and the zone in km and salinity", () => {
     const fe = analyses[0]!.constituents.find((c) => c.name === "Fe")!;
     const f = doc.surveys[0]!.findings.find((x) => x.constituent === "Fe")!;
-    expect(fractionInWords(-truth.surveys["wet-2025-03"]!.constituents.Fe!.percentChange / 100)).toBe("about nine tenths");
-    expect(f.text).toMatch(/^About nine tenths of the dissolved iron \(Fe\) brought by the river is removed between km \d+ and km \d+, where salinity rises from [\d.]+ to [\d.]+/);
-    expect(f.text).toContain(`net change ${formatSignificant(fe.percentChange!.value, 2, true)} %, 95 % interval ${formatSignificant(fe.percentChange!.lower, 2, true)} to ${formatSignificant(fe.percentChange!.upper, 2, true)} %`);
+    expect(fractionInWords(-truth.surveys["wet-2025-03"]!.constituents.Fe!.percentChange / 100)).toBe(
+      "about nine tenths",
+    );
+    expect(f.text).toMatch(
+      /^About nine tenths of the dissolved iron \(Fe\) brought by the river is removed between km \d+ and km \d+, where salinity rises from [\d.]+ to [\d.]+/,
+    );
+    expect(f.text).toContain(
+      `net change ${formatSignificant(fe.percentChange!.value, 2, true)} %, 95 % interval ${formatSignificant(fe.percentChange!.lower, 2, true)} to ${formatSignificant(fe.percentChange!.upper, 2, true)} %`,
+    );
     const z = fe.reactionZone!;
-    expect(f.text).toContain(`between km ${Math.round(Math.max(...z.km.flat()))} and km ${Math.round(Math.min(...z.km.flat()))}`);
+    expect(f.text).toContain(
+      `between km ${Math.round(Math.max(...z.km.flat()))} and km ${Math.round(Math.min(...z.km.flat()))}`,
+    );
   });
 
   it("a change whose interval includes zero is reported as indistinguishable from conservative mixing (NO3, truth.json −5 %)", () => {
     const no3 = analyses[0]!.constituents.find((c) => c.name === "NO3")!;
     const f = doc.surveys[0]!.findings.find((x) => x.constituent === "NO3")!;
-    if (no3.percentChange && no3.percentChange.lower <= 0 && no3.percentChange.upper >= 0) expect(f.text).toMatch(/cannot be distinguished from conservative mixing/);
+    if (no3.percentChange && no3.percentChange.lower <= 0 && no3.percentChange.upper >= 0)
+      expect(f.text).toMatch(/cannot be distinguished from conservative mixing/);
     else expect(f.text).not.toMatch(/cannot be distinguished/);
   });
 
@@ -70,7 +96,15 @@ describe("renderBriefingHtml() on the invented demo surveys", () => {
   });
 
   it("renderBriefingHtml(buildBriefing()) is byte-identical for identical input and contains no clock time", () => {
-    const again = renderBriefingHtml(buildBriefing({ analyses, network: demoCenterline().network, basemap: demoBasemap(), dataNotice: notice, files: [{ name: "wet-2025-03.csv", role: "survey", bytes: 1 }] }));
+    const again = renderBriefingHtml(
+      buildBriefing({
+        analyses,
+        network: demoCenterline().network,
+        basemap: demoBasemap(),
+        dataNotice: notice,
+        files: [{ name: "wet-2025-03.csv", role: "survey", bytes: 1 }],
+      }),
+    );
     expect(again === text).toBe(true);
     expect(text).not.toMatch(/\b20\d\d-\d\d-\d\dT\d\d:\d\d/);
   });
@@ -82,7 +116,9 @@ describe("renderBriefingHtml() on the invented demo surveys", () => {
     a.stations[0]!.id = evil;
     for (const c of a.constituents) if (c.deviations[0]) c.deviations[0].stationId = evil;
     a.warnings.push({ code: "x", message: `station ${evil} "quoted" & more` });
-    const out = renderBriefingHtml(buildBriefing({ analyses: [a], network: demoCenterline().network, files: [{ name: evil, role: "survey" }] }));
+    const out = renderBriefingHtml(
+      buildBriefing({ analyses: [a], network: demoCenterline().network, files: [{ name: evil, role: "survey" }] }),
+    );
     expect(out).not.toContain(evil);
     expect(out).toContain("&lt;script&gt;alert(1)&lt;/script&gt;");
     const dom = new JSDOM(out);

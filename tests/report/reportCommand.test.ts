@@ -34,7 +34,10 @@ const args = (out: string): string[] => [
 
 const CHROMIUM = "/usr/bin/chromium";
 const haveChromium = existsSync(CHROMIUM);
-if (!haveChromium) console.log(`note: ${CHROMIUM} not found; the PDF print check is skipped${process.env.CI === "true" ? " (but CI=true: it will fail)" : ""}`);
+if (!haveChromium)
+  console.log(
+    `note: ${CHROMIUM} not found; the PDF print check is skipped${process.env.CI === "true" ? " (but CI=true: it will fail)" : ""}`,
+  );
 
 describe("brackline report", () => {
   it("brackline report writes a byte-identical, well-formed, self-contained briefing for identical input and seed, with the invented-data statement from the GeoJSON", async () => {
@@ -55,18 +58,32 @@ describe("brackline report", () => {
     expect(readFileSync(dated, "utf8")).toContain("2026-01-15");
   });
 
-  it.skipIf(!haveChromium && process.env.CI !== "true")("the briefing prints to a multi-page A4 PDF with headless Chromium", async () => {
-    const html = join(dir, "print.html");
-    expect((await run(args(html))).code).toBe(0);
-    const pdf = join(dir, "print.pdf");
-    execFileSync(CHROMIUM, ["--headless", "--no-sandbox", "--disable-gpu", "--no-pdf-header-footer", `--print-to-pdf=${pdf}`, `file://${html}`], { stdio: "ignore", timeout: 120_000 });
-    const bytes = readFileSync(pdf);
-    expect(bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-");
-    const pages = (bytes.toString("latin1").match(/\/Type\s*\/Page[^s]/g) ?? []).length;
-    expect(pages).toBeGreaterThan(4);
-    const mediaBox = /\/MediaBox\s*\[\s*0 0 ([\d.]+) ([\d.]+)\s*\]/.exec(bytes.toString("latin1"));
-    expect(mediaBox, "a MediaBox").not.toBeNull();
-    expect(Math.round(Number(mediaBox![1]))).toBe(595); // A4 = 595 × 842 pt (ISO 216)
-    expect(Math.round(Number(mediaBox![2]))).toBe(842);
-  });
+  it.skipIf(!haveChromium && process.env.CI !== "true")(
+    "the briefing prints to a multi-page A4 PDF with headless Chromium",
+    async () => {
+      const html = join(dir, "print.html");
+      expect((await run(args(html))).code).toBe(0);
+      const pdf = join(dir, "print.pdf");
+      execFileSync(
+        CHROMIUM,
+        [
+          "--headless",
+          "--no-sandbox",
+          "--disable-gpu",
+          "--no-pdf-header-footer",
+          `--print-to-pdf=${pdf}`,
+          `file://${html}`,
+        ],
+        { stdio: "ignore", timeout: 120_000 },
+      );
+      const bytes = readFileSync(pdf);
+      expect(bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-");
+      const pages = (bytes.toString("latin1").match(/\/Type\s*\/Page[^s]/g) ?? []).length;
+      expect(pages).toBeGreaterThan(4);
+      const mediaBox = /\/MediaBox\s*\[\s*0 0 ([\d.]+) ([\d.]+)\s*\]/.exec(bytes.toString("latin1"));
+      expect(mediaBox, "a MediaBox").not.toBeNull();
+      expect(Math.round(Number(mediaBox![1]))).toBe(595); // A4 = 595 × 842 pt (ISO 216)
+      expect(Math.round(Number(mediaBox![2]))).toBe(842);
+    },
+  );
 });

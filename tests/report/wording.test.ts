@@ -32,7 +32,9 @@ describe("html escaping (WHATWG HTML Living Standard §13.1)", () => {
   it("escapeHtml() escapes & < > \" ' and html`` escapes every interpolated text", () => {
     expect(escapeHtml(`<a href="x">'&'</a>`)).toBe("&lt;a href=&quot;x&quot;&gt;&#39;&amp;&#39;&lt;/a&gt;");
     const id = "<script>alert(1)</script>";
-    expect(html`<td title="${id}">${id}</td>`.markup).toBe('<td title="&lt;script&gt;alert(1)&lt;/script&gt;">&lt;script&gt;alert(1)&lt;/script&gt;</td>');
+    expect(html`<td title="${id}">${id}</td>`.markup).toBe(
+      '<td title="&lt;script&gt;alert(1)&lt;/script&gt;">&lt;script&gt;alert(1)&lt;/script&gt;</td>',
+    );
     expect(html`<p>${[id, html`<b>x</b>`]}</p>`.markup).toBe("<p>&lt;script&gt;alert(1)&lt;/script&gt;<b>x</b></p>");
   });
 });

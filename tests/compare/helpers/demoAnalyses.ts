@@ -22,7 +22,17 @@ export interface DemoTruth {
       date: string;
       stationCount: number;
       saltIntrusionKm: { S2: number; S1: number; S10: number };
-      constituents: Record<string, { effectiveRiverEndmember: number; riverEndmember: number; percentChange: number; behaviour: string; reactionZoneSalinity: [number, number] | null; maximumSalinity: number | null }>;
+      constituents: Record<
+        string,
+        {
+          effectiveRiverEndmember: number;
+          riverEndmember: number;
+          percentChange: number;
+          behaviour: string;
+          reactionZoneSalinity: [number, number] | null;
+          maximumSalinity: number | null;
+        }
+      >;
     }
   >;
 }
@@ -30,8 +40,14 @@ export interface DemoTruth {
 export const truth = JSON.parse(readFileSync(DEMO_DIR + "truth.json", "utf8")) as DemoTruth;
 
 /** Centerline GeoJSON (lines only: the mouth and head points are markers, not channel lines). */
-export function demoCenterline(): { geojson: { type: string; features: Array<{ geometry: { type: string } }> }; network: ChannelNetwork } {
-  const geojson = JSON.parse(readFileSync(DEMO_DIR + "centerline.geojson", "utf8")) as { type: string; features: Array<{ geometry: { type: string } }> };
+export function demoCenterline(): {
+  geojson: { type: string; features: Array<{ geometry: { type: string } }> };
+  network: ChannelNetwork;
+} {
+  const geojson = JSON.parse(readFileSync(DEMO_DIR + "centerline.geojson", "utf8")) as {
+    type: string;
+    features: Array<{ geometry: { type: string } }>;
+  };
   const lines = { ...geojson, features: geojson.features.filter((f) => f.geometry.type !== "Point") };
   return { geojson, network: buildChannelNetwork(lines as unknown as CenterlineGeoJson, { mouth: "start" }) };
 }
@@ -45,7 +61,15 @@ export function demoAnalyses(draws = 200, constituents?: string[]): SurveyAnalys
   const { network } = demoCenterline();
   return (["wet-2025-03", "dry-2025-09"] as const).map((name) => {
     const text = readFileSync(`${DEMO_DIR}surveys/${name}.csv`, "utf8");
-    const read = readSurveyText(text, { fileName: `${name}.csv`, riverDischargeM3s: truth.surveys[name]!.dischargeM3s });
-    return analyzeSurvey(read.surveys[0]!, { network, bootstrapDraws: draws, seed: 1, ...(constituents ? { constituents } : {}) });
+    const read = readSurveyText(text, {
+      fileName: `${name}.csv`,
+      riverDischargeM3s: truth.surveys[name]!.dischargeM3s,
+    });
+    return analyzeSurvey(read.surveys[0]!, {
+      network,
+      bootstrapDraws: draws,
+      seed: 1,
+      ...(constituents ? { constituents } : {}),
+    });
   });
 }
