@@ -52,6 +52,7 @@ export {
   localSegmentLengthM,
   localBearingDeg,
 } from "./geometry/ellipsoid.ts";
+export { centerlineMouthHint } from "./geometry/mouthHint.ts";
 // --- end geometry ---
 
 // --- mixing ---

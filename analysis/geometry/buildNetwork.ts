@@ -1,6 +1,7 @@
 /**
  * Build a {@link ChannelNetwork} from a GeoJSON centerline.
  */
+import { centerlineMouthHint } from "./mouthHint.ts";
 import type { ChannelBranch, ChannelNetwork, GeometryWarning, MouthOption } from "./types.ts";
 import { readCenterlines, type CenterlineGeoJson, type RawLine } from "./geojsonInput.ts";
 import { densifyPolyline, polylineLengthM } from "./polyline.ts";
@@ -96,7 +97,8 @@ function toBranch(p: PlacedBranch, isMain: boolean): ChannelBranch {
  * on the WGS84 ellipsoid (local tangent plane per ≤ maxSegmentM piece).
  *
  * @param geojson LineString, MultiLineString, Feature or FeatureCollection of lines (RFC 7946), [lon, lat] in degrees
- * @param options mouth, main stem, confluence tolerance [m], piece length [m]
+ * @param options mouth (else as the file states it: a Point with properties.role "mouth", or the main
+ *   line's properties.mouth "start"/"end"), main stem, confluence tolerance [m], piece length [m]
  * @returns the network (plain data; `warnings` lists notices such as an assumed mouth)
  * @throws TypeError for malformed GeoJSON; RangeError for bad coordinates, |lat| > 85°, a longitude span > 180°,
  *   a branch not joining the network, or bad options
@@ -112,7 +114,8 @@ export function buildChannelNetwork(geojson: CenterlineGeoJson, options: Channel
   const lengths = lines.map((l) => polylineLengthM(l.coords, maxPieceM));
   const mi = chooseMain(lines, lengths, options.mainBranchId);
   const mainLine = lines[mi]!;
-  const [atStart, mouthSource] = mouthAtStart(mainLine, options.mouth, toleranceM, warnings);
+  const stated = options.mouth ?? centerlineMouthHint(geojson);
+  const [atStart, mouthSource] = mouthAtStart(mainLine, stated, toleranceM, warnings);
   const coords = atStart ? mainLine.coords : [...mainLine.coords].reverse();
   const main: PlacedBranch = {
     id: mainLine.id,

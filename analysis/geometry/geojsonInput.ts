@@ -14,10 +14,15 @@ export interface MultiLineStringGeometry {
   type: "MultiLineString";
   coordinates: Position[][];
 }
+/** Point markers (mouth, head) may sit beside the lines; they are not channel lines. */
+export interface PointGeometry {
+  type: "Point" | "MultiPoint";
+  coordinates: Position | Position[];
+}
 export interface LineFeature {
   type: "Feature";
   id?: string | number;
-  geometry: LineStringGeometry | MultiLineStringGeometry | null;
+  geometry: LineStringGeometry | MultiLineStringGeometry | PointGeometry | null;
   properties: Record<string, unknown> | null;
 }
 export interface LineFeatureCollection {
@@ -80,7 +85,8 @@ function readGeometry(g: LineStringGeometry | MultiLineStringGeometry, what: str
 }
 
 /**
- * Read every polyline of a centerline GeoJSON, naming each one.
+ * Read every polyline of a centerline GeoJSON, naming each one. Point and MultiPoint features
+ * in a FeatureCollection (mouth or head markers) are skipped here and read by {@link centerlineMouthHint}.
  *
  * @throws TypeError for a non-line geometry or malformed input; RangeError for bad coordinates
  */
@@ -97,11 +103,13 @@ export function readCenterlines(input: CenterlineGeoJson): RawLine[] {
   const lines: RawLine[] = [];
   features.forEach((f, i) => {
     if (!f.geometry) throw new TypeError(`${FN}: feature ${i} has no geometry`);
+    const marker = f.geometry.type === "Point" || f.geometry.type === "MultiPoint";
+    if (marker && input.type === "FeatureCollection") return; // mouth/head markers, see mouthHint.ts
     const props = f.properties ?? {};
     const name = typeof props["name"] === "string" ? props["name"] : undefined;
     const idProp = props["id"] ?? name ?? f.id;
     const baseId = idProp === undefined || idProp === null ? `branch-${i}` : String(idProp);
-    const parts = readGeometry(f.geometry, `feature ${i} ('${baseId}')`);
+    const parts = readGeometry(f.geometry as LineStringGeometry | MultiLineStringGeometry, `feature ${i} ('${baseId}')`);
     parts.forEach((coords, k) => {
       if (coords.length < 2)
         throw new RangeError(
