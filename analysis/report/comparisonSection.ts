@@ -62,10 +62,19 @@ export function comparisonSection(
     ])
       if (t) findings.push(t);
     const e = s.effectiveEndmember;
-    if (e && e.method !== "no-interval" && e.exceedsUncertainty)
+    if (e && e.method !== "no-interval" && e.exceedsUncertainty) {
+      const r0 = analyses.find((a) => a.survey.name === s.referenceSurvey)?.constituents.find((k) => k.name === s.name)
+        ?.endmembers?.river.conc;
+      const r1 = analyses.find((a) => a.survey.name === s.survey)?.constituents.find((k) => k.name === s.name)
+        ?.endmembers?.river.conc;
+      const river =
+        r0 !== undefined && r1 !== undefined
+          ? ` The river end-member itself went from ${formatSignificant(r0, 3)} to ${formatSignificant(r1, 3)} ${e.unit}.`
+          : "";
       findings.push(
-        `The effective river end-member C*₀ of ${s.name} went from ${formatSignificant(e.reference, 3)} to ${formatSignificant(e.later, 3)} ${e.unit} (${s2(e.value, true)} ${e.unit}; approx. 95 % interval ${s2(e.lower, true)} to ${s2(e.upper, true)}): larger than the uncertainty.`,
+        `The effective river end-member C*₀ of ${s.name} went from ${formatSignificant(e.reference, 3)} to ${formatSignificant(e.later, 3)} ${e.unit} (${s2(e.value, true)} ${e.unit}; approx. 95 % interval ${s2(e.lower, true)} to ${s2(e.upper, true)}): larger than the uncertainty.${river}`,
       );
+    }
   }
   for (const later of c.surveys.filter((n) => n !== c.referenceSurvey)) {
     const same = c.shifts
