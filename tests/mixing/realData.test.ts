@@ -1,0 +1,64 @@
+import { describe, it } from "vitest";
+import { existsSync, readFileSync } from "node:fs";
+import Papa from "papaparse";
+import { expectWithin } from "../helpers/tolerance.ts";
+import { analyzeConstituent } from "../../analysis/mixing/analyzeConstituent.ts";
+
+// Real data: USGS San Francisco Bay water-quality cruises (Schraga & Cloern 2017, Sci. Data 4:170098),
+// shared/data/usgs-sfbay-2016-2022 (see its SOURCE.md). Read at test time, never copied.
+const file = new URL(
+  "../../../shared/data/usgs-sfbay-2016-2022/2018SanFranciscoBayWaterQualityData.csv",
+  import.meta.url,
+);
+const present = existsSync(file);
+if (!present) console.log("realData: ../shared/data/usgs-sfbay-2016-2022 absent, real-data mixing tests skipped");
+
+function northBaySilicate(date: string) {
+  const text = readFileSync(file, "utf8").replace(/^\uFEFF/, "");
+  const rows = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true }).data;
+  // River → Golden Gate branch: Sacramento River stations 649/657 and channel stations ≤ 18 (SOURCE.md notes).
+  return rows
+    .filter(
+      (r) =>
+        r.Date === date &&
+        (r.Silicate ?? "") !== "" &&
+        (Number(r.Station_Number) <= 18 || Number(r.Station_Number) >= 649),
+    )
+    .map((r) => ({
+      stationId: r.Station_Number!,
+      salinity: Number(r.Salinity),
+      conc: Number(r.Silicate),
+      censored: false,
+      accepted: true,
+    }));
+}
+
+function allFinite(v: unknown): boolean {
+  if (typeof v === "number") return Number.isFinite(v);
+  if (Array.isArray(v)) return v.every(allFinite);
+  if (v && typeof v === "object") return Object.values(v).every(allFinite);
+  return true;
+}
+
+describe.skipIf(!present)(
+  "real survey: USGS San Francisco Bay silicate transects, 2018 (Schraga & Cloern 2017)",
+  () => {
+    it.each(["5/7/18", "6/11/18", "9/18/18"])(
+      "analyzeConstituent() on the %s North Bay transect classifies Si with finite numbers and a river end-member from the documented group rule",
+      (date) => {
+        const samples = northBaySilicate(date);
+        expectWithin(samples.length >= 6 ? 1 : 0, 1, 0, `${samples.length} stations with silicate`);
+        const r = analyzeConstituent(samples, { name: "Si", unit: "µmol/L", seed: 2018, bootstrapDraws: 300 });
+        expectWithin(r.class !== "insufficient-data" ? 1 : 0, 1, 0, `class ${r.class}`);
+        expectWithin(allFinite(r) ? 1 : 0, 1, 0, "only finite numbers");
+        // Group rule (endmembers.ts): within ΔS = 0.5 of the lowest salinity, at most max(1, ⌊n/4⌋) stations.
+        const sorted = [...samples].sort((a, b) => a.salinity - b.salinity);
+        const low = sorted
+          .filter((s) => s.salinity <= sorted[0]!.salinity + 0.5)
+          .slice(0, Math.max(1, Math.floor(samples.length / 4)));
+        const mean = low.reduce((a, s) => a + s.conc, 0) / low.length;
+        expectWithin(r.endmembers!.river.conc, mean, 1e-9, "river end-member = mean of the low-salinity group");
+      },
+    );
+  },
+);
