@@ -28,6 +28,14 @@ export interface CompiledMapping {
   constituentList: Constituent[];
 }
 
+/** Units the single-value roles are read in; a header naming another unit is an error, never converted by guess. */
+const EXPECTED_UNIT: Partial<Record<SingleRole, string>> = {
+  depth: "m",
+  distance: "km",
+  discharge: "m³/s",
+  temperature: "°C",
+};
+
 const COND_FACTOR: Record<string, number> = { "mS/cm": 1, "µS/cm": 0.001, "S/m": 10 };
 
 /**
@@ -104,6 +112,20 @@ export function compileMapping(
       continue;
     }
     const role = col.role as SingleRole;
+    const wanted = EXPECTED_UNIT[role];
+    const given = col.unit ?? col.unitText;
+    if (wanted !== undefined && given !== undefined && given !== "" && parseUnit(given) !== wanted) {
+      issues.push(
+        makeIssue(
+          file,
+          0,
+          col.header,
+          given,
+          `${role} in ${wanted} (convert the column or correct the mapping); column not used`,
+        ),
+      );
+      continue;
+    }
     if (compiled.single[role] !== undefined) {
       issues.push(makeIssue(file, 0, col.header, role, `one "${role}" column; this one is not used`, "warning"));
       continue;

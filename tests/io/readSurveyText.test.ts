@@ -129,3 +129,19 @@ describe("readSurveyText (delimited survey files and their quirks)", () => {
     expectWithin(r.surveys[0].stations[0].values.Fe.value, 5, 0, "Fe through the saved mapping");
   });
 });
+
+describe("readSurveyText (units of depth, temperature, distance and discharge columns)", () => {
+  it("readSurveyText() reports a depth in feet or a temperature in °F as an error and does not use the column (never a guess)", () => {
+    const r = readSurveyText("station,depth (ft),temperature (degF),salinity,discharge (m3/s)\nA,3,50,1,10\n", {
+      fileName: "u.csv",
+    });
+    expect(r.issues.filter((i) => i.severity === "error").map((i) => `${i.column}|${i.value}`)).toEqual([
+      "depth (ft)|ft",
+      "temperature (degF)|degF",
+    ]);
+    const a = r.surveys[0].stations[0];
+    expect(a.depthM).toBeUndefined();
+    expect(a.temperatureC).toBeUndefined();
+    expect(r.surveys[0].riverDischargeM3s).toBe(10);
+  });
+});
