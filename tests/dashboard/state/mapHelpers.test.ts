@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { decimateStations } from "../../../dashboard/src/map/decimate.ts";
 import { deviationScale, salinityScale } from "../../../dashboard/src/map/colour.ts";
 import { besideChannel } from "../../../dashboard/src/map/layers.ts";
+import { buildStyle } from "../../../dashboard/src/map/style.ts";
 import type { MapStation } from "../../../dashboard/src/map/mapData.ts";
 import { expectWithin } from "../../helpers/tolerance.ts";
 import { randomLcg, randomUniform } from "d3-random";
@@ -50,5 +51,27 @@ describe("besideChannel() sets labels perpendicular to the channel (screen y gro
     expectWithin(yr, 0, 1e-12, "right y");
     const [xl] = besideChannel(0, -1, 10);
     expectWithin(xl, -10, 1e-12, "left x");
+  });
+});
+
+describe("buildStyle() is offline unless the user turns tiles on (rules: no internet)", () => {
+  it("the default style has no remote tiles, glyphs or sprites", () => {
+    const style = buildStyle({ basemap: undefined });
+    const text = JSON.stringify(style);
+    expect(text).not.toMatch(/https?:\/\//);
+    expect(style.glyphs).toBeUndefined();
+    expect(style.sprite).toBeUndefined();
+    expect(Object.keys(style.sources)).toEqual(["basemap"]);
+  });
+
+  it("a user tile URL adds one raster source drawn under the basemap's labels", () => {
+    const style = buildStyle({ basemap: undefined, tileUrl: " https://tiles.example.invalid/{z}/{x}/{y}.png " });
+    expect(style.sources.userTiles).toEqual({
+      type: "raster",
+      tiles: ["https://tiles.example.invalid/{z}/{x}/{y}.png"],
+      tileSize: 256,
+    });
+    const ids = style.layers.map((l) => l.id);
+    expect(ids.indexOf("user-tiles")).toBeLessThan(ids.indexOf("place-labels"));
   });
 });
