@@ -1,5 +1,5 @@
 // @vitest-environment jsdom
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { fireEvent, render, screen } from "@testing-library/svelte";
 import { flushSync } from "svelte";
 import MixingPlot from "../../../dashboard/src/panels/MixingPlot.svelte";
@@ -118,5 +118,40 @@ describe("MixingPlot", () => {
     const { svg } = setup("Ba");
     expectSvgSnapshot(svg.outerHTML, "mixing-ba");
     expect(screen.getByText("maximum")).toBeTruthy();
+  });
+});
+
+describe("MixingPlot dense layer", () => {
+  it("MixingPlot draws points on a canvas above denseThreshold, keeps selected ones in the SVG, and click picks the nearest", async () => {
+    const fills: Array<[number, number]> = [];
+    const ctx = {
+      setTransform: () => undefined,
+      clearRect: () => undefined,
+      fillRect: (x: number, y: number) => fills.push([x, y]),
+      globalAlpha: 1,
+      fillStyle: "",
+    };
+    vi.spyOn(HTMLCanvasElement.prototype, "getContext").mockReturnValue(ctx as unknown as CanvasRenderingContext2D);
+    const selection = new Selection();
+    const { container } = render(MixingPlot, {
+      analysis: fixtureAnalysis(),
+      selection,
+      idPrefix: "dn",
+      denseThreshold: 5,
+    });
+    flushSync();
+    expect(container.querySelector("canvas.dense-layer")).not.toBeNull();
+    expect(fills).toHaveLength(13);
+    const svg = container.querySelector("svg")!;
+    expect(svg.querySelectorAll(".point")).toHaveLength(0);
+    // press and release on the plot surface right at S05's mark (fills hold mark centres − 1.5 px)
+    const s05 = fixtureAnalysis().constituents[0].observations!.findIndex((o) => o.stationId === "S05");
+    const [fx, fy] = fills[s05];
+    const surface = svg.querySelector(".brush-surface")!;
+    await fireEvent.pointerDown(surface, { clientX: fx + 1.5, clientY: fy + 1.5, button: 0 });
+    await fireEvent.pointerUp(surface, { clientX: fx + 1.5, clientY: fy + 1.5 });
+    expect([...selection.stationIds]).toEqual(["S05"]);
+    expect(svg.querySelectorAll(".point.selected")).toHaveLength(1);
+    vi.restoreAllMocks();
   });
 });

@@ -112,8 +112,8 @@ export function salinityColour(salinity: number): string {
 export function deviationColour(deviationPercent: number, limitPercent = 50): string {
   if (!(limitPercent > 0)) throw new RangeError(`deviationColour(): limitPercent must be > 0, got ${limitPercent}`);
   const t = Math.min(1, Math.max(-1, deviationPercent / limitPercent));
-  // PuOr runs orange (0) → white (0.5) → purple (1); removal (negative) → purple.
-  return interpolatePuOr(0.5 - t / 2);
+  // d3's PuOr runs purple (0) → light neutral (0.5) → orange (1); removal (negative) → purple.
+  return interpolatePuOr(0.5 + t / 2);
 }
 
 /** Evenly spaced stops of a colour function for legends and map ramps. */
