@@ -57,7 +57,12 @@ describe("palette", () => {
   it("deviationColour() is near white at zero, purple-leaning for removal and orange-leaning for addition", () => {
     const [r0, g0, b0] = rgb(deviationColour(0));
     expect(Math.min(r0, g0, b0), "deviationColour(0) is a light neutral").toBeGreaterThanOrEqual(225);
-    expectWithin(Math.max(r0, g0, b0) - Math.min(r0, g0, b0), 0, 12, "deviationColour(0) has no strong hue (channel spread)");
+    expectWithin(
+      Math.max(r0, g0, b0) - Math.min(r0, g0, b0),
+      0,
+      12,
+      "deviationColour(0) has no strong hue (channel spread)",
+    );
     const [rr, , rb] = rgb(deviationColour(-50));
     expect(rb).toBeGreaterThan(rr);
     const [ar, , ab] = rgb(deviationColour(50));
