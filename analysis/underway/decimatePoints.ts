@@ -42,8 +42,9 @@ function mercY(lat: number): number {
  * Grid aggregation for display: points are binned into square cells of size c in Web Mercator
  * metres (x = R·λ, y = R·ln tan(π/4 + φ/2)); each occupied cell gives one point at the mean
  * longitude/latitude of its members with the mean of each value array. The cell starts at
- * max(minCellM, √(extent area) / maxPoints) and grows by √(occupied / maxPoints) (at least 1.25×)
- * until at most maxPoints cells are occupied.
+ * max(minCellM, √(extent area / maxPoints)) and grows by √(occupied / maxPoints) (at least 1.25×)
+ * until at most maxPoints cells are occupied, then shrinks while fewer than half of maxPoints are
+ * occupied (a ship's track fills few squares of its extent) as long as the result still fits.
  * Deterministic: cells are listed in the order their first point appears. Display only.
  *
  * @param lonDeg longitudes [deg]; NaN marks a point without position (skipped)
@@ -60,32 +61,54 @@ export function decimatePoints(lonDeg: Float64Array, latDeg: Float64Array, value
     throw new RangeError(`decimatePoints(): lonDeg, latDeg and values must have the same length (${n})`);
   if (!(options.maxPoints >= 1)) throw new RangeError(`decimatePoints(): options.maxPoints must be ≥ 1, got ${options.maxPoints}`);
   const [w, s, e, nb] = options.bounds ?? [-Infinity, -Infinity, Infinity, Infinity];
-  const xs = new Float64Array(n);
-  const ys = new Float64Array(n);
-  const idx: number[] = [];
+  const pidx = new Int32Array(n);
+  const px = new Float64Array(n);
+  const py = new Float64Array(n);
+  let m = 0;
   let [x0, y0, x1, y1] = [Infinity, Infinity, -Infinity, -Infinity];
   for (let i = 0; i < n; i++) {
     const lon = lonDeg[i]!;
     const lat = latDeg[i]!;
     if (!(lon >= w && lon <= e && lat >= s && lat <= nb)) continue;
-    const x = (xs[i] = mercX(lon));
-    const y = (ys[i] = mercY(lat));
-    idx.push(i);
+    const x = mercX(lon);
+    const y = mercY(lat);
+    pidx[m] = i;
+    px[m] = x;
+    py[m++] = y;
     if (x < x0) x0 = x;
     if (x > x1) x1 = x;
     if (y < y0) y0 = y;
     if (y > y1) y1 = y;
   }
-  const area = Math.max(1, (x1 - x0) * (y1 - y0));
-  // Start from the cell a track crossing the extent would need (√area / maxPoints), then grow.
-  let cellM = Math.max(options.minCellM ?? 0, Math.sqrt(area) / options.maxPoints, 1e-3);
-  let cells = assign(idx, xs, ys, x0, y0, cellM);
-  while (cells.order.length > options.maxPoints) {
-    // grow by √(occupied / wanted), at least 1.25×: a few passes for tracks (1-D) and areas (2-D) alike
-    cellM *= Math.max(1.25, Math.sqrt(cells.order.length / options.maxPoints));
-    cells = assign(idx, xs, ys, x0, y0, cellM);
+  const pts: Considered = { idx: pidx.subarray(0, m), x: px.subarray(0, m), y: py.subarray(0, m), x0, y0, x1 };
+  const max = options.maxPoints;
+  const floor = Math.max(options.minCellM ?? 0, 1e-3);
+  // Start from the cell that tiles the extent with about maxPoints squares, grow until it fits...
+  let cellM = Math.max(floor, Math.sqrt(Math.max(1, (x1 - x0) * (y1 - y0)) / max));
+  let cells = assign(pts, cellM);
+  while (cells.order.length > max) {
+    cellM *= Math.max(1.25, Math.sqrt(cells.order.length / max));
+    cells = assign(pts, cellM);
   }
-  return summarise(idx, cells, lonDeg, latDeg, values, cellM);
+  // ...then refine while far fewer cells than allowed are occupied (tracks fill few squares).
+  for (let pass = 0; pass < 8 && cellM > floor && cells.order.length < 0.5 * max; pass++) {
+    const next = Math.max(floor, cellM * Math.max(0.25, (1.1 * cells.order.length) / max));
+    const tried = assign(pts, next);
+    if (tried.order.length > max) break;
+    cellM = next;
+    cells = tried;
+  }
+  return summarise(pts.idx, cells, lonDeg, latDeg, values, cellM);
+}
+
+/** The points inside the bounds, in Web Mercator metres, and their extent. */
+interface Considered {
+  idx: Int32Array;
+  x: Float64Array;
+  y: Float64Array;
+  x0: number;
+  y0: number;
+  x1: number;
 }
 
 interface Cells {
@@ -95,16 +118,13 @@ interface Cells {
   order: number[];
 }
 
-function assign(idx: number[], xs: Float64Array, ys: Float64Array, x0: number, y0: number, cellM: number): Cells {
+function assign(p: Considered, cellM: number): Cells {
   const map = new Map<number, number>();
-  const of = new Int32Array(idx.length);
+  const of = new Int32Array(p.idx.length);
   const order: number[] = [];
-  let maxX = 0;
-  for (const i of idx) maxX = Math.max(maxX, xs[i]! - x0);
-  const cols = Math.floor(maxX / cellM) + 1;
-  for (let k = 0; k < idx.length; k++) {
-    const i = idx[k]!;
-    const key = Math.floor((ys[i]! - y0) / cellM) * cols + Math.floor((xs[i]! - x0) / cellM);
+  const cols = Math.floor((p.x1 - p.x0) / cellM) + 1;
+  for (let k = 0; k < p.idx.length; k++) {
+    const key = Math.floor((p.y[k]! - p.y0) / cellM) * cols + Math.floor((p.x[k]! - p.x0) / cellM);
     let c = map.get(key);
     if (c === undefined) {
       c = order.length;
@@ -116,7 +136,7 @@ function assign(idx: number[], xs: Float64Array, ys: Float64Array, x0: number, y
   return { of, order };
 }
 
-function summarise(idx: number[], cells: Cells, lonDeg: Float64Array, latDeg: Float64Array, values: readonly Float64Array[], cellM: number): DecimatedPoints {
+function summarise(idx: Int32Array, cells: Cells, lonDeg: Float64Array, latDeg: Float64Array, values: readonly Float64Array[], cellM: number): DecimatedPoints {
   const m = cells.order.length;
   const count = new Uint32Array(m);
   const lon = new Float64Array(m);
@@ -129,13 +149,13 @@ function summarise(idx: number[], cells: Cells, lonDeg: Float64Array, latDeg: Fl
     count[c]!++;
     lon[c]! += lonDeg[i]!;
     lat[c]! += latDeg[i]!;
-    values.forEach((v, j) => {
-      const x = v[i]!;
+    for (let j = 0; j < values.length; j++) {
+      const x = values[j]![i]!;
       if (!Number.isNaN(x)) {
         sums[j]![c]! += x;
         ns[j]![c]!++;
       }
-    });
+    }
   }
   for (let c = 0; c < m; c++) {
     lon[c]! /= count[c]!;

@@ -1,6 +1,8 @@
 import type { BenchCase } from "../benchCase.ts";
 import { mixingBench } from "./mixing.ts";
 import { projectionBench } from "./projection.ts";
+import { underwayImportBench } from "./underwayImport.ts";
+import { underwayBinningBench } from "./underwayBinning.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
-export const benchCases: BenchCase[] = [mixingBench, projectionBench];
+export const benchCases: BenchCase[] = [mixingBench, projectionBench, underwayImportBench, underwayBinningBench];
