@@ -1,0 +1,90 @@
+/**
+ * Reads one dropped file with analysis/io (runs in the analysis worker):
+ * delimited surveys are streamed with progress, GeoJSON points and netCDF are
+ * read whole, a centerline is checked by building the channel, a station
+ * table is read for joining. Problems come back as issues, never thrown.
+ */
+import {
+  readGeoJsonPoints,
+  readNetcdfStations,
+  readStationTable,
+  readSurveyStream,
+  stripBom,
+  type ColumnMapping,
+  type ReadSurveyOptions,
+  type StationTable,
+} from "../../../analysis/index.ts";
+import { readChannel } from "../worker/engine.ts";
+import type { FileKind, FileOutcome, ImportSource } from "./importTypes.ts";
+
+/** What the user confirmed for one file. */
+export interface ImportChoice {
+  kind: FileKind;
+  /** Confirmed mapping (delimited text). */
+  mapping?: ColumnMapping;
+  /** Station table to join by station id. */
+  stationTable?: StationTable;
+}
+
+function fileIssue(file: string, value: string, expected: string): FileOutcome["issues"][number] {
+  return { file, row: 0, column: "", value, expected, severity: "error" };
+}
+
+/**
+ * Reads one file of a known kind.
+ *
+ * @param file the file
+ * @param choice kind, confirmed mapping and station table
+ * @param onProgress fraction of the file read, 0…1
+ * @returns surveys, issues, summary and mapping; or the centerline / station table
+ */
+export async function importFile(
+  file: ImportSource,
+  choice: ImportChoice,
+  onProgress?: (fraction: number) => void,
+): Promise<FileOutcome> {
+  const name = file.name;
+  const empty: FileOutcome = { fileName: name, kind: choice.kind, surveys: [], issues: [] };
+  const options: ReadSurveyOptions = {
+    fileName: name,
+    ...(choice.mapping ? { mapping: choice.mapping } : {}),
+    ...(choice.stationTable ? { stationTable: choice.stationTable } : {}),
+    ...(onProgress ? { onProgress } : {}),
+  };
+  const fromResult = (r: Awaited<ReturnType<typeof readSurveyStream>>): FileOutcome => ({
+    ...empty,
+    surveys: r.surveys,
+    issues: r.issues,
+    summary: r.summary,
+    mapping: r.mapping,
+  });
+  switch (choice.kind) {
+    case "surveyText":
+      return fromResult(
+        await readSurveyStream(file.stream() as ReadableStream<Uint8Array>, { ...options, totalSize: file.size }),
+      );
+    case "surveyGeoJson":
+      return fromResult(readGeoJsonPoints(await file.text(), options));
+    case "surveyNetcdf":
+      return fromResult(readNetcdfStations(new Uint8Array(await file.arrayBuffer()), options));
+    case "stationTable": {
+      const table = readStationTable(await file.text(), {
+        fileName: name,
+        ...(choice.mapping ? { mapping: choice.mapping } : {}),
+      });
+      return { ...empty, issues: table.issues, stationTable: table, mapping: table.mapping };
+    }
+    case "centerline": {
+      const text = stripBom(await file.text());
+      try {
+        readChannel({ name, text });
+        return { ...empty, centerline: JSON.parse(text) as object };
+      } catch (error) {
+        const message = error instanceof Error ? error.message : String(error);
+        return { ...empty, issues: [fileIssue(name, "", `a usable channel centerline (${message})`)] };
+      }
+    }
+    default:
+      return { ...empty, issues: [fileIssue(name, "", "a survey table, GeoJSON or netCDF file")] };
+  }
+}
