@@ -126,4 +126,19 @@ describe("renderBriefingHtml() on the invented demo surveys", () => {
     expect(dom.window.document.body.textContent).toContain(evil);
     expect(parseErrors(out)).toEqual([]);
   });
+
+  it("buildBriefing() of one survey without a channel has no comparison and no map but keeps findings, zone chart and table", () => {
+    const one = buildBriefing({ analyses: [analyses[1]!] });
+    expect(one.comparison).toBeUndefined();
+    expect(one.surveys[0]!.figures.some((f) => f.id.endsWith("-map"))).toBe(false);
+    expect(one.surveys[0]!.figures.some((f) => f.id.endsWith("-zones"))).toBe(true);
+    const out = renderBriefingHtml(one);
+    expect(out).not.toContain("Comparison of the surveys");
+    expect(parseErrors(out)).toEqual([]);
+    expect(externalReferences(out)).toEqual([]);
+  });
+
+  it("buildBriefing() throws RangeError naming the function without analyses", () => {
+    expect(() => buildBriefing({ analyses: [] })).toThrow(/buildBriefing: input.analyses/);
+  });
 });
