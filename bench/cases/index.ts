@@ -3,6 +3,7 @@ import { mixingBench } from "./mixing.ts";
 import { projectionBench } from "./projection.ts";
 import { underwayImportBench } from "./underwayImport.ts";
 import { underwayBinningBench } from "./underwayBinning.ts";
+import { bundleSizeBench } from "./bundleSize.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
-export const benchCases: BenchCase[] = [mixingBench, projectionBench, underwayImportBench, underwayBinningBench];
+export const benchCases: BenchCase[] = [mixingBench, projectionBench, underwayImportBench, underwayBinningBench, bundleSizeBench];

@@ -1,0 +1,85 @@
+// Benchmark: gzip size of the JavaScript the dashboard ships (dashboard/dist), all of it and the
+// part the first page load fetches, against the map libraries alone (maplibre-gl with its worker
+// and the deck.gl modules the map uses) built by the same Vite in the same run.
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+import { gzipSync } from "node:zlib";
+import { build } from "vite";
+import type { BenchCase, BenchRow } from "../benchCase.ts";
+import { DIST, REPO, ensureDist, filesUnder } from "../fixtures/dashboardDist.ts";
+
+const isJs = (p: string) => p.endsWith(".js") || p.endsWith(".mjs");
+const gz = (p: string) => gzipSync(readFileSync(p), { level: 9 }).length;
+const kB = (bytes: number) => bytes / 1000;
+
+/** Scripts index.html loads at once: the module entry and its modulepreload links. */
+function initialScripts(): string[] {
+  const html = readFileSync(join(DIST, "index.html"), "utf8");
+  const refs = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*rel="modulepreload"[^>]*\shref)="([^"]+)"/g)].map((m) => m[1]!);
+  return refs.filter((r) => isJs(r)).map((r) => join(DIST, r.replace(/^\.\//, "")));
+}
+
+/** Builds an app that only imports the map libraries, with the dashboard's Vite settings. */
+async function mapLibrariesOnly(): Promise<number> {
+  const cache = join(REPO, "node_modules", ".cache");
+  mkdirSync(cache, { recursive: true });
+  const root = mkdtempSync(join(cache, "brackline-maplibs-"));
+  try {
+    writeFileSync(join(root, "index.html"), '<!doctype html><script type="module" src="./main.js"></script>');
+    writeFileSync(
+      join(root, "main.js"),
+      [
+        'import * as maplibregl from "maplibre-gl";',
+        'import workerUrl from "maplibre-gl/dist/maplibre-gl-worker.mjs?url";',
+        'import { MapboxOverlay } from "@deck.gl/mapbox";',
+        'import { LineLayer, PathLayer, ScatterplotLayer, TextLayer } from "@deck.gl/layers";',
+        "maplibregl.setWorkerUrl(workerUrl);",
+        "globalThis.__libs = [maplibregl.Map, MapboxOverlay, LineLayer, PathLayer, ScatterplotLayer, TextLayer];",
+      ].join("\n"),
+    );
+    await build({
+      root,
+      configFile: false,
+      logLevel: "silent",
+      base: "./",
+      build: { outDir: join(root, "dist"), target: "es2022", emptyOutDir: true, chunkSizeWarningLimit: 1e5 },
+    });
+    return filesUnder(join(root, "dist")).filter(isJs).reduce((s, p) => s + gz(p), 0);
+  } finally {
+    rmSync(root, { recursive: true, force: true });
+  }
+}
+
+export const bundleSizeBench: BenchCase = {
+  name: "bundle-size",
+  async run(): Promise<BenchRow[]> {
+    ensureDist();
+    const all = filesUnder(DIST).filter(isJs);
+    const total = all.reduce((s, p) => s + gz(p), 0);
+    const initial = initialScripts().reduce((s, p) => s + gz(p), 0);
+    const libs = await mapLibrariesOnly();
+    const note = `${all.length} files (.js and .mjs, workers included); gzip level 9 (node:zlib)`;
+    return [
+      {
+        name: "shipped dashboard JavaScript, gzip",
+        value: kB(total),
+        unit: "kB",
+        baseline: { name: "map libraries alone (maplibre-gl + worker, deck.gl)", value: kB(libs) },
+        ratio: total / libs,
+        ratioLabel: "of the map libraries",
+        goal: "≤ 1.2 MB",
+        note,
+      },
+      {
+        name: "JavaScript of the first page load (entry + modulepreload), gzip",
+        value: kB(initial),
+        unit: "kB",
+        baseline: { name: "map libraries alone", value: kB(libs) },
+        ratio: initial / libs,
+        ratioLabel: "of the map libraries",
+        goal: "≤ 1.2 MB",
+        note: "workers and lazily loaded chunks excluded",
+      },
+    ];
+  },
+};
