@@ -10,7 +10,7 @@ import { Settings, type AnalysisSettings } from "./settings.svelte.ts";
 import { Workspace } from "./workspace.svelte.ts";
 import { AnalysisClient } from "../worker/client.ts";
 import type { WorkerResponse } from "../worker/protocol.ts";
-import type { DemoBundle } from "../lib/demoData.ts";
+import type { DemoBundle, TextFile } from "../lib/demoData.ts";
 import type { MapData, MapStation } from "../map/mapData.ts";
 import { deviationsById, placementsById } from "../lib/analysisView.ts";
 import { withObservations } from "../panels/lib/observations.ts";
@@ -28,6 +28,8 @@ export class AppState {
   readonly settings = new Settings();
   readonly selection = new Selection();
   #client: AnalysisClient | undefined;
+  /** Waiting briefing request (resolved with the HTML when the worker answers). */
+  #briefing: { resolve: (html: string) => void; reject: (error: Error) => void } | undefined;
 
   /** The active survey. */
   readonly survey: Survey | undefined = $derived(this.workspace.surveys[this.selection.surveyIndex]);
@@ -106,11 +108,48 @@ export class AppState {
     this.#client.send({ type: "analyze", settings: this.#settingsSnapshot() });
   }
 
+  /** Replaces the channel centerline (e.g. one drawn on the map) and re-analyses every survey in the worker. */
+  setCenterline(file: TextFile): void {
+    if (!this.#client) return;
+    this.workspace.begin(false);
+    this.#client.send({ type: "centerline", centerline: file, settings: this.#settingsSnapshot() });
+  }
+
+  /** Asks the worker for the self-contained HTML briefing of the analysed surveys. */
+  requestBriefing(dataNotice?: string): Promise<string> {
+    const client = this.#client;
+    if (!client) return Promise.reject(new Error("The analysis worker is not running."));
+    this.#briefing?.reject(new Error("Superseded by a newer briefing request."));
+    return new Promise<string>((resolve, reject) => {
+      this.#briefing = { resolve, reject };
+      client.send({
+        type: "briefing",
+        basemap: $state.snapshot(this.workspace.basemap),
+        ...(dataNotice ? { dataNotice } : {}),
+      });
+    });
+  }
+
+  /** Replaces the loaded surveys with surveys already read (an import or a restored workspace) and analyses them. */
+  loadSurveys(surveys: Survey[], centerline: TextFile | undefined, basemap: FeatureCollection | undefined): void {
+    this.workspace.basemap = basemap;
+    this.#client ??= new AnalysisClient((m) => this.#receive(m));
+    this.workspace.begin(false);
+    this.#client.send({ type: "setSurveys", surveys, ...(centerline ? { centerline } : {}), settings: this.#settingsSnapshot() });
+  }
+
   #settingsSnapshot(): AnalysisSettings {
     return $state.snapshot(this.settings.analysis) as AnalysisSettings;
   }
 
   #receive(message: WorkerResponse): void {
+    if (message.type === "briefing" || (message.type === "error" && this.#briefing)) {
+      const pending = this.#briefing;
+      this.#briefing = undefined;
+      if (message.type === "briefing") pending?.resolve(message.html);
+      else pending?.reject(new Error(message.message));
+      if (message.type === "briefing") return;
+    }
     this.workspace.receive(message);
     if (message.type === "loaded") {
       if (this.selection.surveyIndex >= message.surveys.length) this.selection.surveyIndex = 0;

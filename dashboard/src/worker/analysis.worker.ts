@@ -2,11 +2,15 @@
  * Analysis worker: reads the files and analyses every survey off the UI
  * thread, posting progress as it goes. A newer request supersedes an older one.
  */
-import type { Survey } from "../../../analysis/index.ts";
+import type { ImportIssue, Survey } from "../../../analysis/index.ts";
 import type { WorkerRequest, WorkerResponse } from "./protocol.ts";
 import type { AnalysisSettings } from "../state/settings.svelte.ts";
-import { analyse, readChannel, readSurveys, type Channel } from "./engine.ts";
+import type { TextFile } from "../lib/demoData.ts";
+import { analyse, readChannel, readSurveys, type AnalysisResult, type Channel } from "./engine.ts";
+import { briefingHtml, fileProvenance } from "./briefing.ts";
 import type { ChannelOverlay } from "./overlay.ts";
+import { handleImportRequest } from "../import/workerImport.ts";
+import { isImportRequest } from "../import/importProtocol.ts";
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 
@@ -14,6 +18,12 @@ let latestId = 0;
 let surveys: Survey[] = [];
 let channel: Channel = undefined;
 let channelOverlay: ChannelOverlay | undefined;
+/** Latest analysis of each survey, kept for the briefing. */
+let analyses: Array<AnalysisResult | undefined> = [];
+/** The files read (survey files and centerline), for the briefing's provenance table. */
+let files: TextFile[] = [];
+let issues: ImportIssue[] = [];
+let centerlineFile: TextFile | undefined;
 
 function post(message: WorkerResponse): void {
   scope.postMessage(message);
@@ -45,6 +55,7 @@ async function analyseAll(id: number, settings: AnalysisSettings): Promise<void>
           total: total * 100,
         }),
       );
+      analyses[i] = analysis;
       post({ type: "analysis", id, surveyIndex: i, analysis, overlay });
     } catch (error) {
       post({ type: "error", id, message: `Survey "${surveys[i].name}": ${messageOf(error)}` });
@@ -54,33 +65,59 @@ async function analyseAll(id: number, settings: AnalysisSettings): Promise<void>
   post({ type: "done", id });
 }
 
+/** Builds the channel from a centerline file; a broken file is reported and leaves no channel. */
+function useCenterline(id: number, file: TextFile | undefined): void {
+  let built: ReturnType<typeof readChannel>;
+  try {
+    built = readChannel(file);
+  } catch (error) {
+    post({ type: "error", id, message: `${file?.name ?? "centerline"}: ${messageOf(error)}` });
+  }
+  centerlineFile = file;
+  channel = built?.channel;
+  channelOverlay = built?.overlay;
+}
+
 async function handle(request: WorkerRequest): Promise<void> {
+  if (isImportRequest(request)) return handleImportRequest(request, post);
+  if (request.type === "briefing") {
+    const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
+    const provenance = await fileProvenance(files, centerlineFile);
+    const html = briefingHtml(done, channel, provenance, request.basemap, request.dataNotice);
+    post({ type: "briefing", id: request.id, html });
+    return;
+  }
   latestId = request.id;
+  if (request.type === "centerline") {
+    useCenterline(request.id, request.centerline);
+    analyses = surveys.map(() => undefined);
+    post({ type: "loaded", id: request.id, surveys, issues, channel: channelOverlay });
+  }
+  if (request.type === "setSurveys") {
+    useCenterline(request.id, request.centerline);
+    surveys = request.surveys;
+    files = [];
+    issues = [];
+    analyses = surveys.map(() => undefined);
+    post({ type: "loaded", id: request.id, surveys, issues, channel: channelOverlay });
+  }
   if (request.type === "load") {
     post({ type: "progress", id: request.id, stage: "Reading files", done: 0, total: 1 });
     await yieldToQueue();
     const read = readSurveys(request.surveys, (fraction) =>
       post({ type: "progress", id: request.id, stage: "Reading files", done: Math.round(fraction * 100), total: 100 }),
     );
-    let built: ReturnType<typeof readChannel>;
-    try {
-      built = readChannel(request.centerline);
-    } catch (error) {
-      post({
-        type: "error",
-        id: request.id,
-        message: `${request.centerline?.name ?? "centerline"}: ${messageOf(error)}`,
-      });
-    }
+    useCenterline(request.id, request.centerline);
     surveys = read.surveys;
-    channel = built?.channel;
-    channelOverlay = built?.overlay;
+    files = request.surveys;
+    issues = read.issues;
+    analyses = surveys.map(() => undefined);
     post({
       type: "loaded",
       id: request.id,
       surveys: read.surveys,
       issues: read.issues,
-      channel: built?.overlay,
+      channel: channelOverlay,
     });
   }
   await analyseAll(request.id, request.settings);

@@ -8,6 +8,7 @@ import type { AnalysisSettings } from "../state/settings.svelte.ts";
 import type { TextFile } from "../lib/demoData.ts";
 import type { ChannelOverlay, SurveyOverlay } from "./overlay.ts";
 import type { AnalysisResult } from "./engine.ts";
+import type { ImportRequest, ImportResponse, SetSurveysRequest } from "../import/importProtocol.ts";
 
 export type WorkerRequest =
   | {
@@ -17,7 +18,14 @@ export type WorkerRequest =
       centerline?: TextFile;
       settings: AnalysisSettings;
     }
-  | { type: "analyze"; id: number; settings: AnalysisSettings };
+  | { type: "analyze"; id: number; settings: AnalysisSettings }
+  /** Replace the channel centerline (e.g. one drawn on the map) and re-analyse every survey. */
+  | { type: "centerline"; id: number; centerline: TextFile; settings: AnalysisSettings }
+  /** Build the self-contained HTML briefing of the analysed surveys (analysis/report). */
+  | { type: "briefing"; id: number; basemap?: unknown; dataNotice?: string }
+  /** Import flow: inspect or read a dropped file, and hand over surveys already read. */
+  | ImportRequest
+  | SetSurveysRequest;
 
 export type WorkerResponse =
   /** Work in progress: `done` of `total` steps of `stage`. */
@@ -34,4 +42,8 @@ export type WorkerResponse =
   | { type: "analysis"; id: number; surveyIndex: number; analysis: AnalysisResult; overlay: SurveyOverlay }
   /** All requested work finished. */
   | { type: "done"; id: number }
-  | { type: "error"; id: number; message: string };
+  /** Answers of the import flow (see import/importProtocol.ts). */
+  | ImportResponse
+  | { type: "error"; id: number; message: string }
+  /** The briefing as one self-contained HTML document. */
+  | { type: "briefing"; id: number; html: string };

@@ -1,0 +1,103 @@
+/**
+ * A centerline drawn on the map: the GeoJSON it exports (RFC 7946, [lon, lat])
+ * and its km ticks, computed with analysis/geometry exactly as for a loaded file.
+ */
+import { buildChannelNetwork, kmTicks, type ChannelNetwork } from "../../../analysis/index.ts";
+import type { LonLat } from "../worker/overlay.ts";
+
+/** Which vertex of the drawn line is the estuary mouth. */
+export type MouthEnd = "start" | "end";
+
+/** A km tick of the drawn line, as drawn on the map. */
+export interface DrawnTick {
+  km: number;
+  lonLat: LonLat;
+  label: string;
+  major: boolean;
+}
+
+/** File name of the exported centerline. */
+export const DRAWN_FILE_NAME = "drawn-centerline.geojson";
+
+/** An RFC 7946 FeatureCollection of the drawn main stem and a Point marking its mouth. */
+export interface DrawnCenterline {
+  type: "FeatureCollection";
+  features: Array<
+    | {
+        type: "Feature";
+        geometry: { type: "LineString"; coordinates: LonLat[] };
+        properties: { role: "main"; name: string; mouth: MouthEnd; source: string };
+      }
+    | {
+        type: "Feature";
+        geometry: { type: "Point"; coordinates: LonLat };
+        properties: { role: "mouth"; name: string };
+      }
+  >;
+}
+
+/** Rounds to 7 decimals (≈ 1 cm), as RFC 7946 §11.2 suggests keeping precision modest. */
+function round7(v: number): number {
+  return Math.round(v * 1e7) / 1e7;
+}
+
+/** Drops consecutive vertices that coincide (a double-click adds the same point twice). */
+export function dedupeVertices(vertices: readonly LonLat[], toleranceDeg = 1e-7): LonLat[] {
+  const out: LonLat[] = [];
+  for (const v of vertices) {
+    const last = out[out.length - 1];
+    if (last && Math.abs(last[0] - v[0]) <= toleranceDeg && Math.abs(last[1] - v[1]) <= toleranceDeg) continue;
+    out.push([v[0], v[1]]);
+  }
+  return out;
+}
+
+/** The drawn line as an RFC 7946 FeatureCollection: the main stem LineString and a "mouth" Point. */
+export function drawnCenterlineGeoJson(vertices: readonly LonLat[], mouth: MouthEnd): DrawnCenterline {
+  const coords = dedupeVertices(vertices).map(([lon, lat]) => [round7(lon), round7(lat)] as LonLat);
+  if (coords.length < 2)
+    throw new RangeError(`drawnCenterlineGeoJson: needs at least 2 distinct vertices, got ${coords.length}`);
+  const mouthPoint = mouth === "start" ? coords[0] : coords[coords.length - 1];
+  return {
+    type: "FeatureCollection",
+    features: [
+      {
+        type: "Feature",
+        geometry: { type: "LineString", coordinates: coords },
+        properties: { role: "main", name: "Drawn channel", mouth, source: "drawn on the Brackline map" },
+      },
+      {
+        type: "Feature",
+        geometry: { type: "Point", coordinates: mouthPoint },
+        properties: { role: "mouth", name: "Mouth" },
+      },
+    ],
+  };
+}
+
+/** Tick spacing [km] giving about ten ticks along a line of the given length. */
+export function tickSpacingKm(lengthKm: number): number {
+  const steps = [0.1, 0.2, 0.5, 1, 2, 5, 10, 20, 50];
+  return steps.find((s) => lengthKm / s <= 12) ?? 100;
+}
+
+/** The channel network of the drawn line (analysis/geometry), or undefined with fewer than 2 distinct vertices. */
+export function drawnNetwork(vertices: readonly LonLat[], mouth: MouthEnd): ChannelNetwork | undefined {
+  const coords = dedupeVertices(vertices);
+  if (coords.length < 2) return undefined;
+  return buildChannelNetwork({ type: "LineString", coordinates: coords }, { mouth });
+}
+
+/** Km ticks of the drawn line from its mouth (analysis/geometry kmTicks); every tick labelled. */
+export function drawnTicks(vertices: readonly LonLat[], mouth: MouthEnd): { ticks: DrawnTick[]; lengthKm: number } {
+  const network = drawnNetwork(vertices, mouth);
+  if (!network) return { ticks: [], lengthKm: 0 };
+  const spacing = tickSpacingKm(network.totalLengthKm);
+  const ticks = kmTicks(network, spacing).features.map((f) => ({
+    km: f.properties.km,
+    lonLat: f.geometry.coordinates,
+    label: f.properties.label,
+    major: true,
+  }));
+  return { ticks, lengthKm: network.totalLengthKm };
+}

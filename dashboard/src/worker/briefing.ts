@@ -1,0 +1,58 @@
+/**
+ * The briefing, built in the worker: the same document model and HTML that
+ * `brackline report` writes (analysis/report buildBriefing + renderBriefingHtml),
+ * from the surveys the worker analysed and the channel it holds.
+ */
+import {
+  buildBriefing,
+  renderBriefingHtml,
+  type ProvenanceFile,
+  type SurveyAnalysis,
+} from "../../../analysis/index.ts";
+import type { TextFile } from "../lib/demoData.ts";
+import type { Channel } from "./engine.ts";
+
+/** Same software line and bootstrap settings as the command line's defaults (analyzeSurvey: 2000 draws, seed 1). */
+const SOFTWARE = "Brackline 0.1.0";
+const BOOTSTRAP = { draws: 2000, seed: 1 };
+
+async function sha256Hex(bytes: Uint8Array): Promise<string | undefined> {
+  const subtle = globalThis.crypto?.subtle;
+  if (!subtle) return undefined;
+  const digest = await subtle.digest("SHA-256", bytes as BufferSource);
+  return [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, "0")).join("");
+}
+
+/** Name, role, size and SHA-256 of the files behind the analysis, for the provenance table. */
+export async function fileProvenance(surveys: TextFile[], centerline: TextFile | undefined): Promise<ProvenanceFile[]> {
+  const encoder = new TextEncoder();
+  const out: ProvenanceFile[] = [];
+  const entries: Array<[TextFile, ProvenanceFile["role"]]> = surveys.map((f) => [f, "survey"]);
+  if (centerline) entries.push([centerline, "centerline"]);
+  for (const [file, role] of entries) {
+    const bytes = encoder.encode(file.text);
+    const sha256 = await sha256Hex(bytes);
+    out.push({ name: file.name, role, bytes: bytes.length, ...(sha256 ? { sha256 } : {}) });
+  }
+  return out;
+}
+
+/** The self-contained HTML briefing of the analysed surveys (the first is the comparison's reference). */
+export function briefingHtml(
+  analyses: SurveyAnalysis[],
+  network: Channel,
+  files: ProvenanceFile[],
+  basemap: unknown,
+  dataNotice: string | undefined,
+): string {
+  const doc = buildBriefing({
+    analyses,
+    ...(network ? { network } : {}),
+    ...(basemap ? { basemap } : {}),
+    files,
+    ...(dataNotice ? { dataNotice } : {}),
+    software: SOFTWARE,
+    bootstrap: BOOTSTRAP,
+  });
+  return renderBriefingHtml(doc);
+}
