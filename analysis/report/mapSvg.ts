@@ -84,7 +84,7 @@ export function mapSvg(input: MapInput, id: string): SafeHtml {
       );
   for (const [i, z] of (input.zones ?? []).entries())
     for (const [a, b] of z.km) {
-      const g = channelStretch(network, [a, b]);
+      const g = channelStretch(network, [a, b], network.mainBranchId);
       if (!g) continue;
       const lines = g.type === "LineString" ? [g.coordinates] : g.coordinates;
       const w = Math.max(3, 13 - 3 * i);

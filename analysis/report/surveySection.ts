@@ -142,7 +142,7 @@ export function surveySection(a: ComparableSurvey, ctx: SectionContext): Briefin
       size: "wide",
       title: `Map of the estuary, survey ${f.name}`,
       caption:
-        "Channel centerline with distance marks from the mouth, stations (red ring: off the channel), the salt-intrusion point and reaction zones of the key constituents as coloured stretches. Local equirectangular projection, north up.",
+        "Channel centerline with distance marks from the mouth, stations (red ring: off the channel), the salt-intrusion point and reaction zones of the key constituents as coloured stretches of the main channel. Local equirectangular projection, north up.",
       svg: mapSvg(
         {
           network: ctx.network,
