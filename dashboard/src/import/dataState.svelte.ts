@@ -69,6 +69,9 @@ export class DataState {
   notices = $state.raw<ImportIssue[]>([]);
   /** True once the stored workspace (or the demo) has been loaded. */
   ready = $state(false);
+  /** True once the user changed anything; the untouched demo is not stored, so it stays the default. */
+  dirty = false;
+  #baseline: string | undefined;
 
   constructor(
     readonly app: AppState,
@@ -81,6 +84,7 @@ export class DataState {
   async boot(): Promise<void> {
     const text = await this.store.load().catch(() => undefined);
     if (text === undefined || !this.openText(text)) this.startDemo();
+    else this.dirty = true;
     this.ready = true;
   }
 
@@ -100,6 +104,8 @@ export class DataState {
     this.report = [];
     this.notices = [];
     this.app.selection.surveyIndex = 0;
+    this.dirty = false;
+    this.#baseline = undefined;
     this.startDemo();
   }
 
@@ -116,7 +122,17 @@ export class DataState {
   setSurveys(surveys: Survey[], selectIndex?: number): void {
     this.app.loadSurveys(surveys, this.#centerlineFile(), this.#basemap());
     if (selectIndex !== undefined) this.app.selection.surveyIndex = selectIndex;
-    void this.save();
+    this.dirty = true;
+  }
+
+  /**
+   * Called when settings or selection change (a key of their values): the first key seen once the
+   * analysis is ready is the baseline; any other marks the workspace as changed by the user.
+   */
+  noteSettings(key: string): void {
+    if (this.app.workspace.status !== "ready" || !this.ready) return;
+    this.#baseline ??= key;
+    if (key !== this.#baseline) this.dirty = true;
   }
 
   /** Changes one survey's name or river discharge [m³/s] and re-analyses. */
@@ -246,9 +262,9 @@ export class DataState {
     return exportWorkspace(toWorkspaceDocument(this.parts(), this.now().toISOString()));
   }
 
-  /** Saves the workspace in the store (only once there are surveys to keep). */
+  /** Saves the workspace in the store (once the user changed something and there are surveys to keep). */
   async save(): Promise<void> {
-    if (!this.ready || this.app.workspace.surveys.length === 0) return;
+    if (!this.ready || !this.dirty || this.app.workspace.surveys.length === 0) return;
     try {
       await this.store.save(this.exportText());
     } catch (error) {
@@ -261,6 +277,7 @@ export class DataState {
     const { workspace, issues } = importWorkspace(text);
     this.notices = issues;
     if (!workspace) return false;
+    this.dirty = true;
     const p = fromWorkspaceDocument(workspace);
     const { app } = this;
     this.mappings = p.mappings;

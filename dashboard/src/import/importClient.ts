@@ -14,16 +14,18 @@ type Pending = {
 };
 
 export class ImportClient {
-  readonly #worker: Worker;
+  #worker: Worker | undefined;
   readonly #pending = new Map<number, Pending>();
   #nextId = 1;
 
-  constructor() {
-    this.#worker = new Worker(new URL("../worker/analysis.worker.ts", import.meta.url), {
+  /** The worker, started on first use. */
+  #start(): Worker {
+    if (this.#worker) return this.#worker;
+    const worker = new Worker(new URL("../worker/analysis.worker.ts", import.meta.url), {
       type: "module",
       name: "brackline-import",
     });
-    this.#worker.onmessage = (event: MessageEvent<WorkerResponse>) => {
+    worker.onmessage = (event: MessageEvent<WorkerResponse>) => {
       const m = event.data;
       const p = this.#pending.get(m.id);
       if (!p) return;
@@ -35,17 +37,19 @@ export class ImportClient {
       if (m.type === "error") p.reject(new Error(m.message));
       else p.resolve(m);
     };
-    this.#worker.onerror = (event: ErrorEvent) => {
+    worker.onerror = (event: ErrorEvent) => {
       const error = new Error(event.message || "The import worker failed.");
       for (const p of this.#pending.values()) p.reject(error);
       this.#pending.clear();
     };
+    this.#worker = worker;
+    return worker;
   }
 
   #ask(request: WorkerRequest, onProgress?: Pending["onProgress"]): Promise<WorkerResponse> {
     return new Promise((resolve, reject) => {
       this.#pending.set(request.id, { resolve, reject, ...(onProgress ? { onProgress } : {}) });
-      this.#worker.postMessage(request);
+      this.#start().postMessage(request);
     });
   }
 
@@ -68,6 +72,7 @@ export class ImportClient {
   }
 
   terminate(): void {
-    this.#worker.terminate();
+    this.#worker?.terminate();
+    this.#worker = undefined;
   }
 }
