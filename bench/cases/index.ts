@@ -4,6 +4,7 @@ import { projectionBench } from "./projection.ts";
 import { underwayImportBench } from "./underwayImport.ts";
 import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
+import { dashboardBench } from "./dashboard.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
-export const benchCases: BenchCase[] = [mixingBench, projectionBench, underwayImportBench, underwayBinningBench, bundleSizeBench];
+export const benchCases: BenchCase[] = [mixingBench, projectionBench, underwayImportBench, underwayBinningBench, dashboardBench, bundleSizeBench];
