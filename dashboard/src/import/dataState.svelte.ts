@@ -177,7 +177,9 @@ export class DataState {
   async importFiles(files: ImportSource[]): Promise<void> {
     if (files.length === 0) return;
     this.progress = { stage: "Recognising files", fraction: 0 };
-    const inspected = await Promise.all(files.map(async (file) => ({ file, inspection: await this.client.inspect(file) })));
+    const inspected = await Promise.all(
+      files.map(async (file) => ({ file, inspection: await this.client.inspect(file) })),
+    );
     const order = (k: string) => (k === "centerline" ? 0 : k === "stationTable" ? 1 : 2);
     inspected.sort((a, b) => order(a.inspection.kind) - order(b.inspection.kind));
     const entries: ReportEntry[] = [];
@@ -268,7 +270,16 @@ export class DataState {
     try {
       await this.store.save(this.exportText());
     } catch (error) {
-      this.notices = [{ file: "workspace", row: 0, column: "", value: "", expected: `a saved workspace (${String(error)})`, severity: "warning" }];
+      this.notices = [
+        {
+          file: "workspace",
+          row: 0,
+          column: "",
+          value: "",
+          expected: `a saved workspace (${String(error)})`,
+          severity: "warning",
+        },
+      ];
     }
   }
 
@@ -289,7 +300,10 @@ export class DataState {
     app.settings.tileUrl = p.tileUrl;
     app.settings.useTiles = p.useTiles;
     app.settings.updateAnalysis(p.analysis);
-    const index = Math.max(0, p.surveys.findIndex((s) => s.name === p.selectedSurvey));
+    const index = Math.max(
+      0,
+      p.surveys.findIndex((s) => s.name === p.selectedSurvey),
+    );
     if (p.selectedConstituent) app.selection.constituent = p.selectedConstituent;
     app.loadSurveys(p.surveys, this.#centerlineFile(), this.#basemap());
     app.selection.surveyIndex = index;

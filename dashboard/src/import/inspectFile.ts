@@ -31,7 +31,9 @@ function geometryTypes(doc: unknown): string[] {
       : d.type === "Feature"
         ? [d.geometry]
         : [d as Geometry];
-  return geoms.flatMap((g) => (g?.type === "GeometryCollection" ? (g.geometries ?? []) : [g])).map((g) => g?.type ?? "");
+  return geoms
+    .flatMap((g) => (g?.type === "GeometryCollection" ? (g.geometries ?? []) : [g]))
+    .map((g) => g?.type ?? "");
 }
 
 /** Kind of a GeoJSON document: any LineString/MultiLineString makes it a centerline. */
@@ -57,9 +59,7 @@ export function inspectDelimited(head: string, fileName: string, sizeBytes: numb
   suggested.delimiter = dialect.delimiter;
   suggested.decimalComma = dialect.decimalComma;
   const roles = new Set(suggested.columns.map((c) => c.role));
-  const measured = ["salinity", "conductivity", "constituent", "temperature", "pH"].some((r) =>
-    roles.has(r as never),
-  );
+  const measured = ["salinity", "conductivity", "constituent", "temperature", "pH"].some((r) => roles.has(r as never));
   const placed = roles.has("station") && ((roles.has("latitude") && roles.has("longitude")) || roles.has("x"));
   const kind: FileKind = !measured && placed ? "stationTable" : "surveyText";
   return { fileName, sizeBytes, kind, headers, previewRows: rows, suggested, dialect };

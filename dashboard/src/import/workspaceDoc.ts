@@ -2,12 +2,7 @@
  * Builds the versioned workspace document (analysis/io) from the dashboard's
  * state, and reads the dashboard's pieces back out of one.
  */
-import {
-  createWorkspace,
-  type ColumnMapping,
-  type Survey,
-  type WorkspaceDocument,
-} from "../../../analysis/index.ts";
+import { createWorkspace, type ColumnMapping, type Survey, type WorkspaceDocument } from "../../../analysis/index.ts";
 import type { AnalysisSettings, StationColouring } from "../state/settings.svelte.ts";
 
 /** One file's import record as kept in the workspace. */
