@@ -42,6 +42,7 @@ export const SURVEY_COLUMNS: string[] = [
   "salinity",
   "temperature_C",
   "pH",
+  "discharge (m³/s)",
   ...CONSTITUENTS.map((c) => constituentHeader(c.name, c.unit)),
   "Cu_flag",
 ];
@@ -83,6 +84,7 @@ export function sampleSurvey(model: SurveyModel, plans: StationPlan[], rng: Seed
       salinity: fixed(sObs, 3),
       temperature_C: fixed(temp, 2),
       pH: fixed(ph, 3),
+      "discharge (m³/s)": fixed(spec.dischargeM3s, 0),
       Cu_flag: "1",
     };
     const trueConc: Record<string, number> = {};

@@ -15,6 +15,7 @@ const COLUMNS = [
   "salinity",
   "temperature_C",
   "pH",
+  "discharge (m³/s)",
   "Fe (nmol/L)",
   "Mn (nmol/L)",
   "Cu (nmol/L)",
