@@ -11,7 +11,8 @@ import { readBasemap } from "./basemap.ts";
 import type { BriefingDocument, BriefingInput, BriefingTable } from "./briefingTypes.ts";
 import { comparisonSection } from "./comparisonSection.ts";
 import { BRIEFING_REFERENCES, methodsParagraphs } from "./references.ts";
-import { datePart, surveySection } from "./surveySection.ts";
+import { datePart } from "./resultsTable.ts";
+import { surveySection } from "./surveySection.ts";
 
 /** The caution printed on every briefing. */
 export const BRIEFING_CAUTION =

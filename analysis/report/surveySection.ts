@@ -7,14 +7,14 @@ import type { ConstituentAnalysis } from "../mixing/result.ts";
 import type { ComparableSurvey } from "../compare/types.ts";
 import { formatSignificant } from "../compare/formatNumber.ts";
 import type { BasemapShape } from "./basemap.ts";
-import type { BriefingFigure, BriefingSurvey, BriefingTable } from "./briefingTypes.ts";
-import { estimateText } from "./estimateText.ts";
+import type { BriefingFigure, BriefingSurvey } from "./briefingTypes.ts";
+import { datePart, resultsTable } from "./resultsTable.ts";
 import { constituentFindings } from "./findings.ts";
 import { mapSvg } from "./mapSvg.ts";
 import { mixingPlotSvg } from "./mixingPlotSvg.ts";
 import { profilePlotSvg } from "./profilePlotSvg.ts";
 import { PALETTE } from "./svgFrame.ts";
-import { classWords, constituentWords } from "./wording.ts";
+import { constituentWords } from "./wording.ts";
 import { zoneColor, zoneStripSvg } from "./zoneStripSvg.ts";
 
 /** Shared context of the survey sections. */
@@ -24,45 +24,6 @@ export interface SectionContext {
   keyConstituents: string[];
   /** Unique prefix for SVG ids in this section. */
   idPrefix: string;
-}
-
-const f2 = (x: number): string => formatSignificant(x, 2);
-const kmRange = (km: Array<[number, number]>): string =>
-  km.map(([a, b]) => `${formatSignificant(a, 3)}–${formatSignificant(b, 3)}`).join(", ");
-
-/** Date part (YYYY-MM-DD) of an ISO 8601 time. */
-export const datePart = (iso: string | undefined): string | undefined => (iso ? iso.slice(0, 10) : undefined);
-
-function resultsTable(a: ComparableSurvey): BriefingTable {
-  const rows = a.constituents.map((c: ConstituentAnalysis) => [
-    `${c.name} (${c.unit})`,
-    classWords(c.class),
-    c.percentChange ? estimateText(c.percentChange, 2, true) : "—",
-    c.effectiveEndmember ? estimateText(c.effectiveEndmember, 3) : "—",
-    c.reactionZone
-      ? `${f2(c.reactionZone.salinity[0])}–${f2(c.reactionZone.salinity[1])} (${c.reactionZone.kind})`
-      : "—",
-    c.reactionZone && c.reactionZone.km.length ? kmRange(c.reactionZone.km) : "—",
-    c.maximum
-      ? `S ${f2(c.maximum.salinity.value)}${c.maximum.km.length ? `, km ${c.maximum.km.map((k) => formatSignificant(k, 3)).join(", ")}` : ""}`
-      : "—",
-    c.confidence,
-  ]);
-  return {
-    caption: `Results by constituent, survey ${a.survey.name}`,
-    header: [
-      "Constituent (unit)",
-      "Behaviour",
-      "Net change, % (95 % interval)",
-      "C*₀ (95 % interval)",
-      "Reaction zone, salinity",
-      "Zone, km from mouth",
-      "Maximum",
-      "Confidence",
-    ],
-    rows,
-    note: "Net change = 100·(C*₀ − C₀)/C₀: negative = removal in the estuary, positive = addition. Salinity is practical salinity (PSS-78, no unit).",
-  };
 }
 
 /**
