@@ -11,6 +11,8 @@ import { briefingHtml, fileProvenance } from "./briefing.ts";
 import type { ChannelOverlay } from "./overlay.ts";
 import { handleImportRequest } from "../import/workerImport.ts";
 import { isImportRequest } from "../import/importProtocol.ts";
+import { isUnderwayRequest } from "./underwayProtocol.ts";
+import { handleUnderway } from "./underwayEngine.ts";
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 
@@ -80,6 +82,7 @@ function useCenterline(id: number, file: TextFile | undefined): void {
 
 async function handle(request: WorkerRequest): Promise<void> {
   if (isImportRequest(request)) return handleImportRequest(request, post);
+  if (isUnderwayRequest(request)) return handleUnderway(request, (m, transfer) => scope.postMessage(m, transfer ?? []));
   if (request.type === "briefing") {
     const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
     const provenance = await fileProvenance(files, centerlineFile);

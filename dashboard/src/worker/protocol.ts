@@ -9,6 +9,7 @@ import type { TextFile } from "../lib/demoData.ts";
 import type { ChannelOverlay, SurveyOverlay } from "./overlay.ts";
 import type { AnalysisResult } from "./engine.ts";
 import type { ImportRequest, ImportResponse, SetSurveysRequest } from "../import/importProtocol.ts";
+import type { UnderwayRequest, UnderwayResponse } from "./underwayProtocol.ts";
 
 export type WorkerRequest =
   | {
@@ -25,7 +26,9 @@ export type WorkerRequest =
   | { type: "briefing"; id: number; basemap?: unknown; dataNotice?: string }
   /** Import flow: inspect or read a dropped file, and hand over surveys already read. */
   | ImportRequest
-  | SetSurveysRequest;
+  | SetSurveysRequest
+  /** Underway log: stream, bin and aggregate for the map (see underwayProtocol.ts). */
+  | UnderwayRequest;
 
 export type WorkerResponse =
   /** Work in progress: `done` of `total` steps of `stage`. */
@@ -44,6 +47,8 @@ export type WorkerResponse =
   | { type: "done"; id: number }
   /** Answers of the import flow (see import/importProtocol.ts). */
   | ImportResponse
+  /** Underway log progress and result (see underwayProtocol.ts). */
+  | UnderwayResponse
   | { type: "error"; id: number; message: string }
   /** The briefing as one self-contained HTML document. */
   | { type: "briefing"; id: number; html: string };
