@@ -66,17 +66,25 @@ const FN = "binUnderway";
  *   or an unknown branch id; TypeError when by is "km" without a projection
  * @see Welford, B. P. (1962) Technometrics 4(3), 419–420 (running mean and variance).
  */
-export function binUnderway(data: UnderwayData, projection: UnderwayProjection | undefined, options: UnderwayBinOptions): UnderwayBins {
+export function binUnderway(
+  data: UnderwayData,
+  projection: UnderwayProjection | undefined,
+  options: UnderwayBinOptions,
+): UnderwayBins {
   const { by, width } = options;
-  if (by !== "km" && by !== "salinity") throw new RangeError(`${FN}(): options.by must be "km" or "salinity", got ${String(by)}`);
-  if (!(width > 0) || !Number.isFinite(width)) throw new RangeError(`${FN}(): options.width must be a finite number > 0, got ${width}`);
-  if (by === "km" && projection === undefined) throw new TypeError(`${FN}(): binning by "km" needs a projection (projectUnderway)`);
+  if (by !== "km" && by !== "salinity")
+    throw new RangeError(`${FN}(): options.by must be "km" or "salinity", got ${String(by)}`);
+  if (!(width > 0) || !Number.isFinite(width))
+    throw new RangeError(`${FN}(): options.width must be a finite number > 0, got ${width}`);
+  if (by === "km" && projection === undefined)
+    throw new TypeError(`${FN}(): binning by "km" needs a projection (projectUnderway)`);
   if (projection !== undefined && projection.alongChannelKm.length !== data.n)
     throw new RangeError(`${FN}(): projection has ${projection.alongChannelKm.length} records but data has ${data.n}`);
   let branch = -1;
   if (options.branchId !== undefined) {
     branch = projection?.branchIds.indexOf(options.branchId) ?? -1;
-    if (branch < 0) throw new RangeError(`${FN}(): options.branchId '${options.branchId}' is not a branch of the projection`);
+    if (branch < 0)
+      throw new RangeError(`${FN}(): options.branchId '${options.branchId}' is not a branch of the projection`);
   }
   const maxOff = options.maxOffsetM ?? Number.POSITIVE_INFINITY;
   const sal = data.columns.find((c) => c.name === "salinity");
@@ -91,7 +99,8 @@ export function binUnderway(data: UnderwayData, projection: UnderwayProjection |
     const onBranch = branch < 0 || (placed && projection!.branchIndex[i] === branch);
     const near = !placed || Math.abs(projection!.offsetM[i]!) <= maxOff;
     if (by === "km") x = placed ? projection!.alongChannelKm[i]! : Number.NaN;
-    else if (sal !== undefined && (sal.status[i] === CELL_MEASURED || sal.status[i] === CELL_DERIVED)) x = sal.values[i]!;
+    else if (sal !== undefined && (sal.status[i] === CELL_MEASURED || sal.status[i] === CELL_DERIVED))
+      x = sal.values[i]!;
     if (Number.isNaN(x) || !onBranch || !near) {
       outside++;
       continue;
@@ -138,7 +147,8 @@ function accumulate(
     lat.add(b, data.latDeg[i]!);
     if (projection !== undefined && projection.branchIndex[i]! >= 0) km.add(b, projection.alongChannelKm[i]!);
     if (!Number.isNaN(data.timeMs[i]!)) time.add(b, data.timeMs[i]!);
-    for (const { c, s } of vars) if (c.status[i] === CELL_MEASURED || c.status[i] === CELL_DERIVED) s.add(b, c.values[i]!);
+    for (const { c, s } of vars)
+      if (c.status[i] === CELL_MEASURED || c.status[i] === CELL_DERIVED) s.add(b, c.values[i]!);
   }
   const out: UnderwayBin[] = [];
   for (let b = 0; b < size; b++) {

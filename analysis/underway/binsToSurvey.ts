@@ -19,7 +19,8 @@ export interface BinsToSurveyOptions {
 const CORE = new Set(["salinity", "temperatureC"]);
 
 function cell(stats: BinStats | undefined, binN: number): ValueCell {
-  if (stats === undefined) return { value: undefined, original: `no value among ${binN} records`, status: "missing", accepted: true };
+  if (stats === undefined)
+    return { value: undefined, original: `no value among ${binN} records`, status: "missing", accepted: true };
   const sd = stats.sd === undefined ? "" : `, sd ${stats.sd.toPrecision(4)}`;
   return {
     value: stats.mean,

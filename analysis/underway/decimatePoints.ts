@@ -55,11 +55,17 @@ function mercY(lat: number): number {
  * @throws RangeError when arrays differ in length or maxPoints < 1
  * @see Snyder, J. P. (1987) Map Projections — A Working Manual, USGS PP 1395, eq. 7-1, 7-2 (Mercator).
  */
-export function decimatePoints(lonDeg: Float64Array, latDeg: Float64Array, values: readonly Float64Array[], options: DecimateOptions): DecimatedPoints {
+export function decimatePoints(
+  lonDeg: Float64Array,
+  latDeg: Float64Array,
+  values: readonly Float64Array[],
+  options: DecimateOptions,
+): DecimatedPoints {
   const n = lonDeg.length;
   if (latDeg.length !== n || values.some((v) => v.length !== n))
     throw new RangeError(`decimatePoints(): lonDeg, latDeg and values must have the same length (${n})`);
-  if (!(options.maxPoints >= 1)) throw new RangeError(`decimatePoints(): options.maxPoints must be ≥ 1, got ${options.maxPoints}`);
+  if (!(options.maxPoints >= 1))
+    throw new RangeError(`decimatePoints(): options.maxPoints must be ≥ 1, got ${options.maxPoints}`);
   const [w, s, e, nb] = options.bounds ?? [-Infinity, -Infinity, Infinity, Infinity];
   const pidx = new Int32Array(n);
   const px = new Float64Array(n);
@@ -136,7 +142,14 @@ function assign(p: Considered, cellM: number): Cells {
   return { of, order };
 }
 
-function summarise(idx: Int32Array, cells: Cells, lonDeg: Float64Array, latDeg: Float64Array, values: readonly Float64Array[], cellM: number): DecimatedPoints {
+function summarise(
+  idx: Int32Array,
+  cells: Cells,
+  lonDeg: Float64Array,
+  latDeg: Float64Array,
+  values: readonly Float64Array[],
+  cellM: number,
+): DecimatedPoints {
   const m = cells.order.length;
   const count = new Uint32Array(m);
   const lon = new Float64Array(m);

@@ -18,7 +18,8 @@ export interface UnderwayColumnRole {
   unit?: string;
 }
 
-const FLUORESCENCE = /^(fluorescence|fluor|fluo|fl|chl|chla|chl a|chlorophyll|chlorophyll a|chl fluorescence|chlorophyll fluorescence)$/;
+const FLUORESCENCE =
+  /^(fluorescence|fluor|fluo|fl|chl|chla|chl a|chlorophyll|chlorophyll a|chl fluorescence|chlorophyll fluorescence)$/;
 const TURBIDITY = /^(turbidity|turb|tu|backscatter turbidity)$/;
 const DATE_IN_TEXT = /^\d{1,4}[-/.]\d{1,2}[-/.]\d{1,4}[T ]/;
 const TIME_ONLY = /^(time|time utc|time of day|hhmmss)$/;
@@ -41,7 +42,10 @@ function simple(name: string): string {
  * @returns the recognised columns, in header order
  * @throws TypeError when headers is not an array of strings (from suggestMapping)
  */
-export function underwayColumnRoles(headers: readonly string[], sampleRows: readonly (readonly string[])[] = []): UnderwayColumnRole[] {
+export function underwayColumnRoles(
+  headers: readonly string[],
+  sampleRows: readonly (readonly string[])[] = [],
+): UnderwayColumnRole[] {
   const mapping = suggestMapping(headers, sampleRows);
   const out: UnderwayColumnRole[] = [];
   const used = new Set<UnderwayRole>();

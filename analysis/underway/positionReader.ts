@@ -30,7 +30,13 @@ export class PositionReader {
       log.add("no position columns", file, 1, "", "", "latitude and longitude columns (e.g. lat, lon)");
   }
 
-  #cell(fields: string[], row: number, index: number, col: UnderwayColumnRole, axis: "latitude" | "longitude"): number | string {
+  #cell(
+    fields: string[],
+    row: number,
+    index: number,
+    col: UnderwayColumnRole,
+    axis: "latitude" | "longitude",
+  ): number | string {
     const text = fields[col.index] ?? "";
     const quick = this.decimalComma ? undefined : fastDecimal(text);
     if (quick !== undefined && Math.abs(quick) <= (axis === "latitude" ? 90 : 180)) return quick;
@@ -38,7 +44,14 @@ export class PositionReader {
     if (v !== undefined) return v;
     if (isMissingText(text)) return `no ${axis}`;
     (this.originalText[col.header] ??= new Map()).set(index, text);
-    this.log.add(`unreadable ${axis}`, this.file, row, col.header, text, `a ${axis} in decimal degrees or degrees and minutes`);
+    this.log.add(
+      `unreadable ${axis}`,
+      this.file,
+      row,
+      col.header,
+      text,
+      `a ${axis} in decimal degrees or degrees and minutes`,
+    );
     return `unreadable ${axis}`;
   }
 

@@ -84,7 +84,9 @@ export async function readUnderwayStream(
 ): Promise<UnderwayImport> {
   requireOptions("readUnderwayStream", options);
   if (source === null || typeof source !== "object")
-    throw new TypeError(`readUnderwayStream(): source must be a ReadableStream or an iterable of chunks, got ${typeof source}`);
+    throw new TypeError(
+      `readUnderwayStream(): source must be a ReadableStream or an iterable of chunks, got ${typeof source}`,
+    );
   const counter = { size: 0 };
   const chunks = decode(source, counter);
   const early: string[] = [];

@@ -94,7 +94,16 @@ export class UnderwayRecordReader {
     if (t !== undefined) {
       this.#order = detectDateOrder(sample.map((r) => r[t.index] ?? ""));
       this.#time = { col: t.index, header: t.header, dayCol: t.role === "date" ? (col("timeOfDay")?.index ?? -1) : -1 };
-    } else this.#log.add("no time column", this.#file, 1, "", headers.join(", "), "a time column (e.g. time, date_time)", "warning");
+    } else
+      this.#log.add(
+        "no time column",
+        this.#file,
+        1,
+        "",
+        headers.join(", "),
+        "a time column (e.g. time, date_time)",
+        "warning",
+      );
     this.#position = new PositionReader(this.#roles, this.#file, this.#dialect.decimalComma, this.#log);
     this.#values = new ValueColumns(this.#roles, this.#file, this.#dialect.decimalComma, this.#log);
     for (const r of pending) this.#read(r);
@@ -105,7 +114,15 @@ export class UnderwayRecordReader {
     const s = this.#summary;
     s.rowsRead += 1;
     if (record.parseErrors.length > 0)
-      this.#log.add("malformed record", this.#file, row, "", fields.join(this.#dialect.delimiter), record.parseErrors.join("; "), "warning");
+      this.#log.add(
+        "malformed record",
+        this.#file,
+        row,
+        "",
+        fields.join(this.#dialect.delimiter),
+        record.parseErrors.join("; "),
+        "warning",
+      );
     this.#rows.push(row);
     const tm = this.#time;
     if (tm === undefined) this.#timeMs.push(Number.NaN);
@@ -114,7 +131,14 @@ export class UnderwayRecordReader {
       const r = readTimeCell(text, this.#order, tm.dayCol >= 0 ? (fields[tm.dayCol] ?? "") : undefined);
       if (r.status === 2) this.#timeText.set(this.#rows.length - 1, text);
       if (r.status === 2)
-        this.#log.add("unreadable time", this.#file, row, tm.header, text, "an ISO 8601 date-time (e.g. 2026-05-04T10:15:02Z) or a date and time");
+        this.#log.add(
+          "unreadable time",
+          this.#file,
+          row,
+          tm.header,
+          text,
+          "an ISO 8601 date-time (e.g. 2026-05-04T10:15:02Z) or a date and time",
+        );
       else if (r.status === 0 && !r.zoned) this.#zoneless = true;
       this.#timeMs.push(r.value);
     }

@@ -44,7 +44,15 @@ export class ValueColumns {
     const t = by("temperature");
     if (t !== undefined) {
       if (t.unitText === "" || t.unit === "°C") this.#temperature = make(t, "temperatureC", "°C");
-      else log.add("unknown temperature unit", file, 1, t.header, t.unitText, "temperature in °C (ITS-90); column not imported");
+      else
+        log.add(
+          "unknown temperature unit",
+          file,
+          1,
+          t.header,
+          t.unitText,
+          "temperature in °C (ITS-90); column not imported",
+        );
     }
     const s = by("salinity");
     const c = by("conductivity");
@@ -52,14 +60,29 @@ export class ValueColumns {
     else if (c !== undefined) {
       this.#condFactor = c.unit === undefined ? undefined : COND_TO_MS_CM[c.unit];
       if (this.#condFactor === undefined)
-        log.add("unknown conductivity unit", file, 1, c.header, c.unitText, "a conductivity unit in the header (mS/cm, µS/cm or S/m)");
+        log.add(
+          "unknown conductivity unit",
+          file,
+          1,
+          c.header,
+          c.unitText,
+          "a conductivity unit in the header (mS/cm, µS/cm or S/m)",
+        );
       else if (this.#temperature === undefined)
-        log.add("no temperature for conductivity", file, 1, c.header, "", "a temperature column (°C) to compute salinity from conductivity");
+        log.add(
+          "no temperature for conductivity",
+          file,
+          1,
+          c.header,
+          "",
+          "a temperature column (°C) to compute salinity from conductivity",
+        );
       else {
         this.#cond = c;
         this.#salinity = make(c, "salinity", "PSU");
       }
-    } else log.add("no salinity column", file, 1, "", "", "a salinity (or conductivity and temperature) column", "warning");
+    } else
+      log.add("no salinity column", file, 1, "", "", "a salinity (or conductivity and temperature) column", "warning");
     for (const role of ["fluorescence", "turbidity"] as const) {
       const r = by(role);
       if (r !== undefined) make(r, role, r.unit ?? r.unitText);
@@ -105,7 +128,8 @@ export class ValueColumns {
     }
     // Pressure 0 dbar: flow-through intakes sit about a metre below the surface (common practice).
     const sp = pss78Salinity(c.value * this.#condFactor!, tC, 0);
-    if (sp === undefined || !Number.isFinite(sp)) return this.#bad(b, row, index, text, "a conductivity that converts to practical salinity (PSS-78)");
+    if (sp === undefined || !Number.isFinite(sp))
+      return this.#bad(b, row, index, text, "a conductivity that converts to practical salinity (PSS-78)");
     b.values.push(sp);
     b.status.push(CELL_DERIVED);
   }

@@ -15,7 +15,9 @@ const kB = (bytes: number) => bytes / 1000;
 /** Scripts index.html loads at once: the module entry and its modulepreload links. */
 function initialScripts(): string[] {
   const html = readFileSync(join(DIST, "index.html"), "utf8");
-  const refs = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*rel="modulepreload"[^>]*\shref)="([^"]+)"/g)].map((m) => m[1]!);
+  const refs = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*rel="modulepreload"[^>]*\shref)="([^"]+)"/g)].map(
+    (m) => m[1]!,
+  );
   return refs.filter((r) => isJs(r)).map((r) => join(DIST, r.replace(/^\.\//, "")));
 }
 
@@ -44,7 +46,9 @@ async function mapLibrariesOnly(): Promise<number> {
       base: "./",
       build: { outDir: join(root, "dist"), target: "es2022", emptyOutDir: true, chunkSizeWarningLimit: 1e5 },
     });
-    return filesUnder(join(root, "dist")).filter(isJs).reduce((s, p) => s + gz(p), 0);
+    return filesUnder(join(root, "dist"))
+      .filter(isJs)
+      .reduce((s, p) => s + gz(p), 0);
   } finally {
     rmSync(root, { recursive: true, force: true });
   }

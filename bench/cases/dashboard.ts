@@ -7,7 +7,8 @@ import type { BenchCase, BenchRow } from "../benchCase.ts";
 import { chromiumAvailable, openDashboard } from "../../tests/e2e/browser.ts";
 import { ensureDist } from "../fixtures/dashboardDist.ts";
 
-const READY = '[data-analysis-status="ready"] [data-map-ready="true"], [data-analysis-status="ready"][data-map-ready="true"]';
+const READY =
+  '[data-analysis-status="ready"] [data-map-ready="true"], [data-analysis-status="ready"][data-map-ready="true"]';
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -89,7 +90,9 @@ export const dashboardBench: BenchCase = {
       const emptyLoad = (await blank.evaluate(() => performance.now())) as number;
       await blank.close();
 
-      const options = await s.page.locator('[data-testid="constituent-select"] option').evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value));
+      const options = await s.page
+        .locator('[data-testid="constituent-select"] option')
+        .evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value));
       if (options.length < 2) throw new Error(`the demo has ${options.length} constituents; need 2 to time a change`);
       const times: number[] = [];
       const noop: number[] = [];

@@ -32,7 +32,9 @@ export const underwayBinningBench: BenchCase = {
       proj.push(performance.now() - t0);
       t0 = performance.now();
       const p = projectUnderway(data, net);
-      bins = binUnderway(data, p, { by: "km", width: 0.5 }).bins.length + binUnderway(data, p, { by: "salinity", width: 1 }).bins.length;
+      bins =
+        binUnderway(data, p, { by: "km", width: 0.5 }).bins.length +
+        binUnderway(data, p, { by: "salinity", width: 1 }).bins.length;
       full.push(performance.now() - t0);
       t0 = performance.now();
       points = decimatePoints(data.lonDeg, data.latDeg, [data.columns[0]!.values], { maxPoints: 20_000 }).count.length;

@@ -20,10 +20,15 @@ interface ChildResult {
 
 function child(mode: string, file: string): Promise<ChildResult> {
   return new Promise((resolve, reject) => {
-    execFile(process.execPath, ["--import", "tsx", CHILD, mode, file], { maxBuffer: 1 << 20 }, (error, stdout, stderr) => {
-      if (error) reject(new Error(`${mode}: ${error.message} ${stderr}`));
-      else resolve(JSON.parse(stdout.trim().split("\n").at(-1)!) as ChildResult);
-    });
+    execFile(
+      process.execPath,
+      ["--import", "tsx", CHILD, mode, file],
+      { maxBuffer: 1 << 20 },
+      (error, stdout, stderr) => {
+        if (error) reject(new Error(`${mode}: ${error.message} ${stderr}`));
+        else resolve(JSON.parse(stdout.trim().split("\n").at(-1)!) as ChildResult);
+      },
+    );
   });
 }
 
@@ -46,7 +51,8 @@ export const underwayImportBench: BenchCase = {
       const idle = await child("idle", file);
       const stream = await child("stream", file);
       const papa = await child("papaparse", file);
-      if (stream.rows !== N || papa.rows !== N) throw new Error(`rows read: stream ${stream.rows}, papaparse ${papa.rows}, expected ${N}`);
+      if (stream.rows !== N || papa.rows !== N)
+        throw new Error(`rows read: stream ${stream.rows}, papaparse ${papa.rows}, expected ${N}`);
       return [
         {
           name: `import a 1e6-record underway CSV (${mb.toFixed(0)} MB, 7 columns) streaming into typed columns`,

@@ -4,7 +4,14 @@ import { parseArgs } from "node:util";
 import Papa from "papaparse";
 import type { Command } from "../command.ts";
 import type { UnderwayBins, UnderwayImport } from "../../analysis/index.ts";
-import { analyzeSurvey, binUnderway, binsToSurvey, projectUnderway, readUnderwayStream, SCREENING_CAUTION } from "../../analysis/index.ts";
+import {
+  analyzeSurvey,
+  binUnderway,
+  binsToSurvey,
+  projectUnderway,
+  readUnderwayStream,
+  SCREENING_CAUTION,
+} from "../../analysis/index.ts";
 import { loadCenterline, parseCount } from "../loadInputs.ts";
 import { surveyJson } from "../formatResults.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
@@ -38,7 +45,8 @@ ${SCREENING_CAUTION}`;
 function positiveNumber(name: string, text: string | undefined, fallback: number | undefined): number | undefined {
   if (text === undefined) return fallback;
   const x = Number(text);
-  if (text.trim() === "" || !Number.isFinite(x) || x <= 0) throw new UsageError(`--${name}: expected a number > 0; got "${text}"`);
+  if (text.trim() === "" || !Number.isFinite(x) || x <= 0)
+    throw new UsageError(`--${name}: expected a number > 0; got "${text}"`);
   return x;
 }
 
@@ -50,7 +58,9 @@ async function readLog(path: string, err: (t: string) => void): Promise<Underway
     size = st.size;
   } catch (error) {
     if (error instanceof InputError) throw error;
-    throw new InputError(`${path}: cannot read the underway log (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`);
+    throw new InputError(
+      `${path}: cannot read the underway log (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`,
+    );
   }
   let shown = 0;
   return readUnderwayStream(createReadStream(path, { highWaterMark: 1 << 20 }), {
@@ -110,7 +120,8 @@ export const underwayCommand: Command = {
       },
     });
     if (positionals.length !== 1) throw new UsageError(`expected one underway log, got ${positionals.length}`);
-    if (values.format !== "json" && values.format !== "csv") throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
+    if (values.format !== "json" && values.format !== "csv")
+      throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
     const by = values.bin ?? (values.centerline ? "km" : "salinity");
     if (by !== "km" && by !== "salinity") throw new UsageError(`--bin: expected km or salinity; got "${by}"`);
     if (by === "km" && !values.centerline) throw new UsageError("--bin km needs --centerline");
@@ -121,17 +132,26 @@ export const underwayCommand: Command = {
     const read = await readLog(file, io.err);
     const s = read.summary;
     const reasons = Object.entries(s.rejectedByReason).map(([r, n]) => `${n} ${r}`);
-    io.err(`import: ${s.rowsRead} records read, ${s.rowsAccepted} accepted, ${s.rowsRejected} rejected${reasons.length ? ` (${reasons.join("; ")})` : ""}; ${s.issueCount} problems`);
-    for (const i of read.issues.slice(0, 20)) io.err(`  ${i.severity}: ${i.file} row ${i.row}, column "${i.column}", value "${i.value}": expected ${i.expected}`);
+    io.err(
+      `import: ${s.rowsRead} records read, ${s.rowsAccepted} accepted, ${s.rowsRejected} rejected${reasons.length ? ` (${reasons.join("; ")})` : ""}; ${s.issueCount} problems`,
+    );
+    for (const i of read.issues.slice(0, 20))
+      io.err(
+        `  ${i.severity}: ${i.file} row ${i.row}, column "${i.column}", value "${i.value}": expected ${i.expected}`,
+      );
     if (s.rowsAccepted === 0) {
       const first = read.issues.find((i) => i.severity === "error");
       throw new InputError(
-        first ? `${first.file}: row ${first.row}, column "${first.column}", value "${first.value}": expected ${first.expected}` : `${file}: no record with a position`,
+        first
+          ? `${first.file}: row ${first.row}, column "${first.column}", value "${first.value}": expected ${first.expected}`
+          : `${file}: no record with a position`,
       );
     }
     const projection = network ? projectUnderway(read.data, network) : undefined;
     const bins = binUnderway(read.data, projection, { by, width, ...(maxOffsetM !== undefined ? { maxOffsetM } : {}) });
-    io.err(`binned ${s.rowsAccepted - bins.recordsOutside} records into ${bins.bins.length} ${by} bins of width ${width}`);
+    io.err(
+      `binned ${s.rowsAccepted - bins.recordsOutside} records into ${bins.bins.length} ${by} bins of width ${width}`,
+    );
     let text: string;
     if (values.format === "csv") text = binsCsv(bins);
     else {
@@ -152,7 +172,14 @@ export const underwayCommand: Command = {
           columns: read.headers.map((header, i) => ({ header, role: read.roles[i] })),
           issues: read.issues,
         },
-        bins: { ...bins, bins: bins.bins.map((b) => ({ ...b, start: b.startMs === undefined ? null : new Date(b.startMs).toISOString(), end: b.endMs === undefined ? null : new Date(b.endMs).toISOString() })) },
+        bins: {
+          ...bins,
+          bins: bins.bins.map((b) => ({
+            ...b,
+            start: b.startMs === undefined ? null : new Date(b.startMs).toISOString(),
+            end: b.endMs === undefined ? null : new Date(b.endMs).toISOString(),
+          })),
+        },
         ...(mixing ? { mixing } : {}),
       };
       text = `${JSON.stringify(doc, null, 2)}\n`;

@@ -25,7 +25,11 @@ describe("brackline underway", () => {
     const doc = JSON.parse(out) as {
       caution: string;
       import: { summary: { rowsRead: number; rowsAccepted: number }; columns: Array<{ header: string; role: string }> };
-      bins: { by: string; width: number; bins: Array<{ n: number; lower: number; stats: Record<string, { mean: number }> }> };
+      bins: {
+        by: string;
+        width: number;
+        bins: Array<{ n: number; lower: number; stats: Record<string, { mean: number }> }>;
+      };
     };
     expect(doc.caution).toMatch(/screening/i);
     expect(doc.import.summary).toMatchObject({ rowsRead: 6000, rowsAccepted: 6000 });
@@ -45,9 +49,25 @@ describe("brackline underway", () => {
 
   it("runs the mixing analysis on the bins with --mixing and writes to --out", async () => {
     const out = join(dir, "mix.json");
-    const r = await run(["underway", LOG, "--centerline", LINE, "--mouth", "start", "--bin", "salinity", "--mixing", "--draws", "100", "--out", out]);
+    const r = await run([
+      "underway",
+      LOG,
+      "--centerline",
+      LINE,
+      "--mouth",
+      "start",
+      "--bin",
+      "salinity",
+      "--mixing",
+      "--draws",
+      "100",
+      "--out",
+      out,
+    ]);
     expect(r.code).toBe(0);
-    const doc = JSON.parse(readFileSync(out, "utf8")) as { mixing: { constituents: Array<{ name: string; class: string }> } };
+    const doc = JSON.parse(readFileSync(out, "utf8")) as {
+      mixing: { constituents: Array<{ name: string; class: string }> };
+    };
     expect(doc.mixing.constituents.map((c) => c.name)).toEqual(["fluorescence", "turbidity"]);
   });
 

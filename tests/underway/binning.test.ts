@@ -12,7 +12,10 @@ import { expectWithin } from "../helpers/tolerance.ts";
 import { inventedChannel, underwayCsv } from "../../bench/fixtures/underwayLog.ts";
 
 // Six records on a straight north-running channel (mouth at 35.0 N): km ≈ 0.1, 0.3, 0.6, 0.9, 1.2, 1.4.
-const LINE = { type: "LineString" as const, coordinates: [[-76, 35] as [number, number], [-76, 35.1] as [number, number]] };
+const LINE = {
+  type: "LineString" as const,
+  coordinates: [[-76, 35] as [number, number], [-76, 35.1] as [number, number]],
+};
 const TEXT = [
   "time,lat,lon,salinity,temperature (°C),fluorescence (RFU)",
   "2026-05-04T10:00:00Z,35.0009,-76,10,20,1",
@@ -51,7 +54,12 @@ describe("binUnderway() against hand-computed statistics (common practice: mean,
     expectWithin(b.bins[0]!.stats.salinity!.sd, 2, 1e-12, "sd of 10, 12, 14 = 2");
     expectWithin(b.bins[0]!.stats.temperatureC!.mean, 21, 1e-12, "mean of 20, 21, 22");
     expectWithin(b.bins[1]!.stats.fluorescence!.mean, 4.5, 1e-12, "mean of 4, 5");
-    expectWithin(b.bins[0]!.meanKm, (p.alongChannelKm[0]! + p.alongChannelKm[1]! + p.alongChannelKm[2]!) / 3, 1e-12, "mean km");
+    expectWithin(
+      b.bins[0]!.meanKm,
+      (p.alongChannelKm[0]! + p.alongChannelKm[1]! + p.alongChannelKm[2]!) / 3,
+      1e-12,
+      "mean km",
+    );
   });
 
   it("leaves out records beyond maxOffsetM and counts them", () => {
@@ -72,7 +80,9 @@ describe("binsToSurvey() round trip into analyzeSurvey()", () => {
     let k = 0;
     for (let s = 0; s <= 30; s += 0.25) {
       const lat = 35 + (30 - s) * 0.002;
-      lines.push(`${new Date(Date.UTC(2026, 4, 4, 10, 0, k++)).toISOString()},${lat.toFixed(5)},-76,${s},${(10 - 0.25 * s).toFixed(4)}`);
+      lines.push(
+        `${new Date(Date.UTC(2026, 4, 4, 10, 0, k++)).toISOString()},${lat.toFixed(5)},-76,${s},${(10 - 0.25 * s).toFixed(4)}`,
+      );
     }
     const r = readUnderwayText(lines.join("\n"), { fileName: "lin.csv" });
     const net = buildChannelNetwork(LINE, { mouth: "start" });

@@ -90,17 +90,27 @@ describe("readUnderwayText() dialects and coordinate forms", () => {
 describe("readUnderwayText() salinity from conductivity", () => {
   it("derives practical salinity 35 from C = 42.914 mS/cm at t68 = 15 °C, 0 dbar (UNESCO 1983 PSS-78 definition, C(35,15,0); t90 = t68/1.00024, Saunders 1990)", () => {
     const t90 = 15 / 1.00024;
-    const r = readUnderwayText(`time,lat,lon,Conductivity (mS/cm),Temperature (°C)\n2026-05-04T10:00:00Z,35,-76,42.914,${t90}\n`, {
-      fileName: "c.csv",
-    });
+    const r = readUnderwayText(
+      `time,lat,lon,Conductivity (mS/cm),Temperature (°C)\n2026-05-04T10:00:00Z,35,-76,42.914,${t90}\n`,
+      {
+        fileName: "c.csv",
+      },
+    );
     const s = col(r, "salinity");
     expect(s.status[0]).toBe(CELL_DERIVED);
     expectWithin(s.values[0], 35, 1e-4, "PSS-78 reference conductivity (UNESCO 1983)");
   });
 
   it("converts S/m headers and agrees with practicalSalinityFromConductivity() exactly", () => {
-    const r = readUnderwayText("time,lat,lon,cond (S/m),temp (°C)\n2026-05-04T10:00:00Z,35,-76,1.2,18\n", { fileName: "c.csv" });
-    expectWithin(col(r, "salinity").values[0], practicalSalinityFromConductivity(12, 18, 0), 1e-12, "1.2 S/m = 12 mS/cm");
+    const r = readUnderwayText("time,lat,lon,cond (S/m),temp (°C)\n2026-05-04T10:00:00Z,35,-76,1.2,18\n", {
+      fileName: "c.csv",
+    });
+    expectWithin(
+      col(r, "salinity").values[0],
+      practicalSalinityFromConductivity(12, 18, 0),
+      1e-12,
+      "1.2 S/m = 12 mS/cm",
+    );
   });
 
   it("refuses a conductivity column without a unit (file-level issue, no salinity guessed)", () => {
@@ -130,7 +140,11 @@ describe("readUnderwayStream()", () => {
     const pieces: string[] = [];
     for (let i = 0; i < text.length; i += 4093) pieces.push(text.slice(i, i + 4093));
     const progress: number[] = [];
-    const streamed = await readUnderwayStream(pieces, { fileName: "log.csv", totalSize: text.length, onProgress: (f) => progress.push(f) });
+    const streamed = await readUnderwayStream(pieces, {
+      fileName: "log.csv",
+      totalSize: text.length,
+      onProgress: (f) => progress.push(f),
+    });
     expect(streamed.summary).toEqual(whole.summary);
     expect(Array.from(streamed.data.latDeg)).toEqual(Array.from(whole.data.latDeg));
     for (const c of whole.data.columns) {
@@ -151,7 +165,9 @@ describe("readUnderwayStream()", () => {
   });
 
   it("throws TypeError naming readUnderwayStream for a source that is not a stream", async () => {
-    await expect(readUnderwayStream(42 as unknown as string[], { fileName: "x" })).rejects.toThrow(/readUnderwayStream\(\): source/);
+    await expect(readUnderwayStream(42 as unknown as string[], { fileName: "x" })).rejects.toThrow(
+      /readUnderwayStream\(\): source/,
+    );
   });
 
   it("accepts the generator of the invented log directly and reads all its records", async () => {

@@ -27,7 +27,10 @@ function salinityLut(): Uint8Array {
 }
 
 /** Positions (float32 pairs) and colours (RGBA bytes) of the points, for binary deck.gl attributes. */
-export function underwayAttributes(points: UnderwayPoints, alpha = 230): { positions: Float32Array; colours: Uint8Array } {
+export function underwayAttributes(
+  points: UnderwayPoints,
+  alpha = 230,
+): { positions: Float32Array; colours: Uint8Array } {
   const n = points.lonDeg.length;
   const positions = new Float32Array(n * 2);
   const colours = new Uint8Array(n * 4);
@@ -62,12 +65,17 @@ export interface UnderwayLayerOptions {
 export function underwayLayer(points: UnderwayPoints, options: UnderwayLayerOptions = {}): ScatterplotLayer {
   const n = points.lonDeg.length;
   if (n > MAX_UNDERWAY_POINTS)
-    throw new RangeError(`underwayLayer(): ${n} points is more than ${MAX_UNDERWAY_POINTS}; aggregate with decimatePoints first`);
+    throw new RangeError(
+      `underwayLayer(): ${n} points is more than ${MAX_UNDERWAY_POINTS}; aggregate with decimatePoints first`,
+    );
   const { positions, colours } = underwayAttributes(points);
   return new ScatterplotLayer({
     id: options.id ?? "underway",
     visible: options.visible ?? true,
-    data: { length: n, attributes: { getPosition: { value: positions, size: 2 }, getFillColor: { value: colours, size: 4 } } },
+    data: {
+      length: n,
+      attributes: { getPosition: { value: positions, size: 2 }, getFillColor: { value: colours, size: 4 } },
+    },
     radiusUnits: "pixels",
     getRadius: options.radiusPx ?? 3,
     stroked: false,

@@ -17,9 +17,14 @@ import type { UnderwayRequest, UnderwayResponse } from "./underwayProtocol.ts";
 type Post = (message: UnderwayResponse, transfer?: Transferable[]) => void;
 
 async function read(request: UnderwayRequest, post: Post): Promise<UnderwayImport> {
-  const onProgress = (fraction: number) => post({ type: "underwayProgress", id: request.id, fraction, stage: `Reading ${request.name}` });
+  const onProgress = (fraction: number) =>
+    post({ type: "underwayProgress", id: request.id, fraction, stage: `Reading ${request.name}` });
   if (typeof request.file === "string") return readUnderwayText(request.file, { fileName: request.name, onProgress });
-  return readUnderwayStream(request.file.stream(), { fileName: request.name, totalSize: request.file.size, onProgress });
+  return readUnderwayStream(request.file.stream(), {
+    fileName: request.name,
+    totalSize: request.file.size,
+    onProgress,
+  });
 }
 
 /** Handles one underway request; errors propagate to the worker's error reply. */
@@ -27,7 +32,10 @@ export async function handleUnderway(request: UnderwayRequest, post: Post): Prom
   const imported = await read(request, post);
   const { data } = imported;
   post({ type: "underwayProgress", id: request.id, fraction: 1, stage: "Placing records on the channel" });
-  const network = request.centerline === undefined ? undefined : buildChannelNetwork(request.centerline as CenterlineGeoJson, { mouth: "start" });
+  const network =
+    request.centerline === undefined
+      ? undefined
+      : buildChannelNetwork(request.centerline as CenterlineGeoJson, { mouth: "start" });
   const projection = network ? projectUnderway(data, network) : undefined;
   const by = projection ? request.bin.by : "salinity";
   const bins = binUnderway(data, projection, { by, width: request.bin.width });

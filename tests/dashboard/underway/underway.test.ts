@@ -12,7 +12,15 @@ const channel = { paths: [{ branchId: "main", path: inventedChannel().coordinate
 async function runWorker(text: string, maxPoints: number): Promise<UnderwayResponse[]> {
   const out: UnderwayResponse[] = [];
   await handleUnderway(
-    { type: "underway", id: 7, file: text, name: "log.csv", maxPoints, centerline: centerlineOf(channel), bin: { by: "km", width: 1 } },
+    {
+      type: "underway",
+      id: 7,
+      file: text,
+      name: "log.csv",
+      maxPoints,
+      centerline: centerlineOf(channel),
+      bin: { by: "km", width: 1 },
+    },
     (m) => out.push(m),
   );
   return out;
