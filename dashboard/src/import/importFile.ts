@@ -61,7 +61,11 @@ export async function importFile(
   switch (choice.kind) {
     case "surveyText":
       return fromResult(
-        await readSurveyStream(file.stream() as ReadableStream<Uint8Array>, { ...options, totalSize: file.size }),
+        await readSurveyStream(
+          // Streamed in chunks where Blob.stream() exists; otherwise read whole (older engines, jsdom).
+          typeof file.stream === "function" ? (file.stream() as ReadableStream<Uint8Array>) : [await file.text()],
+          { ...options, totalSize: file.size },
+        ),
       );
     case "surveyGeoJson":
       return fromResult(readGeoJsonPoints(await file.text(), options));
