@@ -26,6 +26,16 @@ export interface ImportChoice {
   stationTable?: StationTable;
 }
 
+/** Bytes per slice when a file is streamed (progress is reported once per slice). */
+export const STREAM_SLICE_BYTES = 256 * 1024;
+
+/** A Blob as a sequence of byte slices; the reader decodes UTF-8 across slice boundaries. */
+async function* blobChunks(file: Blob, sliceBytes = STREAM_SLICE_BYTES): AsyncGenerator<Uint8Array> {
+  for (let offset = 0; offset < file.size; offset += sliceBytes) {
+    yield new Uint8Array(await file.slice(offset, offset + sliceBytes).arrayBuffer());
+  }
+}
+
 function fileIssue(file: string, value: string, expected: string): FileOutcome["issues"][number] {
   return { file, row: 0, column: "", value, expected, severity: "error" };
 }
@@ -62,8 +72,8 @@ export async function importFile(
     case "surveyText":
       return fromResult(
         await readSurveyStream(
-          // Streamed in chunks where Blob.stream() exists; otherwise read whole (older engines, jsdom).
-          typeof file.stream === "function" ? (file.stream() as ReadableStream<Uint8Array>) : [await file.text()],
+          // Streamed in slices where Blob.arrayBuffer() exists; otherwise read whole (jsdom).
+          typeof file.arrayBuffer === "function" ? blobChunks(file) : [await file.text()],
           { ...options, totalSize: file.size },
         ),
       );

@@ -91,4 +91,26 @@ describe("importFile() reads with the confirmed mapping and reports every proble
     });
     expect(broken.issues[0].expected).toMatch(/usable channel centerline/);
   });
+
+  it("a large file is streamed: progress comes in several increasing steps and ends at 1 (common practice)", async () => {
+    const lines = ["survey,station,date_time,latitude,longitude,salinity,Fe (nmol/L)"];
+    for (let i = 0; i < 40000; i++) {
+      lines.push(`big,B${i},2025-11-04T08:00:00Z,45.0${i % 10},-35.3,${(i % 35) + 0.5},${i % 50}`);
+    }
+    const fractions: number[] = [];
+    const o = await importFile(file("big.csv", lines.join("\n")), { kind: "surveyText" }, (f) => fractions.push(f));
+    expect(o.summary?.rowsRead).toBe(40000);
+    expect(fractions.length).toBeGreaterThan(3);
+    expect(fractions.every((f, i) => i === 0 || f >= fractions[i - 1])).toBe(true);
+    expect(fractions.at(-1)).toBe(1);
+  });
+
+  it("multi-byte UTF-8 split across stream slices is decoded intact (WHATWG Encoding, TextDecoder stream mode)", async () => {
+    const lines = ["survey,station,date_time,latitude,longitude,salinity,Fe (nmol/L)"];
+    for (let i = 0; i < 30000; i++) lines.push(`s,Stéµ${i},2025-11-04T08:00:00Z,45.01,-35.3,${(i % 35) + 0.5},1`);
+    const o = await importFile(file("utf8.csv", lines.join("\n")), { kind: "surveyText" });
+    const ids = o.surveys.flatMap((sv) => sv.stations.map((st) => st.id));
+    expect(ids.length).toBe(30000);
+    expect(ids.filter((id) => !/^Stéµ\d+$/.test(id))).toEqual([]);
+  });
 });
