@@ -175,3 +175,16 @@ describe("readUnderwayStream()", () => {
     expect(r.summary).toMatchObject({ rowsRead: 25_000, rowsAccepted: 25_000, issueCount: 0 });
   });
 });
+
+describe("underway caller mistakes", () => {
+  it("readUnderwayText() throws TypeError naming the function for text that is not a string and for missing options.fileName", () => {
+    expect(() => readUnderwayText(42 as unknown as string, { fileName: "x" })).toThrow(/readUnderwayText\(\): text/);
+    expect(() => readUnderwayText("a,b", {} as { fileName: string })).toThrow(/options.fileName/);
+  });
+
+  it("readUnderwayText() reports an empty file as an issue instead of throwing", () => {
+    const r = readUnderwayText("", { fileName: "empty.csv" });
+    expect(r.summary.rowsRead).toBe(0);
+    expect(r.summary.issuesByReason["empty file"]).toBe(1);
+  });
+});
