@@ -44,10 +44,21 @@ export interface AnalyzeSurveyOptions {
 
 const DEFAULT_ISOHALINES = [1, 2, 5, 10, 20];
 
-function profileOf(analysis: { placements: SurveyAnalysis["stations"] }): SalinityProfile | undefined {
-  const points = analysis.placements.flatMap((p) =>
-    p.alongChannelKm !== undefined && p.salinity !== undefined ? [{ km: p.alongChannelKm, salinity: p.salinity, id: p.id, ...(p.branchId ? { branchId: p.branchId } : {}) }] : [],
-  );
+/**
+ * S(x) along the main stem: stations on a tributary or off the channel are left out, since a
+ * tributary carries its own salinity gradient and would make S(x) look non-monotonic.
+ */
+function profileOf(placements: SurveyAnalysis["stations"], network: ChannelNetwork | undefined, warnings: MixingWarning[]): SalinityProfile | undefined {
+  const main = network?.mainBranchId;
+  const usable = placements.filter((p) => p.alongChannelKm !== undefined && p.salinity !== undefined);
+  const onMain = usable.filter((p) => main === undefined || (p.branchId === main && !p.offChannel));
+  const left = usable.length - onMain.length;
+  if (left > 0)
+    warnings.push({
+      code: "profile-main-stem",
+      message: `S(x) and the isohalines use the ${onMain.length} stations on the main channel; ${left} station(s) on a tributary or off the channel are left out of S(x) (they stay in the mixing analysis).`,
+    });
+  const points = onMain.map((p) => ({ km: p.alongChannelKm!, salinity: p.salinity!, id: p.id, ...(p.branchId ? { branchId: p.branchId } : {}) }));
   return points.length >= 2 ? fitSalinityProfile(points) : undefined;
 }
 
@@ -69,7 +80,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
   if (network) warnings.push(...network.warnings);
   const { placements, warnings: placeWarnings } = placeStations(survey.stations, network, options.offChannelThresholdM);
   warnings.push(...placeWarnings);
-  const profile = profileOf({ placements });
+  const profile = profileOf(placements, network, warnings);
   if (profile) warnings.push(...profile.warnings);
   const saltS = options.saltIntrusionSalinity ?? 2;
   const iso = profile ? isohalinePositions(profile, options.isohalines ?? DEFAULT_ISOHALINES) : undefined;
