@@ -114,13 +114,27 @@ export class DataState {
     return text ? (JSON.parse(text) as FeatureCollection) : undefined;
   }
 
+  /** The centerline the analysis uses now (the app's, which a drawn line may have replaced), else the stored one. */
   #centerlineFile(): TextFile | undefined {
+    const current = this.app.centerlineFile;
+    if (current) return current;
     return this.centerline ? { name: "centerline.geojson", text: JSON.stringify(this.centerline) } : undefined;
   }
 
+  /** The current centerline as GeoJSON for the workspace document. */
+  #centerlineObject(): object | null {
+    const current = this.app.centerlineFile;
+    if (!current) return this.centerline;
+    try {
+      return JSON.parse(current.text) as object;
+    } catch {
+      return this.centerline;
+    }
+  }
+
   /** Sends surveys (and the current centerline) to the analysis and saves the workspace. */
-  setSurveys(surveys: Survey[], selectIndex?: number): void {
-    this.app.loadSurveys(surveys, this.#centerlineFile(), this.#basemap());
+  setSurveys(surveys: Survey[], selectIndex?: number, centerline: TextFile | undefined = this.#centerlineFile()): void {
+    this.app.loadSurveys(surveys, centerline, this.#basemap());
     if (selectIndex !== undefined) this.app.selection.surveyIndex = selectIndex;
     this.dirty = true;
   }
@@ -228,15 +242,17 @@ export class DataState {
         issues: o.issues,
       })),
     ];
-    const line = entries.find((e) => e.outcome.centerline)?.outcome.centerline;
+    const lineEntry = entries.find((e) => e.outcome.centerline);
+    const line = lineEntry?.outcome.centerline;
     if (line) {
       this.centerline = line;
       this.demoBasemap = false;
     }
+    const lineFile = lineEntry && line ? { name: lineEntry.outcome.fileName, text: JSON.stringify(line) } : undefined;
     const before = this.app.workspace.surveys;
     const added = entries.flatMap((e) => e.outcome.surveys);
     const all = uniqueSurveyNames([...before, ...added]);
-    this.setSurveys(all, added.length > 0 ? before.length : undefined);
+    this.setSurveys(all, added.length > 0 ? before.length : undefined, lineFile ?? this.#centerlineFile());
   }
 
   /** The workspace state as a document's parts. */
@@ -245,7 +261,7 @@ export class DataState {
     const name = app.survey?.name;
     return {
       surveys: app.workspace.surveys,
-      centerline: this.centerline,
+      centerline: this.#centerlineObject(),
       demoBasemap: this.demoBasemap,
       mappings: this.mappings,
       mappingDates: this.mappingDates,
@@ -296,6 +312,7 @@ export class DataState {
     this.imports = p.imports;
     this.centerline = p.centerline;
     this.demoBasemap = p.demoBasemap;
+    const restoredLine = p.centerline ? { name: "centerline.geojson", text: JSON.stringify(p.centerline) } : undefined;
     app.settings.colouring = p.colouring;
     app.settings.tileUrl = p.tileUrl;
     app.settings.useTiles = p.useTiles;
@@ -305,7 +322,7 @@ export class DataState {
       p.surveys.findIndex((s) => s.name === p.selectedSurvey),
     );
     if (p.selectedConstituent) app.selection.constituent = p.selectedConstituent;
-    app.loadSurveys(p.surveys, this.#centerlineFile(), this.#basemap());
+    app.loadSurveys(p.surveys, restoredLine, this.#basemap());
     app.selection.surveyIndex = index;
     return true;
   }

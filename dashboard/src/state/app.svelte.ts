@@ -28,6 +28,8 @@ export class AppState {
   readonly settings = new Settings();
   readonly selection = new Selection();
   #client: AnalysisClient | undefined;
+  /** The channel centerline file the analysis uses now (demo, imported, drawn or restored). */
+  centerlineFile = $state.raw<TextFile | undefined>(undefined);
   /** Waiting briefing request (resolved with the HTML when the worker answers). */
   #briefing: { resolve: (html: string) => void; reject: (error: Error) => void } | undefined;
 
@@ -92,6 +94,7 @@ export class AppState {
     }
     this.#client ??= new AnalysisClient((m) => this.#receive(m));
     this.workspace.begin(true);
+    this.centerlineFile = bundle.centerline;
     this.#client.send({
       type: "load",
       surveys: bundle.surveys,
@@ -112,6 +115,7 @@ export class AppState {
   setCenterline(file: TextFile): void {
     if (!this.#client) return;
     this.workspace.begin(false);
+    this.centerlineFile = file;
     this.#client.send({ type: "centerline", centerline: file, settings: this.#settingsSnapshot() });
   }
 
@@ -135,7 +139,13 @@ export class AppState {
     this.workspace.basemap = basemap;
     this.#client ??= new AnalysisClient((m) => this.#receive(m));
     this.workspace.begin(false);
-    this.#client.send({ type: "setSurveys", surveys, ...(centerline ? { centerline } : {}), settings: this.#settingsSnapshot() });
+    this.centerlineFile = centerline;
+    this.#client.send({
+      type: "setSurveys",
+      surveys,
+      ...(centerline ? { centerline } : {}),
+      settings: this.#settingsSnapshot(),
+    });
   }
 
   #settingsSnapshot(): AnalysisSettings {
