@@ -1,8 +1,10 @@
 import { readFileSync } from "node:fs";
+import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
   missingBrowserMessage,
   openDashboard,
+  SCREENSHOT_DIR,
   screenshot,
   selectionStatus,
   settle,
@@ -43,6 +45,7 @@ describe.skipIf(skipBrowser)("survey comparison view and the briefing download",
     const statements = (await table.locator('[data-testid="shift-statements"]').textContent()) ?? "";
     expect(statements).toMatch(/Fe reaction zone, landward end, moved landward by \d+ km/);
     await screenshot(s.page, "compare-1-view");
+    await fe.screenshot({ path: join(SCREENSHOT_DIR, "compare-1b-fe-shift-table.png") });
   });
 
   it("the overlaid mixing diagram draws two series (one per survey) with a legend naming both", async () => {

@@ -60,10 +60,12 @@ function unitOf(d: EstimateDifference): string {
 function row(quantity: string, d: EstimateDifference | undefined): ShiftRow | undefined {
   if (!d) return undefined;
   const u = unitOf(d);
+  // A change in % change is in percentage points; the two values themselves are percentages.
+  const uValue = d.unit === "percentage points" ? " %" : u;
   return {
     quantity,
-    reference: `${num(d.reference)}${u}`,
-    later: `${num(d.later)}${u}`,
+    reference: `${num(d.reference)}${uValue}`,
+    later: `${num(d.later)}${uValue}`,
     change: `${num(d.value, 2, true)}${u}`,
     interval: d.method === "no-interval" ? "no interval" : `${num(d.lower, 2, true)} to ${num(d.upper, 2, true)}${u}`,
     exceeds: d.method === "no-interval" ? undefined : d.exceedsUncertainty,
@@ -94,4 +96,10 @@ export function shiftRows(shift: ConstituentShift): ShiftRow[] {
 /** Text of an optional number with unit, "—" when absent. */
 export function maybe(v: number | undefined, unit: string, digits = 3): string {
   return v === undefined ? "—" : `${num(v, digits)}${unit ? ` ${unit}` : ""}`;
+}
+
+/** A difference with its interval and the plain statement: "+6.1 nmol/L (−1.6 to +31 nmol/L): within the uncertainty …". */
+export function changeText(d: EstimateDifference | undefined): string {
+  const r = row("", d);
+  return r ? `${r.change} (${r.interval}): ${r.statement}` : "—";
 }
