@@ -108,6 +108,9 @@ describe.skipIf(skipBrowser)("importing a survey file: mapping dialog, report, m
     expect(await selectedSurvey(s)).toBe("autumn-2025-11");
     const p = await stationPixel(s.page, "N03");
     expect(p[1]).toBeGreaterThan(0);
+    await s.page.locator('[data-testid="data-toggle"]').click();
+    const earlier = (await s.page.locator('[data-testid="earlier-imports"]').textContent()) ?? "";
+    expect(earlier).toContain("autumn.csv: 5 rows read, 4 accepted, 1 rejected; 2 problems");
     await screenshot(s.page, "import-3-after-reload");
   });
 
