@@ -97,7 +97,11 @@ export { interval95, percentileSorted } from "./stats/percentile.ts";
 export { T68_PER_T90, t68FromT90, t90FromT68 } from "./seawater/temperatureScale.ts";
 export { PSS78, C3515_MS_CM } from "./seawater/pss78Coefficients.ts";
 export { hillRatioAtSp2 } from "./seawater/hillExtension.ts";
-export { practicalSalinityFromConductivity, practicalSalinityFromRt, pss78ValidityNote } from "./seawater/practicalSalinity.ts";
+export {
+  practicalSalinityFromConductivity,
+  practicalSalinityFromRt,
+  pss78ValidityNote,
+} from "./seawater/practicalSalinity.ts";
 export { conductivityFromPracticalSalinity } from "./seawater/conductivityFromSalinity.ts";
 export {
   SALINITY_PER_CHLORINITY,
@@ -117,7 +121,12 @@ export { convertConcentration } from "./seawater/convertConcentration.ts";
 export type { ConversionContext } from "./seawater/convertConcentration.ts";
 export { REFERENCE_COMPOSITION, referenceCompositionSummary } from "./seawater/referenceComposition.ts";
 export type { ReferenceSpecies, ReferenceCompositionSummary } from "./seawater/referenceComposition.ts";
-export { SEA_SALT_MOLAR_MASS_G_MOL, SEA_SALT_VALENCE_FACTOR, ionicStrengthFromSalinity, ionicStrengthDoe } from "./seawater/ionicStrength.ts";
+export {
+  SEA_SALT_MOLAR_MASS_G_MOL,
+  SEA_SALT_VALENCE_FACTOR,
+  ionicStrengthFromSalinity,
+  ionicStrengthDoe,
+} from "./seawater/ionicStrength.ts";
 export { WORLD_AVERAGE_RIVER, riverCompositionFromMgL } from "./seawater/riverComposition.ts";
 export type { RiverComposition } from "./seawater/riverComposition.ts";
 export { majorIonsAtSalinity } from "./seawater/majorIons.ts";
@@ -185,7 +194,13 @@ export { selectLayer, combineCells } from "./io/layerSelection.ts";
 export type { LayerChoice } from "./io/layerSelection.ts";
 export { groupSurveys, DEFAULT_SURVEY_GAP_DAYS } from "./io/groupSurveys.ts";
 export type { SurveyGrouping } from "./io/groupSurveys.ts";
-export { parseValueText, parseNumberText, isMissingText, MISSING_MARKERS, BELOW_DETECTION_WORDS } from "./io/valueText.ts";
+export {
+  parseValueText,
+  parseNumberText,
+  isMissingText,
+  MISSING_MARKERS,
+  BELOW_DETECTION_WORDS,
+} from "./io/valueText.ts";
 export { parseCoordinateText } from "./io/coordinates.ts";
 export type { CoordinateAxis } from "./io/coordinates.ts";
 export { projectedToLonLat, projDefinition, EPSG_DEFINITIONS } from "./io/projection.ts";
@@ -233,7 +248,11 @@ export { compareSurveys } from "./compare/compareSurveys.ts";
 export type { CompareOptions } from "./compare/compareSurveys.ts";
 export { constituentShift } from "./compare/constituentShift.ts";
 export type { ShiftSide } from "./compare/constituentShift.ts";
-export { differenceOfEstimates, differenceWithoutInterval, DIFFERENCE_INTERVAL_METHOD } from "./compare/differenceOfEstimates.ts";
+export {
+  differenceOfEstimates,
+  differenceWithoutInterval,
+  DIFFERENCE_INTERVAL_METHOD,
+} from "./compare/differenceOfEstimates.ts";
 export { dischargeScaling, REFERENCE_SCALINGS } from "./compare/dischargeScaling.ts";
 export { surveyProfile, kmAtSalinity, kmEstimateOfSalinity } from "./compare/salinityKm.ts";
 export { comparisonToCsv, COMPARISON_CSV_COLUMNS } from "./compare/comparisonCsv.ts";
@@ -273,7 +292,14 @@ export type { ZoneRow } from "./report/zoneStripSvg.ts";
 export { readUnderwayText, readUnderwayStream } from "./underway/readUnderway.ts";
 export type { ReadUnderwayOptions } from "./underway/recordReader.ts";
 export { CELL_MEASURED, CELL_MISSING, CELL_INVALID, CELL_DERIVED } from "./underway/types.ts";
-export type { UnderwayCellStatus, UnderwayRole, UnderwayColumn, UnderwayData, UnderwaySummary, UnderwayImport } from "./underway/types.ts";
+export type {
+  UnderwayCellStatus,
+  UnderwayRole,
+  UnderwayColumn,
+  UnderwayData,
+  UnderwaySummary,
+  UnderwayImport,
+} from "./underway/types.ts";
 export { underwayColumnRoles } from "./underway/headerRoles.ts";
 export type { UnderwayColumnRole } from "./underway/headerRoles.ts";
 export { IssueLog, DEFAULT_ISSUE_CAP } from "./underway/issueLog.ts";

@@ -35,4 +35,6 @@ console.log(line(header));
 console.log(`|${widths.map((w) => "-".repeat(w + 2)).join("|")}|`);
 for (const t of table) console.log(line(t));
 if (rows.length === 0) console.log("(no benchmark rows)");
-console.log(`\nNode ${process.version}, ${process.platform}/${process.arch}; times are wall-clock medians unless noted.`);
+console.log(
+  `\nNode ${process.version}, ${process.platform}/${process.arch}; times are wall-clock medians unless noted.`,
+);

@@ -5,7 +5,9 @@ import type { SurveyAnalysis } from "../analysis/index.ts";
 type ConstituentAnalysis = SurveyAnalysis["constituents"][number];
 
 /** The JSON object of one survey: name, date, survey facts, stations and constituents. */
-export function surveyJson(a: SurveyAnalysis): Record<string, unknown> & { stations: unknown[]; constituents: ConstituentAnalysis[] } {
+export function surveyJson(
+  a: SurveyAnalysis,
+): Record<string, unknown> & { stations: unknown[]; constituents: ConstituentAnalysis[] } {
   const { name, ...facts } = a.survey;
   return {
     name,

@@ -1,7 +1,16 @@
 /** Reading survey files, station tables and centerlines for the CLI (Node side of analysis/io). */
 import { readFileSync, statSync } from "node:fs";
 import { basename } from "node:path";
-import type { ChannelNetwork, ColumnMapping, ImportResult, ImportIssue, ImportSummary, LayerChoice, StationTable, Survey } from "../analysis/index.ts";
+import type {
+  ChannelNetwork,
+  ColumnMapping,
+  ImportResult,
+  ImportIssue,
+  ImportSummary,
+  LayerChoice,
+  StationTable,
+  Survey,
+} from "../analysis/index.ts";
 import { buildChannelNetwork, mergeSummaries, readStationTable, readSurveyText } from "../analysis/index.ts";
 import { InputError } from "./exitCodes.ts";
 
@@ -11,7 +20,9 @@ function readText(path: string, what: string): string {
     return readFileSync(path, "utf8");
   } catch (error) {
     if (error instanceof InputError) throw error;
-    throw new InputError(`${path}: cannot read ${what} (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`);
+    throw new InputError(
+      `${path}: cannot read ${what} (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`,
+    );
   }
 }
 
@@ -37,7 +48,9 @@ export function loadSurveys(paths: string[], options: LoadSurveyOptions = {}): L
   let stationTable: StationTable | undefined;
   const issues: ImportIssue[] = [];
   if (options.stationsPath) {
-    stationTable = readStationTable(readText(options.stationsPath, "station table"), { fileName: basename(options.stationsPath) });
+    stationTable = readStationTable(readText(options.stationsPath, "station table"), {
+      fileName: basename(options.stationsPath),
+    });
     issues.push(...stationTable.issues);
   }
   let mapping: ColumnMapping | undefined;
@@ -63,9 +76,18 @@ export function loadSurveys(paths: string[], options: LoadSurveyOptions = {}): L
   const summary = results.map((r) => r.summary).reduce((a, b) => mergeSummaries(a, b));
   if (surveys.length === 0) {
     const first = issues.find((i) => i.severity === "error");
-    throw new InputError(first ? `${first.file}: row ${first.row}, column "${first.column}", value "${first.value}": expected ${first.expected}` : `${paths.join(", ")}: no survey could be read`);
+    throw new InputError(
+      first
+        ? `${first.file}: row ${first.row}, column "${first.column}", value "${first.value}": expected ${first.expected}`
+        : `${paths.join(", ")}: no survey could be read`,
+    );
   }
-  return { surveys, issues, summary, files: results.map((r, i) => ({ file: basename(paths[i]!), summary: r.summary, mapping: r.mapping })) };
+  return {
+    surveys,
+    issues,
+    summary,
+    files: results.map((r, i) => ({ file: basename(paths[i]!), summary: r.summary, mapping: r.mapping })),
+  };
 }
 
 /** Reads a centerline GeoJSON into a channel network; `mouth` as given on the command line. */
@@ -81,11 +103,15 @@ export function loadCenterline(path: string, mouth?: string): { network: Channel
   if (mouth === "start" || mouth === "end") mouthOption = mouth;
   else if (mouth !== undefined) {
     const parts = mouth.split(",").map(Number);
-    if (parts.length !== 2 || parts.some((x) => !Number.isFinite(x))) throw new InputError(`--mouth: expected "start", "end" or "lon,lat"; got "${mouth}"`);
+    if (parts.length !== 2 || parts.some((x) => !Number.isFinite(x)))
+      throw new InputError(`--mouth: expected "start", "end" or "lon,lat"; got "${mouth}"`);
     mouthOption = [parts[0]!, parts[1]!];
   }
   try {
-    const network = buildChannelNetwork(geojson as Parameters<typeof buildChannelNetwork>[0], mouthOption ? { mouth: mouthOption } : {});
+    const network = buildChannelNetwork(
+      geojson as Parameters<typeof buildChannelNetwork>[0],
+      mouthOption ? { mouth: mouthOption } : {},
+    );
     return { network, geojson };
   } catch (error) {
     if (error instanceof RangeError || error instanceof TypeError) throw new InputError(`${path}: ${error.message}`);
@@ -105,7 +131,8 @@ export function parseDischarge(text: string | undefined): number | Record<string
   for (const part of text.split(",")) {
     const [name, q] = part.split("=");
     const value = Number(q);
-    if (!name || !Number.isFinite(value) || value <= 0) throw new InputError(`--discharge: expected a number or name=value pairs; got "${part}"`);
+    if (!name || !Number.isFinite(value) || value <= 0)
+      throw new InputError(`--discharge: expected a number or name=value pairs; got "${part}"`);
     out[name.trim()] = value;
   }
   return out;
@@ -123,8 +150,14 @@ export function parseCount(name: string, text: string | undefined, fallback: num
 export function describeImport(loaded: LoadedSurveys): string {
   const s = loaded.summary;
   const reasons = Object.entries(s.rejectedByReason).map(([r, n]) => `${n} ${r}`);
-  const lines = [`import: ${s.rowsRead} rows read, ${s.rowsAccepted} accepted, ${s.rowsRejected} rejected${reasons.length ? ` (${reasons.join("; ")})` : ""}`];
-  for (const i of loaded.issues.slice(0, 50)) lines.push(`  ${i.severity}: ${i.file} row ${i.row}, column "${i.column}", value "${i.value}": expected ${i.expected}`);
-  if (loaded.issues.length > 50) lines.push(`  ... and ${loaded.issues.length - 50} more problems (all listed in the JSON output)`);
+  const lines = [
+    `import: ${s.rowsRead} rows read, ${s.rowsAccepted} accepted, ${s.rowsRejected} rejected${reasons.length ? ` (${reasons.join("; ")})` : ""}`,
+  ];
+  for (const i of loaded.issues.slice(0, 50))
+    lines.push(
+      `  ${i.severity}: ${i.file} row ${i.row}, column "${i.column}", value "${i.value}": expected ${i.expected}`,
+    );
+  if (loaded.issues.length > 50)
+    lines.push(`  ... and ${loaded.issues.length - 50} more problems (all listed in the JSON output)`);
   return lines.join("\n");
 }

@@ -45,11 +45,18 @@ export async function main(argv: string[], io?: CommandIo): Promise<number> {
       sink.err(`brackline ${name}: ${error.message}`);
       return EXIT_BAD_INPUT;
     }
-    if (error instanceof UsageError || (error instanceof TypeError && "code" in error && String((error as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"))) {
+    if (
+      error instanceof UsageError ||
+      (error instanceof TypeError &&
+        "code" in error &&
+        String((error as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"))
+    ) {
       sink.err(`brackline ${name}: ${(error as Error).message}\n\n${command.help}`);
       return EXIT_USAGE;
     }
-    sink.err(`brackline ${name}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+    sink.err(
+      `brackline ${name}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`,
+    );
     return EXIT_INTERNAL;
   }
 }

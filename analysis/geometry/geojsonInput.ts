@@ -109,7 +109,10 @@ export function readCenterlines(input: CenterlineGeoJson): RawLine[] {
     const name = typeof props["name"] === "string" ? props["name"] : undefined;
     const idProp = props["id"] ?? name ?? f.id;
     const baseId = idProp === undefined || idProp === null ? `branch-${i}` : String(idProp);
-    const parts = readGeometry(f.geometry as LineStringGeometry | MultiLineStringGeometry, `feature ${i} ('${baseId}')`);
+    const parts = readGeometry(
+      f.geometry as LineStringGeometry | MultiLineStringGeometry,
+      `feature ${i} ('${baseId}')`,
+    );
     parts.forEach((coords, k) => {
       if (coords.length < 2)
         throw new RangeError(

@@ -14,7 +14,8 @@ import type { MouthOption } from "./types.ts";
  */
 export function centerlineMouthHint(input: CenterlineGeoJson): MouthOption | undefined {
   if (input === null || typeof input !== "object") return undefined;
-  const features: LineFeature[] = input.type === "FeatureCollection" ? input.features : input.type === "Feature" ? [input] : [];
+  const features: LineFeature[] =
+    input.type === "FeatureCollection" ? input.features : input.type === "Feature" ? [input] : [];
   if (!Array.isArray(features)) return undefined;
   for (const f of features) {
     if (f?.geometry?.type === "Point" && f.properties?.["role"] === "mouth") {

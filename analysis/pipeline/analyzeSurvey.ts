@@ -14,7 +14,9 @@ import { placeStations } from "./placeStations.ts";
 import type { MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
 
 /** Per-constituent settings a user may change (end-member overrides, precision, k, ...). */
-export type ConstituentSettings = Partial<Omit<AnalyzeOptions, "name" | "unit" | "salinityToKm" | "salinityToKmPoint" | "salinityNonMonotonic">>;
+export type ConstituentSettings = Partial<
+  Omit<AnalyzeOptions, "name" | "unit" | "salinityToKm" | "salinityToKmPoint" | "salinityNonMonotonic">
+>;
 
 /** Options of {@link analyzeSurvey}. */
 export interface AnalyzeSurveyOptions {
@@ -48,7 +50,11 @@ const DEFAULT_ISOHALINES = [1, 2, 5, 10, 20];
  * S(x) along the main stem: stations on a tributary or off the channel are left out, since a
  * tributary carries its own salinity gradient and would make S(x) look non-monotonic.
  */
-function profileOf(placements: SurveyAnalysis["stations"], network: ChannelNetwork | undefined, warnings: MixingWarning[]): SalinityProfile | undefined {
+function profileOf(
+  placements: SurveyAnalysis["stations"],
+  network: ChannelNetwork | undefined,
+  warnings: MixingWarning[],
+): SalinityProfile | undefined {
   const main = network?.mainBranchId;
   const usable = placements.filter((p) => p.alongChannelKm !== undefined && p.salinity !== undefined);
   const onMain = usable.filter((p) => main === undefined || (p.branchId === main && !p.offChannel));
@@ -58,7 +64,12 @@ function profileOf(placements: SurveyAnalysis["stations"], network: ChannelNetwo
       code: "profile-main-stem",
       message: `S(x) and the isohalines use the ${onMain.length} stations on the main channel; ${left} station(s) on a tributary or off the channel are left out of S(x) (they stay in the mixing analysis).`,
     });
-  const points = onMain.map((p) => ({ km: p.alongChannelKm!, salinity: p.salinity!, id: p.id, ...(p.branchId ? { branchId: p.branchId } : {}) }));
+  const points = onMain.map((p) => ({
+    km: p.alongChannelKm!,
+    salinity: p.salinity!,
+    id: p.id,
+    ...(p.branchId ? { branchId: p.branchId } : {}),
+  }));
   return points.length >= 2 ? fitSalinityProfile(points) : undefined;
 }
 
@@ -97,7 +108,9 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     ...(intrusion?.km !== undefined ? { saltIntrusionKm: intrusion.km } : {}),
     saltIntrusionSalinity: saltS,
     isohalines: iso ? iso.positions.map((p) => ({ salinity: p.salinity, km: p.km })) : [],
-    ...(salinities.length > 0 ? { salinityRange: [Math.min(...salinities), Math.max(...salinities)] as [number, number] } : {}),
+    ...(salinities.length > 0
+      ? { salinityRange: [Math.min(...salinities), Math.max(...salinities)] as [number, number] }
+      : {}),
     nStations: survey.stations.length,
   };
   const wanted = options.constituents ?? survey.constituents.map((c) => c.name);
@@ -106,7 +119,10 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
   wanted.forEach((name, i) => {
     const info = survey.constituents.find((c) => c.name === name);
     if (!info) {
-      warnings.push({ code: "unknown-constituent", message: `Constituent "${name}" is not in survey "${survey.name}".` });
+      warnings.push({
+        code: "unknown-constituent",
+        message: `Constituent "${name}" is not in survey "${survey.name}".`,
+      });
       return;
     }
     progress((i + 0.5) / Math.max(1, wanted.length), `mixing analysis of ${name}`);

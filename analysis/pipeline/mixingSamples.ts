@@ -51,7 +51,14 @@ export function constituentSamples(stations: readonly Station[], constituent: st
         skip("below detection without a stated limit");
         continue;
       }
-      samples.push({ stationId: st.id, salinity, conc: cell.detectionLimit, censored: true, detectionLimit: cell.detectionLimit, accepted: cell.accepted });
+      samples.push({
+        stationId: st.id,
+        salinity,
+        conc: cell.detectionLimit,
+        censored: true,
+        detectionLimit: cell.detectionLimit,
+        accepted: cell.accepted,
+      });
       continue;
     }
     samples.push({ stationId: st.id, salinity, conc: cell.value!, censored: false, accepted: cell.accepted });

@@ -7,4 +7,11 @@ import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
-export const benchCases: BenchCase[] = [mixingBench, projectionBench, underwayImportBench, underwayBinningBench, dashboardBench, bundleSizeBench];
+export const benchCases: BenchCase[] = [
+  mixingBench,
+  projectionBench,
+  underwayImportBench,
+  underwayBinningBench,
+  dashboardBench,
+  bundleSizeBench,
+];

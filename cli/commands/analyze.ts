@@ -61,7 +61,8 @@ export const analyzeCommand: Command = {
         out: { type: "string" },
       },
     });
-    if (values.format !== "json" && values.format !== "csv") throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
+    if (values.format !== "json" && values.format !== "csv")
+      throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
     const layer = layerOf(values.layer);
     const discharge = parseDischarge(values.discharge);
@@ -85,7 +86,11 @@ export const analyzeCommand: Command = {
       const surveys = analyses.map(surveyJson);
       const doc = {
         caution: SCREENING_CAUTION,
-        import: { summary: loaded.summary, files: loaded.files.map((f) => ({ file: f.file, summary: f.summary })), issues: loaded.issues },
+        import: {
+          summary: loaded.summary,
+          files: loaded.files.map((f) => ({ file: f.file, summary: f.summary })),
+          issues: loaded.issues,
+        },
         ...(surveys.length === 1 ? { stations: surveys[0]!.stations, constituents: surveys[0]!.constituents } : {}),
         surveys,
       };

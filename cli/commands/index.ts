@@ -7,4 +7,11 @@ import { salinityCommand } from "./salinity.ts";
 import { underwayCommand } from "./underway.ts";
 
 /** Every subcommand of `brackline`, in the order `--help` lists them. */
-export const commands: Command[] = [analyzeCommand, demoCommand, salinityCommand, compareCommand, reportCommand, underwayCommand];
+export const commands: Command[] = [
+  analyzeCommand,
+  demoCommand,
+  salinityCommand,
+  compareCommand,
+  reportCommand,
+  underwayCommand,
+];

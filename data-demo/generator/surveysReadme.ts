@@ -24,7 +24,9 @@ export function surveysReadme(seed: number): string {
     "",
     "Columns: `survey`, `station`, `date_time` (ISO 8601 with zone: `-02:00` in the wet survey, `Z` in the dry one),",
     "`latitude`, `longitude` (WGS84 decimal degrees), `depth_m` (sample depth), `salinity` (practical salinity, PSS-78),",
-    "`temperature_C`, `pH`, `discharge (m³/s)` (river discharge during the survey), " + CONSTITUENTS.map((c) => `\`${c.name} (${c.unit})\``).join(", ") + ", `Cu_flag`.",
+    "`temperature_C`, `pH`, `discharge (m³/s)` (river discharge during the survey), " +
+      CONSTITUENTS.map((c) => `\`${c.name} (${c.unit})\``).join(", ") +
+      ", `Cu_flag`.",
     "",
     "- `Cu_flag` uses the IOC numeric scheme: 1 = good, 4 = bad. One wet-season Cu value is deliberately wrong",
     "  (3.2 × the model value, a simulated contamination) and flagged 4.",

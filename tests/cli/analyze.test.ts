@@ -34,7 +34,16 @@ describe("brackline analyze", () => {
     }
     const fe = doc.constituents.find((c) => c.name === "Fe")!;
     expect(fe.unit).toBe("nmol/L");
-    for (const field of ["endmembers", "dilutionLine", "class", "effectiveEndmember", "percentChange", "reactionZone", "warnings"]) expect(fe).toHaveProperty(field);
+    for (const field of [
+      "endmembers",
+      "dilutionLine",
+      "class",
+      "effectiveEndmember",
+      "percentChange",
+      "reactionZone",
+      "warnings",
+    ])
+      expect(fe).toHaveProperty(field);
     expect(doc.caution).toMatch(/screening/i);
   });
 
@@ -43,7 +52,9 @@ describe("brackline analyze", () => {
     const b = await run(["analyze", BOTH, "--centerline", LINE, "--draws", "100", "--seed", "7"]);
     expect(a.code).toBe(0);
     expect(a.out).toBe(b.out);
-    const doc = JSON.parse(a.out) as { surveys: Array<{ name: string; date: string; stations: unknown[]; constituents: unknown[] }> };
+    const doc = JSON.parse(a.out) as {
+      surveys: Array<{ name: string; date: string; stations: unknown[]; constituents: unknown[] }>;
+    };
     expect(doc.surveys.map((s) => s.name)).toEqual(["wet-2025-03", "dry-2025-09"]);
     expect(a.err).toMatch(/64 rows read, 64 accepted, 0 rejected/);
   });

@@ -1,5 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { missingBrowserMessage, openDashboard, screenshot, settle, skipBrowser, waitForAnalysis, waitForMap, type Session } from "./browser.ts";
+import {
+  missingBrowserMessage,
+  openDashboard,
+  screenshot,
+  settle,
+  skipBrowser,
+  waitForAnalysis,
+  waitForMap,
+  type Session,
+} from "./browser.ts";
 
 describe.skipIf(skipBrowser)("changing an end-member in the settings re-runs the analysis", () => {
   let s: Session;

@@ -20,7 +20,10 @@ describe("centerline markers (RFC 7946 Point features beside the lines)", () => 
     [0.2, 45],
   ];
   it("buildChannelNetwork() skips Point markers and takes the mouth from a role 'mouth' point (common practice)", () => {
-    const fc = { type: "FeatureCollection", features: [line(coords, { role: "main" }), point([0.2, 45], { role: "mouth" }), point([0, 45], { role: "head" })] } as CenterlineGeoJson;
+    const fc = {
+      type: "FeatureCollection",
+      features: [line(coords, { role: "main" }), point([0.2, 45], { role: "mouth" }), point([0, 45], { role: "head" })],
+    } as CenterlineGeoJson;
     expect(centerlineMouthHint(fc)).toEqual([0.2, 45]);
     const net = buildChannelNetwork(fc);
     expect(net.mouthLonLat[0]).toBeCloseTo(0.2, 9);
@@ -29,7 +32,10 @@ describe("centerline markers (RFC 7946 Point features beside the lines)", () => 
   });
 
   it("centerlineMouthHint() reads the main line's properties.mouth, and an explicit option wins", () => {
-    const fc = { type: "FeatureCollection", features: [line(coords, { role: "main", mouth: "end" })] } as CenterlineGeoJson;
+    const fc = {
+      type: "FeatureCollection",
+      features: [line(coords, { role: "main", mouth: "end" })],
+    } as CenterlineGeoJson;
     expect(centerlineMouthHint(fc)).toBe("end");
     expect(buildChannelNetwork(fc).mouthLonLat[0]).toBeCloseTo(0.2, 9);
     expect(buildChannelNetwork(fc, { mouth: "start" }).mouthLonLat[0]).toBeCloseTo(0, 9);

@@ -15,8 +15,12 @@ interface TruthSurvey {
   constituents: Record<string, TruthConstituent>;
 }
 const truth = JSON.parse(readFileSync("data-demo/truth.json", "utf8")) as { surveys: Record<string, TruthSurvey> };
-const network = buildChannelNetwork(JSON.parse(readFileSync("data-demo/centerline.geojson", "utf8")) as CenterlineGeoJson);
-const surveys = readSurveyText(readFileSync("data-demo/surveys/both-surveys.csv", "utf8"), { fileName: "both-surveys.csv" }).surveys;
+const network = buildChannelNetwork(
+  JSON.parse(readFileSync("data-demo/centerline.geojson", "utf8")) as CenterlineGeoJson,
+);
+const surveys = readSurveyText(readFileSync("data-demo/surveys/both-surveys.csv", "utf8"), {
+  fileName: "both-surveys.csv",
+}).surveys;
 
 describe("analyzeSurvey() on the invented demo estuary (generator truth, data-demo/truth.json)", () => {
   for (const survey of surveys) {
@@ -51,7 +55,13 @@ describe("analyzeSurvey() on the invented demo estuary (generator truth, data-de
 });
 
 describe("constituentSamples() (censored values are never zero; common practice)", () => {
-  const cell = (over: Partial<ValueCell>): ValueCell => ({ value: undefined, original: "", status: "missing", accepted: true, ...over });
+  const cell = (over: Partial<ValueCell>): ValueCell => ({
+    value: undefined,
+    original: "",
+    status: "missing",
+    accepted: true,
+    ...over,
+  });
   const station = (id: string, s: number, v: ValueCell): Station => ({
     id,
     salinity: cell({ value: s, original: String(s), status: "measured" }),
