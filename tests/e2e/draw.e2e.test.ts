@@ -63,7 +63,11 @@ describe.skipIf(skipBrowser)("drawing a channel centerline on the map", () => {
     // Backspace removes the last point, a click puts it back.
     await s.page.keyboard.press("Backspace");
     expect(await s.page.locator('[data-testid="draw-panel"] .help').first().textContent()).toContain("3 points");
+    // Wait past the double-click interval: a second click on the same spot would otherwise finish the line.
+    await s.page.waitForTimeout(800);
     await s.page.mouse.click(pixels[3][0], pixels[3][1]);
+    await settle(s.page);
+    expect(await s.page.locator('[data-testid="draw-panel"] .help').first().textContent()).toContain("4 points");
     await settle(s.page);
     const labels = await s.page.locator(".brackline-draw-km").allTextContents();
     expect(await maxKm()).toBeGreaterThan(kmAfterTwo);
