@@ -57,6 +57,19 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
       }),
     );
   }
+  if (data.brushPaths && data.brushPaths.length > 0) {
+    layers.push(
+      new PathLayer<LonLat[]>({
+        id: "salinity-brush",
+        data: data.brushPaths,
+        getPath: (p) => p,
+        getColor: [40, 40, 40, 110],
+        getWidth: 22,
+        widthUnits: "pixels",
+        capRounded: true,
+      }),
+    );
+  }
   if (data.channel) {
     layers.push(
       new PathLayer({

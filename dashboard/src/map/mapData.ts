@@ -31,6 +31,8 @@ export interface MapData {
   overlay: SurveyOverlay | undefined;
   /** Overlay of the selected constituent (reaction zone, maximum). */
   zone: ConstituentOverlay | undefined;
+  /** Channel stretch of the salinity range brushed in a plot. */
+  brushPaths?: LonLat[][];
   stations: MapStation[];
   constituent: string;
   unit: string;

@@ -14,6 +14,7 @@ import type { DemoBundle, TextFile } from "../lib/demoData.ts";
 import type { MapData, MapStation } from "../map/mapData.ts";
 import { deviationsById, placementsById } from "../lib/analysisView.ts";
 import { withObservations } from "../panels/lib/observations.ts";
+import { brushStretch, networkOf } from "../lib/brushStretch.ts";
 import type { SurveyAnalysisView } from "../panels/lib/types.ts";
 
 /** Parses GeoJSON text for the basemap, reporting (not throwing) problems. */
@@ -37,6 +38,12 @@ export class AppState {
   readonly survey: Survey | undefined = $derived(this.workspace.surveys[this.selection.surveyIndex]);
   /** The active survey's analysis (undefined while the worker works). */
   readonly analysis = $derived(this.workspace.analyses[this.selection.surveyIndex]);
+  /** Channel network of the active centerline (for placing a brushed salinity range on the channel). */
+  readonly #network = $derived(networkOf(this.centerlineFile?.text));
+  /** The channel stretch where salinity lies in the brushed range (km intervals and map paths). */
+  readonly brushedStretch = $derived(
+    brushStretch(this.#network, this.analysis?.salinityProfile, this.selection.salinityBrush),
+  );
   /** The analysis as the panels take it: with every observation, QC-rejected ones included, for drawing. */
   readonly panelAnalysis: SurveyAnalysisView | undefined = $derived(
     this.analysis && this.survey ? withObservations(this.analysis, this.survey) : undefined,
@@ -79,6 +86,7 @@ export class AppState {
     channel: this.workspace.channel,
     overlay: this.overlay,
     zone: this.overlay?.constituents[this.selection.constituent],
+    brushPaths: this.brushedStretch.paths,
     stations: this.mapStations,
     constituent: this.selection.constituent,
     unit: this.unit,

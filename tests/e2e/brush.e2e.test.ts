@@ -1,0 +1,47 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import {
+  missingBrowserMessage,
+  openDashboard,
+  screenshot,
+  settle,
+  skipBrowser,
+  waitForAnalysis,
+  waitForMap,
+  type Session,
+} from "./browser.ts";
+
+describe.skipIf(skipBrowser)("brushing a salinity range in the mixing plot", () => {
+  let s: Session;
+
+  beforeAll(async () => {
+    const missing = missingBrowserMessage();
+    if (missing) throw new Error(missing);
+    s = await openDashboard();
+    await waitForMap(s.page);
+    await waitForAnalysis(s.page);
+    await settle(s.page);
+  });
+
+  afterAll(async () => {
+    await s?.close();
+  });
+
+  it("dragging across salinities in the mixing plot names the channel stretch in km and shades it on the map", async () => {
+    const box = (await s.page.locator('[data-panel="MixingPlot"] svg').first().boundingBox())!;
+    const y = box.y + box.height * 0.5;
+    await s.page.mouse.move(box.x + box.width * 0.35, y);
+    await s.page.mouse.down();
+    await s.page.mouse.move(box.x + box.width * 0.5, y, { steps: 6 });
+    await s.page.mouse.move(box.x + box.width * 0.62, y, { steps: 6 });
+    await s.page.mouse.up();
+    await settle(s.page);
+    const status = s.page.locator('[data-testid="brush-status"]');
+    await status.waitFor();
+    expect((await status.textContent()) ?? "").toMatch(/Salinity \d+\.\d–\d+\.\d lies at km\s+\d+\.\d–\d+\.\d/);
+    await screenshot(s.page, "brush-1-salinity-range-on-channel");
+  });
+
+  it("logs no console errors, page errors or off-line requests", () => {
+    expect(s.errors).toEqual([]);
+  });
+});
