@@ -8,8 +8,9 @@ export interface ConstituentSamples {
   leftOut: Record<string, number>;
 }
 
-function usableSalinity(cell: ValueCell): number | undefined {
-  return cell.status === "measured" && cell.accepted && cell.value !== undefined ? cell.value : undefined;
+/** The value of a cell when it was measured and accepted by QC; otherwise undefined. */
+export function acceptedValue(cell: ValueCell | undefined): number | undefined {
+  return cell && cell.status === "measured" && cell.accepted && cell.value !== undefined ? cell.value : undefined;
 }
 
 /**
@@ -32,7 +33,7 @@ export function constituentSamples(stations: readonly Station[], constituent: st
     leftOut[reason] = (leftOut[reason] ?? 0) + 1;
   };
   for (const st of stations) {
-    const salinity = usableSalinity(st.salinity);
+    const salinity = acceptedValue(st.salinity);
     const cell = st.values[constituent];
     if (salinity === undefined) {
       skip("no accepted salinity");

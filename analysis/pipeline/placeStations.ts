@@ -2,10 +2,7 @@ import type { ChannelNetwork } from "../geometry/types.ts";
 import { projectStations } from "../geometry/projectStations.ts";
 import type { Station } from "../survey/survey.ts";
 import type { MixingWarning, StationPlacement } from "./surveyAnalysis.ts";
-
-function accepted(cell: Station["salinity"] | undefined): number | undefined {
-  return cell && cell.status === "measured" && cell.accepted ? cell.value : undefined;
-}
+import { acceptedValue } from "./mixingSamples.ts";
 
 /**
  * Places survey stations on the channel: along-channel distance from the mouth [km], signed
@@ -24,14 +21,17 @@ export function placeStations(
 ): { placements: StationPlacement[]; warnings: MixingWarning[] } {
   const base = stations.map((st): StationPlacement => {
     const given = (st as Station & { distanceKm?: number }).distanceKm;
+    const salinity = acceptedValue(st.salinity);
+    const temperatureC = acceptedValue(st.temperatureC);
+    const pH = acceptedValue(st.pH);
     return {
       id: st.id,
       ...(st.lonLat ? { lonLat: st.lonLat } : {}),
       ...(given !== undefined && !network ? { alongChannelKm: given } : {}),
       offChannel: false,
-      ...(accepted(st.salinity) !== undefined ? { salinity: accepted(st.salinity) } : {}),
-      ...(accepted(st.temperatureC) !== undefined ? { temperatureC: accepted(st.temperatureC) } : {}),
-      ...(accepted(st.pH) !== undefined ? { pH: accepted(st.pH) } : {}),
+      ...(salinity !== undefined ? { salinity } : {}),
+      ...(temperatureC !== undefined ? { temperatureC } : {}),
+      ...(pH !== undefined ? { pH } : {}),
       ...(st.time !== undefined ? { time: st.time } : {}),
       ...(st.depthM !== undefined ? { depthM: st.depthM } : {}),
     };
