@@ -175,3 +175,17 @@ export async function settle(page: Page): Promise<void> {
 export async function selectionStatus(page: Page): Promise<string> {
   return ((await page.locator('[data-testid="selection-status"]').textContent()) ?? "").trim();
 }
+
+/**
+ * Opens the dashboard and waits until the map has drawn and the analysis has finished: the set-up
+ * every browser test starts from. Fails with the clear message when Chromium is missing.
+ */
+export async function openReadyDashboard(): Promise<Session> {
+  const missing = missingBrowserMessage();
+  if (missing) throw new Error(missing);
+  const s = await openDashboard();
+  await waitForMap(s.page);
+  await waitForAnalysis(s.page);
+  await settle(s.page);
+  return s;
+}

@@ -1,25 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import {
-  missingBrowserMessage,
-  openDashboard,
-  screenshot,
-  settle,
-  skipBrowser,
-  waitForAnalysis,
-  waitForMap,
-  type Session,
-} from "./browser.ts";
+import { openReadyDashboard, screenshot, settle, skipBrowser, type Session } from "./browser.ts";
 
 describe.skipIf(skipBrowser)("brushing a salinity range in the mixing plot", () => {
   let s: Session;
 
   beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-    await settle(s.page);
+    s = await openReadyDashboard();
   });
 
   afterAll(async () => {

@@ -1,25 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import {
-  missingBrowserMessage,
-  openDashboard,
-  screenshot,
-  settle,
-  skipBrowser,
-  waitForAnalysis,
-  waitForMap,
-  type Session,
-} from "./browser.ts";
+import { openReadyDashboard, screenshot, settle, skipBrowser, waitForAnalysis, type Session } from "./browser.ts";
 
 describe.skipIf(skipBrowser)("changing an end-member in the settings re-runs the analysis", () => {
   let s: Session;
 
   beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-    await settle(s.page);
+    s = await openReadyDashboard();
   });
 
   afterAll(async () => {
