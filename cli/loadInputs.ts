@@ -13,6 +13,7 @@ import type {
 } from "../analysis/index.ts";
 import { buildChannelNetwork, mergeSummaries, readStationTable, readSurveyText } from "../analysis/index.ts";
 import { InputError } from "./exitCodes.ts";
+import { appendAll } from "../analysis/survey/arrayExtent.ts";
 
 function readText(path: string, what: string): string {
   try {
@@ -51,7 +52,7 @@ export function loadSurveys(paths: string[], options: LoadSurveyOptions = {}): L
     stationTable = readStationTable(readText(options.stationsPath, "station table"), {
       fileName: basename(options.stationsPath),
     });
-    issues.push(...stationTable.issues);
+    appendAll(issues, stationTable.issues);
   }
   let mapping: ColumnMapping | undefined;
   if (options.mappingPath) {
@@ -72,7 +73,7 @@ export function loadSurveys(paths: string[], options: LoadSurveyOptions = {}): L
     }),
   );
   const surveys = results.flatMap((r) => r.surveys);
-  for (const r of results) issues.push(...r.issues);
+  for (const r of results) appendAll(issues, r.issues);
   const summary = results.map((r) => r.summary).reduce((a, b) => mergeSummaries(a, b));
   if (surveys.length === 0) {
     const first = issues.find((i) => i.severity === "error");

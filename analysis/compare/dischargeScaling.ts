@@ -1,6 +1,7 @@
 import jStat from "jstat";
 import type { DischargeScaling, ReferenceScaling } from "./types.ts";
 import { formatFixed } from "./formatNumber.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Published discharge scalings of the salt-intrusion length L ∝ Q^n (mixing-methods.md §5.1, §5.3). */
 export const REFERENCE_SCALINGS: readonly ReferenceScaling[] = [
@@ -75,7 +76,7 @@ export function dischargeScaling(
     salinity,
     exponent: slope,
     nSurveys: n,
-    dischargeRangeM3s: [Math.min(...qs), Math.max(...qs)],
+    dischargeRangeM3s: [minOf(qs), maxOf(qs)],
     references: [...REFERENCE_SCALINGS],
     note: "",
   };

@@ -53,6 +53,16 @@ export class RecordRouter {
         expected: "a header row and data rows (the file is empty)",
         severity: "error",
       });
+    const unclosed = head?.parseErrors.find((e) => e.startsWith("UnclosedQuote"));
+    if (head !== undefined && unclosed !== undefined)
+      reader.issues.push({
+        file: this.options.fileName,
+        row: 1,
+        column: "",
+        value: head.fields.join(",").slice(0, 200),
+        expected: `a header row with balanced quotes (${unclosed.slice(15)})`,
+        severity: "error",
+      });
     for (const r of rest) reader.read(r);
     this.buffer = [];
   }

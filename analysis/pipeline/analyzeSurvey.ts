@@ -12,6 +12,7 @@ import { SCREENING_CAUTION } from "./caution.ts";
 import { constituentSamples } from "./mixingSamples.ts";
 import { placeStations } from "./placeStations.ts";
 import type { MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Per-constituent settings a user may change (end-member overrides, precision, k, ...). */
 export type ConstituentSettings = Partial<
@@ -108,9 +109,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     ...(intrusion?.km !== undefined ? { saltIntrusionKm: intrusion.km } : {}),
     saltIntrusionSalinity: saltS,
     isohalines: iso ? iso.positions.map((p) => ({ salinity: p.salinity, km: p.km })) : [],
-    ...(salinities.length > 0
-      ? { salinityRange: [Math.min(...salinities), Math.max(...salinities)] as [number, number] }
-      : {}),
+    ...(salinities.length > 0 ? { salinityRange: [minOf(salinities), maxOf(salinities)] as [number, number] } : {}),
     nStations: survey.stations.length,
   };
   const wanted = options.constituents ?? survey.constituents.map((c) => c.name);

@@ -7,6 +7,7 @@ import type { ScaleLinear } from "d3-scale";
 import { bandPath, extent, linear, linePath, round, type Frame } from "./scales.ts";
 import { observationsOf } from "./observations.ts";
 import type { ConstituentAnalysisView, ObservationPoint } from "./types.ts";
+import { minOf, maxOf } from "../../../../analysis/survey/arrayExtent.ts";
 
 export interface ScreenPoint extends ObservationPoint {
   px: number;
@@ -85,8 +86,8 @@ export function mixingModel(c: ConstituentAnalysisView | undefined, frame: Frame
   }
   const z = c?.reactionZone;
   if (z) {
-    const a = x(Math.min(...z.salinity));
-    const b = x(Math.max(...z.salinity));
+    const a = x(minOf(z.salinity));
+    const b = x(maxOf(z.salinity));
     model.zone = { x: round(a), width: round(Math.max(1, b - a)), kind: z.kind };
   }
   const m = c?.maximum;
