@@ -7,6 +7,8 @@ export { minOf, maxOf, appendAll } from "./survey/arrayExtent.ts";
 // --- end survey ---
 
 // --- geometry ---
+export { centerlinePlausibility, centerlineVertices, CENTERLINE_FAR_KM } from "./geometry/centerlinePlausibility.ts";
+export type { CenterlinePlausibility } from "./geometry/centerlinePlausibility.ts";
 export type {
   GeometryWarning,
   MouthOption,

@@ -11,7 +11,14 @@ import type {
   StationTable,
   Survey,
 } from "../analysis/index.ts";
-import { buildChannelNetwork, mergeSummaries, readStationTable, readSurveyText } from "../analysis/index.ts";
+import {
+  buildChannelNetwork,
+  centerlinePlausibility,
+  centerlineVertices,
+  mergeSummaries,
+  readStationTable,
+  readSurveyText,
+} from "../analysis/index.ts";
 import { InputError } from "./exitCodes.ts";
 import { appendAll } from "../analysis/survey/arrayExtent.ts";
 
@@ -76,7 +83,7 @@ export function loadSurveys(paths: string[], options: LoadSurveyOptions = {}): L
   for (const r of results) appendAll(issues, r.issues);
   const summary = results.map((r) => r.summary).reduce((a, b) => mergeSummaries(a, b));
   if (surveys.length === 0) {
-    const first = issues.find((i) => i.severity === "error");
+    const first = issues.find((i) => i.severity === "error") ?? issues[0];
     throw new InputError(
       first
         ? `${first.file}: row ${first.row}, column "${first.column}", value "${first.value}": expected ${first.expected}`
@@ -118,6 +125,22 @@ export function loadCenterline(path: string, mouth?: string): { network: Channel
     if (error instanceof RangeError || error instanceof TypeError) throw new InputError(`${path}: ${error.message}`);
     throw error;
   }
+}
+
+/**
+ * Stops with exit 2 when the centerline is written as [lat, lon] (stations far from it, near when
+ * swapped); prints a warning when the stations are merely far from it.
+ */
+export function checkCenterlinePlacement(
+  path: string,
+  geojson: unknown,
+  surveys: readonly Survey[],
+  err: (text: string) => void,
+): void {
+  const lonLats = surveys.flatMap((s) => s.stations.flatMap((st) => (st.lonLat ? [st.lonLat] : [])));
+  const p = centerlinePlausibility(centerlineVertices(geojson), lonLats);
+  if (p?.severity === "error") throw new InputError(`${path}: ${p.message}`);
+  if (p) err(`warning: ${path}: ${p.message}`);
 }
 
 /** Parses `--discharge 450` or `--discharge "wet-2025-03=450,dry-2025-09=60"`. */

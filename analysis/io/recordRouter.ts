@@ -76,8 +76,8 @@ export class RecordRouter {
         row: 1,
         column: "",
         value: this.headers.join(",").slice(0, 200),
-        expected: "data rows below the header",
-        severity: "warning",
+        expected: `data rows below the header (the file holds only a header row of ${this.headers.length} column${this.headers.length === 1 ? "" : "s"}${this.headers.length === 1 ? " — a truncated file or an undetected delimiter?" : ""})`,
+        severity: "error",
       });
     }
     return finishImport(

@@ -3,7 +3,14 @@ import { writeFileSync } from "node:fs";
 import type { Command } from "../command.ts";
 import type { LayerChoice, SurveyAnalysis } from "../../analysis/index.ts";
 import { analyzeSurvey, SCREENING_CAUTION } from "../../analysis/index.ts";
-import { describeImport, loadCenterline, loadSurveys, parseCount, parseDischarge } from "../loadInputs.ts";
+import {
+  checkCenterlinePlacement,
+  describeImport,
+  loadCenterline,
+  loadSurveys,
+  parseCount,
+  parseDischarge,
+} from "../loadInputs.ts";
 import { surveyJson, resultsCsv } from "../formatResults.ts";
 import { UsageError } from "../exitCodes.ts";
 
@@ -73,7 +80,9 @@ export const analyzeCommand: Command = {
       ...(discharge !== undefined ? { dischargeM3s: discharge } : {}),
     });
     io.err(describeImport(loaded));
-    const network = values.centerline ? loadCenterline(values.centerline, values.mouth).network : undefined;
+    const centerline = values.centerline ? loadCenterline(values.centerline, values.mouth) : undefined;
+    if (centerline) checkCenterlinePlacement(values.centerline!, centerline.geojson, loaded.surveys, io.err);
+    const network = centerline?.network;
     const draws = parseCount("draws", values.draws, 2000);
     const seed = parseCount("seed", values.seed, 1);
     const analyses: SurveyAnalysis[] = loaded.surveys.map((survey, i) => {
