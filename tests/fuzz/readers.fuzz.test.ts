@@ -9,7 +9,7 @@ import { importWorkspace } from "../../analysis/io/workspace.ts";
 import { cases } from "./scale.ts";
 
 /** Malformed files per run (FUZZ_SCALE multiplies). */
-const FILES = cases(3000);
+const FILES = cases(2000);
 const OTHER = cases(500);
 
 type Rnd = () => number;
