@@ -222,7 +222,7 @@ export type { NormalisedStationId } from "./io/stationIds.ts";
 export { detectDialect, detectNewline, stripBom } from "./io/dialect.ts";
 export { WORKSPACE_LIMITS } from "./io/workspaceSchema.ts";
 export { conflictingStationPositions, STATION_POSITION_TOLERANCE_KM } from "./io/stationPositionCheck.ts";
-export { MAX_STATION_ID_CHARS, PSS78_MAX_SALINITY } from "./io/rowReader.ts";
+export { MAX_DISCHARGE_M3S, MAX_STATION_ID_CHARS, PSS78_MAX_SALINITY } from "./io/rowReader.ts";
 export type { TextDialect } from "./io/dialect.ts";
 export { createWorkspace, exportWorkspace, importWorkspace } from "./io/workspace.ts";
 export { workspaceSchema, WORKSPACE_VERSION, WORKSPACE_FORMAT } from "./io/workspaceSchema.ts";

@@ -40,6 +40,9 @@ export const MAX_STATION_ID_CHARS = 200;
  */
 export const PSS78_MAX_SALINITY = 42;
 
+/** Largest river discharge read [m³/s]: ten times the largest river's mean flow (common practice: a plausibility bound). */
+export const MAX_DISCHARGE_M3S = 2_000_000;
+
 const VALUE_ROLES = ["salinity", "temperature", "pH", "conductivity"] as const;
 
 /**
@@ -185,7 +188,18 @@ export function createRowReader(
     }
     if (s.discharge !== undefined) {
       const q = readNumberCell(ctx, header(s.discharge), cellText(s.discharge), 0);
-      if (q !== undefined) st.dischargeM3s = q;
+      if (q !== undefined && q > 0 && q <= MAX_DISCHARGE_M3S) st.dischargeM3s = q;
+      else if (q !== undefined)
+        issues.push(
+          makeIssue(
+            options.file,
+            row,
+            header(s.discharge),
+            cellText(s.discharge),
+            `a river discharge above 0 and at most ${MAX_DISCHARGE_M3S} m³/s; not used`,
+            "warning",
+          ),
+        );
     }
     if (rowFlag !== undefined && rowFlag.trim() !== "") st.rowFlag = rowFlag;
     stations.push(st);

@@ -59,6 +59,12 @@ describe(`fuzz: ${N} seeded command lines and the fixed ones through brackline (
     expect(run.err).toMatch(/row 1, column "", value "survey,station/);
   });
 
+  it("a river discharge of 0 in the file is warned and not used (was an internal error, exit 70)", () => {
+    const run = runs[7] as Run;
+    expect(run.code).toBe(0);
+    expect(run.err).toMatch(/discharge.*value "0": expected a river discharge above 0/);
+  });
+
   // Items 7 and 10 (exit codes, stack traces, escape stripping) are fixed on the api branch; `it.fails`
   // until that branch is merged, then these become plain `it`.
   it.fails("item 7: the exit code is 0, 2 or 64 as documented, never 70 (internal) for user input", () => {

@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Rnd } from "./random.ts";
 import { HOSTILE_TEXT, int, pick } from "./random.ts";
-import { DEMO_SURVEY, demoColumn, withCell } from "./surveys.ts";
+import { DEMO_SURVEY, demoColumn, withCell, withCellLine } from "./surveys.ts";
 import { malformedCenterline } from "./centerlines.ts";
 
 /** Files the generated command lines refer to, written once into a fresh temporary folder. */
@@ -29,6 +29,14 @@ export function hostileSurvey(): string {
   return text;
 }
 
+/** The demo survey with a river discharge of 0 on every row (was an internal error, exit 70). */
+export function zeroDischargeSurvey(): string {
+  const q = demoColumn("discharge (m³/s)");
+  return DEMO_SURVEY.split("\n")
+    .map((l, i) => (i === 0 || l === "" ? l : withCellLine(l, q, "0")))
+    .join("\n");
+}
+
 /** Writes the fixture files (good, hostile and malformed surveys; good and malformed centerlines). */
 export function writeCliFixtures(r: Rnd): CliFixtures {
   const dir = mkdtempSync(join(tmpdir(), "brackline-fuzz-"));
@@ -50,6 +58,7 @@ export function writeCliFixtures(r: Rnd): CliFixtures {
     put("esc\u001b[31m-name.csv", DEMO_SURVEY),
     put("unclosed.csv", DEMO_SURVEY.replace(",W11,", ',"W11,')),
     join(dir, "a-folder"),
+    put("zero-discharge.csv", zeroDischargeSurvey()),
   ];
   const centerlines = [
     put("line.geojson", JSON.stringify(malformedCenterline(r, "good"))),
@@ -102,5 +111,6 @@ export function fixedCommandLines(f: CliFixtures): string[][] {
     ["analyze", escName, "--out", join(f.dir, "no-such-folder", "x.json"), "--draws", "20"],
     ["analyze", f.missing],
     ["analyze", good, "--format", "xml"],
+    ["analyze", f.surveys[8] as string, "--draws", "20"],
   ];
 }

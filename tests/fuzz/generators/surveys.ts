@@ -23,6 +23,13 @@ export function withCell(text: string, row: number, col: number, value: string):
   return join(ls);
 }
 
+/** One CSV line with cell `col` replaced. */
+export function withCellLine(line: string, col: number, value: string): string {
+  const cells = line.split(",");
+  cells[col] = value;
+  return cells.join(",");
+}
+
 /** Column index of a header in the demo file. */
 export function demoColumn(header: string): number {
   return (lines(DEMO_SURVEY)[0] ?? "").split(",").indexOf(header);
@@ -37,7 +44,7 @@ export function mutateSurvey(r: Rnd): MalformedSurvey {
   const width = (ls[0] ?? "").split(",").length;
   const row = 1 + int(r, ls.length - 1);
   const col = int(r, width);
-  const kind = int(r, 14);
+  const kind = int(r, 15);
   switch (kind) {
     case 0:
       return { name: "unclosed quote", text: withCell(DEMO_SURVEY, row, col, `"${(ls[row] ?? "").split(",")[col]}`) };
@@ -87,6 +94,11 @@ export function mutateSurvey(r: Rnd): MalformedSurvey {
       const lat = demoColumn("latitude");
       copy[lat] = (Number(copy[lat]) + 0.05 + r()).toFixed(5);
       return { name: "conflicting position", text: join([...ls, copy.join(",")]) };
+    }
+    case 13: {
+      const q = demoColumn("discharge (m³/s)");
+      const value = pick(r, ["0", "-5", "1e308", "abc"]);
+      return { name: `discharge ${value}`, text: join(ls.map((l, i) => (i === 0 ? l : withCellLine(l, q, value)))) };
     }
     default:
       return { name: "blank lines", text: join(ls.flatMap((l, i) => (i === row ? [l, "", " "] : [l]))) };
