@@ -153,7 +153,7 @@ export type { PredominanceBoundary } from "./seawater/predominance.ts";
 export { feSpeciationVsPh } from "./seawater/feSeries.ts";
 export { feSolubilityLiuMillero2002NmolKg, ionicStrengthLiuMillero2002 } from "./seawater/feSolubilityLiuMillero.ts";
 export type { FeSpeciationSeries } from "./seawater/feSeries.ts";
-export { CD_CHLORIDE_SETS } from "./seawater/cdChlorideSets.ts";
+export { CD_CHLORIDE_SETS, CD_ACTIVITY_MODEL_NOTE, DEFAULT_CD_CHLORIDE_SET_ID } from "./seawater/cdChlorideSets.ts";
 export type { CdChlorideSet } from "./seawater/cdChlorideSets.ts";
 export { cdChlorideSpeciation } from "./seawater/cdChloride.ts";
 export type { CdSpeciation, CdSpeciationOptions, CdExtraLigand } from "./seawater/cdChloride.ts";
