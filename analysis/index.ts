@@ -262,6 +262,9 @@ export { formatSignificant, formatFixed, MINUS } from "./compare/formatNumber.ts
 // --- report ---
 export { buildBriefing, BRIEFING_CAUTION } from "./report/buildBriefing.ts";
 export { renderBriefingHtml } from "./report/renderHtml.ts";
+export { BIBLIOGRAPHY, bibEntry, formatReference, referenceList } from "./report/referencesBibliography.ts";
+export type { BibEntry } from "./report/referencesBibliography.ts";
+export { authorYear, cite, briefingReferences, methodsParagraphs } from "./report/references.ts";
 export type {
   BriefingDocument,
   BriefingInput,

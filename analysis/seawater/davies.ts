@@ -5,7 +5,7 @@ export const DAVIES_MAX_IONIC_STRENGTH = 0.5;
 
 /** Options of the Davies equation. */
 export interface DaviesOptions {
-  /** Debye–Hückel A [(kg/mol)^½]; pin it (e.g. 0.5085, Truesdell & Jones 1974) to reproduce published numbers. Default: {@link debyeHuckelA}(temperatureC). */
+  /** Debye–Hückel A [(kg/mol)^½]; pin it (e.g. the classical 0.5085) to reproduce published numbers. Default: {@link debyeHuckelA}(temperatureC). */
   A?: number;
   /** Temperature [°C], used for A when A is not pinned (default 25). */
   temperatureC?: number;
@@ -16,11 +16,11 @@ export interface DaviesOptions {
 /**
  * Debye–Hückel limiting-law constant A (log10, molal): A = 1.82483·10⁶·√ρ_w/(ε_r·T)^{3/2}, ρ_w [g/cm³]
  * from EOS-80 at S = 0, ε_r = 87.740 − 0.40008 t + 9.398·10⁻⁴ t² − 1.410·10⁻⁶ t³ (Malmberg & Maryott 1956).
- * Gives 0.5108 at 25 °C; the classical value 0.5085 (Truesdell & Jones 1974) corresponds to ε_r ≈ 78.54.
+ * Gives 0.5108 at 25 °C; the classical value 0.5085 (from memory) corresponds to ε_r ≈ 78.54.
  * @param temperatureC temperature [°C], 0…100
  * @returns A [(kg/mol)^½]
  * @throws {RangeError} when temperatureC is outside 0…100 or not finite
- * @see bibliography keys malmberg1956 (ε_r fit; from memory), truesdell1974 (A = 0.5085).
+ * @see bibliography key malmberg1956 (ε_r fit; from memory).
  */
 export function debyeHuckelA(temperatureC: number): number {
   if (!Number.isFinite(temperatureC) || temperatureC < 0 || temperatureC > 100) {

@@ -30,7 +30,7 @@ describe("debyeHuckelA()", () => {
       expectWithin(debyeHuckelA(c.inputs.temperatureC), c.expected, c.tol, c.source);
     });
   }
-  it("differs from the classical 0.5085 (Truesdell & Jones 1974, from memory) at 25 °C only through the dielectric constant (derived: A ∝ (ε_r T)^-3/2)", () => {
+  it("differs from the classical 0.5085 (from memory) at 25 °C only through the dielectric constant (derived: A ∝ (ε_r T)^-3/2)", () => {
     expectWithin(debyeHuckelA(25), 0.5085, 0.003, "A(25) vs 0.5085");
   });
 });
