@@ -48,7 +48,7 @@ describe("bibliography", () => {
     for (const f of tsFiles("analysis")) {
       const text = readFileSync(f, "utf8");
       for (const m of text.matchAll(/bibliography keys? ([^\n(]*)/g))
-        for (const k of m[1].split(/[,;\s]+/).filter((w) => /^[a-z][A-Za-z0-9]*\d{4}[A-Za-z]*$/.test(w)))
+        for (const k of m[1].split(/[,;\s().]+/).filter((w) => /^[a-z][A-Za-z]*\d{4}[A-Za-z0-9]*$/.test(w)))
           if (!Object.hasOwn(BIBLIOGRAPHY, k)) missing.push(`${f}: ${k}`);
     }
     expect(missing).toEqual([]);
