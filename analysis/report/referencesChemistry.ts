@@ -118,6 +118,16 @@ const ROWS: readonly Row[] = [
     "fromMemory",
     "title, journal, volume, pages, DOI and abstract confirmed against the publisher's abstract record; authors not retrieved, so the entry is incomplete",
   ],
+  [
+    "debyeHuckel1923",
+    "Debye, P., Hückel, E.",
+    1923,
+    "Zur Theorie der Elektrolyte. I. Gefrierpunktserniedrigung und verwandte Erscheinungen",
+    "Physikalische Zeitschrift 24, 185–206",
+    undefined,
+    "fromMemory",
+    "recalled",
+  ],
   ["davies1962", "Davies, C.W.", 1962, "Ion Association", "Butterworths, London", undefined, "fromMemory", "recalled"],
   [
     "stumm1996",

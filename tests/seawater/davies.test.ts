@@ -43,7 +43,7 @@ describe("daviesValidityWarning()", () => {
 });
 
 describe("conditionalLogK()", () => {
-  it("log βc(CdCl⁺) = 1.98 + log γ2 + log γ1 − log γ1 = 1.486 at I = 0.72263, A = 0.5085 (chemistry-constants.md §4.2)", () => {
+  it("log βc(CdCl⁺) = 1.98 + log γ2 + log γ1 − log γ1 = 1.486 at I = 0.72263, A = 0.5085 (derived; recomputed independently in independentChecks.test.ts)", () => {
     expectWithin(conditionalLogK(1.98, [2, -1], [1], 0.72263, { A: 0.5085 }), 1.486, 6e-4, "log βc1");
   });
 });

@@ -139,7 +139,7 @@ describe("feSpeciationVsPh()", () => {
 });
 
 describe("feSolubilityLiuMillero2002NmolKg()", () => {
-  it("gives 0.33 nM at S = 35, 25 °C (Liu & Millero 2002 fit, chemistry-constants.md §3.2; abstract: 0.3–0.5 nM)", () => {
+  it("gives 0.33 nM at S = 35, 25 °C (Liu & Millero 2002 fit as printed in the abstract; abstract: 0.3–0.5 nM)", () => {
     expectWithin(feSolubilityLiuMillero2002NmolKg(35, 25), 0.33, 0.005, "Fe(III) solubility");
   });
   it("uses I = 19.9225·S/(1000 − 1.005·S) (Liu & Millero 2002 abstract): 0.7227088 at S = 35 (the sheet's §2.2 prints 0.722711, 2e-6 off)", () => {
