@@ -44,7 +44,7 @@ describe.skipIf(!hasGit)("npm start on a fresh clone (scripts/ensure.js)", () =>
         const onData = (chunk: Buffer) => {
           out += chunk.toString();
           const match = /(http:\/\/127\.0\.0\.1:\d+\/)/.exec(out);
-          if (match) resolveUrl(match[1]);
+          if (match && out.includes("Ctrl+C")) resolveUrl(match[1]);
         };
         child.stdout.on("data", onData);
         child.stderr.on("data", onData);
