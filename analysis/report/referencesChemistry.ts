@@ -63,10 +63,10 @@ const ROWS: readonly Row[] = [
     "Liu, X., Millero, F.J.",
     2002,
     "The solubility of iron in seawater",
-    "Marine Chemistry 77, 43–54",
+    "Marine Chemistry 77(1), 43–54",
     "10.1016/S0304-4203(01)00074-3",
     "confirmed",
-    "reference sheet: confirmed against the abstract (including the fits)",
+    "publisher abstract record (volume, issue, pages, DOI, fits, 5–50 °C range) and the reference sheet",
   ],
   [
     "byrneLuoYoung2000",

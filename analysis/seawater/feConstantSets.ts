@@ -61,7 +61,7 @@ const SETS: Record<FeConstantSetId, FeConstantSet> = {
     id: "liuMillero2002",
     label: "Liu & Millero 2002: FeOH²⁺ to Fe(OH)₃⁰ in seawater (S ≈ 36, I ≈ 0.74), 5–50 °C",
     source:
-      "Liu, X., Millero, F.J., 2002. The solubility of iron in seawater. Mar. Chem. 77, 43–54, doi:10.1016/S0304-4203(01)00074-3 (log*β1 = 1.86 − 1300/T, log*β2 = 0.18 − 1997/T, log*β3 = −2.47 − 3185/T, log*Ks0 = −9.17 + 3993/T; no Fe(OH)4⁻; 5–50 °C range from memory)",
+      "Liu, X., Millero, F.J., 2002. The solubility of iron in seawater. Mar. Chem. 77, 43–54, doi:10.1016/S0304-4203(01)00074-3 (log*β1 = 1.86 − 1300/T, log*β2 = 0.18 − 1997/T, log*β3 = −2.47 − 3185/T, log*Ks0 = −9.17 + 3993/T; no Fe(OH)4⁻; measured at 5–50 °C and S 0–36, as the abstract states; pH scale not stated in the abstract)",
     medium: "seawater",
     solid: "Fe(OH)3(s)",
     logBeta: (t) => {
@@ -74,6 +74,7 @@ const SETS: Record<FeConstantSetId, FeConstantSet> = {
       "concentration scale of the seawater medium, most likely free [H⁺] (not verified against the paper); a total-scale pH reads ≈ 0.1 lower than free",
     notes: [
       "Stoichiometric constants for seawater of S ≈ 36; no Fe(OH)₄⁻; applied unchanged at lower salinity (with a warning).",
+      "The authors attribute the larger Fe(OH)₃⁰ constant in seawater than in NaCl to Fe(III) bound to natural organic matter, so this set is not purely inorganic.",
     ],
   },
 };
