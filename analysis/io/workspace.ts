@@ -4,6 +4,7 @@ import { makeIssue } from "./importSummary.ts";
 import { WORKSPACE_MIGRATIONS } from "./workspaceMigrations.ts";
 import type { WorkspaceDocument } from "./workspaceSchema.ts";
 import {
+  isTileUrlTemplate,
   surveySchema,
   WORKSPACE_FORMAT,
   WORKSPACE_LIMITS,
@@ -181,7 +182,20 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
     return { workspace: undefined, issues };
   }
   const tiles = result.data.settings.tileUrl;
-  if (tiles !== undefined && tiles !== "" && result.data.settings.useTiles === true) {
+  if (tiles !== undefined && tiles !== "" && !isTileUrlTemplate(tiles)) {
+    delete result.data.settings.tileUrl;
+    result.data.settings.useTiles = false;
+    issues.push(
+      makeIssue(
+        FILE,
+        0,
+        "settings.tileUrl",
+        tiles,
+        "an https:// tile URL template with {z}, {x} and {y}; the tile URL was left out",
+        "warning",
+      ),
+    );
+  } else if (tiles !== undefined && tiles !== "" && result.data.settings.useTiles === true) {
     // A shared workspace must not make the browser contact a server the user did not choose.
     result.data.settings.useTiles = false;
     issues.push(

@@ -143,16 +143,21 @@ export const workspaceSettingsSchema = z.looseObject({
   grouping: grouping.optional(),
   flagMap: z.record(z.string(), z.enum(["accept", "reject", "missing"])).optional(),
   colouring: z.string().optional(),
-  tileUrl: z
-    .string()
-    .max(2048)
-    .refine(
-      (u) => u === "" || (/^https:\/\/[^\s"'<>]+$/.test(u) && ["{z}", "{x}", "{y}"].every((p) => u.includes(p))),
-      "an https:// tile URL template with {z}, {x} and {y}",
-    )
-    .optional(),
+  /** Raster tile URL template; checked by {@link isTileUrlTemplate} when a workspace is read. */
+  tileUrl: z.string().max(2048).optional(),
   useTiles: z.boolean().optional(),
 });
+
+/**
+ * True for a tile URL template Brackline will fetch from: https (or http on this machine) with the
+ * {z}, {x} and {y} placeholders and no white space, quotes or angle brackets.
+ *
+ * @param url the template text
+ */
+export function isTileUrlTemplate(url: string): boolean {
+  const scheme = /^(https:\/\/|http:\/\/(localhost|127\.0\.0\.1)(:\d+)?\/)[^\s"'<>]+$/;
+  return scheme.test(url) && ["{z}", "{x}", "{y}"].every((p) => url.includes(p));
+}
 
 const endmember = z.object({
   salinity: finite.refine((v) => v >= 0 && v <= 70, "a practical salinity between 0 and 70"),
