@@ -1,7 +1,7 @@
 import { z } from "zod";
 import type { Survey } from "../survey/survey.ts";
 import { columnMappingSchema } from "./columnMapping.ts";
-import { concentrationUnitText } from "./unitText.ts";
+import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
 
 /** Current workspace document version. */
 export const WORKSPACE_VERSION = 2;
@@ -81,8 +81,8 @@ export const stationSchema = z.looseObject({
 const constituentSchema = z.object({
   name: text,
   unit: text.refine(
-    (u) => concentrationUnitText(u) === u,
-    "a concentration unit from the units table, written as the table writes it (e.g. nmol/L, µmol/kg, µg/L)",
+    (u) => concentrationUnitText(u) === u || canonicalUnitText(u) === u,
+    "a unit from the units table, written as the table writes it (e.g. nmol/L, µmol/kg, µg/L, NTU)",
   ),
   header: text,
 });
