@@ -5,6 +5,7 @@ import { underwayImportBench } from "./underwayImport.ts";
 import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
+import { wideHeaderBench } from "./wideHeader.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
 export const benchCases: BenchCase[] = [
@@ -12,6 +13,7 @@ export const benchCases: BenchCase[] = [
   projectionBench,
   underwayImportBench,
   underwayBinningBench,
+  wideHeaderBench,
   dashboardBench,
   bundleSizeBench,
 ];
