@@ -3,8 +3,8 @@ import type { ProvenanceFile } from "../../analysis/index.ts";
 import { buildBriefing, renderBriefingHtml, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { readBytes, writeOut } from "../files.ts";
-import { parseCommandLine, workspaceSettings } from "../options.ts";
-import { analyzeFiles, provenanceOf, SURVEY_OPTIONS } from "./compare.ts";
+import { INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
+import { analyzeFiles, provenanceOf } from "./compare.ts";
 
 /** A map file read for the briefing, with its provenance. */
 export interface MapFile {
@@ -78,7 +78,7 @@ export const reportCommand: Command = {
   summary: "write a self-contained HTML stakeholder briefing (prints to A4 PDF)",
   help,
   async run(args, io) {
-    const { values, positionals } = parseCommandLine(args, [...SURVEY_OPTIONS, "basemap", "out", "title", "date"]);
+    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "basemap", "out", "title", "date"]);
     workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
