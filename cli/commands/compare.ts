@@ -4,7 +4,7 @@ import type { Command, CommandIo } from "../command.ts";
 import type { ProvenanceFile, SurveyAnalysis, WorkspaceInputs, WorkspaceResults } from "../../analysis/index.ts";
 import { analyzeInputs, comparisonToCsv, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
-import { readBytes, writeOut } from "../files.ts";
+import { checkOut, readBytes, writeOut } from "../files.ts";
 import { INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings, type OptionValues } from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
 
@@ -79,6 +79,7 @@ export const compareCommand: Command = {
     workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give the survey files to compare");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
+    if (values.out !== undefined) checkOut(values.out);
     const { analyses, results } = analyzeFiles(positionals, values, io, true);
     io.err(`comparing ${analyses.length} surveys against ${analyses[0]!.survey.name}`);
     const comparison = results.comparison!;

@@ -2,7 +2,7 @@ import type { Command } from "../command.ts";
 import type { ProvenanceFile } from "../../analysis/index.ts";
 import { buildBriefing, renderBriefingHtml, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
-import { readBytes, writeOut } from "../files.ts";
+import { checkOut, readBytes, writeOut } from "../files.ts";
 import { INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
 import { analyzeFiles, provenanceOf } from "./compare.ts";
 
@@ -83,6 +83,7 @@ export const reportCommand: Command = {
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (!values.out) throw new UsageError("missing --out <briefing.html>");
+    if (values.out !== undefined) checkOut(values.out);
     const basemap = values.basemap ? readGeoJsonFile(values.basemap, "basemap") : undefined;
     const { inputs, analyses, files, draws, seed } = analyzeFiles(positionals, values, io);
     const channel = inputs.channel!;
