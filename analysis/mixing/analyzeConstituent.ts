@@ -79,7 +79,11 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
   if (!(sea.salinity > river.salinity))
     return insufficient(`Sea end-member salinity ${sea.salinity} is not above river salinity ${river.salinity}.`);
   // Disagreement of the freshest samples beyond the fitted curve (not the slope the curve explains).
-  const rv = riverVariability(tp && !options.river ? groupScatter(used, group, tp.fit) : river, sig(river.conc), options);
+  const rv = riverVariability(
+    tp && !options.river ? groupScatter(used, group, tp.fit) : river,
+    sig(river.conc),
+    options,
+  );
   warnings.push(...rv.warnings);
   if (tp && !options.river) warnings.push(...riverSlopeWarning(used, group, river, options.unit));
   const line = dilutionLine(river, sea, unit);

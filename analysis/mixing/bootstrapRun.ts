@@ -81,7 +81,12 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const curves = new Float64Array(D * G).fill(Number.NaN);
   const ys = new Float64Array(n);
   const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
-  const splineWs = { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: 0 };
+  const splineWs = {
+    knots: new Float64Array(n),
+    values: new Float64Array(n),
+    secondDerivs: new Float64Array(n),
+    count: 0,
+  };
   const f = new Float64Array(G);
   const d2 = new Float64Array(G);
   const rhoWork = new Float64Array(G);

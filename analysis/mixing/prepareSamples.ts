@@ -2,6 +2,9 @@ import type { MixingWarning } from "./result.ts";
 import type { MixingSample, Precision } from "./options.ts";
 import { sigmaOf } from "./precision.ts";
 
+/** Smallest σ as a fraction of the largest |concentration| (keeps weights finite). */
+export const SIGMA_FLOOR_FRACTION = 1e-6;
+
 /** A sample ready for fitting, sorted by salinity. */
 export interface PreparedSample {
   stationId: string;
@@ -76,6 +79,10 @@ export function prepareSamples(
     });
   }
   used.sort((a, b) => a.salinity - b.salinity);
+  // σ floor: a zero σ (zero concentration with no absolute precision) would give an infinite weight.
+  const scale = used.reduce((m, s) => Math.max(m, Math.abs(s.conc)), 0);
+  const floor = scale > 0 && Number.isFinite(scale) ? SIGMA_FLOOR_FRACTION * scale : 1;
+  for (const s of used) if (!(s.sigma >= floor)) s.sigma = floor;
   if (invalid.length > 0)
     warnings.push({
       code: "invalid-sample",

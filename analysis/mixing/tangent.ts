@@ -32,7 +32,8 @@ export function seawardTangent(
   const sMax = x[n - 1]!;
   const seaward = x.filter((s) => s >= fit.breakSalinity).length;
   const toMouth = !fit.linear && seaward < 2;
-  const from = toMouth ? sMax : fit.breakSalinity;
+  // The segment is the stations at or seaward of the (continuous) break.
+  const from = toMouth ? sMax : (x.find((s) => s >= fit.breakSalinity) ?? sMax);
   return {
     tangent: {
       slope,

@@ -241,7 +241,7 @@ export function twoPhaseAt(f: TwoPhaseFit, s: number): [number, number, number] 
   const h = Math.max(0, f.breakSalinity - s) / R;
   const v = a0 + (a1 * (s - f.sMin)) / R + b2 * h * h + b3 * h * h * h;
   const d1 = (a1 - 2 * b2 * h - 3 * b3 * h * h) / R;
-  const d2 = (2 * b2 + 6 * b3 * h) / (R * R) * (h > 0 ? 1 : 0);
+  const d2 = ((2 * b2 + 6 * b3 * h) / (R * R)) * (h > 0 ? 1 : 0);
   return [v, d1, d2];
 }
 

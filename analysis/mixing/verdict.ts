@@ -29,7 +29,8 @@ export function verdictOf(
       code: "effective-negative",
       message: `The effective river end-member C*₀ = ${g(effective.value)} ${unit} is negative, which is not physical: the seaward line is too steep or too short to extrapolate (reaction reaching the mouth, or too few seaward stations). Do not use the % change or fluxes.`,
     });
-  if (!percent) return cls === "conservative" ? "conservative mixing; % change not determined" : `${cls}; % change not determined`;
+  if (!percent)
+    return cls === "conservative" ? "conservative mixing; % change not determined" : `${cls}; % change not determined`;
   const span = `${g(percent.lower)} to ${g(percent.upper)} %`;
   if (percent.upper - percent.lower > 2 * UNBOUNDED_PERCENT) {
     warnings.push({
@@ -38,7 +39,8 @@ export function verdictOf(
     });
     return `${cls}; % change not determined (95 % interval ${span})`;
   }
-  if (cls === "conservative") return `conservative mixing within the uncertainty (% change ${g(percent.value)} %, 95 % interval ${span})`;
+  if (cls === "conservative")
+    return `conservative mixing within the uncertainty (% change ${g(percent.value)} %, 95 % interval ${span})`;
   if (percent.lower < 0 && percent.upper > 0)
     return `${cls} in the curve's shape, but the net % change is not determined in sign (${g(percent.value)} %, 95 % interval ${span})`;
   return `${cls}: net ${percent.value < 0 ? "removal" : "addition"} of ${g(Math.abs(percent.value))} % (95 % interval ${span})`;
