@@ -35,6 +35,31 @@ export const MIN_SALINITY_SPAN = 1;
  */
 export function analyzeConstituent(samples: readonly MixingSample[], options: AnalyzeOptions): ConstituentAnalysis {
   validateOptions(options);
+  if (!Array.isArray(samples))
+    throw new TypeError(`analyzeConstituent: samples must be an array, got ${typeof samples}`);
+  try {
+    return analyzeChecked(samples, options);
+  } catch (error) {
+    if ((error as Error).message?.startsWith("analyzeConstituent:")) throw error;
+    // Caller mistakes were thrown above; anything else is a numerical failure on this constituent's
+    // data, returned as "insufficient-data" with a warning so one constituent never aborts a survey.
+    return {
+      name: options.name,
+      unit: options.unit,
+      class: "insufficient-data",
+      confidence: "low",
+      deviations: [],
+      warnings: [
+        {
+          code: "analysis-failed",
+          message: `The mixing analysis of ${options.name} failed on these data (${(error as Error).message}); no estimates are given. Check for many zeros, ties or extreme values.`,
+        },
+      ],
+    };
+  }
+}
+
+function analyzeChecked(samples: readonly MixingSample[], options: AnalyzeOptions): ConstituentAnalysis {
   const fn = "analyzeConstituent";
   const { name, unit } = options;
   const k = options.k ?? 2;

@@ -43,7 +43,10 @@ const median = (a: number[]): number | undefined => {
 
 /** Break salinity the analysis reports: start of the seaward linear segment, when it found one. */
 export function reportedBreak(r: ConstituentAnalysis): number | undefined {
-  return r.tangent?.method === "segment" ? r.tangent.fromSalinity : undefined;
+  if (r.breakSalinity) return r.breakSalinity.value;
+  return r.tangent?.method === "segment" && r.tangent.fromSalinity > (r.fit?.salinity[0] ?? 0)
+    ? r.tangent.fromSalinity
+    : undefined;
 }
 
 export function scoreCell(
