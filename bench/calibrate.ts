@@ -1,6 +1,6 @@
 // `npm run calibrate`: seeded calibration study of the mixing engine against synthetic surveys
 // (bench/calibration/forwardModel.ts). Prints one table; goals from issue 14 beside it.
-// Options: --surveys N (default 60), --draws D (default 300), --full (every design × 1, 2, 5 % noise),
+// Options: --surveys N (default 40), --draws D (default 200), --full (every design × 1, 2, 5 % noise),
 // --shape TEXT (only shapes whose name contains TEXT).
 import { SHAPES, type SurveyDesign } from "./calibration/forwardModel.ts";
 import { scoreCell, type CellScore } from "./calibration/cell.ts";
@@ -10,8 +10,8 @@ const opt = (name: string, dflt: number): number => {
   const i = args.indexOf(`--${name}`);
   return i >= 0 ? Number(args[i + 1]) : dflt;
 };
-const surveys = opt("surveys", 60);
-const draws = opt("draws", 300);
+const surveys = opt("surveys", 40);
+const draws = opt("draws", 200);
 const full = args.includes("--full");
 const onlyIdx = args.indexOf("--shape");
 const only = onlyIdx >= 0 ? args[onlyIdx + 1]! : "";
@@ -47,6 +47,7 @@ for (const shape of SHAPES) {
       pc(s.directionAccuracy),
       pc(s.breakWithin2),
       f(s.breakMedianError),
+      pc(s.breakCoverage),
       f(s.maximumMedianError),
       pc(s.maximumCoverage),
       String(s.failures),
@@ -96,6 +97,7 @@ table(
     "direction %",
     "break ±2 %",
     "break med err",
+    "break cov %",
     "max med err",
     "max cov %",
     "failed",

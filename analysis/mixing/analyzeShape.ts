@@ -54,6 +54,9 @@ function interpolate(xs: Float64Array, ys: number[], x: number): number {
   return ys[i]! + t * (ys[i + 1]! - ys[i]!);
 }
 
+/** Half-width (salinity units) of a break interval the tool calls located; wider intervals get a warning. */
+export const BREAK_GOAL_S = 2;
+
 /** Fewest stations inside a reaction zone before a warning. */
 export const MIN_ZONE_STATIONS = 3;
 
@@ -179,6 +182,12 @@ export function analyzeShape(p: ShapeInput): {
   const rD2 = Float64Array.from(rGrid, (s) => twoPhaseAt(tp, s)[2]);
   const rp = rateProfile(rGrid, rD2, sr, o, cStar, river.conc);
   warnings.push(...rp.warnings);
+  const breakEst = segStart !== undefined ? estimateOf(tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
+  if (breakEst && breakEst.upper - breakEst.lower > 2 * BREAK_GOAL_S)
+    warnings.push({
+      code: "break-uncertain",
+      message: `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)} (95 %), wider than ±${BREAK_GOAL_S}: the curvature fades below the analytical precision there. C*₀ and its interval include this uncertainty; the "conservative beyond" salinity does not have that precision.`,
+    });
   const verdict = verdictOf(cls, percent, effective, unit, warnings);
   const band = (arr: number[]): number[] =>
     Array.from(grid, (s, i) => {
@@ -206,7 +215,7 @@ export function analyzeShape(p: ShapeInput): {
     maximum,
     rate: rp.profile,
     bootstrap: { draws, usable: bs.usable, seed },
-    breakSalinity: segStart !== undefined ? estimateOf(segStart, bs.breakSalinity, "salinity") : undefined,
+    breakSalinity: breakEst,
     verdict,
     warnings,
   };

@@ -65,8 +65,11 @@ function solve(k: number, out: number[]): boolean {
       if (f !== 0) for (let j = col; j < w; j++) M[r * w + j] = M[r * w + j]! - f * M[col * w + j]!;
     }
   }
-  for (let i = 0; i < k; i++) out[i] = M[i * w + k]! / M[i * w + i]!;
-  return out.every((v, i) => i >= k || Number.isFinite(v));
+  for (let i = 0; i < k; i++) {
+    out[i] = M[i * w + k]! / M[i * w + i]!;
+    if (!Number.isFinite(out[i]!)) return false;
+  }
+  return true;
 }
 
 /** Weighted fit at a fixed break (k = 2 line, 3 with h², 4 with h² and h³); RSS or NaN. */
@@ -80,31 +83,96 @@ function fitAt(
   k: number,
   coef: number[],
 ): number {
-  const cols = k + 1;
-  M.fill(0, 0, k * cols);
-  const v = [0, 0, 0, 0];
-  for (let i = 0; i < x.length; i++) {
+  // Symmetric normal equations accumulated in scalars (this runs ~10⁵ times per analysis).
+  let a00 = 0,
+    a01 = 0,
+    a02 = 0,
+    a03 = 0,
+    a11 = 0,
+    a12 = 0,
+    a13 = 0,
+    a22 = 0,
+    a23 = 0,
+    a33 = 0;
+  let r0 = 0,
+    r1 = 0,
+    r2 = 0,
+    r3 = 0;
+  const inv = 1 / range;
+  const n = x.length;
+  for (let i = 0; i < n; i++) {
     const wi = w[i]!;
     if (!(wi > 0)) continue;
-    const h = Math.max(0, b - x[i]!) / range;
-    v[0] = 1;
-    v[1] = (x[i]! - sMin) / range;
-    v[2] = h * h;
-    v[3] = h * h * h;
-    for (let r = 0; r < k; r++) {
-      const wr = wi * v[r]!;
-      for (let c = 0; c < k; c++) M[r * cols + c] = M[r * cols + c]! + wr * v[c]!;
-      M[r * cols + k] = M[r * cols + k]! + wr * y[i]!;
+    const t = (x[i]! - sMin) * inv;
+    const yi = y[i]!;
+    const wt = wi * t;
+    a00 += wi;
+    a01 += wt;
+    a11 += wt * t;
+    r0 += wi * yi;
+    r1 += wt * yi;
+    const d = b - x[i]!;
+    if (d > 0) {
+      const h = d * inv;
+      const h2 = h * h;
+      const h3 = h2 * h;
+      const w2 = wi * h2;
+      a02 += w2;
+      a12 += w2 * t;
+      a22 += w2 * h2;
+      r2 += w2 * yi;
+      const w3 = wi * h3;
+      a03 += w3;
+      a13 += w3 * t;
+      a23 += w3 * h2;
+      a33 += w3 * h3;
+      r3 += w3 * yi;
     }
   }
-  coef.fill(0);
+  const cols = k + 1;
+  const put = (r: number, c: number, v: number): void => {
+    M[r * cols + c] = v;
+  };
+  put(0, 0, a00);
+  put(0, 1, a01);
+  put(1, 0, a01);
+  put(1, 1, a11);
+  put(0, k, r0);
+  put(1, k, r1);
+  if (k >= 3) {
+    put(0, 2, a02);
+    put(2, 0, a02);
+    put(1, 2, a12);
+    put(2, 1, a12);
+    put(2, 2, a22);
+    put(2, k, r2);
+  }
+  if (k >= 4) {
+    put(0, 3, a03);
+    put(3, 0, a03);
+    put(1, 3, a13);
+    put(3, 1, a13);
+    put(2, 3, a23);
+    put(3, 2, a23);
+    put(3, 3, a33);
+    put(3, k, r3);
+  }
+  coef[0] = coef[1] = coef[2] = coef[3] = 0;
   if (!solve(k, coef)) return Number.NaN;
+  const c0 = coef[0]!,
+    c1 = coef[1]! * inv,
+    c2 = coef[2]!,
+    c3 = coef[3]!;
   let rss = 0;
-  for (let i = 0; i < x.length; i++) {
+  for (let i = 0; i < n; i++) {
     const wi = w[i]!;
     if (!(wi > 0)) continue;
-    const h = Math.max(0, b - x[i]!) / range;
-    const e = y[i]! - (coef[0]! + (coef[1]! * (x[i]! - sMin)) / range + coef[2]! * h * h + coef[3]! * h * h * h);
+    const d = b - x[i]!;
+    let e = y[i]! - c0 - c1 * (x[i]! - sMin);
+    if (d > 0) {
+      const h = d * inv;
+      e -= (c2 + c3 * h) * h * h;
+    }
     rss += wi * e * e;
   }
   return rss;
@@ -164,11 +232,8 @@ export function fitTwoPhase(
       break;
     }
   const lo = second + 1e-9 * range;
-  const kOf = (b: number): number => {
-    let c = 0;
-    for (const i of idx) if (x[i]! < b) c++;
-    return c >= 3 ? 4 : 3;
-  };
+  const third = idx.length >= 3 ? x[idx[2]!]! : Number.POSITIVE_INFINITY;
+  const kOf = (b: number): number => (third < b ? 4 : 3);
   const c = [0, 0, 0, 0];
   const rssAt = (b: number): number => {
     const r = fitAt(x, y, w, sMin, range, b, kOf(b), c);

@@ -24,6 +24,8 @@ export interface CellScore {
   /** Share of surveys with the break within ±2 salinity units (undefined without a true break). */
   breakWithin2?: number;
   breakMedianError?: number;
+  /** Share of surveys whose break interval covers the true break (a missing break counts as a miss). */
+  breakCoverage?: number;
   maximumMedianError?: number;
   maximumCoverage?: number;
   /** Median |∫A·R dx − Q·(C*₀ − C₀)|/|Q·(C*₀ − C₀)| over surveys. */
@@ -68,6 +70,7 @@ export function scoreCell(
     dir = 0,
     failures = 0,
     brk = 0,
+    bCov = 0,
     mCov = 0,
     mN = 0,
     refSum = 0;
@@ -121,6 +124,7 @@ export function scoreCell(
       const err = b === undefined ? Number.POSITIVE_INFINITY : Math.abs(b - truth.breakSalinity);
       bErr.push(err);
       if (err <= 2) brk++;
+      if (covers(r.breakSalinity, truth.breakSalinity)) bCov++;
     }
     if (truth.maximumSalinity !== undefined) {
       mN++;
@@ -152,6 +156,7 @@ export function scoreCell(
     directionAccuracy: dir / Math.max(1, ok),
     breakWithin2: truth.breakSalinity !== undefined ? brk / Math.max(1, ok) : undefined,
     breakMedianError: median(bErr),
+    breakCoverage: truth.breakSalinity !== undefined ? bCov / Math.max(1, ok) : undefined,
     maximumMedianError: median(mErr),
     maximumCoverage: mN > 0 ? mCov / mN : undefined,
     rateIntegralError: median(rErr),

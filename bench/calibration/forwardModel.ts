@@ -8,9 +8,15 @@ export const SEA_SALINITY = 33;
 export const LENGTH_KM = 10;
 
 /**
- * A reaction shape: C''(S) = κ·(1 − S/S_b)² for S < S_b and 0 beyond, so the curve is the
- * seaward line C*₀ + b₁·S plus κ·S_b²/12·(1 − S/S_b)⁴ landward of S_b. With this family the
- * tangent-method C*₀ = C₀ − κ·S_b²/12 (exact), so κ is set from the wanted % change.
+ * Curvature taper: C''(S) ∝ (1 − S/S_b)^p landward of S_b, 0 beyond (the reaction fades out at S_b).
+ * p = 1.5 is deliberately not an integer, so no polynomial hinge model in the analysis contains the
+ * forward model exactly.
+ */
+export const TAPER_POWER = 1.5;
+
+/**
+ * A reaction shape: the seaward line C*₀ + b₁·S plus A·(1 − S/S_b)^(p+2) landward of S_b, so
+ * C'' ∝ (1 − S/S_b)^p, and the tangent-method C*₀ = C₀ − A exactly (A from the wanted % change).
  */
 export interface Shape {
   name: string;
@@ -96,26 +102,29 @@ export interface Curve {
 export function curveOf(shape: Shape): Curve {
   const sb = shape.breakSalinity;
   const c0 = shape.riverConc;
-  const kappa = shape.percent === 0 ? 0 : (-12 * (shape.percent / 100) * c0) / (sb * sb);
+  const m = TAPER_POWER + 2;
+  // Amplitude A of the hinge term A·h^m: C*₀ at S_b = C₀ − A, so A = −(% change/100)·C₀.
+  const amp = shape.percent === 0 ? 0 : -(shape.percent / 100) * c0;
   const hinge = (s: number): number => (s < sb ? 1 - s / sb : 0);
-  const cStarB = c0 - (kappa * sb * sb) / 12;
+  const cStarB = c0 - amp;
   // Seaward line through the sea value at S = 33 (with the residual hinge term when S_b > 33).
-  const b1 = (shape.seaConc - cStarB - ((kappa * sb * sb) / 12) * hinge(SEA_SALINITY) ** 4) / SEA_SALINITY;
-  const conc = (s: number): number => cStarB + b1 * s + ((kappa * sb * sb) / 12) * hinge(s) ** 4;
-  const d1 = (s: number): number => b1 - ((kappa * sb) / 3) * hinge(s) ** 3;
-  const d2 = (s: number): number => kappa * hinge(s) ** 2;
+  const b1 = (shape.seaConc - cStarB - amp * hinge(SEA_SALINITY) ** m) / SEA_SALINITY;
+  const conc = (s: number): number => cStarB + b1 * s + amp * hinge(s) ** m;
+  const d1 = (s: number): number => b1 - ((amp * m) / sb) * hinge(s) ** (m - 1);
+  const d2 = (s: number): number => ((amp * m * (m - 1)) / (sb * sb)) * hinge(s) ** (m - 2);
   const se = Math.min(sb, SEA_SALINITY);
   const effective = conc(se) - se * d1(se);
+  // Interior maximum: d1 = 0 ⇔ h^(m−1) = b1·S_b/(A·m), for an addition (A < 0) with a falling seaward line.
   let maximumSalinity: number | undefined;
-  const ratio = kappa !== 0 ? (3 * b1) / (kappa * sb) : Number.NaN;
-  if (kappa < 0 && ratio > 0 && ratio < 1) maximumSalinity = sb * (1 - Math.cbrt(ratio));
+  const ratio = amp !== 0 ? (b1 * sb) / (amp * m) : Number.NaN;
+  if (amp < 0 && ratio > 0 && ratio < 1) maximumSalinity = sb * (1 - ratio ** (1 / (m - 1)));
   return {
     conc,
     d1,
     d2,
     effective,
     percent: (100 * (effective - c0)) / c0,
-    breakSalinity: kappa !== 0 && sb < SEA_SALINITY ? sb : undefined,
+    breakSalinity: amp !== 0 && sb < SEA_SALINITY ? sb : undefined,
     maximumSalinity,
   };
 }

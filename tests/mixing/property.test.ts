@@ -62,3 +62,41 @@ describe("mixing engine on random small sample sets (seeded property test)", () 
     expectWithin(bad.length, 0, 0, bad.slice(0, 5).join("; "));
   });
 });
+
+describe("mixing engine on extreme single values (issue 15 item 11)", () => {
+  const base = (c: (i: number) => number): MixingSample[] =>
+    Array.from({ length: 10 }, (_, i) => ({
+      stationId: `s${i}`,
+      salinity: i * 3.5,
+      conc: c(i),
+      censored: false,
+      accepted: true,
+    }));
+  it("a concentration of 1e308 is left out with an invalid-sample warning; every deviationPercent is finite", () => {
+    const r = analyzeConstituent(
+      base((i) => (i === 4 ? 1e308 : 50 - i)),
+      { name: "X", unit: "µmol/L", bootstrapDraws: 20 },
+    );
+    expectWithin(r.warnings.some((w) => w.code === "invalid-sample") ? 1 : 0, 1, 0, "invalid-sample warning");
+    expectWithin(
+      r.deviations.every((d) => Number.isFinite(d.deviationPercent)) ? 1 : 0,
+      1,
+      0,
+      "finite deviationPercent",
+    );
+  });
+  it("a river override of 1e-300 gives no ±Infinity: % change absent or finite", () => {
+    const r = analyzeConstituent(
+      base((i) => 50 - i),
+      { name: "X", unit: "µmol/L", bootstrapDraws: 20, river: { conc: 1e-300, salinity: 0 } },
+    );
+    const p = r.percentChange;
+    expectWithin(!p || [p.value, p.lower, p.upper].every(Number.isFinite) ? 1 : 0, 1, 0, "finite % change or none");
+    expectWithin(
+      r.deviations.every((d) => Number.isFinite(d.deviationPercent)) ? 1 : 0,
+      1,
+      0,
+      "finite deviationPercent",
+    );
+  });
+});
