@@ -29,7 +29,7 @@ export const TWO_PHASE_ALPHA = 0.05;
 /** Break candidates on the grid before refinement. */
 const GRID = 24;
 /** Golden-section refinement steps around the best grid break. */
-const REFINE = 8;
+const REFINE = 12;
 
 /** F critical value at TWO_PHASE_ALPHA cached by degrees of freedom (the bootstrap refits thousands of times). */
 const CRIT = new Map<number, number>();
@@ -82,6 +82,8 @@ function fitAt(
   b: number,
   k: number,
   coef: number[],
+  quick = false,
+  shift = 0,
 ): number {
   // Symmetric normal equations accumulated in scalars (this runs ~10⁵ times per analysis).
   let a00 = 0,
@@ -97,15 +99,17 @@ function fitAt(
   let r0 = 0,
     r1 = 0,
     r2 = 0,
-    r3 = 0;
+    r3 = 0,
+    ryy = 0;
   const inv = 1 / range;
   const n = x.length;
   for (let i = 0; i < n; i++) {
     const wi = w[i]!;
     if (!(wi > 0)) continue;
     const t = (x[i]! - sMin) * inv;
-    const yi = y[i]!;
+    const yi = y[i]! - shift;
     const wt = wi * t;
+    ryy += wi * yi * yi;
     a00 += wi;
     a01 += wt;
     a11 += wt * t;
@@ -159,6 +163,9 @@ function fitAt(
   }
   coef[0] = coef[1] = coef[2] = coef[3] = 0;
   if (!solve(k, coef)) return Number.NaN;
+  // Inside the break search: RSS from the normal equations (y centred by `shift`, so the
+  // cancellation is small); the chosen break is refitted with the direct residual sum below.
+  if (quick) return Math.max(0, ryy - coef[0]! * r0 - coef[1]! * r1 - coef[2]! * r2 - coef[3]! * r3);
   const c0 = coef[0]!,
     c1 = coef[1]! * inv,
     c2 = coef[2]!,
@@ -168,7 +175,7 @@ function fitAt(
     const wi = w[i]!;
     if (!(wi > 0)) continue;
     const d = b - x[i]!;
-    let e = y[i]! - c0 - c1 * (x[i]! - sMin);
+    let e = y[i]! - shift - c0 - c1 * (x[i]! - sMin);
     if (d > 0) {
       const h = d * inv;
       e -= (c2 + c3 * h) * h * h;
@@ -235,8 +242,15 @@ export function fitTwoPhase(
   const third = idx.length >= 3 ? x[idx[2]!]! : Number.POSITIVE_INFINITY;
   const kOf = (b: number): number => (third < b ? 4 : 3);
   const c = [0, 0, 0, 0];
+  let sw = 0,
+    swy = 0;
+  for (const i of idx) {
+    sw += w[i]!;
+    swy += w[i]! * y[i]!;
+  }
+  const ybar = swy / sw;
   const rssAt = (b: number): number => {
-    const r = fitAt(x, y, w, sMin, range, b, kOf(b), c);
+    const r = fitAt(x, y, w, sMin, range, b, kOf(b), c, true, ybar);
     return Number.isFinite(r) ? r : Number.POSITIVE_INFINITY;
   };
   let bestB = sMax;
@@ -255,11 +269,12 @@ export function fitTwoPhase(
   let a = lo + ((sMax - lo) * Math.max(0, bestI - 1)) / GRID;
   let z = lo + ((sMax - lo) * Math.min(GRID, bestI + 1)) / GRID;
   const gr = (Math.sqrt(5) - 1) / 2;
+  // Golden-section search: one new evaluation per step.
+  let m1 = z - gr * (z - a);
+  let m2 = a + gr * (z - a);
+  let r1 = rssAt(m1);
+  let r2 = rssAt(m2);
   for (let it = 0; it < REFINE; it++) {
-    const m1 = z - gr * (z - a);
-    const m2 = a + gr * (z - a);
-    const r1 = rssAt(m1);
-    const r2 = rssAt(m2);
     if (r1 < best) {
       best = r1;
       bestB = m1;
@@ -268,12 +283,32 @@ export function fitTwoPhase(
       best = r2;
       bestB = m2;
     }
-    if (r1 < r2) z = m2;
-    else a = m1;
+    if (r1 < r2) {
+      z = m2;
+      m2 = m1;
+      r2 = r1;
+      m1 = z - gr * (z - a);
+      r1 = rssAt(m1);
+    } else {
+      a = m1;
+      m1 = m2;
+      r1 = r2;
+      m2 = a + gr * (z - a);
+      r2 = rssAt(m2);
+    }
+  }
+  if (r1 < best) {
+    best = r1;
+    bestB = m1;
+  }
+  if (r2 < best) {
+    best = r2;
+    bestB = m2;
   }
   if (!Number.isFinite(best)) return line;
   const k = kOf(bestB);
-  fitAt(x, y, w, sMin, range, bestB, k, c);
+  best = fitAt(x, y, w, sMin, range, bestB, k, c);
+  if (!Number.isFinite(best)) return line;
   const extra = k - 2 + 1;
   const dfRes = n - k - 1;
   let p = 1;
