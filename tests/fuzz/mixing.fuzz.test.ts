@@ -43,15 +43,11 @@ describe(`fuzz: ${N} seeded small sample sets through analyzeConstituent()`, () 
     ).toEqual([]);
   });
 
-  // Item 11 is fixed on the mixing branch; `it.fails` until it is merged, then a plain `it`.
-  it.fails(
-    "item 11: every number is finite (no NaN, Infinity or null in the JSON) and every point estimate lies inside its interval",
-    () => {
-      const bad: string[] = [];
-      for (const o of all) if (o.result) for (const p of numberProblems(asJson(o.result), `#${o.n}`)) bad.push(p);
-      expect(bad.slice(0, 10)).toEqual([]);
-    },
-  );
+  it("item 11: every number is finite (no NaN, Infinity or null in the JSON) and every point estimate lies inside its interval", () => {
+    const bad: string[] = [];
+    for (const o of all) if (o.result) for (const p of numberProblems(asJson(o.result), `#${o.n}`)) bad.push(p);
+    expect(bad.slice(0, 10)).toEqual([]);
+  });
 
   it("too little data gives a class and a warning, never an empty result", () => {
     for (const o of all) if (o.result) expect(o.result.class.length, `#${o.n}`).toBeGreaterThan(0);
