@@ -9,7 +9,7 @@ import {
   type ProvenanceFile,
   type SurveyAnalysis,
 } from "../../../analysis/index.ts";
-import type { TextFile } from "../lib/demoData.ts";
+import type { TextFile } from "./protocol.ts";
 import type { Channel } from "./engine.ts";
 
 /** Same software line and bootstrap settings as the command line's defaults (analyzeSurvey: 2000 draws, seed 1). */

@@ -19,8 +19,8 @@ import {
   type Survey,
   type SurveyAnalysis,
 } from "../../../analysis/index.ts";
-import type { AnalysisSettings } from "../state/settings.svelte.ts";
-import type { TextFile } from "../lib/demoData.ts";
+import type { AnalysisSettings } from "./protocol.ts";
+import type { TextFile } from "./protocol.ts";
 import type { ChannelOverlay, ConstituentOverlay, LonLat, SurveyOverlay } from "./overlay.ts";
 
 /** The survey analysis as the panels and the map read it. */

@@ -10,10 +10,10 @@ describe("AppState derives what the map shows from analysis/ without computing s
   beforeAll(() => {
     const { surveys, issues } = readSurveys([demoFile("surveys/both-surveys.csv")]);
     const built = readChannel(demoFile("centerline.geojson"));
-    app.workspace.receive({ type: "loaded", id: 1, surveys, issues, channel: built?.overlay });
+    app.results.receive({ type: "loaded", surveys, issues, channel: built?.overlay });
     surveys.forEach((survey, i) => {
       const { analysis, overlay } = analyse(survey, built?.channel, built?.overlay, app.settings.analysis);
-      app.workspace.receive({ type: "analysis", id: 1, surveyIndex: i, analysis, overlay });
+      app.results.receive({ type: "analysis", surveyIndex: i, analysis, overlay });
     });
   });
 

@@ -14,7 +14,7 @@ import {
   type ReadSurveyOptions,
   type StationTable,
 } from "../../../analysis/index.ts";
-import { readChannel } from "../worker/engine.ts";
+import { readChannel } from "./engine.ts";
 import type { FileKind, FileOutcome, ImportSource } from "./importTypes.ts";
 
 /** What the user confirmed for one file. */

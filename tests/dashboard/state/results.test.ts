@@ -1,49 +1,49 @@
 import { describe, expect, it } from "vitest";
-import { Workspace } from "../../../dashboard/src/state/workspace.svelte.ts";
+import { AnalysisResults } from "../../../dashboard/src/state/results.svelte.ts";
 import { analyse, readChannel, readSurveys } from "../../../dashboard/src/worker/engine.ts";
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
 import { demoFile } from "./demoFiles.ts";
 
-describe("Workspace.receive() folds worker messages into state (common practice: one reducer per message)", () => {
+describe("AnalysisResults.receive() folds worker events into state (common practice: one reducer per message)", () => {
   it("progress, loaded, analysis and done move the status from reading to ready", () => {
-    const ws = new Workspace();
+    const ws = new AnalysisResults();
     ws.begin(true);
     expect(ws.status).toBe("reading");
-    ws.receive({ type: "progress", id: 1, stage: "Reading files", done: 0, total: 1 });
+    ws.receive({ type: "progress", stage: "Reading files", done: 0, total: 1 });
     expect(ws.progress).toEqual({ stage: "Reading files", done: 0, total: 1 });
 
     const { surveys, issues } = readSurveys([demoFile("surveys/both-surveys.csv")]);
     const built = readChannel(demoFile("centerline.geojson"));
-    ws.receive({ type: "loaded", id: 1, surveys, issues, channel: built?.overlay });
+    ws.receive({ type: "loaded", surveys, issues, channel: built?.overlay });
     expect(ws.surveys.map((s) => s.name)).toEqual(["wet-2025-03", "dry-2025-09"]);
     expect(ws.analyses).toEqual([undefined, undefined]);
     expect(ws.status).toBe("analysing");
 
     const settings = new Settings();
     const { analysis, overlay } = analyse(surveys[1], built?.channel, built?.overlay, settings.analysis);
-    ws.receive({ type: "analysis", id: 1, surveyIndex: 1, analysis, overlay });
+    ws.receive({ type: "analysis", surveyIndex: 1, analysis, overlay });
     expect(ws.analyses[0]).toBeUndefined();
     expect(ws.analyses[1]?.survey.name).toBe("dry-2025-09");
 
-    ws.receive({ type: "done", id: 1 });
+    ws.receive({ type: "done" });
     expect(ws.status).toBe("ready");
     expect(ws.progress).toBeNull();
   });
 
   it("an error message is kept for display and leaves loaded surveys usable", () => {
-    const ws = new Workspace();
-    ws.receive({ type: "error", id: 3, message: "centerline.geojson: TypeError: bad" });
+    const ws = new AnalysisResults();
+    ws.receive({ type: "error", message: "centerline.geojson: TypeError: bad" });
     expect(ws.status).toBe("error");
     expect(ws.errors).toEqual(["centerline.geojson: TypeError: bad"]);
   });
 
   it("replaces arrays instead of mutating them ($state.raw contract)", () => {
-    const ws = new Workspace();
+    const ws = new AnalysisResults();
     const { surveys, issues } = readSurveys([demoFile("surveys/both-surveys.csv")]);
-    ws.receive({ type: "loaded", id: 1, surveys, issues, channel: undefined });
+    ws.receive({ type: "loaded", surveys, issues, channel: undefined });
     const before = ws.analyses;
     const { analysis, overlay } = analyse(surveys[0], undefined, undefined, new Settings().analysis);
-    ws.receive({ type: "analysis", id: 1, surveyIndex: 0, analysis, overlay });
+    ws.receive({ type: "analysis", surveyIndex: 0, analysis, overlay });
     expect(ws.analyses).not.toBe(before);
     expect(before).toEqual([undefined, undefined]);
   });
