@@ -1,6 +1,6 @@
 import jStat from "jstat";
 import type { DischargeScaling, ReferenceScaling } from "./types.ts";
-import { formatFixed } from "./formatNumber.ts";
+import { formatFixed } from "../output/formatNumber.ts";
 
 /** Published discharge scalings of the salt-intrusion length L ∝ Q^n (mixing-methods.md §5.1, §5.3). */
 export const REFERENCE_SCALINGS: readonly ReferenceScaling[] = [

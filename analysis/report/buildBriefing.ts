@@ -2,7 +2,7 @@
  * Builds the stakeholder briefing document model from analysed surveys.
  */
 import { compareSurveys } from "../compare/compareSurveys.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import type { ComparableSurvey } from "../compare/types.ts";
 import { SCREENING_CAUTION } from "../pipeline/caution.ts";
 import type { StationPlacement } from "../pipeline/surveyAnalysis.ts";
