@@ -4,18 +4,18 @@
  * (built once, here, by the one centerline reader) and the latest analyses; the main thread keeps
  * only a snapshot of the results and the selection. The same object runs in Node for tests.
  */
-import type { ImportIssue, Survey } from "../../../analysis/index.ts";
+import { channelOverlay, type WorkspaceInputs } from "../../../analysis/index.ts";
 import type { TextFile } from "./protocol.ts";
 import type { ImportChoice } from "./importFile.ts";
 import type { FileInspection, FileOutcome, ImportSource } from "./importTypes.ts";
 import { inspectFile } from "./inspectFile.ts";
 import { importFile } from "./importFile.ts";
 import type { AnalysisSettings } from "./protocol.ts";
-import { analyse, readChannel, readSurveys, type AnalysisResult, type Channel } from "./engine.ts";
+import { analyse, inputsOf, readFiles, type AnalysisResult } from "./engine.ts";
 import { briefingHtml, fileProvenance } from "./briefing.ts";
 import { brushStretch, type BrushedStretch } from "./brushStretch.ts";
 import type { ChannelOverlay } from "./overlay.ts";
-import type { AnalysisEvent, AnalysisJob, ProgressCallback } from "./protocol.ts";
+import type { AnalysisEvent, AnalysisJob, ProgressCallback, SourceFile } from "./protocol.ts";
 import type { UnderwayRequest, UnderwayResult } from "./underwayProtocol.ts";
 import { readUnderway } from "./underwayEngine.ts";
 
@@ -31,30 +31,28 @@ function messageOf(error: unknown): string {
 /** Builds the worker's API object with its own held state (one per worker instance). */
 export function createWorkerApi() {
   let latestRun = 0;
-  let surveys: Survey[] = [];
-  let channel: Channel = undefined;
-  let channelOverlay: ChannelOverlay | undefined;
+  /** What readInputs read (surveys, the channel built by the one centerline reader, problems). */
+  let inputs: WorkspaceInputs = inputsOf([], undefined);
+  let channel: ChannelOverlay | undefined;
   /** Latest analysis of each survey, kept for the briefing and the brushed stretch. */
   let analyses: Array<AnalysisResult | undefined> = [];
   /** The files read (survey files and centerline), for the briefing's provenance table. */
-  let files: TextFile[] = [];
-  let issues: ImportIssue[] = [];
+  let files: SourceFile[] = [];
   let centerlineFile: TextFile | undefined;
 
-  /** Builds the channel from a centerline file; a broken file is reported and leaves no channel. */
-  function useCenterline(file: TextFile | undefined, emit: (e: AnalysisEvent) => void): void {
-    let built: ReturnType<typeof readChannel>;
-    try {
-      built = readChannel(file);
-    } catch (error) {
-      emit({ type: "error", message: `${file?.name ?? "centerline"}: ${messageOf(error)}` });
+  /** Holds new inputs; a centerline that cannot be read is reported as an error event too. */
+  function useInputs(next: WorkspaceInputs, centerline: TextFile | undefined, emit: (e: AnalysisEvent) => void) {
+    inputs = next;
+    centerlineFile = centerline;
+    channel = next.channel ? channelOverlay(next.channel.network) : undefined;
+    if (centerline && !next.channel) {
+      const why = next.issues.find((i) => i.file === centerline.name && i.severity === "error");
+      emit({ type: "error", message: `${centerline.name}: ${why?.expected ?? "no usable centerline"}` });
     }
-    centerlineFile = file;
-    channel = built?.channel;
-    channelOverlay = built?.overlay;
   }
 
   async function analyseAll(run: number, settings: AnalysisSettings, emit: (e: AnalysisEvent) => void) {
+    const { surveys } = inputs;
     const total = surveys.length;
     for (let i = 0; i < total; i++) {
       emit({ type: "progress", stage: `Analysing ${surveys[i].name}`, done: i * 100, total: total * 100 });
@@ -62,7 +60,7 @@ export function createWorkerApi() {
       if (run !== latestRun) return;
       try {
         const name = surveys[i].name;
-        const { analysis, overlay } = analyse(surveys[i], channel, channelOverlay, settings, (fraction, label) =>
+        const { analysis, overlay } = analyse(inputs, surveys[i], settings, (fraction, label) =>
           emit({
             type: "progress",
             stage: `${name}: ${label}`,
@@ -94,24 +92,23 @@ export function createWorkerApi() {
         if (job.kind === "load") {
           emit({ type: "progress", stage: "Reading files", done: 0, total: 1 });
           await yieldToQueue();
-          const read = readSurveys(job.surveys, (fraction) =>
+          const read = readFiles(job.surveys, job.centerline, (fraction) =>
             emit({ type: "progress", stage: "Reading files", done: Math.round(fraction * 100), total: 100 }),
           );
-          useCenterline(job.centerline, emit);
-          surveys = read.surveys;
+          useInputs(read, job.centerline, emit);
           files = job.surveys;
-          issues = read.issues;
         } else if (job.kind === "setSurveys") {
-          useCenterline(job.centerline, emit);
-          surveys = job.surveys;
+          useInputs(inputsOf(job.surveys, job.centerline), job.centerline, emit);
           files = [];
-          issues = [];
         } else if (job.kind === "centerline") {
-          useCenterline(job.centerline, emit);
+          const next = inputsOf(inputs.surveys, job.centerline);
+          const oldLine = centerlineFile?.name;
+          next.issues = [...inputs.issues.filter((i) => i.file !== oldLine), ...next.issues];
+          useInputs({ ...next, files: inputs.files, summary: inputs.summary }, job.centerline, emit);
         }
         if (job.kind !== "analyze") {
-          analyses = surveys.map(() => undefined);
-          emit({ type: "loaded", surveys, issues, channel: channelOverlay });
+          analyses = inputs.surveys.map(() => undefined);
+          emit({ type: "loaded", surveys: inputs.surveys, issues: inputs.issues, channel });
         }
         await analyseAll(run, job.settings, emit);
       } catch (error) {
@@ -121,14 +118,14 @@ export function createWorkerApi() {
 
     /** The channel stretch where one survey's salinity lies within a brushed range (km and map paths). */
     brushStretch(surveyIndex: number, range: [number, number] | null): BrushedStretch {
-      return brushStretch(channel, analyses[surveyIndex]?.salinityProfile, range);
+      return brushStretch(inputs.channel?.network, analyses[surveyIndex]?.salinityProfile, range);
     },
 
     /** The self-contained HTML briefing of the analysed surveys (analysis/report). */
     async briefing(basemap: unknown, dataNotice: string | undefined): Promise<string> {
       const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
       const provenance = await fileProvenance(files, centerlineFile);
-      return briefingHtml(done, channel, provenance, basemap, dataNotice);
+      return briefingHtml(done, inputs.channel?.network, provenance, basemap, dataNotice);
     },
 
     /** Recognises a dropped file and previews it. */

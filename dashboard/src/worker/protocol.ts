@@ -44,10 +44,13 @@ export interface AnalysisSettings {
 export type { WorkerApi } from "./api.ts";
 export type { UnderwayRequest, UnderwayResult, UnderwayPoints } from "./underwayProtocol.ts";
 
+/** A survey file as given to the worker: text, or bytes (netCDF). */
+export type SourceFile = TextFile | { name: string; bytes: Uint8Array };
+
 /** One analysis job. A newer job supersedes an older one (the worker stops between steps). */
 export type AnalysisJob =
   /** Read survey files and a centerline, then analyse every survey. */
-  | { kind: "load"; surveys: TextFile[]; centerline?: TextFile; settings: AnalysisSettings }
+  | { kind: "load"; surveys: SourceFile[]; centerline?: TextFile; settings: AnalysisSettings }
   /** Re-analyse the surveys held with new settings. */
   | { kind: "analyze"; settings: AnalysisSettings }
   /** Replace the channel centerline (e.g. one drawn on the map) and re-analyse every survey. */

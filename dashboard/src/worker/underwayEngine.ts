@@ -29,13 +29,9 @@ export async function readUnderway(request: UnderwayRequest, progress?: Progress
   const imported = await read(request, progress);
   const { data } = imported;
   progress?.(1, "Placing records on the channel");
-  let network: ReturnType<typeof readChannel> = undefined;
-  try {
-    network = readChannel(request.centerline);
-  } catch {
-    // A broken centerline is reported by the analysis; the log is then binned by salinity.
-  }
-  const projection = network?.channel ? projectUnderway(data, network.channel) : undefined;
+  // A centerline that cannot be read is reported by the analysis; the log is then binned by salinity.
+  const network = readChannel(request.centerline).channel?.network;
+  const projection = network ? projectUnderway(data, network) : undefined;
   const by = projection ? request.bin.by : "salinity";
   const bins = binUnderway(data, projection, { by, width: request.bin.width });
   const salinity = data.columns.find((c) => c.name === "salinity")?.values ?? new Float64Array(data.n).fill(Number.NaN);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { AnalysisResults } from "../../../dashboard/src/state/results.svelte.ts";
-import { analyse, readChannel, readSurveys } from "../../../dashboard/src/worker/engine.ts";
+import { analyse, readFiles } from "../../../dashboard/src/worker/engine.ts";
+import { channelOverlay } from "../../../analysis/index.ts";
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
 import { demoFile } from "./demoFiles.ts";
 
@@ -12,15 +13,16 @@ describe("AnalysisResults.receive() folds worker events into state (common pract
     ws.receive({ type: "progress", stage: "Reading files", done: 0, total: 1 });
     expect(ws.progress).toEqual({ stage: "Reading files", done: 0, total: 1 });
 
-    const { surveys, issues } = readSurveys([demoFile("surveys/both-surveys.csv")]);
-    const built = readChannel(demoFile("centerline.geojson"));
-    ws.receive({ type: "loaded", surveys, issues, channel: built?.overlay });
+    const inputs = readFiles([demoFile("surveys/both-surveys.csv")], demoFile("centerline.geojson"));
+    const { surveys, issues } = inputs;
+    const network = inputs.channel?.network;
+    ws.receive({ type: "loaded", surveys, issues, channel: network && channelOverlay(network) });
     expect(ws.surveys.map((s) => s.name)).toEqual(["wet-2025-03", "dry-2025-09"]);
     expect(ws.analyses).toEqual([undefined, undefined]);
     expect(ws.status).toBe("analysing");
 
     const settings = new Settings();
-    const { analysis, overlay } = analyse(surveys[1], built?.channel, built?.overlay, settings.analysis);
+    const { analysis, overlay } = analyse(inputs, surveys[1], settings.analysis);
     ws.receive({ type: "analysis", surveyIndex: 1, analysis, overlay });
     expect(ws.analyses[0]).toBeUndefined();
     expect(ws.analyses[1]?.survey.name).toBe("dry-2025-09");
@@ -39,10 +41,11 @@ describe("AnalysisResults.receive() folds worker events into state (common pract
 
   it("replaces arrays instead of mutating them ($state.raw contract)", () => {
     const ws = new AnalysisResults();
-    const { surveys, issues } = readSurveys([demoFile("surveys/both-surveys.csv")]);
+    const inputs = readFiles([demoFile("surveys/both-surveys.csv")], undefined);
+    const { surveys, issues } = inputs;
     ws.receive({ type: "loaded", surveys, issues, channel: undefined });
     const before = ws.analyses;
-    const { analysis, overlay } = analyse(surveys[0], undefined, undefined, new Settings().analysis);
+    const { analysis, overlay } = analyse(inputs, surveys[0], new Settings().analysis);
     ws.receive({ type: "analysis", surveyIndex: 0, analysis, overlay });
     expect(ws.analyses).not.toBe(before);
     expect(before).toEqual([undefined, undefined]);
