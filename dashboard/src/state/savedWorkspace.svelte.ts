@@ -13,6 +13,7 @@ import {
   type Survey,
 } from "../../../analysis/index.ts";
 import { demoBundle } from "../lib/demoData.ts";
+import { DEMO_CARBONATE } from "../lib/panelExtras.ts";
 import type { TextFile } from "../worker/protocol.ts";
 import type { Selection } from "./selection.svelte.ts";
 import type { Settings } from "./settings.svelte.ts";
@@ -83,6 +84,7 @@ export class SavedWorkspace {
     const bundle = demoBundle();
     this.centerline = bundle.centerline;
     this.demoBasemap = true;
+    this.host.settings.carbonate = { ...DEMO_CARBONATE, invented: true };
     void this.host.load(bundle.surveys, bundle.centerline);
   }
 
@@ -139,12 +141,18 @@ export class SavedWorkspace {
   /** Adds what an import read: its records, a new centerline (which retires the demo basemap) and surveys. */
   addImport(records: ImportRecord[], surveys: Survey[], centerline: TextFile | undefined): void {
     this.imports = [...this.imports, ...records];
+    this.#dropInventedCarbonate();
     if (centerline) {
       this.centerline = centerline;
       this.demoBasemap = false;
     }
     const before = this.host.results.surveys;
     this.setSurveys(uniqueSurveyNames([...before, ...surveys]), surveys.length > 0 ? before.length : undefined);
+  }
+
+  /** Real data never get the demo's invented carbonate end-members. */
+  #dropInventedCarbonate(): void {
+    if (this.host.settings.carbonate?.invented) this.host.settings.carbonate = undefined;
   }
 
   /** The workspace state as a document's parts. */
@@ -208,6 +216,8 @@ export class SavedWorkspace {
     this.mappings = p.mappings;
     this.mappingDates = p.mappingDates;
     this.imports = p.imports;
+    // The demo's invented carbonate end-members stay only with the demo (a workspace with no imports).
+    settings.carbonate = p.imports.length === 0 ? { ...DEMO_CARBONATE, invented: true } : undefined;
     this.centerline = fileOf(p.centerline);
     this.demoBasemap = p.demoBasemap;
     settings.colouring = p.colouring;

@@ -1,3 +1,4 @@
+import type { CarbonateEndmember } from "../../../analysis/index.ts";
 /**
  * User settings that steer the analysis or the display. Analysis settings are
  * sent to the worker; display settings only change how the map draws.
@@ -10,7 +11,19 @@ export type { AnalysisSettings, ConstituentOverrides, EndmemberOverride } from "
 /** How stations are coloured on the map. */
 export type StationColouring = "salinity" | "deviation";
 
+/**
+ * TA/DIC end-members [µmol/kg] for the expected pH along the mixing line (speciation panel). A user
+ * setting, absent unless given; `invented` marks the demo estuary's assumed values (not measurements).
+ */
+export interface CarbonateSetting {
+  river: CarbonateEndmember;
+  sea: CarbonateEndmember;
+  invented: boolean;
+}
+
 export class Settings {
+  /** Carbonate end-members for the expected-pH curve; undefined until the user gives them (or the demo runs). */
+  carbonate = $state.raw<CarbonateSetting | undefined>(undefined);
   /** Analysis settings; replaced whole so the worker gets a plain object. */
   analysis = $state.raw<AnalysisSettings>({
     endmemberOverrides: {},

@@ -53,6 +53,15 @@ describe("SavedWorkspace and ImportFlow: mapping dialog, mapping reuse by file s
     expect(app.selection.surveyIndex).toBe(1);
   });
 
+  it("the demo starts with its invented carbonate end-members, labelled invented; imported data drop them (no pH curve from invented values)", async () => {
+    const app = fakeApp();
+    const data = new DataState(app, memoryStore(), fixedNow);
+    await data.boot();
+    expect(app.settings.carbonate?.invented).toBe(true);
+    await importQuirky(data);
+    expect(app.settings.carbonate).toBeUndefined();
+  });
+
   it("cancelling the dialog skips the file: nothing read, no mapping saved", async () => {
     const app = fakeApp();
     const data = new DataState(app, memoryStore(), fixedNow);
