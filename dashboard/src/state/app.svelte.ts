@@ -15,6 +15,7 @@ import { memoryStore, type WorkspaceStore } from "./workspaceStore.ts";
 import { proxyCallback, startWorker, type RemoteApi, type WorkerHandle } from "../worker/client.ts";
 import type { AnalysisJob, TextFile } from "../worker/protocol.ts";
 import type { BrushedStretch } from "../worker/brushStretch.ts";
+import type { DrawnPreview } from "../worker/drawnPreview.ts";
 import type { MapData, MapStation } from "../map/mapData.ts";
 import { deviationsById, placementsById } from "../lib/analysisView.ts";
 import { withObservations } from "../panels/lib/observations.ts";
@@ -189,6 +190,11 @@ export class AppState {
     }
     const stretch = await this.#analyser.api.brushStretch(surveyIndex, [range[0], range[1]]);
     if (ask === this.#brushAsk) this.brushedStretch = stretch;
+  }
+
+  /** Km ticks and length of a centerline being drawn, placed by the worker's centerline reader. */
+  previewCenterline(file: TextFile): Promise<DrawnPreview> {
+    return this.#analysisApi().previewCenterline(file);
   }
 
   /** Asks the worker for the self-contained HTML briefing of the analysed surveys. */

@@ -18,6 +18,7 @@ import type { ChannelOverlay } from "./overlay.ts";
 import type { AnalysisEvent, AnalysisJob, ProgressCallback, SourceFile } from "./protocol.ts";
 import type { UnderwayRequest, UnderwayResult } from "./underwayProtocol.ts";
 import { readUnderway } from "./underwayEngine.ts";
+import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -119,6 +120,11 @@ export function createWorkerApi() {
     /** The channel stretch where one survey's salinity lies within a brushed range (km and map paths). */
     brushStretch(surveyIndex: number, range: [number, number] | null): BrushedStretch {
       return brushStretch(inputs.channel?.network, analyses[surveyIndex]?.salinityProfile, range);
+    },
+
+    /** Km ticks and length of a centerline being drawn on the map (read by the one centerline reader). */
+    previewCenterline(file: TextFile): DrawnPreview {
+      return previewCenterline(file);
     },
 
     /** The self-contained HTML briefing of the analysed surveys (analysis/report). */
