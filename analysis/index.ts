@@ -170,6 +170,15 @@ export { SPECIATION_CAUTION, stationSpeciation } from "./seawater/stationSpeciat
 export type { StationWater, StationSpeciationOptions, StationSpeciationResult } from "./seawater/stationSpeciation.ts";
 export { linearGrid } from "./seawater/grid.ts";
 export type { PlotSeries, SeriesSet } from "./seawater/plotSeries.ts";
+export {
+  quantityUnit,
+  quantityKindsOf,
+  toWorkingUnit,
+  normaliseUnitText,
+  WORKING_UNIT,
+  type QuantityKind,
+  type QuantityUnit,
+} from "./seawater/quantityUnits.ts";
 // --- end seawater ---
 
 // --- io ---

@@ -49,6 +49,12 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
       throw new TypeError(`readInputs(): files[${i}] must be { name: string, content: Uint8Array | string }`);
   const { onProgress, ...plain } = choices;
   const issues: ImportIssue[] = [];
+  // Unit overrides reach the readers once ReadSurveyOptions takes them (issue 13); until then say so, never drop silently.
+  for (const [column, unit] of Object.entries(choices.unitOverrides ?? {}))
+    issues.push({
+      ...fileIssue("(unit override)", `${column}=${unit}`, "a unit override the readers apply (not yet supported)"),
+      severity: "warning",
+    });
   const kinds = files.map((f) => {
     const given = choices.kindByFile?.[f.name];
     if (given) return given;

@@ -4,6 +4,7 @@ import Papa from "papaparse";
 import type { Command } from "../command.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { toCsv } from "../../analysis/output/csv.ts";
+import { SCREENING_CAUTION } from "../../analysis/output/caution.ts";
 import { practicalSalinityFromConductivity, pss78ValidityNote } from "../../analysis/seawater/practicalSalinity.ts";
 import { planColumns, type ColumnPlan } from "./salinityColumns.ts";
 
@@ -38,7 +39,7 @@ row, column and value; that row gets an empty salinity and the other rows are st
 outside the PSS-78 range (S > 42, t outside −2…35 °C) are computed and noted on stderr.
 Exit codes: 0 when at least one row got a salinity; 2 when the file or its columns are unusable or
 no row could be converted; 64 for a wrong command line.
-Screening analysis, not a compliance assessment: defer to local regulations and licensed practice.`;
+${SCREENING_CAUTION}`;
 
 const MAX_MESSAGES = 50;
 
