@@ -26,7 +26,14 @@ export interface MixingModel {
   /** Tangent from the seaward segment back to the river end-member salinity. */
   tangent?: { x1: number; y1: number; x2: number; y2: number };
   /** Effective river end-member C*₀ with its 95 % interval, at the river salinity. */
-  effective?: { px: number; py: number; pyLower: number; pyUpper: number };
+  effective?: {
+    px: number;
+    py: number;
+    pyLower: number;
+    pyUpper: number;
+    clippedLower?: boolean;
+    clippedUpper?: boolean;
+  };
   zone?: { x: number; width: number; kind: "removal" | "addition" };
   maximum?: { px: number; pxLower: number; pxUpper: number };
 }
@@ -39,13 +46,18 @@ export interface MixingModel {
 export function mixingModel(c: ConstituentAnalysisView | undefined, frame: Frame): MixingModel {
   const obs = observationsOf(c);
   const data = c ? mixingPlotModel(c) : undefined;
+  const fit = data?.fit;
+  const eff = data?.effective;
   const xDomain = extent([0, ...obs.map((o) => o.salinity), ...(data?.salinityDomain ?? [])]);
   const yDomain = extent([
     0,
     ...obs.map((o) => o.value),
+    data?.dilution?.c0,
+    data?.dilution?.c1,
     // The band is clipped to the frame rather than allowed to stretch the axis.
-    ...(data?.concDomain ?? []),
-    data?.effective?.lower,
+    ...(fit?.conc ?? []),
+    // Axes follow the data (issue 14): the C*₀ interval is clipped to the frame with a marker, not allowed to squash the data.
+    eff?.value,
   ]);
   const x = linear(xDomain, [frame.x0, frame.x1], { zero: true });
   const y = linear(yDomain, [frame.y1, frame.y0], { zero: true });
@@ -59,20 +71,23 @@ export function mixingModel(c: ConstituentAnalysisView | undefined, frame: Frame
     y2: round(y(d.c1)),
   });
   if (data?.dilution) model.dilution = segment(data.dilution);
-  const fit = data?.fit;
   if (fit) {
     const xs = fit.salinity.map(x);
     model.fitPath = linePath(xs, fit.conc.map(y));
     model.bandPath = bandPath(xs, fit.lower.map(y), fit.upper.map(y));
   }
   if (data?.tangent) model.tangent = segment(data.tangent);
-  const eff = data?.effective;
   if (eff) {
+    const [top, bottom] = [Math.min(frame.y0, frame.y1), Math.max(frame.y0, frame.y1)];
+    const pyLower = round(y(eff.lower));
+    const pyUpper = round(y(eff.upper));
     model.effective = {
       px: round(x(eff.salinity)),
       py: round(y(eff.value)),
-      pyLower: round(y(eff.lower)),
-      pyUpper: round(y(eff.upper)),
+      pyLower: Math.min(bottom, Math.max(top, pyLower)),
+      pyUpper: Math.min(bottom, Math.max(top, pyUpper)),
+      clippedLower: pyLower > bottom,
+      clippedUpper: pyUpper < top,
     };
   }
   const z = data?.zone;
