@@ -10,6 +10,7 @@ import type { ImportedStation, ImportSummary } from "./importSummary.ts";
 import { makeIssue } from "./importSummary.ts";
 import type { LayerChoice } from "./layerSelection.ts";
 import { selectLayer } from "./layerSelection.ts";
+import { chooseLayer, duplicateStationIssues } from "./layerDefault.ts";
 import type { FlagDecision } from "./qcFlags.ts";
 import type { RowReader, SalinityFromConductivity } from "./rowReader.ts";
 import { createRowReader } from "./rowReader.ts";
@@ -56,6 +57,8 @@ export interface ImportResult {
   mapping: ColumnMapping;
   headers: string[];
   dialect: TextDialect;
+  /** The layer used (the stated one, else "shallowest" for depth-resolved files, else "all"). */
+  layer: LayerChoice;
 }
 
 /**
@@ -123,10 +126,24 @@ export function finishImport(
     rows = joined.stations;
     issues.push(...joined.issues);
   }
-  const layered = selectLayer(rows, options.layer ?? { kind: "all" }, file);
-  issues.push(...layered.issues);
+  const grouping: SurveyGrouping =
+    options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
+  const grouped = groupSurveys(rows, grouping, compiled.constituentList, file, options.riverDischargeM3s);
+  issues.push(...grouped.issues);
+  const layer = chooseLayer(
+    rows,
+    options.layer,
+    headers[compiled.single.depth ?? compiled.single.depthLabel ?? -1] ?? "",
+    file,
+    issues,
+  );
+  for (const survey of grouped.surveys) {
+    const layered = selectLayer(survey.stations as ImportedStation[], layer, file);
+    survey.stations = layered.stations;
+    issues.push(...layered.issues);
+  }
   const noPos = new Map<string, ImportedStation>();
-  for (const st of layered.stations)
+  for (const st of grouped.surveys.flatMap((s) => s.stations) as ImportedStation[])
     if (st.lonLat === undefined && !noPos.has(normaliseStationId(st.id).id))
       noPos.set(normaliseStationId(st.id).id, st);
   for (const st of noPos.values()) {
@@ -145,10 +162,7 @@ export function finishImport(
       ),
     );
   }
-  const grouping: SurveyGrouping =
-    options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
-  const grouped = groupSurveys(layered.stations, grouping, compiled.constituentList, file, options.riverDischargeM3s);
-  issues.push(...grouped.issues);
+  issues.push(...duplicateStationIssues(grouped.surveys, file, stationHeader));
   options.onProgress?.(1);
-  return { surveys: grouped.surveys, issues, summary: reader.summary, mapping, headers, dialect };
+  return { surveys: grouped.surveys, issues, summary: reader.summary, mapping, headers, dialect, layer };
 }

@@ -58,6 +58,7 @@ describe.skipIf(!present)("USGS San Francisco Bay files with the station table j
       fileName: "2016.csv",
       stationTable: table,
       mapping,
+      layer: { kind: "all" },
       grouping: { by: "date" },
     });
     expect(r.issues.filter((i) => i.severity === "error")).toEqual([]);
@@ -118,7 +119,7 @@ describe.skipIf(!present)("USGS San Francisco Bay files with the station table j
   });
 
   it("2022 file has no nutrients yet (SOURCE.md): every silicate cell is read as missing, nothing invalid", () => {
-    const r = readSurveyText(y2022 ?? "", { fileName: "wqdata22.csv", stationTable: table });
+    const r = readSurveyText(y2022 ?? "", { fileName: "wqdata22.csv", stationTable: table, layer: { kind: "all" } });
     const rows = r.surveys.flatMap((s) => s.stations);
     expect(rows.length).toBe(3271);
     expect(rows.every((x) => x.values.Si.status === "missing")).toBe(true);
