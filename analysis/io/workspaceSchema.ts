@@ -44,7 +44,15 @@ export const surveySchema = z.object({
   endDate: z.string().optional(),
   riverDischargeM3s: finite.optional(),
   stations: z.array(stationSchema),
-  constituents: z.array(z.object({ name: z.string(), unit: z.string(), header: z.string() })),
+  constituents: z.array(
+    z.object({
+      name: z.string(),
+      unit: z.string(),
+      header: z.string(),
+      kind: z.enum(["tracer", "nonMixing"]).optional(),
+      kindReason: z.string().optional(),
+    }),
+  ),
 });
 
 export const importIssueSchema = z.object({
@@ -79,7 +87,7 @@ export const centerlineSchema = z.union([
 ]);
 
 const layerChoice = z.union([
-  z.object({ kind: z.enum(["all", "surface", "bottom", "depthAveraged"]) }),
+  z.object({ kind: z.enum(["all", "shallowest", "surface", "bottom", "depthAveraged"]) }),
   z.object({ kind: z.literal("depthRange"), minM: finite, maxM: finite }),
 ]);
 const grouping = z.union([

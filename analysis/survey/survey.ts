@@ -72,6 +72,13 @@ export interface Constituent {
   unit: string;
   /** The header text the constituent came from. */
   header: string;
+  /**
+   * "tracer": dissolved constituent analysed against the dilution line (the default);
+   * "nonMixing": oxygen, pigments, particles, optical measures — shown along the channel, no end-members.
+   */
+  kind?: "tracer" | "nonMixing";
+  /** Why a variable is "nonMixing" (shown to the user). */
+  kindReason?: string;
 }
 
 /** One survey (cruise or sampling campaign) of one estuary. */
