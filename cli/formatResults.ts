@@ -15,6 +15,9 @@ export function surveyJson(
     ...facts,
     stations: a.stations,
     constituents: a.constituents,
+    variables: a.variables ?? [],
+    offChannelStations: a.offChannelStations ?? [],
+    offChannel: a.offChannel ?? null,
     warnings: a.warnings,
   };
 }

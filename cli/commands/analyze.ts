@@ -1,9 +1,19 @@
 import { parseArgs } from "node:util";
 import { writeFileSync } from "node:fs";
 import type { Command } from "../command.ts";
-import type { LayerChoice, SurveyAnalysis } from "../../analysis/index.ts";
+import type { SurveyAnalysis } from "../../analysis/index.ts";
 import { analyzeSurvey, SCREENING_CAUTION } from "../../analysis/index.ts";
-import { describeImport, loadCenterline, loadSurveys, parseCount, parseDischarge } from "../loadInputs.ts";
+import { describeImport, parseCount, parseDischarge } from "../loadInputs.ts";
+import {
+  analysisChoices,
+  CHOICE_HELP,
+  CHOICE_OPTIONS,
+  chooseChannel,
+  describeChoices,
+  loadSurveysWithChoices,
+  parseInputChoices,
+  readCenterlineFile,
+} from "../inputChoices.ts";
 import { surveyJson, resultsCsv } from "../formatResults.ts";
 import { UsageError } from "../exitCodes.ts";
 
@@ -14,12 +24,15 @@ cross-channel offset), locates isohalines, and runs the mixing analysis of every
 (class, effective river end-member C*0, % change, reaction zone, maximum, fluxes, warnings).
 
 Options:
-  --centerline <file.geojson>  channel centerline (LineString, MultiLineString or FeatureCollection)
+  --centerline <file.geojson>  channel centerline (LineString, MultiLineString or FeatureCollection);
+                               without one, a centerline is built from the station positions (with a
+                               notice), or stations are placed by a station table's distances
+  --centerline-out <file>      write the centerline used (e.g. the one built from the stations)
   --mouth start|end|lon,lat    which end of the main stem is the mouth (default: from the file,
-                               else suggested from salinity and stated in the warnings)
-  --stations <table.csv>       station table joined to the measurements by station id
-  --mapping <mapping.json>     a saved column mapping (as exported by the dashboard)
-  --layer surface|bottom|average|<min>-<max>  depth layer per station (default: every row)
+                               else suggested from salinity and stated in a notice)
+  --stations <table.csv>       station table (id + coordinates and/or along-channel distance)
+                               joined to the measurements by station id
+${CHOICE_HELP}
   --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name
   --draws <n>                  bootstrap draws (default 2000)
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
@@ -30,15 +43,6 @@ JSON output: { caution, import, surveys: [ { name, date, stations: [...], consti
 for a single survey, "stations" and "constituents" are also given at the top level.
 Field names are documented in the README. Exit codes: 0 ok, 2 bad input, 64 usage, 70 internal error.
 ${SCREENING_CAUTION}`;
-
-function layerOf(text: string | undefined): LayerChoice | undefined {
-  if (text === undefined) return undefined;
-  if (text === "surface" || text === "bottom") return { kind: text };
-  if (text === "average") return { kind: "depthAveraged" };
-  const range = /^(\d+(?:\.\d+)?)-(\d+(?:\.\d+)?)$/.exec(text);
-  if (range) return { kind: "depthRange", minM: Number(range[1]), maxM: Number(range[2]) };
-  throw new UsageError(`--layer: expected surface, bottom, average or a depth range like 0-2 (m); got "${text}"`);
-}
 
 export const analyzeCommand: Command = {
   name: "analyze",
@@ -53,7 +57,8 @@ export const analyzeCommand: Command = {
         mouth: { type: "string" },
         stations: { type: "string" },
         mapping: { type: "string" },
-        layer: { type: "string" },
+        "centerline-out": { type: "string" },
+        ...CHOICE_OPTIONS,
         discharge: { type: "string" },
         draws: { type: "string" },
         seed: { type: "string" },
@@ -64,21 +69,34 @@ export const analyzeCommand: Command = {
     if (values.format !== "json" && values.format !== "csv")
       throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
-    const layer = layerOf(values.layer);
+    const choices = parseInputChoices(values);
     const discharge = parseDischarge(values.discharge);
-    const loaded = loadSurveys(positionals, {
+    const loaded = loadSurveysWithChoices(positionals, choices, {
       ...(values.stations ? { stationsPath: values.stations } : {}),
       ...(values.mapping ? { mappingPath: values.mapping } : {}),
-      ...(layer ? { layer } : {}),
       ...(discharge !== undefined ? { dischargeM3s: discharge } : {}),
     });
     io.err(describeImport(loaded));
-    const network = values.centerline ? loadCenterline(values.centerline, values.mouth).network : undefined;
+    const channel = chooseChannel(
+      loaded,
+      values.centerline ? readCenterlineFile(values.centerline) : undefined,
+      values.mouth,
+    );
+    const said = describeChoices(loaded, channel);
+    if (said) io.err(said);
+    if (values["centerline-out"] && channel.geojson !== undefined)
+      writeFileSync(values["centerline-out"], `${JSON.stringify(channel.geojson, null, 2)}\n`);
+    const network = channel.network;
     const draws = parseCount("draws", values.draws, 2000);
     const seed = parseCount("seed", values.seed, 1);
     const analyses: SurveyAnalysis[] = loaded.surveys.map((survey, i) => {
       io.err(`analysing survey ${i + 1}/${loaded.surveys.length}: ${survey.name} (${survey.stations.length} stations)`);
-      return analyzeSurvey(survey, { ...(network ? { network } : {}), bootstrapDraws: draws, seed });
+      return analyzeSurvey(survey, {
+        ...(network ? { network } : {}),
+        ...analysisChoices(choices),
+        bootstrapDraws: draws,
+        seed,
+      });
     });
     let text: string;
     if (values.format === "csv") text = resultsCsv(analyses);
@@ -90,6 +108,8 @@ export const analyzeCommand: Command = {
           summary: loaded.summary,
           files: loaded.files.map((f) => ({ file: f.file, summary: f.summary })),
           issues: loaded.issues,
+          notUsed: loaded.notUsed,
+          notices: [...loaded.notices, ...channel.notices],
         },
         ...(surveys.length === 1 ? { stations: surveys[0]!.stations, constituents: surveys[0]!.constituents } : {}),
         surveys,
