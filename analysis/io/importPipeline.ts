@@ -144,7 +144,7 @@ export function finishImport(
   }
   const noPos = new Map<string, ImportedStation>();
   for (const st of grouped.surveys.flatMap((s) => s.stations) as ImportedStation[])
-    if (st.lonLat === undefined && !noPos.has(normaliseStationId(st.id).id))
+    if (st.lonLat === undefined && st.distanceKm === undefined && !noPos.has(normaliseStationId(st.id).id))
       noPos.set(normaliseStationId(st.id).id, st);
   for (const st of noPos.values()) {
     const hint =

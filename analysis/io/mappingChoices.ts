@@ -174,7 +174,7 @@ export function unusedColumns(
     const why = c?.reason ?? "not in the mapping";
     out.push({
       header: h,
-      reason: `${why === "not recognised" ? "name not recognised as a constituent or a station/survey/place/salinity column" : why}; to use it, give it a role in a mapping file (brackline mapping prints one) or a unit with --unit "${h}=<unit>"`,
+      reason: `${why === "not recognised" ? "not a recognised constituent or column role" : why}; to use it, give it a role in the mapping (brackline mapping prints one) or a unit (--unit "${h}=<unit>")`,
     });
   });
   return out;

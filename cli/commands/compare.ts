@@ -11,7 +11,16 @@ import {
   comparisonToCsv,
   SCREENING_CAUTION,
 } from "../../analysis/index.ts";
-import { describeImport, loadSurveys, parseCount, parseDischarge } from "../loadInputs.ts";
+import { describeImport, parseCount, parseDischarge } from "../loadInputs.ts";
+import {
+  analysisChoices,
+  CHOICE_HELP,
+  CHOICE_OPTIONS,
+  chooseChannel,
+  describeChoices,
+  loadSurveysWithChoices,
+  parseInputChoices,
+} from "../inputChoices.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 
 /** A map file read for the comparison or briefing, with its provenance. */
@@ -85,27 +94,56 @@ export const SURVEY_OPTIONS = {
   discharge: { type: "string" },
   draws: { type: "string" },
   seed: { type: "string" },
+  ...CHOICE_OPTIONS,
 } as const;
 
 /** Reads the survey files and analyses every survey (progress on stderr). */
 export function analyzeFiles(
   paths: string[],
-  values: { stations?: string; mapping?: string; discharge?: string; draws?: string; seed?: string },
-  network: ChannelNetwork | undefined,
+  values: {
+    stations?: string;
+    mapping?: string;
+    discharge?: string;
+    draws?: string;
+    seed?: string;
+    mouth?: string;
+    layer?: string;
+    unit?: string[];
+    "off-channel-km"?: string;
+    "keep-off-channel"?: boolean;
+    "as-tracer"?: string[];
+  },
+  centerline: { path: string; geojson: unknown },
   io: CommandIo,
-): { analyses: SurveyAnalysis[]; files: ProvenanceFile[]; draws: number; seed: number } {
+): {
+  analyses: SurveyAnalysis[];
+  files: ProvenanceFile[];
+  draws: number;
+  seed: number;
+  network: ChannelNetwork | undefined;
+} {
   const discharge = parseDischarge(values.discharge);
-  const loaded = loadSurveys(paths, {
+  const choices = parseInputChoices(values);
+  const loaded = loadSurveysWithChoices(paths, choices, {
     ...(values.stations ? { stationsPath: values.stations } : {}),
     ...(values.mapping ? { mappingPath: values.mapping } : {}),
     ...(discharge !== undefined ? { dischargeM3s: discharge } : {}),
   });
   io.err(describeImport(loaded));
+  const channel = chooseChannel(loaded, centerline, values.mouth);
+  const said = describeChoices(loaded, channel);
+  if (said) io.err(said);
+  const network = channel.network;
   const draws = parseCount("draws", values.draws, 2000);
   const seed = parseCount("seed", values.seed, 1);
   const analyses = loaded.surveys.map((survey, i) => {
     io.err(`analysing survey ${i + 1}/${loaded.surveys.length}: ${survey.name} (${survey.stations.length} stations)`);
-    return analyzeSurvey(survey, { ...(network ? { network } : {}), bootstrapDraws: draws, seed });
+    return analyzeSurvey(survey, {
+      ...(network ? { network } : {}),
+      ...analysisChoices(choices),
+      bootstrapDraws: draws,
+      seed,
+    });
   });
   const files = paths.map((p): ProvenanceFile => {
     const bytes = readFileSync(p);
@@ -116,7 +154,7 @@ export function analyzeFiles(
       sha256: createHash("sha256").update(bytes).digest("hex"),
     };
   });
-  return { analyses, files, draws, seed };
+  return { analyses, files, draws, seed, network };
 }
 
 const help = `brackline compare <survey files...> --centerline <line.geojson> [options]
@@ -129,9 +167,10 @@ with an approximate 95 % interval, and class changes.
 
 Options:
   --centerline <file.geojson>  channel centerline (required for km positions)
-  --mouth start|end|lon,lat    which end of the main stem is the mouth (default: a "mouth" point in the file)
+  --mouth start|end|lon,lat    which end of the main stem is the mouth (default: a "mouth" point in the
+                               file, else suggested from salinity and stated in a notice)
   --stations <table.csv>       station table joined by station id
-  --mapping <mapping.json>     a saved column mapping
+${CHOICE_HELP}
   --discharge <Q | name=Q,...> river discharge [m³/s] per survey name (needed for the exponent and fluxes)
   --draws <n>                  bootstrap draws (default 2000)
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
@@ -153,8 +192,13 @@ export const compareCommand: Command = {
       throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
     if (positionals.length === 0) throw new UsageError("give the survey files to compare");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
-    const network = channelFromFile(readGeoJsonFile(values.centerline, "centerline"), values.centerline, values.mouth);
-    const { analyses } = analyzeFiles(positionals, values, network, io);
+    const centerline = readGeoJsonFile(values.centerline, "centerline");
+    const { analyses } = analyzeFiles(
+      positionals,
+      values,
+      { path: values.centerline, geojson: centerline.geojson },
+      io,
+    );
     if (analyses.length < 2)
       throw new InputError(
         `${positionals.join(", ")}: ${analyses.length} survey found; compare needs at least 2 (one per file, or a survey column)`,

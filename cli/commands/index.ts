@@ -5,6 +5,7 @@ import { reportCommand } from "./report.ts";
 import { demoCommand } from "./demo.ts";
 import { salinityCommand } from "./salinity.ts";
 import { underwayCommand } from "./underway.ts";
+import { mappingCommand } from "./mapping.ts";
 
 /** Every subcommand of `brackline`, in the order `--help` lists them. */
 export const commands: Command[] = [
@@ -14,4 +15,5 @@ export const commands: Command[] = [
   compareCommand,
   reportCommand,
   underwayCommand,
+  mappingCommand,
 ];

@@ -3,8 +3,9 @@ import { parseArgs } from "node:util";
 import type { Command } from "../command.ts";
 import type { ProvenanceFile } from "../../analysis/index.ts";
 import { buildBriefing, renderBriefingHtml, SCREENING_CAUTION } from "../../analysis/index.ts";
-import { UsageError } from "../exitCodes.ts";
-import { analyzeFiles, channelFromFile, readGeoJsonFile, SURVEY_OPTIONS, type MapFile } from "./compare.ts";
+import { InputError, UsageError } from "../exitCodes.ts";
+import { CHOICE_HELP } from "../inputChoices.ts";
+import { analyzeFiles, readGeoJsonFile, SURVEY_OPTIONS, type MapFile } from "./compare.ts";
 
 const help = `brackline report <survey files...> --centerline <line.geojson> --out <briefing.html> [options]
 
@@ -21,9 +22,10 @@ Options:
   --title <text>               title (default "Estuarine mixing briefing")
   --date <text>                date printed on the briefing (none by default: output is byte-identical
                                for identical input and seed)
-  --mouth start|end|lon,lat    which end of the main stem is the mouth (default: a "mouth" point in the file)
+  --mouth start|end|lon,lat    which end of the main stem is the mouth (default: a "mouth" point in the
+                               file, else suggested from salinity and stated in a notice)
   --stations <table.csv>       station table joined by station id
-  --mapping <mapping.json>     a saved column mapping
+${CHOICE_HELP}
   --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name (for fluxes)
   --draws <n>                  bootstrap draws (default 2000)
   --seed <n>                   bootstrap seed (default 1)
@@ -67,9 +69,14 @@ export const reportCommand: Command = {
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (!values.out) throw new UsageError("missing --out <briefing.html>");
     const centerline = readGeoJsonFile(values.centerline, "centerline");
-    const network = channelFromFile(centerline, values.centerline, values.mouth);
     const basemap = values.basemap ? readGeoJsonFile(values.basemap, "basemap") : undefined;
-    const { analyses, files, draws, seed } = analyzeFiles(positionals, values, network, io);
+    const { analyses, files, draws, seed, network } = analyzeFiles(
+      positionals,
+      values,
+      { path: values.centerline, geojson: centerline.geojson },
+      io,
+    );
+    if (network === undefined) throw new InputError(`${values.centerline}: no usable centerline`);
     const maps = [centerline, ...(basemap ? [basemap] : [])];
     const notice = dataNoticeOf(maps);
     const provenance: ProvenanceFile[] = [...files, ...maps.map((m) => m.file)];
