@@ -106,6 +106,7 @@ async function main() {
   }
   const { port } = server.address();
   console.log(`Brackline dashboard: http://${host}:${port}/`);
+  console.log("Open that address in a browser (it starts on the invented demo estuary). Press Ctrl+C to stop.");
   const stop = () => server.close(() => process.exit(0));
   process.on("SIGINT", stop);
   process.on("SIGTERM", stop);

@@ -10,7 +10,7 @@ import type { ConstituentAnalysis } from "../mixing/result.ts";
 import { readBasemap } from "./basemap.ts";
 import type { BriefingDocument, BriefingInput, BriefingTable } from "./briefingTypes.ts";
 import { comparisonSection } from "./comparisonSection.ts";
-import { BRIEFING_REFERENCES, methodsParagraphs } from "./references.ts";
+import { briefingReferences, methodsParagraphs } from "./references.ts";
 import { datePart } from "./resultsTable.ts";
 import { surveySection } from "./surveySection.ts";
 
@@ -62,7 +62,7 @@ function provenance(input: BriefingInput): BriefingTable[] {
  * @param input analysed surveys, map data, files, notices (see {@link BriefingInput})
  * @returns the document model, to be rendered by renderBriefingHtml
  * @throws RangeError without any analysed survey
- * @see Boyle et al. (1974); Liss (1976); Loder & Reichard (1981); Officer (1979); mixing-methods.md §1, §5.
+ * @see bibliography keys boyle1974, liss1976, loderReichard1981, officer1979 (methods text: references.ts).
  */
 export function buildBriefing(input: BriefingInput): BriefingDocument {
   if (!input || !Array.isArray(input.analyses) || input.analyses.length === 0)
@@ -119,7 +119,7 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
     ...(cmp ? { comparison: cmp } : {}),
     provenance: provenance(input),
     methods: methodsParagraphs(fitMethod, boot ? { draws: boot.draws, seed: boot.seed } : undefined, !!cmp),
-    references: [...BRIEFING_REFERENCES],
+    references: briefingReferences(!!cmp),
     cautions,
   };
 }
