@@ -252,7 +252,7 @@ export { alongChannelSeries } from "./pipeline/alongChannelSeries.ts";
 export { offChannelStations } from "./pipeline/offChannel.ts";
 export { networkWithMouth } from "./pipeline/resolveMouth.ts";
 export type { ResolvedNetwork } from "./pipeline/resolveMouth.ts";
-export { centerlineFromStations } from "./pipeline/centerlineFromStations.ts";
+export { centerlineFromStations, centerlineFromSurveys } from "./pipeline/centerlineFromStations.ts";
 export type { CenterlineStation, StationCenterline } from "./pipeline/centerlineFromStations.ts";
 export { distancesFromMouth } from "./pipeline/distancesFromMouth.ts";
 export type { AnalyzeSurveyOptions, ConstituentSettings } from "./pipeline/analyzeSurvey.ts";

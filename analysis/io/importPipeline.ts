@@ -19,6 +19,7 @@ import { joinStationTable } from "./stationTable.ts";
 import { normaliseStationId } from "./stationIds.ts";
 import { findSavedMapping } from "./fileShape.ts";
 import { suggestMapping } from "./suggestMapping.ts";
+import { applyUnitOverrides, mergeMapping } from "./mappingChoices.ts";
 import { crossCheckUnits } from "./unitCrossCheck.ts";
 import type { UnitParser } from "./unitText.ts";
 import { canonicalUnitText } from "./unitText.ts";
@@ -39,7 +40,9 @@ export interface ReadSurveyOptions {
   salinityFromConductivity?: SalinityFromConductivity;
   /** Station table joined by station id (positions, distances). */
   stationTable?: StationTable;
-  /** Layer kept per station and time (default: every row). */
+  /** Units by column header or constituent name (`{ "Silicate": "µmol/L" }`), for headers without one. */
+  unitOverrides?: Readonly<Record<string, string>>;
+  /** Layer kept per station and survey (default: "shallowest" for depth-resolved files, else every row). */
   layer?: LayerChoice;
   /** Survey grouping (default: survey column when mapped, else date gaps of 3 days). */
   grouping?: SurveyGrouping;
@@ -77,11 +80,22 @@ export function pss78Salinity(
   }
 }
 
-/** Chooses the mapping: explicit, saved for this shape, or suggested. */
+/**
+ * Chooses the mapping: explicit (a partial one merged with the suggestion: columns it leaves out keep
+ * the suggested role), saved for this shape, or suggested; then the user's unit overrides.
+ */
 export function chooseMapping(headers: string[], sample: string[][], options: ReadSurveyOptions): ColumnMapping {
-  if (options.mapping !== undefined) return options.mapping;
-  const saved = options.savedMappings === undefined ? undefined : findSavedMapping(headers, options.savedMappings);
-  return saved ?? suggestMapping(headers, sample, options.parseUnit ?? canonicalUnitText);
+  const suggest = (): ColumnMapping => suggestMapping(headers, sample, options.parseUnit ?? canonicalUnitText);
+  let mapping: ColumnMapping;
+  if (options.mapping !== undefined) {
+    const merged = mergeMapping(options.mapping, suggest());
+    mapping = "mapping" in merged ? merged.mapping : options.mapping;
+  } else {
+    const saved = options.savedMappings === undefined ? undefined : findSavedMapping(headers, options.savedMappings);
+    mapping = saved ?? suggest();
+  }
+  const overrides = Object.entries(options.unitOverrides ?? {}).map(([column, unit]) => ({ column, unit }));
+  return overrides.length === 0 ? mapping : applyUnitOverrides(mapping, overrides).mapping;
 }
 
 /** Compiles the mapping and creates the row reader, adding file-level issues. */

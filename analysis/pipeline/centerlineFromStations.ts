@@ -1,3 +1,4 @@
+import type { Survey } from "../survey/survey.ts";
 import { localSegmentLengthM } from "../geometry/ellipsoid.ts";
 
 /** A station as evidence for a centerline: id, position and salinity (one entry per sample; ids may repeat). */
@@ -132,4 +133,23 @@ export function centerlineFromStations(
     geometry: { type: "LineString", coordinates: coords },
     properties: { role: "main", mouth: "end", source: "stations", stationIds: pts.map((p) => p.id), leftOut },
   };
+}
+
+/**
+ * {@link centerlineFromStations} over every station of the surveys (accepted measured salinity only),
+ * for the dashboard's draw tool and the CLI.
+ *
+ * @param surveys the imported surveys
+ * @returns the offered centerline, or undefined with fewer than 2 positioned stations with salinity
+ */
+export function centerlineFromSurveys(surveys: readonly Survey[]): StationCenterline | undefined {
+  return centerlineFromStations(
+    surveys.flatMap((s) =>
+      s.stations.map((st) => ({
+        id: st.id,
+        lonLat: st.lonLat,
+        salinity: st.salinity.status === "measured" && st.salinity.accepted ? st.salinity.value : undefined,
+      })),
+    ),
+  );
 }
