@@ -113,7 +113,8 @@ export function missingUnits(mapping: ColumnMapping): MissingUnit[] {
     }));
 }
 
-const partialMappingSchema = columnMappingSchema.extend({
+/** A mapping file as users write it: `shape` and column `role`s may be left out (merged with the suggestion). */
+export const partialMappingSchema = columnMappingSchema.extend({
   shape: z.string().optional(),
   columns: z.array(columnAssignmentSchema.partial({ role: true })),
 });

@@ -1,3 +1,4 @@
+import { parseUnit } from "../seawater/units.ts";
 import type { ChannelNetwork } from "../geometry/types.ts";
 import { fitSalinityProfile } from "../geometry/salinityProfile.ts";
 import { crossingsKm, isohalinePositions, saltIntrusionLengthKm } from "../geometry/isohalines.ts";
@@ -156,7 +157,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     const samples = all.samples.filter((x) => !excluded.has(x.stationId));
     const leftOut = { ...all.leftOut };
     if (samples.length < all.samples.length) leftOut["off the channel"] = all.samples.length - samples.length;
-    const perKg = /\/\s*kg/i.test(info.unit);
+    const perKg = parseUnit(info.unit)?.basis === "perKilogram";
     const settings = options.settings?.[name] ?? {};
     const result = analyzeConstituent(samples, {
       bootstrapDraws: options.bootstrapDraws ?? 2000,

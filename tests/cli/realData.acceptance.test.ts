@@ -43,6 +43,7 @@ interface Issue {
   expected: string;
 }
 interface Doc {
+  mouth?: { source: string; statement: string };
   import: { issues: Issue[]; notices: Array<{ code: string; message: string }>; notUsed: Array<{ header: string }> };
   surveys: Array<{
     name: string;
@@ -107,8 +108,8 @@ describe.skipIf(!bayPresent)(
       ]);
       expect(r.code, r.err.slice(0, 2000)).toBe(0);
       const doc = JSON.parse(r.out) as Doc;
-      expect(doc.import.notices.map((n) => n.code)).toContain("mouthSuggested");
-      expect(doc.import.notices.find((n) => n.code === "mouthSuggested")!.message).toContain("--mouth");
+      expect(doc.mouth?.source).toBe("suggested");
+      expect(doc.mouth?.statement).toContain("--mouth");
       expect(doc.import.notUsed.map((u) => u.header)).toContain("Nitrite");
       expectNoDuplicateWarnings(doc);
       let transects = 0;
