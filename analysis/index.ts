@@ -3,9 +3,12 @@
 
 // --- survey data model ---
 export type { CellStatus, ValueCell, Station, Constituent, Survey, ImportIssue } from "./survey/survey.ts";
+export { minOf, maxOf, appendAll } from "./survey/arrayExtent.ts";
 // --- end survey ---
 
 // --- geometry ---
+export { centerlinePlausibility, centerlineVertices, CENTERLINE_FAR_KM } from "./geometry/centerlinePlausibility.ts";
+export type { CenterlinePlausibility } from "./geometry/centerlinePlausibility.ts";
 export type {
   GeometryWarning,
   MouthOption,
@@ -239,7 +242,10 @@ export type { UnitParser } from "./io/unitText.ts";
 export { crossCheckUnits, COUNTED_ELEMENT } from "./io/unitCrossCheck.ts";
 export { normaliseStationId } from "./io/stationIds.ts";
 export type { NormalisedStationId } from "./io/stationIds.ts";
-export { detectDialect, stripBom } from "./io/dialect.ts";
+export { detectDialect, detectNewline, stripBom } from "./io/dialect.ts";
+export { WORKSPACE_LIMITS } from "./io/workspaceSchema.ts";
+export { conflictingStationPositions, STATION_POSITION_TOLERANCE_KM } from "./io/stationPositionCheck.ts";
+export { MAX_DISCHARGE_M3S, MAX_STATION_ID_CHARS, PSS78_MAX_SALINITY } from "./io/rowReader.ts";
 export type { TextDialect } from "./io/dialect.ts";
 export { createWorkspace, exportWorkspace, importWorkspace } from "./io/workspace.ts";
 export { workspaceSchema, WORKSPACE_VERSION, WORKSPACE_FORMAT } from "./io/workspaceSchema.ts";

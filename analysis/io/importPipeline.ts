@@ -23,6 +23,8 @@ import { applyUnitOverrides, mergeMapping } from "./mappingChoices.ts";
 import { crossCheckUnits } from "./unitCrossCheck.ts";
 import type { UnitParser } from "./unitText.ts";
 import { canonicalUnitText } from "./unitText.ts";
+import { conflictingStationPositions } from "./stationPositionCheck.ts";
+import { appendAll } from "../survey/arrayExtent.ts";
 
 /** Options shared by the survey readers. */
 export interface ReadSurveyOptions {
@@ -117,7 +119,7 @@ export function startRows(
     ...(options.flagMap !== undefined ? { flagMap: options.flagMap } : {}),
     salinityFromConductivity: options.salinityFromConductivity ?? pss78Salinity,
   });
-  reader.issues.push(...issues);
+  appendAll(reader.issues, issues);
   return { reader, compiled };
 }
 
@@ -133,17 +135,18 @@ export function finishImport(
   const file = options.fileName;
   const issues = reader.issues;
   const stationHeader = compiled.single.station === undefined ? "" : (headers[compiled.single.station] ?? "");
-  issues.push(...crossCheckUnits(reader.stations, compiled.constituents, file));
+  appendAll(issues, crossCheckUnits(reader.stations, compiled.constituents, file));
   let rows: ImportedStation[] = reader.stations;
   if (options.stationTable !== undefined) {
     const joined = joinStationTable(rows, options.stationTable, file, stationHeader);
     rows = joined.stations;
-    issues.push(...joined.issues);
+    appendAll(issues, joined.issues);
   }
+  appendAll(issues, conflictingStationPositions(reader.stations, file, stationHeader));
   const grouping: SurveyGrouping =
     options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
   const grouped = groupSurveys(rows, grouping, compiled.constituentList, file, options.riverDischargeM3s);
-  issues.push(...grouped.issues);
+  appendAll(issues, grouped.issues);
   const layer = chooseLayer(
     rows,
     options.layer,
@@ -154,7 +157,7 @@ export function finishImport(
   for (const survey of grouped.surveys) {
     const layered = selectLayer(survey.stations as ImportedStation[], layer, file);
     survey.stations = layered.stations;
-    issues.push(...layered.issues);
+    appendAll(issues, layered.issues);
   }
   const noPos = new Map<string, ImportedStation>();
   for (const st of grouped.surveys.flatMap((s) => s.stations) as ImportedStation[])
@@ -176,7 +179,7 @@ export function finishImport(
       ),
     );
   }
-  issues.push(...duplicateStationIssues(grouped.surveys, file, stationHeader));
+  appendAll(issues, duplicateStationIssues(grouped.surveys, file, stationHeader));
   options.onProgress?.(1);
   return { surveys: grouped.surveys, issues, summary: reader.summary, mapping, headers, dialect, layer };
 }

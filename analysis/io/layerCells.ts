@@ -1,5 +1,6 @@
 import type { ValueCell } from "../survey/survey.ts";
 import type { ImportedStation } from "./importSummary.ts";
+import { maxOf } from "../survey/arrayExtent.ts";
 
 /**
  * Cell-level helpers of layer selection: combining the cells of several samples and pairing each
@@ -33,7 +34,7 @@ export function combineCells(cells: readonly ValueCell[]): ValueCell {
   if (bdl.length > 0) {
     const limits = bdl.map((c) => c.detectionLimit).filter((x): x is number => x !== undefined);
     const cell: ValueCell = { value: undefined, original, status: "belowDetection", accepted: true };
-    if (limits.length > 0) cell.detectionLimit = Math.max(...limits);
+    if (limits.length > 0) cell.detectionLimit = maxOf(limits);
     return cell;
   }
   const first = cells.find((c) => c.status !== "missing") ?? cells[0];

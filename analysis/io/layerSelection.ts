@@ -2,6 +2,7 @@ import type { ImportIssue, ValueCell } from "../survey/survey.ts";
 import type { ImportedStation } from "./importSummary.ts";
 import { makeIssue } from "./importSummary.ts";
 import { normaliseStationId } from "./stationIds.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 import { combineCells, hasValue, missingCell, orderDepth, pairSalinity, withSample } from "./layerCells.ts";
 
 export { combineCells } from "./layerCells.ts";
@@ -35,7 +36,7 @@ function pick(rows: ImportedStation[], choice: LayerChoice): ImportedStation[] {
   const withDepth = rows.filter((r) => r.depthM !== undefined);
   if (withDepth.length === 0) return rows.length === 1 ? rows : [];
   const depths = withDepth.map((r) => r.depthM as number);
-  const target = label === "surface" ? Math.min(...depths) : Math.max(...depths);
+  const target = label === "surface" ? minOf(depths) : maxOf(depths);
   return withDepth.filter((r) => r.depthM === target);
 }
 
@@ -43,7 +44,7 @@ function pick(rows: ImportedStation[], choice: LayerChoice): ImportedStation[] {
 function rowsFor(key: (r: ImportedStation) => ValueCell | undefined, rows: ImportedStation[], shallowest: boolean) {
   const having = rows.filter((r) => hasValue(key(r)));
   if (!shallowest || having.length === 0) return having;
-  const top = Math.min(...having.map(orderDepth));
+  const top = minOf(having.map(orderDepth));
   return having.filter((r) => orderDepth(r) === top);
 }
 

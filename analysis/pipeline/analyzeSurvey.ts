@@ -15,6 +15,7 @@ import { placeStations } from "./placeStations.ts";
 import { alongChannelSeries } from "./alongChannelSeries.ts";
 import { offChannelStations } from "./offChannel.ts";
 import type { MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Per-constituent settings a user may change (end-member overrides, precision, k, ...). */
 export type ConstituentSettings = Partial<
@@ -130,9 +131,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     ...(intrusion?.km !== undefined ? { saltIntrusionKm: intrusion.km } : {}),
     saltIntrusionSalinity: saltS,
     isohalines: iso ? iso.positions.map((p) => ({ salinity: p.salinity, km: p.km })) : [],
-    ...(salinities.length > 0
-      ? { salinityRange: [Math.min(...salinities), Math.max(...salinities)] as [number, number] }
-      : {}),
+    ...(salinities.length > 0 ? { salinityRange: [minOf(salinities), maxOf(salinities)] as [number, number] } : {}),
     nStations: survey.stations.length,
   };
   const asTracer = new Set(options.analyseAsTracers ?? []);

@@ -12,6 +12,7 @@ import { decodeText, detectFileKind, EXPECTED_FILE, type InputFileKind } from ".
 import { readCenterline, type ChannelInput } from "./readCenterline.ts";
 import type { InputChoices, InputFile, InputFileReport, WorkspaceInputs } from "./types.ts";
 import { columnReport, placeWithoutCenterline } from "./stationPlacement.ts";
+import { appendAll } from "../survey/arrayExtent.ts";
 
 const fileIssue = (file: string, value: string, expected: string): ImportIssue => ({
   file,
@@ -71,7 +72,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
     const mapping = choices.mappingByFile?.[f.name];
     stationFile = f.name;
     stationTable = readStationTable(decodeText(f.content), { fileName: f.name, ...(mapping ? { mapping } : {}) });
-    issues.push(...stationTable.issues);
+    appendAll(issues, stationTable.issues);
     reports[i]!.mapping = stationTable.mapping;
   });
 
@@ -90,7 +91,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
     });
     Object.assign(reports[i]!, { surveys: r.surveys.map((s) => s.name), summary: r.summary, mapping: r.mapping });
     Object.assign(reports[i]!, columnReport(f, kinds[i]!, r.mapping));
-    issues.push(...r.issues);
+    appendAll(issues, r.issues);
     return r;
   });
   const surveys = results.flatMap((r) => r.surveys);
@@ -111,7 +112,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
       ...(choices.mouth !== undefined ? { mouth: choices.mouth } : {}),
       stations,
     });
-    issues.push(...read.issues);
+    appendAll(issues, read.issues);
     channel = read.channel;
   });
   const unmatched = Object.keys(choices.unitOverrides ?? {}).filter(

@@ -22,6 +22,8 @@ import {
 import type { AnalysisSettings } from "../state/settings.svelte.ts";
 import type { TextFile } from "../lib/demoData.ts";
 import type { ChannelOverlay, ConstituentOverlay, LonLat, SurveyOverlay } from "./overlay.ts";
+import { minOf, maxOf } from "../../../analysis/survey/arrayExtent.ts";
+import { appendAll } from "../../../analysis/survey/arrayExtent.ts";
 
 /** The survey analysis as the panels and the map read it. */
 export type AnalysisResult = SurveyAnalysis;
@@ -47,8 +49,8 @@ export function readSurveys(files: TextFile[], onProgress?: (fraction: number) =
       fileName: file.name,
       onProgress: (f) => onProgress?.((i + f) / files.length),
     });
-    surveys.push(...result.surveys);
-    issues.push(...result.issues);
+    appendAll(surveys, result.surveys);
+    appendAll(issues, result.issues);
   });
   return { surveys, issues };
 }
@@ -144,9 +146,9 @@ function surveyOverlay(analysis: SurveyAnalysis, network: Channel, ticks: Channe
   for (const c of analysis.constituents) {
     const zonePaths: LonLat[][] = [];
     for (const range of c.reactionZone?.km ?? []) {
-      const g = channelStretch(network, [Math.min(...range), Math.max(...range)], network.mainBranchId);
+      const g = channelStretch(network, [minOf(range), maxOf(range)], network.mainBranchId);
       if (g?.type === "LineString") zonePaths.push(g.coordinates as LonLat[]);
-      else if (g?.type === "MultiLineString") zonePaths.push(...(g.coordinates as LonLat[][]));
+      else if (g?.type === "MultiLineString") appendAll(zonePaths, g.coordinates as LonLat[][]);
     }
     constituents[c.name] = {
       zonePaths,
