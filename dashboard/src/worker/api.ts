@@ -19,6 +19,7 @@ import type { AnalysisEvent, AnalysisJob, ProgressCallback, SourceFile } from ".
 import type { UnderwayRequest, UnderwayResult } from "./underwayProtocol.ts";
 import { readUnderway } from "./underwayEngine.ts";
 import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
+import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -132,6 +133,11 @@ export function createWorkerApi() {
       const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
       const provenance = await fileProvenance(files, centerlineFile);
       return briefingHtml(done, inputs.channel?.network, provenance, basemap, dataNotice);
+    },
+
+    /** Speciation context at the focus station and along the mixing line (analysis/seawater). */
+    speciation(request: SpeciationRequest): SpeciationModel {
+      return speciationModel(request);
     },
 
     /** Recognises a dropped file and previews it. */
