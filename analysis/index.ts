@@ -388,6 +388,7 @@ export { stripControl } from "./output/terminalText.ts";
 
 // --- workspace ---
 export { readInputs } from "./workspace/readInputs.ts";
+export { workspaceComparison } from "./workspace/comparison.ts";
 export {
   analyzeInputs,
   type WorkspaceSettings,
