@@ -1,0 +1,12 @@
+// Worker thread entry of the archive analysis: set-up from workerData, then one survey per message.
+import { parentPort, workerData } from "node:worker_threads";
+import { surveyTaskHandler, type SurveySetup, type SurveyTask } from "./surveyTask.ts";
+
+surveyTaskHandler.setup(workerData as SurveySetup);
+parentPort!.on("message", (m: { index: number; task: SurveyTask }) => {
+  try {
+    parentPort!.postMessage({ index: m.index, result: surveyTaskHandler.run(m.task) });
+  } catch (error) {
+    parentPort!.postMessage({ index: m.index, error: (error as Error).stack ?? String(error) });
+  }
+});
