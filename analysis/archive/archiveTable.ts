@@ -62,8 +62,11 @@ export function archiveTableRows(a: ArchiveSummary): {
       upper,
     ]);
   };
-  for (const p of a.intrusion)
+  for (const p of a.intrusion) {
     push(p, undefined, "", "", `salt_intrusion_S${p.saltIntrusionSalinity}`, "km", p.saltIntrusionKm);
+    push(p, undefined, "", "", `salt_intrusion_S${p.saltIntrusionSalinity}_at_least`, "km", p.saltIntrusionAtLeastKm);
+    push(p, undefined, "", "", `salt_intrusion_S${p.saltIntrusionSalinity}_at_most`, "km", p.saltIntrusionAtMostKm);
+  }
   for (const s of a.series)
     for (const p of s.points) {
       const base = [p, p.dischargeSource, s.name, p.class] as const;

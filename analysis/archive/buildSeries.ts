@@ -64,6 +64,7 @@ export function buildSeriesPoints(
       ...common,
       ...(f.saltIntrusionKm !== undefined ? { saltIntrusionKm: f.saltIntrusionKm } : {}),
       saltIntrusionSalinity: f.saltIntrusionSalinity,
+      ...intrusionBound(a, f.saltIntrusionSalinity),
     });
     for (const c of a.constituents) {
       let entry = byConstituent.get(c.name);
@@ -97,6 +98,23 @@ export function buildSeriesPoints(
       message: `${undated.length} survey(s) without a date (${undated.slice(0, 3).join(", ")}${undated.length > 3 ? ", …" : ""}): left out of month, season and year summaries.`,
     });
   return { byConstituent, intrusion, warnings };
+}
+
+/**
+ * Bound on the intrusion when the isohaline is not crossed within the surveyed reach: salinity above
+ * it at the landward-most point of S(x) → at least that km; below it everywhere → at most the
+ * seaward-most km.
+ */
+function intrusionBound(
+  a: ComparableSurvey,
+  isohaline: number,
+): { saltIntrusionAtLeastKm?: number; saltIntrusionAtMostKm?: number } {
+  const p = a.salinityProfile;
+  if (a.survey.saltIntrusionKm !== undefined || !p || p.km.length === 0) return {};
+  const last = p.salinity[p.salinity.length - 1]!;
+  if (last > isohaline) return { saltIntrusionAtLeastKm: p.km[p.km.length - 1]! };
+  if (Math.max(...p.salinity) < isohaline) return { saltIntrusionAtMostKm: p.km[0]! };
+  return {};
 }
 
 type Dated = { date?: string; season?: string };

@@ -125,6 +125,13 @@ export interface IntrusionPoint {
   season?: string;
   saltIntrusionKm?: number;
   saltIntrusionSalinity: number;
+  /**
+   * When the isohaline lies beyond the surveyed reach (salinity still above it at the landward-most
+   * point), the intrusion is at least this far from the mouth [km]: a lower bound, not a value.
+   */
+  saltIntrusionAtLeastKm?: number;
+  /** When salinity is below the isohaline everywhere surveyed, the intrusion is at most this far [km]. */
+  saltIntrusionAtMostKm?: number;
 }
 
 /** Everything concluded from an archive of surveys. */

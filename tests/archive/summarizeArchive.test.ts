@@ -134,3 +134,25 @@ describe("yearOnYear()", () => {
     expect(rows[3]!.differenceFromPrevious!.exceedsUncertainty).toBe(false);
   });
 });
+
+describe("salt intrusion beyond the surveyed reach", () => {
+  it("is carried as a bound (at least the landward-most km), never as a value", () => {
+    const [s] = syntheticArchive(STRONG).slice(0, 1);
+    const beyond = {
+      ...s!,
+      survey: { ...s!.survey, name: "central bay only" },
+      salinityProfile: { km: [5, 20, 38], salinity: [30, 27, 24] } as never,
+    };
+    delete (beyond.survey as { saltIntrusionKm?: number }).saltIntrusionKm;
+    const fresh = {
+      ...beyond,
+      survey: { ...beyond.survey, name: "all fresh" },
+      salinityProfile: { km: [60, 80], salinity: [1.5, 0.1] } as never,
+    };
+    const a = summarizeArchive([s!, beyond, fresh]);
+    const p = a.intrusion.find((x) => x.survey === "central bay only")!;
+    expect(p.saltIntrusionKm).toBeUndefined();
+    expect(p.saltIntrusionAtLeastKm).toBe(38);
+    expect(a.intrusion.find((x) => x.survey === "all fresh")!.saltIntrusionAtMostKm).toBe(60);
+  });
+});
