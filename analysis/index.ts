@@ -153,7 +153,7 @@ export type { PredominanceBoundary } from "./seawater/predominance.ts";
 export { feSpeciationVsPh } from "./seawater/feSeries.ts";
 export { feSolubilityLiuMillero2002NmolKg, ionicStrengthLiuMillero2002 } from "./seawater/feSolubilityLiuMillero.ts";
 export type { FeSpeciationSeries } from "./seawater/feSeries.ts";
-export { CD_CHLORIDE_SETS } from "./seawater/cdChlorideSets.ts";
+export { CD_CHLORIDE_SETS, CD_ACTIVITY_MODEL_NOTE, DEFAULT_CD_CHLORIDE_SET_ID } from "./seawater/cdChlorideSets.ts";
 export type { CdChlorideSet } from "./seawater/cdChlorideSets.ts";
 export { cdChlorideSpeciation } from "./seawater/cdChloride.ts";
 export type { CdSpeciation, CdSpeciationOptions, CdExtraLigand } from "./seawater/cdChloride.ts";
@@ -262,6 +262,9 @@ export { formatSignificant, formatFixed, MINUS } from "./compare/formatNumber.ts
 // --- report ---
 export { buildBriefing, BRIEFING_CAUTION } from "./report/buildBriefing.ts";
 export { renderBriefingHtml } from "./report/renderHtml.ts";
+export { BIBLIOGRAPHY, bibEntry, formatReference, referenceList } from "./report/referencesBibliography.ts";
+export type { BibEntry } from "./report/referencesBibliography.ts";
+export { authorYear, cite, briefingReferences, methodsParagraphs } from "./report/references.ts";
 export type {
   BriefingDocument,
   BriefingInput,

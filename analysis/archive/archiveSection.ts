@@ -133,15 +133,3 @@ export function archiveSection(a: ArchiveSummary, maxConstituents = 4): Briefing
     methods: a.methods,
   };
 }
-
-/** Full references of the archive methods, added to the briefing's reference list. */
-export const ARCHIVE_REFERENCES: readonly string[] = [
-  "Draper, N.R. & Smith, H. (1998) Applied Regression Analysis, 3rd ed. Wiley, New York.",
-  "Dunn, O.J. (1961) Multiple comparisons among means. J. Am. Stat. Assoc. 56, 52–64.",
-  "Hyndman, R.J. & Fan, Y. (1996) Sample quantiles in statistical packages. Am. Stat. 50, 361–365.",
-  "Kendall, M.G. (1938) A new measure of rank correlation. Biometrika 30, 81–93.",
-  "Kendall, M.G. (1970) Rank Correlation Methods, 4th ed. Griffin, London.",
-  "Kruskal, W.H. & Wallis, W.A. (1952) Use of ranks in one-criterion variance analysis. J. Am. Stat. Assoc. 47, 583–621.",
-  "Spearman, C. (1904) The proof and measurement of association between two things. Am. J. Psychol. 15, 72–101.",
-  "Taylor, J.R. (1997) An Introduction to Error Analysis, 2nd ed. University Science Books, Sausalito.",
-];

@@ -72,7 +72,7 @@ function scalings(rows: IntrusionRow[], warnings: MixingWarning[]): DischargeSca
  * @param options reference survey index (default 0)
  * @returns the comparison, with warnings for missing discharges, constituents or unit mismatches
  * @throws RangeError with fewer than two surveys or a bad reference index
- * @see mixing-methods.md §5.1, §5.3 (scalings); Boyle et al. (1974) (C*₀, fluxes).
+ * @see bibliography keys hansenRattray1965, chatwin1976, monismith2002 (scalings); boyle1974 (C*₀, fluxes).
  */
 export function compareSurveys(analyses: readonly ComparableSurvey[], options: CompareOptions = {}): SurveyComparison {
   if (!Array.isArray(analyses) || analyses.length < 2)

@@ -60,7 +60,7 @@ function sentence(
  * @param later later survey side, same constituent
  * @returns the shift with plain statements; a warning instead of numbers when the units differ
  * @throws RangeError when the constituent names differ
- * @see Boyle et al. (1974) GCA 38, 1719–1728 (C*₀ and fluxes); mixing-methods.md §1.2.
+ * @see bibliography key boyle1974 (C*₀ and fluxes).
  */
 export function constituentShift(ref: ShiftSide, later: ShiftSide): ConstituentShift {
   const a = ref.analysis;

@@ -42,7 +42,7 @@ function rangeText(p: SalinityProfile): string {
  * @returns one position per value (all crossings, km from the mouth) and warnings for values
  *   outside the surveyed range or crossed more than once
  * @throws RangeError for a negative or non-finite value
- * @see mixing-methods.md §5.1 (isohaline distance x* from the mouth); interpolation is common practice.
+ * @see common practice (isohaline distance x* from the mouth, interpolated between stations).
  */
 export function isohalinePositions(
   profile: SalinityProfile,
@@ -87,7 +87,7 @@ export interface SaltIntrusion {
  * @returns length [km] with all crossings; km undefined (with a warning saying why) when the
  *   isohaline lies outside the surveyed reach
  * @throws RangeError for a negative or non-finite isohaline
- * @see mixing-methods.md §5.1: x* = (K/U)·ln(S₀/S*), the isohaline's distance from the mouth.
+ * @see derived: steady 1-D advection–dispersion with constant K gives x* = (K/U)·ln(S₀/S*), the isohaline's distance from the mouth.
  */
 export function saltIntrusionLengthKm(profile: SalinityProfile, isohaline = 2): SaltIntrusion {
   checkValue("saltIntrusionLengthKm", isohaline);

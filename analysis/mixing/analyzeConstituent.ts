@@ -30,7 +30,7 @@ export const MIN_SALINITY_SPAN = 1;
  * @param options see {@link AnalyzeOptions}
  * @returns the analysis
  * @throws TypeError/RangeError for caller mistakes in the options or samples argument
- * @see Boyle et al. (1974) GCA 38, 1719–1728; Liss (1976); Loder & Reichard (1981); mixing-methods.md §1–§7.
+ * @see bibliography keys boyle1974, liss1976, loderReichard1981.
  */
 export function analyzeConstituent(samples: readonly MixingSample[], options: AnalyzeOptions): ConstituentAnalysis {
   validateOptions(options);

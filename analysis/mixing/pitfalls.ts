@@ -21,7 +21,7 @@ export const LOW_CONFIDENCE_CODES = new Set([
  * End-member variability against flushing time (Loder & Reichard 1981): a conservative
  * constituent gives a curved C–S plot when the river concentration changes within about one
  * flushing time; a falling river value mimics addition, a rising one removal
- * (mixing-methods.md §1.5, case F). Checks (a) several river samples that disagree and
+ * (@see bibliography keys loderReichard1981, cifuentes1990). Checks (a) several river samples that disagree and
  * (b) a river history within the flushing time.
  *
  * @param river river end-member (with its samples' sd)

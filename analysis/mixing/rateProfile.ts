@@ -30,7 +30,7 @@ function gradientFromKm(toKm: (s: number) => number[], s: number, sMin: number, 
  * @param opts analysis options (Q, A or K, gradient source, unit)
  * @param effective tangent-method C*₀ (seaward end of Eq. 5)
  * @returns the profile, or undefined (with a warning) when inputs are missing
- * @see mixing-methods.md §1.3, Eqs. 2′, 4 and 5 (DERIVED+VERIFIED).
+ * @see bibliography keys officer1979, kaulFroelich1984 (curvature–rate relation; derived and checked numerically in tests/mixing).
  */
 export function rateProfile(
   grid: Float64Array,

@@ -91,7 +91,7 @@ export interface SegmentScan {
  * @param minStations fewest stations of a segment (≥ 4)
  * @param crit critical values from {@link segmentCriticals}
  * @returns the scan result
- * @see mixing-methods.md §1.6 items 3 and 5 (nested F-test; segmented regression).
+ * @see common practice (nested F-test; segmented regression).
  */
 export function scanSegments(
   x: ArrayLike<number>,

@@ -32,7 +32,7 @@ export const MIN_SEGMENT_STATIONS = 4;
  * @param used prepared samples sorted by salinity
  * @param scatterFactor max(1, √χ²_ν) of the smoother residuals
  * @returns the tangent line (undefined only when even the local quadratic cannot be fitted)
- * @see Boyle et al. (1974) GCA 38, 1719–1728; mixing-methods.md §1.2 (recipe) and §1.6 item 5.
+ * @see bibliography key boyle1974.
  */
 export function seawardTangent(used: readonly PreparedSample[], scatterFactor: number): TangentLine | undefined {
   const n = used.length;

@@ -81,7 +81,7 @@ function profileOf(
  * @param survey the survey (from analysis/io)
  * @param options see {@link AnalyzeSurveyOptions}
  * @returns the survey analysis; never throws for thin data (warnings say what could not be done)
- * @see Boyle et al. (1974) GCA 38, 1719–1728 for the mixing analysis; mixing-methods.md §5.1 for S(x).
+ * @see bibliography key boyle1974 for the mixing analysis; S(x) as a landward-falling profile is common practice.
  */
 export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}): SurveyAnalysis {
   const progress = options.onProgress ?? (() => undefined);

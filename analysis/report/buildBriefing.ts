@@ -10,10 +10,12 @@ import type { ConstituentAnalysis } from "../mixing/result.ts";
 import { readBasemap } from "./basemap.ts";
 import type { BriefingDocument, BriefingInput, BriefingTable } from "./briefingTypes.ts";
 import { comparisonSection } from "./comparisonSection.ts";
-import { BRIEFING_REFERENCES, methodsParagraphs } from "./references.ts";
+import { briefingReferences, methodsParagraphs } from "./references.ts";
 import { datePart } from "./resultsTable.ts";
 import { surveySection } from "./surveySection.ts";
-import { ARCHIVE_REFERENCES, archiveName, archiveSection } from "../archive/archiveSection.ts";
+import { archiveName, archiveSection } from "../archive/archiveSection.ts";
+import { ARCHIVE_KEYS } from "../archive/archiveReferences.ts";
+import { referenceList } from "./referencesBibliography.ts";
 import { summarizeArchive } from "../archive/summarizeArchive.ts";
 
 /** Up to this many surveys get their own sections and the two-survey comparison; more are an archive. */
@@ -94,7 +96,7 @@ function provenance(input: BriefingInput): BriefingTable[] {
  * @param input analysed surveys, map data, files, notices (see {@link BriefingInput})
  * @returns the document model, to be rendered by renderBriefingHtml
  * @throws RangeError without any analysed survey
- * @see Boyle et al. (1974); Liss (1976); Loder & Reichard (1981); Officer (1979); mixing-methods.md §1, §5.
+ * @see bibliography keys boyle1974, liss1976, loderReichard1981, officer1979 (methods text: references.ts).
  */
 export function buildBriefing(input: BriefingInput): BriefingDocument {
   if (!input || !Array.isArray(input.analyses) || input.analyses.length === 0)
@@ -160,7 +162,7 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
     ...(arch ? { archive: arch } : {}),
     provenance: provenance(input),
     methods: methodsParagraphs(fitMethod, boot ? { draws: boot.draws, seed: boot.seed } : undefined, !!cmp),
-    references: [...BRIEFING_REFERENCES, ...(arch ? ARCHIVE_REFERENCES : [])],
+    references: [...new Set([...briefingReferences(!!cmp), ...(arch ? referenceList(ARCHIVE_KEYS) : [])])],
     cautions,
   };
 }

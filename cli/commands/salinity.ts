@@ -27,8 +27,10 @@ Options:
   --pres <header>    use this column as pressure
   --pressure <dbar>  pressure for every row when the file has no pressure column (default 0 dbar, with a note)
 
-Method: PSS-78 (UNESCO 1983) with ITS-90 input (t68 = 1.00024·t90 inside) and, below S = 2, the
-Hill et al. (1986) extension made continuous at S = 2 as in TEOS-10 GSW.
+Method: the Practical Salinity Scale 1978, PSS-78 (UNESCO 1981, Tech. Pap. Mar. Sci. 36; algorithms
+UNESCO 1983, Tech. Pap. Mar. Sci. 44), with ITS-90 input (t68 = 1.00024·t90 inside) and, below S = 2,
+the Hill et al. (1986) extension made continuous at S = 2 as specified by TEOS-10 (IOC, SCOR & IAPSO
+2010, The international thermodynamic equation of seawater – 2010, IOC Manuals and Guides 56).
 
 Bad cells (not a number, missing, negative conductivity or pressure) are reported on stderr with file,
 row, column and value; that row gets an empty salinity and the other rows are still written. Values

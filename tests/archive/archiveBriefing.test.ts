@@ -29,7 +29,9 @@ describe("archive briefing (invented synthetic archive)", () => {
     expect(a.figures.map((f) => f.id)).toEqual(["arch-pc-0", "arch-strip", "arch-q"]);
     expect(a.tables[0]!.rows.map((r) => r[0])).toEqual(["winter", "spring", "summer", "autumn"]);
     expect(a.findings.some((f) => f.includes("larger than the uncertainty"))).toBe(true);
-    expect(doc.references.some((r) => r.startsWith("Kruskal, W.H. & Wallis"))).toBe(true);
+    expect(doc.references.some((r) => r.startsWith("Hyndman, R.J., Fan, Y. (1996)"))).toBe(true);
+    // Entries recalled, not confirmed, are never printed in the reference list.
+    expect(doc.references.some((r) => r.startsWith("Kruskal"))).toBe(false);
     const htmlText = renderBriefingHtml(doc);
     expect(htmlText).toContain('<section class="archive">');
     expect(htmlText).not.toMatch(/NaN|undefined/);
