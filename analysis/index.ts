@@ -355,4 +355,14 @@ export {
   type DischargeTable,
   type DischargeLookup,
 } from "./archive/dischargeTable.ts";
+export { archiveTableRows, ARCHIVE_TABLE_COLUMNS, type ArchiveCell } from "./archive/archiveTable.ts";
+export { archiveSection, archiveName, type BriefingArchive } from "./archive/archiveSection.ts";
+export {
+  percentChangeSeriesSvg,
+  channelTimeStripSvg,
+  dischargeScatterSvg,
+  decimalYear,
+  seasonColor,
+} from "./archive/archiveFigures.ts";
+export { ARCHIVE_BIBLIOGRAPHY, ARCHIVE_KEYS } from "./archive/archiveReferences.ts";
 // --- end archive ---
