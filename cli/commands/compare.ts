@@ -13,6 +13,8 @@ import {
 } from "../../analysis/index.ts";
 import { describeImport, loadSurveys, parseCount, parseDischarge } from "../loadInputs.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
+import { ARCHIVE_HELP, ARCHIVE_OPTIONS, compareArchive } from "../archive/compareArchive.ts";
+import { CancelledError } from "../archive/workerPool.ts";
 
 /** A map file read for the comparison or briefing, with its provenance. */
 export interface MapFile {
@@ -119,6 +121,41 @@ export function analyzeFiles(
   return { analyses, files, draws, seed };
 }
 
+let cancelled = false;
+
+/** With three or more surveys: the archive output text; undefined for two surveys (or when cancelled). */
+async function archivePath(
+  paths: string[],
+  values: Parameters<typeof analyzeFiles>[1] & Parameters<typeof compareArchive>[3],
+  network: ChannelNetwork,
+  format: string,
+  io: CommandIo,
+): Promise<string | undefined> {
+  const discharge = parseDischarge(values.discharge);
+  const loaded = loadSurveys(paths, {
+    ...(values.stations ? { stationsPath: values.stations } : {}),
+    ...(values.mapping ? { mappingPath: values.mapping } : {}),
+    ...(discharge !== undefined ? { dischargeM3s: discharge } : {}),
+  });
+  if (loaded.surveys.length < 3) return undefined;
+  io.err(describeImport(loaded));
+  try {
+    return await compareArchive(
+      loaded.surveys,
+      network,
+      { bootstrapDraws: parseCount("draws", values.draws, 2000), seed: parseCount("seed", values.seed, 1) },
+      values,
+      format === "csv" ? "csv" : "json",
+      io,
+    );
+  } catch (error) {
+    if (!(error instanceof CancelledError)) throw error;
+    io.err(`cancelled after ${error.done} surveys; they are cached, run the same command again to continue`);
+    cancelled = true;
+    return undefined;
+  }
+}
+
 const help = `brackline compare <survey files...> --centerline <line.geojson> [options]
 
 Compares two or more surveys of the same estuary (the first survey read is the reference):
@@ -137,6 +174,7 @@ Options:
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
   --format json|csv            output format (default json)
   --out <file>                 write to a file instead of standard output
+${ARCHIVE_HELP}
 ${SCREENING_CAUTION}`;
 
 export const compareCommand: Command = {
@@ -147,13 +185,25 @@ export const compareCommand: Command = {
     const { values, positionals } = parseArgs({
       args,
       allowPositionals: true,
-      options: { ...SURVEY_OPTIONS, format: { type: "string", default: "json" }, out: { type: "string" } },
+      options: {
+        ...SURVEY_OPTIONS,
+        ...ARCHIVE_OPTIONS,
+        format: { type: "string", default: "json" },
+        out: { type: "string" },
+      },
     });
     if (values.format !== "json" && values.format !== "csv")
       throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
     if (positionals.length === 0) throw new UsageError("give the survey files to compare");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     const network = channelFromFile(readGeoJsonFile(values.centerline, "centerline"), values.centerline, values.mouth);
+    const archive = await archivePath(positionals, values, network, values.format, io);
+    if (archive !== undefined) {
+      if (values.out) writeFileSync(values.out, archive);
+      else io.out(archive);
+      return 0;
+    }
+    if (archive === undefined && cancelled) return 130;
     const { analyses } = analyzeFiles(positionals, values, network, io);
     if (analyses.length < 2)
       throw new InputError(
