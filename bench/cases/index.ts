@@ -5,6 +5,7 @@ import { underwayImportBench } from "./underwayImport.ts";
 import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
+import { archiveBench } from "./archive.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
 export const benchCases: BenchCase[] = [
@@ -14,4 +15,5 @@ export const benchCases: BenchCase[] = [
   underwayBinningBench,
   dashboardBench,
   bundleSizeBench,
+  archiveBench,
 ];

@@ -5,7 +5,7 @@
 import { createHash } from "node:crypto";
 import { availableParallelism } from "node:os";
 import type { CommandIo } from "../command.ts";
-import type { SurveyAnalysis } from "../../analysis/index.ts";
+import type { Survey, SurveyAnalysis } from "../../analysis/index.ts";
 import { SurveyCache, surveyCacheKey } from "./surveyCache.ts";
 import { surveyTaskHandler, type SurveySetup } from "./surveyTask.ts";
 import { CancelledError, runPool } from "./workerPool.ts";
@@ -27,6 +27,8 @@ export interface ArchiveRunStats {
   cached: number;
   threads: number;
   seconds: number;
+  /** Sum over surveys of the time spent analysing each (inside its thread) [s]. */
+  taskSeconds: number;
 }
 
 const workerUrl = (): URL =>
@@ -38,25 +40,26 @@ const workerUrl = (): URL =>
  * @throws CancelledError when cancelled (finished surveys are cached)
  */
 export async function analyzeArchive(
-  setup: SurveySetup,
+  input: SurveySetup & { surveys: readonly Survey[] },
   o: ArchiveRunOptions,
 ): Promise<{ analyses: SurveyAnalysis[]; stats: ArchiveRunStats }> {
   const t0 = performance.now();
+  const { surveys, ...setup } = input;
   const cache = new SurveyCache(o.cacheDir);
   const channel = setup.network
     ? createHash("sha256")
         .update(JSON.stringify({ ...setup.network, segmentIndexData: undefined }))
         .digest("hex")
     : "none";
-  const keys = setup.surveys.map((survey) => surveyCacheKey({ survey, channel, options: setup.options }));
-  const out = new Array<SurveyAnalysis>(setup.surveys.length);
+  const keys = surveys.map((survey) => surveyCacheKey({ survey, channel, options: setup.options }));
+  const out = new Array<SurveyAnalysis>(surveys.length);
   const todo: number[] = [];
   keys.forEach((k, i) => {
     const hit = cache.get<SurveyAnalysis>(k);
     if (hit) out[i] = hit;
     else todo.push(i);
   });
-  const n = setup.surveys.length;
+  const n = surveys.length;
   const threads = Math.min(o.threads ?? availableParallelism(), todo.length);
   o.io.err(
     `archive: ${n} surveys, ${n - todo.length} from the cache, ${todo.length} to analyse on ${threads <= 0 ? "this thread" : `${threads} worker thread${threads === 1 ? "" : "s"}`}`,
@@ -66,21 +69,23 @@ export async function analyzeArchive(
   if (!o.signal) process.once("SIGINT", onSigint);
   const signal = o.signal ?? controller.signal;
   let done = 0;
+  let taskSeconds = 0;
   try {
     await runPool({
       workerUrl: workerUrl(),
       threads,
       setup,
-      tasks: todo.map((index) => ({ index })),
-      cost: (t) => setup.surveys[t.index]!.stations.length * Math.max(1, setup.surveys[t.index]!.constituents.length),
+      tasks: todo.map((index) => ({ survey: surveys[index]! })),
+      cost: (t) => t.survey.stations.length * Math.max(1, t.survey.constituents.length),
       inline: surveyTaskHandler,
       signal,
-      onResult: (ti, result) => {
+      onResult: (ti, result, taskMs) => {
+        taskSeconds += taskMs / 1000;
         const i = todo[ti]!;
         out[i] = result;
         cache.set(keys[i]!, result);
         done++;
-        o.io.err(`[${n - todo.length + done}/${n}] ${result.survey.name} analysed`);
+        o.io.err(`[${n - todo.length + done}/${n}] ${result.survey.name} analysed (${(taskMs / 1000).toFixed(2)} s)`);
       },
     });
   } catch (error) {
@@ -91,6 +96,12 @@ export async function analyzeArchive(
   }
   return {
     analyses: out,
-    stats: { analysed: todo.length, cached: n - todo.length, threads, seconds: (performance.now() - t0) / 1000 },
+    stats: {
+      analysed: todo.length,
+      cached: n - todo.length,
+      threads,
+      seconds: (performance.now() - t0) / 1000,
+      taskSeconds,
+    },
   };
 }

@@ -5,16 +5,15 @@ import type { AnalyzeSurveyOptions, ChannelNetwork, Survey, SurveyAnalysis } fro
 import { analyzeSurvey } from "../../analysis/index.ts";
 import type { TaskHandler } from "./workerPool.ts";
 
-/** What every worker receives once: the surveys, the channel and the settings (plain data). */
+/** What every worker receives once: the channel and the settings (plain data). */
 export interface SurveySetup {
-  surveys: Survey[];
   network?: ChannelNetwork;
   options: Omit<AnalyzeSurveyOptions, "onProgress" | "network">;
 }
 
-/** One task: the index of the survey to analyse. */
+/** One task: the survey to analyse (sent with the task, so each survey is copied to one thread only). */
 export interface SurveyTask {
-  index: number;
+  survey: Survey;
 }
 
 let setup: SurveySetup | undefined;
@@ -26,8 +25,6 @@ export const surveyTaskHandler: TaskHandler<SurveySetup, SurveyTask, SurveyAnaly
   },
   run(task) {
     if (!setup) throw new Error("surveyTaskHandler: run before setup");
-    const survey = setup.surveys[task.index];
-    if (!survey) throw new RangeError(`surveyTaskHandler: no survey at index ${task.index}`);
-    return analyzeSurvey(survey, { ...setup.options, ...(setup.network ? { network: setup.network } : {}) });
+    return analyzeSurvey(task.survey, { ...setup.options, ...(setup.network ? { network: setup.network } : {}) });
   },
 };

@@ -5,7 +5,9 @@ import { surveyTaskHandler, type SurveySetup, type SurveyTask } from "./surveyTa
 surveyTaskHandler.setup(workerData as SurveySetup);
 parentPort!.on("message", (m: { index: number; task: SurveyTask }) => {
   try {
-    parentPort!.postMessage({ index: m.index, result: surveyTaskHandler.run(m.task) });
+    const t0 = performance.now();
+    const result = surveyTaskHandler.run(m.task);
+    parentPort!.postMessage({ index: m.index, result, taskMs: performance.now() - t0 });
   } catch (error) {
     parentPort!.postMessage({ index: m.index, error: (error as Error).stack ?? String(error) });
   }

@@ -23,8 +23,8 @@ export interface PoolOptions<Setup, Task, Result> {
   cost?: (task: Task) => number;
   /** The handler, for threads = 0. */
   inline?: TaskHandler<Setup, Task, Result>;
-  /** Called after each finished task (index into tasks). */
-  onResult?: (index: number, result: Result) => void;
+  /** Called after each finished task (index into tasks, time spent in the task itself [ms]). */
+  onResult?: (index: number, result: Result, taskMs: number) => void;
   signal?: AbortSignal;
 }
 
@@ -51,9 +51,10 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
     o.inline.setup(o.setup);
     for (const i of order) {
       if (o.signal?.aborted) throw new CancelledError(done);
+      const t0 = performance.now();
       results[i] = o.inline.run(o.tasks[i]!);
       done++;
-      o.onResult?.(i, results[i]!);
+      o.onResult?.(i, results[i]!, performance.now() - t0);
       await new Promise((r) => setImmediate(r)); // lets a SIGINT through between tasks
     }
     return results;
@@ -72,11 +73,11 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
         w.postMessage({ index: i, task: o.tasks[i] });
       };
       for (const w of workers) {
-        w.on("message", (m: { index: number; result?: Result; error?: string }) => {
+        w.on("message", (m: { index: number; result?: Result; error?: string; taskMs?: number }) => {
           if (m.error !== undefined) return reject(new Error(m.error));
           results[m.index] = m.result!;
           done++;
-          o.onResult?.(m.index, m.result!);
+          o.onResult?.(m.index, m.result!, m.taskMs ?? Number.NaN);
           if (done === order.length) resolve();
           else feed(w);
         });

@@ -7,6 +7,7 @@ import type { CenterlineGeoJson } from "../../analysis/geometry/geojsonInput.ts"
 import { readSurveyText } from "../../analysis/io/readSurvey.ts";
 import { analyzeArchive } from "../../cli/archive/analyzeArchive.ts";
 import type { SurveySetup } from "../../cli/archive/surveyTask.ts";
+import type { Survey } from "../../analysis/survey/survey.ts";
 import { CancelledError } from "../../cli/archive/workerPool.ts";
 import { DEMO_DIR } from "../compare/helpers/demoAnalyses.ts";
 
@@ -17,7 +18,7 @@ const surveys = readSurveyText(readFileSync(join(DEMO_DIR, "surveys/both-surveys
 const network = buildChannelNetwork(
   JSON.parse(readFileSync(join(DEMO_DIR, "centerline.geojson"), "utf8")) as CenterlineGeoJson,
 );
-const setup: SurveySetup = { surveys, network, options: { bootstrapDraws: 50, seed: 3 } };
+const setup: SurveySetup & { surveys: Survey[] } = { surveys, network, options: { bootstrapDraws: 50, seed: 3 } };
 const dirs: string[] = [];
 const tmp = () => {
   const d = mkdtempSync(join(tmpdir(), "bl-archive-"));
@@ -57,7 +58,7 @@ describe("analyzeArchive() (worker threads, cache, cancel)", () => {
     );
     expect(oneMore.stats).toMatchObject({ analysed: 1, cached: 2 });
     expect(lines.some((l) => /^archive: 2 surveys, 0 from the cache, 2 to analyse on this thread$/.test(l))).toBe(true);
-    expect(lines.some((l) => /^\[1\/2\] .+ analysed$/.test(l))).toBe(true);
+    expect(lines.some((l) => /^\[1\/2\] .+ analysed \(\d+\.\d\d s\)$/.test(l))).toBe(true);
   });
 
   it("cancel stops the run with CancelledError and keeps what finished in the cache", async () => {
