@@ -170,6 +170,15 @@ export { SPECIATION_CAUTION, stationSpeciation } from "./seawater/stationSpeciat
 export type { StationWater, StationSpeciationOptions, StationSpeciationResult } from "./seawater/stationSpeciation.ts";
 export { linearGrid } from "./seawater/grid.ts";
 export type { PlotSeries, SeriesSet } from "./seawater/plotSeries.ts";
+export {
+  quantityUnit,
+  quantityKindsOf,
+  toWorkingUnit,
+  normaliseUnitText,
+  WORKING_UNIT,
+  type QuantityKind,
+  type QuantityUnit,
+} from "./seawater/quantityUnits.ts";
 // --- end seawater ---
 
 // --- io ---
@@ -256,7 +265,7 @@ export {
 export { dischargeScaling, REFERENCE_SCALINGS } from "./compare/dischargeScaling.ts";
 export { surveyProfile, kmAtSalinity, kmEstimateOfSalinity } from "./compare/salinityKm.ts";
 export { comparisonToCsv, COMPARISON_CSV_COLUMNS } from "./compare/comparisonCsv.ts";
-export { formatSignificant, formatFixed, MINUS } from "./compare/formatNumber.ts";
+export { formatSignificant, formatFixed, MINUS } from "./output/formatNumber.ts";
 // --- end compare ---
 
 // --- report ---
@@ -366,3 +375,66 @@ export {
 } from "./archive/archiveFigures.ts";
 export { ARCHIVE_BIBLIOGRAPHY, ARCHIVE_KEYS } from "./archive/archiveReferences.ts";
 // --- end archive ---
+// --- output ---
+export { toCsv, csvField, csvNumber, neutraliseFormula, type CsvValue } from "./output/csv.ts";
+export {
+  RESULT_COLUMNS,
+  DEVIATION_COLUMNS,
+  resultRows,
+  deviationRows,
+  tableCsv,
+  tableObjects,
+  type ColumnSpec,
+  type ResultRow,
+  type DeviationRow,
+} from "./output/columns.ts";
+export {
+  BEHAVIOUR_STYLE,
+  MARK_STYLE,
+  OKABE_ITO,
+  NEUTRAL_MUTED,
+  NEUTRAL_RULE,
+  type MarkStyle,
+  type MarkSymbol,
+} from "./output/symbols.ts";
+export { mixingPlotModel, type MixingPlotModel, type DataSegment } from "./output/mixingPlot.ts";
+export { stripControl } from "./output/terminalText.ts";
+// --- end output ---
+
+// --- workspace ---
+export { readInputs } from "./workspace/readInputs.ts";
+export {
+  analyzeInputs,
+  type WorkspaceSettings,
+  type WorkspaceResults,
+  type SurveyResult,
+} from "./workspace/analyzeInputs.ts";
+export type { InputFile, InputChoices, InputFileReport, WorkspaceInputs } from "./workspace/types.ts";
+export {
+  readCenterline,
+  type ChannelInput,
+  type MouthDecision,
+  type MouthSource,
+  type ReadCenterlineOptions,
+} from "./workspace/readCenterline.ts";
+export {
+  detectFileKind,
+  decodeText,
+  geoJsonKind,
+  delimitedKind,
+  isNetcdfMagic,
+  FILE_KIND_LABELS,
+  EXPECTED_FILE,
+  type InputFileKind,
+} from "./workspace/fileKind.ts";
+export {
+  channelOverlay,
+  surveyOverlay,
+  TICK_SPACING_KM,
+  MAJOR_TICK_EVERY,
+  type ChannelOverlay,
+  type SurveyOverlay,
+  type ConstituentOverlay,
+  type LonLat,
+} from "./workspace/overlay.ts";
+// --- end workspace ---

@@ -1,10 +1,11 @@
-import { parseArgs } from "node:util";
-import type { Command, CommandIo } from "./command.ts";
+import type { CommandIo } from "./command.ts";
 import { commands } from "./commands/index.ts";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_USAGE, InputError, UsageError } from "./exitCodes.ts";
+import { stripControl } from "../analysis/output/terminalText.ts";
+import { SCREENING_CAUTION } from "../analysis/output/caution.ts";
 
 function usage(): string {
-  const lines = commands.map((c: Command) => `  ${c.name.padEnd(10)} ${c.summary}`);
+  const lines = commands.map((c) => `  ${c.name.padEnd(10)} ${c.summary}`);
   return [
     "brackline: estuarine mixing analysis from survey files",
     "",
@@ -14,26 +15,36 @@ function usage(): string {
     ...lines,
     "",
     "Run `brackline <command> --help` for a command's options.",
-    "Screening analysis, not a compliance assessment: defer to local regulations and licensed practice.",
+    SCREENING_CAUTION,
   ].join("\n");
 }
 
-/** Runs the CLI with the given arguments and returns the process exit code. */
+const isParseArgsError = (error: unknown): boolean =>
+  error instanceof TypeError &&
+  "code" in error &&
+  String((error as { code: unknown }).code).startsWith("ERR_PARSE_ARGS");
+
+/**
+ * Runs the CLI with the given arguments and returns the process exit code. Everything written to the
+ * terminal (results and messages) has control characters and escape sequences removed.
+ */
 export async function main(argv: string[], io?: CommandIo): Promise<number> {
-  const sink: CommandIo = io ?? {
+  const raw: CommandIo = io ?? {
     out: (t) => process.stdout.write(t.endsWith("\n") ? t : `${t}\n`),
     err: (t) => process.stderr.write(t.endsWith("\n") ? t : `${t}\n`),
   };
+  const sink: CommandIo = { out: (t) => raw.out(stripControl(t)), err: (t) => raw.err(stripControl(t)) };
   const [name, ...rest] = argv;
   if (name === undefined || name === "--help" || name === "-h" || name === "help") {
     sink.out(usage());
     return name === undefined ? EXIT_USAGE : 0;
   }
-  const command = commands.find((c) => c.name === name);
-  if (!command) {
+  const entry = commands.find((c) => c.name === name);
+  if (!entry) {
     sink.err(`brackline: unknown command "${name}"\n\n${usage()}`);
     return EXIT_USAGE;
   }
+  const command = await entry.load();
   if (rest.includes("--help") || rest.includes("-h")) {
     sink.out(command.help);
     return 0;
@@ -45,12 +56,7 @@ export async function main(argv: string[], io?: CommandIo): Promise<number> {
       sink.err(`brackline ${name}: ${error.message}`);
       return EXIT_BAD_INPUT;
     }
-    if (
-      error instanceof UsageError ||
-      (error instanceof TypeError &&
-        "code" in error &&
-        String((error as { code: unknown }).code).startsWith("ERR_PARSE_ARGS"))
-    ) {
+    if (error instanceof UsageError || isParseArgsError(error)) {
       sink.err(`brackline ${name}: ${(error as Error).message}\n\n${command.help}`);
       return EXIT_USAGE;
     }
@@ -60,5 +66,3 @@ export async function main(argv: string[], io?: CommandIo): Promise<number> {
     return EXIT_INTERNAL;
   }
 }
-
-export { parseArgs };

@@ -3,7 +3,7 @@
  * multiples, coloured by season), the channel-distance × time strip of reaction zones and salt
  * intrusion, and a quantity against discharge with its fitted line and band.
  */
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import { html, joinHtml, type SafeHtml } from "../report/html.ts";
 import { axesSvg, c1, extentOf, legendSvg, linePath, makeFrame, PALETTE } from "../report/svgFrame.ts";
 import type { ConstituentSeries, DischargeRelation, IntrusionPoint } from "./types.ts";

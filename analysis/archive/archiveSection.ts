@@ -3,7 +3,7 @@
  * season and relations tables, and the plain findings that exceed their uncertainty. Surveys are
  * named by their date range and count, never listed.
  */
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import type { BriefingFigure, BriefingTable } from "../report/briefingTypes.ts";
 import { constituentWords } from "../report/wording.ts";
 import { pWords } from "./dischargeRelation.ts";

@@ -3,7 +3,7 @@
  * plus Spearman and Kendall rank correlations, and a plain statement when the slope's interval
  * excludes zero.
  */
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import { fitLine, lineBandAt } from "./linearFit.ts";
 import { kendallTauB, spearmanRank } from "./rankCorrelation.ts";
 import type { DischargeRelation } from "./types.ts";

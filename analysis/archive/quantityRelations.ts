@@ -2,7 +2,7 @@
  * Relations of one archive quantity (a constituent's % change, the salt intrusion, …): to river
  * discharge, across seasons, and year on year, each with its uncertainty and plain statements.
  */
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import { dischargeRelation, pWords } from "./dischargeRelation.ts";
 import { kruskalWallis, spreadOf } from "./groupStats.ts";
 import type { Season } from "./seasons.ts";

@@ -3,7 +3,7 @@ import type { ConstituentShift, EstimateDifference } from "./types.ts";
 import { differenceOfEstimates, differenceWithoutInterval } from "./differenceOfEstimates.ts";
 import type { SalinityProfile } from "../geometry/salinityTypes.ts";
 import { kmEstimateOfSalinity } from "./salinityKm.ts";
-import { formatSignificant } from "./formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 
 /** One side of a shift: the survey name, its station salinity profile and the constituent's analysis. */
 export interface ShiftSide {

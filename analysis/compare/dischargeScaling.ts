@@ -1,6 +1,6 @@
 import jStat from "jstat";
 import type { DischargeScaling, ReferenceScaling } from "./types.ts";
-import { formatFixed } from "./formatNumber.ts";
+import { formatFixed } from "../output/formatNumber.ts";
 
 /** Published discharge scalings of the salt-intrusion length L ∝ Q^n (@see bibliography keys hansenRattray1965, chatwin1976, monismith2002). */
 export const REFERENCE_SCALINGS: readonly ReferenceScaling[] = [

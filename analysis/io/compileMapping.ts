@@ -1,3 +1,4 @@
+import { quantityUnit } from "../seawater/quantityUnits.ts";
 import type { Constituent, ImportIssue } from "../survey/survey.ts";
 import type { ColumnMapping, ColumnRole } from "./columnMapping.ts";
 import { makeIssue } from "./importSummary.ts";
@@ -35,8 +36,6 @@ const EXPECTED_UNIT: Partial<Record<SingleRole, string>> = {
   discharge: "m³/s",
   temperature: "°C",
 };
-
-const COND_FACTOR: Record<string, number> = { "mS/cm": 1, "µS/cm": 0.001, "S/m": 10 };
 
 /**
  * Resolves a ColumnMapping against a header row: finds each mapped column, checks units and the
@@ -133,7 +132,7 @@ export function compileMapping(
     compiled.single[role] = i;
     if (role === "conductivity") {
       const u = col.unit === undefined ? undefined : parseUnit(col.unit);
-      const f = u === undefined ? undefined : COND_FACTOR[u];
+      const f = u === undefined ? undefined : quantityUnit("conductivity", u)?.factor;
       if (f === undefined)
         issues.push(makeIssue(file, 0, col.header, col.unit ?? "", "a conductivity unit (mS/cm, µS/cm or S/m)"));
       else compiled.conductivityToMScm = f;

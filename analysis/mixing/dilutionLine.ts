@@ -45,7 +45,9 @@ export function deviations(line: DilutionLine, used: readonly PreparedSample[], 
       observed: s.conc,
       expected,
       deviation,
-      deviationPercent: expected > 0 ? (100 * deviation) / expected : 0,
+      // 0 when the ratio is undefined (expected ≤ 0) or overflows: never NaN or ±Infinity.
+      deviationPercent:
+        expected > 0 && Number.isFinite((100 * deviation) / expected) ? (100 * deviation) / expected : 0,
       significant: Math.abs(deviation) > k * s.sigma,
       censored: s.censored,
     };

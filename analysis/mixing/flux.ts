@@ -56,10 +56,11 @@ export function fluxSummary(
     }
   }
   const fac = toMolPerM3(unit, rho)!;
+  // Interval widened to contain the point estimate (never an estimate outside its own interval).
   const est = (v: number, lo: number, hi: number): Estimate => ({
     value: q * fac * v,
-    lower: q * fac * lo,
-    upper: q * fac * hi,
+    lower: q * fac * Math.min(lo, v),
+    upper: q * fac * Math.max(hi, v),
     unit: "mol/s",
   });
   const d = cStar.value - c0.value;

@@ -1,3 +1,4 @@
+import { parseUnit } from "../seawater/units.ts";
 import type { ChannelNetwork } from "../geometry/types.ts";
 import { fitSalinityProfile } from "../geometry/salinityProfile.ts";
 import { crossingsKm, isohalinePositions, saltIntrusionLengthKm } from "../geometry/isohalines.ts";
@@ -127,7 +128,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     }
     progress((i + 0.5) / Math.max(1, wanted.length), `mixing analysis of ${name}`);
     const { samples, leftOut } = constituentSamples(survey.stations, name);
-    const perKg = /\/\s*kg/i.test(info.unit);
+    const perKg = parseUnit(info.unit)?.basis === "perKilogram";
     const settings = options.settings?.[name] ?? {};
     const result = analyzeConstituent(samples, {
       bootstrapDraws: options.bootstrapDraws ?? 2000,

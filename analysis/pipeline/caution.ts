@@ -1,5 +1,2 @@
-/** The caution shown beside every result (dashboard, CLI, briefing). */
-export const SCREENING_CAUTION =
-  "Screening analysis, not a compliance or health assessment. Mixing diagrams assume steady state, two end-members and " +
-  "equal dispersion of salt and constituent, which one survey cannot prove. Defer to local regulations, accredited " +
-  "laboratories and licensed practice.";
+/** The caution shown beside every result; defined once in analysis/output/caution.ts. */
+export { SCREENING_CAUTION } from "../output/caution.ts";

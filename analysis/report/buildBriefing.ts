@@ -2,9 +2,9 @@
  * Builds the stakeholder briefing document model from analysed surveys.
  */
 import { compareSurveys } from "../compare/compareSurveys.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import type { ComparableSurvey } from "../compare/types.ts";
-import { SCREENING_CAUTION } from "../pipeline/caution.ts";
+import { SCREENING_CAUTION } from "../output/caution.ts";
 import type { StationPlacement } from "../pipeline/surveyAnalysis.ts";
 import type { ConstituentAnalysis } from "../mixing/result.ts";
 import { readBasemap } from "./basemap.ts";
@@ -21,9 +21,8 @@ import { summarizeArchive } from "../archive/summarizeArchive.ts";
 /** Up to this many surveys get their own sections and the two-survey comparison; more are an archive. */
 export const BRIEFING_LIST_MAX = 4;
 
-/** The caution printed on every briefing. */
-export const BRIEFING_CAUTION =
-  "Screening analysis, not a compliance assessment. Where results could bear on water-quality or health decisions, defer to local regulations and licensed practice.";
+/** The caution printed on every briefing: the one caution text (analysis/output/caution.ts). */
+export const BRIEFING_CAUTION = SCREENING_CAUTION;
 
 function keyConstituents(a: ComparableSurvey, max: number): string[] {
   return a.constituents
@@ -145,7 +144,6 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
   const boot = input.bootstrap ?? analyses.flatMap((a) => a.constituents).find((c) => c.bootstrap)?.bootstrap;
   const cautions = [
     BRIEFING_CAUTION,
-    analyses[0]!.caution ?? SCREENING_CAUTION,
     "Each survey is a snapshot of one day; the intervals describe sampling and analytical scatter, not changes between days, tides or seasons.",
   ];
   if (input.dataNotice) cautions.unshift(input.dataNotice);

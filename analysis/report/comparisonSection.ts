@@ -3,7 +3,7 @@
  * constituent shifts with their intervals, and plain statements of what exceeds the uncertainty.
  */
 import type { ComparableSurvey, EstimateDifference, SurveyComparison } from "../compare/types.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import type { BriefingComparison, BriefingFigure } from "./briefingTypes.ts";
 import { classWords, constituentWords } from "./wording.ts";
 import { zoneStripSvg } from "./zoneStripSvg.ts";

@@ -2,7 +2,7 @@
  * Estimates with their 95 % intervals as text, with units.
  */
 import type { Estimate } from "../mixing/result.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 
 /** Unit text placed after a number: "%" and "salinity" are special-cased. */
 export function unitSuffix(unit: string): string {

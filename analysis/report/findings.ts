@@ -4,7 +4,7 @@
  */
 import type { ConstituentAnalysis, Estimate } from "../mixing/result.ts";
 import { LOW_CONFIDENCE_CODES } from "../mixing/pitfalls.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import {
   estimateInline,
   estimateText,

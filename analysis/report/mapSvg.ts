@@ -7,7 +7,7 @@ import { kmTicks } from "../geometry/kmTicks.ts";
 import { pointAtKm } from "../geometry/alongChannel.ts";
 import type { ChannelNetwork } from "../geometry/types.ts";
 import type { StationPlacement } from "../pipeline/surveyAnalysis.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import { BASEMAP_FILL, type BasemapShape } from "./basemap.ts";
 import { html, joinHtml, type SafeHtml } from "./html.ts";
 import { fitProjection, type MapProjection } from "./mapProjection.ts";

@@ -5,7 +5,7 @@
 import { scaleLinear } from "d3-scale";
 import type { ConstituentAnalysis } from "../mixing/result.ts";
 import type { StationPlacement } from "../pipeline/surveyAnalysis.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import { html, joinHtml, type SafeHtml } from "./html.ts";
 import { axesSvg, c1, extentOf, legendSvg, makeFrame, PALETTE } from "./svgFrame.ts";
 

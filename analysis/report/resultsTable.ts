@@ -3,7 +3,7 @@
  */
 import type { ConstituentAnalysis } from "../mixing/result.ts";
 import type { ComparableSurvey } from "../compare/types.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import type { BriefingTable } from "./briefingTypes.ts";
 import { estimateText } from "./estimateText.ts";
 import { classWords } from "./wording.ts";

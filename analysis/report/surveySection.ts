@@ -5,7 +5,7 @@
 import type { ChannelNetwork } from "../geometry/types.ts";
 import type { ConstituentAnalysis } from "../mixing/result.ts";
 import type { ComparableSurvey } from "../compare/types.ts";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import type { BasemapShape } from "./basemap.ts";
 import type { BriefingFigure, BriefingSurvey } from "./briefingTypes.ts";
 import { datePart, resultsTable } from "./resultsTable.ts";

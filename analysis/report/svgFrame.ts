@@ -3,7 +3,7 @@
  * axes with labels and units. All coordinates are rounded to 0.1 for compact, deterministic output.
  */
 import { scaleLinear, type ScaleLinear } from "d3-scale";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import { html, joinHtml, type SafeHtml } from "./html.ts";
 
 /** Colours of the briefing (own choice; colour-blind-distinguishable pairs). */

@@ -4,7 +4,7 @@
  * vertical mark for each survey's salt intrusion.
  */
 import { scaleLinear } from "d3-scale";
-import { formatSignificant } from "../compare/formatNumber.ts";
+import { formatSignificant } from "../output/formatNumber.ts";
 import { html, joinHtml, type SafeHtml } from "./html.ts";
 import { c1, PALETTE } from "./svgFrame.ts";
 

@@ -6,6 +6,7 @@ import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
 import { archiveBench } from "./archive.ts";
+import { cliStartBench } from "./cliStart.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
 export const benchCases: BenchCase[] = [
@@ -16,4 +17,5 @@ export const benchCases: BenchCase[] = [
   dashboardBench,
   bundleSizeBench,
   archiveBench,
+  cliStartBench,
 ];

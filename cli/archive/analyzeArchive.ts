@@ -46,12 +46,16 @@ export async function analyzeArchive(
   const t0 = performance.now();
   const { surveys, ...setup } = input;
   const cache = new SurveyCache(o.cacheDir);
-  const channel = setup.network
+  const network = setup.inputs.channel?.network;
+  const channel = network
     ? createHash("sha256")
-        .update(JSON.stringify({ ...setup.network, segmentIndexData: undefined }))
+        .update(JSON.stringify({ ...network, segmentIndexData: undefined }))
+        .update(setup.inputs.channel!.mouth.statement)
         .digest("hex")
     : "none";
-  const keys = surveys.map((survey) => surveyCacheKey({ survey, channel, options: setup.options }));
+  const keys = surveys.map((survey) =>
+    surveyCacheKey({ survey, channel, settings: setup.settings, offChannelM: setup.inputs.choices.offChannelM }),
+  );
   const out = new Array<SurveyAnalysis>(surveys.length);
   const todo: number[] = [];
   keys.forEach((k, i) => {

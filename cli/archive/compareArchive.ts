@@ -3,9 +3,10 @@
  * progress and cancel), join discharges, summarise the archive and write JSON or the long CSV.
  */
 import type { CommandIo } from "../command.ts";
-import type { ChannelNetwork, SurveyAnalysis, Survey, SurveyComparison } from "../../analysis/index.ts";
+import type { SurveyAnalysis, SurveyComparison, WorkspaceInputs } from "../../analysis/index.ts";
 import { compareSurveys, summarizeArchive } from "../../analysis/index.ts";
 import { analyzeArchive } from "./analyzeArchive.ts";
+import { surveySetup } from "./surveyTask.ts";
 import { cacheDirOption, dischargeFromTable, seasonsOption, threadsOption } from "./archiveOptions.ts";
 import { archiveCsv, archiveJson } from "./archiveOutput.ts";
 
@@ -31,24 +32,14 @@ river discharge, month and season, and year on year (README: series[], intrusion
   --no-cache                    analyse every survey again, store nothing
   Ctrl+C cancels; finished surveys stay cached.`;
 
-/** Options to add to the compare command's parseArgs declaration. */
-export const ARCHIVE_OPTIONS = {
-  threads: { type: "string" },
-  "cache-dir": { type: "string" },
-  "no-cache": { type: "boolean" },
-  seasons: { type: "string" },
-  "discharge-table": { type: "string" },
-} as const;
-
 /**
  * Runs the archive comparison and returns the output text.
  *
  * @throws CancelledError on Ctrl+C (finished surveys are cached)
  */
 export async function compareArchive(
-  surveys: Survey[],
-  network: ChannelNetwork | undefined,
-  analysisOptions: { bootstrapDraws: number; seed: number },
+  inputs: WorkspaceInputs,
+  settings: { bootstrapDraws: number; seed: number },
   values: ArchiveCompareValues,
   format: "json" | "csv",
   io: CommandIo,
@@ -57,10 +48,10 @@ export async function compareArchive(
   const threads = threadsOption(values.threads);
   const cacheDir = cacheDirOption(values["cache-dir"], values["no-cache"]);
   const discharge = values["discharge-table"]
-    ? dischargeFromTable(values["discharge-table"], surveys, io.err)
+    ? dischargeFromTable(values["discharge-table"], inputs.surveys, io.err)
     : undefined;
   const { analyses, stats } = await analyzeArchive(
-    { surveys, ...(network ? { network } : {}), options: analysisOptions },
+    { surveys: inputs.surveys, ...surveySetup(inputs, settings) },
     { threads, ...(cacheDir ? { cacheDir } : {}), io },
   );
   io.err(

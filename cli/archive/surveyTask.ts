@@ -1,14 +1,15 @@
 /**
- * The task a worker runs for an archive: analyse one survey of the set-up inputs.
+ * The task a worker runs for an archive: analyse one survey through the workspace API
+ * (analyzeInputs), exactly as a one-survey run would.
  */
-import type { AnalyzeSurveyOptions, ChannelNetwork, Survey, SurveyAnalysis } from "../../analysis/index.ts";
-import { analyzeSurvey } from "../../analysis/index.ts";
+import type { Survey, SurveyAnalysis, WorkspaceInputs, WorkspaceSettings } from "../../analysis/index.ts";
+import { analyzeInputs } from "../../analysis/index.ts";
 import type { TaskHandler } from "./workerPool.ts";
 
-/** What every worker receives once: the channel and the settings (plain data). */
+/** What every worker receives once: the inputs without their surveys, and the settings (plain data). */
 export interface SurveySetup {
-  network?: ChannelNetwork;
-  options: Omit<AnalyzeSurveyOptions, "onProgress" | "network">;
+  inputs: Omit<WorkspaceInputs, "surveys">;
+  settings: Omit<WorkspaceSettings, "onProgress" | "surveys" | "compare">;
 }
 
 /** One task: the survey to analyse (sent with the task, so each survey is copied to one thread only). */
@@ -25,6 +26,13 @@ export const surveyTaskHandler: TaskHandler<SurveySetup, SurveyTask, SurveyAnaly
   },
   run(task) {
     if (!setup) throw new Error("surveyTaskHandler: run before setup");
-    return analyzeSurvey(task.survey, { ...setup.options, ...(setup.network ? { network: setup.network } : {}) });
+    const results = analyzeInputs({ ...setup.inputs, surveys: [task.survey] }, setup.settings);
+    return results.surveys[0]!.analysis;
   },
 };
+
+/** The set-up of a run: inputs without surveys (nor the per-row issues, files and station table, which the analysis does not read). */
+export function surveySetup(inputs: WorkspaceInputs, settings: SurveySetup["settings"]): SurveySetup {
+  const { surveys: _surveys, stationTable: _table, ...rest } = inputs;
+  return { inputs: { ...rest, files: [], issues: [] }, settings };
+}

@@ -1,43 +1,51 @@
-import { parseArgs } from "node:util";
-import { writeFileSync } from "node:fs";
 import type { Command } from "../command.ts";
-import type { LayerChoice, SurveyAnalysis } from "../../analysis/index.ts";
-import { analyzeSurvey, SCREENING_CAUTION } from "../../analysis/index.ts";
-import { describeImport, loadCenterline, loadSurveys, parseCount, parseDischarge } from "../loadInputs.ts";
-import { surveyJson, resultsCsv } from "../formatResults.ts";
+import type { SurveyAnalysis } from "../../analysis/index.ts";
+import { analyzeInputs, resultRows, tableCsv, RESULT_COLUMNS, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { UsageError } from "../exitCodes.ts";
+import { checkOut, writeOut } from "../files.ts";
+import { INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings } from "../options.ts";
+import { loadWorkspace } from "../workspace.ts";
 
 const help = `brackline analyze <survey files...> [options]
 
 Analyses every survey in the files: places stations on the channel (km from the mouth,
 cross-channel offset), locates isohalines, and runs the mixing analysis of every constituent
 (class, effective river end-member C*0, % change, reaction zone, maximum, fluxes, warnings).
+Survey files may be delimited text (CSV, TSV, semicolon), GeoJSON points or CF-netCDF; a GeoJSON
+centerline or a station table among them is recognised by its content.
 
 Options:
   --centerline <file.geojson>  channel centerline (LineString, MultiLineString or FeatureCollection)
-  --mouth start|end|lon,lat    which end of the main stem is the mouth (default: from the file,
-                               else suggested from salinity and stated in the warnings)
+  --mouth start|end|lon,lat    which end of the main stem is the mouth (default: a mouth Point in the
+                               file, else the main line's properties.mouth, else suggested from
+                               station salinity; the choice is stated on stderr and in the warnings)
   --stations <table.csv>       station table joined to the measurements by station id
   --mapping <mapping.json>     a saved column mapping (as exported by the dashboard)
   --layer surface|bottom|average|<min>-<max>  depth layer per station (default: every row)
   --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name
-  --draws <n>                  bootstrap draws (default 2000)
+  --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
-  --format json|csv            output format (default json)
+  --format json|csv            output format (default json); csv is the results table
   --out <file>                 write to a file instead of standard output
 
-JSON output: { caution, import, surveys: [ { name, date, stations: [...], constituents: [...] } ] };
+JSON output: { caution, mouth, import, surveys: [ { name, date, stations: [...], constituents: [...] } ] };
 for a single survey, "stations" and "constituents" are also given at the top level.
 Field names are documented in the README. Exit codes: 0 ok, 2 bad input, 64 usage, 70 internal error.
 ${SCREENING_CAUTION}`;
 
-function layerOf(text: string | undefined): LayerChoice | undefined {
-  if (text === undefined) return undefined;
-  if (text === "surface" || text === "bottom") return { kind: text };
-  if (text === "average") return { kind: "depthAveraged" };
-  const range = /^(\d+(?:\.\d+)?)-(\d+(?:\.\d+)?)$/.exec(text);
-  if (range) return { kind: "depthRange", minM: Number(range[1]), maxM: Number(range[2]) };
-  throw new UsageError(`--layer: expected surface, bottom, average or a depth range like 0-2 (m); got "${text}"`);
+/** The JSON object of one survey: name, date, survey facts, stations and constituents. */
+export function surveyJson(
+  a: SurveyAnalysis,
+): Record<string, unknown> & { stations: unknown[]; constituents: unknown[] } {
+  const { name, ...facts } = a.survey;
+  return {
+    name,
+    date: a.survey.startDate?.slice(0, 10) ?? null,
+    ...facts,
+    stations: a.stations,
+    constituents: a.constituents,
+    warnings: a.warnings,
+  };
 }
 
 export const analyzeCommand: Command = {
@@ -45,58 +53,38 @@ export const analyzeCommand: Command = {
   summary: "analyse surveys: stations along the channel and mixing behaviour of every constituent",
   help,
   async run(args, io) {
-    const { values, positionals } = parseArgs({
-      args,
-      allowPositionals: true,
-      options: {
-        centerline: { type: "string" },
-        mouth: { type: "string" },
-        stations: { type: "string" },
-        mapping: { type: "string" },
-        layer: { type: "string" },
-        discharge: { type: "string" },
-        draws: { type: "string" },
-        seed: { type: "string" },
-        format: { type: "string", default: "json" },
-        out: { type: "string" },
-      },
-    });
-    if (values.format !== "json" && values.format !== "csv")
-      throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
+    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "format", "out"]);
+    const format = parseFormat(values.format);
+    const settings = workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
-    const layer = layerOf(values.layer);
-    const discharge = parseDischarge(values.discharge);
-    const loaded = loadSurveys(positionals, {
-      ...(values.stations ? { stationsPath: values.stations } : {}),
-      ...(values.mapping ? { mappingPath: values.mapping } : {}),
-      ...(layer ? { layer } : {}),
-      ...(discharge !== undefined ? { dischargeM3s: discharge } : {}),
-    });
-    io.err(describeImport(loaded));
-    const network = values.centerline ? loadCenterline(values.centerline, values.mouth).network : undefined;
-    const draws = parseCount("draws", values.draws, 2000);
-    const seed = parseCount("seed", values.seed, 1);
-    const analyses: SurveyAnalysis[] = loaded.surveys.map((survey, i) => {
-      io.err(`analysing survey ${i + 1}/${loaded.surveys.length}: ${survey.name} (${survey.stations.length} stations)`);
-      return analyzeSurvey(survey, { ...(network ? { network } : {}), bootstrapDraws: draws, seed });
-    });
+    if (values.out !== undefined) checkOut(values.out);
+    const inputs = loadWorkspace(positionals, values, io);
+    for (const [i, s] of inputs.surveys.entries())
+      io.err(`analysing survey ${i + 1}/${inputs.surveys.length}: ${s.name} (${s.stations.length} stations)`);
+    const results = analyzeInputs(inputs, settings);
+    const analyses = results.surveys.map((s) => s.analysis);
     let text: string;
-    if (values.format === "csv") text = resultsCsv(analyses);
+    if (format === "csv") text = tableCsv(RESULT_COLUMNS, resultRows(analyses));
     else {
       const surveys = analyses.map(surveyJson);
       const doc = {
-        caution: SCREENING_CAUTION,
+        caution: results.caution,
+        ...(results.mouth ? { mouth: results.mouth } : {}),
         import: {
-          summary: loaded.summary,
-          files: loaded.files.map((f) => ({ file: f.file, summary: f.summary })),
-          issues: loaded.issues,
+          summary: inputs.summary,
+          files: inputs.files.map((f) => ({
+            file: f.file,
+            kind: f.kind,
+            ...(f.summary ? { summary: f.summary } : {}),
+          })),
+          issues: inputs.issues,
         },
         ...(surveys.length === 1 ? { stations: surveys[0]!.stations, constituents: surveys[0]!.constituents } : {}),
         surveys,
       };
       text = `${JSON.stringify(doc, null, 2)}\n`;
     }
-    if (values.out) writeFileSync(values.out, text);
+    if (values.out !== undefined) writeOut(values.out, text);
     else io.out(text);
     return 0;
   },

@@ -1,10 +1,36 @@
-import { writeFileSync } from "node:fs";
-import { parseArgs } from "node:util";
 import type { Command } from "../command.ts";
 import type { ProvenanceFile } from "../../analysis/index.ts";
 import { buildBriefing, renderBriefingHtml, SCREENING_CAUTION } from "../../analysis/index.ts";
-import { UsageError } from "../exitCodes.ts";
-import { analyzeFiles, channelFromFile, readGeoJsonFile, SURVEY_OPTIONS, type MapFile } from "./compare.ts";
+import { InputError, UsageError } from "../exitCodes.ts";
+import { checkOut, readBytes, writeOut } from "../files.ts";
+import { INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
+import { analyzeFiles, provenanceOf } from "./compare.ts";
+
+/** A map file read for the briefing, with its provenance. */
+export interface MapFile {
+  geojson: { type?: unknown; features?: unknown; disclaimer?: unknown };
+  file: ProvenanceFile;
+}
+
+/** Reads a GeoJSON map file (basemap) with its size and SHA-256; it must be a FeatureCollection of features. */
+export function readGeoJsonFile(path: string, role: ProvenanceFile["role"]): MapFile {
+  const bytes = readBytes(path, role);
+  let geojson: MapFile["geojson"];
+  try {
+    geojson = JSON.parse(new TextDecoder().decode(bytes).replace(/^\uFEFF/, "")) as MapFile["geojson"];
+  } catch (error) {
+    throw new InputError(`${path}: row 1: not valid JSON (${(error as Error).message})`);
+  }
+  const features = geojson?.features;
+  if (geojson === null || typeof geojson !== "object" || !Array.isArray(features))
+    throw new InputError(`${path}: expected a GeoJSON FeatureCollection with a "features" array`);
+  const bad = features.findIndex((f: unknown) => f === null || typeof f !== "object");
+  if (bad >= 0)
+    throw new InputError(
+      `${path}: features[${bad}] is ${JSON.stringify(features[bad])}; expected a GeoJSON Feature object`,
+    );
+  return { geojson, file: provenanceOf(path, role) };
+}
 
 const help = `brackline report <survey files...> --centerline <line.geojson> --out <briefing.html> [options]
 
@@ -25,7 +51,7 @@ Options:
   --stations <table.csv>       station table joined by station id
   --mapping <mapping.json>     a saved column mapping
   --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name (for fluxes)
-  --draws <n>                  bootstrap draws (default 2000)
+  --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1)
 To make a PDF: open the file in a browser and print, or
   chromium --headless --no-pdf-header-footer --print-to-pdf=briefing.pdf file:///path/briefing.html
@@ -40,7 +66,7 @@ export function dataNoticeOf(maps: readonly MapFile[]): string | undefined {
       ? (m.geojson.features as Array<{ properties?: { note?: unknown } | null }>)
       : [];
     const note = fs
-      .map((f) => f.properties?.note)
+      .map((f) => f?.properties?.note)
       .find((n): n is string => typeof n === "string" && /invented/i.test(n));
     if (note) return note;
   }
@@ -52,24 +78,20 @@ export const reportCommand: Command = {
   summary: "write a self-contained HTML stakeholder briefing (prints to A4 PDF)",
   help,
   async run(args, io) {
-    const { values, positionals } = parseArgs({
-      args,
-      allowPositionals: true,
-      options: {
-        ...SURVEY_OPTIONS,
-        basemap: { type: "string" },
-        out: { type: "string" },
-        title: { type: "string" },
-        date: { type: "string" },
-      },
-    });
+    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "basemap", "out", "title", "date"]);
+    workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (!values.out) throw new UsageError("missing --out <briefing.html>");
-    const centerline = readGeoJsonFile(values.centerline, "centerline");
-    const network = channelFromFile(centerline, values.centerline, values.mouth);
+    if (values.out !== undefined) checkOut(values.out);
     const basemap = values.basemap ? readGeoJsonFile(values.basemap, "basemap") : undefined;
-    const { analyses, files, draws, seed } = analyzeFiles(positionals, values, network, io);
+    const { inputs, analyses, files, draws, seed } = analyzeFiles(positionals, values, io);
+    const channel = inputs.channel!;
+    const centerline: MapFile = {
+      geojson: channel.geojson as MapFile["geojson"],
+      file: provenanceOf(values.centerline, "centerline"),
+    };
+    const network = channel.network;
     const maps = [centerline, ...(basemap ? [basemap] : [])];
     const notice = dataNoticeOf(maps);
     const provenance: ProvenanceFile[] = [...files, ...maps.map((m) => m.file)];
@@ -85,7 +107,7 @@ export const reportCommand: Command = {
       software: "Brackline 0.1.0",
       bootstrap: { draws, seed },
     });
-    writeFileSync(values.out, renderBriefingHtml(doc));
+    writeOut(values.out, renderBriefingHtml(doc));
     io.err(`wrote ${values.out}`);
     return 0;
   },

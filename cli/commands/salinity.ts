@@ -1,8 +1,10 @@
-import { readFileSync } from "node:fs";
-import { parseArgs } from "node:util";
+import { readBytes } from "../files.ts";
+import { parseCommandLine } from "../options.ts";
 import Papa from "papaparse";
 import type { Command } from "../command.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
+import { toCsv } from "../../analysis/output/csv.ts";
+import { SCREENING_CAUTION } from "../../analysis/output/caution.ts";
 import { practicalSalinityFromConductivity, pss78ValidityNote } from "../../analysis/seawater/practicalSalinity.ts";
 import { planColumns, type ColumnPlan } from "./salinityColumns.ts";
 
@@ -37,7 +39,7 @@ row, column and value; that row gets an empty salinity and the other rows are st
 outside the PSS-78 range (S > 42, t outside −2…35 °C) are computed and noted on stderr.
 Exit codes: 0 when at least one row got a salinity; 2 when the file or its columns are unusable or
 no row could be converted; 64 for a wrong command line.
-Screening analysis, not a compliance assessment: defer to local regulations and licensed practice.`;
+${SCREENING_CAUTION}`;
 
 const MAX_MESSAGES = 50;
 
@@ -68,17 +70,7 @@ export const salinityCommand: Command = {
   summary: "add PSS-78 practical salinity from conductivity, temperature and pressure columns of a CSV",
   help: HELP,
   async run(args, io) {
-    const { values, positionals } = parseArgs({
-      args,
-      allowPositionals: true,
-      strict: true,
-      options: {
-        cond: { type: "string" },
-        temp: { type: "string" },
-        pres: { type: "string" },
-        pressure: { type: "string" },
-      },
-    });
+    const { values, positionals } = parseCommandLine(args, ["cond", "temp", "pres", "pressure"]);
     if (positionals.length !== 1) throw new UsageError(`expected one CSV file, got ${positionals.length}`);
     const file = positionals[0];
     let fixedPressure = 0;
@@ -88,12 +80,7 @@ export const salinityCommand: Command = {
         throw new UsageError(`--pressure must be a number ≥ 0 (dbar), got "${values.pressure}"`);
       }
     }
-    let text: string;
-    try {
-      text = readFileSync(file, "utf8");
-    } catch (error) {
-      throw new InputError(`${file}: cannot read the file (${(error as Error).message})`);
-    }
+    const text = new TextDecoder().decode(readBytes(file, "CSV file"));
     const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ""), { header: false, skipEmptyLines: "greedy" });
     const rows = parsed.data;
     if (rows.length === 0) throw new InputError(`${file}: row 1: the file is empty (no header row)`);
@@ -145,7 +132,7 @@ export const salinityCommand: Command = {
     if (rows.length === 1) throw new InputError(`${file}: row 2: no data rows after the header`);
     if (converted === 0)
       throw new InputError(`${file}: no row could be converted (${rows.length - 1} data rows; see the messages above)`);
-    io.out(Papa.unparse(out, { newline: "\n" }));
+    io.out(toCsv(out[0]!, out.slice(1)));
     return 0;
   },
 };

@@ -1,19 +1,22 @@
-import { createReadStream, statSync, writeFileSync } from "node:fs";
+import { createReadStream, statSync } from "node:fs";
 import { basename } from "node:path";
-import { parseArgs } from "node:util";
-import Papa from "papaparse";
 import type { Command } from "../command.ts";
-import type { UnderwayBins, UnderwayImport } from "../../analysis/index.ts";
+import type { CsvValue, UnderwayBins, UnderwayImport } from "../../analysis/index.ts";
 import {
   analyzeSurvey,
   binUnderway,
   binsToSurvey,
   projectUnderway,
+  readCenterline,
   readUnderwayStream,
+  toCsv,
   SCREENING_CAUTION,
+  type ChannelNetwork,
 } from "../../analysis/index.ts";
-import { loadCenterline, parseCount } from "../loadInputs.ts";
-import { surveyJson } from "../formatResults.ts";
+import { parseCommandLine, parseCount, parseFormat, parseMouth, MAX_DRAWS } from "../options.ts";
+import { checkOut, readBytes, writeOut } from "../files.ts";
+import { surveyJson } from "./analyze.ts";
+import { issueText } from "../workspace.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 
 const help = `brackline underway <log.csv> [options]
@@ -76,26 +79,33 @@ async function readLog(path: string, err: (t: string) => void): Promise<Underway
   });
 }
 
+const STAT_KEYS = ["n", "mean", "sd", "min", "max"] as const;
+
 function binsCsv(b: UnderwayBins): string {
   const names = Object.keys(b.units);
-  const rows = b.bins.map((x) => {
-    const row: Record<string, string | number> = {
-      [`${b.by}_lower`]: x.lower,
-      [`${b.by}_upper`]: x.upper,
-      n: x.n,
-      mean_km: x.meanKm ?? "",
-      mean_lon: x.meanLonLat[0],
-      mean_lat: x.meanLonLat[1],
-      start: x.startMs === undefined ? "" : new Date(x.startMs).toISOString(),
-      end: x.endMs === undefined ? "" : new Date(x.endMs).toISOString(),
-    };
-    for (const v of names) {
-      const s = x.stats[v];
-      for (const k of ["n", "mean", "sd", "min", "max"] as const) row[`${v}_${k}`] = s?.[k] ?? "";
-    }
-    return row;
-  });
-  return `${Papa.unparse(rows, { newline: "\n" })}\n`;
+  const header = [
+    `${b.by}_lower`,
+    `${b.by}_upper`,
+    "n",
+    "mean_km",
+    "mean_lon",
+    "mean_lat",
+    "start",
+    "end",
+    ...names.flatMap((v) => STAT_KEYS.map((k) => `${v}_${k}`)),
+  ];
+  const rows = b.bins.map((x): CsvValue[] => [
+    x.lower,
+    x.upper,
+    x.n,
+    x.meanKm,
+    x.meanLonLat[0],
+    x.meanLonLat[1],
+    x.startMs === undefined ? "" : new Date(x.startMs).toISOString(),
+    x.endMs === undefined ? "" : new Date(x.endMs).toISOString(),
+    ...names.flatMap((v) => STAT_KEYS.map((k) => x.stats[v]?.[k])),
+  ]);
+  return toCsv(header, rows);
 }
 
 export const underwayCommand: Command = {
@@ -103,31 +113,40 @@ export const underwayCommand: Command = {
   summary: "bin an underway (flow-through) log along the channel or in salinity classes",
   help,
   async run(args, io) {
-    const { values, positionals } = parseArgs({
-      args,
-      allowPositionals: true,
-      options: {
-        centerline: { type: "string" },
-        mouth: { type: "string" },
-        bin: { type: "string" },
-        width: { type: "string" },
-        "max-offset": { type: "string" },
-        mixing: { type: "boolean", default: false },
-        draws: { type: "string" },
-        seed: { type: "string" },
-        format: { type: "string", default: "json" },
-        out: { type: "string" },
-      },
-    });
+    const { values, positionals } = parseCommandLine(args, [
+      "centerline",
+      "mouth",
+      "bin",
+      "width",
+      "max-offset",
+      "mixing",
+      "draws",
+      "seed",
+      "format",
+      "out",
+    ]);
+    const format = parseFormat(values.format);
+    const draws = parseCount("draws", values.draws, 2000, MAX_DRAWS);
+    const seed = parseCount("seed", values.seed, 1);
+    const mouth = parseMouth(values.mouth);
+    if (values.out !== undefined) checkOut(values.out);
     if (positionals.length !== 1) throw new UsageError(`expected one underway log, got ${positionals.length}`);
-    if (values.format !== "json" && values.format !== "csv")
-      throw new UsageError(`--format: expected json or csv; got "${values.format}"`);
     const by = values.bin ?? (values.centerline ? "km" : "salinity");
     if (by !== "km" && by !== "salinity") throw new UsageError(`--bin: expected km or salinity; got "${by}"`);
     if (by === "km" && !values.centerline) throw new UsageError("--bin km needs --centerline");
     const width = positiveNumber("width", values.width, 1)!;
     const maxOffsetM = positiveNumber("max-offset", values["max-offset"], undefined);
-    const network = values.centerline ? loadCenterline(values.centerline, values.mouth).network : undefined;
+    let network: ChannelNetwork | undefined;
+    if (values.centerline !== undefined) {
+      const read = readCenterline(readBytes(values.centerline, "centerline"), {
+        fileName: values.centerline,
+        ...(mouth !== undefined ? { mouth } : {}),
+      });
+      if (!read.channel)
+        throw new InputError(read.issues[0] ? issueText(read.issues[0]) : `${values.centerline}: no usable centerline`);
+      io.err(read.channel.mouth.statement);
+      network = read.channel.network;
+    }
     const file = positionals[0]!;
     const read = await readLog(file, io.err);
     const s = read.summary;
@@ -135,17 +154,10 @@ export const underwayCommand: Command = {
     io.err(
       `import: ${s.rowsRead} records read, ${s.rowsAccepted} accepted, ${s.rowsRejected} rejected${reasons.length ? ` (${reasons.join("; ")})` : ""}; ${s.issueCount} problems`,
     );
-    for (const i of read.issues.slice(0, 20))
-      io.err(
-        `  ${i.severity}: ${i.file} row ${i.row}, column "${i.column}", value "${i.value}": expected ${i.expected}`,
-      );
+    for (const i of read.issues.slice(0, 20)) io.err(`  ${i.severity}: ${issueText(i)}`);
     if (s.rowsAccepted === 0) {
       const first = read.issues.find((i) => i.severity === "error");
-      throw new InputError(
-        first
-          ? `${first.file}: row ${first.row}, column "${first.column}", value "${first.value}": expected ${first.expected}`
-          : `${file}: no record with a position`,
-      );
+      throw new InputError(first ? issueText(first) : `${file}: no record with a position`);
     }
     const projection = network ? projectUnderway(read.data, network) : undefined;
     const bins = binUnderway(read.data, projection, { by, width, ...(maxOffsetM !== undefined ? { maxOffsetM } : {}) });
@@ -153,14 +165,14 @@ export const underwayCommand: Command = {
       `binned ${s.rowsAccepted - bins.recordsOutside} records into ${bins.bins.length} ${by} bins of width ${width}`,
     );
     let text: string;
-    if (values.format === "csv") text = binsCsv(bins);
+    if (format === "csv") text = binsCsv(bins);
     else {
       const mixing = values.mixing
         ? surveyJson(
             analyzeSurvey(binsToSurvey(bins, { fileName: read.data.file }), {
               ...(network ? { network } : {}),
-              bootstrapDraws: parseCount("draws", values.draws, 2000),
-              seed: parseCount("seed", values.seed, 1),
+              bootstrapDraws: draws,
+              seed,
             }),
           )
         : undefined;
@@ -184,7 +196,7 @@ export const underwayCommand: Command = {
       };
       text = `${JSON.stringify(doc, null, 2)}\n`;
     }
-    if (values.out) writeFileSync(values.out, text);
+    if (values.out !== undefined) writeOut(values.out, text);
     else io.out(text);
     return 0;
   },

@@ -2,23 +2,22 @@ import { mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
-import { buildChannelNetwork } from "../../analysis/geometry/buildNetwork.ts";
-import type { CenterlineGeoJson } from "../../analysis/geometry/geojsonInput.ts";
-import { readSurveyText } from "../../analysis/io/readSurvey.ts";
+import { readInputs } from "../../analysis/index.ts";
 import { analyzeArchive } from "../../cli/archive/analyzeArchive.ts";
-import type { SurveySetup } from "../../cli/archive/surveyTask.ts";
-import type { Survey } from "../../analysis/survey/survey.ts";
+import { surveySetup } from "../../cli/archive/surveyTask.ts";
 import { CancelledError } from "../../cli/archive/workerPool.ts";
 import { DEMO_DIR } from "../compare/helpers/demoAnalyses.ts";
 
 // The two invented demo surveys (data-demo/), analysed with few draws to keep the test light.
-const surveys = readSurveyText(readFileSync(join(DEMO_DIR, "surveys/both-surveys.csv"), "utf8"), {
-  fileName: "both-surveys.csv",
-}).surveys;
-const network = buildChannelNetwork(
-  JSON.parse(readFileSync(join(DEMO_DIR, "centerline.geojson"), "utf8")) as CenterlineGeoJson,
+const inputs = readInputs(
+  [
+    { name: "both-surveys.csv", content: readFileSync(join(DEMO_DIR, "surveys/both-surveys.csv"), "utf8") },
+    { name: "centerline.geojson", content: readFileSync(join(DEMO_DIR, "centerline.geojson"), "utf8") },
+  ],
+  {},
 );
-const setup: SurveySetup & { surveys: Survey[] } = { surveys, network, options: { bootstrapDraws: 50, seed: 3 } };
+const surveys = inputs.surveys;
+const setup = { surveys, ...surveySetup(inputs, { bootstrapDraws: 50, seed: 3 }) };
 const dirs: string[] = [];
 const tmp = () => {
   const d = mkdtempSync(join(tmpdir(), "bl-archive-"));
@@ -48,7 +47,7 @@ describe("analyzeArchive() (worker threads, cache, cancel)", () => {
     expect(again.stats).toMatchObject({ analysed: 0, cached: 2 });
     expect(JSON.stringify(again.analyses)).toBe(JSON.stringify(first.analyses));
     const other = await analyzeArchive(
-      { ...setup, options: { ...setup.options, seed: 4 } },
+      { ...setup, settings: { ...setup.settings, seed: 4 } },
       { threads: 0, cacheDir: dir, io },
     );
     expect(other.stats).toMatchObject({ analysed: 2, cached: 0 });

@@ -62,8 +62,10 @@ describe("brackline analyze", () => {
   it("writes CSV with one row per survey and constituent", async () => {
     const { code, out } = await run(["analyze", WET, "--format", "csv", "--draws", "50"]);
     expect(code).toBe(0);
-    const lines = out.trim().split("\n");
-    expect(lines[0]).toMatch(/^survey,constituent,unit,class,effective_endmember/);
+    const lines = out.trim().split("\r\n");
+    expect(lines[0]).toMatch(
+      /^survey,constituent,unit,class,behaviour,confidence,percent_change,.*effective_river_endmember/,
+    );
     expect(lines.length).toBe(1 + 9);
   });
 

@@ -5,7 +5,7 @@ import { renderBriefingHtml } from "../../analysis/report/renderHtml.ts";
 import type { BriefingDocument } from "../../analysis/report/briefingTypes.ts";
 import type { SurveyAnalysis } from "../../analysis/pipeline/surveyAnalysis.ts";
 import { fractionInWords } from "../../analysis/report/wording.ts";
-import { formatSignificant } from "../../analysis/compare/formatNumber.ts";
+import { formatSignificant } from "../../analysis/output/formatNumber.ts";
 import { demoAnalyses, demoBasemap, demoCenterline, truth } from "../compare/helpers/demoAnalyses.ts";
 import { externalReferences, parseErrors } from "./helpers/htmlChecks.ts";
 

@@ -24,7 +24,14 @@ export interface MixingModel {
   /** Tangent from the seaward segment back to the river end-member salinity. */
   tangent?: { x1: number; y1: number; x2: number; y2: number };
   /** Effective river end-member C*₀ with its 95 % interval, at the river salinity. */
-  effective?: { px: number; py: number; pyLower: number; pyUpper: number };
+  effective?: {
+    px: number;
+    py: number;
+    pyLower: number;
+    pyUpper: number;
+    clippedLower?: boolean;
+    clippedUpper?: boolean;
+  };
   zone?: { x: number; width: number; kind: "removal" | "addition" };
   maximum?: { px: number; pxLower: number; pxUpper: number };
 }
@@ -44,8 +51,8 @@ export function mixingModel(c: ConstituentAnalysisView | undefined, frame: Frame
     line?.sea.conc,
     // The band is clipped to the frame rather than allowed to stretch the axis.
     ...(fit?.conc ?? []),
-    eff?.upper,
-    eff?.lower,
+    // Axes follow the data (issue 14): the C*₀ interval is clipped to the frame with a marker, not allowed to squash the data.
+    eff?.value,
   ]);
   const x = linear(xDomain, [frame.x0, frame.x1], { zero: true });
   const y = linear(yDomain, [frame.y1, frame.y0], { zero: true });
@@ -76,11 +83,16 @@ export function mixingModel(c: ConstituentAnalysisView | undefined, frame: Frame
     };
   }
   if (eff) {
+    const [top, bottom] = [Math.min(frame.y0, frame.y1), Math.max(frame.y0, frame.y1)];
+    const pyLower = round(y(eff.lower));
+    const pyUpper = round(y(eff.upper));
     model.effective = {
       px: round(x(riverS)),
       py: round(y(eff.value)),
-      pyLower: round(y(eff.lower)),
-      pyUpper: round(y(eff.upper)),
+      pyLower: Math.min(bottom, Math.max(top, pyLower)),
+      pyUpper: Math.min(bottom, Math.max(top, pyUpper)),
+      clippedLower: pyLower > bottom,
+      clippedUpper: pyUpper < top,
     };
   }
   const z = c?.reactionZone;

@@ -1,0 +1,129 @@
+/**
+ * Files to surveys and channel: the one entry point from bytes to data (CLI and dashboard worker).
+ */
+import { emptySummary, mergeSummaries } from "../io/importSummary.ts";
+import { readGeoJsonPoints } from "../io/geojsonPoints.ts";
+import type { ImportResult, ReadSurveyOptions } from "../io/importPipeline.ts";
+import { readNetcdfStations } from "../io/netcdfStations.ts";
+import { readSurveyText } from "../io/readSurvey.ts";
+import { readStationTable, type StationTable } from "../io/stationTable.ts";
+import type { ImportIssue } from "../survey/survey.ts";
+import { decodeText, detectFileKind, EXPECTED_FILE, type InputFileKind } from "./fileKind.ts";
+import { readCenterline, type ChannelInput } from "./readCenterline.ts";
+import type { InputChoices, InputFile, InputFileReport, WorkspaceInputs } from "./types.ts";
+
+const fileIssue = (file: string, value: string, expected: string): ImportIssue => ({
+  file,
+  row: 0,
+  column: "",
+  value,
+  expected,
+  severity: "error",
+});
+
+function readSurveyFile(file: InputFile, kind: InputFileKind, options: ReadSurveyOptions): ImportResult {
+  if (kind === "surveyNetcdf") {
+    const bytes = typeof file.content === "string" ? new TextEncoder().encode(file.content) : file.content;
+    return readNetcdfStations(bytes, options);
+  }
+  const text = decodeText(file.content);
+  return kind === "surveyGeoJson" ? readGeoJsonPoints(text, options) : readSurveyText(text, options);
+}
+
+/**
+ * Reads input files into surveys and a channel with one file-kind dispatch: delimited text, GeoJSON
+ * points and CF-netCDF are surveys; a delimited table with places but nothing measured is a station
+ * table (joined to the surveys by station id); GeoJSON lines are the centerline (read by
+ * readCenterline with the one mouth rule, its suggestion drawing on the surveys' station salinity).
+ * Never throws on bad content: every problem is an issue naming the file (and row, column, value).
+ *
+ * @param files names and contents (bytes or text)
+ * @param choices mapping, unit overrides, layer, mouth, kinds given by the user, off-channel distance, discharge
+ * @returns surveys, channel, station table, per-file reports, issues and the import summary
+ * @throws TypeError when files is not an array of { name, content } (caller mistake)
+ */
+export function readInputs(files: readonly InputFile[], choices: InputChoices = {}): WorkspaceInputs {
+  if (!Array.isArray(files)) throw new TypeError(`readInputs(): files must be an array, got ${typeof files}`);
+  for (const [i, f] of files.entries())
+    if (!f || typeof f.name !== "string" || (typeof f.content !== "string" && !(f.content instanceof Uint8Array)))
+      throw new TypeError(`readInputs(): files[${i}] must be { name: string, content: Uint8Array | string }`);
+  const { onProgress, ...plain } = choices;
+  const issues: ImportIssue[] = [];
+  // Unit overrides reach the readers once ReadSurveyOptions takes them (issue 13); until then say so, never drop silently.
+  for (const [column, unit] of Object.entries(choices.unitOverrides ?? {}))
+    issues.push({
+      ...fileIssue("(unit override)", `${column}=${unit}`, "a unit override the readers apply (not yet supported)"),
+      severity: "warning",
+    });
+  const kinds = files.map((f) => {
+    const given = choices.kindByFile?.[f.name];
+    if (given) return given;
+    const { kind, reason } = detectFileKind(f.content);
+    if (kind === "unknown") issues.push(fileIssue(f.name, reason ?? "", EXPECTED_FILE));
+    return kind;
+  });
+  const reports: InputFileReport[] = files.map((f, i) => ({ file: f.name, kind: kinds[i]!, surveys: [] }));
+
+  let stationTable: StationTable | undefined;
+  let stationFile = "";
+  files.forEach((f, i) => {
+    if (kinds[i] !== "stationTable") return;
+    if (stationTable) {
+      issues.push(fileIssue(f.name, "", `one station table (already read ${stationFile})`));
+      return;
+    }
+    const mapping = choices.mappingByFile?.[f.name];
+    stationFile = f.name;
+    stationTable = readStationTable(decodeText(f.content), { fileName: f.name, ...(mapping ? { mapping } : {}) });
+    issues.push(...stationTable.issues);
+    reports[i]!.mapping = stationTable.mapping;
+  });
+
+  const surveyIdx = files.flatMap((_, i) => (kinds[i]!.startsWith("survey") ? [i] : []));
+  const results = surveyIdx.map((i, n) => {
+    const f = files[i]!;
+    const mapping = choices.mappingByFile?.[f.name] ?? (kinds[i] === "surveyText" ? choices.mapping : undefined);
+    const r = readSurveyFile(f, kinds[i]!, {
+      fileName: f.name,
+      ...(mapping ? { mapping } : {}),
+      ...(stationTable ? { stationTable } : {}),
+      ...(choices.layer ? { layer: choices.layer } : {}),
+      ...(choices.dischargeM3s !== undefined ? { riverDischargeM3s: choices.dischargeM3s } : {}),
+      ...(onProgress ? { onProgress: (x: number) => onProgress((n + x) / surveyIdx.length) } : {}),
+    });
+    Object.assign(reports[i]!, { surveys: r.surveys.map((s) => s.name), summary: r.summary, mapping: r.mapping });
+    issues.push(...r.issues);
+    return r;
+  });
+  const surveys = results.flatMap((r) => r.surveys);
+  const summary = results.map((r) => r.summary).reduce(mergeSummaries, emptySummary());
+
+  let channel: ChannelInput | undefined;
+  files.forEach((f, i) => {
+    if (kinds[i] !== "centerline") return;
+    if (channel) {
+      issues.push(fileIssue(f.name, "", `one centerline (already read ${channel.fileName})`));
+      return;
+    }
+    const stations = surveys.flatMap((s) =>
+      s.stations.map((st) => ({ lonLat: st.lonLat, salinity: st.salinity.accepted ? st.salinity.value : undefined })),
+    );
+    const read = readCenterline(f.content, {
+      fileName: f.name,
+      ...(choices.mouth !== undefined ? { mouth: choices.mouth } : {}),
+      stations,
+    });
+    issues.push(...read.issues);
+    channel = read.channel;
+  });
+  onProgress?.(1);
+  return {
+    surveys,
+    ...(channel ? { channel } : {}),
+    ...(stationTable ? { stationTable } : {}),
+    files: reports,
+    issues,
+    summary,
+    choices: plain,
+  };
+}

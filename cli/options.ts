@@ -1,0 +1,179 @@
+/**
+ * The CLI's options, declared once: each command picks the ones it takes by name, and the parsed
+ * values become one `InputChoices` for readInputs and one `WorkspaceSettings` for analyzeInputs.
+ * A wrong option value is a command-line mistake (exit 64) in every command.
+ */
+import { parseArgs } from "node:util";
+import type { InputChoices, LayerChoice, MouthOption, WorkspaceSettings } from "../analysis/index.ts";
+import { columnMappingSchema } from "../analysis/io/columnMapping.ts";
+import { InputError, UsageError } from "./exitCodes.ts";
+import { readBytes } from "./files.ts";
+
+/** Every option of every command, as node:util parseArgs declares it. */
+export const OPTIONS = {
+  centerline: { type: "string" },
+  mouth: { type: "string" },
+  stations: { type: "string" },
+  mapping: { type: "string" },
+  layer: { type: "string" },
+  discharge: { type: "string" },
+  draws: { type: "string" },
+  seed: { type: "string" },
+  format: { type: "string" },
+  out: { type: "string" },
+  basemap: { type: "string" },
+  title: { type: "string" },
+  date: { type: "string" },
+  bin: { type: "string" },
+  width: { type: "string" },
+  "max-offset": { type: "string" },
+  mixing: { type: "boolean" },
+  cond: { type: "string" },
+  temp: { type: "string" },
+  pres: { type: "string" },
+  pressure: { type: "string" },
+  threads: { type: "string" },
+  "cache-dir": { type: "string" },
+  "no-cache": { type: "boolean" },
+  seasons: { type: "string" },
+  "discharge-table": { type: "string" },
+} as const;
+
+export type OptionName = keyof typeof OPTIONS;
+/** Parsed values: text for string options, true/false for boolean ones. */
+export type OptionValues = {
+  [K in OptionName]?: (typeof OPTIONS)[K]["type"] extends "boolean" ? boolean : string;
+};
+
+/** Options of every command that reads surveys (analyze, compare, report). */
+export const INPUT_OPTIONS: readonly OptionName[] = [
+  "centerline",
+  "mouth",
+  "stations",
+  "mapping",
+  "layer",
+  "discharge",
+  "draws",
+  "seed",
+];
+
+/** Largest bootstrap draw count accepted (a larger one is a typo, not an analysis). */
+export const MAX_DRAWS = 100_000;
+
+/**
+ * Parses a command line with the named options (from {@link OPTIONS}).
+ *
+ * @throws UsageError for an unknown option or a missing value
+ */
+export function parseCommandLine(
+  args: string[],
+  names: readonly OptionName[],
+): { values: OptionValues; positionals: string[] } {
+  const options = Object.fromEntries(names.map((n) => [n, OPTIONS[n]]));
+  try {
+    const { values, positionals } = parseArgs({ args, allowPositionals: true, options, strict: true });
+    return { values: values as OptionValues, positionals };
+  } catch (error) {
+    throw new UsageError((error as Error).message);
+  }
+}
+
+/** Parses a whole number option in [0, max]; a wrong value is a usage error. */
+export function parseCount(name: string, text: string | undefined, fallback: number, max = 2 ** 31 - 1): number {
+  if (text === undefined) return fallback;
+  const n = Number(text);
+  if (!/^\s*\d+\s*$/.test(text) || !Number.isSafeInteger(n))
+    throw new UsageError(`--${name}: expected a whole number ≥ 0; got "${text}"`);
+  if (n > max) throw new UsageError(`--${name}: at most ${max}; got ${text}`);
+  return n;
+}
+
+/** `--layer surface|bottom|average|<min>-<max>`. */
+export function parseLayer(text: string | undefined): LayerChoice | undefined {
+  if (text === undefined) return undefined;
+  if (text === "surface" || text === "bottom") return { kind: text };
+  if (text === "average") return { kind: "depthAveraged" };
+  const range = /^(\d+(?:\.\d+)?)-(\d+(?:\.\d+)?)$/.exec(text);
+  if (range && Number(range[1]) <= Number(range[2]))
+    return { kind: "depthRange", minM: Number(range[1]), maxM: Number(range[2]) };
+  throw new UsageError(
+    `--layer: expected surface, bottom, average or a depth range from-to in m with from ≤ to (like 0-2); got "${text}"`,
+  );
+}
+
+/** `--mouth start|end|lon,lat`. */
+export function parseMouth(text: string | undefined): MouthOption | undefined {
+  if (text === undefined) return undefined;
+  if (text === "start" || text === "end") return text;
+  const parts = text.split(",").map((p) => (p.trim() === "" ? NaN : Number(p)));
+  if (parts.length !== 2 || parts.some((x) => !Number.isFinite(x)))
+    throw new UsageError(`--mouth: expected "start", "end" or "lon,lat"; got "${text}"`);
+  return [parts[0]!, parts[1]!];
+}
+
+/** `--discharge 450` or `--discharge "wet-2025-03=450,dry-2025-09=60"` [m³/s]. */
+export function parseDischarge(text: string | undefined): number | Record<string, number> | undefined {
+  if (text === undefined) return undefined;
+  const single = Number(text);
+  if (text.trim() !== "" && Number.isFinite(single)) {
+    if (single <= 0) throw new UsageError(`--discharge: must be positive m³/s; got "${text}"`);
+    return single;
+  }
+  const out: Record<string, number> = {};
+  for (const part of text.split(",")) {
+    const [name, q] = part.split("=");
+    const value = Number(q);
+    if (!name || q === undefined || !Number.isFinite(value) || value <= 0)
+      throw new UsageError(`--discharge: expected a number or name=value pairs; got "${part}"`);
+    out[name.trim()] = value;
+  }
+  return out;
+}
+
+/** `--format json|csv`. */
+export function parseFormat(text: string | undefined): "json" | "csv" {
+  if (text === undefined || text === "json" || text === "csv") return text ?? "json";
+  throw new UsageError(`--format: expected json or csv; got "${text}"`);
+}
+
+/** Reads and checks `--mapping <file.json>`: a saved column mapping object. */
+function readMapping(path: string): InputChoices["mapping"] {
+  let doc: unknown;
+  try {
+    doc = JSON.parse(new TextDecoder().decode(readBytes(path, "mapping file")));
+  } catch (error) {
+    if (error instanceof InputError) throw error;
+    throw new InputError(`${path}: row 1: not valid JSON (${(error as Error).message})`);
+  }
+  const parsed = columnMappingSchema.safeParse(doc);
+  if (!parsed.success) {
+    const first = parsed.error.issues[0];
+    const where = first?.path.length ? ` at ${first.path.join(".")}` : "";
+    throw new InputError(
+      `${path}: expected a column mapping object as the dashboard saves it ({ "columns": [...] })${where}: ${first?.message ?? "invalid"}`,
+    );
+  }
+  return parsed.data;
+}
+
+/** The readInputs choices from parsed option values (command-line mistakes throw UsageError first). */
+export function inputChoices(values: OptionValues): InputChoices {
+  const layer = parseLayer(values.layer);
+  const mouth = parseMouth(values.mouth);
+  const discharge = parseDischarge(values.discharge);
+  const mapping = values.mapping !== undefined ? readMapping(values.mapping) : undefined;
+  return {
+    ...(mapping ? { mapping } : {}),
+    ...(layer ? { layer } : {}),
+    ...(mouth !== undefined ? { mouth } : {}),
+    ...(discharge !== undefined ? { dischargeM3s: discharge } : {}),
+  };
+}
+
+/** The analyzeInputs settings from parsed option values. */
+export function workspaceSettings(values: OptionValues): WorkspaceSettings & { bootstrapDraws: number; seed: number } {
+  return {
+    bootstrapDraws: parseCount("draws", values.draws, 2000, MAX_DRAWS),
+    seed: parseCount("seed", values.seed, 1),
+  };
+}

@@ -1,0 +1,68 @@
+/** The CLI's one way from files on disk to results: read the files, call readInputs, report, check. */
+import { basename } from "node:path";
+import type { CommandIo } from "./command.ts";
+import type { ImportIssue, InputFile, InputFileKind, WorkspaceInputs } from "../analysis/index.ts";
+import { EXPECTED_FILE, readInputs } from "../analysis/index.ts";
+import { InputError } from "./exitCodes.ts";
+import { readBytes } from "./files.ts";
+import { inputChoices, type OptionValues } from "./options.ts";
+
+/** "file: row 3, column "Fe", value "x": expected a number". */
+export function issueText(i: ImportIssue): string {
+  const where = [i.row > 0 ? `row ${i.row}` : "", i.column ? `column "${i.column}"` : ""].filter(Boolean).join(", ");
+  return `${i.file}${where ? `: ${where}` : ""}${i.value ? `, value "${i.value}"` : ""}: expected ${i.expected}`;
+}
+
+/** One line per import problem class for stderr. */
+export function describeImport(inputs: WorkspaceInputs): string {
+  const s = inputs.summary;
+  const reasons = Object.entries(s.rejectedByReason).map(([r, n]) => `${n} ${r}`);
+  const lines = [
+    `import: ${s.rowsRead} rows read, ${s.rowsAccepted} accepted, ${s.rowsRejected} rejected${reasons.length ? ` (${reasons.join("; ")})` : ""}`,
+  ];
+  for (const i of inputs.issues.slice(0, 50)) lines.push(`  ${i.severity}: ${issueText(i)}`);
+  if (inputs.issues.length > 50)
+    lines.push(`  ... and ${inputs.issues.length - 50} more problems (all listed in the JSON output)`);
+  if (inputs.channel) lines.push(inputs.channel.mouth.statement);
+  return lines.join("\n");
+}
+
+/**
+ * Reads the survey files given on the command line (any kind the dashboard reads), the station table
+ * (`--stations`) and the centerline (`--centerline`) through readInputs.
+ *
+ * @throws InputError (exit 2) for an unreadable or unrecognised file, an unusable centerline or no survey
+ */
+export function loadWorkspace(paths: readonly string[], values: OptionValues, io: CommandIo): WorkspaceInputs {
+  const choices = inputChoices(values);
+  if (paths.length === 0) throw new InputError("no survey file given");
+  const kindByFile: Record<string, InputFileKind> = {};
+  const named: ReadonlyArray<readonly [string, string, InputFileKind | undefined]> = [
+    ...(values.stations !== undefined ? [[values.stations, "station table", "stationTable"] as const] : []),
+    ...paths.map((p) => [p, "survey file", undefined] as const),
+    ...(values.centerline !== undefined ? [[values.centerline, "centerline", "centerline"] as const] : []),
+  ];
+  const files: InputFile[] = named.map(([path, what, kind]) => {
+    const name = basename(path);
+    if (kind) kindByFile[name] = kind;
+    return { name, content: readBytes(path, what) };
+  });
+  const inputs = readInputs(files, { ...choices, kindByFile });
+  io.err(describeImport(inputs));
+  const unknown = inputs.files.find((f) => f.kind === "unknown");
+  if (unknown) {
+    const why = inputs.issues.find((i) => i.file === unknown.file)?.value;
+    throw new InputError(
+      `${unknown.file}: not a file Brackline reads${why ? ` (${why})` : ""}; expected ${EXPECTED_FILE}`,
+    );
+  }
+  if (values.centerline !== undefined && !inputs.channel) {
+    const first = inputs.issues.find((i) => i.file === basename(values.centerline!) && i.severity === "error");
+    throw new InputError(first ? issueText(first) : `${values.centerline}: no usable centerline`);
+  }
+  if (inputs.surveys.length === 0) {
+    const first = inputs.issues.find((i) => i.severity === "error");
+    throw new InputError(first ? issueText(first) : `${paths.join(", ")}: no survey could be read`);
+  }
+  return inputs;
+}
