@@ -3,8 +3,7 @@
  * series[] and intrusion[], or the series as one long CSV table.
  */
 import type { ArchiveSummary, SurveyComparison } from "../../analysis/index.ts";
-import { archiveName, archiveTableRows, SCREENING_CAUTION } from "../../analysis/index.ts";
-import { csvText } from "./csvText.ts";
+import { archiveName, archiveTableRows, SCREENING_CAUTION, toCsv } from "../../analysis/index.ts";
 
 /**
  * The archive JSON document (field names are the README's contract).
@@ -35,8 +34,8 @@ export function archiveJson(archive: ArchiveSummary, comparison?: SurveyComparis
   )}\n`;
 }
 
-/** The archive series as one long CSV table. */
+/** The archive series as one long CSV table (the one CSV writer: CRLF, formula neutralisation). */
 export function archiveCsv(archive: ArchiveSummary): string {
   const { header, rows } = archiveTableRows(archive);
-  return csvText(header, rows);
+  return toCsv(header, rows);
 }

@@ -88,7 +88,7 @@ describe("brackline compare with three or more surveys (invented demo archive)",
   it("--format csv writes the series as one long table", async () => {
     const r = await run(["compare", ...files, ...common, "--no-cache", "--format", "csv"]);
     expect(r.code, r.err).toBe(0);
-    const lines = r.out.trim().split("\n");
+    const lines = r.out.trim().split("\r\n");
     expect(lines[0]).toBe(
       "survey,date,season,discharge_m3s,discharge_source,constituent,class,quantity,unit,value,lower95,upper95",
     );
