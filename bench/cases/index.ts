@@ -6,6 +6,7 @@ import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
 import { archiveBench } from "./archive.ts";
+import { wideHeaderBench } from "./wideHeader.ts";
 import { cliStartBench } from "./cliStart.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
@@ -14,6 +15,7 @@ export const benchCases: BenchCase[] = [
   projectionBench,
   underwayImportBench,
   underwayBinningBench,
+  wideHeaderBench,
   dashboardBench,
   bundleSizeBench,
   archiveBench,
