@@ -194,11 +194,11 @@ export class AppState {
   }
 
   /**
-   * Speciation context for the speciation panel, computed in the second worker (the one that reads
-   * dropped files) so a long analysis run does not hold it up.
+   * Speciation context for the speciation panel, computed in the analysis worker (already running
+   * when the panel shows; a running analysis answers between surveys). A newer request wins in the panel.
    */
   speciate(request: SpeciationRequest): Promise<SpeciationModel> {
-    return this.reader().speciation(request);
+    return this.#analysisApi().speciation(request);
   }
 
   /** Km ticks and length of a centerline being drawn, placed by the worker's centerline reader. */
