@@ -2,6 +2,9 @@ import jStat from "jstat";
 import { fUpperP } from "../stats/distributions.ts";
 import {
   breakRss,
+  gridTerms,
+  termsRss,
+  TERMS,
   loadResponse,
   putNormal,
   solveNormal,
@@ -197,9 +200,10 @@ export function fitTwoPhase(
   let bestB = sMax;
   let best = Number.POSITIVE_INFINITY;
   let bestI = 0;
+  const tg = gridTerms(ds, lo, GRID, third);
   for (let g = 0; g <= GRID; g++) {
     const b = lo + ((sMax - lo) * g) / GRID;
-    const r = breakRss(ds, b, third < b ? 4 : 3, c);
+    const r = termsRss(ds, tg, g * TERMS, c);
     if (r < best) {
       best = r;
       bestB = b;

@@ -22,6 +22,15 @@ export interface TwoPhaseDesign {
   /** Σw·(y − ȳ)² and ȳ of the current response. */
   ryy: number;
   ybar: number;
+  /** Straight-line fit of the current response (centred, in t) and its RSS from the normal equations. */
+  line0: number;
+  line1: number;
+  rssLine: number;
+  /** Determinant of the straight line's normal matrix [[Σw, Σwt], [Σwt, Σwt²]]. */
+  det11: number;
+  /** Cached design terms of the grid of candidate breaks starting at gridLo ({@link gridTerms}). */
+  grid?: Float64Array;
+  gridLo?: number;
 }
 
 /**
@@ -61,7 +70,10 @@ export function twoPhaseDesign(x: ArrayLike<number>, w: ArrayLike<number>): TwoP
       v *= t;
     }
   }
-  return { xs, ws, idx, n, sMin, sMax, range, p, q: new Float64Array((n + 1) * 4), ryy: 0, ybar: 0 };
+  const e = n * 7;
+  const det11 = p[e]! * p[e + 2]! - p[e + 1]! * p[e + 1]!;
+  const q = new Float64Array((n + 1) * 4);
+  return { xs, ws, idx, n, sMin, sMax, range, p, q, ryy: 0, ybar: 0, line0: 0, line1: 0, rssLine: 0, det11 };
 }
 
 /**
@@ -93,6 +105,12 @@ export function loadResponse(d: TwoPhaseDesign, y: ArrayLike<number>): void {
   }
   d.ryy = ryy;
   d.ybar = ybar;
+  const e = n * 7,
+    r0 = q[n * 4]!,
+    r1 = q[n * 4 + 1]!;
+  d.line0 = (d.p[e + 2]! * r0 - d.p[e + 1]! * r1) / d.det11;
+  d.line1 = (d.p[e]! * r1 - d.p[e + 1]! * r0) / d.det11;
+  d.rssLine = ryy - d.line0 * r0 - d.line1 * r1;
 }
 
 const M = new Float64Array(20);
@@ -169,13 +187,34 @@ export function putNormal(
   }
 }
 
+/** Slots of one break's design terms (see {@link breakTerms}). */
+export const TERMS = 14;
+const T_M = 0,
+  T_H = 1,
+  T_K = 2,
+  T_FAST = 3,
+  T_A02 = 4,
+  T_A12 = 5,
+  T_A22 = 6,
+  T_A03 = 7,
+  T_A13 = 8,
+  T_A23 = 9,
+  T_A33 = 10,
+  T_C22 = 11,
+  T_C23 = 12,
+  T_C33 = 13;
+
 /**
- * Weighted RSS of the two-phase model with break b (k = 3: h²; k = 4: h² and h³) for the loaded
- * response, from the prefix sums and the normal equations (RSS = Σw·ỹ² − βᵀr): O(log n).
- *
- * @returns the RSS, or +∞ when the normal equations are singular
+ * The response-free part of a candidate break b (k = 3: h²; k = 4: h² and h³), written to
+ * out[at … at + TERMS): landward count m, h_b, the normal-matrix entries from the prefix sums
+ * (Σ w·tʲ·(h_b − t)ⁱ by the binomial theorem; 0 ≤ t < h_b for the landward stations) and, when
+ * safe, the inverse of the Schur complement S of the straight line (1, t) for the closed form
+ * RSS = RSS_line − r̃ᵀ S⁻¹ r̃. The closed form is marked safe only when Gaussian elimination with
+ * partial pivoting would keep the first two pivots (Σw, then t's) and every later pivot stays far
+ * above the singularity threshold of {@link solveNormal} (1e-13·Σw); otherwise the general solve
+ * decides, as it always did (on the cached grid that decision is made once: 2 = singular).
  */
-export function breakRss(d: TwoPhaseDesign, b: number, k: number, coef: Float64Array): number {
+export function breakTerms(d: TwoPhaseDesign, b: number, k: number, out: Float64Array, at = 0): void {
   const xs = d.xs;
   let lo = 0,
     hi = d.n;
@@ -184,12 +223,9 @@ export function breakRss(d: TwoPhaseDesign, b: number, k: number, coef: Float64A
     if (xs[mid]! < b) lo = mid + 1;
     else hi = mid;
   }
-  const P = d.p,
-    Q = d.q;
+  const P = d.p;
   const o = lo * 7,
-    oq = lo * 4,
-    e = d.n * 7,
-    eq = d.n * 4;
+    e = d.n * 7;
   const p0 = P[o]!,
     p1 = P[o + 1]!,
     p2 = P[o + 2]!,
@@ -197,33 +233,168 @@ export function breakRss(d: TwoPhaseDesign, b: number, k: number, coef: Float64A
     p4 = P[o + 4]!,
     p5 = P[o + 5]!,
     p6 = P[o + 6]!;
-  const q0 = Q[oq]!,
-    q1 = Q[oq + 1]!,
-    q2 = Q[oq + 2]!,
-    q3 = Q[oq + 3]!;
   const h = (b - d.sMin) / d.range;
-  // Σ w·tʲ·(h − t)ⁱ by the binomial theorem (0 ≤ t < h for the landward stations).
   const a02 = (h * p0 - 2 * p1) * h + p2;
   const a12 = (h * p1 - 2 * p2) * h + p3;
   const a22 = (((h * p0 - 4 * p1) * h + 6 * p2) * h - 4 * p3) * h + p4;
-  const r2 = (h * q0 - 2 * q1) * h + q2;
   let a03 = 0,
     a13 = 0,
     a23 = 0,
-    a33 = 0,
-    r3 = 0;
+    a33 = 0;
   if (k >= 4) {
     a03 = ((h * p0 - 3 * p1) * h + 3 * p2) * h - p3;
     a13 = ((h * p1 - 3 * p2) * h + 3 * p3) * h - p4;
     a23 = ((((h * p0 - 5 * p1) * h + 10 * p2) * h - 10 * p3) * h + 5 * p4) * h - p5;
     a33 = (((((h * p0 - 6 * p1) * h + 15 * p2) * h - 20 * p3) * h + 15 * p4) * h - 6 * p5) * h + p6;
-    r3 = ((h * q0 - 3 * q1) * h + 3 * q2) * h - q3;
   }
+  out[at + T_M] = lo;
+  out[at + T_H] = h;
+  out[at + T_K] = k;
+  out[at + T_A02] = a02;
+  out[at + T_A12] = a12;
+  out[at + T_A22] = a22;
+  out[at + T_A03] = a03;
+  out[at + T_A13] = a13;
+  out[at + T_A23] = a23;
+  out[at + T_A33] = a33;
+  out[at + T_FAST] = 0;
+  out[at + T_C22] = out[at + T_C23] = out[at + T_C33] = Number.NaN;
+  const a00 = P[e]!,
+    a01 = P[e + 1]!,
+    a11 = P[e + 2]!;
+  const det = d.det11;
+  const p11 = det / a00;
+  const g02 = (a11 * a02 - a01 * a12) / det,
+    g12 = (a00 * a12 - a01 * a02) / det;
+  const s22 = a22 - a02 * g02 - a12 * g12;
+  const tiny = 1e-10 * a00;
+  let safe = p11 > tiny && p11 >= Math.abs(a12 - (a02 * a01) / a00) && s22 > tiny;
+  if (k < 4) {
+    if (s22 > 0) out[at + T_C22] = 1 / s22;
+    if (safe) out[at + T_FAST] = 1;
+    return;
+  }
+  const g03 = (a11 * a03 - a01 * a13) / det,
+    g13 = (a00 * a13 - a01 * a03) / det;
+  const s23 = a23 - a02 * g03 - a12 * g13;
+  const s33 = a33 - a03 * g03 - a13 * g13;
+  const detS = s22 * s33 - s23 * s23;
+  safe = safe && p11 >= Math.abs(a13 - (a03 * a01) / a00) && s33 > tiny && detS > tiny * Math.max(s22, s33);
+  if (s22 > 0 && s33 > 0 && detS > 0) {
+    out[at + T_C22] = s33 / detS;
+    out[at + T_C23] = -s23 / detS;
+    out[at + T_C33] = s22 / detS;
+  }
+  if (safe) out[at + T_FAST] = 1;
+}
+
+/**
+ * Weighted RSS of the two-phase model at a break whose design terms are in tm[at …] for the
+ * response loaded by {@link loadResponse}: the closed form when safe, else the normal equations
+ * solved by {@link solveNormal} (RSS = Σw·ỹ² − βᵀr).
+ *
+ * @returns the RSS, or +∞ when the normal equations are singular
+ */
+export function termsRss(d: TwoPhaseDesign, tm: Float64Array, at: number, coef: Float64Array): number {
+  const Q = d.q;
+  const oq = tm[at + T_M]! * 4;
+  const h = tm[at + T_H]!;
+  const k = tm[at + T_K]!;
+  const q0 = Q[oq]!,
+    q1 = Q[oq + 1]!,
+    q2 = Q[oq + 2]!,
+    q3 = Q[oq + 3]!;
+  const a02 = tm[at + T_A02]!,
+    a12 = tm[at + T_A12]!,
+    a03 = tm[at + T_A03]!,
+    a13 = tm[at + T_A13]!;
+  const r2 = (h * q0 - 2 * q1) * h + q2;
+  const r3 = k >= 4 ? ((h * q0 - 3 * q1) * h + 3 * q2) * h - q3 : 0;
+  const fast = tm[at + T_FAST]!;
+  if (fast === 2) return Number.POSITIVE_INFINITY;
+  if (fast === 1) {
+    const rt2 = r2 - a02 * d.line0 - a12 * d.line1;
+    if (k < 4) return Math.max(0, d.rssLine - rt2 * rt2 * tm[at + T_C22]!);
+    const rt3 = r3 - a03 * d.line0 - a13 * d.line1;
+    const gain = tm[at + T_C22]! * rt2 * rt2 + 2 * tm[at + T_C23]! * rt2 * rt3 + tm[at + T_C33]! * rt3 * rt3;
+    return Math.max(0, d.rssLine - gain);
+  }
+  const P = d.p,
+    e = d.n * 7,
+    eq = d.n * 4;
   const r0 = Q[eq]!,
     r1 = Q[eq + 1]!;
-  putNormal(k, P[e]!, P[e + 1]!, P[e + 2]!, a02, a12, a22, a03, a13, a23, a33, r0, r1, r2, r3);
+  putNormal(
+    k,
+    P[e]!,
+    P[e + 1]!,
+    P[e + 2]!,
+    a02,
+    a12,
+    tm[at + T_A22]!,
+    a03,
+    a13,
+    tm[at + T_A23]!,
+    tm[at + T_A33]!,
+    r0,
+    r1,
+    r2,
+    r3,
+  );
   coef[0] = coef[1] = coef[2] = coef[3] = 0;
   if (!solveNormal(k, coef)) return Number.POSITIVE_INFINITY;
   const rss = d.ryy - coef[0]! * r0 - coef[1]! * r1 - coef[2]! * r2 - coef[3]! * r3;
   return Number.isFinite(rss) ? Math.max(0, rss) : Number.POSITIVE_INFINITY;
+}
+
+const ONE = new Float64Array(TERMS);
+const SINK = new Float64Array(4);
+
+/** Weighted RSS at break b for the loaded response ({@link breakTerms} then {@link termsRss}). */
+export function breakRss(d: TwoPhaseDesign, b: number, k: number, coef: Float64Array): number {
+  breakTerms(d, b, k, ONE);
+  return termsRss(d, ONE, 0, coef);
+}
+
+/**
+ * Design terms of the grid of candidate breaks lo + (S_max − lo)·g/G, g = 0…G (cached on the
+ * design: the bootstrap's replicates share the grid).
+ *
+ * @param third salinity of the 3rd station (the cubic term needs it landward of the break)
+ */
+export function gridTerms(d: TwoPhaseDesign, lo: number, G: number, third: number): Float64Array {
+  if (d.grid && d.gridLo === lo && d.grid.length === (G + 1) * TERMS) return d.grid;
+  const grid = new Float64Array((G + 1) * TERMS);
+  for (let g = 0; g <= G; g++) {
+    const b = lo + ((d.sMax - lo) * g) / G;
+    const k = third < b ? 4 : 3;
+    const at = g * TERMS;
+    breakTerms(d, b, k, grid, at);
+    if (grid[at + T_FAST] === 1) continue;
+    // Not provably safe: decide once, as the general solve would (its pivots ignore y).
+    const P = d.p,
+      e = d.n * 7;
+    putNormal(
+      k,
+      P[e]!,
+      P[e + 1]!,
+      P[e + 2]!,
+      grid[at + T_A02]!,
+      grid[at + T_A12]!,
+      grid[at + T_A22]!,
+      grid[at + T_A03]!,
+      grid[at + T_A13]!,
+      grid[at + T_A23]!,
+      grid[at + T_A33]!,
+      0,
+      0,
+      0,
+      0,
+    );
+    if (!solveNormal(k, SINK)) grid[at + T_FAST] = 2;
+    else if (Number.isFinite(grid[at + T_C22]!) && (k < 4 || Number.isFinite(grid[at + T_C33]!))) grid[at + T_FAST] = 1;
+  }
+  d.grid = grid;
+  d.gridLo = lo;
+  return grid;
 }
