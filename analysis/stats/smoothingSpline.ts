@@ -112,7 +112,7 @@ export function fitPreparedSpline(
   y: ArrayLike<number>,
   out?: NaturalSpline,
 ): NaturalSpline {
-  return solveBand(p.scratch, p.n, p.lambda, p.x, y, p.w, out).spline;
+  return solveBand(p.scratch, p.n, p.lambda, p.x, y, p.w, out, false).spline;
 }
 
 /** Band LDLᵀ factors of R + λ·Qᵀ W⁻¹ Q (they depend on the knots, weights and λ only, not on y). */
@@ -156,6 +156,7 @@ function solveBand(
   y: ArrayLike<number>,
   w: ArrayLike<number>,
   out?: NaturalSpline,
+  withRss = true,
 ): { spline: NaturalSpline; rss: number } {
   const m = n - 2;
   const { ih, qa, qb, qc, e, f, z, idd, iw } = S;
@@ -183,7 +184,7 @@ function solveBand(
     const v = y[i]! - lambda * qg * iw[i]!;
     spline.values[i] = v;
     spline.knots[i] = x[i]!;
-    rss += w[i]! * (y[i]! - v) ** 2;
+    if (withRss) rss += w[i]! * (y[i]! - v) ** 2;
   }
   return { spline, rss };
 }
