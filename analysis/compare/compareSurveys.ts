@@ -4,6 +4,7 @@ import { DIFFERENCE_INTERVAL_METHOD } from "./differenceOfEstimates.ts";
 import { dischargeScaling } from "./dischargeScaling.ts";
 import { constituentShift } from "./constituentShift.ts";
 import { surveyProfile } from "./salinityKm.ts";
+import { maxOf } from "../survey/arrayExtent.ts";
 
 /** Options of {@link compareSurveys}. */
 export interface CompareOptions {
@@ -20,7 +21,7 @@ function intrusionRow(a: ComparableSurvey): IntrusionRow {
     ...(f.saltIntrusionKm !== undefined ? { saltIntrusionKm: f.saltIntrusionKm } : {}),
     saltIntrusionSalinity: f.saltIntrusionSalinity,
     isohalinesKm: f.isohalines.map((h) =>
-      h.km.length ? { salinity: h.salinity, km: Math.max(...h.km) } : { salinity: h.salinity },
+      h.km.length ? { salinity: h.salinity, km: maxOf(h.km) } : { salinity: h.salinity },
     ),
   };
 }

@@ -1,6 +1,7 @@
 import jStat from "jstat";
 import type { DischargeScaling, ReferenceScaling } from "./types.ts";
 import { formatFixed } from "../output/formatNumber.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Published discharge scalings of the salt-intrusion length L ∝ Q^n (@see bibliography keys hansenRattray1965, chatwin1976, monismith2002). */
 export const REFERENCE_SCALINGS: readonly ReferenceScaling[] = [
@@ -74,7 +75,7 @@ export function dischargeScaling(
     salinity,
     exponent: slope,
     nSurveys: n,
-    dischargeRangeM3s: [Math.min(...qs), Math.max(...qs)],
+    dischargeRangeM3s: [minOf(qs), maxOf(qs)],
     references: [...REFERENCE_SCALINGS],
     note: "",
   };

@@ -3,6 +3,7 @@
  */
 import type { GeometryWarning } from "./types.ts";
 import type { IsohalinePosition, SalinityProfile } from "./salinityTypes.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Default isohalines reported (PSS-78): 1, 2, 5, 10, 20. */
 export const DEFAULT_ISOHALINES = [1, 2, 5, 10, 20] as const;
@@ -30,7 +31,7 @@ export function crossingsKm(profile: SalinityProfile, s: number): number[] {
 }
 
 function rangeText(p: SalinityProfile): string {
-  return `${Math.min(...p.salinity).toFixed(2)}–${Math.max(...p.salinity).toFixed(2)}`;
+  return `${minOf(p.salinity).toFixed(2)}–${maxOf(p.salinity).toFixed(2)}`;
 }
 
 /**

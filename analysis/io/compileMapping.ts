@@ -5,6 +5,7 @@ import { makeIssue } from "./importSummary.ts";
 import { projDefinition } from "./projection.ts";
 import type { UnitParser } from "./unitText.ts";
 import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
+import { variableKind } from "./variableKinds.ts";
 
 /** Roles that take a single column. */
 export type SingleRole = Exclude<ColumnRole, "constituent" | "flag" | "ignore">;
@@ -27,6 +28,26 @@ export interface CompiledMapping {
   /** Conductivity unit factor to mS/cm. */
   conductivityToMScm?: number;
   constituentList: Constituent[];
+}
+
+function looseHeader(h: string): string {
+  return h.trim().toLowerCase();
+}
+
+/** Column positions by exact header and by trimmed lower-case header, built once (linear in the columns). */
+function headerIndex(headers: readonly string[]): { exact: Map<string, number[]>; loose: Map<string, number[]> } {
+  const exact = new Map<string, number[]>();
+  const loose = new Map<string, number[]>();
+  headers.forEach((h, i) => {
+    const e = exact.get(h);
+    if (e === undefined) exact.set(h, [i]);
+    else e.push(i);
+    const k = looseHeader(h);
+    const l = loose.get(k);
+    if (l === undefined) loose.set(k, [i]);
+    else l.push(i);
+  });
+  return { exact, loose };
 }
 
 /** Units the single-value roles are read in; a header naming another unit is an error, never converted by guess. */
@@ -61,19 +82,53 @@ export function compileMapping(
     flagOf: new Map(),
     constituentList: [],
   };
+  const columns = headerIndex(headers);
+  for (const [h, list] of columns.exact)
+    if (list.length > 1)
+      issues.push(
+        makeIssue(
+          file,
+          1,
+          h,
+          h,
+          `one column per header; "${h}" heads columns ${list.map((i) => i + 1).join(", ")} (told apart by position; rename them to make the file unambiguous)`,
+          "warning",
+        ),
+      );
+  // Repeated headers are matched to the mapping's assignments in order (first assignment → first column).
+  const taken = new Map<string, number>();
+  const nextIndex = (h: string): number => {
+    const list = columns.exact.get(h) ?? columns.loose.get(looseHeader(h)) ?? [];
+    const n = taken.get(h) ?? 0;
+    taken.set(h, n + 1);
+    return list[Math.min(n, list.length - 1)] ?? -1;
+  };
   const indexOf = (h: string): number => {
-    const exact = headers.indexOf(h);
-    return exact >= 0 ? exact : headers.findIndex((x) => x.trim().toLowerCase() === h.trim().toLowerCase());
+    const list = columns.exact.get(h) ?? columns.loose.get(looseHeader(h));
+    return list?.[0] ?? -1;
   };
   const keys = new Set<string>();
   for (const col of mapping.columns) {
-    const i = indexOf(col.header);
+    const i = nextIndex(col.header);
     if (i < 0) {
       if (col.role !== "ignore")
         issues.push(makeIssue(file, 0, col.header, "", `column "${col.header}" named in the mapping`, "warning"));
       continue;
     }
-    if (col.role === "ignore") continue;
+    if (col.role === "ignore") {
+      if (col.reason?.startsWith("second ") === true)
+        issues.push(
+          makeIssue(
+            file,
+            1,
+            col.header,
+            col.header,
+            `one ${col.reason.slice(7)}; column ${i + 1} is not used`,
+            "warning",
+          ),
+        );
+      continue;
+    }
     if (col.role === "flag") {
       const target = col.flagFor === undefined ? -1 : indexOf(col.flagFor);
       if (target < 0)
@@ -84,7 +139,11 @@ export function compileMapping(
       continue;
     }
     if (col.role === "constituent") {
-      const unit = col.unit === undefined ? undefined : concentrationUnitText(col.unit);
+      const symbol = col.name ?? col.header;
+      const conc = col.unit === undefined ? undefined : concentrationUnitText(col.unit);
+      const other = col.unit === undefined || conc !== undefined ? undefined : parseUnit(col.unit);
+      const kind = variableKind(symbol, conc ?? other, conc !== undefined);
+      const unit = conc ?? (kind.kind === "nonMixing" ? other : undefined);
       if (unit === undefined) {
         const found = col.unit ?? col.unitText ?? "";
         issues.push(
@@ -93,19 +152,25 @@ export function compileMapping(
             0,
             col.header,
             found,
-            "a concentration unit from the units table (e.g. nmol/L, µmol/kg, µg/L; ppm/ppb/ppt are ambiguous) — set it in the column mapping; column not imported",
+            `a ${kind.kind === "nonMixing" ? "unit" : "concentration unit from the units table (e.g. nmol/L, µmol/kg, µg/L; ppm/ppb/ppt are ambiguous)"} — set it with --unit "${col.header}=<unit>" or in the column mapping; column not imported`,
+            kind.kind === "nonMixing" ? "warning" : "error",
           ),
         );
         continue;
       }
-      const name = col.name ?? col.header;
+      const name = symbol;
       let key = name;
       if (keys.has(key)) {
-        key = `${name} (${col.header})`;
+        key = keys.has(`${name} (${col.header})`) ? `${name} (column ${i + 1})` : `${name} (${col.header})`;
         issues.push(makeIssue(file, 0, col.header, name, `one column per constituent; stored as "${key}"`, "warning"));
       }
       keys.add(key);
+      const chosenKind = col.kind ?? kind.kind;
       const constituent: Constituent = { name: key, unit, header: col.header };
+      if (chosenKind === "nonMixing") {
+        constituent.kind = "nonMixing";
+        if (kind.reason !== undefined) constituent.kindReason = kind.reason;
+      }
       compiled.constituents.push({ index: i, key, constituent });
       compiled.constituentList.push(constituent);
       continue;

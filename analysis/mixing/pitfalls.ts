@@ -1,5 +1,6 @@
 import type { Endmember, MixingWarning } from "./result.ts";
 import type { AnalyzeOptions } from "./options.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** River variability counts when it exceeds this fraction of C₀ (and 2σ analytical). */
 export const RIVER_VARIABILITY_FRACTION = 0.1;
@@ -50,7 +51,7 @@ export function riverVariability(
     const tf = opts.flushingTimeDays;
     const inWindow = hist.filter((h) => h.daysBeforeSurvey >= 0 && (tf === undefined || h.daysBeforeSurvey <= tf));
     const values = [river.conc, ...inWindow.map((h) => h.conc)];
-    const range = Math.max(...values) - Math.min(...values);
+    const range = maxOf(values) - minOf(values);
     if (range > limit) {
       const mean = values.reduce((a, b) => a + b, 0) / values.length;
       widenedSd = Math.sqrt(values.reduce((a, b) => a + (b - mean) ** 2, 0) / Math.max(1, values.length - 1));

@@ -5,6 +5,7 @@ import { underwayImportBench } from "./underwayImport.ts";
 import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
+import { wideHeaderBench } from "./wideHeader.ts";
 import { cliStartBench } from "./cliStart.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
@@ -13,6 +14,7 @@ export const benchCases: BenchCase[] = [
   projectionBench,
   underwayImportBench,
   underwayBinningBench,
+  wideHeaderBench,
   dashboardBench,
   bundleSizeBench,
   cliStartBench,

@@ -8,8 +8,10 @@
 import * as maplibregl from "maplibre-gl";
 import type { GeoJSONSource, Map as MapLibreMap, MapLayerMouseEvent, MapMouseEvent } from "maplibre-gl";
 import type { FeatureCollection } from "geojson";
-import { drawnTicks, dedupeVertices, type DrawnTick, type MouthEnd } from "./drawnLine.ts";
+import { DRAWN_FILE_NAME, dedupeVertices, drawnCenterlineGeoJson, type MouthEnd } from "./drawnLine.ts";
 import type { LonLat } from "../worker/overlay.ts";
+import type { TextFile } from "../worker/protocol.ts";
+import type { DrawnPreview } from "../worker/drawnPreview.ts";
 
 export type DrawMode = "idle" | "drawing" | "editing";
 
@@ -26,16 +28,14 @@ export class DrawController {
   mode = $state<DrawMode>("idle");
   vertices = $state.raw<LonLat[]>([]);
   mouth = $state<MouthEnd>("start");
-  /** Km ticks of the drawn line (analysis/geometry), updated live. */
-  readonly drawn: { ticks: DrawnTick[]; lengthKm: number } = $derived.by(() => {
-    try {
-      return drawnTicks(this.vertices, this.mouth);
-    } catch {
-      return { ticks: [], lengthKm: 0 };
-    }
-  });
+  /** Km ticks of the drawn line, placed by the worker, updated as the line changes. */
+  drawn = $state.raw<DrawnPreview>({ ticks: [], lengthKm: 0 });
+  #previewKey = "";
   /** Called when a line is finished or edited (dragged) while editing. */
   onChange: ((vertices: LonLat[], mouth: MouthEnd) => void) | undefined;
+
+  /** @param preview asks the worker for the ticks of a drawn centerline file */
+  constructor(readonly preview?: (file: TextFile) => Promise<DrawnPreview>) {}
 
   #map: MapLibreMap | undefined;
   #dragIndex: number | null = null;
@@ -210,8 +210,32 @@ export class DrawController {
     for (const m of this.#markers.splice(0)) m.remove();
   }
 
+  /** Asks the worker for the ticks when the line or its mouth changed; a newer line wins. */
+  #refreshPreview(): void {
+    const v = dedupeVertices(this.vertices);
+    const key = JSON.stringify([v, this.mouth]);
+    if (key === this.#previewKey) return;
+    this.#previewKey = key;
+    if (v.length < 2 || !this.preview) {
+      this.drawn = { ticks: [], lengthKm: 0 };
+      return;
+    }
+    const file = { name: DRAWN_FILE_NAME, text: JSON.stringify(drawnCenterlineGeoJson(v, this.mouth)) };
+    this.preview(file).then(
+      (preview) => {
+        if (key !== this.#previewKey) return;
+        this.drawn = preview;
+        this.render();
+      },
+      () => {
+        if (key === this.#previewKey) this.drawn = { ticks: [], lengthKm: 0 };
+      },
+    );
+  }
+
   /** Pushes the line, handles, ticks and km labels into MapLibre. */
   render(): void {
+    this.#refreshPreview();
     const map = this.#map;
     if (!map) return;
     const v = this.vertices;

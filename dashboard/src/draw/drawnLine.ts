@@ -1,20 +1,14 @@
 /**
- * A centerline drawn on the map: the GeoJSON it exports (RFC 7946, [lon, lat])
- * and its km ticks, computed with analysis/geometry exactly as for a loaded file.
+ * A centerline drawn on the map: the GeoJSON it exports (RFC 7946, [lon, lat]).
+ * Its km ticks come from the worker (worker/drawnPreview.ts), which reads the
+ * drawn file with the one centerline reader.
  */
-import { buildChannelNetwork, kmTicks, type ChannelNetwork } from "../../../analysis/index.ts";
 import type { LonLat } from "../worker/overlay.ts";
+
+export type { DrawnTick } from "../worker/drawnPreview.ts";
 
 /** Which vertex of the drawn line is the estuary mouth. */
 export type MouthEnd = "start" | "end";
-
-/** A km tick of the drawn line, as drawn on the map. */
-export interface DrawnTick {
-  km: number;
-  lonLat: LonLat;
-  label: string;
-  major: boolean;
-}
 
 /** File name of the exported centerline. */
 export const DRAWN_FILE_NAME = "drawn-centerline.geojson";
@@ -73,31 +67,4 @@ export function drawnCenterlineGeoJson(vertices: readonly LonLat[], mouth: Mouth
       },
     ],
   };
-}
-
-/** Tick spacing [km] giving about ten ticks along a line of the given length. */
-export function tickSpacingKm(lengthKm: number): number {
-  const steps = [0.1, 0.2, 0.5, 1, 2, 5, 10, 20, 50];
-  return steps.find((s) => lengthKm / s <= 12) ?? 100;
-}
-
-/** The channel network of the drawn line (analysis/geometry), or undefined with fewer than 2 distinct vertices. */
-export function drawnNetwork(vertices: readonly LonLat[], mouth: MouthEnd): ChannelNetwork | undefined {
-  const coords = dedupeVertices(vertices);
-  if (coords.length < 2) return undefined;
-  return buildChannelNetwork({ type: "LineString", coordinates: coords }, { mouth });
-}
-
-/** Km ticks of the drawn line from its mouth (analysis/geometry kmTicks); every tick labelled. */
-export function drawnTicks(vertices: readonly LonLat[], mouth: MouthEnd): { ticks: DrawnTick[]; lengthKm: number } {
-  const network = drawnNetwork(vertices, mouth);
-  if (!network) return { ticks: [], lengthKm: 0 };
-  const spacing = tickSpacingKm(network.totalLengthKm);
-  const ticks = kmTicks(network, spacing).features.map((f) => ({
-    km: f.properties.km,
-    lonLat: f.geometry.coordinates,
-    label: f.properties.label,
-    major: true,
-  }));
-  return { ticks, lengthKm: network.totalLengthKm };
 }

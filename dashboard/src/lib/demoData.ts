@@ -4,11 +4,9 @@
  * missing; the app then shows what is there and says what is absent.
  */
 
-/** A text file as the analysis readers take it. */
-export interface TextFile {
-  name: string;
-  text: string;
-}
+import type { TextFile } from "../worker/protocol.ts";
+
+export type { TextFile };
 
 export interface DemoBundle {
   /** Survey CSV files, sorted by name. */

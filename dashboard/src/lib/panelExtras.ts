@@ -2,11 +2,13 @@
  * Extra props some panels take beyond `{ analysis, selection }`.
  */
 import type { CarbonateEndmember } from "../../../analysis/index.ts";
+import type { CarbonateSetting } from "../state/settings.svelte.ts";
 
 /**
- * Carbonate end-members for the expected-pH curve of the speciation panel. These are assumed
- * values for the invented demo estuary (a soft-water river and coastal seawater, in µmol/kg), not
- * measurements; users replace them with their own alkalinity and inorganic-carbon data.
+ * Carbonate end-members for the expected-pH curve of the speciation panel while the invented demo
+ * runs. These are assumed values for the invented demo estuary (a soft-water river and coastal
+ * seawater, in µmol/kg), not measurements, and are labelled so in the panel; imported data start
+ * without end-members (Settings → Carbonate end-members).
  */
 export const DEMO_CARBONATE: { river: CarbonateEndmember; sea: CarbonateEndmember } = {
   river: { salinity: 0, taUmolKg: 1000, dicUmolKg: 1050 },
@@ -18,9 +20,12 @@ export function mapCanvases(): HTMLCanvasElement[] {
   return [...document.querySelectorAll<HTMLCanvasElement>(".map-area canvas")];
 }
 
-/** Extra props by panel id. */
-export function panelExtras(id: string): Record<string, unknown> {
-  if (id === "SpeciationPanel") return { carbonate: DEMO_CARBONATE };
+/** Extra props by panel id; the speciation panel gets the carbonate end-members the user set (or the demo's). */
+export function panelExtras(id: string, carbonate?: CarbonateSetting): Record<string, unknown> {
+  if (id === "SpeciationPanel")
+    return carbonate
+      ? { carbonate: { river: carbonate.river, sea: carbonate.sea }, carbonateInvented: carbonate.invented }
+      : {};
   if (id === "ExportMenu") return { mapCanvases };
   return {};
 }

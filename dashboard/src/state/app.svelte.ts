@@ -1,54 +1,79 @@
 /**
- * The dashboard's state root: workspace, settings and selection, the worker
- * that fills the workspace, and the values derived from them for the header
- * and the map. Every number shown comes from analysis/ through the worker.
+ * The dashboard's state root, owned by App.svelte: settings, selection, the analysis results
+ * (a snapshot of what the worker found), the saved workspace (surveys, centerline, mappings,
+ * persistence) and the import flow, plus the two workers (one analyses, one reads dropped files).
+ * Dependencies run components → state → worker; every number shown comes from analysis/ through
+ * the worker.
  */
-import type { FeatureCollection } from "geojson";
 import type { Survey } from "../../../analysis/index.ts";
 import { Selection } from "./selection.svelte.ts";
 import { Settings, type AnalysisSettings } from "./settings.svelte.ts";
-import { Workspace } from "./workspace.svelte.ts";
-import { AnalysisClient } from "../worker/client.ts";
-import type { WorkerResponse } from "../worker/protocol.ts";
-import type { DemoBundle, TextFile } from "../lib/demoData.ts";
+import { AnalysisResults } from "./results.svelte.ts";
+import { SavedWorkspace } from "./savedWorkspace.svelte.ts";
+import { ImportFlow } from "./importFlow.svelte.ts";
+import { memoryStore, type WorkspaceStore } from "./workspaceStore.ts";
+import { proxyCallback, startWorker, type RemoteApi, type WorkerHandle } from "../worker/client.ts";
+import type { AnalysisJob, TextFile } from "../worker/protocol.ts";
+import type { BrushedStretch } from "../worker/brushStretch.ts";
+import type { DrawnPreview } from "../worker/drawnPreview.ts";
 import type { MapData, MapStation } from "../map/mapData.ts";
 import { deviationsById, placementsById } from "../lib/analysisView.ts";
 import { withObservations } from "../panels/lib/observations.ts";
-import { brushStretch, networkOf } from "../lib/brushStretch.ts";
 import type { SurveyAnalysisView } from "../panels/lib/types.ts";
 
-/** Parses GeoJSON text for the basemap, reporting (not throwing) problems. */
-function parseGeoJson(text: string | undefined): FeatureCollection | undefined {
-  if (!text) return undefined;
-  const parsed = JSON.parse(text) as FeatureCollection;
-  return parsed.type === "FeatureCollection" ? parsed : undefined;
+/** What the root needs from outside: where to keep the workspace and how to start a worker. */
+export interface AppOptions {
+  store?: WorkspaceStore;
+  /** Starts a worker (the browser's by default; tests pass one running in-process). */
+  connect?: (name: string, onFail: (message: string) => void) => WorkerHandle;
+  now?: () => Date;
 }
 
+const NO_STRETCH: BrushedStretch = { km: [], paths: [] };
+
 export class AppState {
-  readonly workspace = new Workspace();
   readonly settings = new Settings();
   readonly selection = new Selection();
-  #client: AnalysisClient | undefined;
-  /** The channel centerline file the analysis uses now (demo, imported, drawn or restored). */
-  centerlineFile = $state.raw<TextFile | undefined>(undefined);
-  /** Waiting briefing request (resolved with the HTML when the worker answers). */
-  #briefing: { resolve: (html: string) => void; reject: (error: Error) => void } | undefined;
+  readonly results = new AnalysisResults();
+  readonly workspace: SavedWorkspace;
+  readonly importFlow: ImportFlow;
+  readonly #connect: NonNullable<AppOptions["connect"]>;
+  #analyser: WorkerHandle | undefined;
+  #reader: WorkerHandle | undefined;
+  /** Counts analysis jobs; events of a superseded job are dropped. */
+  #job = 0;
+  #brushAsk = 0;
+  /** The channel stretch where salinity lies in the brushed range (placed by the worker). */
+  brushedStretch = $state.raw<BrushedStretch>(NO_STRETCH);
+  /** Everything the map draws. */
+  readonly mapData: MapData;
+
+  constructor(options: AppOptions = {}) {
+    this.#connect = options.connect ?? startWorker;
+    this.workspace = new SavedWorkspace(this, options.store ?? memoryStore(), options.now);
+    this.importFlow = new ImportFlow(this.workspace, () => this.reader());
+    this.mapData = $derived({
+      basemap: this.workspace.basemap,
+      channel: this.results.channel,
+      overlay: this.overlay,
+      zone: this.overlay?.constituents[this.selection.constituent],
+      brushPaths: this.brushedStretch.paths,
+      stations: this.mapStations,
+      constituent: this.selection.constituent,
+      unit: this.unit,
+      colouring: this.settings.colouring,
+    });
+  }
 
   /** The active survey. */
-  readonly survey: Survey | undefined = $derived(this.workspace.surveys[this.selection.surveyIndex]);
+  readonly survey: Survey | undefined = $derived(this.results.surveys[this.selection.surveyIndex]);
   /** The active survey's analysis (undefined while the worker works). */
-  readonly analysis = $derived(this.workspace.analyses[this.selection.surveyIndex]);
-  /** Channel network of the active centerline (for placing a brushed salinity range on the channel). */
-  readonly #network = $derived(networkOf(this.centerlineFile?.text));
-  /** The channel stretch where salinity lies in the brushed range (km intervals and map paths). */
-  readonly brushedStretch = $derived(
-    brushStretch(this.#network, this.analysis?.salinityProfile, this.selection.salinityBrush),
-  );
+  readonly analysis = $derived(this.results.analyses[this.selection.surveyIndex]);
   /** The analysis as the panels take it: with every observation, QC-rejected ones included, for drawing. */
   readonly panelAnalysis: SurveyAnalysisView | undefined = $derived(
     this.analysis && this.survey ? withObservations(this.analysis, this.survey) : undefined,
   );
-  readonly overlay = $derived(this.workspace.overlays[this.selection.surveyIndex]);
+  readonly overlay = $derived(this.results.overlays[this.selection.surveyIndex]);
   readonly constituents = $derived(this.survey?.constituents ?? []);
   readonly unit = $derived(this.constituents.find((c) => c.name === this.selection.constituent)?.unit ?? "");
 
@@ -81,32 +106,60 @@ export class AppState {
     return out;
   });
 
-  readonly mapData: MapData = $derived({
-    basemap: this.workspace.basemap,
-    channel: this.workspace.channel,
-    overlay: this.overlay,
-    zone: this.overlay?.constituents[this.selection.constituent],
-    brushPaths: this.brushedStretch.paths,
-    stations: this.mapStations,
-    constituent: this.selection.constituent,
-    unit: this.unit,
-    colouring: this.settings.colouring,
-  });
+  /** The worker that analyses (started on first use). */
+  #analysisApi(): RemoteApi {
+    this.#analyser ??= this.#connect("brackline-analysis", (message) =>
+      this.results.receive({ type: "error", message }),
+    );
+    return this.#analyser.api;
+  }
 
-  /** Starts the worker on a bundle of files (the demo by default). */
-  start(bundle: DemoBundle): void {
-    try {
-      this.workspace.basemap = parseGeoJson(bundle.basemap?.text);
-    } catch (error) {
-      this.workspace.errors = [...this.workspace.errors, `basemap.geojson: ${String(error)}`];
-    }
-    this.#client ??= new AnalysisClient((m) => this.#receive(m));
-    this.workspace.begin(true);
-    this.centerlineFile = bundle.centerline;
-    this.#client.send({
-      type: "load",
-      surveys: bundle.surveys,
-      centerline: bundle.centerline,
+  /** The worker that reads dropped files and underway logs (started on first use). */
+  reader(): RemoteApi {
+    this.#reader ??= this.#connect("brackline-import", () => undefined);
+    return this.#reader.api;
+  }
+
+  /** Sends one job to the analysis worker; its events fill the results until a newer job starts. */
+  run(job: AnalysisJob): Promise<void> {
+    const id = ++this.#job;
+    this.results.begin(job.kind === "load");
+    const onEvent = proxyCallback((event: Parameters<AnalysisResults["receive"]>[0]) => {
+      if (id !== this.#job) return;
+      this.results.receive(event);
+      if (event.type === "loaded") {
+        if (this.selection.surveyIndex >= event.surveys.length) this.selection.surveyIndex = 0;
+        const names = event.surveys[this.selection.surveyIndex]?.constituents.map((c) => c.name) ?? [];
+        if (names.length > 0 && !names.includes(this.selection.constituent)) this.selection.constituent = names[0];
+      }
+    });
+    return this.#analysisApi()
+      .run(job, onEvent)
+      .catch((error: unknown) => {
+        if (id === this.#job) this.results.receive({ type: "error", message: String(error) });
+      });
+  }
+
+  #settingsSnapshot(): AnalysisSettings {
+    return $state.snapshot(this.settings.analysis) as AnalysisSettings;
+  }
+
+  /** Reads survey files and a centerline in the worker and analyses them (the demo at start-up). */
+  load(surveys: TextFile[], centerline: TextFile | undefined): Promise<void> {
+    return this.run({
+      kind: "load",
+      surveys,
+      ...(centerline ? { centerline } : {}),
+      settings: this.#settingsSnapshot(),
+    });
+  }
+
+  /** Replaces the analysed surveys with surveys already read (an import or a restored workspace). */
+  loadSurveys(surveys: Survey[], centerline: TextFile | undefined): Promise<void> {
+    return this.run({
+      kind: "setSurveys",
+      surveys: $state.snapshot(surveys) as Survey[],
+      ...(centerline ? { centerline } : {}),
       settings: this.#settingsSnapshot(),
     });
   }
@@ -114,69 +167,46 @@ export class AppState {
   /** Changes analysis settings and re-runs the analysis in the worker. */
   updateSettings(patch: Partial<AnalysisSettings>): void {
     this.settings.updateAnalysis(patch);
-    if (!this.#client) return;
-    this.workspace.begin(false);
-    this.#client.send({ type: "analyze", settings: this.#settingsSnapshot() });
+    if (!this.#analyser) return;
+    void this.run({ kind: "analyze", settings: this.#settingsSnapshot() });
   }
 
   /** Replaces the channel centerline (e.g. one drawn on the map) and re-analyses every survey in the worker. */
   setCenterline(file: TextFile): void {
-    if (!this.#client) return;
-    this.workspace.begin(false);
-    this.centerlineFile = file;
-    this.#client.send({ type: "centerline", centerline: file, settings: this.#settingsSnapshot() });
+    this.workspace.centerline = file;
+    this.workspace.dirty = true;
+    void this.run({ kind: "centerline", centerline: file, settings: this.#settingsSnapshot() });
+  }
+
+  /**
+   * Asks the worker where the brushed salinity range lies on the channel for the active survey;
+   * a newer request wins.
+   */
+  async placeBrush(surveyIndex: number, range: [number, number] | null): Promise<void> {
+    const ask = ++this.#brushAsk;
+    if (!range || !this.#analyser) {
+      this.brushedStretch = NO_STRETCH;
+      return;
+    }
+    const stretch = await this.#analyser.api.brushStretch(surveyIndex, [range[0], range[1]]);
+    if (ask === this.#brushAsk) this.brushedStretch = stretch;
+  }
+
+  /** Km ticks and length of a centerline being drawn, placed by the worker's centerline reader. */
+  previewCenterline(file: TextFile): Promise<DrawnPreview> {
+    return this.#analysisApi().previewCenterline(file);
   }
 
   /** Asks the worker for the self-contained HTML briefing of the analysed surveys. */
   requestBriefing(dataNotice?: string): Promise<string> {
-    const client = this.#client;
-    if (!client) return Promise.reject(new Error("The analysis worker is not running."));
-    this.#briefing?.reject(new Error("Superseded by a newer briefing request."));
-    return new Promise<string>((resolve, reject) => {
-      this.#briefing = { resolve, reject };
-      client.send({
-        type: "briefing",
-        basemap: $state.snapshot(this.workspace.basemap),
-        ...(dataNotice ? { dataNotice } : {}),
-      });
-    });
-  }
-
-  /** Replaces the loaded surveys with surveys already read (an import or a restored workspace) and analyses them. */
-  loadSurveys(surveys: Survey[], centerline: TextFile | undefined, basemap: FeatureCollection | undefined): void {
-    this.workspace.basemap = basemap;
-    this.#client ??= new AnalysisClient((m) => this.#receive(m));
-    this.workspace.begin(false);
-    this.centerlineFile = centerline;
-    this.#client.send({
-      type: "setSurveys",
-      surveys,
-      ...(centerline ? { centerline } : {}),
-      settings: this.#settingsSnapshot(),
-    });
-  }
-
-  #settingsSnapshot(): AnalysisSettings {
-    return $state.snapshot(this.settings.analysis) as AnalysisSettings;
-  }
-
-  #receive(message: WorkerResponse): void {
-    if (message.type === "briefing" || (message.type === "error" && this.#briefing)) {
-      const pending = this.#briefing;
-      this.#briefing = undefined;
-      if (message.type === "briefing") pending?.resolve(message.html);
-      else pending?.reject(new Error(message.message));
-      if (message.type === "briefing") return;
-    }
-    this.workspace.receive(message);
-    if (message.type === "loaded") {
-      if (this.selection.surveyIndex >= message.surveys.length) this.selection.surveyIndex = 0;
-      const names = message.surveys[this.selection.surveyIndex]?.constituents.map((c) => c.name) ?? [];
-      if (names.length > 0 && !names.includes(this.selection.constituent)) this.selection.constituent = names[0];
-    }
+    if (!this.#analyser) return Promise.reject(new Error("The analysis worker is not running."));
+    return this.#analyser.api.briefing($state.snapshot(this.workspace.basemap), dataNotice);
   }
 
   destroy(): void {
-    this.#client?.terminate();
+    this.#analyser?.terminate();
+    this.#reader?.terminate();
+    this.#analyser = undefined;
+    this.#reader = undefined;
   }
 }

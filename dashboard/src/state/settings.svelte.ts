@@ -1,39 +1,29 @@
+import type { CarbonateEndmember } from "../../../analysis/index.ts";
 /**
  * User settings that steer the analysis or the display. Analysis settings are
  * sent to the worker; display settings only change how the map draws.
  */
 
-/** A user-given end-member (overrides the one found from the data). */
-export interface EndmemberOverride {
-  salinity: number;
-  conc: number;
-  concSd?: number;
-}
+import type { AnalysisSettings, ConstituentOverrides } from "../worker/protocol.ts";
 
-/** End-member overrides for one constituent. */
-export interface ConstituentOverrides {
-  river?: EndmemberOverride;
-  sea?: EndmemberOverride;
-}
+export type { AnalysisSettings, ConstituentOverrides, EndmemberOverride } from "../worker/protocol.ts";
 
 /** How stations are coloured on the map. */
 export type StationColouring = "salinity" | "deviation";
 
-/** The settings of the analysis itself (sent to the worker). */
-export interface AnalysisSettings {
-  /** End-member overrides keyed by constituent name. */
-  endmemberOverrides: Record<string, ConstituentOverrides>;
-  /** Analytical precision per constituent [% of value], overriding the defaults. */
-  precisionPercent: Record<string, number>;
-  /** River discharge [m³/s] overriding the survey's own value, or undefined. */
-  riverDischargeM3s: number | undefined;
-  /** Name of the constant set used for speciation. */
-  constantSet: string;
-  /** Salinity of the isohaline that marks the salt intrusion (default 2). */
-  saltIntrusionSalinity: number;
+/**
+ * TA/DIC end-members [µmol/kg] for the expected pH along the mixing line (speciation panel). A user
+ * setting, absent unless given; `invented` marks the demo estuary's assumed values (not measurements).
+ */
+export interface CarbonateSetting {
+  river: CarbonateEndmember;
+  sea: CarbonateEndmember;
+  invented: boolean;
 }
 
 export class Settings {
+  /** Carbonate end-members for the expected-pH curve; undefined until the user gives them (or the demo runs). */
+  carbonate = $state.raw<CarbonateSetting | undefined>(undefined);
   /** Analysis settings; replaced whole so the worker gets a plain object. */
   analysis = $state.raw<AnalysisSettings>({
     endmemberOverrides: {},

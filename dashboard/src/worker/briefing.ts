@@ -9,8 +9,8 @@ import {
   type ProvenanceFile,
   type SurveyAnalysis,
 } from "../../../analysis/index.ts";
-import type { TextFile } from "../lib/demoData.ts";
-import type { Channel } from "./engine.ts";
+import type { SourceFile, TextFile } from "./protocol.ts";
+import type { ChannelNetwork } from "../../../analysis/index.ts";
 
 /** Same software line and bootstrap settings as the command line's defaults (analyzeSurvey: 2000 draws, seed 1). */
 const SOFTWARE = "Brackline 0.1.0";
@@ -24,13 +24,16 @@ async function sha256Hex(bytes: Uint8Array): Promise<string | undefined> {
 }
 
 /** Name, role, size and SHA-256 of the files behind the analysis, for the provenance table. */
-export async function fileProvenance(surveys: TextFile[], centerline: TextFile | undefined): Promise<ProvenanceFile[]> {
+export async function fileProvenance(
+  surveys: SourceFile[],
+  centerline: TextFile | undefined,
+): Promise<ProvenanceFile[]> {
   const encoder = new TextEncoder();
   const out: ProvenanceFile[] = [];
-  const entries: Array<[TextFile, ProvenanceFile["role"]]> = surveys.map((f) => [f, "survey"]);
+  const entries: Array<[SourceFile, ProvenanceFile["role"]]> = surveys.map((f) => [f, "survey"]);
   if (centerline) entries.push([centerline, "centerline"]);
   for (const [file, role] of entries) {
-    const bytes = encoder.encode(file.text);
+    const bytes = "text" in file ? encoder.encode(file.text) : file.bytes;
     const sha256 = await sha256Hex(bytes);
     out.push({ name: file.name, role, bytes: bytes.length, ...(sha256 ? { sha256 } : {}) });
   }
@@ -40,7 +43,7 @@ export async function fileProvenance(surveys: TextFile[], centerline: TextFile |
 /** The self-contained HTML briefing of the analysed surveys (the first is the comparison's reference). */
 export function briefingHtml(
   analyses: SurveyAnalysis[],
-  network: Channel,
+  network: ChannelNetwork | undefined,
   files: ProvenanceFile[],
   basemap: unknown,
   dataNotice: string | undefined,

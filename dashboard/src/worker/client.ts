@@ -1,42 +1,37 @@
 /**
- * Main-thread side of the analysis worker: sends requests with fresh ids and
- * hands replies to the caller, dropping those of superseded requests.
+ * Main-thread side of the worker: starts an instance of analysis.worker.ts and wraps its API
+ * with Comlink, so every call is a typed async function (`WorkerApi` from api.ts). Callbacks
+ * (progress, analysis events) are passed through `proxyCallback`.
  */
-import type { WorkerRequest, WorkerResponse } from "./protocol.ts";
+import { proxy, releaseProxy, wrap, type Remote } from "comlink";
+import type { WorkerApi } from "./api.ts";
 
-type Request = WorkerRequest extends infer R ? (R extends { id: number } ? Omit<R, "id"> : never) : never;
+/** The worker API as the main thread calls it. */
+export type RemoteApi = Remote<WorkerApi>;
 
-export class AnalysisClient {
-  readonly #worker: Worker;
-  #nextId = 1;
-  #currentId = 0;
+/** A started worker: its API, and `terminate` to stop it. */
+export interface WorkerHandle {
+  api: RemoteApi;
+  terminate(): void;
+}
 
-  constructor(onMessage: (message: WorkerResponse) => void) {
-    this.#worker = new Worker(new URL("./analysis.worker.ts", import.meta.url), {
-      type: "module",
-      name: "brackline-analysis",
-    });
-    this.#worker.onmessage = (event: MessageEvent<WorkerResponse>) => {
-      if (event.data.id === this.#currentId) onMessage(event.data);
-    };
-    this.#worker.onerror = (event: ErrorEvent) => {
-      onMessage({
-        type: "error",
-        id: this.#currentId,
-        message: event.message || "The analysis worker failed to start.",
-      });
-    };
-  }
+/** Starts one worker; `name` shows in the browser's tools; `onFail` hears a worker that fails to start. */
+export function startWorker(name: string, onFail?: (message: string) => void): WorkerHandle {
+  const worker = new Worker(new URL("./analysis.worker.ts", import.meta.url), { type: "module", name });
+  worker.addEventListener("error", (event: ErrorEvent) => {
+    onFail?.(event.message || `The ${name} worker failed to start.`);
+  });
+  const api = wrap<WorkerApi>(worker);
+  return {
+    api,
+    terminate() {
+      api[releaseProxy]();
+      worker.terminate();
+    },
+  };
+}
 
-  /** Sends a request; replies to earlier requests are dropped from now on. */
-  send(request: Request): number {
-    const id = this.#nextId++;
-    this.#currentId = id;
-    this.#worker.postMessage({ ...request, id } as WorkerRequest);
-    return id;
-  }
-
-  terminate(): void {
-    this.#worker.terminate();
-  }
+/** Marks a callback to be called back across the worker boundary. */
+export function proxyCallback<F extends (...args: never[]) => unknown>(f: F): F {
+  return proxy(f);
 }

@@ -1,54 +1,74 @@
 /**
- * Messages between the dashboard and its analysis worker. Every request has an
- * id; replies carry the id they answer, and a newer request supersedes older
- * ones (the worker stops work on a superseded request between steps).
+ * The typed protocol between the dashboard and its worker. The worker exposes one object
+ * (`WorkerApi`, built by `createWorkerApi()` in api.ts) through Comlink; the main thread calls its
+ * methods as async functions. Progress and partial results come back through callbacks passed
+ * with `Comlink.proxy`. Every value crossing the boundary is plain, structured-clone-safe data.
  */
 import type { ImportIssue, Survey } from "../../../analysis/index.ts";
-import type { AnalysisSettings } from "../state/settings.svelte.ts";
-import type { TextFile } from "../lib/demoData.ts";
 import type { ChannelOverlay, SurveyOverlay } from "./overlay.ts";
 import type { AnalysisResult } from "./engine.ts";
-import type { ImportRequest, ImportResponse, SetSurveysRequest } from "../import/importProtocol.ts";
-import type { UnderwayRequest, UnderwayResponse } from "./underwayProtocol.ts";
 
-export type WorkerRequest =
-  | {
-      type: "load";
-      id: number;
-      surveys: TextFile[];
-      centerline?: TextFile;
-      settings: AnalysisSettings;
-    }
-  | { type: "analyze"; id: number; settings: AnalysisSettings }
+/** A text file as the analysis readers take it. */
+export interface TextFile {
+  name: string;
+  text: string;
+}
+
+/** A user-given end-member (overrides the one found from the data). */
+export interface EndmemberOverride {
+  salinity: number;
+  conc: number;
+  concSd?: number;
+}
+
+/** End-member overrides for one constituent. */
+export interface ConstituentOverrides {
+  river?: EndmemberOverride;
+  sea?: EndmemberOverride;
+}
+
+/** The settings of the analysis itself (sent to the worker). */
+export interface AnalysisSettings {
+  /** End-member overrides keyed by constituent name. */
+  endmemberOverrides: Record<string, ConstituentOverrides>;
+  /** Analytical precision per constituent [% of value], overriding the defaults. */
+  precisionPercent: Record<string, number>;
+  /** River discharge [m³/s] overriding the survey's own value, or undefined. */
+  riverDischargeM3s: number | undefined;
+  /** Name of the constant set used for speciation. */
+  constantSet: string;
+  /** Salinity of the isohaline that marks the salt intrusion (default 2). */
+  saltIntrusionSalinity: number;
+}
+
+export type { WorkerApi } from "./api.ts";
+export type { UnderwayRequest, UnderwayResult, UnderwayPoints } from "./underwayProtocol.ts";
+
+/** A survey file as given to the worker: text, or bytes (netCDF). */
+export type SourceFile = TextFile | { name: string; bytes: Uint8Array };
+
+/** One analysis job. A newer job supersedes an older one (the worker stops between steps). */
+export type AnalysisJob =
+  /** Read survey files and a centerline, then analyse every survey. */
+  | { kind: "load"; surveys: SourceFile[]; centerline?: TextFile; settings: AnalysisSettings }
+  /** Re-analyse the surveys held with new settings. */
+  | { kind: "analyze"; settings: AnalysisSettings }
   /** Replace the channel centerline (e.g. one drawn on the map) and re-analyse every survey. */
-  | { type: "centerline"; id: number; centerline: TextFile; settings: AnalysisSettings }
-  /** Build the self-contained HTML briefing of the analysed surveys (analysis/report). */
-  | { type: "briefing"; id: number; basemap?: unknown; dataNotice?: string }
-  /** Import flow: inspect or read a dropped file, and hand over surveys already read. */
-  | ImportRequest
-  | SetSurveysRequest
-  /** Underway log: stream, bin and aggregate for the map (see underwayProtocol.ts). */
-  | UnderwayRequest;
+  | { kind: "centerline"; centerline: TextFile; settings: AnalysisSettings }
+  /** Surveys already read (an import or a restored workspace): replace the held set and analyse. */
+  | { kind: "setSurveys"; surveys: Survey[]; centerline?: TextFile; settings: AnalysisSettings };
 
-export type WorkerResponse =
+/** What an analysis job reports while it runs, in order: loaded, progress…, analysis…, done. */
+export type AnalysisEvent =
   /** Work in progress: `done` of `total` steps of `stage`. */
-  | { type: "progress"; id: number; stage: string; done: number; total: number }
+  | { type: "progress"; stage: string; done: number; total: number }
   /** Files read: surveys, problems found, and the channel drawn on the map. */
-  | {
-      type: "loaded";
-      id: number;
-      surveys: Survey[];
-      issues: ImportIssue[];
-      channel: ChannelOverlay | undefined;
-    }
+  | { type: "loaded"; surveys: Survey[]; issues: ImportIssue[]; channel: ChannelOverlay | undefined }
   /** One survey analysed, with its map overlay (zones and maxima placed on the channel). */
-  | { type: "analysis"; id: number; surveyIndex: number; analysis: AnalysisResult; overlay: SurveyOverlay }
+  | { type: "analysis"; surveyIndex: number; analysis: AnalysisResult; overlay: SurveyOverlay }
   /** All requested work finished. */
-  | { type: "done"; id: number }
-  /** Answers of the import flow (see import/importProtocol.ts). */
-  | ImportResponse
-  /** Underway log progress and result (see underwayProtocol.ts). */
-  | UnderwayResponse
-  | { type: "error"; id: number; message: string }
-  /** The briefing as one self-contained HTML document. */
-  | { type: "briefing"; id: number; html: string };
+  | { type: "done" }
+  | { type: "error"; message: string };
+
+/** Reports progress of a long call: the fraction done (0…1) and what is being done. */
+export type ProgressCallback = (fraction: number, stage: string) => void;

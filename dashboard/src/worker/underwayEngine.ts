@@ -4,21 +4,18 @@
  */
 import {
   binUnderway,
-  buildChannelNetwork,
   decimatePoints,
   projectUnderway,
   readUnderwayStream,
   readUnderwayText,
-  type CenterlineGeoJson,
   type UnderwayImport,
 } from "../../../analysis/index.ts";
-import type { UnderwayRequest, UnderwayResponse } from "./underwayProtocol.ts";
+import type { UnderwayRequest, UnderwayResult } from "./underwayProtocol.ts";
+import type { ProgressCallback } from "./protocol.ts";
+import { readChannel } from "./engine.ts";
 
-type Post = (message: UnderwayResponse, transfer?: Transferable[]) => void;
-
-async function read(request: UnderwayRequest, post: Post): Promise<UnderwayImport> {
-  const onProgress = (fraction: number) =>
-    post({ type: "underwayProgress", id: request.id, fraction, stage: `Reading ${request.name}` });
+async function read(request: UnderwayRequest, progress?: ProgressCallback): Promise<UnderwayImport> {
+  const onProgress = (fraction: number) => progress?.(fraction, `Reading ${request.name}`);
   if (typeof request.file === "string") return readUnderwayText(request.file, { fileName: request.name, onProgress });
   return readUnderwayStream(request.file.stream(), {
     fileName: request.name,
@@ -27,15 +24,13 @@ async function read(request: UnderwayRequest, post: Post): Promise<UnderwayImpor
   });
 }
 
-/** Handles one underway request; errors propagate to the worker's error reply. */
-export async function handleUnderway(request: UnderwayRequest, post: Post): Promise<void> {
-  const imported = await read(request, post);
+/** Reads, places and aggregates one underway log; errors propagate to the caller. */
+export async function readUnderway(request: UnderwayRequest, progress?: ProgressCallback): Promise<UnderwayResult> {
+  const imported = await read(request, progress);
   const { data } = imported;
-  post({ type: "underwayProgress", id: request.id, fraction: 1, stage: "Placing records on the channel" });
-  const network =
-    request.centerline === undefined
-      ? undefined
-      : buildChannelNetwork(request.centerline as CenterlineGeoJson, { mouth: "start" });
+  progress?.(1, "Placing records on the channel");
+  // A centerline that cannot be read is reported by the analysis; the log is then binned by salinity.
+  const network = readChannel(request.centerline).channel?.network;
   const projection = network ? projectUnderway(data, network) : undefined;
   const by = projection ? request.bin.by : "salinity";
   const bins = binUnderway(data, projection, { by, width: request.bin.width });
@@ -49,17 +44,18 @@ export async function handleUnderway(request: UnderwayRequest, post: Post): Prom
     n = Math.max(n, d.latDeg[i]!);
   }
   const points = { lonDeg: d.lonDeg, latDeg: d.latDeg, salinity: d.values[0]!, count: d.count, cellM: d.cellM };
-  post(
-    {
-      type: "underwayLoaded",
-      id: request.id,
-      name: request.name,
-      summary: imported.summary,
-      issues: imported.issues,
-      points,
-      bins,
-      bounds: d.lonDeg.length > 0 ? [w, s, e, n] : undefined,
-    },
-    [points.lonDeg.buffer, points.latDeg.buffer, points.salinity.buffer, points.count.buffer],
-  );
+  return {
+    name: request.name,
+    summary: imported.summary,
+    issues: imported.issues,
+    points,
+    bins,
+    bounds: d.lonDeg.length > 0 ? [w, s, e, n] : undefined,
+  };
+}
+
+/** The typed arrays of a result, to transfer rather than copy. */
+export function underwayTransfer(result: UnderwayResult): Transferable[] {
+  const p = result.points;
+  return [p.lonDeg.buffer, p.latDeg.buffer, p.salinity.buffer, p.count.buffer];
 }

@@ -1,11 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { expectWithin } from "../../helpers/tolerance.ts";
-import {
-  dedupeVertices,
-  drawnCenterlineGeoJson,
-  drawnTicks,
-  tickSpacingKm,
-} from "../../../dashboard/src/draw/drawnLine.ts";
+import { dedupeVertices, drawnCenterlineGeoJson, type MouthEnd } from "../../../dashboard/src/draw/drawnLine.ts";
+import { previewCenterline, tickSpacingKm } from "../../../dashboard/src/worker/drawnPreview.ts";
+import type { LonLat } from "../../../dashboard/src/worker/overlay.ts";
+
+/** The worker's preview of a drawn line: the drawn GeoJSON read by the one centerline reader. */
+function drawnTicks(vertices: LonLat[], mouth: MouthEnd) {
+  return previewCenterline({ name: "drawn.geojson", text: JSON.stringify(drawnCenterlineGeoJson(vertices, mouth)) });
+}
 
 describe("drawn centerline", () => {
   it("drawnCenterlineGeoJson() gives an RFC 7946 FeatureCollection (IETF 2016, §3.1.4 LineString, [lon, lat]) with the mouth Point at the chosen end", () => {
@@ -56,7 +58,7 @@ describe("drawn centerline", () => {
     ]);
   });
 
-  it("drawnTicks() along 0.1° of the equatorial meridian measures 11.057 km (WGS84 meridian arc, 1° = 110.574 km at the equator, from memory) within 0.02 km, ticks from the mouth", () => {
+  it("previewCenterline() of a drawn line along 0.1° of the equatorial meridian measures 11.057 km (WGS84 meridian arc, 1° = 110.574 km at the equator, from memory) within 0.02 km, ticks from the mouth", () => {
     const { ticks, lengthKm } = drawnTicks(
       [
         [0, 0],

@@ -5,8 +5,8 @@ import { flushSync } from "svelte";
 import ImportReport from "../../../dashboard/src/import/ImportReport.svelte";
 import MappingDialog from "../../../dashboard/src/import/MappingDialog.svelte";
 import DropZone from "../../../dashboard/src/import/DropZone.svelte";
-import { inspectFile } from "../../../dashboard/src/import/inspectFile.ts";
-import { importFile } from "../../../dashboard/src/import/importFile.ts";
+import { inspectFile } from "../../../dashboard/src/worker/inspectFile.ts";
+import { importFile } from "../../../dashboard/src/worker/importFile.ts";
 import type { ColumnMapping } from "../../../analysis/index.ts";
 import { QUIRKY_CSV, file } from "./fixtures.ts";
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
-import { inspectFile, geoJsonKind, isNetcdfMagic } from "../../../dashboard/src/import/inspectFile.ts";
-import { importFile } from "../../../dashboard/src/import/importFile.ts";
+import { inspectFile, geoJsonKind, isNetcdfMagic } from "../../../dashboard/src/worker/inspectFile.ts";
+import { importFile } from "../../../dashboard/src/worker/importFile.ts";
 import { expectWithin } from "../../helpers/tolerance.ts";
 import { QUIRKY_CSV, file } from "./fixtures.ts";
 

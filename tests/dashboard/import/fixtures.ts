@@ -1,8 +1,13 @@
 /** Small invented import files for the dashboard import tests (not measurements). */
-import { inspectFile } from "../../../dashboard/src/import/inspectFile.ts";
-import { importFile, type ImportChoice } from "../../../dashboard/src/import/importFile.ts";
-import type { ImportClient } from "../../../dashboard/src/import/importClient.ts";
-import type { ImportSource } from "../../../dashboard/src/import/importTypes.ts";
+import type { Survey } from "../../../analysis/index.ts";
+import { createWorkerApi } from "../../../dashboard/src/worker/api.ts";
+import type { RemoteApi } from "../../../dashboard/src/worker/client.ts";
+import type { ImportSource } from "../../../dashboard/src/worker/importTypes.ts";
+import { Selection } from "../../../dashboard/src/state/selection.svelte.ts";
+import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
+import { SavedWorkspace, type WorkspaceHost } from "../../../dashboard/src/state/savedWorkspace.svelte.ts";
+import { ImportFlow } from "../../../dashboard/src/state/importFlow.svelte.ts";
+import type { WorkspaceStore } from "../../../dashboard/src/state/workspaceStore.ts";
 
 /** Semicolons, decimal commas, a censored value, a bad cell, a salinity header no pattern knows, a row without id. */
 export const QUIRKY_CSV = [
@@ -18,12 +23,39 @@ export function file(name: string, content: string | Uint8Array): ImportSource {
   return new File([content as BlobPart], name);
 }
 
-/** The import client without a worker: the same functions the worker runs, called directly. */
-export function directClient(): ImportClient {
-  return {
-    inspect: (f: ImportSource) => inspectFile(f),
-    read: (f: ImportSource, choice: ImportChoice, onProgress?: (fraction: number, stage: string) => void) =>
-      importFile(f, choice, (x) => onProgress?.(x, `Reading ${f.name}`)),
-    terminate: () => undefined,
-  } as unknown as ImportClient;
+/** The worker's API without a worker: the same object the worker exposes, called in-process. */
+export function directClient(): Pick<RemoteApi, "inspect" | "read"> {
+  return createWorkerApi() as unknown as Pick<RemoteApi, "inspect" | "read">;
+}
+
+export type FakeApp = WorkspaceHost & { started: number; results: { surveys: Survey[] } };
+
+/** The parts of the app root the saved workspace uses; loadSurveys answers at once as the worker's "loaded" would. */
+export function fakeApp(): FakeApp {
+  const app = {
+    started: 0,
+    results: { surveys: [] as Survey[], status: "ready" },
+    settings: new Settings(),
+    selection: new Selection(),
+    loadSurveys(surveys: Survey[]) {
+      app.results.surveys = surveys;
+      return Promise.resolve();
+    },
+    load() {
+      app.started += 1;
+      app.results.surveys = [];
+      return Promise.resolve();
+    },
+  };
+  return app as unknown as FakeApp;
+}
+
+/** The saved workspace with its import flow (reading in-process), as the app root wires them. */
+export class DataState extends SavedWorkspace {
+  readonly flow: ImportFlow;
+  constructor(app: FakeApp, store: WorkspaceStore, now?: () => Date) {
+    super(app, store, now);
+    const reader = directClient();
+    this.flow = new ImportFlow(this, () => reader);
+  }
 }

@@ -38,7 +38,7 @@ describe("BehaviourTable", () => {
     expect(fe.textContent).toContain("24.0–38.0 km");
     const ba = container.querySelector("tr[data-constituent='Ba']") as HTMLElement;
     expect(ba.textContent).toContain("+72.7");
-    expect(ba.textContent).toMatch(/S 4\.0, 28\.0 km,\s+excess 77\.0 \(65\.0 to 89\.0\) nmol\/L/);
+    expect(ba.textContent).toMatch(/S 4\.0, 28\.0 km,\s+excess 77 \(65 to 89\) nmol\/L/);
   });
 
   it("BehaviourTable shows the warning count with the messages in an expandable list", () => {

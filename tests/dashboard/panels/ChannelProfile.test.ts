@@ -44,7 +44,7 @@ describe("ChannelProfile", () => {
     const { svg } = setup("Ba");
     expect(svg.querySelectorAll(".reaction-zone")).toHaveLength(1);
     expect(svg.querySelectorAll("line.maximum")).toHaveLength(1);
-    expect(svg.textContent).toContain("maximum +77.0 nmol/L");
+    expect(svg.textContent).toContain("maximum +77 nmol/L");
   });
 
   it("ChannelProfile click selects a station and highlights it in both series", async () => {

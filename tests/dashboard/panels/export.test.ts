@@ -5,7 +5,7 @@ import Papa from "papaparse";
 import MixingPlot from "../../../dashboard/src/panels/MixingPlot.svelte";
 import ExportMenu from "../../../dashboard/src/panels/ExportMenu.svelte";
 import { Selection } from "../../../dashboard/src/state/selection.svelte.ts";
-import { csvField, toCsv } from "../../../dashboard/src/panels/lib/csv.ts";
+import { csvField, toCsv } from "../../../analysis/index.ts";
 import {
   deviationsCsv,
   exportFileName,

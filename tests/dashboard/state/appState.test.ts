@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { AppState } from "../../../dashboard/src/state/app.svelte.ts";
-import { analyse, readChannel, readSurveys } from "../../../dashboard/src/worker/engine.ts";
+import { analyse, readFiles } from "../../../dashboard/src/worker/engine.ts";
+import { channelOverlay } from "../../../analysis/index.ts";
 import { demoFile } from "./demoFiles.ts";
 import { expectWithin } from "../../helpers/tolerance.ts";
 
@@ -8,12 +9,13 @@ describe("AppState derives what the map shows from analysis/ without computing s
   const app = new AppState();
 
   beforeAll(() => {
-    const { surveys, issues } = readSurveys([demoFile("surveys/both-surveys.csv")]);
-    const built = readChannel(demoFile("centerline.geojson"));
-    app.workspace.receive({ type: "loaded", id: 1, surveys, issues, channel: built?.overlay });
+    const inputs = readFiles([demoFile("surveys/both-surveys.csv")], demoFile("centerline.geojson"));
+    const { surveys, issues } = inputs;
+    const network = inputs.channel?.network;
+    app.results.receive({ type: "loaded", surveys, issues, channel: network && channelOverlay(network) });
     surveys.forEach((survey, i) => {
-      const { analysis, overlay } = analyse(survey, built?.channel, built?.overlay, app.settings.analysis);
-      app.workspace.receive({ type: "analysis", id: 1, surveyIndex: i, analysis, overlay });
+      const { analysis, overlay } = analyse(inputs, survey, app.settings.analysis);
+      app.results.receive({ type: "analysis", surveyIndex: i, analysis, overlay });
     });
   });
 

@@ -1,56 +1,57 @@
 import { describe, expect, it } from "vitest";
 import { color } from "d3-color";
-import { handleUnderway } from "../../../dashboard/src/worker/underwayEngine.ts";
-import type { UnderwayResponse } from "../../../dashboard/src/worker/underwayProtocol.ts";
+import { createWorkerApi } from "../../../dashboard/src/worker/api.ts";
+import type { RemoteApi } from "../../../dashboard/src/worker/client.ts";
 import { MAX_UNDERWAY_POINTS, underwayAttributes, underwayLayer } from "../../../dashboard/src/map/underwayLayer.ts";
-import { UnderwayState, centerlineOf } from "../../../dashboard/src/state/underway.svelte.ts";
+import { UnderwayState } from "../../../dashboard/src/state/underway.svelte.ts";
 import { salinityColour } from "../../../dashboard/src/panels/lib/palette.ts";
 import { inventedChannel, underwayCsv } from "../../../bench/fixtures/underwayLog.ts";
 
-const channel = { paths: [{ branchId: "main", path: inventedChannel().coordinates }], ticks: [] };
+/** The invented channel as a centerline file (mouth at its first vertex, as `properties.mouth` says). */
+const centerline = {
+  name: "channel.geojson",
+  text: JSON.stringify({
+    type: "Feature",
+    properties: { mouth: "start" },
+    geometry: { type: "LineString", coordinates: inventedChannel().coordinates },
+  }),
+};
 
-async function runWorker(text: string, maxPoints: number): Promise<UnderwayResponse[]> {
-  const out: UnderwayResponse[] = [];
-  await handleUnderway(
-    {
-      type: "underway",
-      id: 7,
-      file: text,
-      name: "log.csv",
-      maxPoints,
-      centerline: centerlineOf(channel),
-      bin: { by: "km", width: 1 },
-    },
-    (m) => out.push(m),
-  );
-  return out;
-}
-
-describe("underway worker handler", () => {
-  it("reads a 30,000-record invented log, bins it by km along the channel and sends at most maxPoints map points carrying every record", async () => {
-    const replies = await runWorker(underwayCsv(30_000, 3), 2000);
-    const loaded = replies.find((r) => r.type === "underwayLoaded");
-    expect(loaded?.type).toBe("underwayLoaded");
-    if (loaded?.type !== "underwayLoaded") return;
-    expect(loaded.id).toBe(7);
+describe("the worker API's underway() (run in-process)", () => {
+  it("reads a 30,000-record invented log, bins it by km along the channel and returns at most maxPoints map points carrying every record", async () => {
+    const stages: string[] = [];
+    const loaded = await createWorkerApi().underway(
+      { file: underwayCsv(30_000, 3), name: "log.csv", maxPoints: 2000, centerline, bin: { by: "km", width: 1 } },
+      (_fraction, stage) => stages.push(stage),
+    );
     expect(loaded.summary.rowsAccepted).toBe(30_000);
     expect(loaded.bins.by).toBe("km");
     expect(loaded.points.lonDeg.length).toBeLessThanOrEqual(2000);
     expect(loaded.points.count.reduce((a, b) => a + b, 0)).toBe(30_000);
-    expect(replies.some((r) => r.type === "underwayProgress")).toBe(true);
+    expect(stages.length).toBeGreaterThan(0);
   });
 });
 
 describe("UnderwayState", () => {
-  it("folds progress and the loaded result into its fields", async () => {
-    const state = new UnderwayState();
-    for (const m of await runWorker(underwayCsv(2000, 4), 500)) state.receive(m);
+  it("keeps the worker's result in its fields, and a worker failure as an error", async () => {
+    const api = createWorkerApi() as unknown as RemoteApi;
+    const state = new UnderwayState(
+      () => api,
+      () => centerline,
+    );
+    await state.load({ name: "log.csv", text: underwayCsv(2000, 4) }, { by: "km", width: 1 });
     expect(state.status).toBe("ready");
     expect(state.progress).toBe(1);
     expect(state.summary?.rowsRead).toBe(2000);
+    expect(state.bins?.by).toBe("km");
     expect(state.bounds?.[0]).toBeLessThan(state.bounds![2]);
-    state.receive({ type: "error", id: 1, message: "boom" });
-    expect(state.status).toBe("error");
+    const failing = new UnderwayState(
+      () => ({ underway: () => Promise.reject(new Error("boom")) }) as unknown as RemoteApi,
+      () => undefined,
+    );
+    await failing.load({ name: "log.csv", text: "" });
+    expect(failing.status).toBe("error");
+    expect(failing.error).toBe("boom");
   });
 });
 

@@ -1,11 +1,17 @@
 /**
  * Exports: panels as SVG (styles inlined) and PNG (2×), results as CSV and
- * JSON straight from the analysis result, the map view as PNG, and the file
- * names. Nothing here computes a result; it writes out what analysis/ gave.
+ * JSON through the output spec of analysis/output (the CLI's columns and CSV
+ * writer), the map view as PNG, and the file names. Nothing here computes a
+ * result; it writes out what analysis/ gave.
  */
-import { behaviourLabel, cautionText } from "./format.ts";
-import { toCsv } from "./csv.ts";
-import { placementsById } from "./observations.ts";
+import {
+  DEVIATION_COLUMNS,
+  RESULT_COLUMNS,
+  SCREENING_CAUTION,
+  deviationRows,
+  resultRows,
+  tableCsv,
+} from "../../../../analysis/index.ts";
 import type { SurveyAnalysisView } from "./types.ts";
 
 /** "Wet season 2025-03" → "wet-season-2025-03"; accents dropped; never empty. */
@@ -137,114 +143,22 @@ export async function mapCanvasToPngBlob(canvases: HTMLCanvasElement | readonly 
   return canvasToBlob(out);
 }
 
-/** Summary table: one row per constituent with class, estimates and 95 % limits, zone, maximum, warnings. */
+/**
+ * Results table of the survey: the output spec's columns (analysis/output RESULT_COLUMNS), written by
+ * its CSV writer — the same file `brackline analyze --format csv` writes.
+ */
 export function resultsCsv(analysis: SurveyAnalysisView): string {
-  const header = [
-    "survey",
-    "constituent",
-    "unit",
-    "class",
-    "class_description",
-    "confidence",
-    "percent_change",
-    "percent_change_lower",
-    "percent_change_upper",
-    "effective_river_endmember",
-    "effective_river_endmember_lower",
-    "effective_river_endmember_upper",
-    "river_salinity",
-    "river_conc",
-    "sea_salinity",
-    "sea_conc",
-    "zone_kind",
-    "zone_salinity_from",
-    "zone_salinity_to",
-    "zone_km",
-    "maximum_salinity",
-    "maximum_salinity_lower",
-    "maximum_salinity_upper",
-    "maximum_km",
-    "maximum_excess",
-    "maximum_excess_lower",
-    "maximum_excess_upper",
-    "warning_count",
-    "warning_codes",
-    "warnings",
-  ];
-  const rows = analysis.constituents.map((c) => [
-    analysis.survey.name,
-    c.name,
-    c.unit,
-    c.class,
-    behaviourLabel[c.class],
-    c.confidence,
-    c.percentChange?.value,
-    c.percentChange?.lower,
-    c.percentChange?.upper,
-    c.effectiveEndmember?.value,
-    c.effectiveEndmember?.lower,
-    c.effectiveEndmember?.upper,
-    c.dilutionLine?.river.salinity,
-    c.dilutionLine?.river.conc,
-    c.dilutionLine?.sea.salinity,
-    c.dilutionLine?.sea.conc,
-    c.reactionZone?.kind,
-    c.reactionZone?.salinity[0],
-    c.reactionZone?.salinity[1],
-    c.reactionZone?.km.map(([a, b]) => `${a}-${b}`).join(";"),
-    c.maximum?.salinity.value,
-    c.maximum?.salinity.lower,
-    c.maximum?.salinity.upper,
-    c.maximum?.km.join(";"),
-    c.maximum?.excess.value,
-    c.maximum?.excess.lower,
-    c.maximum?.excess.upper,
-    c.warnings.length,
-    c.warnings.map((w) => w.code).join(";"),
-    c.warnings.map((w) => w.message).join(" | "),
-  ]);
-  return toCsv(header, rows);
+  return tableCsv(RESULT_COLUMNS, resultRows([analysis]));
 }
 
-/** Station table: one row per constituent and station with observed, expected and deviation. */
+/** Station deviations table: the output spec's DEVIATION_COLUMNS through the same CSV writer. */
 export function deviationsCsv(analysis: SurveyAnalysisView): string {
-  const byId = placementsById(analysis);
-  const header = [
-    "survey",
-    "constituent",
-    "unit",
-    "station",
-    "salinity",
-    "along_channel_km",
-    "observed",
-    "expected_on_dilution_line",
-    "deviation",
-    "deviation_percent",
-    "significant",
-    "below_detection",
-  ];
-  const rows = analysis.constituents.flatMap((c) =>
-    c.deviations.map((d) => [
-      analysis.survey.name,
-      c.name,
-      c.unit,
-      d.stationId,
-      d.salinity,
-      byId.get(d.stationId)?.alongChannelKm,
-      d.observed,
-      d.expected,
-      d.deviation,
-      d.deviationPercent,
-      d.significant,
-      d.censored,
-    ]),
-  );
-  return toCsv(header, rows);
+  return tableCsv(DEVIATION_COLUMNS, deviationRows([analysis]));
 }
 
-/** The analysis result as JSON, with the caution; non-finite numbers become null. */
+/** The analysis result as JSON, with the one caution; non-finite numbers become null. */
 export function resultsJson(analysis: SurveyAnalysisView): string {
-  const doc = { generator: "Brackline", ...analysis, caution: analysis.caution || cautionText };
+  const doc = { generator: "Brackline", ...analysis, caution: SCREENING_CAUTION };
   return JSON.stringify(doc, (_k, v: unknown) => (typeof v === "number" && !Number.isFinite(v) ? null : v), 2) + "\n";
 }
 

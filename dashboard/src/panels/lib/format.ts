@@ -1,44 +1,36 @@
 /**
  * Display text for panel values: behaviour classes in plain words, numbers
- * with sensible precision, estimates with their 95 % interval and unit.
+ * and estimates with their 95 % interval and unit. Numbers go through the one
+ * formatter of the output spec (analysis/output formatSignificant/formatFixed,
+ * the same as the CLI and the briefing); the caution is its SCREENING_CAUTION.
  * Formatting only; no value is computed here.
  */
+import {
+  BEHAVIOUR_STYLE,
+  SCREENING_CAUTION,
+  formatFixed as fixedText,
+  formatSignificant,
+} from "../../../../analysis/index.ts";
 import type { BehaviourClass, Estimate } from "./types.ts";
 
-/** Behaviour classes in plain words. */
-export const behaviourLabel: Record<BehaviourClass, string> = {
-  conservative: "Mixes conservatively",
-  removal: "Removed in the estuary",
-  addition: "Added in the estuary",
-  "removal-then-conservative": "Removed at low salinity, then conservative",
-  "maximum-then-conservative": "Mid-estuary maximum, then conservative",
-  "insufficient-data": "Not enough data to say",
-};
+/** Behaviour classes in plain words (the output spec's colour-and-symbol code, analysis/output). */
+export const behaviourLabel = Object.fromEntries(
+  Object.entries(BEHAVIOUR_STYLE).map(([k, v]) => [k, v.label]),
+) as Record<BehaviourClass, string>;
 
-/** Short class names for tight spaces (legends, map tooltips). */
-export const behaviourShort: Record<BehaviourClass, string> = {
-  conservative: "conservative",
-  removal: "removal",
-  addition: "addition",
-  "removal-then-conservative": "removal, then conservative",
-  "maximum-then-conservative": "maximum, then conservative",
-  "insufficient-data": "insufficient data",
-};
+/** Short class names for tight spaces (legends, map tooltips), from the same code. */
+export const behaviourShort = Object.fromEntries(
+  Object.entries(BEHAVIOUR_STYLE).map(([k, v]) => [k, v.short]),
+) as Record<BehaviourClass, string>;
 
 /** Formats a number with `digits` significant digits, trimming to a plain form. */
 export function formatNumber(value: number | undefined, digits = 3): string {
-  if (value === undefined || !Number.isFinite(value)) return "—";
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e6 || abs < 1e-3) return value.toExponential(digits - 1).replace("e", "×10^");
-  const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(abs)));
-  return value.toFixed(Math.min(decimals, 6)).replace("-", "−");
+  return value === undefined ? "—" : formatSignificant(value, digits);
 }
 
 /** Formats a number with a fixed count of decimals (salinity, km). */
 export function formatFixed(value: number | undefined, decimals = 1): string {
-  if (value === undefined || !Number.isFinite(value)) return "—";
-  return value.toFixed(decimals).replace("-", "−");
+  return value === undefined ? "—" : fixedText(value, decimals);
 }
 
 /** "12.3 (10.1–14.6) nmol/L": value with its 95 % interval and unit. */
@@ -59,6 +51,5 @@ export function axisTitle(name: string, unit: string | undefined): string {
   return unit ? `${name} (${unit})` : name;
 }
 
-/** The caution shown wherever results are shown. */
-export const cautionText =
-  "Screening analysis, not a compliance assessment. Defer to local regulations and licensed practice.";
+/** The caution shown wherever results are shown (the output spec's one text). */
+export const cautionText = SCREENING_CAUTION;

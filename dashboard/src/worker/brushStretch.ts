@@ -2,18 +2,14 @@
  * The channel stretch of a brushed salinity range: salinity interval → km intervals on the
  * survey's S(x) → lines along the channel, all through analysis/geometry.
  */
-import { buildChannelNetwork, channelStretch, salinityIntervalToKm } from "../../../analysis/index.ts";
-import type { CenterlineGeoJson, ChannelNetwork, SalinityProfile } from "../../../analysis/index.ts";
-import type { LonLat } from "../worker/overlay.ts";
+import { channelStretch, salinityIntervalToKm } from "../../../analysis/index.ts";
+import type { ChannelNetwork, SalinityProfile } from "../../../analysis/index.ts";
+import type { LonLat } from "./overlay.ts";
 
-/** The network of a centerline file, or undefined when it cannot be read (the worker reports why). */
-export function networkOf(text: string | undefined): ChannelNetwork | undefined {
-  if (!text) return undefined;
-  try {
-    return buildChannelNetwork(JSON.parse(text) as CenterlineGeoJson);
-  } catch {
-    return undefined;
-  }
+/** A brushed salinity range placed on the channel. */
+export interface BrushedStretch {
+  km: Array<[number, number]>;
+  paths: LonLat[][];
 }
 
 /** Km intervals and paths of the channel where the salinity lies within the brushed range. */
@@ -21,7 +17,7 @@ export function brushStretch(
   network: ChannelNetwork | undefined,
   profile: SalinityProfile | undefined,
   brush: [number, number] | null,
-): { km: Array<[number, number]>; paths: LonLat[][] } {
+): BrushedStretch {
   if (!network || !profile || !brush) return { km: [], paths: [] };
   const km = salinityIntervalToKm(profile, brush).intervalsKm;
   const paths: LonLat[][] = [];

@@ -3,7 +3,7 @@
  * state, and reads the dashboard's pieces back out of one.
  */
 import { createWorkspace, type ColumnMapping, type Survey, type WorkspaceDocument } from "../../../analysis/index.ts";
-import type { AnalysisSettings, StationColouring } from "../state/settings.svelte.ts";
+import type { AnalysisSettings, StationColouring } from "./settings.svelte.ts";
 
 /** One file's import record as kept in the workspace. */
 export type ImportRecord = WorkspaceDocument["imports"][number];

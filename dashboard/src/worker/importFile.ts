@@ -14,7 +14,7 @@ import {
   type ReadSurveyOptions,
   type StationTable,
 } from "../../../analysis/index.ts";
-import { readChannel } from "../worker/engine.ts";
+import { readChannel } from "./engine.ts";
 import type { FileKind, FileOutcome, ImportSource } from "./importTypes.ts";
 
 /** What the user confirmed for one file. */
@@ -90,13 +90,12 @@ export async function importFile(
     }
     case "centerline": {
       const text = stripBom(await file.text());
-      try {
-        readChannel({ name, text });
-        return { ...empty, centerline: JSON.parse(text) as object };
-      } catch (error) {
-        const message = error instanceof Error ? error.message : String(error);
-        return { ...empty, issues: [fileIssue(name, "", `a usable channel centerline (${message})`)] };
-      }
+      const read = readChannel({ name, text });
+      if (read.channel) return { ...empty, centerline: read.channel.geojson as object, issues: read.issues };
+      return {
+        ...empty,
+        issues: read.issues.length > 0 ? read.issues : [fileIssue(name, "", "a usable channel centerline")],
+      };
     }
     default:
       return { ...empty, issues: [fileIssue(name, "", "a survey table, GeoJSON or netCDF file")] };

@@ -1,16 +1,16 @@
 /**
- * The workspace: surveys loaded, the channel, problems found while reading,
- * and the analysis results received from the worker. Data arrays are
- * `$state.raw` so analysis/ always gets plain arrays; they are replaced, never
+ * The analysis results: the main thread's snapshot of what the worker holds and found (surveys,
+ * channel overlay, problems found while reading, each survey's analysis and map overlay, job
+ * status). Filled only from the worker's events; data arrays are `$state.raw`, replaced, never
  * mutated.
  */
 import type { FeatureCollection } from "geojson";
 import type { ImportIssue, Survey } from "../../../analysis/index.ts";
-import type { WorkerResponse } from "../worker/protocol.ts";
+import type { AnalysisEvent } from "../worker/protocol.ts";
 import type { AnalysisResult } from "../worker/engine.ts";
 import type { ChannelOverlay, SurveyOverlay } from "../worker/overlay.ts";
 
-export type WorkspaceStatus = "idle" | "reading" | "analysing" | "ready" | "error";
+export type ResultsStatus = "idle" | "reading" | "analysing" | "ready" | "error";
 
 /** Progress of the running worker job. */
 export interface Progress {
@@ -19,7 +19,7 @@ export interface Progress {
   total: number;
 }
 
-export class Workspace {
+export class AnalysisResults {
   surveys = $state.raw<Survey[]>([]);
   issues = $state.raw<ImportIssue[]>([]);
   channel = $state.raw<ChannelOverlay | undefined>(undefined);
@@ -28,13 +28,13 @@ export class Workspace {
   /** Analysis results by survey index (undefined until the worker answers). */
   analyses = $state.raw<Array<AnalysisResult | undefined>>([]);
   overlays = $state.raw<Array<SurveyOverlay | undefined>>([]);
-  status = $state<WorkspaceStatus>("idle");
+  status = $state<ResultsStatus>("idle");
   progress = $state<Progress | null>(null);
   /** Errors reported by the worker, newest last. */
   errors = $state.raw<string[]>([]);
 
-  /** Folds one worker message into the workspace. */
-  receive(message: WorkerResponse): void {
+  /** Folds one worker event into the results. */
+  receive(message: AnalysisEvent): void {
     switch (message.type) {
       case "progress":
         this.progress = { stage: message.stage, done: message.done, total: message.total };

@@ -1,0 +1,157 @@
+/**
+ * The worker's API: one object whose methods the main thread calls through Comlink
+ * (analysis.worker.ts exposes it; client.ts wraps it). It holds the surveys, the channel network
+ * (built once, here, by the one centerline reader) and the latest analyses; the main thread keeps
+ * only a snapshot of the results and the selection. The same object runs in Node for tests.
+ */
+import { channelOverlay, type WorkspaceInputs } from "../../../analysis/index.ts";
+import type { TextFile } from "./protocol.ts";
+import type { ImportChoice } from "./importFile.ts";
+import type { FileInspection, FileOutcome, ImportSource } from "./importTypes.ts";
+import { inspectFile } from "./inspectFile.ts";
+import { importFile } from "./importFile.ts";
+import type { AnalysisSettings } from "./protocol.ts";
+import { analyse, inputsOf, readFiles, type AnalysisResult } from "./engine.ts";
+import { briefingHtml, fileProvenance } from "./briefing.ts";
+import { brushStretch, type BrushedStretch } from "./brushStretch.ts";
+import type { ChannelOverlay } from "./overlay.ts";
+import type { AnalysisEvent, AnalysisJob, ProgressCallback, SourceFile } from "./protocol.ts";
+import type { UnderwayRequest, UnderwayResult } from "./underwayProtocol.ts";
+import { readUnderway } from "./underwayEngine.ts";
+import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
+
+/** Lets queued calls (a newer job) arrive between steps. */
+function yieldToQueue(): Promise<void> {
+  return new Promise((resolve) => setTimeout(resolve, 0));
+}
+
+function messageOf(error: unknown): string {
+  return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
+}
+
+/** Builds the worker's API object with its own held state (one per worker instance). */
+export function createWorkerApi() {
+  let latestRun = 0;
+  /** What readInputs read (surveys, the channel built by the one centerline reader, problems). */
+  let inputs: WorkspaceInputs = inputsOf([], undefined);
+  let channel: ChannelOverlay | undefined;
+  /** Latest analysis of each survey, kept for the briefing and the brushed stretch. */
+  let analyses: Array<AnalysisResult | undefined> = [];
+  /** The files read (survey files and centerline), for the briefing's provenance table. */
+  let files: SourceFile[] = [];
+  let centerlineFile: TextFile | undefined;
+
+  /** Holds new inputs; a centerline that cannot be read is reported as an error event too. */
+  function useInputs(next: WorkspaceInputs, centerline: TextFile | undefined, emit: (e: AnalysisEvent) => void) {
+    inputs = next;
+    centerlineFile = centerline;
+    channel = next.channel ? channelOverlay(next.channel.network) : undefined;
+    if (centerline && !next.channel) {
+      const why = next.issues.find((i) => i.file === centerline.name && i.severity === "error");
+      emit({ type: "error", message: `${centerline.name}: ${why?.expected ?? "no usable centerline"}` });
+    }
+  }
+
+  async function analyseAll(run: number, settings: AnalysisSettings, emit: (e: AnalysisEvent) => void) {
+    const { surveys } = inputs;
+    const total = surveys.length;
+    for (let i = 0; i < total; i++) {
+      emit({ type: "progress", stage: `Analysing ${surveys[i].name}`, done: i * 100, total: total * 100 });
+      await yieldToQueue();
+      if (run !== latestRun) return;
+      try {
+        const name = surveys[i].name;
+        const { analysis, overlay } = analyse(inputs, surveys[i], settings, (fraction, label) =>
+          emit({
+            type: "progress",
+            stage: `${name}: ${label}`,
+            done: Math.round((i + fraction) * 100),
+            total: total * 100,
+          }),
+        );
+        analyses[i] = analysis;
+        emit({ type: "analysis", surveyIndex: i, analysis, overlay });
+      } catch (error) {
+        emit({ type: "error", message: `Survey "${surveys[i].name}": ${messageOf(error)}` });
+      }
+    }
+    emit({ type: "progress", stage: "Analysis complete", done: 1, total: 1 });
+    emit({ type: "done" });
+  }
+
+  return {
+    /**
+     * Runs one analysis job, reporting through `onEvent`. A newer call supersedes this one: its
+     * remaining surveys are not analysed (the promise still resolves).
+     */
+    async run(job: AnalysisJob, onEvent: (event: AnalysisEvent) => void): Promise<void> {
+      const run = ++latestRun;
+      const emit = (e: AnalysisEvent) => {
+        if (run === latestRun) onEvent(e);
+      };
+      try {
+        if (job.kind === "load") {
+          emit({ type: "progress", stage: "Reading files", done: 0, total: 1 });
+          await yieldToQueue();
+          const read = readFiles(job.surveys, job.centerline, (fraction) =>
+            emit({ type: "progress", stage: "Reading files", done: Math.round(fraction * 100), total: 100 }),
+          );
+          useInputs(read, job.centerline, emit);
+          files = job.surveys;
+        } else if (job.kind === "setSurveys") {
+          useInputs(inputsOf(job.surveys, job.centerline), job.centerline, emit);
+          files = [];
+        } else if (job.kind === "centerline") {
+          const next = inputsOf(inputs.surveys, job.centerline);
+          const oldLine = centerlineFile?.name;
+          next.issues = [...inputs.issues.filter((i) => i.file !== oldLine), ...next.issues];
+          useInputs({ ...next, files: inputs.files, summary: inputs.summary }, job.centerline, emit);
+        }
+        if (job.kind !== "analyze") {
+          analyses = inputs.surveys.map(() => undefined);
+          emit({ type: "loaded", surveys: inputs.surveys, issues: inputs.issues, channel });
+        }
+        await analyseAll(run, job.settings, emit);
+      } catch (error) {
+        emit({ type: "error", message: messageOf(error) });
+      }
+    },
+
+    /** The channel stretch where one survey's salinity lies within a brushed range (km and map paths). */
+    brushStretch(surveyIndex: number, range: [number, number] | null): BrushedStretch {
+      return brushStretch(inputs.channel?.network, analyses[surveyIndex]?.salinityProfile, range);
+    },
+
+    /** Km ticks and length of a centerline being drawn on the map (read by the one centerline reader). */
+    previewCenterline(file: TextFile): DrawnPreview {
+      return previewCenterline(file);
+    },
+
+    /** The self-contained HTML briefing of the analysed surveys (analysis/report). */
+    async briefing(basemap: unknown, dataNotice: string | undefined): Promise<string> {
+      const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
+      const provenance = await fileProvenance(files, centerlineFile);
+      return briefingHtml(done, inputs.channel?.network, provenance, basemap, dataNotice);
+    },
+
+    /** Recognises a dropped file and previews it. */
+    inspect(file: ImportSource): Promise<FileInspection> {
+      return inspectFile(file);
+    },
+
+    /** Reads a dropped file with the confirmed choice; `onProgress` gets the fraction read. */
+    read(file: ImportSource, choice: ImportChoice, onProgress?: ProgressCallback): Promise<FileOutcome> {
+      const stage = `Reading ${file.name}`;
+      onProgress?.(0, stage);
+      return importFile(file, choice, (fraction) => onProgress?.(fraction, stage));
+    },
+
+    /** Streams, places and aggregates an underway log (the caller transfers the typed arrays back). */
+    underway(request: UnderwayRequest, onProgress?: ProgressCallback): Promise<UnderwayResult> {
+      return readUnderway(request, onProgress);
+    },
+  };
+}
+
+/** The API the worker exposes (what `Comlink.wrap` turns into async calls on the main thread). */
+export type WorkerApi = ReturnType<typeof createWorkerApi>;
