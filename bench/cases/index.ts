@@ -6,6 +6,7 @@ import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
 import { cliStartBench } from "./cliStart.ts";
+import { dashboardUnderwayBench } from "./dashboardUnderway.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
 export const benchCases: BenchCase[] = [
@@ -14,6 +15,7 @@ export const benchCases: BenchCase[] = [
   underwayImportBench,
   underwayBinningBench,
   dashboardBench,
+  dashboardUnderwayBench,
   bundleSizeBench,
   cliStartBench,
 ];
