@@ -74,6 +74,10 @@ export const dashboardUnderwayBench: BenchCase = {
     const logPath = writeLog(dir);
     const bare = await serveBareMap();
     const s = await openDashboard();
+    // tsx (esbuild keepNames) wraps named functions in __name(); give the pages a no-op one.
+    const nameShim = "globalThis.__name = globalThis.__name || ((f) => f);";
+    await s.context.addInitScript({ content: nameShim });
+    await s.page.evaluate(nameShim);
     try {
       await waitForMap(s.page);
       await waitForAnalysis(s.page);
@@ -105,6 +109,7 @@ export const dashboardUnderwayBench: BenchCase = {
             poll();
           }),
       );
+      watch.catch(() => undefined);
       await s.page.setInputFiles('[data-testid="underway-input"]', logPath);
       const dropMs = await watch;
       const drawn = await s.page.locator("[data-underway-points]").getAttribute("data-underway-points");
