@@ -3,9 +3,12 @@
 
 // --- survey data model ---
 export type { CellStatus, ValueCell, Station, Constituent, Survey, ImportIssue } from "./survey/survey.ts";
+export { minOf, maxOf, appendAll } from "./survey/arrayExtent.ts";
 // --- end survey ---
 
 // --- geometry ---
+export { centerlinePlausibility, centerlineVertices, CENTERLINE_FAR_KM } from "./geometry/centerlinePlausibility.ts";
+export type { CenterlinePlausibility } from "./geometry/centerlinePlausibility.ts";
 export type {
   GeometryWarning,
   MouthOption,
@@ -153,7 +156,7 @@ export type { PredominanceBoundary } from "./seawater/predominance.ts";
 export { feSpeciationVsPh } from "./seawater/feSeries.ts";
 export { feSolubilityLiuMillero2002NmolKg, ionicStrengthLiuMillero2002 } from "./seawater/feSolubilityLiuMillero.ts";
 export type { FeSpeciationSeries } from "./seawater/feSeries.ts";
-export { CD_CHLORIDE_SETS } from "./seawater/cdChlorideSets.ts";
+export { CD_CHLORIDE_SETS, CD_ACTIVITY_MODEL_NOTE, DEFAULT_CD_CHLORIDE_SET_ID } from "./seawater/cdChlorideSets.ts";
 export type { CdChlorideSet } from "./seawater/cdChlorideSets.ts";
 export { cdChlorideSpeciation } from "./seawater/cdChloride.ts";
 export type { CdSpeciation, CdSpeciationOptions, CdExtraLigand } from "./seawater/cdChloride.ts";
@@ -170,6 +173,15 @@ export { SPECIATION_CAUTION, stationSpeciation } from "./seawater/stationSpeciat
 export type { StationWater, StationSpeciationOptions, StationSpeciationResult } from "./seawater/stationSpeciation.ts";
 export { linearGrid } from "./seawater/grid.ts";
 export type { PlotSeries, SeriesSet } from "./seawater/plotSeries.ts";
+export {
+  quantityUnit,
+  quantityKindsOf,
+  toWorkingUnit,
+  normaliseUnitText,
+  WORKING_UNIT,
+  type QuantityKind,
+  type QuantityUnit,
+} from "./seawater/quantityUnits.ts";
 // --- end seawater ---
 
 // --- io ---
@@ -216,7 +228,10 @@ export type { UnitParser } from "./io/unitText.ts";
 export { crossCheckUnits, COUNTED_ELEMENT } from "./io/unitCrossCheck.ts";
 export { normaliseStationId } from "./io/stationIds.ts";
 export type { NormalisedStationId } from "./io/stationIds.ts";
-export { detectDialect, stripBom } from "./io/dialect.ts";
+export { detectDialect, detectNewline, stripBom } from "./io/dialect.ts";
+export { WORKSPACE_LIMITS } from "./io/workspaceSchema.ts";
+export { conflictingStationPositions, STATION_POSITION_TOLERANCE_KM } from "./io/stationPositionCheck.ts";
+export { MAX_DISCHARGE_M3S, MAX_STATION_ID_CHARS, PSS78_MAX_SALINITY } from "./io/rowReader.ts";
 export type { TextDialect } from "./io/dialect.ts";
 export { createWorkspace, exportWorkspace, importWorkspace } from "./io/workspace.ts";
 export { workspaceSchema, WORKSPACE_VERSION, WORKSPACE_FORMAT } from "./io/workspaceSchema.ts";
@@ -262,6 +277,9 @@ export { formatSignificant, formatFixed, MINUS } from "./output/formatNumber.ts"
 // --- report ---
 export { buildBriefing, BRIEFING_CAUTION } from "./report/buildBriefing.ts";
 export { renderBriefingHtml } from "./report/renderHtml.ts";
+export { BIBLIOGRAPHY, bibEntry, formatReference, referenceList } from "./report/referencesBibliography.ts";
+export type { BibEntry } from "./report/referencesBibliography.ts";
+export { authorYear, cite, briefingReferences, methodsParagraphs } from "./report/references.ts";
 export type {
   BriefingDocument,
   BriefingInput,

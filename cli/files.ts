@@ -21,8 +21,8 @@ export function readBytes(path: string, what: string): Uint8Array {
   }
 }
 
-/** Writes `--out`; a directory, or a file in a missing directory, is an InputError. */
-export function writeOut(path: string, text: string): void {
+/** Checks that `--out` can be written (before any work): not a directory, and its directory exists. */
+export function checkOut(path: string): void {
   let st;
   try {
     st = statSync(path, { throwIfNoEntry: false });
@@ -33,6 +33,11 @@ export function writeOut(path: string, text: string): void {
   const dir = dirname(path);
   if (!statSync(dir, { throwIfNoEntry: false })?.isDirectory())
     throw new InputError(`--out ${path}: the directory ${dir} does not exist`);
+}
+
+/** Writes `--out`; a directory, or a file in a missing directory, is an InputError. */
+export function writeOut(path: string, text: string): void {
+  checkOut(path);
   try {
     writeFileSync(path, text);
   } catch (error) {

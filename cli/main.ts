@@ -2,6 +2,7 @@ import type { CommandIo } from "./command.ts";
 import { commands } from "./commands/index.ts";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_USAGE, InputError, UsageError } from "./exitCodes.ts";
 import { stripControl } from "../analysis/output/terminalText.ts";
+import { SCREENING_CAUTION } from "../analysis/output/caution.ts";
 
 function usage(): string {
   const lines = commands.map((c) => `  ${c.name.padEnd(10)} ${c.summary}`);
@@ -14,7 +15,7 @@ function usage(): string {
     ...lines,
     "",
     "Run `brackline <command> --help` for a command's options.",
-    "Screening analysis, not a compliance assessment: defer to local regulations and licensed practice.",
+    SCREENING_CAUTION,
   ].join("\n");
 }
 

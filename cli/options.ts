@@ -40,6 +40,18 @@ export type OptionValues = {
   [K in OptionName]?: (typeof OPTIONS)[K]["type"] extends "boolean" ? boolean : string;
 };
 
+/** Options of every command that reads surveys (analyze, compare, report). */
+export const INPUT_OPTIONS: readonly OptionName[] = [
+  "centerline",
+  "mouth",
+  "stations",
+  "mapping",
+  "layer",
+  "discharge",
+  "draws",
+  "seed",
+];
+
 /** Largest bootstrap draw count accepted (a larger one is a typo, not an analysis). */
 export const MAX_DRAWS = 100_000;
 

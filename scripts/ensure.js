@@ -56,7 +56,13 @@ if (!existsSync(installedMarker) || newestMtimeMs(installedMarker) < lockMs) {
 const scripts = JSON.parse(readFileSync(join(root, "package.json"), "utf8")).scripts ?? {};
 const shared = ["analysis", "package-lock.json", "tsconfig.json"];
 const BUILD_STEPS = [
-  { script: "build:cli", args: [], output: "cli/dist/main.js", sources: ["cli", ...shared], for: ["start", "test"] },
+  {
+    script: "build:cli",
+    args: [],
+    output: "cli/dist/main.js",
+    sources: ["cli", "data-demo/generator", ...shared],
+    for: ["start", "test"],
+  },
   {
     script: "build",
     args: ["--", "--logLevel", "warn"],

@@ -4,6 +4,7 @@ import { DIFFERENCE_INTERVAL_METHOD } from "./differenceOfEstimates.ts";
 import { dischargeScaling } from "./dischargeScaling.ts";
 import { constituentShift } from "./constituentShift.ts";
 import { surveyProfile } from "./salinityKm.ts";
+import { maxOf } from "../survey/arrayExtent.ts";
 
 /** Options of {@link compareSurveys}. */
 export interface CompareOptions {
@@ -20,7 +21,7 @@ function intrusionRow(a: ComparableSurvey): IntrusionRow {
     ...(f.saltIntrusionKm !== undefined ? { saltIntrusionKm: f.saltIntrusionKm } : {}),
     saltIntrusionSalinity: f.saltIntrusionSalinity,
     isohalinesKm: f.isohalines.map((h) =>
-      h.km.length ? { salinity: h.salinity, km: Math.max(...h.km) } : { salinity: h.salinity },
+      h.km.length ? { salinity: h.salinity, km: maxOf(h.km) } : { salinity: h.salinity },
     ),
   };
 }
@@ -72,7 +73,7 @@ function scalings(rows: IntrusionRow[], warnings: MixingWarning[]): DischargeSca
  * @param options reference survey index (default 0)
  * @returns the comparison, with warnings for missing discharges, constituents or unit mismatches
  * @throws RangeError with fewer than two surveys or a bad reference index
- * @see mixing-methods.md §5.1, §5.3 (scalings); Boyle et al. (1974) (C*₀, fluxes).
+ * @see bibliography keys hansenRattray1965, chatwin1976, monismith2002 (scalings); boyle1974 (C*₀, fluxes).
  */
 export function compareSurveys(analyses: readonly ComparableSurvey[], options: CompareOptions = {}): SurveyComparison {
   if (!Array.isArray(analyses) || analyses.length < 2)

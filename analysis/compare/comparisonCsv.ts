@@ -1,4 +1,4 @@
-import Papa from "papaparse";
+import { toCsv } from "../output/csv.ts";
 import type { EstimateDifference, SurveyComparison } from "./types.ts";
 
 /** Column headers of {@link comparisonToCsv}. */
@@ -27,7 +27,7 @@ const num = (x: number | undefined): string =>
  * carry 8 significant digits; empty cells mean "not available".
  *
  * @param c the comparison
- * @returns CSV text with a header row, lines ending in "\n"
+ * @returns CSV text with a header row, lines ending in CRLF (RFC 4180, the one CSV writer in analysis/output/csv.ts)
  */
 export function comparisonToCsv(c: SurveyComparison): string {
   const rows: string[][] = [];
@@ -111,5 +111,5 @@ export function comparisonToCsv(c: SurveyComparison): string {
     d("net_flux", s.netFlux);
     d("effective_export", s.effectiveExport);
   }
-  return Papa.unparse({ fields: [...COMPARISON_CSV_COLUMNS], data: rows }, { newline: "\n" }) + "\n";
+  return toCsv(COMPARISON_CSV_COLUMNS, rows);
 }

@@ -4,6 +4,7 @@ import { differenceOfEstimates, differenceWithoutInterval } from "./differenceOf
 import type { SalinityProfile } from "../geometry/salinityTypes.ts";
 import { kmEstimateOfSalinity } from "./salinityKm.ts";
 import { formatSignificant } from "../output/formatNumber.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** One side of a shift: the survey name, its station salinity profile and the constituent's analysis. */
 export interface ShiftSide {
@@ -24,8 +25,8 @@ function zoneKm(side: ShiftSide): { seaward?: Estimate; landward?: Estimate } {
   const z = side.analysis.reactionZone;
   if (!z) return {};
   const ends = z.km.flat();
-  const seaV = ends.length ? Math.min(...ends) : undefined;
-  const landV = ends.length ? Math.max(...ends) : undefined;
+  const seaV = ends.length ? minOf(ends) : undefined;
+  const landV = ends.length ? maxOf(ends) : undefined;
   const hi = z.salinityUpper ?? point(z.salinity[1], "salinity");
   const lo = z.salinityLower ?? point(z.salinity[0], "salinity");
   const seaward = kmEstimateOfSalinity(side.profile, hi, seaV);
@@ -60,7 +61,7 @@ function sentence(
  * @param later later survey side, same constituent
  * @returns the shift with plain statements; a warning instead of numbers when the units differ
  * @throws RangeError when the constituent names differ
- * @see Boyle et al. (1974) GCA 38, 1719–1728 (C*₀ and fluxes); mixing-methods.md §1.2.
+ * @see bibliography key boyle1974 (C*₀ and fluxes).
  */
 export function constituentShift(ref: ShiftSide, later: ShiftSide): ConstituentShift {
   const a = ref.analysis;
@@ -119,12 +120,12 @@ export function constituentShift(ref: ShiftSide, later: ShiftSide): ConstituentS
     const kmA = kmEstimateOfSalinity(
       ref.profile,
       a.maximum.salinity,
-      a.maximum.km.length ? Math.max(...a.maximum.km) : undefined,
+      a.maximum.km.length ? maxOf(a.maximum.km) : undefined,
     );
     const kmB = kmEstimateOfSalinity(
       later.profile,
       b.maximum.salinity,
-      b.maximum.km.length ? Math.max(...b.maximum.km) : undefined,
+      b.maximum.km.length ? maxOf(b.maximum.km) : undefined,
     );
     const km = diff(kmA, kmB);
     out.maximum = {

@@ -1,24 +1,24 @@
 import jStat from "jstat";
 import type { DischargeScaling, ReferenceScaling } from "./types.ts";
 import { formatFixed } from "../output/formatNumber.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
-/** Published discharge scalings of the salt-intrusion length L ∝ Q^n (mixing-methods.md §5.1, §5.3). */
+/** Published discharge scalings of the salt-intrusion length L ∝ Q^n (@see bibliography keys hansenRattray1965, chatwin1976, monismith2002). */
 export const REFERENCE_SCALINGS: readonly ReferenceScaling[] = [
   {
     exponent: -1,
     label: "classical, constant dispersion K (steady 1-D advection–dispersion)",
-    source: "mixing-methods.md §5.1, Eq. 6 (derived)",
+    source: "derived: steady 1-D advection–dispersion with constant dispersion, L = (K/U)·ln(S₀/S*) ∝ 1/Q",
   },
   {
     exponent: -1 / 3,
     label: "classical, dispersion from gravitational circulation",
-    source: "Hansen & Rattray (1965); Chatwin (1976), as given in mixing-methods.md §5.1 (from memory there)",
+    source: "method after Hansen & Rattray (1965); Chatwin (1976) (bibliography keys hansenRattray1965, chatwin1976)",
   },
   {
     exponent: -1 / 7,
     label: "observed, X2 in northern San Francisco Bay (stratified)",
-    source:
-      "Monismith et al. (2002) J. Phys. Oceanogr. 32, 3003–3019, as given in mixing-methods.md §5.3 (exponent from memory there)",
+    source: "method after Monismith et al. (2002) J. Phys. Oceanogr. 32, 3003–3019 (bibliography key monismith2002)",
   },
 ];
 
@@ -43,7 +43,7 @@ function describe(n: number): string {
  * @param salinity isohaline salinity of L
  * @returns the scaling, or undefined with fewer than 2 usable points or a single discharge
  * @throws RangeError for non-positive discharge or length
- * @see mixing-methods.md §5.1 (Eq. 6, Hansen & Rattray 1965, Chatwin 1976) and §5.3 (Monismith et al. 2002).
+ * @see bibliography keys hansenRattray1965, chatwin1976, monismith2002.
  */
 export function dischargeScaling(
   points: ReadonlyArray<{ dischargeM3s: number; lengthKm: number }>,
@@ -75,7 +75,7 @@ export function dischargeScaling(
     salinity,
     exponent: slope,
     nSurveys: n,
-    dischargeRangeM3s: [Math.min(...qs), Math.max(...qs)],
+    dischargeRangeM3s: [minOf(qs), maxOf(qs)],
     references: [...REFERENCE_SCALINGS],
     note: "",
   };

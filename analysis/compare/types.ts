@@ -77,7 +77,7 @@ export interface DischargeScaling {
   nSurveys: number;
   /** Discharge range used [m³/s]. */
   dischargeRangeM3s: [number, number];
-  /** The classical and observed scalings (mixing-methods.md §5.1, §5.3). */
+  /** The classical and observed scalings (see REFERENCE_SCALINGS). */
   references: ReferenceScaling[];
   /** Plain-language note: what n means next to the references, and its limits. */
   note: string;

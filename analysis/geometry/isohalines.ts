@@ -3,6 +3,7 @@
  */
 import type { GeometryWarning } from "./types.ts";
 import type { IsohalinePosition, SalinityProfile } from "./salinityTypes.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Default isohalines reported (PSS-78): 1, 2, 5, 10, 20. */
 export const DEFAULT_ISOHALINES = [1, 2, 5, 10, 20] as const;
@@ -30,7 +31,7 @@ export function crossingsKm(profile: SalinityProfile, s: number): number[] {
 }
 
 function rangeText(p: SalinityProfile): string {
-  return `${Math.min(...p.salinity).toFixed(2)}–${Math.max(...p.salinity).toFixed(2)}`;
+  return `${minOf(p.salinity).toFixed(2)}–${maxOf(p.salinity).toFixed(2)}`;
 }
 
 /**
@@ -42,7 +43,7 @@ function rangeText(p: SalinityProfile): string {
  * @returns one position per value (all crossings, km from the mouth) and warnings for values
  *   outside the surveyed range or crossed more than once
  * @throws RangeError for a negative or non-finite value
- * @see mixing-methods.md §5.1 (isohaline distance x* from the mouth); interpolation is common practice.
+ * @see common practice (isohaline distance x* from the mouth, interpolated between stations).
  */
 export function isohalinePositions(
   profile: SalinityProfile,
@@ -87,7 +88,7 @@ export interface SaltIntrusion {
  * @returns length [km] with all crossings; km undefined (with a warning saying why) when the
  *   isohaline lies outside the surveyed reach
  * @throws RangeError for a negative or non-finite isohaline
- * @see mixing-methods.md §5.1: x* = (K/U)·ln(S₀/S*), the isohaline's distance from the mouth.
+ * @see derived: steady 1-D advection–dispersion with constant K gives x* = (K/U)·ln(S₀/S*), the isohaline's distance from the mouth.
  */
 export function saltIntrusionLengthKm(profile: SalinityProfile, isohaline = 2): SaltIntrusion {
   checkValue("saltIntrusionLengthKm", isohaline);

@@ -4,6 +4,7 @@
  */
 import type { GeometryWarning } from "./types.ts";
 import type { SalinityProfile } from "./salinityTypes.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Result of {@link salinityIntervalToKm}. */
 export interface KmIntervals {
@@ -48,7 +49,7 @@ export function salinityIntervalToKm(profile: SalinityProfile, salinityRange: [n
   }
   if (km.length === 1 && salinity[0]! >= lo && salinity[0]! <= hi) out.push([km[0]!, km[0]!]);
   const warnings: GeometryWarning[] = [];
-  const [sMin, sMax] = [Math.min(...salinity), Math.max(...salinity)];
+  const [sMin, sMax] = [minOf(salinity), maxOf(salinity)];
   if (lo < sMin || hi > sMax) {
     warnings.push({
       code: "intervalBeyondSurvey",

@@ -1,3 +1,4 @@
+import { quantityUnit } from "../seawater/quantityUnits.ts";
 import type { Constituent, ImportIssue } from "../survey/survey.ts";
 import type { ColumnMapping, ColumnRole } from "./columnMapping.ts";
 import { makeIssue } from "./importSummary.ts";
@@ -28,6 +29,26 @@ export interface CompiledMapping {
   constituentList: Constituent[];
 }
 
+function looseHeader(h: string): string {
+  return h.trim().toLowerCase();
+}
+
+/** Column positions by exact header and by trimmed lower-case header, built once (linear in the columns). */
+function headerIndex(headers: readonly string[]): { exact: Map<string, number[]>; loose: Map<string, number[]> } {
+  const exact = new Map<string, number[]>();
+  const loose = new Map<string, number[]>();
+  headers.forEach((h, i) => {
+    const e = exact.get(h);
+    if (e === undefined) exact.set(h, [i]);
+    else e.push(i);
+    const k = looseHeader(h);
+    const l = loose.get(k);
+    if (l === undefined) loose.set(k, [i]);
+    else l.push(i);
+  });
+  return { exact, loose };
+}
+
 /** Units the single-value roles are read in; a header naming another unit is an error, never converted by guess. */
 const EXPECTED_UNIT: Partial<Record<SingleRole, string>> = {
   depth: "m",
@@ -35,8 +56,6 @@ const EXPECTED_UNIT: Partial<Record<SingleRole, string>> = {
   discharge: "m³/s",
   temperature: "°C",
 };
-
-const COND_FACTOR: Record<string, number> = { "mS/cm": 1, "µS/cm": 0.001, "S/m": 10 };
 
 /**
  * Resolves a ColumnMapping against a header row: finds each mapped column, checks units and the
@@ -62,19 +81,53 @@ export function compileMapping(
     flagOf: new Map(),
     constituentList: [],
   };
+  const columns = headerIndex(headers);
+  for (const [h, list] of columns.exact)
+    if (list.length > 1)
+      issues.push(
+        makeIssue(
+          file,
+          1,
+          h,
+          h,
+          `one column per header; "${h}" heads columns ${list.map((i) => i + 1).join(", ")} (told apart by position; rename them to make the file unambiguous)`,
+          "warning",
+        ),
+      );
+  // Repeated headers are matched to the mapping's assignments in order (first assignment → first column).
+  const taken = new Map<string, number>();
+  const nextIndex = (h: string): number => {
+    const list = columns.exact.get(h) ?? columns.loose.get(looseHeader(h)) ?? [];
+    const n = taken.get(h) ?? 0;
+    taken.set(h, n + 1);
+    return list[Math.min(n, list.length - 1)] ?? -1;
+  };
   const indexOf = (h: string): number => {
-    const exact = headers.indexOf(h);
-    return exact >= 0 ? exact : headers.findIndex((x) => x.trim().toLowerCase() === h.trim().toLowerCase());
+    const list = columns.exact.get(h) ?? columns.loose.get(looseHeader(h));
+    return list?.[0] ?? -1;
   };
   const keys = new Set<string>();
   for (const col of mapping.columns) {
-    const i = indexOf(col.header);
+    const i = nextIndex(col.header);
     if (i < 0) {
       if (col.role !== "ignore")
         issues.push(makeIssue(file, 0, col.header, "", `column "${col.header}" named in the mapping`, "warning"));
       continue;
     }
-    if (col.role === "ignore") continue;
+    if (col.role === "ignore") {
+      if (col.reason?.startsWith("second ") === true)
+        issues.push(
+          makeIssue(
+            file,
+            1,
+            col.header,
+            col.header,
+            `one ${col.reason.slice(7)}; column ${i + 1} is not used`,
+            "warning",
+          ),
+        );
+      continue;
+    }
     if (col.role === "flag") {
       const target = col.flagFor === undefined ? -1 : indexOf(col.flagFor);
       if (target < 0)
@@ -102,7 +155,7 @@ export function compileMapping(
       const name = col.name ?? col.header;
       let key = name;
       if (keys.has(key)) {
-        key = `${name} (${col.header})`;
+        key = keys.has(`${name} (${col.header})`) ? `${name} (column ${i + 1})` : `${name} (${col.header})`;
         issues.push(makeIssue(file, 0, col.header, name, `one column per constituent; stored as "${key}"`, "warning"));
       }
       keys.add(key);
@@ -133,7 +186,7 @@ export function compileMapping(
     compiled.single[role] = i;
     if (role === "conductivity") {
       const u = col.unit === undefined ? undefined : parseUnit(col.unit);
-      const f = u === undefined ? undefined : COND_FACTOR[u];
+      const f = u === undefined ? undefined : quantityUnit("conductivity", u)?.factor;
       if (f === undefined)
         issues.push(makeIssue(file, 0, col.header, col.unit ?? "", "a conductivity unit (mS/cm, µS/cm or S/m)"));
       else compiled.conductivityToMScm = f;

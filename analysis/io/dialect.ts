@@ -6,6 +6,27 @@ export interface TextDialect {
   delimiter: string;
   /** True when numbers use a decimal comma ("12,5"); only possible when the delimiter is not ",". */
   decimalComma: boolean;
+  /** Line break of the file, detected once on its beginning so the text and stream readers agree. */
+  newline?: "\r\n" | "\n" | "\r";
+}
+
+/**
+ * The line break a text uses, chosen as papaparse chooses it (quoted text removed; "\n" when it
+ * comes before any "\r"; else "\r\n" when at least half the "\r" are followed by "\n"; else "\r"),
+ * so the whole-text and the chunked reader agree even when the header is longer than a chunk.
+ *
+ * @param sample the beginning of the file
+ * @returns the line break, or undefined when the sample holds none outside quotes
+ */
+export function detectNewline(sample: string): "\r\n" | "\n" | "\r" | undefined {
+  const text = sample.replace(/"[^]*?"/g, "");
+  const r = text.split("\r");
+  const n = text.split("\n");
+  if (r.length === 1 && n.length === 1) return undefined;
+  if (r.length === 1 || (n.length > 1 && (n[0] ?? "").length < (r[0] ?? "").length)) return "\n";
+  let withN = 0;
+  for (const part of r) if (part.startsWith("\n")) withN += 1;
+  return withN >= r.length / 2 ? "\r\n" : "\r";
 }
 
 /** Delimiters tried by {@link detectDialect}, in order of preference on a tie. */

@@ -21,6 +21,8 @@ import { suggestMapping } from "./suggestMapping.ts";
 import { crossCheckUnits } from "./unitCrossCheck.ts";
 import type { UnitParser } from "./unitText.ts";
 import { canonicalUnitText } from "./unitText.ts";
+import { conflictingStationPositions } from "./stationPositionCheck.ts";
+import { appendAll } from "../survey/arrayExtent.ts";
 
 /** Options shared by the survey readers. */
 export interface ReadSurveyOptions {
@@ -100,7 +102,7 @@ export function startRows(
     ...(options.flagMap !== undefined ? { flagMap: options.flagMap } : {}),
     salinityFromConductivity: options.salinityFromConductivity ?? pss78Salinity,
   });
-  reader.issues.push(...issues);
+  appendAll(reader.issues, issues);
   return { reader, compiled };
 }
 
@@ -116,15 +118,16 @@ export function finishImport(
   const file = options.fileName;
   const issues = reader.issues;
   const stationHeader = compiled.single.station === undefined ? "" : (headers[compiled.single.station] ?? "");
-  issues.push(...crossCheckUnits(reader.stations, compiled.constituents, file));
+  appendAll(issues, crossCheckUnits(reader.stations, compiled.constituents, file));
   let rows: ImportedStation[] = reader.stations;
   if (options.stationTable !== undefined) {
     const joined = joinStationTable(rows, options.stationTable, file, stationHeader);
     rows = joined.stations;
-    issues.push(...joined.issues);
+    appendAll(issues, joined.issues);
   }
+  appendAll(issues, conflictingStationPositions(reader.stations, file, stationHeader));
   const layered = selectLayer(rows, options.layer ?? { kind: "all" }, file);
-  issues.push(...layered.issues);
+  appendAll(issues, layered.issues);
   const noPos = new Map<string, ImportedStation>();
   for (const st of layered.stations)
     if (st.lonLat === undefined && !noPos.has(normaliseStationId(st.id).id))
@@ -148,7 +151,7 @@ export function finishImport(
   const grouping: SurveyGrouping =
     options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
   const grouped = groupSurveys(layered.stations, grouping, compiled.constituentList, file, options.riverDischargeM3s);
-  issues.push(...grouped.issues);
+  appendAll(issues, grouped.issues);
   options.onProgress?.(1);
   return { surveys: grouped.surveys, issues, summary: reader.summary, mapping, headers, dialect };
 }

@@ -2,6 +2,7 @@ import type { ImportIssue, ValueCell } from "../survey/survey.ts";
 import type { ImportedStation } from "./importSummary.ts";
 import { makeIssue } from "./importSummary.ts";
 import { normaliseStationId } from "./stationIds.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Which part of the water column becomes the one station per station and time. */
 export type LayerChoice =
@@ -28,7 +29,7 @@ export function combineCells(cells: readonly ValueCell[]): ValueCell {
   if (bdl.length > 0) {
     const limits = bdl.map((c) => c.detectionLimit).filter((x): x is number => x !== undefined);
     const cell: ValueCell = { value: undefined, original, status: "belowDetection", accepted: true };
-    if (limits.length > 0) cell.detectionLimit = Math.max(...limits);
+    if (limits.length > 0) cell.detectionLimit = maxOf(limits);
     return cell;
   }
   const first = cells.find((c) => c.status !== "missing") ?? cells[0];
@@ -47,7 +48,7 @@ function pick(rows: ImportedStation[], choice: LayerChoice): ImportedStation[] {
   const withDepth = rows.filter((r) => r.depthM !== undefined);
   if (withDepth.length === 0) return rows.length === 1 ? rows : [];
   const depths = withDepth.map((r) => r.depthM as number);
-  const target = label === "surface" ? Math.min(...depths) : Math.max(...depths);
+  const target = label === "surface" ? minOf(depths) : maxOf(depths);
   return withDepth.filter((r) => r.depthM === target);
 }
 

@@ -1,6 +1,6 @@
 import { requireOptions, requireString } from "./argChecks.ts";
 import type { TextDialect } from "./dialect.ts";
-import { detectDialect, stripBom } from "./dialect.ts";
+import { detectDialect, detectNewline, stripBom } from "./dialect.ts";
 import { parseDelimitedChunks, parseDelimitedText } from "./delimitedRecords.ts";
 import type { ImportResult, ReadSurveyOptions } from "./importPipeline.ts";
 import { RecordRouter } from "./recordRouter.ts";
@@ -10,7 +10,8 @@ function dialectFor(sample: string, options: ReadSurveyOptions): TextDialect {
   const detected = detectDialect(sample);
   const delimiter = options.delimiter ?? m?.delimiter ?? detected.delimiter;
   const decimalComma = options.decimalComma ?? m?.decimalComma ?? (delimiter === "," ? false : detected.decimalComma);
-  return { delimiter, decimalComma };
+  const newline = detectNewline(sample);
+  return newline === undefined ? { delimiter, decimalComma } : { delimiter, decimalComma, newline };
 }
 
 /**

@@ -53,6 +53,16 @@ export class RecordRouter {
         expected: "a header row and data rows (the file is empty)",
         severity: "error",
       });
+    const unclosed = head?.parseErrors.find((e) => e.startsWith("UnclosedQuote"));
+    if (head !== undefined && unclosed !== undefined)
+      reader.issues.push({
+        file: this.options.fileName,
+        row: 1,
+        column: "",
+        value: head.fields.join(",").slice(0, 200),
+        expected: `a header row with balanced quotes (${unclosed.slice(15)})`,
+        severity: "error",
+      });
     for (const r of rest) reader.read(r);
     this.buffer = [];
   }
@@ -66,8 +76,8 @@ export class RecordRouter {
         row: 1,
         column: "",
         value: this.headers.join(",").slice(0, 200),
-        expected: "data rows below the header",
-        severity: "warning",
+        expected: `data rows below the header (the file holds only a header row of ${this.headers.length} column${this.headers.length === 1 ? "" : "s"}${this.headers.length === 1 ? " — a truncated file or an undetected delimiter?" : ""})`,
+        severity: "error",
       });
     }
     return finishImport(

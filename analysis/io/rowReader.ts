@@ -30,6 +30,19 @@ export interface RowReader {
   summary: ImportSummary;
 }
 
+/** Longest station id accepted; a longer one rejects its row (it is not cut silently). */
+export const MAX_STATION_ID_CHARS = 200;
+
+/**
+ * Upper end of the Practical Salinity Scale 1978's validity range.
+ * @see UNESCO (1981) Background papers and supporting data on the Practical Salinity Scale 1978,
+ *   UNESCO Tech. Pap. Mar. Sci. 37; UNESCO (1983) Tech. Pap. Mar. Sci. 44 (range 2–42).
+ */
+export const PSS78_MAX_SALINITY = 42;
+
+/** Largest river discharge read [m³/s]: ten times the largest river's mean flow (common practice: a plausibility bound). */
+export const MAX_DISCHARGE_M3S = 2_000_000;
+
 const VALUE_ROLES = ["salinity", "temperature", "pH", "conductivity"] as const;
 
 /**
@@ -63,6 +76,13 @@ export function createRowReader(
     const { fields, row } = record;
     summary.rowsRead += 1;
     const ctx: CellContext = { file: options.file, row, decimalComma: options.decimalComma, flagMap, issues };
+    const unclosed = record.parseErrors.find((e) => e.startsWith("UnclosedQuote"));
+    if (unclosed !== undefined) {
+      countRejected(summary, "unclosed quote");
+      const col = Number(/field (\d+)/.exec(unclosed)?.[1] ?? "1") - 1;
+      issues.push(makeIssue(options.file, row, header(col), fields.join(","), unclosed.slice(15)));
+      return;
+    }
     for (const e of record.parseErrors)
       issues.push(
         makeIssue(
@@ -85,13 +105,25 @@ export function createRowReader(
       return f === undefined ? undefined : { text: cellText(f), header: header(f) };
     };
     // station id
-    let id = s.station === undefined ? `row ${row}` : cellText(s.station).trim();
+    const id = s.station === undefined ? `row ${row}` : cellText(s.station).trim();
     if (id.length === 0) {
       countRejected(summary, "missing station id");
       issues.push(makeIssue(options.file, row, header(s.station ?? 0), cellText(s.station), "a station id"));
       return;
     }
-    if (id.length > 200) id = id.slice(0, 200);
+    if (id.length > MAX_STATION_ID_CHARS) {
+      countRejected(summary, "station id too long");
+      issues.push(
+        makeIssue(
+          options.file,
+          row,
+          header(s.station ?? 0),
+          id,
+          `a station id of at most ${MAX_STATION_ID_CHARS} characters (this one has ${id.length}); row not imported`,
+        ),
+      );
+      return;
+    }
     // row flag
     let rowFlag: string | undefined;
     if (s.rowFlag !== undefined) {
@@ -115,12 +147,34 @@ export function createRowReader(
       if (role !== "conductivity") count(c);
       cells[role] = c;
     }
+    if (cells.salinity?.status === "measured" && (cells.salinity.value ?? 0) > PSS78_MAX_SALINITY)
+      issues.push(
+        makeIssue(
+          options.file,
+          row,
+          header(s.salinity ?? 0),
+          cells.salinity.original,
+          `a practical salinity within the PSS-78 range 2–${PSS78_MAX_SALINITY} (UNESCO 1981, 1983); value kept — check the column and its unit`,
+          "warning",
+        ),
+      );
     let salinity = cells.salinity;
     if (salinity === undefined)
       salinity = salinityFromConductivityCell(ctx, cells, compiled, options.salinityFromConductivity, place.depthM);
     const values: Record<string, ValueCell> = {};
     for (const c of compiled.constituents) {
       const cell = readValueCell(ctx, header(c.index), cellText(c.index), flagged(c.index));
+      if (cell.status === "measured" && (cell.value ?? 0) < 0)
+        issues.push(
+          makeIssue(
+            options.file,
+            row,
+            header(c.index),
+            cell.original,
+            "a concentration ≥ 0; the negative value is kept as written (blank-corrected?) — check it",
+            "warning",
+          ),
+        );
       count(cell);
       values[c.key] = cell;
     }
@@ -134,7 +188,18 @@ export function createRowReader(
     }
     if (s.discharge !== undefined) {
       const q = readNumberCell(ctx, header(s.discharge), cellText(s.discharge), 0);
-      if (q !== undefined) st.dischargeM3s = q;
+      if (q !== undefined && q > 0 && q <= MAX_DISCHARGE_M3S) st.dischargeM3s = q;
+      else if (q !== undefined)
+        issues.push(
+          makeIssue(
+            options.file,
+            row,
+            header(s.discharge),
+            cellText(s.discharge),
+            `a river discharge above 0 and at most ${MAX_DISCHARGE_M3S} m³/s; not used`,
+            "warning",
+          ),
+        );
     }
     if (rowFlag !== undefined && rowFlag.trim() !== "") st.rowFlag = rowFlag;
     stations.push(st);

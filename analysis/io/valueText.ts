@@ -9,7 +9,6 @@ export const MISSING_MARKERS: readonly string[] = [
   "",
   "na",
   "n/a",
-  "nan",
   "null",
   "none",
   "-",
@@ -82,8 +81,9 @@ function squeeze(text: string): string {
  * - number → status "measured";
  * - `<0.05`, `< 0.05`, `<0,05` (decimal comma) → "belowDetection" with detectionLimit 0.05;
  * - `BDL`, `ND`, `n.d.`, `<DL`, `<LOD` → "belowDetection" without a limit;
- * - blank, `NA`, `N/A`, `NaN`, `-999`, `-9999` → "missing";
- * - anything else → "invalid" (the caller reports an ImportIssue).
+ * - blank, `NA`, `N/A`, `-999`, `-9999` → "missing";
+ * - anything else, including `NaN` and `Infinity` (not numbers, and not a declared missing marker),
+ *   → "invalid" (the caller reports an ImportIssue naming the text).
  *
  * @param text the cell text as found in the file
  * @param options decimal separator choice

@@ -3,7 +3,15 @@ import type { ImportIssue } from "../survey/survey.ts";
 import { makeIssue } from "./importSummary.ts";
 import { WORKSPACE_MIGRATIONS } from "./workspaceMigrations.ts";
 import type { WorkspaceDocument } from "./workspaceSchema.ts";
-import { surveySchema, WORKSPACE_FORMAT, WORKSPACE_VERSION, workspaceSchema } from "./workspaceSchema.ts";
+import {
+  isTileUrlTemplate,
+  surveySchema,
+  WORKSPACE_FORMAT,
+  WORKSPACE_LIMITS,
+  WORKSPACE_VERSION,
+  workspaceSchema,
+} from "./workspaceSchema.ts";
+import { appendAll } from "../survey/arrayExtent.ts";
 
 const FILE = "workspace";
 
@@ -43,6 +51,45 @@ export function exportWorkspace(ws: WorkspaceDocument): string {
   return JSON.stringify(checked.data, null, 2);
 }
 
+function countVertices(x: unknown, depth = 0): number {
+  if (!Array.isArray(x) || depth > 6) return 0;
+  if (x.length > 0 && typeof x[0] === "number") return 1;
+  let n = 0;
+  for (const y of x) n += countVertices(y, depth + 1);
+  return n;
+}
+
+/** Checks the size caps before the (costly) schema validation. */
+function sizeProblem(record: Record<string, unknown>): ImportIssue | undefined {
+  const surveys = Array.isArray(record.surveys) ? (record.surveys as unknown[]) : [];
+  let stations = 0;
+  for (const s of surveys) {
+    const st = (s as { stations?: unknown } | null)?.stations;
+    if (Array.isArray(st)) stations += st.length;
+  }
+  if (stations > WORKSPACE_LIMITS.maxStations)
+    return makeIssue(
+      FILE,
+      0,
+      "surveys",
+      `${stations} stations`,
+      `at most ${WORKSPACE_LIMITS.maxStations} stations in one workspace; split the surveys over several workspaces`,
+    );
+  const c = record.centerline as { geometry?: { coordinates?: unknown }; features?: unknown } | null | undefined;
+  const features = Array.isArray(c?.features) ? (c.features as { geometry?: { coordinates?: unknown } }[]) : [c];
+  let vertices = 0;
+  for (const f of features) vertices += countVertices(f?.geometry?.coordinates);
+  if (vertices > WORKSPACE_LIMITS.maxCenterlineVertices)
+    return makeIssue(
+      FILE,
+      0,
+      "centerline",
+      `${vertices} vertices`,
+      `a centerline of at most ${WORKSPACE_LIMITS.maxCenterlineVertices} vertices; simplify it`,
+    );
+  return undefined;
+}
+
 function zodIssues(error: z.ZodError, prefix: string): ImportIssue[] {
   return error.issues.slice(0, 50).map((i) => makeIssue(FILE, 0, `${prefix}${i.path.join(".")}`, "", i.message));
 }
@@ -58,6 +105,18 @@ function zodIssues(error: z.ZodError, prefix: string): ImportIssue[] {
  */
 export function importWorkspace(text: string): { workspace: WorkspaceDocument | undefined; issues: ImportIssue[] } {
   const issues: ImportIssue[] = [];
+  if (text.length > WORKSPACE_LIMITS.maxChars) {
+    issues.push(
+      makeIssue(
+        FILE,
+        0,
+        "",
+        `${text.length} characters`,
+        `a workspace of at most ${WORKSPACE_LIMITS.maxChars} characters (about ${WORKSPACE_LIMITS.maxStations} stations); split the surveys over several workspaces`,
+      ),
+    );
+    return { workspace: undefined, issues };
+  }
   let doc: unknown;
   try {
     doc = JSON.parse(text.replace(/^\uFEFF/, "")) as unknown;
@@ -92,7 +151,7 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
     const step = WORKSPACE_MIGRATIONS[version];
     const parsed = step?.schema.safeParse(doc);
     if (step === undefined || parsed === undefined || !parsed.success) {
-      if (parsed !== undefined && !parsed.success) issues.push(...zodIssues(parsed.error, ""));
+      if (parsed !== undefined && !parsed.success) appendAll(issues, zodIssues(parsed.error, ""));
       issues.push(makeIssue(FILE, 0, "version", String(version), `a valid version ${version} document to migrate`));
       return { workspace: undefined, issues };
     }
@@ -101,6 +160,11 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
     version += 1;
   }
   const record = doc as Record<string, unknown>;
+  const size = sizeProblem(record);
+  if (size !== undefined) {
+    issues.push(size);
+    return { workspace: undefined, issues };
+  }
   if (Array.isArray(record.surveys)) {
     record.surveys = record.surveys.filter((s, i) => {
       const r = surveySchema.safeParse(s);
@@ -114,8 +178,36 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
   }
   const result = workspaceSchema.safeParse(record);
   if (!result.success) {
-    issues.push(...zodIssues(result.error, ""));
+    appendAll(issues, zodIssues(result.error, ""));
     return { workspace: undefined, issues };
+  }
+  const tiles = result.data.settings.tileUrl;
+  if (tiles !== undefined && tiles !== "" && !isTileUrlTemplate(tiles)) {
+    delete result.data.settings.tileUrl;
+    result.data.settings.useTiles = false;
+    issues.push(
+      makeIssue(
+        FILE,
+        0,
+        "settings.tileUrl",
+        tiles,
+        "an https:// tile URL template with {z}, {x} and {y}; the tile URL was left out",
+        "warning",
+      ),
+    );
+  } else if (tiles !== undefined && tiles !== "" && result.data.settings.useTiles === true) {
+    // A shared workspace must not make the browser contact a server the user did not choose.
+    result.data.settings.useTiles = false;
+    issues.push(
+      makeIssue(
+        FILE,
+        0,
+        "settings.tileUrl",
+        tiles,
+        "tiles from a server you chose: the workspace names an external tile server, left off until you turn it on",
+        "warning",
+      ),
+    );
   }
   // JSON drops undefined values; give every cell its `value` key back so cells match the survey model.
   const workspace = result.data as unknown as WorkspaceDocument;

@@ -1,50 +1,99 @@
 import { z } from "zod";
 import type { Survey } from "../survey/survey.ts";
 import { columnMappingSchema } from "./columnMapping.ts";
+import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
 
 /** Current workspace document version. */
 export const WORKSPACE_VERSION = 2;
 /** The format tag every workspace document carries. */
 export const WORKSPACE_FORMAT = "brackline-workspace";
 
-const finite = z.number().refine(Number.isFinite, "a finite number");
-const lonLat = z.tuple([finite, finite]);
+/** Size caps of a workspace document (see README "Limits"). */
+export const WORKSPACE_LIMITS = {
+  /** Longest workspace text read [characters]. */
+  maxChars: 100_000_000,
+  /** Most stations over all surveys. */
+  maxStations: 100_000,
+  /** Most surveys. */
+  maxSurveys: 1_000,
+  /** Most constituents per survey. */
+  maxConstituents: 500,
+  /** Most vertices in the centerline. */
+  maxCenterlineVertices: 1_000_000,
+  /** Longest text field (ids, names, original cell text) [characters]. */
+  maxTextChars: 10_000,
+} as const;
 
-export const valueCellSchema = z.object({
-  value: finite.optional(),
-  original: z.string(),
-  status: z.enum(["measured", "belowDetection", "missing", "invalid"]),
-  detectionLimit: finite.optional(),
-  qcFlag: z.string().optional(),
-  accepted: z.boolean(),
-});
+const finite = z.number().refine(Number.isFinite, "a finite number");
+const nonNegative = finite.refine((v) => v >= 0, "a number ≥ 0");
+const positive = finite.refine((v) => v > 0, "a number > 0");
+const text = z.string().max(WORKSPACE_LIMITS.maxTextChars, `at most ${WORKSPACE_LIMITS.maxTextChars} characters`);
+const lonLat = z.tuple([
+  finite.refine((v) => v >= -180 && v <= 180, "a longitude between -180 and 180"),
+  finite.refine((v) => v >= -90 && v <= 90, "a latitude between -90 and 90"),
+]);
+
+export const valueCellSchema = z
+  .object({
+    value: finite.optional(),
+    original: text,
+    status: z.enum(["measured", "belowDetection", "missing", "invalid"]),
+    detectionLimit: nonNegative.optional(),
+    qcFlag: text.optional(),
+    accepted: z.boolean(),
+  })
+  .refine((c) => (c.status === "measured") === (c.value !== undefined), {
+    message: "a value exactly when the status is measured (a missing, censored or invalid cell carries none)",
+    path: ["value"],
+  })
+  .refine((c) => c.detectionLimit === undefined || c.status === "belowDetection", {
+    message: "a detection limit only on a below-detection cell",
+    path: ["detectionLimit"],
+  });
+
+/** A value cell whose measured value must lie in [min, max]. */
+function cellWithin(min: number, max: number, what: string) {
+  return valueCellSchema.refine((c) => c.value === undefined || (c.value >= min && c.value <= max), {
+    message: `${what} between ${min} and ${max}`,
+    path: ["value"],
+  });
+}
 
 export const stationSchema = z.looseObject({
-  id: z.string(),
-  time: z.string().optional(),
+  id: text,
+  time: text.optional(),
   lonLat: lonLat.optional(),
-  depthM: finite.optional(),
-  salinity: valueCellSchema,
-  temperatureC: valueCellSchema.optional(),
-  pH: valueCellSchema.optional(),
-  values: z.record(z.string(), valueCellSchema),
-  sourceRow: z.number().int(),
-  sourceFile: z.string(),
-  surveyLabel: z.string().optional(),
+  depthM: nonNegative.optional(),
+  salinity: cellWithin(0, 70, "a practical salinity"),
+  temperatureC: cellWithin(-5, 60, "a temperature [°C]").optional(),
+  pH: cellWithin(0, 14, "a pH").optional(),
+  values: z.record(text, valueCellSchema),
+  sourceRow: z.number().int().nonnegative(),
+  sourceFile: text,
+  surveyLabel: text.optional(),
   layer: z.enum(["surface", "bottom", "middle", "depthAveraged", "depthRange"]).optional(),
   distanceKm: finite.optional(),
-  dischargeM3s: finite.optional(),
-  rowFlag: z.string().optional(),
+  dischargeM3s: nonNegative.optional(),
+  rowFlag: text.optional(),
   contributingRows: z.array(z.number().int()).optional(),
 });
 
+const constituentSchema = z.object({
+  name: text,
+  unit: text.refine(
+    (u) => concentrationUnitText(u) === u || canonicalUnitText(u) === u,
+    "a unit from the units table, written as the table writes it (e.g. nmol/L, µmol/kg, µg/L, NTU)",
+  ),
+  header: text,
+});
+
 export const surveySchema = z.object({
-  name: z.string(),
-  startDate: z.string().optional(),
-  endDate: z.string().optional(),
-  riverDischargeM3s: finite.optional(),
-  stations: z.array(stationSchema),
-  constituents: z.array(z.object({ name: z.string(), unit: z.string(), header: z.string() })),
+  name: text,
+  startDate: text.optional(),
+  endDate: text.optional(),
+  riverDischargeM3s: positive.optional(),
+  stations: z.array(stationSchema).max(WORKSPACE_LIMITS.maxStations),
+  constituents: z.array(constituentSchema).max(WORKSPACE_LIMITS.maxConstituents),
 });
 
 export const importIssueSchema = z.object({
@@ -94,18 +143,34 @@ export const workspaceSettingsSchema = z.looseObject({
   grouping: grouping.optional(),
   flagMap: z.record(z.string(), z.enum(["accept", "reject", "missing"])).optional(),
   colouring: z.string().optional(),
-  tileUrl: z.string().optional(),
+  /** Raster tile URL template; checked by {@link isTileUrlTemplate} when a workspace is read. */
+  tileUrl: z.string().max(2048).optional(),
   useTiles: z.boolean().optional(),
 });
 
-const endmember = z.object({ salinity: finite, conc: finite, concSd: finite.optional() });
+/**
+ * True for a tile URL template Brackline will fetch from: https (or http on this machine) with the
+ * {z}, {x} and {y} placeholders and no white space, quotes or angle brackets.
+ *
+ * @param url the template text
+ */
+export function isTileUrlTemplate(url: string): boolean {
+  const scheme = /^(https:\/\/|http:\/\/(localhost|127\.0\.0\.1)(:\d+)?\/)[^\s"'<>]+$/;
+  return scheme.test(url) && ["{z}", "{x}", "{y}"].every((p) => url.includes(p));
+}
+
+const endmember = z.object({
+  salinity: finite.refine((v) => v >= 0 && v <= 70, "a practical salinity between 0 and 70"),
+  conc: finite,
+  concSd: nonNegative.optional(),
+});
 /** Analysis choices (end-member overrides, precision, discharge, constants). Unknown keys are kept. */
 export const analysisChoicesSchema = z.looseObject({
   endmemberOverrides: z
     .record(z.string(), z.object({ river: endmember.optional(), sea: endmember.optional() }))
     .optional(),
-  precisionPercent: z.record(z.string(), finite).optional(),
-  riverDischargeM3s: finite.optional(),
+  precisionPercent: z.record(z.string(), positive).optional(),
+  riverDischargeM3s: positive.optional(),
   constantSet: z.string().optional(),
   saltIntrusionSalinity: finite.optional(),
   selectedSurvey: z.string().optional(),
@@ -128,7 +193,7 @@ export const workspaceSchema = z.object({
   version: z.literal(WORKSPACE_VERSION),
   name: z.string().optional(),
   savedAt: z.string().optional(),
-  surveys: z.array(surveySchema),
+  surveys: z.array(surveySchema).max(WORKSPACE_LIMITS.maxSurveys),
   centerline: centerlineSchema.nullable(),
   mappings: z.array(columnMappingSchema),
   imports: z.array(importRecordSchema),

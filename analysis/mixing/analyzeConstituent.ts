@@ -4,6 +4,7 @@ import { validateOptions } from "./validateOptions.ts";
 import { defaultPrecision, sigmaOf } from "./precision.ts";
 import { prepareSamples } from "./prepareSamples.ts";
 import { applyOverride, endmemberFromData } from "./endmembers.ts";
+import { groupScatter, referenceSalinity, riverAtReference, riverSlopeWarning } from "./riverReference.ts";
 import { deviations, dilutionLine } from "./dilutionLine.ts";
 import { isNonConservative, mixingEvidence } from "./evidence.ts";
 import { fitCurve } from "./curveFit.ts";
@@ -30,10 +31,35 @@ export const MIN_SALINITY_SPAN = 1;
  * @param options see {@link AnalyzeOptions}
  * @returns the analysis
  * @throws TypeError/RangeError for caller mistakes in the options or samples argument
- * @see Boyle et al. (1974) GCA 38, 1719–1728; Liss (1976); Loder & Reichard (1981); mixing-methods.md §1–§7.
+ * @see bibliography keys boyle1974, liss1976, loderReichard1981.
  */
 export function analyzeConstituent(samples: readonly MixingSample[], options: AnalyzeOptions): ConstituentAnalysis {
   validateOptions(options);
+  if (!Array.isArray(samples))
+    throw new TypeError(`analyzeConstituent: samples must be an array, got ${typeof samples}`);
+  try {
+    return analyzeChecked(samples, options);
+  } catch (error) {
+    if ((error as Error).message?.startsWith("analyzeConstituent:")) throw error;
+    // Caller mistakes were thrown above; anything else is a numerical failure on this constituent's
+    // data, returned as "insufficient-data" with a warning so one constituent never aborts a survey.
+    return {
+      name: options.name,
+      unit: options.unit,
+      class: "insufficient-data",
+      confidence: "low",
+      deviations: [],
+      warnings: [
+        {
+          code: "analysis-failed",
+          message: `The mixing analysis of ${options.name} failed on these data (${(error as Error).message}); no estimates are given. Check for many zeros, ties or extreme values.`,
+        },
+      ],
+    };
+  }
+}
+
+function analyzeChecked(samples: readonly MixingSample[], options: AnalyzeOptions): ConstituentAnalysis {
   const fn = "analyzeConstituent";
   const { name, unit } = options;
   const k = options.k ?? 2;
@@ -66,15 +92,25 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
   if (sMax - sMin < MIN_SALINITY_SPAN)
     return insufficient(`Salinity spans only ${sMin}–${sMax} (< ${MIN_SALINITY_SPAN}): no mixing gradient to analyse.`);
   const sig = (c: number): number => sigmaOf(precision, c);
-  let river = endmemberFromData(used, "river");
+  const group = endmemberFromData(used, "river");
+  let river = group;
   let sea = endmemberFromData(used, "sea");
-  if (options.river) river = applyOverride(fn, "river", river, options.river, sig);
+  const tp = used.length >= MIN_STATIONS ? seawardTangent(used) : undefined;
+  const ref = referenceSalinity(sMin, options.river?.salinity);
+  if (options.river) river = applyOverride(fn, "river", river, { ...options.river, salinity: ref.salinity }, sig);
+  else if (tp) river = riverAtReference(used, group, tp.fit, ref.salinity);
+  if (ref.warning) warnings.push(ref.warning);
   if (options.sea) sea = applyOverride(fn, "sea", sea, options.sea, sig);
   if (!(sea.salinity > river.salinity))
     return insufficient(`Sea end-member salinity ${sea.salinity} is not above river salinity ${river.salinity}.`);
-  const rv = riverVariability(river, sig(river.conc), options);
+  // Disagreement of the freshest samples beyond the fitted curve (not the slope the curve explains).
+  const rv = riverVariability(
+    tp && !options.river ? groupScatter(used, group, tp.fit) : river,
+    sig(river.conc),
+    options,
+  );
   warnings.push(...rv.warnings);
-  if (rv.widenedSd !== undefined) river = { ...river, concSd: Math.max(river.concSd, rv.widenedSd) };
+  if (tp && !options.river) warnings.push(...riverSlopeWarning(used, group, river, options.unit));
   const line = dilutionLine(river, sea, unit);
   const devs = deviations(line, used, k);
   const endmembers = { river, sea };
@@ -92,8 +128,7 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
       dilutionLine: line,
       deviations: devs,
     });
-  const tangent = seawardTangent(used, curve.scatterFactor);
-  if (!tangent)
+  if (!tp)
     return insufficient(`No seaward tangent could be fitted for ${name}.`, {
       endmembers,
       dilutionLine: line,
@@ -108,8 +143,11 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
     sea,
     line,
     curve,
-    tangent,
-    nonConservative: isNonConservative(evidence),
+    twoPhase: tp.fit,
+    tangent: tp.tangent,
+    riverExtraSd: rv.widenedSd,
+    evidence,
+    nonConservative: isNonConservative(evidence) || !tp.fit.linear,
     quadCoef: evidence.quadraticCoefficient,
     warnings,
   });
@@ -119,11 +157,11 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
     unit,
     class: result.cls,
     confidence: all.some((w) => LOW_CONFIDENCE_CODES.has(w.code)) ? "low" : "normal",
-    endmembers,
+    endmembers: { river: result.river, sea },
     dilutionLine: line,
     deviations: devs,
     fit: result.fit,
-    tangent,
+    tangent: tp.tangent,
     evidence,
     effectiveEndmember: result.effective,
     percentChange: result.percent,
@@ -132,6 +170,8 @@ export function analyzeConstituent(samples: readonly MixingSample[], options: An
     maximum: result.maximum,
     rateProfile: result.rate,
     bootstrap: result.bootstrap,
+    breakSalinity: result.breakSalinity,
+    verdict: result.verdict,
     warnings: all,
   };
 }

@@ -1,5 +1,7 @@
 import type {
   BehaviourClass,
+  Estimate,
+  MixingEvidence,
   ConstituentAnalysis,
   DilutionLine,
   Endmember,
@@ -13,12 +15,14 @@ import type { CurveFitResult } from "./curveFit.ts";
 import { salinityGrid, TIE_FRACTION } from "./curveFit.ts";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { runBootstrap } from "./bootstrapRun.ts";
-import { interiorMaximum, zoneFromCurve } from "./zoneAndMaximum.ts";
+import { zoneFromCurve } from "./zoneAndMaximum.ts";
+import { twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
+import { verdictOf } from "./verdict.ts";
 import { classify } from "./classify.ts";
 import { dilutionAt } from "./dilutionLine.ts";
 import { fluxSummary } from "./flux.ts";
 import { rateProfile } from "./rateProfile.ts";
-import { estimateOf } from "./estimate.ts";
+import { estimateOf, finiteEstimate } from "./estimate.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -29,7 +33,11 @@ export interface ShapeInput {
   sea: Endmember;
   line: DilutionLine;
   curve: CurveFitResult;
+  twoPhase: TwoPhaseFit;
   tangent: TangentLine;
+  /** Extra river sd from a river history within the flushing time (Loder & Reichard 1981). */
+  riverExtraSd?: number;
+  evidence: MixingEvidence;
   nonConservative: boolean;
   quadCoef: number;
   warnings: MixingWarning[];
@@ -46,18 +54,24 @@ function interpolate(xs: Float64Array, ys: number[], x: number): number {
   return ys[i]! + t * (ys[i + 1]! - ys[i]!);
 }
 
+/** Half-width (salinity units) of a break interval the tool calls located; wider intervals get a warning. */
+export const BREAK_GOAL_S = 2;
+
 /** Fewest stations inside a reaction zone before a warning. */
 export const MIN_ZONE_STATIONS = 3;
 
 /**
- * Second half of analyzeConstituent: curve on a grid, C*₀ and % change, bootstrap
- * intervals, class, reaction zone, maximum, fluxes and rate profile.
+ * Second half of analyzeConstituent: curve on a grid, C₀ and C*₀ at the reference salinity and
+ * % change from the two-phase fit, parametric-bootstrap intervals on the fixed design, class and
+ * verdict, reaction zone, maximum (root of dC/dS of the two-phase curve), fluxes and rate profile
+ * (curvature of the two-phase curve, checked against Q·(C*₀ − C₀)).
  *
  * @param p full-data pieces
  * @returns the shape-dependent parts of {@link ConstituentAnalysis}
  */
 export function analyzeShape(p: ShapeInput): {
   cls: BehaviourClass;
+  river: Endmember;
   fit: FitCurve;
   effective: ConstituentAnalysis["effectiveEndmember"];
   percent?: ConstituentAnalysis["percentChange"];
@@ -66,9 +80,12 @@ export function analyzeShape(p: ShapeInput): {
   maximum?: ConstituentAnalysis["maximum"];
   rate?: ConstituentAnalysis["rateProfile"];
   bootstrap: NonNullable<ConstituentAnalysis["bootstrap"]>;
+  breakSalinity?: Estimate;
+  verdict?: string;
   warnings: MixingWarning[];
 } {
-  const { used, options: o, river, sea, line, curve, tangent } = p;
+  const { used, options: o, sea, line, curve, tangent, twoPhase: tp } = p;
+  let river = p.river;
   const warnings: MixingWarning[] = [];
   const unit = o.unit;
   const n = used.length;
@@ -86,17 +103,22 @@ export function analyzeShape(p: ShapeInput): {
   const bGrid = salinityGrid(sMin, sMax, Math.min(G, BOOTSTRAP_GRID_POINTS));
   const seed = o.seed ?? 1;
   const x = Float64Array.from(used, (s) => s.salinity);
+  const yHat = Float64Array.from(used, (s) => twoPhaseAt(tp, s.salinity)[0]);
+  const dof = Math.max(1, n - tp.params);
+  const scatter = Math.max(1, Math.sqrt(tp.rss / dof));
+  const override = river.source === "override";
   const bs = runBootstrap({
     x,
-    y: Float64Array.from(used, (s) => s.conc),
+    yHat,
+    sigmaEff: Float64Array.from(used, (s) => s.sigma * scatter),
     w: Float64Array.from(used, (s) => 1 / s.sigma ** 2),
-    wTangent: Float64Array.from(used, (s) => 1 / (s.sigma * curve.scatterFactor) ** 2),
     lambda: curve.lambda,
     tieTol: TIE_FRACTION * (sMax - sMin),
     grid: bGrid,
-    tangent,
-    river: { salinity: sr, conc: river.conc, sd: river.concSd },
-    sea: { salinity: sea.salinity, conc: sea.conc, sd: sea.concSd },
+    referenceSalinity: sr,
+    riverOverride: override ? { conc: river.conc, sd: river.concSd } : undefined,
+    riverExtraSd: p.riverExtraSd,
+    sea: { salinity: sea.salinity, conc: sea.conc, sd: sea.concSd / Math.sqrt(Math.max(1, sea.n)) },
     draws,
     seed,
   });
@@ -105,22 +127,25 @@ export function analyzeShape(p: ShapeInput): {
       code: "bootstrap-degenerate",
       message: `Only ${bs.usable} of ${draws} bootstrap draws were usable; intervals are rough.`,
     });
+  if (!override && bs.riverSe !== undefined && Number.isFinite(bs.riverSe)) river = { ...river, concSd: bs.riverSe };
   const effective = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
-  if (river.conc > 0) percent = estimateOf((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
+  if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
   else
     warnings.push({
       code: "river-nonpositive",
       message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,
     });
-  const im = interiorMaximum(grid, f);
-  const cls = classify(p.nonConservative, cStar - river.conc, p.quadCoef, tangent, sMin, sMax, im >= 0, n);
+  const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
+  const mS = twoPhaseMaximum(tp, sMax);
+  // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the
+  // % change interval excludes zero.
+  const excludesZero = percent !== undefined && (percent.lower > 0 || percent.upper < 0);
+  const nonCons = p.nonConservative || p.evidence.chiSquaredP < 0.01 || excludesZero;
+  const cls = classify(nonCons, cStar - river.conc, p.quadCoef, tangent, sMin, sMax, mS !== undefined, n);
   const toKm = (a: number, b: number): Array<[number, number]> => o.salinityToKm?.(a, b) ?? [];
   let zone: ConstituentAnalysis["reactionZone"];
-  const z =
-    cls === "conservative"
-      ? undefined
-      : zoneFromCurve(grid, d2, sr, undefined, tangent.method === "segment" ? tangent.fromSalinity : undefined);
+  const z = cls === "conservative" ? undefined : zoneFromCurve(grid, d2, sr, undefined, segStart);
   if (z) {
     zone = {
       salinity: [z.from, z.to],
@@ -143,20 +168,27 @@ export function analyzeShape(p: ShapeInput): {
       ? fluxSummary(q, unit, estimateOf(river.conc, bs.riverConc, unit), effective, bs.netDelta, sr, o.densityKgM3)
       : undefined;
   if (fl) warnings.push(...fl.warnings);
-  if (im >= 0 && (cls === "addition" || cls === "maximum-then-conservative")) {
-    const s = grid[im]!;
+  if (mS !== undefined && (cls === "addition" || cls === "maximum-then-conservative")) {
     maximum = {
-      salinity: estimateOf(s, bs.maxSalinity, "salinity"),
-      km: o.salinityToKmPoint?.(s) ?? [],
-      excess: estimateOf(f[im]! - dilutionAt(line, s), bs.maxExcess, unit),
-      conservativeBeyondSalinity: tangent.method === "segment" ? tangent.fromSalinity : undefined,
+      salinity: estimateOf(mS, bs.maxSalinity, "salinity"),
+      km: o.salinityToKmPoint?.(mS) ?? [],
+      excess: estimateOf(twoPhaseAt(tp, mS)[0] - dilutionAt(line, mS), bs.maxExcess, unit),
+      conservativeBeyondSalinity: segStart,
       addedFlux: fl?.flux?.netChange,
     };
   }
-  const cStarLocal = new Float64Array(G);
-  for (let i = 0; i < G; i++) cStarLocal[i] = f[i]! - (grid[i]! - sr) * d1[i]!;
-  const rp = rateProfile(grid, d2, cStarLocal, sr, o, cStar);
+  // Rates from the curvature of the two-phase curve, from the river reference salinity seaward.
+  const rGrid = salinityGrid(Math.min(sr, sMin), sMax, G);
+  const rD2 = Float64Array.from(rGrid, (s) => twoPhaseAt(tp, s)[2]);
+  const rp = rateProfile(rGrid, rD2, sr, o, cStar, river.conc);
   warnings.push(...rp.warnings);
+  const breakEst = segStart !== undefined ? estimateOf(tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
+  if (breakEst && breakEst.upper - breakEst.lower > 2 * BREAK_GOAL_S)
+    warnings.push({
+      code: "break-uncertain",
+      message: `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)} (95 %), wider than ±${BREAK_GOAL_S}: the curvature fades below the analytical precision there. C*₀ and its interval include this uncertainty; the "conservative beyond" salinity does not have that precision.`,
+    });
+  const verdict = verdictOf(cls, percent, effective, unit, warnings);
   const band = (arr: number[]): number[] =>
     Array.from(grid, (s, i) => {
       const v = interpolate(bGrid, arr, s);
@@ -164,12 +196,13 @@ export function analyzeShape(p: ShapeInput): {
     });
   return {
     cls,
+    river,
     fit: {
       method: curve.method,
       salinity: Array.from(grid),
       conc: Array.from(f),
-      lower: band(bs.bandLower),
-      upper: band(bs.bandUpper),
+      lower: band(bs.bandLower).map((v, i) => Math.min(v, f[i]!)),
+      upper: band(bs.bandUpper).map((v, i) => Math.max(v, f[i]!)),
       derivative: Array.from(d1),
       secondDerivative: Array.from(d2),
       lambda: curve.lambda,
@@ -182,6 +215,8 @@ export function analyzeShape(p: ShapeInput): {
     maximum,
     rate: rp.profile,
     bootstrap: { draws, usable: bs.usable, seed },
+    breakSalinity: breakEst,
+    verdict,
     warnings,
   };
 }

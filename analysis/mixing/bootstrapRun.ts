@@ -3,25 +3,28 @@ import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitSmoothingSpline } from "../stats/smoothingSpline.ts";
 import { mergeKnots } from "../stats/knotData.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
-import type { TangentLine } from "./result.ts";
-import { endFitStations, endTangent, MIN_SEGMENT_STATIONS, SEGMENT_ALPHA } from "./tangent.ts";
-import { scanSegments, segmentCriticals } from "./segmentScan.ts";
-import { interiorMaximum, zoneFromCurve } from "./zoneAndMaximum.ts";
+import { fitTwoPhase, seawardLine, twoPhaseAt, twoPhaseMaximum } from "./twoPhase.ts";
+import { zoneFromCurve } from "./zoneAndMaximum.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
 export interface BootstrapInput {
   x: Float64Array;
-  y: Float64Array;
+  /** Fitted mean at each station (the two-phase model): the replicates are drawn around it. */
+  yHat: Float64Array;
+  /** σ_eff at each station: analytical σ times max(1, √χ²_ν of the two-phase fit). */
+  sigmaEff: Float64Array;
   /** 1/σ² weights of the curve fit. */
   w: Float64Array;
-  /** 1/σ_eff² weights of the tangent segment. */
-  wTangent: Float64Array;
   lambda: number;
   tieTol: number;
   /** Salinity grid of the replicate curves (coarser than the plotted grid to save time). */
   grid: Float64Array;
-  tangent: TangentLine;
-  river: { salinity: number; conc: number; sd: number };
+  /** Reference salinity of the river end-member (0 unless stated). */
+  referenceSalinity: number;
+  /** A user-given river value ± sd (drawn from a normal); otherwise C₀ is re-estimated from each replicate. */
+  riverOverride?: { conc: number; sd: number };
+  /** Extra sd of the river value (a river history within the flushing time), added to each replicate. */
+  riverExtraSd?: number;
   sea: { salinity: number; conc: number; sd: number };
   draws: number;
   seed: number;
@@ -33,51 +36,50 @@ export interface BootstrapResult {
   effective?: [number, number];
   percent?: [number, number];
   riverConc?: [number, number];
+  /** Standard deviation of the replicate C₀ (the river end-member's standard error). */
+  riverSe?: number;
   netDelta?: [number, number];
   zoneLower?: [number, number];
   zoneUpper?: [number, number];
   maxSalinity?: [number, number];
   maxExcess?: [number, number];
+  breakSalinity?: [number, number];
   bandLower: number[];
   bandUpper: number[];
-  /** Replicates of C*₀ − C₀ and C₀ (for fluxes). */
   effectiveDraws: Float64Array;
   riverDraws: Float64Array;
 }
 
 /**
- * Seeded bootstrap over stations (resampling with replacement, as multinomial counts on
- * the salinity-ordered stations) and over the end-member standard deviations (normal draws).
- * Each replicate refits the smoothing spline at the full-data λ, re-selects the seaward linear
- * segment (so the intervals include the uncertainty of the break) or falls back to the local
- * end quadratic, and recomputes C*₀, % change, zone limits and the
- * maximum. Intervals are percentile intervals; random numbers come from d3-random's
- * randomLcg(seed), so equal seeds give equal results.
+ * Seeded parametric bootstrap on the fixed station design: each replicate keeps the stations'
+ * salinities and draws C*ᵢ = Ĉ(Sᵢ) + σ_eff,ᵢ·z (z standard normal) around the fitted two-phase
+ * curve, then refits everything — the two-phase model with its break (so C*₀ carries the break
+ * uncertainty), the river value at the reference salinity from the same fit, the smoothing spline
+ * at the full-data λ (band, zone) and the maximum. No station is duplicated or dropped, so the
+ * linearity tests see the design the survey had. Intervals are percentile intervals.
  *
  * @param b inputs
  * @returns intervals and the curve band on the grid
- * @see Efron, B. & Tibshirani, R.J. (1993) An Introduction to the Bootstrap, Chapman & Hall, ch. 6 and 13.
+ * @see Efron, B. & Tibshirani, R.J. (1993) An Introduction to the Bootstrap, Chapman & Hall, ch. 6 (parametric
+ *   bootstrap) and ch. 9 (regression models: resampling on a fixed design).
  */
 export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const n = b.x.length;
   const G = b.grid.length;
   const D = b.draws;
   const rand = randomLcg(b.seed);
-  const normal = randomNormal.source(rand);
-  const z = normal(0, 1);
-  const eff = new Float64Array(D).fill(Number.NaN);
-  const c0 = new Float64Array(D).fill(Number.NaN);
-  const pct = new Float64Array(D).fill(Number.NaN);
-  const zLo = new Float64Array(D).fill(Number.NaN);
-  const zHi = new Float64Array(D).fill(Number.NaN);
-  const mS = new Float64Array(D).fill(Number.NaN);
-  const mX = new Float64Array(D).fill(Number.NaN);
+  const z = randomNormal.source(rand)(0, 1);
+  const nan = (): Float64Array => new Float64Array(D).fill(Number.NaN);
+  const eff = nan();
+  const c0 = nan();
+  const pct = nan();
+  const zLo = nan();
+  const zHi = nan();
+  const mS = nan();
+  const mX = nan();
+  const brk = nan();
   const curves = new Float64Array(D * G).fill(Number.NaN);
-  const counts = new Uint16Array(n);
-  const wc = new Float64Array(n);
-  const wEnd = new Float64Array(n);
-  const crit = segmentCriticals(n, SEGMENT_ALPHA);
-  const mEnd = endFitStations(n);
+  const ys = new Float64Array(n);
   const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
   const splineWs = {
     knots: new Float64Array(n),
@@ -88,41 +90,37 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const f = new Float64Array(G);
   const d2 = new Float64Array(G);
   const rhoWork = new Float64Array(G);
+  const sr = b.referenceSalinity;
+  const sMax = b.x[n - 1]!;
   let usable = 0;
   for (let d = 0; d < D; d++) {
-    counts.fill(0);
-    for (let i = 0; i < n; i++) counts[Math.min(n - 1, Math.floor(rand() * n))]!++;
-    const cr = b.river.conc + b.river.sd * z();
+    for (let i = 0; i < n; i++) ys[i] = b.yHat[i]! + b.sigmaEff[i]! * z();
     const cs = b.sea.conc + b.sea.sd * z();
-    for (let i = 0; i < n; i++) wc[i] = b.w[i]! * counts[i]!;
-    const knots = mergeKnots(b.x, b.y, wc, b.tieTol, ws);
+    const fit = fitTwoPhase(b.x, ys, b.w, false);
+    if (!fit) continue;
+    const [ic, sl] = seawardLine(fit);
+    const cr =
+      (b.riverOverride ? b.riverOverride.conc + b.riverOverride.sd * z() : twoPhaseAt(fit, sr)[0]) +
+      (b.riverExtraSd ? b.riverExtraSd * z() : 0);
+    usable++;
+    eff[d] = ic + sl * sr;
+    c0[d] = cr;
+    if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
+    if (!fit.linear) brk[d] = fit.breakSalinity;
+    const m = twoPhaseMaximum(fit, sMax);
+    if (m !== undefined) {
+      mS[d] = m;
+      mX[d] = twoPhaseAt(fit, m)[0] - (cr + ((cs - cr) * (m - sr)) / (b.sea.salinity - sr));
+    }
+    const knots = mergeKnots(b.x, ys, b.w, b.tieTol, ws);
     if (knots.n < 4) continue;
     const spline = fitSmoothingSpline(knots, b.lambda, splineWs);
     evaluateSplineGrid(spline, b.grid, f, undefined, d2);
-    let line: [number, number] | undefined;
-    const scan = scanSegments(b.x, b.y, b.wTangent, counts, MIN_SEGMENT_STATIONS, crit);
-    const segStart = scan.start >= 0 ? b.x[scan.start]! : undefined;
-    if (scan.start >= 0) line = [scan.intercept, scan.slope];
-    else {
-      for (let i = 0; i < n; i++) wEnd[i] = i >= n - mEnd ? b.wTangent[i]! * counts[i]! : 0;
-      line = endTangent(b.x, b.y, wEnd);
-    }
-    if (!line) continue;
-    usable++;
     curves.set(f, d * G);
-    eff[d] = line[0] + line[1] * b.river.salinity;
-    c0[d] = cr;
-    if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
-    const zone = zoneFromCurve(b.grid, d2, b.river.salinity, rhoWork, segStart);
+    const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity);
     if (zone) {
       zLo[d] = zone.from;
       zHi[d] = zone.to;
-    }
-    const im = interiorMaximum(b.grid, f);
-    if (im >= 0) {
-      const s = b.grid[im]!;
-      mS[d] = s;
-      mX[d] = f[im]! - (cr + ((cs - cr) * (s - b.river.salinity)) / (b.sea.salinity - b.river.salinity));
     }
   }
   const bandLower: number[] = new Array<number>(G);
@@ -137,17 +135,28 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     bandLower[g] = percentileSelect(col, k, 0.025) ?? Number.NaN;
     bandUpper[g] = percentileSelect(col, k, 0.975) ?? Number.NaN;
   }
+  let s1 = 0,
+    s2 = 0,
+    k = 0;
+  for (const v of c0)
+    if (Number.isFinite(v)) {
+      s1 += v;
+      s2 += v * v;
+      k++;
+    }
   const delta = eff.map((v, i) => v - c0[i]!);
   return {
     usable,
     effective: interval95(eff),
     percent: interval95(pct),
     riverConc: interval95(c0),
+    riverSe: k >= 2 ? Math.sqrt(Math.max(0, (s2 - (s1 * s1) / k) / (k - 1))) : undefined,
     netDelta: interval95(delta),
     zoneLower: interval95(zLo),
     zoneUpper: interval95(zHi),
     maxSalinity: interval95(mS),
     maxExcess: interval95(mX),
+    breakSalinity: interval95(brk),
     bandLower,
     bandUpper,
     effectiveDraws: eff,

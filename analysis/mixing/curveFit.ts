@@ -51,13 +51,20 @@ export function fitCurve(used: readonly PreparedSample[]): CurveFitResult | unde
   let g = minimiseGcv(path, GCV_ALPHA);
   let alpha = GCV_ALPHA;
   const r = path.residuals(g.lambda);
-  const lackOfFit = chiSquareUpperP(g.rss, Math.max(1, path.n - g.edf)) < 0.01 && runsTest(r).pTooFew < 0.05;
+  // Degenerate inputs (many ties or zeros) can give a non-finite edf or rss: then no lack-of-fit switch.
+  const dofG = path.n - g.edf;
+  const lackOfFit =
+    Number.isFinite(g.rss) &&
+    Number.isFinite(dofG) &&
+    chiSquareUpperP(g.rss, Math.max(1, dofG)) < 0.01 &&
+    runsTest(r).pTooFew < 0.05;
   if (lackOfFit) {
     g = minimiseGcv(path, 1);
     alpha = 1;
   }
   const floor = minimiseUbre(path).lambda;
   const lambda = Math.max(g.lambda, floor);
+  if (!Number.isFinite(lambda)) return undefined;
   const edf = path.at(Math.log(lambda), 1).edf;
   const spline = fitSmoothingSpline(knots, lambda);
   let rss = 0;

@@ -10,7 +10,7 @@ import type { PreparedSample } from "./prepareSamples.ts";
  * @param unit concentration unit
  * @returns the line
  * @throws RangeError when S_s ≤ S_r
- * @see Liss, P.S. (1976) in Burton & Liss (eds) Estuarine Chemistry, 93–130 (mixing-methods.md §1.1, Eq. 1).
+ * @see bibliography key liss1976.
  */
 export function dilutionLine(river: Endmember, sea: Endmember, unit: string): DilutionLine {
   if (!(sea.salinity > river.salinity))
@@ -33,7 +33,7 @@ export function dilutionAt(line: DilutionLine, salinity: number): number {
  * @param used prepared samples
  * @param k significance factor (default 2)
  * @returns one deviation per sample, in salinity order
- * @see mixing-methods.md §1.6 item 1 (common practice: k = 2 or 3).
+ * @see common practice (k = 2 or 3).
  */
 export function deviations(line: DilutionLine, used: readonly PreparedSample[], k: number): StationDeviation[] {
   return used.map((s) => {
@@ -45,7 +45,9 @@ export function deviations(line: DilutionLine, used: readonly PreparedSample[], 
       observed: s.conc,
       expected,
       deviation,
-      deviationPercent: expected > 0 ? (100 * deviation) / expected : 0,
+      // 0 when the ratio is undefined (expected ≤ 0) or overflows: never NaN or ±Infinity.
+      deviationPercent:
+        expected > 0 && Number.isFinite((100 * deviation) / expected) ? (100 * deviation) / expected : 0,
       significant: Math.abs(deviation) > k * s.sigma,
       censored: s.censored,
     };

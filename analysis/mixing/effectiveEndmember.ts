@@ -10,7 +10,7 @@
  * @returns C*₀(S) [unit]
  * @throws RangeError for non-finite input
  * @see Boyle, E., Collier, R., Dengler, A.T., Edmond, J.M., Ng, A.C., Stallard, R.F. (1974)
- *      On the chemical mass-balance in estuaries. GCA 38, 1719–1728 (mixing-methods.md §1.2, Eq. 3).
+ *      On the chemical mass-balance in estuaries. GCA 38, 1719–1728 (bibliography key boyle1974).
  */
 export function effectiveEndmemberAt(conc: number, dcds: number, salinity: number, riverSalinity = 0): number {
   for (const [k, v] of Object.entries({ conc, dcds, salinity, riverSalinity }))
@@ -26,7 +26,7 @@ export function effectiveEndmemberAt(conc: number, dcds: number, salinity: numbe
  * @param river C₀ [unit], > 0
  * @returns percent change [%]
  * @throws RangeError when C₀ ≤ 0 or an input is not finite
- * @see Boyle et al. (1974) GCA 38, 1719–1728 (mixing-methods.md §1.2).
+ * @see bibliography key boyle1974.
  */
 export function percentChange(effective: number, river: number): number {
   if (!Number.isFinite(effective)) throw new RangeError(`percentChange: effective must be finite, got ${effective}`);

@@ -10,7 +10,7 @@ export const CHI2_1_95 = 3.841;
 export const ALPHA = 0.05;
 
 /**
- * Statistical evidence for non-conservative behaviour (mixing-methods.md §1.6):
+ * Statistical evidence for non-conservative behaviour (common practice):
  * 1. straight-line fit of C on S weighted by 1/σ² → χ²_ν = Σ(e/σ)²/(n − 2) and its p;
  * 2. nested F-test quadratic vs linear, F = (RSS_lin − RSS_quad)/[RSS_quad/(n − 3)] ~ F(1, n − 3),
  *    and the quadratic coefficient c (> 0 removal, < 0 addition, Eq. 4);

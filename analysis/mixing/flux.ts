@@ -1,7 +1,7 @@
 import type { Estimate, FluxSummary, MixingWarning } from "./result.ts";
 import { molarFactor, toMolPerM3 } from "./units.ts";
 
-/** Relative density error above which a per-kg → per-L shortcut matters (mixing-methods.md §0). */
+/** Relative density error above which a per-kg → per-L shortcut matters (common practice). */
 export const DENSITY_WARN_FRACTION = 0.03;
 
 /**
@@ -19,7 +19,7 @@ export const DENSITY_WARN_FRACTION = 0.03;
  * @param riverSalinity S_r (for the density)
  * @param density option densityKgM3
  * @returns the flux summary and warnings; undefined summary for non-molar units
- * @see Boyle et al. (1974) GCA 38, 1719–1728 (mixing-methods.md §1.2 and §0 units).
+ * @see bibliography key boyle1974.
  */
 export function fluxSummary(
   q: number,
@@ -56,10 +56,11 @@ export function fluxSummary(
     }
   }
   const fac = toMolPerM3(unit, rho)!;
+  // Interval widened to contain the point estimate (never an estimate outside its own interval).
   const est = (v: number, lo: number, hi: number): Estimate => ({
     value: q * fac * v,
-    lower: q * fac * lo,
-    upper: q * fac * hi,
+    lower: q * fac * Math.min(lo, v),
+    upper: q * fac * Math.max(hi, v),
     unit: "mol/s",
   });
   const d = cStar.value - c0.value;

@@ -1,5 +1,6 @@
 import type { Endmember, MixingWarning } from "./result.ts";
 import type { AnalyzeOptions } from "./options.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** River variability counts when it exceeds this fraction of C₀ (and 2σ analytical). */
 export const RIVER_VARIABILITY_FRACTION = 0.1;
@@ -21,7 +22,7 @@ export const LOW_CONFIDENCE_CODES = new Set([
  * End-member variability against flushing time (Loder & Reichard 1981): a conservative
  * constituent gives a curved C–S plot when the river concentration changes within about one
  * flushing time; a falling river value mimics addition, a rising one removal
- * (mixing-methods.md §1.5, case F). Checks (a) several river samples that disagree and
+ * (@see bibliography keys loderReichard1981, cifuentes1990). Checks (a) several river samples that disagree and
  * (b) a river history within the flushing time.
  *
  * @param river river end-member (with its samples' sd)
@@ -50,7 +51,7 @@ export function riverVariability(
     const tf = opts.flushingTimeDays;
     const inWindow = hist.filter((h) => h.daysBeforeSurvey >= 0 && (tf === undefined || h.daysBeforeSurvey <= tf));
     const values = [river.conc, ...inWindow.map((h) => h.conc)];
-    const range = Math.max(...values) - Math.min(...values);
+    const range = maxOf(values) - minOf(values);
     if (range > limit) {
       const mean = values.reduce((a, b) => a + b, 0) / values.length;
       widenedSd = Math.sqrt(values.reduce((a, b) => a + (b - mean) ** 2, 0) / Math.max(1, values.length - 1));

@@ -2,6 +2,12 @@ import type { MixingWarning } from "./result.ts";
 import type { MixingSample, Precision } from "./options.ts";
 import { sigmaOf } from "./precision.ts";
 
+/** Largest |concentration| accepted: beyond it no unit gives a physical value and sums overflow. */
+export const MAX_ABS_CONC = 1e100;
+
+/** Smallest σ as a fraction of the largest |concentration| (keeps weights finite). */
+export const SIGMA_FLOOR_FRACTION = 1e-6;
+
 /** A sample ready for fitting, sorted by salinity. */
 export interface PreparedSample {
   stationId: string;
@@ -63,7 +69,7 @@ export function prepareSamples(
         sigma = s.detectionLimit / Math.sqrt(12);
       } else nCallerSubstitute++;
     }
-    if (!Number.isFinite(s.salinity) || !Number.isFinite(conc) || s.salinity < 0) {
+    if (!Number.isFinite(s.salinity) || !Number.isFinite(conc) || s.salinity < 0 || Math.abs(conc) > MAX_ABS_CONC) {
       invalid.push(`${s.stationId} (S = ${s.salinity}, C = ${s.conc})`);
       continue;
     }
@@ -76,10 +82,14 @@ export function prepareSamples(
     });
   }
   used.sort((a, b) => a.salinity - b.salinity);
+  // σ floor: a zero σ (zero concentration with no absolute precision) would give an infinite weight.
+  const scale = used.reduce((m, s) => Math.max(m, Math.abs(s.conc)), 0);
+  const floor = scale > 0 && Number.isFinite(scale) ? SIGMA_FLOOR_FRACTION * scale : 1;
+  for (const s of used) if (!(s.sigma >= floor)) s.sigma = floor;
   if (invalid.length > 0)
     warnings.push({
       code: "invalid-sample",
-      message: `${invalid.length} sample(s) left out because salinity or concentration is not a valid number: ${invalid.slice(0, 5).join(", ")}${invalid.length > 5 ? ", …" : ""}.`,
+      message: `${invalid.length} sample(s) left out because salinity or concentration is not a valid number (or |C| > 1e100): ${invalid.slice(0, 5).join(", ")}${invalid.length > 5 ? ", …" : ""}.`,
     });
   if (nCensored > 0) {
     const rule = `${Math.round(censoredFraction * 100)} % of the detection limit (DL${censoredFraction === 0.5 ? "/2" : ""}), weighted with σ = DL/√12`;

@@ -17,28 +17,28 @@ function gradientFromKm(toKm: (s: number) => number[], s: number, sMin: number, 
 }
 
 /**
- * Reaction-rate profile R(S) on the curve grid (Eq. 4) with the integrated check
- * ∫A·R dx = Q·[C*₀(S₂) − C*₀(S₁)] (Eq. 5), comparing two independent routes: the rates
- * from the curve's curvature against the tangent-method C*₀ at the seaward end minus the
- * curve's local C*₀ at the landward end. A large difference flags curvature the
- * curve misses (e.g. the natural spline's zero curvature at its ends). The integral is taken over salinity,
+ * Reaction-rate profile R(S) on a grid from the river reference salinity S_r (Eq. 4) with the
+ * integrated check ∫A·R dx = Q·(C*₀ − C₀) (Eq. 5): the rates from the curve's curvature, integrated
+ * from S_r (where the integrand vanishes) to the seaward end, against the net change from the
+ * tangent-method C*₀ and the river value C₀. The integral is taken over salinity,
  * A·R·(dx/dS), with A from the option or, when only K is given, from Eq. 2′
  * (A = Q·(S − S_r)/(K·dS/dx)).
  *
- * @param grid salinity grid; d2 C'' and cStarLocal the local C*₀(S) on the grid
+ * @param grid salinity grid starting at or above S_r; d2 C'' on the grid
  * @param riverSalinity S_r
  * @param opts analysis options (Q, A or K, gradient source, unit)
  * @param effective tangent-method C*₀ (seaward end of Eq. 5)
+ * @param riverConc C₀ at S_r
  * @returns the profile, or undefined (with a warning) when inputs are missing
- * @see mixing-methods.md §1.3, Eqs. 2′, 4 and 5 (DERIVED+VERIFIED).
+ * @see bibliography keys officer1979, kaulFroelich1984 (curvature–rate relation; derived and checked numerically in tests/mixing).
  */
 export function rateProfile(
   grid: Float64Array,
   d2: Float64Array,
-  cStarLocal: Float64Array,
   riverSalinity: number,
   opts: AnalyzeOptions,
   effective: number,
+  riverConc: number,
 ): { profile?: RateProfile; warnings: MixingWarning[] } {
   const q = opts.riverDischargeM3s;
   const { crossSectionM2: aOpt, dispersionM2s: kOpt } = opts;
@@ -66,8 +66,9 @@ export function rateProfile(
   const salinity: number[] = [];
   const rate: number[] = [];
   let integral = 0;
-  let prevS = Number.NaN;
-  let prevAR = Number.NaN;
+  // The integrand A·R·dx/dS = −Q·(S − S_r)·C'' vanishes at S_r: the integral starts there.
+  let prevS = riverSalinity;
+  let prevAR = 0;
   let first = -1;
   let last = -1;
   for (let i = 0; i < G; i++) {
@@ -92,7 +93,7 @@ export function rateProfile(
     const aUse = a ?? (q * (s - riverSalinity)) / (k! * gUse);
     const ar = (aUse * r) / gUse;
     if (first < 0) first = i;
-    else integral += 0.5 * (ar + prevAR) * (s - prevS);
+    if (prevS >= riverSalinity && s > prevS) integral += 0.5 * (ar + prevAR) * (s - prevS);
     prevS = s;
     prevAR = ar;
     last = i;
@@ -100,7 +101,7 @@ export function rateProfile(
   if (first < 0 || last <= first) return { warnings: [] };
   const toMol = fac ?? 1;
   const integratedMolS = integral * toMol;
-  const expectedMolS = q * (effective - cStarLocal[first]!) * toMol;
+  const expectedMolS = q * (effective - riverConc) * toMol;
   return {
     profile: {
       salinity,

@@ -15,7 +15,7 @@
  * @param p.gradientPerM |dS/dx| [per m]
  * @returns R [unit/s] (µmol/L/s = mmol m⁻³ s⁻¹)
  * @throws RangeError when too few physical inputs are given or an input is not positive
- * @see Boyle et al. (1974); Officer (1979) Estuarine Coastal Mar. Sci. 9, 91–94 (mixing-methods.md §1.3, Eq. 4).
+ * @see bibliography keys boyle1974, officer1979.
  */
 export function reactionRate(p: {
   salinity: number;

@@ -27,6 +27,8 @@ export interface Endmember {
   source: "data" | "override";
   /** Station ids that formed the group. */
   stationIds: string[];
+  /** How the value was obtained when not a plain group mean (e.g. extrapolated along the fitted curve to S = 0). */
+  method?: string;
 }
 
 /** Straight line C = intercept + slope·S between the two end-members. */
@@ -189,7 +191,7 @@ export interface ConstituentAnalysis {
   fit?: FitCurve;
   tangent?: TangentLine;
   evidence?: MixingEvidence;
-  /** C*₀ = tangent value at the river salinity S_r (Boyle et al. 1974). */
+  /** C*₀ = tangent value at the river reference salinity `endmembers.river.salinity` (S = 0 unless stated; Boyle et al. 1974). */
   effectiveEndmember?: Estimate;
   /** 100·(C*₀ − C₀)/C₀; NEGATIVE = net removal, POSITIVE = net addition [%]. */
   percentChange?: Estimate;
@@ -199,5 +201,9 @@ export interface ConstituentAnalysis {
   rateProfile?: RateProfile;
   /** Bootstrap draws requested and usable, and the seed. */
   bootstrap?: { draws: number; usable: number; seed: number };
+  /** Salinity where the reaction ends and the straight seaward phase begins (two-phase regression), with its interval; absent when the line is straight throughout or the reaction reaches the mouth. */
+  breakSalinity?: Estimate;
+  /** Plain-language verdict that never contradicts the numbers (e.g. "% change not determined"). */
+  verdict?: string;
   warnings: MixingWarning[];
 }

@@ -1,3 +1,5 @@
+import { parseUnit } from "../seawater/units.ts";
+
 /** How a concentration unit converts to amount per volume or per mass. */
 export interface MolarUnit {
   /** Moles per one unit of amount, e.g. 1e-9 for nmol. */
@@ -6,24 +8,17 @@ export interface MolarUnit {
   per: "L" | "kg" | "m3";
 }
 
-const PREFIX: Record<string, number> = { "": 1, m: 1e-3, µ: 1e-6, μ: 1e-6, u: 1e-6, n: 1e-9, p: 1e-12, f: 1e-15 };
-
 /**
- * Parses a molar concentration unit such as "nmol/L", "µmol kg-1", "uM", "nM".
+ * Reads a molar concentration unit such as "nmol/L", "µmol kg-1", "uM", "nM" through the one units
+ * table (analysis/seawater/units.ts).
  *
  * @param unit unit text
  * @returns the amount factor and the "per" basis; undefined for non-molar units (e.g. µg/L)
  */
 export function molarFactor(unit: string): MolarUnit | undefined {
-  const u = unit.trim().replace(/\s+/g, " ");
-  const m = /^([mµμunpf]?)mol\s*(?:\/\s*|\s)(l|L|kg|m3|m³)(?:-1|⁻¹)?$/.exec(u);
-  if (m) {
-    const basis = m[2]!.toLowerCase();
-    return { molPerUnit: PREFIX[m[1]!]!, per: basis === "l" ? "L" : basis === "kg" ? "kg" : "m3" };
-  }
-  const molar = /^([mµμunpf]?)M$/.exec(u);
-  if (molar) return { molPerUnit: PREFIX[molar[1]!]!, per: "L" };
-  return undefined;
+  const u = parseUnit(unit);
+  if (!u || u.quantity !== "amount") return undefined;
+  return { molPerUnit: u.toBase, per: u.basis === "perLitre" ? "L" : "kg" };
 }
 
 /**

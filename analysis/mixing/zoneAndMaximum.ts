@@ -15,7 +15,7 @@ export const ZONE_THRESHOLD = 0.05;
  * @param work optional scratch array of length ≥ grid.length
  * @param segmentStart S_b of the seaward linear segment, when there is one
  * @returns [from, to] salinity and kind, or undefined when there is no curvature
- * @see mixing-methods.md §1.3 (Eqs. 4–5, DERIVED+VERIFIED).
+ * @see bibliography keys officer1979, kaulFroelich1984 (derived and checked numerically in tests/mixing).
  */
 export function zoneFromCurve(
   grid: ArrayLike<number>,

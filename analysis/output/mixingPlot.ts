@@ -4,6 +4,7 @@
  * draw the same layers by the same rules.
  */
 import type { ConstituentAnalysis } from "../mixing/result.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** A straight segment in data units: salinity (PSS-78) → concentration (the constituent's unit). */
 export interface DataSegment {
@@ -37,7 +38,7 @@ export interface MixingPlotModel {
 
 function upperOf(values: readonly number[], fallback: number): number {
   const finite = values.filter(Number.isFinite);
-  const hi = finite.length ? Math.max(...finite) : fallback;
+  const hi = finite.length ? maxOf(finite) : fallback;
   return hi > 0 ? hi : fallback;
 }
 
@@ -86,7 +87,7 @@ export function mixingPlotModel(c: ConstituentAnalysis): MixingPlotModel {
   }
   if (c.reactionZone)
     model.zone = {
-      salinity: [Math.min(...c.reactionZone.salinity), Math.max(...c.reactionZone.salinity)],
+      salinity: [minOf(c.reactionZone.salinity), maxOf(c.reactionZone.salinity)],
       kind: c.reactionZone.kind,
     };
   if (c.maximum)

@@ -1,3 +1,4 @@
+import { parseUnit } from "../seawater/units.ts";
 import type { ChannelNetwork } from "../geometry/types.ts";
 import { fitSalinityProfile } from "../geometry/salinityProfile.ts";
 import { crossingsKm, isohalinePositions, saltIntrusionLengthKm } from "../geometry/isohalines.ts";
@@ -12,6 +13,7 @@ import { SCREENING_CAUTION } from "./caution.ts";
 import { constituentSamples } from "./mixingSamples.ts";
 import { placeStations } from "./placeStations.ts";
 import type { MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Per-constituent settings a user may change (end-member overrides, precision, k, ...). */
 export type ConstituentSettings = Partial<
@@ -81,7 +83,7 @@ function profileOf(
  * @param survey the survey (from analysis/io)
  * @param options see {@link AnalyzeSurveyOptions}
  * @returns the survey analysis; never throws for thin data (warnings say what could not be done)
- * @see Boyle et al. (1974) GCA 38, 1719–1728 for the mixing analysis; mixing-methods.md §5.1 for S(x).
+ * @see bibliography key boyle1974 for the mixing analysis; S(x) as a landward-falling profile is common practice.
  */
 export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}): SurveyAnalysis {
   const progress = options.onProgress ?? (() => undefined);
@@ -108,9 +110,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     ...(intrusion?.km !== undefined ? { saltIntrusionKm: intrusion.km } : {}),
     saltIntrusionSalinity: saltS,
     isohalines: iso ? iso.positions.map((p) => ({ salinity: p.salinity, km: p.km })) : [],
-    ...(salinities.length > 0
-      ? { salinityRange: [Math.min(...salinities), Math.max(...salinities)] as [number, number] }
-      : {}),
+    ...(salinities.length > 0 ? { salinityRange: [minOf(salinities), maxOf(salinities)] as [number, number] } : {}),
     nStations: survey.stations.length,
   };
   const wanted = options.constituents ?? survey.constituents.map((c) => c.name);
@@ -127,7 +127,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     }
     progress((i + 0.5) / Math.max(1, wanted.length), `mixing analysis of ${name}`);
     const { samples, leftOut } = constituentSamples(survey.stations, name);
-    const perKg = /\/\s*kg/i.test(info.unit);
+    const perKg = parseUnit(info.unit)?.basis === "perKilogram";
     const settings = options.settings?.[name] ?? {};
     const result = analyzeConstituent(samples, {
       bootstrapDraws: options.bootstrapDraws ?? 2000,

@@ -4,19 +4,18 @@
 import { compareSurveys } from "../compare/compareSurveys.ts";
 import { formatSignificant } from "../output/formatNumber.ts";
 import type { ComparableSurvey } from "../compare/types.ts";
-import { SCREENING_CAUTION } from "../pipeline/caution.ts";
+import { SCREENING_CAUTION } from "../output/caution.ts";
 import type { StationPlacement } from "../pipeline/surveyAnalysis.ts";
 import type { ConstituentAnalysis } from "../mixing/result.ts";
 import { readBasemap } from "./basemap.ts";
 import type { BriefingDocument, BriefingInput, BriefingTable } from "./briefingTypes.ts";
 import { comparisonSection } from "./comparisonSection.ts";
-import { BRIEFING_REFERENCES, methodsParagraphs } from "./references.ts";
+import { briefingReferences, methodsParagraphs } from "./references.ts";
 import { datePart } from "./resultsTable.ts";
 import { surveySection } from "./surveySection.ts";
 
-/** The caution printed on every briefing. */
-export const BRIEFING_CAUTION =
-  "Screening analysis, not a compliance assessment. Where results could bear on water-quality or health decisions, defer to local regulations and licensed practice.";
+/** The caution printed on every briefing: the one caution text (analysis/output/caution.ts). */
+export const BRIEFING_CAUTION = SCREENING_CAUTION;
 
 function keyConstituents(a: ComparableSurvey, max: number): string[] {
   return a.constituents
@@ -62,7 +61,7 @@ function provenance(input: BriefingInput): BriefingTable[] {
  * @param input analysed surveys, map data, files, notices (see {@link BriefingInput})
  * @returns the document model, to be rendered by renderBriefingHtml
  * @throws RangeError without any analysed survey
- * @see Boyle et al. (1974); Liss (1976); Loder & Reichard (1981); Officer (1979); mixing-methods.md §1, §5.
+ * @see bibliography keys boyle1974, liss1976, loderReichard1981, officer1979 (methods text: references.ts).
  */
 export function buildBriefing(input: BriefingInput): BriefingDocument {
   if (!input || !Array.isArray(input.analyses) || input.analyses.length === 0)
@@ -105,7 +104,6 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
   const boot = input.bootstrap ?? analyses.flatMap((a) => a.constituents).find((c) => c.bootstrap)?.bootstrap;
   const cautions = [
     BRIEFING_CAUTION,
-    analyses[0]!.caution ?? SCREENING_CAUTION,
     "Each survey is a snapshot of one day; the intervals describe sampling and analytical scatter, not changes between days, tides or seasons.",
   ];
   if (input.dataNotice) cautions.unshift(input.dataNotice);
@@ -119,7 +117,7 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
     ...(cmp ? { comparison: cmp } : {}),
     provenance: provenance(input),
     methods: methodsParagraphs(fitMethod, boot ? { draws: boot.draws, seed: boot.seed } : undefined, !!cmp),
-    references: [...BRIEFING_REFERENCES],
+    references: briefingReferences(!!cmp),
     cautions,
   };
 }

@@ -14,6 +14,7 @@ import {
   unitSuffix,
 } from "./estimateText.ts";
 import { constituentWords, fractionInWords, multipleInWords } from "./wording.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** One finding sentence and how firmly the data support it. */
 export interface Finding {
@@ -34,8 +35,8 @@ export function zoneWhere(c: ConstituentAnalysis): string {
   const ends = z.km.flat();
   if (!ends.length)
     return ` at salinities ${formatSignificant(z.salinity[0], 2)} to ${formatSignificant(z.salinity[1], 2)}`;
-  const land = Math.max(...ends);
-  const sea = Math.min(...ends);
+  const land = maxOf(ends);
+  const sea = minOf(ends);
   if (Math.round(land) === Math.round(sea)) return ` near km ${km0(land)},${s}`;
   const split =
     z.km.length > 1 ? " (in more than one stretch, as salinity does not rise steadily along the channel)" : "";
@@ -106,8 +107,8 @@ export function constituentFindings(c: ConstituentAnalysis): Finding[] {
     });
   const mx = c.maximum;
   if (mx) {
-    const lo = Math.round(Math.min(...mx.km));
-    const hi = Math.round(Math.max(...mx.km));
+    const lo = Math.round(minOf(mx.km));
+    const hi = Math.round(maxOf(mx.km));
     const kms = mx.km.length ? (lo === hi ? ` near km ${lo},` : ` near km ${lo}–${hi},`) : "";
     const ex = intervalCrossesZero(mx.excess)
       ? "an excess over the dilution line that cannot be distinguished from zero"

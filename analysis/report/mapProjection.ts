@@ -1,3 +1,4 @@
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 /**
  * A local equirectangular projection fitted to a map frame: x = (λ − λ₀)·cos φ₀,
  * y = φ₀ − φ (degrees, north up), scaled uniformly into the SVG box. Adequate for an
@@ -37,7 +38,7 @@ export function fitProjection(
   if (!pts.length) throw new RangeError("fitProjection: points must hold at least one finite [lon, lat]");
   const lons = pts.map((p) => p[0]!);
   const lats = pts.map((p) => p[1]!);
-  const [w0, e, s, n0] = [Math.min(...lons), Math.max(...lons), Math.min(...lats), Math.max(...lats)];
+  const [w0, e, s, n0] = [minOf(lons), maxOf(lons), minOf(lats), maxOf(lats)];
   let w = w0;
   let n = n0;
   const lat0 = (s + n0) / 2;

@@ -3,6 +3,7 @@
  * theoretical dilution line, the fitted curve and its 95 % band, the seaward tangent and C*₀.
  */
 import type { ConstituentAnalysis } from "../mixing/result.ts";
+import { mixingPlotModel } from "../output/mixingPlot.ts";
 import { html, joinHtml, type SafeHtml } from "./html.ts";
 import { axesSvg, c1, extentOf, legendSvg, linePath, makeFrame, PALETTE } from "./svgFrame.ts";
 
@@ -76,21 +77,22 @@ export function mixingPlotSvg(c: ConstituentAnalysis, id: string): SafeHtml | un
       />`,
     );
   }
-  const t = c.tangent;
-  if (t && river && c.class !== "conservative") {
-    const s0 = river.salinity;
+  // What is drawn follows the one mixing-plot model (analysis/output/mixingPlot.ts), as in the dashboard.
+  const model = mixingPlotModel(c);
+  const t = model.tangent;
+  if (t) {
     parts.push(
       html`<path
-        d="${linePath(f, [s0, t.toSalinity], [t.intercept + t.slope * s0, t.intercept + t.slope * t.toSalinity])}"
+        d="${linePath(f, [t.s0, t.s1], [t.c0, t.c1])}"
         fill="none"
         stroke="${PALETTE[4]}"
         stroke-width="1.2"
         stroke-dasharray="2 2"
       />`,
     );
-    const e = c.effectiveEndmember;
+    const e = model.effective;
     if (e) {
-      const px = c1(f.x(s0));
+      const px = c1(f.x(e.salinity));
       parts.push(
         html`<line
             x1="${px}"
@@ -99,7 +101,13 @@ export function mixingPlotSvg(c: ConstituentAnalysis, id: string): SafeHtml | un
             y2="${c1(f.y(e.upper))}"
             stroke="${PALETTE[4]}"
             stroke-width="1.4"
-          /><rect x="${c1(f.x(s0) - 3)}" y="${c1(f.y(e.value) - 3)}" width="6" height="6" fill="${PALETTE[4]}" />`,
+          /><rect
+            x="${c1(f.x(e.salinity) - 3)}"
+            y="${c1(f.y(e.value) - 3)}"
+            width="6"
+            height="6"
+            fill="${PALETTE[4]}"
+          />`,
       );
     }
   }
@@ -119,7 +127,7 @@ export function mixingPlotSvg(c: ConstituentAnalysis, id: string): SafeHtml | un
     { label: "stations", color: "#222", mark: "dot" },
     { label: "dilution line", color: "#555", mark: "dash" },
     ...(fit ? [{ label: "fit, 95 % band", color: PALETTE[1], mark: "line" as const }] : []),
-    ...(t && c.class !== "conservative" ? [{ label: "tangent, C*₀", color: PALETTE[4], mark: "dash" as const }] : []),
+    ...(t ? [{ label: "tangent, C*₀", color: PALETTE[4], mark: "dash" as const }] : []),
   ]);
   const x0 = f.left;
   const y0 = f.top;

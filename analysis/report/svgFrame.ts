@@ -5,6 +5,7 @@
 import { scaleLinear, type ScaleLinear } from "d3-scale";
 import { formatSignificant } from "../output/formatNumber.ts";
 import { html, joinHtml, type SafeHtml } from "./html.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Colours of the briefing (own choice; colour-blind-distinguishable pairs). */
 export const PALETTE = [
@@ -40,8 +41,8 @@ export function c1(v: number): string {
 export function extentOf(values: readonly number[], fallback: [number, number]): [number, number] {
   const f = values.filter((v) => Number.isFinite(v));
   if (!f.length) return fallback;
-  let lo = Math.min(...f);
-  let hi = Math.max(...f);
+  let lo = minOf(f);
+  let hi = maxOf(f);
   if (hi - lo < 1e-12) {
     const pad = Math.abs(hi) * 0.1 || 1;
     lo -= pad;

@@ -3,10 +3,10 @@
  *
  * Values: CIAAW/IUPAC 2021 standard atomic weights; for elements with an interval the conventional
  * value (Prohaska et al. 2022). "sheet" entries are as tabulated in the project's chemistry reference
- * sheet (chemistry-constants.md §6, confirmed against ciaaw.org); "fromMemory" entries were added for
+ * sheet (confirmed there against ciaaw.org); "fromMemory" entries were added for
  * convenience from the same CIAAW 2021 table without re-checking.
  *
- * @see CIAAW, 2021. Standard atomic weights (ciaaw.org); Prohaska, T. et al., 2022. Pure Appl. Chem. 94, 573–600.
+ * @see bibliography key ciaaw2021; Prohaska, T. et al., 2022. Pure Appl. Chem. 94, 573–600 (from memory).
  */
 export interface AtomicWeight {
   /** Element symbol. */

@@ -1,9 +1,9 @@
 /**
  * Equilibrium constants of the seawater CO2 system, each as a function of practical salinity S and
  * temperature T [K]. Scales as stated. Formulas FROM MEMORY of Dickson, Sabine & Christian (2007) and the
- * original papers, reproduced numerically against the check values of chemistry-constants.md §8.
- * @see Dickson, A.G., Sabine, C.L., Christian, J.R. (Eds.), 2007. Guide to Best Practices for Ocean CO2
- *   Measurements. PICES Special Publication 3, ch. 5.
+ * original papers, reproduced numerically against the check values in tests/reference/carbonate.json.
+ * @see bibliography keys dicksonSabineChristian2007 (ch. 5), lueker2000, millero2010, dickson1990KHSO4,
+ *   dickson1990boric, millero1995, perezFraga1987, weiss1974, uppstrom1974.
  */
 
 /** Which K1, K2 set: Millero (2010) estuarine S = 0–50 (SWS, converted), or Lueker et al. (2000), S ≈ 19–43 (total). */

@@ -39,7 +39,7 @@ export interface CarbonateMixingSeries extends SeriesSet {
  * @returns x = salinity; series "pH_T", "TA" and "DIC" [µmol/kg], "pK1_T", "pK2_T"; minimum; warnings
  * @throws {RangeError} for end-members with S_sea ≤ S_river, a grid value outside them, missing temperature,
  *   or a point where no pH in 2…12 fits
- * @see Millero, F.J., 2010. Mar. Freshwater Res. 61, 139–142; Dickson, Sabine & Christian (2007) PICES Spec. Publ. 3 (method: chemistry-constants.md §8.2).
+ * @see bibliography keys millero2010, dicksonSabineChristian2007 (mixing of TA and DIC by mass: common practice).
  */
 export function carbonatePhAlongMixingLine(input: CarbonateMixingInput): CarbonateMixingSeries {
   const fn = "carbonatePhAlongMixingLine";
@@ -75,9 +75,7 @@ export function carbonatePhAlongMixingLine(input: CarbonateMixingInput): Carbona
     }
   }
   const warnings = [...new Set(pts.flatMap((p) => p.r.warnings))];
-  warnings.push(
-    "Organic alkalinity, phosphate, silicate and activity corrections in river water are neglected (chemistry-constants.md §8.2 caveats)",
-  );
+  warnings.push("Organic alkalinity, phosphate, silicate and activity corrections in river water are neglected");
   return {
     x: [...input.salinityGrid],
     xLabel: "Practical salinity",

@@ -15,7 +15,7 @@ const LABELS: Record<string, string> = {
 /**
  * Cd²⁺ and chloro-complex fractions along the salinity gradient, from river to sea, with chloride and
  * ionic strength from the major-ion mixing model at each salinity (see cdChlorideSpeciation).
- * @param set constant set or id ("wateq4f", "thermoChimieSit")
+ * @param set constant set or id ("cdCl3WithEnthalpy", "cdCl4At25C")
  * @param salinityGrid practical salinities within the mixing model's end-members
  * @param temperatureC temperature [°C]
  * @param options Davies, mixing and extra-ligand options (chlorideMolKgH2O is ignored here)

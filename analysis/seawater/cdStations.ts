@@ -23,7 +23,7 @@ export interface CdStationResult {
  * Free-Cd²⁺ fraction at each station from its salinity and temperature (chloride and ionic strength from the
  * major-ion mixing model; Davies activity coefficients), with the warnings of each station.
  * @param stations stations with id, salinity and temperature [°C]
- * @param set constant set or id ("wateq4f", "thermoChimieSit")
+ * @param set constant set or id ("cdCl3WithEnthalpy", "cdCl4At25C")
  * @param options Davies, mixing and extra-ligand options (a fixed chlorideMolKgH2O is ignored)
  * @returns one result per station, in input order
  * @throws {RangeError} for an unknown set id; TypeError/RangeError naming the station for invalid values

@@ -1,26 +1,26 @@
 import { densityEos80 } from "./densityEos80.ts";
 
-/** Upper ionic strength [mol/kg] to which the Davies equation is usually trusted (Stumm & Morgan 1996; from memory). */
+/** Upper ionic strength [mol/kg] to which the Davies equation is usually trusted (@see bibliography key stumm1996; from memory). */
 export const DAVIES_MAX_IONIC_STRENGTH = 0.5;
 
 /** Options of the Davies equation. */
 export interface DaviesOptions {
-  /** Debye–Hückel A [(kg/mol)^½]; pin it (e.g. 0.5085, WATEQ) to reproduce published numbers. Default: {@link debyeHuckelA}(temperatureC). */
+  /** Debye–Hückel A [(kg/mol)^½]; pin it (e.g. the classical 0.5085) to reproduce published numbers. Default: {@link debyeHuckelA}(temperatureC). */
   A?: number;
   /** Temperature [°C], used for A when A is not pinned (default 25). */
   temperatureC?: number;
-  /** Linear-term coefficient (default 0.3, as in PHREEQC-family codes; some texts use 0.2). */
+  /** Linear-term coefficient (default 0.3, Davies 1962 as commonly used in geochemical modelling; some texts use 0.2). */
   linearCoefficient?: number;
 }
 
 /**
  * Debye–Hückel limiting-law constant A (log10, molal): A = 1.82483·10⁶·√ρ_w/(ε_r·T)^{3/2}, ρ_w [g/cm³]
  * from EOS-80 at S = 0, ε_r = 87.740 − 0.40008 t + 9.398·10⁻⁴ t² − 1.410·10⁻⁶ t³ (Malmberg & Maryott 1956).
- * Gives 0.5108 at 25 °C; the classical WATEQ value 0.5085 corresponds to ε_r ≈ 78.54.
+ * Gives 0.5108 at 25 °C; the classical value 0.5085 (from memory) corresponds to ε_r ≈ 78.54.
  * @param temperatureC temperature [°C], 0…100
  * @returns A [(kg/mol)^½]
  * @throws {RangeError} when temperatureC is outside 0…100 or not finite
- * @see Malmberg, C.G., Maryott, A.A., 1956. J. Res. Natl. Bur. Stand. 56, 1–8 (from memory); chemistry-constants.md §5.
+ * @see bibliography key malmberg1956 (ε_r fit; from memory).
  */
 export function debyeHuckelA(temperatureC: number): number {
   if (!Number.isFinite(temperatureC) || temperatureC < 0 || temperatureC > 100) {
@@ -40,7 +40,7 @@ export function debyeHuckelA(temperatureC: number): number {
  * @param options A (pinned) or temperatureC, and the linear coefficient
  * @returns activity coefficient γ (dimensionless)
  * @throws {RangeError} for a negative or non-finite ionic strength or a non-integer charge
- * @see Davies, C.W., 1962. Ion Association. Butterworths, London (from memory).
+ * @see bibliography key davies1962 (from memory).
  */
 export function daviesActivityCoefficient(charge: number, ionicStrength: number, options: DaviesOptions = {}): number {
   return Math.pow(10, daviesLogGamma(charge, ionicStrength, options));
@@ -53,7 +53,7 @@ export function daviesActivityCoefficient(charge: number, ionicStrength: number,
  * @param options A or temperatureC, linear coefficient
  * @returns log10 γ
  * @throws {RangeError} for a negative or non-finite ionic strength or a non-integer charge
- * @see Davies, C.W., 1962. Ion Association. Butterworths, London (from memory).
+ * @see bibliography key davies1962 (from memory).
  */
 export function daviesLogGamma(charge: number, ionicStrength: number, options: DaviesOptions = {}): number {
   if (!Number.isInteger(charge)) throw new RangeError(`daviesLogGamma: charge must be an integer, got ${charge}`);
@@ -71,7 +71,7 @@ export function daviesLogGamma(charge: number, ionicStrength: number, options: D
  * The caution to show when Davies is used beyond its range, else undefined.
  * @param ionicStrength I [mol/kg-H2O]
  * @returns warning text or undefined
- * @see Stumm, W., Morgan, J.J., 1996. Aquatic Chemistry, 3rd ed. (Davies validity I < 0.5; from memory).
+ * @see bibliography key stumm1996 (Davies validity I < 0.5; from memory).
  */
 export function daviesValidityWarning(ionicStrength: number): string | undefined {
   return ionicStrength > DAVIES_MAX_IONIC_STRENGTH
@@ -89,7 +89,7 @@ export function daviesValidityWarning(ionicStrength: number): string | undefined
  * @param options Davies options
  * @returns log10 of the conditional constant
  * @throws {RangeError} as daviesLogGamma
- * @see Stumm, W., Morgan, J.J., 1996. Aquatic Chemistry, 3rd ed., ch. 3 (from memory).
+ * @see bibliography key stumm1996, ch. 3 (from memory).
  */
 export function conditionalLogK(
   logK0: number,

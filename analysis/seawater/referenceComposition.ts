@@ -15,8 +15,8 @@ export interface ReferenceSpecies {
 }
 
 /**
- * Millero et al. (2008) Table 4. B(OH)4⁻ = 0.0001008 mol/kg (0.00795 g/kg; chemistry-constants.md §0.5:
- * the value that closes the charge balance). Br⁻, F⁻, OH⁻, B(OH)3 and CO2 mol/kg values are from
+ * Millero et al. (2008) Table 4. B(OH)4⁻ = 0.0001008 mol/kg (0.00795 g/kg; derived:
+ * the value that closes the charge balance; @see bibliography key millero2008). Br⁻, F⁻, OH⁻, B(OH)3 and CO2 mol/kg values are from
  * memory but consistent with the confirmed g/kg values.
  */
 export const REFERENCE_COMPOSITION: ReadonlyArray<Readonly<ReferenceSpecies>> = Object.freeze([

@@ -1,5 +1,5 @@
 import { cdChlorideSpeciation, type CdSpeciation } from "./cdChloride.ts";
-import { CD_CHLORIDE_SETS, type CdChlorideSet } from "./cdChlorideSets.ts";
+import { CD_CHLORIDE_SETS, DEFAULT_CD_CHLORIDE_SET_ID, type CdChlorideSet } from "./cdChlorideSets.ts";
 import type { DaviesOptions } from "./davies.ts";
 import { feConstantSet, type FeConstantSet } from "./feConstantSets.ts";
 import { feSpeciation, type FeSpeciation } from "./feHydrolysis.ts";
@@ -21,7 +21,7 @@ export interface StationWater {
 export interface StationSpeciationOptions {
   /** Fe(III) constant set or id (default "baesMesmer1976"). */
   feConstantSet?: FeConstantSet | string;
-  /** Cd chloride set or id (default "wateq4f"). */
+  /** Cd chloride set or id (default "cdCl3WithEnthalpy"). */
   cdConstantSet?: CdChlorideSet | string;
   /** Scale the station pH was measured on; used for a caution only (no conversion is made). */
   pHScale?: "nbs" | "total" | "free" | "seawater" | "unknown";
@@ -73,7 +73,7 @@ export function stationSpeciation(
       : feConstantSet(options.feConstantSet ?? "baesMesmer1976");
   let cdSet: CdChlorideSet | undefined;
   if (typeof options.cdConstantSet === "object") cdSet = options.cdConstantSet;
-  else cdSet = CD_CHLORIDE_SETS[(options.cdConstantSet ?? "wateq4f") as keyof typeof CD_CHLORIDE_SETS];
+  else cdSet = CD_CHLORIDE_SETS[(options.cdConstantSet ?? DEFAULT_CD_CHLORIDE_SET_ID) as keyof typeof CD_CHLORIDE_SETS];
   if (!cdSet) throw new RangeError(`stationSpeciation: unknown cdConstantSet "${String(options.cdConstantSet)}"`);
   const fe = feSpeciation(
     water.pH,

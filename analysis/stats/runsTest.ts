@@ -1,4 +1,4 @@
-import { logGamma } from "./distributions.ts";
+import { logGamma, normalCdf } from "./distributions.ts";
 
 /** Result of the Wald–Wolfowitz runs test on a sequence of signs. */
 export interface RunsTestResult {
@@ -58,9 +58,27 @@ export function runsTest(residuals: ArrayLike<number>): RunsTestResult {
     last = s;
   }
   if (n1 === 0 || n2 === 0) return { runs, nPositive: n1, nNegative: n2, pTooFew: 1 };
+  if (Math.min(n1, n2) > LARGE_SAMPLE)
+    return { runs, nPositive: n1, nNegative: n2, pTooFew: runsNormalP(runs, n1, n2) };
   let p = 0;
   for (let r = 2; r <= runs; r++) p += runsPmf(r, n1, n2);
   return { runs, nPositive: n1, nNegative: n2, pTooFew: Math.min(1, Math.max(0, p)) };
+}
+
+/** Above this many residuals of each sign the exact sum (O(runs) log-gamma calls) gives way to the normal limit. */
+const LARGE_SAMPLE = 200;
+
+/**
+ * Normal approximation of P(R ≤ runs) with a continuity correction:
+ * E[R] = 2·n1·n2/n + 1, Var[R] = 2·n1·n2·(2·n1·n2 − n)/(n²·(n − 1)), n = n1 + n2.
+ * @see Wald, A. & Wolfowitz, J. (1940) Ann. Math. Stat. 11, 147–162 (asymptotic normality of R).
+ */
+function runsNormalP(runs: number, n1: number, n2: number): number {
+  const n = n1 + n2;
+  const mean = (2 * n1 * n2) / n + 1;
+  const variance = (2 * n1 * n2 * (2 * n1 * n2 - n)) / (n * n * (n - 1));
+  const z = (runs + 0.5 - mean) / Math.sqrt(variance);
+  return Math.min(1, Math.max(0, normalCdf(z)));
 }
 
 const CRIT_CACHE = new Map<number, Map<number, number>>();

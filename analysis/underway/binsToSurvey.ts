@@ -5,6 +5,7 @@
 import type { Constituent, Station, Survey, ValueCell } from "../survey/survey.ts";
 import type { UnderwayBins } from "./binUnderway.ts";
 import type { BinStats } from "./runningStats.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Options of {@link binsToSurvey}. */
 export interface BinsToSurveyOptions {
@@ -69,8 +70,8 @@ export function binsToSurvey(bins: UnderwayBins, options: BinsToSurveyOptions): 
   });
   const starts = bins.bins.flatMap((b) => (b.startMs !== undefined ? [b.startMs] : []));
   const ends = bins.bins.flatMap((b) => (b.endMs !== undefined ? [b.endMs] : []));
-  const startDate = starts.length > 0 ? isoOf(Math.min(...starts)) : undefined;
-  const endDate = ends.length > 0 ? isoOf(Math.max(...ends)) : undefined;
+  const startDate = starts.length > 0 ? isoOf(minOf(starts)) : undefined;
+  const endDate = ends.length > 0 ? isoOf(maxOf(ends)) : undefined;
   return {
     name: options.name ?? `underway ${options.fileName}`,
     ...(startDate !== undefined ? { startDate } : {}),

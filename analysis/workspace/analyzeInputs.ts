@@ -89,7 +89,6 @@ export function analyzeInputs(inputs: WorkspaceInputs, settings: WorkspaceSettin
       ...(settings.constituents ? { settings: { ...settings.constituents } } : {}),
       onProgress: perSurvey(i),
     });
-    if (inputs.channel) analysis.warnings.push({ code: "mouth", message: inputs.channel.mouth.statement });
     return { name: survey.name, analysis, overlay: surveyOverlay(analysis, network, overlay?.ticks ?? []) };
   });
   let comparison: SurveyComparison | undefined;

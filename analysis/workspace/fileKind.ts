@@ -77,6 +77,13 @@ export function delimitedKind(text: string): InputFileKind {
   return !measured && placed ? "stationTable" : "surveyText";
 }
 
+/** A NUL, or more than 5 % control characters or undecodable bytes: not text (a Latin-1 "°" alone is still text). */
+function looksBinary(sample: string): boolean {
+  // eslint-disable-next-line no-control-regex
+  const odd = sample.match(/[\u0000-\u0008\u000e-\u001a\ufffd]/g)?.length ?? 0;
+  return sample.includes("\u0000") || odd > 0.05 * sample.length;
+}
+
 /**
  * Recognises a file from its content.
  *
@@ -88,8 +95,7 @@ export function detectFileKind(content: string | Uint8Array): { kind: InputFileK
   const head = decodeText(typeof content === "string" ? content.slice(0, HEAD_CHARS) : content.subarray(0, HEAD_CHARS));
   const start = head.trimStart();
   if (start.length === 0) return { kind: "unknown", reason: "the file is empty" };
-  if (/[\u0000-\u0008\u000e-\u001a\ufffd]/.test(head.slice(0, 4096)))
-    return { kind: "unknown", reason: "binary content that is not netCDF" };
+  if (looksBinary(head.slice(0, 4096))) return { kind: "unknown", reason: "binary content that is not netCDF" };
   if (start.startsWith("{") || start.startsWith("[")) {
     try {
       const kind = geoJsonKind(JSON.parse(decodeText(content)) as unknown);

@@ -8,6 +8,7 @@ import { channelStretch } from "../geometry/channelStretch.ts";
 import { kmTicks } from "../geometry/kmTicks.ts";
 import type { ChannelNetwork } from "../geometry/types.ts";
 import type { SurveyAnalysis } from "../pipeline/surveyAnalysis.ts";
+import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 export type LonLat = [number, number];
 
@@ -89,7 +90,7 @@ export function surveyOverlay(
   for (const c of analysis.constituents) {
     const zonePaths: LonLat[][] = [];
     for (const range of c.reactionZone?.km ?? []) {
-      const g = channelStretch(network, [Math.min(...range), Math.max(...range)], network.mainBranchId);
+      const g = channelStretch(network, [minOf(range), maxOf(range)], network.mainBranchId);
       if (g?.type === "LineString") zonePaths.push(g.coordinates as LonLat[]);
       else if (g?.type === "MultiLineString") zonePaths.push(...(g.coordinates as LonLat[][]));
     }

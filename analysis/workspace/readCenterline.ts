@@ -6,6 +6,7 @@
 import { buildChannelNetwork } from "../geometry/buildNetwork.ts";
 import type { CenterlineGeoJson } from "../geometry/geojsonInput.ts";
 import { centerlineMouthHint } from "../geometry/mouthHint.ts";
+import { centerlinePlausibility, centerlineVertices } from "../geometry/centerlinePlausibility.ts";
 import { suggestMouth, type MouthEvidence } from "../geometry/suggestMouth.ts";
 import type { ChannelNetwork, MouthOption } from "../geometry/types.ts";
 import type { ImportIssue } from "../survey/survey.ts";
@@ -48,6 +49,14 @@ const issue = (file: string, column: string, value: string, expected: string): I
   expected,
   severity: "error",
 });
+
+/** A centerline written as [lat, lon] (error) or far from the stations (warning); see centerlinePlausibility. */
+function placementIssues(file: string, geojson: unknown, stations: readonly MouthEvidence[] = []): ImportIssue[] {
+  const lonLats = stations.flatMap((s) => (s.lonLat ? [s.lonLat as [number, number]] : []));
+  const p = centerlinePlausibility(centerlineVertices(geojson), lonLats);
+  if (p === undefined) return [];
+  return [{ ...issue(file, "", "", `a centerline where the stations are: ${p.message}`), severity: p.severity }];
+}
 
 interface FeatureLike {
   geometry?: { type?: unknown; coordinates?: unknown } | null;
@@ -130,6 +139,8 @@ export function readCenterline(
     return { channel: undefined, issues: [issue(file, "", String(geojson), "a GeoJSON object")] };
   const bad = badPositions(file, geojson);
   if (bad.length > 0) return { channel: undefined, issues: bad };
+  const placed = placementIssues(file, geojson, options.stations);
+  if (placed.some((i) => i.severity === "error")) return { channel: undefined, issues: placed };
   const hint = centerlineMouthHint(geojson);
   let source: MouthSource =
     options.mouth !== undefined
@@ -160,7 +171,7 @@ export function readCenterline(
         { code: source === "assumed" ? "mouthAssumed" : "mouthStated", message: statement },
       ],
     };
-    return { channel: { fileName: file, geojson, network, mouth: { source, mouth, statement } }, issues: [] };
+    return { channel: { fileName: file, geojson, network, mouth: { source, mouth, statement } }, issues: placed };
   } catch (error) {
     const message = (error as Error).message.replace(/^buildChannelNetwork: /, "");
     return { channel: undefined, issues: [issue(file, "", "", `a usable channel centerline (${message})`)] };

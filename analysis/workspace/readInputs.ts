@@ -11,6 +11,7 @@ import type { ImportIssue } from "../survey/survey.ts";
 import { decodeText, detectFileKind, EXPECTED_FILE, type InputFileKind } from "./fileKind.ts";
 import { readCenterline, type ChannelInput } from "./readCenterline.ts";
 import type { InputChoices, InputFile, InputFileReport, WorkspaceInputs } from "./types.ts";
+import { appendAll } from "../survey/arrayExtent.ts";
 
 const fileIssue = (file: string, value: string, expected: string): ImportIssue => ({
   file,
@@ -49,6 +50,12 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
       throw new TypeError(`readInputs(): files[${i}] must be { name: string, content: Uint8Array | string }`);
   const { onProgress, ...plain } = choices;
   const issues: ImportIssue[] = [];
+  // Unit overrides reach the readers once ReadSurveyOptions takes them (issue 13); until then say so, never drop silently.
+  for (const [column, unit] of Object.entries(choices.unitOverrides ?? {}))
+    issues.push({
+      ...fileIssue("(unit override)", `${column}=${unit}`, "a unit override the readers apply (not yet supported)"),
+      severity: "warning",
+    });
   const kinds = files.map((f) => {
     const given = choices.kindByFile?.[f.name];
     if (given) return given;
@@ -69,7 +76,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
     const mapping = choices.mappingByFile?.[f.name];
     stationFile = f.name;
     stationTable = readStationTable(decodeText(f.content), { fileName: f.name, ...(mapping ? { mapping } : {}) });
-    issues.push(...stationTable.issues);
+    appendAll(issues, stationTable.issues);
     reports[i]!.mapping = stationTable.mapping;
   });
 
@@ -86,7 +93,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
       ...(onProgress ? { onProgress: (x: number) => onProgress((n + x) / surveyIdx.length) } : {}),
     });
     Object.assign(reports[i]!, { surveys: r.surveys.map((s) => s.name), summary: r.summary, mapping: r.mapping });
-    issues.push(...r.issues);
+    appendAll(issues, r.issues);
     return r;
   });
   const surveys = results.flatMap((r) => r.surveys);
@@ -107,7 +114,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
       ...(choices.mouth !== undefined ? { mouth: choices.mouth } : {}),
       stations,
     });
-    issues.push(...read.issues);
+    appendAll(issues, read.issues);
     channel = read.channel;
   });
   onProgress?.(1);

@@ -5,6 +5,7 @@ import { underwayImportBench } from "./underwayImport.ts";
 import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
+import { wideHeaderBench } from "./wideHeader.ts";
 import { cliStartBench } from "./cliStart.ts";
 import { dashboardUnderwayBench } from "./dashboardUnderway.ts";
 
@@ -14,6 +15,7 @@ export const benchCases: BenchCase[] = [
   projectionBench,
   underwayImportBench,
   underwayBinningBench,
+  wideHeaderBench,
   dashboardBench,
   dashboardUnderwayBench,
   bundleSizeBench,

@@ -2,8 +2,8 @@ import type { Command } from "../command.ts";
 import type { SurveyAnalysis } from "../../analysis/index.ts";
 import { analyzeInputs, resultRows, tableCsv, RESULT_COLUMNS, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { UsageError } from "../exitCodes.ts";
-import { writeOut } from "../files.ts";
-import { parseCommandLine, parseFormat, workspaceSettings } from "../options.ts";
+import { checkOut, writeOut } from "../files.ts";
+import { INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings } from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
 
 const help = `brackline analyze <survey files...> [options]
@@ -53,21 +53,11 @@ export const analyzeCommand: Command = {
   summary: "analyse surveys: stations along the channel and mixing behaviour of every constituent",
   help,
   async run(args, io) {
-    const { values, positionals } = parseCommandLine(args, [
-      "centerline",
-      "mouth",
-      "stations",
-      "mapping",
-      "layer",
-      "discharge",
-      "draws",
-      "seed",
-      "format",
-      "out",
-    ]);
+    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "format", "out"]);
     const format = parseFormat(values.format);
     const settings = workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
+    if (values.out !== undefined) checkOut(values.out);
     const inputs = loadWorkspace(positionals, values, io);
     for (const [i, s] of inputs.surveys.entries())
       io.err(`analysing survey ${i + 1}/${inputs.surveys.length}: ${s.name} (${s.stations.length} stations)`);

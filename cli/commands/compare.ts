@@ -4,21 +4,9 @@ import type { Command, CommandIo } from "../command.ts";
 import type { ProvenanceFile, SurveyAnalysis, WorkspaceInputs, WorkspaceResults } from "../../analysis/index.ts";
 import { analyzeInputs, comparisonToCsv, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
-import { readBytes, writeOut } from "../files.ts";
-import { parseCommandLine, parseFormat, workspaceSettings, type OptionName, type OptionValues } from "../options.ts";
+import { checkOut, readBytes, writeOut } from "../files.ts";
+import { INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings, type OptionValues } from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
-
-/** Options shared by `compare` and `report`. */
-export const SURVEY_OPTIONS: readonly OptionName[] = [
-  "centerline",
-  "mouth",
-  "stations",
-  "mapping",
-  "layer",
-  "discharge",
-  "draws",
-  "seed",
-];
 
 /** Size and SHA-256 of a file, for the briefing's provenance. */
 export function provenanceOf(path: string, role: ProvenanceFile["role"]): ProvenanceFile {
@@ -86,11 +74,12 @@ export const compareCommand: Command = {
   summary: "compare surveys: salt intrusion vs discharge, shifts of reaction zones, maxima and C*0",
   help,
   async run(args, io) {
-    const { values, positionals } = parseCommandLine(args, [...SURVEY_OPTIONS, "format", "out"]);
+    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "format", "out"]);
     const format = parseFormat(values.format);
     workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give the survey files to compare");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
+    if (values.out !== undefined) checkOut(values.out);
     const { analyses, results } = analyzeFiles(positionals, values, io, true);
     io.err(`comparing ${analyses.length} surveys against ${analyses[0]!.survey.name}`);
     const comparison = results.comparison!;

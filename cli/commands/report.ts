@@ -2,9 +2,9 @@ import type { Command } from "../command.ts";
 import type { ProvenanceFile } from "../../analysis/index.ts";
 import { buildBriefing, renderBriefingHtml, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
-import { readBytes, writeOut } from "../files.ts";
-import { parseCommandLine, workspaceSettings } from "../options.ts";
-import { analyzeFiles, provenanceOf, SURVEY_OPTIONS } from "./compare.ts";
+import { checkOut, readBytes, writeOut } from "../files.ts";
+import { INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
+import { analyzeFiles, provenanceOf } from "./compare.ts";
 
 /** A map file read for the briefing, with its provenance. */
 export interface MapFile {
@@ -78,11 +78,12 @@ export const reportCommand: Command = {
   summary: "write a self-contained HTML stakeholder briefing (prints to A4 PDF)",
   help,
   async run(args, io) {
-    const { values, positionals } = parseCommandLine(args, [...SURVEY_OPTIONS, "basemap", "out", "title", "date"]);
+    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "basemap", "out", "title", "date"]);
     workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (!values.out) throw new UsageError("missing --out <briefing.html>");
+    if (values.out !== undefined) checkOut(values.out);
     const basemap = values.basemap ? readGeoJsonFile(values.basemap, "basemap") : undefined;
     const { inputs, analyses, files, draws, seed } = analyzeFiles(positionals, values, io);
     const channel = inputs.channel!;

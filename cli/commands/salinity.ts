@@ -4,6 +4,7 @@ import Papa from "papaparse";
 import type { Command } from "../command.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { toCsv } from "../../analysis/output/csv.ts";
+import { SCREENING_CAUTION } from "../../analysis/output/caution.ts";
 import { practicalSalinityFromConductivity, pss78ValidityNote } from "../../analysis/seawater/practicalSalinity.ts";
 import { planColumns, type ColumnPlan } from "./salinityColumns.ts";
 
@@ -28,15 +29,17 @@ Options:
   --pres <header>    use this column as pressure
   --pressure <dbar>  pressure for every row when the file has no pressure column (default 0 dbar, with a note)
 
-Method: PSS-78 (UNESCO 1983) with ITS-90 input (t68 = 1.00024·t90 inside) and, below S = 2, the
-Hill et al. (1986) extension made continuous at S = 2 as in TEOS-10 GSW.
+Method: the Practical Salinity Scale 1978, PSS-78 (UNESCO 1981, Tech. Pap. Mar. Sci. 36; algorithms
+UNESCO 1983, Tech. Pap. Mar. Sci. 44), with ITS-90 input (t68 = 1.00024·t90 inside) and, below S = 2,
+the Hill et al. (1986) extension made continuous at S = 2 as specified by TEOS-10 (IOC, SCOR & IAPSO
+2010, The international thermodynamic equation of seawater – 2010, IOC Manuals and Guides 56).
 
 Bad cells (not a number, missing, negative conductivity or pressure) are reported on stderr with file,
 row, column and value; that row gets an empty salinity and the other rows are still written. Values
 outside the PSS-78 range (S > 42, t outside −2…35 °C) are computed and noted on stderr.
 Exit codes: 0 when at least one row got a salinity; 2 when the file or its columns are unusable or
 no row could be converted; 64 for a wrong command line.
-Screening analysis, not a compliance assessment: defer to local regulations and licensed practice.`;
+${SCREENING_CAUTION}`;
 
 const MAX_MESSAGES = 50;
 

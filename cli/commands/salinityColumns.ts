@@ -1,4 +1,5 @@
 import { InputError } from "../exitCodes.ts";
+import { normaliseUnitText, quantityUnit, toWorkingUnit, WORKING_UNIT } from "../../analysis/seawater/quantityUnits.ts";
 
 /** One input column of `brackline salinity`: where it is and how to bring its values to the working unit. */
 export interface ColumnPlan {
@@ -15,6 +16,10 @@ export function splitHeader(header: string): { name: string; unit?: string } {
   const h = header.replace(/^\uFEFF/, "").trim();
   const bracket = /^(.*?)\s*[([{]\s*([^)\]}]*?)\s*[)\]}]\s*$/.exec(h);
   if (bracket) return { name: bracket[1].trim(), unit: bracket[2] };
+  // "conductivity_mS_cm", "cond_S_m": the last two underscore parts as numerator/denominator.
+  const perUnit = /^(.*?)[_\s]+([^_\s]+)_([^_\s]+)$/.exec(h);
+  if (perUnit && unitKind(`${perUnit[2]}/${perUnit[3]}`) !== undefined)
+    return { name: perUnit[1].trim(), unit: `${perUnit[2]}/${perUnit[3]}` };
   const under = /^(.*?)[_\s]+([^_\s]+)$/.exec(h);
   if (under && unitKind(under[2]) !== undefined) return { name: under[1].trim(), unit: under[2] };
   return { name: h };
@@ -22,57 +27,11 @@ export function splitHeader(header: string): { name: string; unit?: string } {
 
 type Role = "conductivity" | "temperature" | "pressure";
 
-const CONDUCTIVITY_UNITS: Record<string, number> = {
-  "ms/cm": 1,
-  mscm: 1,
-  "ms cm-1": 1,
-  "mmho/cm": 1,
-  "s/m": 10,
-  sm: 10,
-  "s m-1": 10,
-  "µs/cm": 1e-3,
-  "us/cm": 1e-3,
-  uscm: 1e-3,
-  "µs cm-1": 1e-3,
-  "us cm-1": 1e-3,
-  "µmho/cm": 1e-3,
-  "umho/cm": 1e-3,
-  "ms/m": 0.01,
-};
-const TEMPERATURE_UNITS: Record<string, "C" | "K"> = {
-  "°c": "C",
-  degc: "C",
-  "deg c": "C",
-  c: "C",
-  "º c": "C",
-  ºc: "C",
-  "degrees celsius": "C",
-  celsius: "C",
-  k: "K",
-  kelvin: "K",
-  its90: "C",
-  "its-90": "C",
-};
-const PRESSURE_UNITS: Record<string, number> = { dbar: 1, db: 1, decibar: 1, bar: 10, kpa: 0.1, mpa: 100 };
-
-function normUnit(u: string): string {
-  return u
-    .replace(/its-?90|[,;]/gi, " ")
-    .normalize("NFKC")
-    .replace(/\u03bc/g, "µ")
-    .replace(/[⁻−]/g, "-")
-    .replace(/¹/g, "1")
-    .replace(/\s+/g, " ")
-    .trim()
-    .toLowerCase();
-}
+/** Unit text without an ITS-90 label or separators ("°C, ITS-90" → "°C"); the scale is ITS-90 unless it says 68. */
+const bareUnit = (u: string): string => u.replace(/its-?90|[,;]/gi, " ").trim();
 
 function unitKind(u: string): Role | undefined {
-  const n = normUnit(u);
-  if (n in CONDUCTIVITY_UNITS) return "conductivity";
-  if (n in TEMPERATURE_UNITS) return "temperature";
-  if (n in PRESSURE_UNITS) return "pressure";
-  return undefined;
+  return (["conductivity", "temperature", "pressure"] as const).find((k) => quantityUnit(k, bareUnit(u)) !== undefined);
 }
 
 const NAME: Record<Role, RegExp> = {
@@ -145,17 +104,7 @@ function plan(role: Role, index: number, header: string, file: string): ColumnPl
     const assumed = { conductivity: "mS/cm", temperature: "°C (ITS-90)", pressure: "dbar" }[role];
     return { index, header, toWorking: (x) => x, note: `column "${header}" has no unit; taken as ${assumed}` };
   }
-  const n = normUnit(unit);
-  if (role === "conductivity" && n in CONDUCTIVITY_UNITS) {
-    const f = CONDUCTIVITY_UNITS[n];
-    return {
-      index,
-      header,
-      toWorking: (x) => x * f,
-      note: f === 1 ? undefined : `column "${header}" converted from ${unit} to mS/cm (×${f})`,
-    };
-  }
-  if (role === "pressure" && n === "m") {
+  if (role === "pressure" && normaliseUnitText(unit) === "m") {
     return {
       index,
       header,
@@ -163,25 +112,20 @@ function plan(role: Role, index: number, header: string, file: string): ColumnPl
       note: `column "${header}" is a depth in m, taken as dbar (about 1 % apart; common practice)`,
     };
   }
-  if (role === "pressure" && n in PRESSURE_UNITS) {
-    const f = PRESSURE_UNITS[n];
+  const ipts68 = role === "temperature" && /68/.test(header);
+  const u = ipts68 ? quantityUnit("temperature", "t68") : quantityUnit(role, bareUnit(unit));
+  if (u) {
+    const converted = u.factor !== 1 || u.offset !== 0;
     return {
       index,
       header,
-      toWorking: (x) => x * f,
-      note: f === 1 ? undefined : `column "${header}" converted from ${unit} to dbar (×${f})`,
+      toWorking: (x) => toWorkingUnit(u, x),
+      ...(converted
+        ? {
+            note: `column "${header}" converted from ${u.symbol} to ${WORKING_UNIT[role]}${u.note ? ` (${u.note})` : ` (×${u.factor}${u.offset ? ` ${u.offset > 0 ? "+" : "−"} ${Math.abs(u.offset)}` : ""})`}`,
+          }
+        : {}),
     };
-  }
-  if (role === "temperature" && (n in TEMPERATURE_UNITS || /68/.test(n))) {
-    const ipts68 = /68/.test(header);
-    const kelvin = TEMPERATURE_UNITS[n] === "K";
-    const toC = (x: number) => (kelvin ? x - 273.15 : x);
-    const note = ipts68
-      ? `column "${header}" read as IPTS-68 and converted to ITS-90 (t90 = t68/1.00024)`
-      : kelvin
-        ? `column "${header}" converted from K to °C`
-        : undefined;
-    return { index, header, toWorking: (x) => (ipts68 ? toC(x) / 1.00024 : toC(x)), note };
   }
   throw new InputError(`${where}: unit "${unit}" not understood for ${role}`);
 }

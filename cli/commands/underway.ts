@@ -14,7 +14,7 @@ import {
   type ChannelNetwork,
 } from "../../analysis/index.ts";
 import { parseCommandLine, parseCount, parseFormat, parseMouth, MAX_DRAWS } from "../options.ts";
-import { readBytes, writeOut } from "../files.ts";
+import { checkOut, readBytes, writeOut } from "../files.ts";
 import { surveyJson } from "./analyze.ts";
 import { issueText } from "../workspace.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
@@ -129,6 +129,7 @@ export const underwayCommand: Command = {
     const draws = parseCount("draws", values.draws, 2000, MAX_DRAWS);
     const seed = parseCount("seed", values.seed, 1);
     const mouth = parseMouth(values.mouth);
+    if (values.out !== undefined) checkOut(values.out);
     if (positionals.length !== 1) throw new UsageError(`expected one underway log, got ${positionals.length}`);
     const by = values.bin ?? (values.centerline ? "km" : "salinity");
     if (by !== "km" && by !== "salinity") throw new UsageError(`--bin: expected km or salinity; got "${by}"`);

@@ -74,7 +74,7 @@ describe("compareSurveys() on the invented demo surveys (data-demo truth.json, g
 
   it("comparisonToCsv() writes one header and a row per intrusion quantity and constituent quantity", () => {
     const csv = comparisonToCsv(c);
-    const lines = csv.trimEnd().split("\n");
+    const lines = csv.trimEnd().split("\r\n");
     expect(lines[0]).toBe(
       "section,reference_survey,survey,constituent,quantity,unit,reference_value,survey_value,difference,difference_lower95,difference_upper95,exceeds_uncertainty,note",
     );

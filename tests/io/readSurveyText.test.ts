@@ -8,7 +8,7 @@ describe("readSurveyText (delimited survey files and their quirks)", () => {
     const text =
       "\uFEFFStation;Date;Lat;Lon;Salinity;Fe (nmol/L)\nA1;21.03.2024;45,5;-1,25;12,5;<0,05\nA2;22.03.2024;45,6;-1,30;30,1;3,2\n";
     const r = readSurveyText(text, { fileName: "semi.csv" });
-    expect(r.dialect).toEqual({ delimiter: ";", decimalComma: true });
+    expect(r.dialect).toMatchObject({ delimiter: ";", decimalComma: true });
     expect(r.headers[0]).toBe("Station");
     const [a1, a2] = r.surveys.flatMap((s) => s.stations);
     expectWithin(a1.salinity.value, 12.5, 0, "decimal comma salinity");

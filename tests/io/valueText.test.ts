@@ -25,7 +25,7 @@ describe("parseValueText (cell text → ValueCell, common practice for exchanged
     expect(c.accepted).toBe(true);
   });
 
-  it.each(["", "  ", "NA", "N/A", "NaN", "-999", "-9999", "-999.0", "na"])("parseValueText(%j) is missing", (t) => {
+  it.each(["", "  ", "NA", "N/A", "-999", "-9999", "-999.0", "na"])("parseValueText(%j) is missing", (t) => {
     expect(parseValueText(t).status).toBe("missing");
   });
 

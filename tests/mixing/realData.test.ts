@@ -44,20 +44,17 @@ describe.skipIf(!present)(
   "real survey: USGS San Francisco Bay silicate transects, 2018 (Schraga & Cloern 2017)",
   () => {
     it.each(["5/7/18", "6/11/18", "9/18/18"])(
-      "analyzeConstituent() on the %s North Bay transect classifies Si with finite numbers and a river end-member from the documented group rule",
+      "analyzeConstituent() on the %s North Bay transect classifies Si with finite numbers and a river end-member at S = 0",
       (date) => {
         const samples = northBaySilicate(date);
         expectWithin(samples.length >= 6 ? 1 : 0, 1, 0, `${samples.length} stations with silicate`);
         const r = analyzeConstituent(samples, { name: "Si", unit: "µmol/L", seed: 2018, bootstrapDraws: 300 });
         expectWithin(r.class !== "insufficient-data" ? 1 : 0, 1, 0, `class ${r.class}`);
         expectWithin(allFinite(r) ? 1 : 0, 1, 0, "only finite numbers");
-        // Group rule (endmembers.ts): within ΔS = 0.5 of the lowest salinity, at most max(1, ⌊n/4⌋) stations.
-        const sorted = [...samples].sort((a, b) => a.salinity - b.salinity);
-        const low = sorted
-          .filter((s) => s.salinity <= sorted[0]!.salinity + 0.5)
-          .slice(0, Math.max(1, Math.floor(samples.length / 4)));
-        const mean = low.reduce((a, s) => a + s.conc, 0) / low.length;
-        expectWithin(r.endmembers!.river.conc, mean, 1e-9, "river end-member = mean of the low-salinity group");
+        // River end-member (issue 14): the fitted curve at S = 0, extrapolated from the freshest stations.
+        expectWithin(r.endmembers!.river.salinity, 0, 0, "river reference salinity");
+        const e = r.effectiveEndmember!;
+        expectWithin(e.lower <= e.value && e.value <= e.upper ? 1 : 0, 1, 0, "C*₀ inside its own interval");
       },
     );
   },

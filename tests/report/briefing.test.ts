@@ -59,7 +59,8 @@ describe("renderBriefingHtml() on the invented demo surveys", () => {
     expect(t).toContain("Screening analysis, not a compliance assessment");
     expect(t).toContain("defer to local regulations and licensed practice");
     expect(t).toContain("Boyle, E., Collier, R., Dengler, A.T., Edmond, J.M., Ng, A.C., Stallard, R.F. (1974)");
-    expect(t).toContain("Loder, T.C., Reichard, R.P. (1981)");
+    expect(t).toContain("method after Loder & Reichard 1981");
+    expect(t).not.toContain("Loder, T.C., Reichard, R.P. (1981)"); // recalled, so not listed as checked
     expect(new JSDOM(text).window.document.querySelectorAll("svg").length).toBeGreaterThan(6);
   });
 

@@ -25,7 +25,7 @@ function fetchText(url: string): Promise<{ status: number; body: string }> {
 describe.skipIf(!hasGit)("npm start on a fresh clone (scripts/ensure.js)", () => {
   const dir = mkdtempSync(join(tmpdir(), "brackline-fresh-"));
   const clone = join(dir, "brackline");
-  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+  afterAll(() => rmSync(dir, { recursive: true, force: true }), 300_000); // a whole node_modules to delete
 
   it("installs dependencies, builds and serves the dashboard; a second start skips the install", async () => {
     const cloned = spawnSync("git", ["clone", "--quiet", REPO_ROOT, clone], { encoding: "utf8" });

@@ -7,7 +7,7 @@ import { carbonatePhFromTaDic } from "../../analysis/seawater/carbonatePh.ts";
 import { carbonatePhAlongMixingLine } from "../../analysis/seawater/carbonateMixing.ts";
 import { linearGrid } from "../../analysis/seawater/grid.ts";
 
-describe("carbonateConstantsAt() check values at S = 35, 25 °C (from memory, as chemistry-constants.md §8 says)", () => {
+describe("carbonateConstantsAt() check values at S = 35, 25 °C (from memory of Dickson, Sabine & Christian 2007 ch. 5, except where a source says otherwise)", () => {
   const lu = carbonateConstantsAt(35, 25, "lueker2000");
   const value: Record<string, number> = {
     "log10 K1 (Lueker)": Math.log10(lu.k1Total),
@@ -35,7 +35,7 @@ describe("carbonateConstantsAt() check values at S = 35, 25 °C (from memory, as
       expectWithin(pk2, c.expected[1], c.tol, "pK2");
     });
   }
-  it("Millero 2010 at S = 0 equals Harned & Davis 1943 pK1 = 6.352 and Harned & Scholes 1941 pK2 = 10.329 (chemistry-constants.md §8.1, from memory)", () => {
+  it("Millero 2010 at S = 0 equals Harned & Davis 1943 pK1 = 6.352 and Harned & Scholes 1941 pK2 = 10.329 (from memory)", () => {
     const [pk1, pk2] = millero2010PkSws(0, 298.15);
     expectWithin(pk1, 6.352, 0.001, "pK1");
     expectWithin(pk2, 10.329, 0.001, "pK2");
@@ -67,7 +67,7 @@ describe("carbonatePhFromTaDic()", () => {
     expectWithin(r.co2UmolKg + r.hco3UmolKg + r.co3UmolKg, 1700, 1e-9, "Σ DIC");
     expectWithin(r.pHFree - r.pHTotal, -Math.log10(r.constants.totalToFree), 1e-12, "free vs total");
   });
-  it("warns when Lueker 2000 is used below S ≈ 19 (chemistry-constants.md §8.1)", () => {
+  it("warns when Lueker 2000 is used below S ≈ 19 (Lueker et al. 2000 fitted S ≈ 19–43; from memory)", () => {
     expect(carbonatePhFromTaDic(5, 25, 1200, 1200, "lueker2000")?.warnings.join(" ")).toMatch(/outside their range/);
   });
   it("returns undefined when no pH in 2…12 fits, and throws RangeError for negative TA", () => {
@@ -108,7 +108,7 @@ describe("carbonatePhAlongMixingLine()", () => {
       });
     }
   });
-  it("shows the pH minimum at low salinity (S < 2, pH_T < 7.5735) on a fine grid (chemistry-constants.md §8.2)", () => {
+  it("shows the pH minimum at low salinity (S < 2, pH_T < 7.5735) on a fine grid (derived)", () => {
     const fine = carbonatePhAlongMixingLine({
       river: m.inputs.river,
       sea: m.inputs.sea,

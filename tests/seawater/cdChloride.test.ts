@@ -37,9 +37,9 @@ describe("cdChlorideSpeciation() in seawater", () => {
   it("flags Davies beyond its validity at seawater ionic strength", () => {
     expect(r.warnings.join(" ")).toMatch(/validity/);
   });
-  it("with the WATEQ4F set (no CdCl₄²⁻) free Cd²⁺ is 2–3 % of inorganic Cd, as in Turner et al. 1981 / Byrne et al. 1988 (from memory, 2.5–3 %)", () => {
+  it("with the three-complex set (no CdCl₄²⁻) free Cd²⁺ is 2–3 % of inorganic Cd, as in Turner et al. 1981 / Byrne et al. 1988 (from memory, 2.5–3 %)", () => {
     const w = cdChlorideSpeciation(
-      CD_CHLORIDE_SETS.wateq4f,
+      CD_CHLORIDE_SETS.cdCl3WithEnthalpy,
       { salinity: 35, temperatureC: 25 },
       { davies: { A: 0.5085 } },
     );
@@ -94,7 +94,7 @@ describe("cdChlorideSpeciation() in a low-chloride river", () => {
 });
 
 describe("cdSpeciationVsSalinity()", () => {
-  const r = cdSpeciationVsSalinity("wateq4f", [0, 1, 5, 10, 20, 35], 25, { davies: { A: 0.5085 } });
+  const r = cdSpeciationVsSalinity("cdCl3WithEnthalpy", [0, 1, 5, 10, 20, 35], 25, { davies: { A: 0.5085 } });
   it("free Cd²⁺ falls monotonically from river to sea while CdCl₂⁰ rises (chloro-complexation, Powell et al. 2011)", () => {
     const free = r.series.find((s) => s.key === "Cd+2")?.values ?? [];
     const cl2 = r.series.find((s) => s.key === "CdCl2")?.values ?? [];
@@ -117,7 +117,7 @@ describe("cdSpeciationVsSalinity()", () => {
     expect(r.warnings.filter((w) => /Davies/.test(w)).length).toBe(1);
   });
   it("throws RangeError for an unknown set id", () => {
-    expect(() => cdSpeciationVsSalinity("llnl", [0], 25)).toThrow(/"llnl"/);
+    expect(() => cdSpeciationVsSalinity("noSuchSet", [0], 25)).toThrow(/"noSuchSet"/);
   });
 });
 
@@ -127,10 +127,10 @@ describe("cdFreeFractionByStation()", () => {
       { id: "R1", salinity: 0.2, temperatureC: 18 },
       { id: "M5", salinity: 14, temperatureC: 16 },
     ];
-    const r = cdFreeFractionByStation(stations, "wateq4f", { davies: { A: 0.5085 } });
+    const r = cdFreeFractionByStation(stations, "cdCl3WithEnthalpy", { davies: { A: 0.5085 } });
     expect(r.map((x) => x.id)).toEqual(["R1", "M5"]);
     const direct = cdChlorideSpeciation(
-      CD_CHLORIDE_SETS.wateq4f,
+      CD_CHLORIDE_SETS.cdCl3WithEnthalpy,
       { salinity: 14, temperatureC: 16 },
       { davies: { A: 0.5085 } },
     );
@@ -138,7 +138,7 @@ describe("cdFreeFractionByStation()", () => {
     expect(r[0].freeFraction).toBeGreaterThan(r[1].freeFraction);
   });
   it("names the station in the error for an invalid salinity", () => {
-    expect(() => cdFreeFractionByStation([{ id: "X9", salinity: -1, temperatureC: 10 }], "wateq4f")).toThrow(
+    expect(() => cdFreeFractionByStation([{ id: "X9", salinity: -1, temperatureC: 10 }], "cdCl3WithEnthalpy")).toThrow(
       /station "X9"/,
     );
   });

@@ -14,7 +14,7 @@ describe("conductivityFromPracticalSalinity()", () => {
     });
   }
 
-  it("does not reproduce the printed typo R = 0.498088 for S = 25, t68 = 0 (UNESCO 1983 CNDR table transcription; chemistry-constants.md §0.1)", () => {
+  it("does not reproduce the printed typo R = 0.498088 for S = 25, t68 = 0 (UNESCO 1983 CNDR table transcription)", () => {
     const r = conductivityFromPracticalSalinity(25, 0, 0) / 42.914;
     expect(Math.abs(r - 0.498088)).toBeGreaterThan(7e-5);
     expectWithin(r, 0.49800825, 1e-8, "R(25, 0, 0)");
@@ -31,7 +31,7 @@ describe("conductivityFromPracticalSalinity()", () => {
     });
   }
 
-  it("C(35, t90 = 15, 0) = 42.917540 and C(35, t68 = 15, 0) = 42.914000 mS/cm (temperature-scale trap, chemistry-constants.md §0.2)", () => {
+  it("C(35, t90 = 15, 0) = 42.917540 and C(35, t68 = 15, 0) = 42.914000 mS/cm (temperature-scale trap)", () => {
     expectWithin(conductivityFromPracticalSalinity(35, 15, 0), 42.91754, 1e-6, "t90 = 15");
     expectWithin(conductivityFromPracticalSalinity(35, 15 / 1.00024, 0), 42.914, 1e-6, "t68 = 15");
   });

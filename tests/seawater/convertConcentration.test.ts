@@ -25,7 +25,7 @@ describe("convertConcentration() mass ↔ amount", () => {
     });
   }
 
-  it("uses the CIAAW 2021 standard/conventional values of chemistry-constants.md §6 for Fe, Cd, Si, P", () => {
+  it("uses the CIAAW 2021 standard/conventional values (ciaaw.org table) for Fe, Cd, Si, P", () => {
     expect(ATOMIC_WEIGHTS.Fe.gPerMol).toBe(55.845);
     expect(ATOMIC_WEIGHTS.Cd.gPerMol).toBe(112.414);
     expect(ATOMIC_WEIGHTS.Si.gPerMol).toBe(28.085);
@@ -33,7 +33,7 @@ describe("convertConcentration() mass ↔ amount", () => {
     expect(ATOMIC_WEIGHTS.Fe.status).toBe("sheet");
   });
 
-  it("converts nutrients per atom: 1 mg N/L = 71.39 µmol N/L, 1 mg P/L = 32.29 µmol P/L (CIAAW 2021; per-atom convention, chemistry-constants.md §6)", () => {
+  it("converts nutrients per atom: 1 mg N/L = 71.39 µmol N/L, 1 mg P/L = 32.29 µmol P/L (CIAAW 2021; per-atom convention)", () => {
     expectWithin(convertConcentration(1, "mg N/L", "µmol N/L"), 71.3929, 1e-4, "N");
     expectWithin(convertConcentration(1, "mg/L as P", "µM P"), 32.2854, 1e-4, "P");
     expectWithin(convertConcentration(10, "µmol/L", "µmol Si/L", { element: "Si" }), 10, 1e-12, "label only");
@@ -67,7 +67,7 @@ describe("convertConcentration() per litre ↔ per kilogram", () => {
     });
   }
 
-  it("uses EOS-80 1000/ρ factors within 7e-6 (EOS-80 − TEOS-10 ≤ 0.005 kg/m³) of the TEOS-10 table of chemistry-constants.md §7.3", () => {
+  it("uses EOS-80 1000/ρ factors within 7e-6 (EOS-80 − TEOS-10 ≤ 0.005 kg/m³) of the TEOS-10 reference library (python3-gsw) table", () => {
     const table: Array<[number, number, number]> = [
       [0, 20, 1.001796],
       [5, 20, 0.997994],

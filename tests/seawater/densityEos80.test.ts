@@ -12,7 +12,7 @@ describe("densityEos80()", () => {
     });
   }
 
-  it("gives 1023.34123, not 1023.34306, when t90 = 25 is passed (temperature-scale trap, chemistry-constants.md §0.3)", () => {
+  it("gives 1023.34123, not 1023.34306, when t90 = 25 is passed (temperature-scale trap)", () => {
     expectWithin(densityEos80(35, 25, 0), 1023.34123, 1e-5, "t90 = 25");
   });
 

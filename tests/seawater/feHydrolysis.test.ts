@@ -104,7 +104,7 @@ describe("feSpeciation() with Davies and temperature", () => {
       feSpeciation(8, FE_CONSTANT_SETS.stefansson2007, { salinity: 0, temperatureC: 10 }).constants.warnings.join(" "),
     ).toMatch(/25 °C only/);
   });
-  it("gives Fe(OH)3(a) solubility log[Fe]_T = 4.891 − 3pH + log Σβn h⁻ⁿ at I = 0 (Nordstrom et al. 1990 WATEQ4F Ks0)", () => {
+  it("gives Fe(OH)3(a) solubility log[Fe]_T = 4.891 − 3pH + log Σβn h⁻ⁿ at I = 0 (Ks0 of Fe(OH)3(a) as adopted by Nordstrom et al. 1990)", () => {
     const r = feSpeciation(8, FE_CONSTANT_SETS.baesMesmer1976, { salinity: 0, temperatureC: 25, ionicStrength: 0 });
     const sum = [0, -2.19, -5.67, -12.56, -21.6].reduce((a, lb, n) => a + Math.pow(10, lb + 8 * n), 0);
     expectWithin(r.logSolubilityMolKg, 4.891 - 24 + Math.log10(sum), 1e-12, "log solubility");
@@ -139,7 +139,7 @@ describe("feSpeciationVsPh()", () => {
 });
 
 describe("feSolubilityLiuMillero2002NmolKg()", () => {
-  it("gives 0.33 nM at S = 35, 25 °C (Liu & Millero 2002 fit, chemistry-constants.md §3.2; abstract: 0.3–0.5 nM)", () => {
+  it("gives 0.33 nM at S = 35, 25 °C (Liu & Millero 2002 fit as printed in the abstract; abstract: 0.3–0.5 nM)", () => {
     expectWithin(feSolubilityLiuMillero2002NmolKg(35, 25), 0.33, 0.005, "Fe(III) solubility");
   });
   it("uses I = 19.9225·S/(1000 − 1.005·S) (Liu & Millero 2002 abstract): 0.7227088 at S = 35 (the sheet's §2.2 prints 0.722711, 2e-6 off)", () => {

@@ -112,7 +112,7 @@ describe.skipIf(!haveGsw)(
       }
     });
 
-    it("densityEos80(S, t90, 0) agrees with TEOS-10 gsw.rho_t_exact(SR, t90, 0) within 0.01 kg/m³ (chemistry-constants.md §7.3)", () => {
+    it("densityEos80(S, t90, 0) agrees with TEOS-10 gsw.rho_t_exact(SR, t90, 0) within 0.01 kg/m³", () => {
       for (let i = 0; i < n; i++) {
         expectWithin(
           densityEos80(S[i], t[i], 0),

@@ -6,7 +6,7 @@ import { WORLD_AVERAGE_RIVER, riverCompositionFromMgL } from "../../analysis/sea
 import { ionicStrengthFromSalinity } from "../../analysis/seawater/ionicStrength.ts";
 
 describe("majorIonsAtSalinity()", () => {
-  it("at S = 35 reproduces Millero et al. 2008 Table 4 and the GSW ionic strength 0.722630 (chemistry-constants.md §2.1–2.2)", () => {
+  it("at S = 35 reproduces Millero et al. 2008 Table 4 and the GSW ionic strength 0.722630", () => {
     const r = majorIonsAtSalinity(35);
     expectWithin(r.molKg["Cl-"], 0.5458696, 1e-12, "Cl");
     expectWithin(r.molKg["Ca+2"], 0.0102821, 1e-12, "Ca");

@@ -13,7 +13,7 @@ import { hillRatioAtSp2 } from "../../analysis/seawater/hillExtension.ts";
 import { t68FromT90, t90FromT68 } from "../../analysis/seawater/temperatureScale.ts";
 
 describe("PSS-78 coefficients", () => {
-  it("Σa = 35 and Σb = 0 (coefficient-entry self-test, chemistry-constants.md §1.1)", () => {
+  it("Σa = 35 and Σb = 0 (coefficient-entry self-test)", () => {
     expectWithin(
       PSS78.a.reduce((s, x) => s + x, 0),
       35,
@@ -50,7 +50,7 @@ describe("practicalSalinityFromConductivity()", () => {
     });
   }
 
-  it("reproduces the UNESCO 1983 40/40/10000 case exactly with R = 1.888091155578768 (chemistry-constants.md §1.4)", () => {
+  it("reproduces the UNESCO 1983 40/40/10000 case exactly with R = 1.888091155578768", () => {
     expectWithin(practicalSalinityFromConductivity(1.888091155578768 * 42.914, 40 / 1.00024, 10000), 40, 1e-9, "S");
   });
 

@@ -16,7 +16,7 @@ import {
 
 describe("referenceCompositionSummary() (Millero et al. 2008, Deep-Sea Res. I 55, Table 4)", () => {
   const s = referenceCompositionSummary();
-  it("is charge balanced: Σ z·m = 0 within 1e-12 mol/kg (chemistry-constants.md §2.1, with B(OH)4⁻ = 0.0001008, §0.5)", () => {
+  it("is charge balanced: Σ z·m = 0 within 1e-12 mol/kg4⁻ = 0.0001008, §0.5)", () => {
     expectWithin(s.chargeBalanceMolKg, 0, 1e-12, "Σ z m");
   });
   it("sums to SR = 35.16504 g/kg within 2e-5 g/kg and 1.1197696 mol/kg", () => {
@@ -29,11 +29,11 @@ describe("referenceCompositionSummary() (Millero et al. 2008, Deep-Sea Res. I 55
   it("has valence factor Σ x z² = 1.2452898 (GSW-C gsw_valence_factor) within 1e-6", () => {
     expectWithin(s.valenceFactor, SEA_SALT_VALENCE_FACTOR, 1e-6, "Z²");
   });
-  it("gives I = Σ ½ z² m/(1 − SR/1000) = 0.722630 mol/kg-H2O (chemistry-constants.md §2.2)", () => {
+  it("gives I = Σ ½ z² m/(1 − SR/1000) = 0.722630 mol/kg-H2O", () => {
     const i = REFERENCE_COMPOSITION.reduce((a, sp) => a + 0.5 * sp.charge * sp.charge * sp.molKg, 0) / 0.96483496;
     expectWithin(i, 0.72263, 1e-6, "I");
   });
-  it("total boron B(OH)3 + B(OH)4⁻ = 0.0004151 mol/kg (chemistry-constants.md §2.1)", () => {
+  it("total boron B(OH)3 + B(OH)4⁻ = 0.0004151 mol/kg", () => {
     const b = REFERENCE_COMPOSITION.filter((x) => x.species.startsWith("B(OH)")).reduce((a, x) => a + x.molKg, 0);
     expectWithin(b, 0.0004151, 1e-9, "B_T");
   });
@@ -52,12 +52,12 @@ describe("ionicStrengthFromSalinity() (TEOS-10 Manual Table L.1; GSW gsw_ionic_s
     [40, 0.830185, 0.83034],
   ];
   for (const [sp, gsw, doe] of table) {
-    it(`gives I(${sp}) = ${gsw} (GSW form) and ${doe} (DOE 1994 form) as in chemistry-constants.md §2.2`, () => {
+    it(`gives I(${sp}) = ${gsw} (GSW form) and ${doe} (DOE 1994 form)`, () => {
       expectWithin(ionicStrengthFromSalinity(sp), gsw, 6e-7, "GSW form");
       expectWithin(ionicStrengthDoe(sp), doe, 6e-7, "DOE form");
     });
   }
-  it("equals 19.92054·SP/(1000 − 1.004715·SP) (exact algebra, chemistry-constants.md §2.2) within 1e-6", () => {
+  it("equals 19.92054·SP/(1000 − 1.004715·SP) (exact algebra) within 1e-6", () => {
     for (const sp of [0.5, 7, 18, 33])
       expectWithin(ionicStrengthFromSalinity(sp), (19.92054 * sp) / (1000 - 1.004715 * sp), 1e-6, `SP=${sp}`);
   });

@@ -39,6 +39,28 @@ describe("runs test (Wald & Wolfowitz 1940)", () => {
   });
 });
 
+describe("runs test for large samples (Wald & Wolfowitz 1940 normal limit)", () => {
+  /** n1 positives and n2 negatives in blocks of `block`, so the number of runs is set by the block length. */
+  function blocks(n1: number, n2: number, block: number): number[] {
+    const out: number[] = [];
+    let pos = n1;
+    let neg = n2;
+    while (pos > 0 || neg > 0) {
+      for (let i = 0; i < block && pos > 0; i++, pos--) out.push(1);
+      for (let i = 0; i < block && neg > 0; i++, neg--) out.push(-1);
+    }
+    return out;
+  }
+  it.each([1, 3, 5])(
+    "runsTest() in the tails just above the exact-sum limit (n1 = n2 = 201, blocks of %i) agrees with the exact sum just below it (n1 = n2 = 200) within 0.03",
+    (block) => {
+      const exact = runsTest(blocks(200, 200, block));
+      const normal = runsTest(blocks(201, 201, block));
+      expectWithin(normal.pTooFew, exact.pTooFew, 0.03, `block ${block}: runs ${exact.runs} vs ${normal.runs}`);
+    },
+  );
+});
+
 describe("distribution functions via jStat against handbook tables (from memory: standard F and χ² tables)", () => {
   it("fUpperP(4.96, 1, 10) ≈ 0.05 and chiSquareUpperP(3.841, 1) ≈ 0.05 (95 % critical values of F(1,10) and χ²(1))", () => {
     expectWithin(fUpperP(4.96, 1, 10), 0.05, 5e-4, "F(1,10)");

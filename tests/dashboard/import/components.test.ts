@@ -64,6 +64,15 @@ describe("MappingDialog lets the user correct a role and confirm", () => {
     expect(answer?.columns[6]).toMatchObject({ name: "Fe", unit: "nmol/L" });
     expect(answer?.shape).toBe(inspection.suggested?.shape);
   });
+  it("shows role names in plain words, not internal ids (dateTime, depthLabel, rowFlag)", async () => {
+    const inspection = await inspectFile(file("quirky.csv", QUIRKY_CSV));
+    const r = render(MappingDialog, { question: { inspection, mapping: inspection.suggested!, answer: () => {} } });
+    const select = r.container.querySelector('tr[data-header="S_field"] select') as HTMLSelectElement;
+    const shown = [...select.options].map((o) => o.textContent?.trim());
+    expect(shown).toContain("Date and time");
+    expect(shown).toContain("Quality flag of the row");
+    for (const id of ["dateTime", "depthLabel", "rowFlag"]) expect(shown).not.toContain(id);
+  });
 });
 
 describe("DropZone is keyboard accessible", () => {

@@ -69,6 +69,24 @@ describe("SpeciationPanel", () => {
     expect(chart("fe").querySelector("desc")?.textContent).toContain("Stefánsson 2007");
   });
 
+  it("SpeciationPanel states each Fe(III) set's pH scale and upper limits, and the Cd activity model's ionic-strength validity", async () => {
+    const { container, getByLabelText } = setup();
+    const fe = () => container.querySelector("[data-testid='fe-set-note']")?.textContent ?? "";
+    expect(fe()).toMatch(/pH scale: activity scale/);
+    expect(fe()).toMatch(/upper limit/);
+    await fireEvent.click(getByLabelText(/Liu & Millero 2002/));
+    flushSync();
+    expect(fe()).toMatch(/free \[H⁺\]/);
+    expect(container.querySelector("[data-testid='cd-set-note']")?.textContent).toMatch(/Davies.*0\.5 mol\/kg/);
+  });
+
+  it("SpeciationPanel names constant sets by their literature, not by other programs or databases", () => {
+    const { container } = setup();
+    const labels = [...container.querySelectorAll("fieldset label")].map((l) => l.textContent ?? "").join(" ");
+    expect(labels).toMatch(/Baes & Mesmer 1976/);
+    expect(labels).not.toMatch(/WATEQ|PHREEQC|ThermoChimie|MINTEQ|llnl|sit\.dat|\.dat\b/i);
+  });
+
   it("SpeciationPanel offers at least two constant sets for Fe(III) and for Cd", () => {
     const { container } = setup();
     expect(container.querySelectorAll("input[name='t-fe']").length).toBeGreaterThanOrEqual(2);

@@ -5,6 +5,7 @@
  */
 import {
   carbonatePhAlongMixingLine,
+  DEFAULT_CD_CHLORIDE_SET_ID,
   cdSpeciationVsSalinity,
   feSpeciationVsPh,
   linearGrid,
@@ -44,7 +45,7 @@ export interface SpeciationSettings {
 
 export const defaultSpeciationSettings: SpeciationSettings = {
   feSetId: "baesMesmer1976",
-  cdSetId: "wateq4f",
+  cdSetId: DEFAULT_CD_CHLORIDE_SET_ID,
   defaultTemperatureC: 25,
   pHRange: [3, 10],
   salinityRange: [0, 35],

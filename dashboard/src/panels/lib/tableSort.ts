@@ -1,6 +1,7 @@
 /** Sorting of the behaviour table: column keys, sort values and a stable comparator. */
 import { behaviourLabel } from "./format.ts";
 import type { ConstituentAnalysisView } from "./types.ts";
+import { minOf } from "../../../../analysis/survey/arrayExtent.ts";
 
 export type SortKey = "name" | "class" | "change" | "effective" | "zoneSalinity" | "zoneKm" | "maximum" | "warnings";
 export type SortDirection = "ascending" | "descending";
@@ -17,9 +18,9 @@ export function sortValue(c: ConstituentAnalysisView, key: SortKey): string | nu
     case "effective":
       return c.effectiveEndmember?.value;
     case "zoneSalinity":
-      return c.reactionZone ? Math.min(...c.reactionZone.salinity) : undefined;
+      return c.reactionZone ? minOf(c.reactionZone.salinity) : undefined;
     case "zoneKm":
-      return c.reactionZone?.km.length ? Math.min(...c.reactionZone.km.flat()) : undefined;
+      return c.reactionZone?.km.length ? minOf(c.reactionZone.km.flat()) : undefined;
     case "maximum":
       return c.maximum?.salinity.value;
     case "warnings":

@@ -6,6 +6,11 @@ import type { ImportResult } from "../../analysis/io/importPipeline.ts";
 import { readGeoJsonPoints } from "../../analysis/io/geojsonPoints.ts";
 import { readNetcdfStations } from "../../analysis/io/netcdfStations.ts";
 import { importWorkspace } from "../../analysis/io/workspace.ts";
+import { cases } from "./scale.ts";
+
+/** Malformed files per run (FUZZ_SCALE multiplies). */
+const FILES = cases(2000);
+const OTHER = cases(500);
 
 type Rnd = () => number;
 const pick = <T>(r: Rnd, xs: readonly T[]): T => xs[Math.floor(r() * xs.length)];
@@ -139,8 +144,11 @@ function brokenInvariants(res: ImportResult, file: string, text: string): string
   const bad: string[] = [];
   const s = res.summary;
   const lastRow = 2 + text.length;
-  if (s.rowsRead !== expectedRows(text, res.dialect.delimiter))
-    bad.push(`rowsRead ${s.rowsRead} ≠ papaparse data records`);
+  // An unclosed quote rejects only its own line; the lines papaparse would have swallowed are read again.
+  const recovered = res.issues.some((i) => i.expected.includes("is never closed"));
+  const papaRows = expectedRows(text, res.dialect.delimiter);
+  if (recovered ? s.rowsRead < papaRows : s.rowsRead !== papaRows)
+    bad.push(`rowsRead ${s.rowsRead} vs papaparse data records ${papaRows}`);
   if (s.rowsRead !== s.rowsAccepted + s.rowsRejected) bad.push("rowsRead ≠ accepted + rejected");
   if (Object.values(s.rejectedByReason).reduce((a, b) => a + b, 0) !== s.rowsRejected)
     bad.push("rejectedByReason does not sum to rowsRejected");
@@ -173,7 +181,7 @@ function brokenInvariants(res: ImportResult, file: string, text: string): string
   return bad;
 }
 
-describe("fuzz: 10,000 seeded malformed and hostile delimited files (d3-random randomLcg seed 20261202)", () => {
+describe(`fuzz: ${FILES} seeded malformed and hostile delimited files (d3-random randomLcg seed 20261202)`, () => {
   it(
     "readSurveyText() never throws, drops no row silently (rowsRead = papaparse's data records = accepted + rejected), and every issue names file/row/column",
     { timeout: 240_000 },
@@ -181,7 +189,7 @@ describe("fuzz: 10,000 seeded malformed and hostile delimited files (d3-random r
       const r = randomLcg(20261202);
       let rejectedSeen = 0;
       const failures: string[] = [];
-      for (let n = 0; n < 10_000; n += 1) {
+      for (let n = 0; n < FILES; n += 1) {
         const text = makeInput(r);
         const file = `fuzz-${n}.csv`;
         try {
@@ -194,13 +202,13 @@ describe("fuzz: 10,000 seeded malformed and hostile delimited files (d3-random r
         }
       }
       expect(failures.slice(0, 10)).toEqual([]);
-      expect(rejectedSeen).toBeGreaterThan(100);
+      expect(rejectedSeen).toBeGreaterThan(FILES / 100);
     },
   );
 
-  it("readGeoJsonPoints(), readNetcdfStations() and importWorkspace() never throw on 1,500 seeded hostile inputs", () => {
+  it(`readGeoJsonPoints(), readNetcdfStations() and importWorkspace() never throw on ${3 * OTHER} seeded hostile inputs`, () => {
     const r = randomLcg(7);
-    for (let n = 0; n < 500; n += 1) {
+    for (let n = 0; n < OTHER; n += 1) {
       const props = Object.fromEntries(
         Array.from({ length: int(r, 5) }, () => [pick(r, HEADERS), r() < 0.5 ? cell(r) : r() * 1e6]),
       );
@@ -222,14 +230,14 @@ describe("fuzz: 10,000 seeded malformed and hostile delimited files (d3-random r
       expect(res.summary.rowsRead).toBe(res.summary.rowsAccepted + res.summary.rowsRejected);
       expect(res.issues.every((i) => i.file === "f.geojson")).toBe(true);
     }
-    for (let n = 0; n < 500; n += 1) {
+    for (let n = 0; n < OTHER; n += 1) {
       const bytes = Uint8Array.from({ length: int(r, 400) }, (_, i) =>
         i < 4 && r() < 0.7 ? [67, 68, 70, 1][i] : int(r, 256),
       );
       const res = readNetcdfStations(bytes, { fileName: "f.nc" });
       expect(res.summary.rowsRead).toBe(res.summary.rowsAccepted + res.summary.rowsRejected);
     }
-    for (let n = 0; n < 500; n += 1) {
+    for (let n = 0; n < OTHER; n += 1) {
       const doc = pick(r, [
         { version: 1, surveys: [cell(r)] },
         { version: 2, format: "brackline-workspace" },

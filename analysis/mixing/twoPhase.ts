@@ -1,0 +1,386 @@
+import jStat from "jstat";
+import { fUpperP } from "../stats/distributions.ts";
+
+/**
+ * A continuous two-phase fit of C on S: a straight seaward phase C = a + c·S for S ≥ S_b and a
+ * curved landward phase that joins it smoothly (value and slope continuous at S_b):
+ * C(S) = α₀ + α₁·t + β₂·h² + β₃·h³, t = (S − S_min)/R, h = max(0, S_b − S)/R, R = S_max − S_min.
+ * `linear` = the straight line through all stations was kept (no significant curvature).
+ */
+export interface TwoPhaseFit {
+  /** Break salinity S_b (S_min when linear; S_max when the reaction reaches the mouth). */
+  breakSalinity: number;
+  linear: boolean;
+  /** Scaled coefficients [α₀, α₁, β₂, β₃]. */
+  coef: [number, number, number, number];
+  sMin: number;
+  range: number;
+  /** Weighted residual sum of squares of the chosen model and of the straight line. */
+  rss: number;
+  rssLinear: number;
+  /** Parameters of the chosen model (2 for the line; 3–4 plus the break otherwise). */
+  params: number;
+  /** p of the F-test two-phase vs straight line (1 when it could not be made). */
+  pCurvature: number;
+}
+
+/** Significance of the two-phase vs straight-line F-test (documented choice). */
+export const TWO_PHASE_ALPHA = 0.05;
+/** Break candidates on the grid before refinement. */
+const GRID = 24;
+/** Golden-section refinement steps around the best grid break. */
+const REFINE = 12;
+
+/** F critical value at TWO_PHASE_ALPHA cached by degrees of freedom (the bootstrap refits thousands of times). */
+const CRIT = new Map<number, number>();
+/** 0 when F is above the cached critical value at TWO_PHASE_ALPHA, else 1. */
+function fPCached(F: number, d1: number, d2: number): number {
+  const key = d1 * 100000 + d2;
+  let c = CRIT.get(key);
+  if (c === undefined) {
+    c = jStat.centralF.inv(1 - TWO_PHASE_ALPHA, d1, d2);
+    CRIT.set(key, c);
+  }
+  return F > c ? 0 : 1;
+}
+
+const M = new Float64Array(20);
+/** Solves the k×k weighted normal equations accumulated in `M` (row-major, augmented) in place. */
+function solve(k: number, out: number[]): boolean {
+  const w = k + 1;
+  for (let col = 0; col < k; col++) {
+    let piv = col;
+    for (let r = col + 1; r < k; r++) if (Math.abs(M[r * w + col]!) > Math.abs(M[piv * w + col]!)) piv = r;
+    const p = M[piv * w + col]!;
+    if (!(Math.abs(p) > 1e-13 * (Math.abs(M[0]!) + 1e-300))) return false;
+    if (piv !== col)
+      for (let j = 0; j < w; j++) {
+        const t = M[col * w + j]!;
+        M[col * w + j] = M[piv * w + j]!;
+        M[piv * w + j] = t;
+      }
+    for (let r = 0; r < k; r++) {
+      if (r === col) continue;
+      const f = M[r * w + col]! / p;
+      if (f !== 0) for (let j = col; j < w; j++) M[r * w + j] = M[r * w + j]! - f * M[col * w + j]!;
+    }
+  }
+  for (let i = 0; i < k; i++) {
+    out[i] = M[i * w + k]! / M[i * w + i]!;
+    if (!Number.isFinite(out[i]!)) return false;
+  }
+  return true;
+}
+
+/** Weighted fit at a fixed break (k = 2 line, 3 with h², 4 with h² and h³); RSS or NaN. */
+function fitAt(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  sMin: number,
+  range: number,
+  b: number,
+  k: number,
+  coef: number[],
+  quick = false,
+  shift = 0,
+): number {
+  // Symmetric normal equations accumulated in scalars (this runs ~10⁵ times per analysis).
+  let a00 = 0,
+    a01 = 0,
+    a02 = 0,
+    a03 = 0,
+    a11 = 0,
+    a12 = 0,
+    a13 = 0,
+    a22 = 0,
+    a23 = 0,
+    a33 = 0;
+  let r0 = 0,
+    r1 = 0,
+    r2 = 0,
+    r3 = 0,
+    ryy = 0;
+  const inv = 1 / range;
+  const n = x.length;
+  for (let i = 0; i < n; i++) {
+    const wi = w[i]!;
+    if (!(wi > 0)) continue;
+    const t = (x[i]! - sMin) * inv;
+    const yi = y[i]! - shift;
+    const wt = wi * t;
+    ryy += wi * yi * yi;
+    a00 += wi;
+    a01 += wt;
+    a11 += wt * t;
+    r0 += wi * yi;
+    r1 += wt * yi;
+    const d = b - x[i]!;
+    if (d > 0) {
+      const h = d * inv;
+      const h2 = h * h;
+      const h3 = h2 * h;
+      const w2 = wi * h2;
+      a02 += w2;
+      a12 += w2 * t;
+      a22 += w2 * h2;
+      r2 += w2 * yi;
+      const w3 = wi * h3;
+      a03 += w3;
+      a13 += w3 * t;
+      a23 += w3 * h2;
+      a33 += w3 * h3;
+      r3 += w3 * yi;
+    }
+  }
+  const cols = k + 1;
+  const put = (r: number, c: number, v: number): void => {
+    M[r * cols + c] = v;
+  };
+  put(0, 0, a00);
+  put(0, 1, a01);
+  put(1, 0, a01);
+  put(1, 1, a11);
+  put(0, k, r0);
+  put(1, k, r1);
+  if (k >= 3) {
+    put(0, 2, a02);
+    put(2, 0, a02);
+    put(1, 2, a12);
+    put(2, 1, a12);
+    put(2, 2, a22);
+    put(2, k, r2);
+  }
+  if (k >= 4) {
+    put(0, 3, a03);
+    put(3, 0, a03);
+    put(1, 3, a13);
+    put(3, 1, a13);
+    put(2, 3, a23);
+    put(3, 2, a23);
+    put(3, 3, a33);
+    put(3, k, r3);
+  }
+  coef[0] = coef[1] = coef[2] = coef[3] = 0;
+  if (!solve(k, coef)) return Number.NaN;
+  // Inside the break search: RSS from the normal equations (y centred by `shift`, so the
+  // cancellation is small); the chosen break is refitted with the direct residual sum below.
+  if (quick) return Math.max(0, ryy - coef[0]! * r0 - coef[1]! * r1 - coef[2]! * r2 - coef[3]! * r3);
+  const c0 = coef[0]!,
+    c1 = coef[1]! * inv,
+    c2 = coef[2]!,
+    c3 = coef[3]!;
+  let rss = 0;
+  for (let i = 0; i < n; i++) {
+    const wi = w[i]!;
+    if (!(wi > 0)) continue;
+    const d = b - x[i]!;
+    let e = y[i]! - shift - c0 - c1 * (x[i]! - sMin);
+    if (d > 0) {
+      const h = d * inv;
+      e -= (c2 + c3 * h) * h * h;
+    }
+    rss += wi * e * e;
+  }
+  return rss;
+}
+
+/**
+ * Continuous two-phase (segmented) regression of C on S with the break S_b chosen by profile
+ * likelihood (minimum weighted RSS over a grid of breaks, refined by golden-section search),
+ * compared with the straight line by an F-test counting the break as one parameter; the line is
+ * kept when p ≥ {@link TWO_PHASE_ALPHA} or its residuals are at rounding level (< 1e-18 of Σw·y²).
+ * The landward phase has at least 2 stations below S_b (3 for the cubic term); S_b = S_max means
+ * the reaction reaches the mouth and the seaward "line" is the tangent there.
+ *
+ * @param x ascending salinities; y concentrations; w weights 1/σ² (0 drops a point)
+ * @param exactP false inside the bootstrap: pCurvature is then only 0 (significant) or 1
+ * @returns the fit, or undefined with fewer than 2 distinct salinities
+ * @see Hudson, D.J. (1966) JASA 61, 1097–1129 (fitting segmented curves with unknown join points);
+ *   Hinkley, D.V. (1969) Biometrika 56, 495–504 (two-phase regression, from memory);
+ *   Boyle et al. (1974) GCA 38, 1719–1728 (the seaward tangent).
+ */
+export function fitTwoPhase(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  exactP = true,
+): TwoPhaseFit | undefined {
+  const idx: number[] = [];
+  for (let i = 0; i < x.length; i++) if (w[i]! > 0) idx.push(i);
+  const n = idx.length;
+  if (n < 2) return undefined;
+  const sMin = x[idx[0]!]!;
+  const sMax = x[idx[n - 1]!]!;
+  const range = sMax - sMin;
+  if (!(range > 0)) return undefined;
+  const lin = [0, 0, 0, 0];
+  const rssLin = fitAt(x, y, w, sMin, range, sMin, 2, lin);
+  if (!Number.isFinite(rssLin)) return undefined;
+  const line: TwoPhaseFit = {
+    breakSalinity: sMin,
+    linear: true,
+    coef: [lin[0]!, lin[1]!, 0, 0],
+    sMin,
+    range,
+    rss: rssLin,
+    rssLinear: rssLin,
+    params: 2,
+    pCurvature: 1,
+  };
+  let syy = 0;
+  for (const i of idx) syy += w[i]! * y[i]! * y[i]!;
+  if (n < 5 || rssLin <= 1e-18 * syy) return line;
+  // Candidate breaks: above the 2nd distinct station (≥ 2 landward), up to S_max.
+  let second = sMin;
+  for (const i of idx)
+    if (x[i]! > sMin) {
+      second = x[i]!;
+      break;
+    }
+  const lo = second + 1e-9 * range;
+  const third = idx.length >= 3 ? x[idx[2]!]! : Number.POSITIVE_INFINITY;
+  const kOf = (b: number): number => (third < b ? 4 : 3);
+  const c = [0, 0, 0, 0];
+  let sw = 0,
+    swy = 0;
+  for (const i of idx) {
+    sw += w[i]!;
+    swy += w[i]! * y[i]!;
+  }
+  const ybar = swy / sw;
+  const rssAt = (b: number): number => {
+    const r = fitAt(x, y, w, sMin, range, b, kOf(b), c, true, ybar);
+    return Number.isFinite(r) ? r : Number.POSITIVE_INFINITY;
+  };
+  let bestB = sMax;
+  let best = Number.POSITIVE_INFINITY;
+  let bestI = 0;
+  for (let g = 0; g <= GRID; g++) {
+    const b = lo + ((sMax - lo) * g) / GRID;
+    const r = rssAt(b);
+    if (r < best) {
+      best = r;
+      bestB = b;
+      bestI = g;
+    }
+  }
+  // Golden-section refinement on the neighbouring grid interval.
+  let a = lo + ((sMax - lo) * Math.max(0, bestI - 1)) / GRID;
+  let z = lo + ((sMax - lo) * Math.min(GRID, bestI + 1)) / GRID;
+  const gr = (Math.sqrt(5) - 1) / 2;
+  // Golden-section search: one new evaluation per step.
+  let m1 = z - gr * (z - a);
+  let m2 = a + gr * (z - a);
+  let r1 = rssAt(m1);
+  let r2 = rssAt(m2);
+  for (let it = 0; it < REFINE; it++) {
+    if (r1 < best) {
+      best = r1;
+      bestB = m1;
+    }
+    if (r2 < best) {
+      best = r2;
+      bestB = m2;
+    }
+    if (r1 < r2) {
+      z = m2;
+      m2 = m1;
+      r2 = r1;
+      m1 = z - gr * (z - a);
+      r1 = rssAt(m1);
+    } else {
+      a = m1;
+      m1 = m2;
+      r1 = r2;
+      m2 = a + gr * (z - a);
+      r2 = rssAt(m2);
+    }
+  }
+  if (r1 < best) {
+    best = r1;
+    bestB = m1;
+  }
+  if (r2 < best) {
+    best = r2;
+    bestB = m2;
+  }
+  if (!Number.isFinite(best)) return line;
+  const k = kOf(bestB);
+  best = fitAt(x, y, w, sMin, range, bestB, k, c);
+  if (!Number.isFinite(best)) return line;
+  const extra = k - 2 + 1;
+  const dfRes = n - k - 1;
+  let p = 1;
+  if (dfRes >= 1) {
+    const gain = Math.max(0, rssLin - best);
+    if (best <= 1e-18 * syy) p = gain > 1e-18 * syy ? 0 : 1;
+    else {
+      const F = gain / extra / (best / dfRes);
+      p = exactP ? fUpperP(F, extra, dfRes) : fPCached(F, extra, dfRes);
+    }
+  }
+  if (!(p < TWO_PHASE_ALPHA)) return { ...line, pCurvature: p };
+  return {
+    breakSalinity: bestB,
+    linear: false,
+    coef: [c[0]!, c[1]!, c[2]!, c[3]!],
+    sMin,
+    range,
+    rss: best,
+    rssLinear: rssLin,
+    params: k + 1,
+    pCurvature: p,
+  };
+}
+
+/** Value, dC/dS and d²C/dS² of the two-phase fit at salinity s. */
+export function twoPhaseAt(f: TwoPhaseFit, s: number): [number, number, number] {
+  const [a0, a1, b2, b3] = f.coef;
+  const R = f.range;
+  const h = Math.max(0, f.breakSalinity - s) / R;
+  const v = a0 + (a1 * (s - f.sMin)) / R + b2 * h * h + b3 * h * h * h;
+  const d1 = (a1 - 2 * b2 * h - 3 * b3 * h * h) / R;
+  const d2 = ((2 * b2 + 6 * b3 * h) / (R * R)) * (h > 0 ? 1 : 0);
+  return [v, d1, d2];
+}
+
+/** The seaward line [intercept, slope] in C = intercept + slope·S (the tangent at S_b). */
+export function seawardLine(f: TwoPhaseFit): [number, number] {
+  const slope = f.coef[1] / f.range;
+  return [f.coef[0] - slope * f.sMin, slope];
+}
+
+/**
+ * Interior maximum of the landward phase: root of dC/dS = 0 with d²C/dS² < 0 strictly inside
+ * (S_min, S_b), solved in closed form (3β₃h² + 2β₂h − α₁ = 0), above both end values.
+ *
+ * @returns the salinity of the maximum, or undefined
+ */
+export function twoPhaseMaximum(f: TwoPhaseFit, sMax: number): number | undefined {
+  if (f.linear) return undefined;
+  const [, a1, b2, b3] = f.coef;
+  const hMax = (f.breakSalinity - f.sMin) / f.range;
+  const roots: number[] = [];
+  if (Math.abs(b3) > 1e-14 * (Math.abs(b2) + Math.abs(a1))) {
+    const disc = 4 * b2 * b2 + 12 * b3 * a1;
+    if (disc >= 0) {
+      const sq = Math.sqrt(disc);
+      roots.push((-2 * b2 + sq) / (6 * b3), (-2 * b2 - sq) / (6 * b3));
+    }
+  } else if (b2 !== 0) roots.push(a1 / (2 * b2));
+  let best: number | undefined;
+  let bestV = Number.NEGATIVE_INFINITY;
+  for (const h of roots) {
+    if (!(h > 0 && h < hMax)) continue;
+    const s = f.breakSalinity - h * f.range;
+    const [v, , d2] = twoPhaseAt(f, s);
+    if (d2 < 0 && v > bestV) {
+      best = s;
+      bestV = v;
+    }
+  }
+  if (best === undefined) return undefined;
+  const ends = Math.max(twoPhaseAt(f, f.sMin)[0], twoPhaseAt(f, sMax)[0]);
+  return bestV > ends ? best : undefined;
+}
