@@ -1,6 +1,24 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { existsSync } from "node:fs";
+import { join } from "node:path";
 import type { Page } from "playwright-core";
-import { openReadyDashboard, screenshot, settle, skipBrowser, waitForMap, type Session } from "./browser.ts";
+import {
+  REPO_ROOT,
+  openReadyDashboard,
+  screenshot,
+  settle,
+  skipBrowser,
+  waitForAnalysis,
+  waitForMap,
+  type Session,
+} from "./browser.ts";
+
+// A real survey export read at test time (never copied into the repository): the San Francisco Bay
+// cruise archive's 2022 file with its station table (../shared/data/usgs-sfbay-2016-2022/SOURCE.md).
+const REAL_DIR = join(REPO_ROOT, "..", "shared", "data", "usgs-sfbay-2016-2022");
+const REAL_FILES = [join(REAL_DIR, "USGSSFBayStations_from_xlsx.csv"), join(REAL_DIR, "wqdata22.csv")];
+const realDataPresent = REAL_FILES.every((f) => existsSync(f));
+if (!realDataPresent) console.warn(`layout e2e: real-data screenshot skipped, ${REAL_DIR} is absent`);
 
 /** A placed label or marker reservation from the map's automation hook (page pixels). */
 interface LabelBox {
@@ -173,6 +191,45 @@ describe.skipIf(skipBrowser)("layout and map labels at 1280×800 and 1440×900 (
     expect(order[order.length - 1]).toBe("stations");
     expect(await s.page.locator("canvas[tabindex='0'], canvas:not([tabindex='-1'])").count()).toBe(1);
   });
+
+  it.skipIf(!realDataPresent)(
+    "a real-data import (SF Bay 2022 with its station table) keeps labels apart and the page unscrolled sideways",
+    async () => {
+      await s.page.setViewportSize({ width: 1440, height: 900 });
+      await s.page.locator('[data-testid="data-toggle"]').click();
+      await s.page.locator('[data-testid="import-input"]').setInputFiles(REAL_FILES);
+      // Confirm each mapping the import asks about (station table, survey file).
+      for (let i = 0; i < 4; i++) {
+        const dialog = s.page.locator('[data-testid="mapping-dialog"][open]');
+        const asked = await dialog
+          .waitFor({ timeout: 20_000 })
+          .then(() => true)
+          .catch(() => false);
+        if (!asked) break;
+        await dialog.locator('[data-testid="mapping-confirm"]').click();
+      }
+      await waitForAnalysis(s.page);
+      await screenshot(s.page, "layout-realdata-report-1440");
+      expect((await layoutFacts(s.page)).escapes).toEqual([]);
+      await s.page.keyboard.press("Escape");
+      await waitForMap(s.page);
+      await settle(s.page);
+      await s.page.waitForTimeout(800);
+      await screenshot(s.page, "layout-realdata-1440");
+      const facts = await layoutFacts(s.page);
+      expect(facts.pageOverflowPx).toBeLessThanOrEqual(0);
+      expect(facts.headerPx).toBeLessThan(64);
+      expect(facts.escapes).toEqual([]);
+      expect(overlaps(await labelBoxes(s.page))).toEqual([]);
+      await s.page.setViewportSize({ width: 1280, height: 800 });
+      await settle(s.page);
+      await s.page.waitForTimeout(800);
+      await screenshot(s.page, "layout-realdata-1280");
+      expect((await layoutFacts(s.page)).pageOverflowPx).toBeLessThanOrEqual(0);
+      expect(overlaps(await labelBoxes(s.page))).toEqual([]);
+    },
+    300_000,
+  );
 
   it("logs no console errors", () => {
     expect(s.errors).toEqual([]);
