@@ -202,8 +202,22 @@ export type { ColumnMapping, ColumnAssignment, ColumnRole } from "./io/columnMap
 export { fileShapeSignature, findSavedMapping } from "./io/fileShape.ts";
 export { emptySummary, mergeSummaries } from "./io/importSummary.ts";
 export type { ImportSummary, ImportedStation } from "./io/importSummary.ts";
-export { selectLayer, combineCells } from "./io/layerSelection.ts";
-export type { LayerChoice } from "./io/layerSelection.ts";
+export { selectLayer, combineCells, detectDepthProfiles, LAYER_KINDS } from "./io/layerSelection.ts";
+export type { LayerChoice, DepthProfileInfo } from "./io/layerSelection.ts";
+export { chooseLayer, duplicateStationIssues } from "./io/layerDefault.ts";
+export { variableKind, NON_MIXING_REASONS } from "./io/variableKinds.ts";
+export type { VariableKind } from "./io/variableKinds.ts";
+export {
+  headOfText,
+  suggestMappingForText,
+  parseUnitOverride,
+  applyUnitOverrides,
+  missingUnits,
+  mergeMapping,
+  unusedColumns,
+} from "./io/mappingChoices.ts";
+export type { UnitOverride, MissingUnit, UnusedColumn } from "./io/mappingChoices.ts";
+export { classifyTable } from "./io/tableKind.ts";
 export { groupSurveys, DEFAULT_SURVEY_GAP_DAYS } from "./io/groupSurveys.ts";
 export type { SurveyGrouping } from "./io/groupSurveys.ts";
 export {
@@ -240,8 +254,22 @@ export { migrateV1toV2, workspaceV1Schema } from "./io/workspaceMigrations.ts";
 // --- end io ---
 
 // --- pipeline ---
-export type { StationPlacement, IsohalineAtKm, SurveyFacts, SurveyAnalysis } from "./pipeline/surveyAnalysis.ts";
-export { analyzeSurvey } from "./pipeline/analyzeSurvey.ts";
+export type {
+  StationPlacement,
+  IsohalineAtKm,
+  SurveyFacts,
+  SurveyAnalysis,
+  AlongChannelSeries,
+  OffChannelStation,
+} from "./pipeline/surveyAnalysis.ts";
+export { analyzeSurvey, DEFAULT_OFF_CHANNEL_M } from "./pipeline/analyzeSurvey.ts";
+export { alongChannelSeries } from "./pipeline/alongChannelSeries.ts";
+export { offChannelStations } from "./pipeline/offChannel.ts";
+export { networkWithMouth } from "./pipeline/resolveMouth.ts";
+export type { ResolvedNetwork } from "./pipeline/resolveMouth.ts";
+export { centerlineFromStations, centerlineFromSurveys } from "./pipeline/centerlineFromStations.ts";
+export type { CenterlineStation, StationCenterline } from "./pipeline/centerlineFromStations.ts";
+export { distancesFromMouth } from "./pipeline/distancesFromMouth.ts";
 export type { AnalyzeSurveyOptions, ConstituentSettings } from "./pipeline/analyzeSurvey.ts";
 export { constituentSamples } from "./pipeline/mixingSamples.ts";
 export type { ConstituentSamples } from "./pipeline/mixingSamples.ts";

@@ -5,7 +5,7 @@
  */
 import { parseArgs } from "node:util";
 import type { InputChoices, LayerChoice, MouthOption, WorkspaceSettings } from "../analysis/index.ts";
-import { columnMappingSchema } from "../analysis/io/columnMapping.ts";
+import { parseUnitOverride, partialMappingSchema } from "../analysis/io/mappingChoices.ts";
 import { InputError, UsageError } from "./exitCodes.ts";
 import { readBytes } from "./files.ts";
 
@@ -32,12 +32,21 @@ export const OPTIONS = {
   temp: { type: "string" },
   pres: { type: "string" },
   pressure: { type: "string" },
+  unit: { type: "string", multiple: true },
+  "off-channel-km": { type: "string" },
+  "keep-off-channel": { type: "boolean" },
+  "as-tracer": { type: "string", multiple: true },
+  "centerline-out": { type: "string" },
 } as const;
 
 export type OptionName = keyof typeof OPTIONS;
 /** Parsed values: text for string options, true/false for boolean ones. */
 export type OptionValues = {
-  [K in OptionName]?: (typeof OPTIONS)[K]["type"] extends "boolean" ? boolean : string;
+  [K in OptionName]?: (typeof OPTIONS)[K] extends { multiple: true }
+    ? string[]
+    : (typeof OPTIONS)[K]["type"] extends "boolean"
+      ? boolean
+      : string;
 };
 
 /** Options of every command that reads surveys (analyze, compare, report). */
@@ -50,7 +59,20 @@ export const INPUT_OPTIONS: readonly OptionName[] = [
   "discharge",
   "draws",
   "seed",
+  "unit",
+  "off-channel-km",
+  "keep-off-channel",
+  "as-tracer",
 ];
+
+/** Help lines of the issue-13 input options (analyze, compare, report). */
+export const CHOICE_HELP = `  --unit "<column>=<unit>"     unit of a column whose header has none (repeatable), e.g.
+                               --unit "Silicate=µmol/L"
+  --off-channel-km <km>        stations farther from the centerline are left out of the fits and
+                               listed (default 2)
+  --keep-off-channel           keep off-channel stations in the fits (still listed)
+  --as-tracer <name>           analyse a non-mixing variable (oxygen, chlorophyll, particles,
+                               turbidity) against the dilution line all the same (repeatable)`;
 
 /** Largest bootstrap draw count accepted (a larger one is a typo, not an analysis). */
 export const MAX_DRAWS = 100_000;
@@ -83,16 +105,16 @@ export function parseCount(name: string, text: string | undefined, fallback: num
   return n;
 }
 
-/** `--layer surface|bottom|average|<min>-<max>`. */
+/** `--layer shallowest|surface|bottom|average|all|<min>-<max>`. */
 export function parseLayer(text: string | undefined): LayerChoice | undefined {
   if (text === undefined) return undefined;
-  if (text === "surface" || text === "bottom") return { kind: text };
+  if (text === "surface" || text === "bottom" || text === "shallowest" || text === "all") return { kind: text };
   if (text === "average") return { kind: "depthAveraged" };
   const range = /^(\d+(?:\.\d+)?)-(\d+(?:\.\d+)?)$/.exec(text);
   if (range && Number(range[1]) <= Number(range[2]))
     return { kind: "depthRange", minM: Number(range[1]), maxM: Number(range[2]) };
   throw new UsageError(
-    `--layer: expected surface, bottom, average or a depth range from-to in m with from ≤ to (like 0-2); got "${text}"`,
+    `--layer: expected shallowest, surface, bottom, average, all or a depth range from-to in m with from ≤ to (like 0-2); got "${text}"`,
   );
 }
 
@@ -140,7 +162,7 @@ function readMapping(path: string): InputChoices["mapping"] {
     if (error instanceof InputError) throw error;
     throw new InputError(`${path}: row 1: not valid JSON (${(error as Error).message})`);
   }
-  const parsed = columnMappingSchema.safeParse(doc);
+  const parsed = partialMappingSchema.safeParse(doc);
   if (!parsed.success) {
     const first = parsed.error.issues[0];
     const where = first?.path.length ? ` at ${first.path.join(".")}` : "";
@@ -148,7 +170,7 @@ function readMapping(path: string): InputChoices["mapping"] {
       `${path}: expected a column mapping object as the dashboard saves it ({ "columns": [...] })${where}: ${first?.message ?? "invalid"}`,
     );
   }
-  return parsed.data;
+  return { ...parsed.data, shape: parsed.data.shape ?? "", columns: parsed.data.columns } as InputChoices["mapping"];
 }
 
 /** The readInputs choices from parsed option values (command-line mistakes throw UsageError first). */
@@ -157,8 +179,26 @@ export function inputChoices(values: OptionValues): InputChoices {
   const mouth = parseMouth(values.mouth);
   const discharge = parseDischarge(values.discharge);
   const mapping = values.mapping !== undefined ? readMapping(values.mapping) : undefined;
+  const unitOverrides: Record<string, string> = {};
+  for (const t of values.unit ?? []) {
+    const o = parseUnitOverride(t);
+    if ("error" in o) throw new UsageError(o.error);
+    unitOverrides[o.column] = o.unit;
+  }
+  let offChannelM: number | undefined;
+  if (values["off-channel-km"] !== undefined) {
+    const km = Number(values["off-channel-km"]);
+    if (!(km > 0) || !Number.isFinite(km))
+      throw new UsageError(`--off-channel-km: expected a positive number of km; got "${values["off-channel-km"]}"`);
+    offChannelM = km * 1000;
+  }
   return {
     ...(mapping ? { mapping } : {}),
+    ...(Object.keys(unitOverrides).length > 0 ? { unitOverrides } : {}),
+    ...(offChannelM !== undefined ? { offChannelM } : {}),
+    ...(values["keep-off-channel"] === true ? { keepOffChannel: true } : {}),
+    ...((values["as-tracer"] ?? []).length > 0 ? { analyseAsTracers: values["as-tracer"] } : {}),
+    useStationCenterline: true,
     ...(layer ? { layer } : {}),
     ...(mouth !== undefined ? { mouth } : {}),
     ...(discharge !== undefined ? { dischargeM3s: discharge } : {}),

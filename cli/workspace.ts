@@ -60,6 +60,23 @@ export function loadWorkspace(paths: readonly string[], values: OptionValues, io
     const first = inputs.issues.find((i) => i.file === basename(values.centerline!) && i.severity === "error");
     throw new InputError(first ? issueText(first) : `${values.centerline}: no usable centerline`);
   }
+  const unmatched = inputs.issues.find((i) => i.file === "(unit override)");
+  if (unmatched) throw new InputError(`--unit: ${unmatched.value}: expected ${unmatched.expected}`);
+  const tracers = inputs.surveys.flatMap((s) => s.constituents).filter((c) => c.kind !== "nonMixing");
+  const missing = inputs.files.flatMap((f) => (f.missingUnits ?? []).map((m) => ({ ...m, file: f.file })));
+  const missingTracers = missing.filter((m) => m.kind === "tracer");
+  if (tracers.length === 0 && missingTracers.length > 0)
+    throw new InputError(
+      [
+        `no dissolved constituent can be analysed: ${missingTracers.length} constituent column(s) have no unit in the header.`,
+        ...missingTracers.map((m) => `  ${m.file}: column "${m.header}" (${m.name}) — add ${m.option}`),
+        "Check each unit in the data's documentation; the units shown are examples, not guesses applied for you.",
+      ].join("\n"),
+    );
+  for (const n of inputs.notices) io.err(`notice: ${n.message}`);
+  const notUsed = inputs.files.flatMap((f) => (f.notUsed ?? []).map((u) => ({ ...u, file: f.file })));
+  if (notUsed.length > 0)
+    io.err(["columns not used:", ...notUsed.map((u) => `  ${u.file}: "${u.header}" — ${u.reason}`)].join("\n"));
   if (inputs.surveys.length === 0) {
     const first = inputs.issues.find((i) => i.severity === "error");
     throw new InputError(first ? issueText(first) : `${paths.join(", ")}: no survey could be read`);

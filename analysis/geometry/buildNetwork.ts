@@ -51,7 +51,7 @@ function mouthAtStart(
   if (mouth === undefined) {
     warnings.push({
       code: "mouthAssumed",
-      message: `The mouth was not stated; the first vertex of main stem '${main.id}' is assumed to be the mouth. Check it with suggestMouth() or set options.mouth.`,
+      message: `The mouth was not stated; the first vertex of main stem '${main.id}' is assumed to be the mouth. Set it with --mouth start|end|lon,lat on the command line or the Mouth control in the dashboard.`,
     });
     return [true, "assumed"];
   }

@@ -40,6 +40,11 @@ export const columnAssignmentSchema = z.object({
   unitText: z.string().optional(),
   /** For role "flag": the header of the value column the flag belongs to. */
   flagFor: z.string().optional(),
+  /**
+   * For constituents: "tracer" (dissolved, analysed against the dilution line) or "nonMixing"
+   * (shown along the channel only); suggested from the name, the user may override it.
+   */
+  kind: z.enum(["tracer", "nonMixing"]).optional(),
   /** Why the suggestion chose this role (shown in the mapping dialog). */
   reason: z.string().optional(),
 });

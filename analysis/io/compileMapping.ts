@@ -5,6 +5,7 @@ import { makeIssue } from "./importSummary.ts";
 import { projDefinition } from "./projection.ts";
 import type { UnitParser } from "./unitText.ts";
 import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
+import { variableKind } from "./variableKinds.ts";
 
 /** Roles that take a single column. */
 export type SingleRole = Exclude<ColumnRole, "constituent" | "flag" | "ignore">;
@@ -138,7 +139,11 @@ export function compileMapping(
       continue;
     }
     if (col.role === "constituent") {
-      const unit = col.unit === undefined ? undefined : concentrationUnitText(col.unit);
+      const symbol = col.name ?? col.header;
+      const conc = col.unit === undefined ? undefined : concentrationUnitText(col.unit);
+      const other = col.unit === undefined || conc !== undefined ? undefined : parseUnit(col.unit);
+      const kind = variableKind(symbol, conc ?? other, conc !== undefined);
+      const unit = conc ?? (kind.kind === "nonMixing" ? other : undefined);
       if (unit === undefined) {
         const found = col.unit ?? col.unitText ?? "";
         issues.push(
@@ -147,19 +152,25 @@ export function compileMapping(
             0,
             col.header,
             found,
-            "a concentration unit from the units table (e.g. nmol/L, µmol/kg, µg/L; ppm/ppb/ppt are ambiguous) — set it in the column mapping; column not imported",
+            `a ${kind.kind === "nonMixing" ? "unit" : "concentration unit from the units table (e.g. nmol/L, µmol/kg, µg/L; ppm/ppb/ppt are ambiguous)"} — set it with --unit "${col.header}=<unit>" or in the column mapping; column not imported`,
+            kind.kind === "nonMixing" ? "warning" : "error",
           ),
         );
         continue;
       }
-      const name = col.name ?? col.header;
+      const name = symbol;
       let key = name;
       if (keys.has(key)) {
         key = keys.has(`${name} (${col.header})`) ? `${name} (column ${i + 1})` : `${name} (${col.header})`;
         issues.push(makeIssue(file, 0, col.header, name, `one column per constituent; stored as "${key}"`, "warning"));
       }
       keys.add(key);
+      const chosenKind = col.kind ?? kind.kind;
       const constituent: Constituent = { name: key, unit, header: col.header };
+      if (chosenKind === "nonMixing") {
+        constituent.kind = "nonMixing";
+        if (kind.reason !== undefined) constituent.kindReason = kind.reason;
+      }
       compiled.constituents.push({ index: i, key, constituent });
       compiled.constituentList.push(constituent);
       continue;

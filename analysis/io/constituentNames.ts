@@ -51,6 +51,8 @@ export const CONSTITUENT_SYNONYMS: Readonly<Record<string, string>> = {
   dissolvedoxygen: "O2",
   o2: "O2",
   spm: "SPM",
+  turbidity: "Turbidity",
+  turb: "Turbidity",
   tss: "SPM",
   suspendedparticulatematter: "SPM",
   // elements written as words
@@ -156,12 +158,19 @@ function lookup(text: string): string | undefined {
 /**
  * Normalises a constituent name to its element or species symbol.
  *
+ * A leading "d" or "p" before a symbol reads as dissolved or particulate ("dFe" → "Fe",
+ * "pMn" → "Mn (particulate)").
+ *
  * @param name the header's name part (unit already removed), e.g. "Silicate", "Iron", "FE", "Discrete Oxygen"
  * @returns the symbol ("Si", "Fe", "O2 (discrete)"), or undefined when the name is not a known constituent
  */
 export function normaliseConstituentName(name: string): string | undefined {
   const direct = lookup(name);
   if (direct !== undefined) return direct;
+  // "dFe" = dissolved Fe (the default meaning of a symbol here), "pFe" = particulate Fe.
+  const prefixed = /^([dp])([A-Z].*)$/.exec(name.trim());
+  const symbol = prefixed === null ? undefined : lookup(prefixed[2]);
+  if (prefixed !== null && symbol !== undefined) return prefixed[1] === "d" ? symbol : `${symbol} (particulate)`;
   const words = name.trim().split(/[\s_]+/);
   const kept: string[] = [];
   const qualifiers: string[] = [];

@@ -10,6 +10,7 @@ import type { ImportedStation, ImportSummary } from "./importSummary.ts";
 import { makeIssue } from "./importSummary.ts";
 import type { LayerChoice } from "./layerSelection.ts";
 import { selectLayer } from "./layerSelection.ts";
+import { chooseLayer, duplicateStationIssues } from "./layerDefault.ts";
 import type { FlagDecision } from "./qcFlags.ts";
 import type { RowReader, SalinityFromConductivity } from "./rowReader.ts";
 import { createRowReader } from "./rowReader.ts";
@@ -18,6 +19,7 @@ import { joinStationTable } from "./stationTable.ts";
 import { normaliseStationId } from "./stationIds.ts";
 import { findSavedMapping } from "./fileShape.ts";
 import { suggestMapping } from "./suggestMapping.ts";
+import { applyUnitOverrides, mergeMapping } from "./mappingChoices.ts";
 import { crossCheckUnits } from "./unitCrossCheck.ts";
 import type { UnitParser } from "./unitText.ts";
 import { canonicalUnitText } from "./unitText.ts";
@@ -40,7 +42,9 @@ export interface ReadSurveyOptions {
   salinityFromConductivity?: SalinityFromConductivity;
   /** Station table joined by station id (positions, distances). */
   stationTable?: StationTable;
-  /** Layer kept per station and time (default: every row). */
+  /** Units by column header or constituent name (`{ "Silicate": "µmol/L" }`), for headers without one. */
+  unitOverrides?: Readonly<Record<string, string>>;
+  /** Layer kept per station and survey (default: "shallowest" for depth-resolved files, else every row). */
   layer?: LayerChoice;
   /** Survey grouping (default: survey column when mapped, else date gaps of 3 days). */
   grouping?: SurveyGrouping;
@@ -58,6 +62,8 @@ export interface ImportResult {
   mapping: ColumnMapping;
   headers: string[];
   dialect: TextDialect;
+  /** The layer used (the stated one, else "shallowest" for depth-resolved files, else "all"). */
+  layer: LayerChoice;
 }
 
 /**
@@ -76,11 +82,22 @@ export function pss78Salinity(
   }
 }
 
-/** Chooses the mapping: explicit, saved for this shape, or suggested. */
+/**
+ * Chooses the mapping: explicit (a partial one merged with the suggestion: columns it leaves out keep
+ * the suggested role), saved for this shape, or suggested; then the user's unit overrides.
+ */
 export function chooseMapping(headers: string[], sample: string[][], options: ReadSurveyOptions): ColumnMapping {
-  if (options.mapping !== undefined) return options.mapping;
-  const saved = options.savedMappings === undefined ? undefined : findSavedMapping(headers, options.savedMappings);
-  return saved ?? suggestMapping(headers, sample, options.parseUnit ?? canonicalUnitText);
+  const suggest = (): ColumnMapping => suggestMapping(headers, sample, options.parseUnit ?? canonicalUnitText);
+  let mapping: ColumnMapping;
+  if (options.mapping !== undefined) {
+    const merged = mergeMapping(options.mapping, suggest());
+    mapping = "mapping" in merged ? merged.mapping : options.mapping;
+  } else {
+    const saved = options.savedMappings === undefined ? undefined : findSavedMapping(headers, options.savedMappings);
+    mapping = saved ?? suggest();
+  }
+  const overrides = Object.entries(options.unitOverrides ?? {}).map(([column, unit]) => ({ column, unit }));
+  return overrides.length === 0 ? mapping : applyUnitOverrides(mapping, overrides).mapping;
 }
 
 /** Compiles the mapping and creates the row reader, adding file-level issues. */
@@ -126,11 +143,25 @@ export function finishImport(
     appendAll(issues, joined.issues);
   }
   appendAll(issues, conflictingStationPositions(reader.stations, file, stationHeader));
-  const layered = selectLayer(rows, options.layer ?? { kind: "all" }, file);
-  appendAll(issues, layered.issues);
+  const grouping: SurveyGrouping =
+    options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
+  const grouped = groupSurveys(rows, grouping, compiled.constituentList, file, options.riverDischargeM3s);
+  appendAll(issues, grouped.issues);
+  const layer = chooseLayer(
+    rows,
+    options.layer,
+    headers[compiled.single.depth ?? compiled.single.depthLabel ?? -1] ?? "",
+    file,
+    issues,
+  );
+  for (const survey of grouped.surveys) {
+    const layered = selectLayer(survey.stations as ImportedStation[], layer, file);
+    survey.stations = layered.stations;
+    appendAll(issues, layered.issues);
+  }
   const noPos = new Map<string, ImportedStation>();
-  for (const st of layered.stations)
-    if (st.lonLat === undefined && !noPos.has(normaliseStationId(st.id).id))
+  for (const st of grouped.surveys.flatMap((s) => s.stations) as ImportedStation[])
+    if (st.lonLat === undefined && st.distanceKm === undefined && !noPos.has(normaliseStationId(st.id).id))
       noPos.set(normaliseStationId(st.id).id, st);
   for (const st of noPos.values()) {
     const hint =
@@ -148,10 +179,7 @@ export function finishImport(
       ),
     );
   }
-  const grouping: SurveyGrouping =
-    options.grouping ?? (compiled.single.survey !== undefined ? { by: "column" } : { by: "dateGap" });
-  const grouped = groupSurveys(layered.stations, grouping, compiled.constituentList, file, options.riverDischargeM3s);
-  appendAll(issues, grouped.issues);
+  appendAll(issues, duplicateStationIssues(grouped.surveys, file, stationHeader));
   options.onProgress?.(1);
-  return { surveys: grouped.surveys, issues, summary: reader.summary, mapping, headers, dialect };
+  return { surveys: grouped.surveys, issues, summary: reader.summary, mapping, headers, dialect, layer };
 }

@@ -23,7 +23,7 @@ export interface ImportedStation extends Station {
   /** Survey label from a survey column. */
   surveyLabel?: string;
   /** Layer from a depth-label column ("S"/"B" style) or from layer selection. */
-  layer?: "surface" | "bottom" | "middle" | "depthAveraged" | "depthRange";
+  layer?: "surface" | "bottom" | "middle" | "shallowest" | "depthAveraged" | "depthRange";
   /** Along-channel distance given in the file [km]. */
   distanceKm?: number;
   /** River discharge given on the row [m³/s]. */

@@ -6,6 +6,7 @@ import { splitHeaderUnit } from "./headerUnits.ts";
 import type { UnitParser } from "./unitText.ts";
 import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
 import { detectDateOrder } from "./dateTime.ts";
+import { variableKind } from "./variableKinds.ts";
 import { flagTarget, isRowFlagHeader } from "./qcFlags.ts";
 
 /** Header patterns (tested on the lower-case name part, separators as single spaces). */
@@ -90,17 +91,27 @@ export function suggestMapping(
     const name = normaliseConstituentName(parts.name);
     if (name !== undefined) {
       const conc = parts.unitText === undefined ? undefined : concentrationUnitText(parts.unitText);
+      const kind = variableKind(name, conc ?? parts.unit, conc !== undefined);
+      const unit = conc ?? (kind.kind === "nonMixing" ? parts.unit : undefined);
       const unitFields = {
-        ...(conc !== undefined ? { unit: conc } : {}),
+        ...(unit !== undefined ? { unit } : {}),
         ...(parts.unitText !== undefined ? { unitText: parts.unitText } : {}),
       };
       const why =
-        conc !== undefined
-          ? `unit ${conc}`
+        unit !== undefined
+          ? `unit ${unit}`
           : parts.unitText !== undefined
             ? `unknown unit "${parts.unitText}"`
             : "no unit in header";
-      return { header, role: "constituent", name, ...unitFields, reason: `constituent ${name}, ${why}` };
+      const kindWhy = kind.kind === "nonMixing" ? `; not a mixing tracer (${kind.reason ?? ""})` : "";
+      return {
+        header,
+        role: "constituent",
+        name,
+        ...unitFields,
+        kind: kind.kind,
+        reason: `constituent ${name}, ${why}${kindWhy}`,
+      };
     }
     return { header, role: "ignore", reason: "not recognised" };
   });

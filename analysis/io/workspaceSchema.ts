@@ -71,7 +71,7 @@ export const stationSchema = z.looseObject({
   sourceRow: z.number().int().nonnegative(),
   sourceFile: text,
   surveyLabel: text.optional(),
-  layer: z.enum(["surface", "bottom", "middle", "depthAveraged", "depthRange"]).optional(),
+  layer: z.enum(["surface", "bottom", "middle", "shallowest", "depthAveraged", "depthRange"]).optional(),
   distanceKm: finite.optional(),
   dischargeM3s: nonNegative.optional(),
   rowFlag: text.optional(),
@@ -85,6 +85,8 @@ const constituentSchema = z.object({
     "a unit from the units table, written as the table writes it (e.g. nmol/L, µmol/kg, µg/L, NTU)",
   ),
   header: text,
+  kind: z.enum(["tracer", "nonMixing"]).optional(),
+  kindReason: text.optional(),
 });
 
 export const surveySchema = z.object({
@@ -128,7 +130,7 @@ export const centerlineSchema = z.union([
 ]);
 
 const layerChoice = z.union([
-  z.object({ kind: z.enum(["all", "surface", "bottom", "depthAveraged"]) }),
+  z.object({ kind: z.enum(["all", "shallowest", "surface", "bottom", "depthAveraged"]) }),
   z.object({ kind: z.literal("depthRange"), minM: finite, maxM: finite }),
 ]);
 const grouping = z.union([

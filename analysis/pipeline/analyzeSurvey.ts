@@ -12,6 +12,8 @@ import type { Survey } from "../survey/survey.ts";
 import { SCREENING_CAUTION } from "./caution.ts";
 import { constituentSamples } from "./mixingSamples.ts";
 import { placeStations } from "./placeStations.ts";
+import { alongChannelSeries } from "./alongChannelSeries.ts";
+import { offChannelStations } from "./offChannel.ts";
 import type { MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
 import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
@@ -24,8 +26,15 @@ export type ConstituentSettings = Partial<
 export interface AnalyzeSurveyOptions {
   /** Channel network (from buildChannelNetwork); without it, file distances are used if present. */
   network?: ChannelNetwork;
-  /** Stations farther off the channel are flagged [m] (geometry default when absent). */
+  /**
+   * Stations farther off the channel are left out of the fits and end-members, and listed [m]
+   * (default {@link DEFAULT_OFF_CHANNEL_M}).
+   */
   offChannelThresholdM?: number;
+  /** Keep off-channel stations in the fits (they are still listed). Default false. */
+  keepOffChannel?: boolean;
+  /** Non-mixing variables (oxygen, chlorophyll, particles...) to analyse as tracers all the same. */
+  analyseAsTracers?: string[];
   /** Isohalines to locate (default 1, 2, 5, 10, 20). */
   isohalines?: number[];
   /** Isohaline defining the salt intrusion length (default 2). */
@@ -47,6 +56,9 @@ export interface AnalyzeSurveyOptions {
 }
 
 const DEFAULT_ISOHALINES = [1, 2, 5, 10, 20];
+
+/** Default distance from the centerline beyond which a station is off the channel [m] (common practice: a few channel widths). */
+export const DEFAULT_OFF_CHANNEL_M = 2000;
 
 /**
  * S(x) along the main stem: stations on a tributary or off the channel are left out, since a
@@ -91,8 +103,17 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
   const warnings: MixingWarning[] = [];
   const network = options.network;
   if (network) warnings.push(...network.warnings);
-  const { placements, warnings: placeWarnings } = placeStations(survey.stations, network, options.offChannelThresholdM);
-  warnings.push(...placeWarnings);
+  const limitM = options.offChannelThresholdM ?? DEFAULT_OFF_CHANNEL_M;
+  const { placements, warnings: placeWarnings } = placeStations(survey.stations, network, limitM);
+  warnings.push(...placeWarnings.filter((w) => w.code !== "offChannel"));
+  const off = offChannelStations(placements);
+  const kept = options.keepOffChannel === true;
+  if (off.length > 0)
+    warnings.push({
+      code: "offChannel",
+      message: `${off.length} station(s) lie more than ${limitM / 1000} km from the channel and are ${kept ? "kept in" : "left out of"} the fits and end-members: ${off.map((o) => `${o.id} (${o.distanceKm.toFixed(1)} km)`).join(", ")}. ${kept ? "" : "Keep them with --keep-off-channel or the dashboard's off-channel setting; "}change the limit with --off-channel-km.`,
+    });
+  const excluded = new Set(kept ? [] : off.map((o) => o.id));
   const profile = profileOf(placements, network, warnings);
   if (profile) warnings.push(...profile.warnings);
   const saltS = options.saltIntrusionSalinity ?? 2;
@@ -113,7 +134,12 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     ...(salinities.length > 0 ? { salinityRange: [minOf(salinities), maxOf(salinities)] as [number, number] } : {}),
     nStations: survey.stations.length,
   };
-  const wanted = options.constituents ?? survey.constituents.map((c) => c.name);
+  const asTracer = new Set(options.analyseAsTracers ?? []);
+  const isTracer = (c: Survey["constituents"][number]): boolean => c.kind !== "nonMixing" || asTracer.has(c.name);
+  const wanted = options.constituents ?? survey.constituents.filter(isTracer).map((c) => c.name);
+  const variables = survey.constituents
+    .filter((c) => !isTracer(c) && (options.constituents === undefined || !wanted.includes(c.name)))
+    .map((c) => alongChannelSeries(survey, c.name, placements));
   const constituents: ConstituentAnalysis[] = [];
   const labT = options.labTemperatureC ?? 20;
   wanted.forEach((name, i) => {
@@ -126,7 +152,10 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
       return;
     }
     progress((i + 0.5) / Math.max(1, wanted.length), `mixing analysis of ${name}`);
-    const { samples, leftOut } = constituentSamples(survey.stations, name);
+    const all = constituentSamples(survey.stations, name);
+    const samples = all.samples.filter((x) => !excluded.has(x.stationId));
+    const leftOut = { ...all.leftOut };
+    if (samples.length < all.samples.length) leftOut["off the channel"] = all.samples.length - samples.length;
     const perKg = parseUnit(info.unit)?.basis === "perKilogram";
     const settings = options.settings?.[name] ?? {};
     const result = analyzeConstituent(samples, {
@@ -160,6 +189,9 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     stations: placements,
     ...(profile ? { salinityProfile: profile } : {}),
     constituents,
+    variables,
+    offChannelStations: off,
+    offChannel: { limitKm: limitM / 1000, kept },
     warnings,
     caution: SCREENING_CAUTION,
   };

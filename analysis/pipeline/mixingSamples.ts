@@ -16,7 +16,8 @@ export function acceptedValue(cell: ValueCell | undefined): number | undefined {
 /**
  * Turns survey stations into mixing samples for one constituent.
  *
- * A station takes part when its salinity is measured and accepted. Measured values pass as they are
+ * A station takes part when its salinity is measured and accepted (the salinity of the value's own
+ * sample when layer selection recorded one, else the station's). Measured values pass as they are
  * (QC-rejected ones are kept with `accepted: false`, so the analysis can show but not use them);
  * below-detection values pass as censored with their limit; a below-detection value without a stated
  * limit ("ND") cannot be placed on the concentration axis and is left out and counted — never
@@ -33,8 +34,9 @@ export function constituentSamples(stations: readonly Station[], constituent: st
     leftOut[reason] = (leftOut[reason] ?? 0) + 1;
   };
   for (const st of stations) {
-    const salinity = acceptedValue(st.salinity);
     const cell = st.values[constituent];
+    // A value chosen by layer selection carries the salinity of its own sample (same depth).
+    const salinity = cell?.sampleSalinity ?? acceptedValue(st.salinity);
     if (salinity === undefined) {
       skip("no accepted salinity");
       continue;

@@ -53,6 +53,24 @@ export interface SurveyFacts {
   nStations: number;
 }
 
+/** A variable shown along the channel but not analysed for mixing (oxygen, chlorophyll, particles...). */
+export interface AlongChannelSeries {
+  name: string;
+  unit: string;
+  kind: "nonMixing";
+  /** Why it is not given end-members. */
+  reason: string;
+  points: Array<{ stationId: string; value: number; salinity?: number; alongChannelKm?: number; offChannel?: true }>;
+}
+
+/** A station left out of the fits and end-members because it lies off the channel. */
+export interface OffChannelStation {
+  id: string;
+  /** Distance from the centerline [km]. */
+  distanceKm: number;
+  branchId?: string;
+}
+
 /** Everything Brackline concludes about one survey. */
 export interface SurveyAnalysis {
   survey: SurveyFacts;
@@ -60,6 +78,12 @@ export interface SurveyAnalysis {
   /** S(x) along the channel, when stations could be placed on it. */
   salinityProfile?: SalinityProfile;
   constituents: ConstituentAnalysis[];
+  /** Variables that are not dissolved mixing tracers, as points along the channel (no end-members). */
+  variables?: AlongChannelSeries[];
+  /** Stations farther off the channel than the limit, left out of the fits (unless kept); empty without a centerline. */
+  offChannelStations?: OffChannelStation[];
+  /** The off-channel limit used [km], and whether off-channel stations were kept in the fits. */
+  offChannel?: { limitKm: number; kept: boolean };
   /** Survey-level warnings and notices (geometry, import, pipeline). */
   warnings: MixingWarning[];
   /** The caution to show beside every result. */

@@ -29,6 +29,15 @@ export interface ValueCell {
   qcFlag?: string;
   /** False when the QC flag maps to "reject"; rejected values are kept but not analysed. */
   accepted: boolean;
+  /**
+   * Practical salinity of the sample(s) this value came from, when layer selection combined several
+   * depths of a station (the mixing analysis pairs the value with it rather than the station's salinity).
+   */
+  sampleSalinity?: number;
+  /** Depth of the sample(s) this value came from [m], when layer selection chose it. */
+  sampleDepthM?: number;
+  /** Depth of the salinity paired with this value when it was taken from another depth than the value [m]. */
+  salinityDepthM?: number;
 }
 
 /** One sample (a station at one time and depth). */
@@ -63,6 +72,13 @@ export interface Constituent {
   unit: string;
   /** The header text the constituent came from. */
   header: string;
+  /**
+   * "tracer": dissolved constituent analysed against the dilution line (the default);
+   * "nonMixing": oxygen, pigments, particles, optical measures — shown along the channel, no end-members.
+   */
+  kind?: "tracer" | "nonMixing";
+  /** Why a variable is "nonMixing" (shown to the user). */
+  kindReason?: string;
 }
 
 /** One survey (cruise or sampling campaign) of one estuary. */

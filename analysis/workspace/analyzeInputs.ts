@@ -80,6 +80,8 @@ export function analyzeInputs(inputs: WorkspaceInputs, settings: WorkspaceSettin
     const analysis = analyzeSurvey(survey, {
       ...(network ? { network } : {}),
       ...(inputs.choices.offChannelM !== undefined ? { offChannelThresholdM: inputs.choices.offChannelM } : {}),
+      ...(inputs.choices.keepOffChannel === true ? { keepOffChannel: true } : {}),
+      ...(inputs.choices.analyseAsTracers ? { analyseAsTracers: [...inputs.choices.analyseAsTracers] } : {}),
       ...(settings.bootstrapDraws !== undefined ? { bootstrapDraws: settings.bootstrapDraws } : {}),
       ...(settings.seed !== undefined ? { seed: settings.seed } : {}),
       ...(settings.saltIntrusionSalinity !== undefined

@@ -108,7 +108,11 @@ function describe(source: MouthSource, mouth: MouthOption, network: ChannelNetwo
     suggested: `suggested from station salinity (higher towards the sea)${extra}`,
     assumed: "assumed at the first vertex: neither the file nor the user states it and no salinity suggests it",
   };
-  return `Mouth at ${at} of main stem '${network.mainBranchId}', ${how[source]}.`;
+  const change =
+    source === "suggested" || source === "assumed"
+      ? " Change it with --mouth start|end|lon,lat on the command line or the Mouth control in the dashboard."
+      : "";
+  return `Mouth at ${at} of main stem '${network.mainBranchId}', ${how[source]}.${change}`;
 }
 
 /**

@@ -11,6 +11,7 @@ import type { ImportIssue } from "../survey/survey.ts";
 import { decodeText, detectFileKind, EXPECTED_FILE, type InputFileKind } from "./fileKind.ts";
 import { readCenterline, type ChannelInput } from "./readCenterline.ts";
 import type { InputChoices, InputFile, InputFileReport, WorkspaceInputs } from "./types.ts";
+import { columnReport, placeWithoutCenterline } from "./stationPlacement.ts";
 import { appendAll } from "../survey/arrayExtent.ts";
 
 const fileIssue = (file: string, value: string, expected: string): ImportIssue => ({
@@ -50,12 +51,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
       throw new TypeError(`readInputs(): files[${i}] must be { name: string, content: Uint8Array | string }`);
   const { onProgress, ...plain } = choices;
   const issues: ImportIssue[] = [];
-  // Unit overrides reach the readers once ReadSurveyOptions takes them (issue 13); until then say so, never drop silently.
-  for (const [column, unit] of Object.entries(choices.unitOverrides ?? {}))
-    issues.push({
-      ...fileIssue("(unit override)", `${column}=${unit}`, "a unit override the readers apply (not yet supported)"),
-      severity: "warning",
-    });
+  const notices: WorkspaceInputs["notices"] = [];
   const kinds = files.map((f) => {
     const given = choices.kindByFile?.[f.name];
     if (given) return given;
@@ -89,10 +85,12 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
       ...(mapping ? { mapping } : {}),
       ...(stationTable ? { stationTable } : {}),
       ...(choices.layer ? { layer: choices.layer } : {}),
+      ...(choices.unitOverrides ? { unitOverrides: choices.unitOverrides } : {}),
       ...(choices.dischargeM3s !== undefined ? { riverDischargeM3s: choices.dischargeM3s } : {}),
       ...(onProgress ? { onProgress: (x: number) => onProgress((n + x) / surveyIdx.length) } : {}),
     });
     Object.assign(reports[i]!, { surveys: r.surveys.map((s) => s.name), summary: r.summary, mapping: r.mapping });
+    Object.assign(reports[i]!, columnReport(f, kinds[i]!, r.mapping));
     appendAll(issues, r.issues);
     return r;
   });
@@ -117,9 +115,30 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
     appendAll(issues, read.issues);
     channel = read.channel;
   });
+  const unmatched = Object.keys(choices.unitOverrides ?? {}).filter(
+    (k) =>
+      !results.some((r) =>
+        r.mapping.columns.some((c) => [c.header, c.name].some((x) => x?.toLowerCase() === k.trim().toLowerCase())),
+      ),
+  );
+  for (const k of unmatched)
+    issues.push(
+      fileIssue("(unit override)", k, `a column named "${k}" in the survey files (unit override not applied)`),
+    );
+  const withoutLine =
+    channel === undefined && !kinds.includes("centerline")
+      ? placeWithoutCenterline(surveys, choices.useStationCenterline === true)
+      : undefined;
+  if (withoutLine) {
+    notices.push(...withoutLine.notices);
+    if (withoutLine.channel) channel = withoutLine.channel;
+    surveys.splice(0, surveys.length, ...withoutLine.surveys);
+  }
   onProgress?.(1);
   return {
     surveys,
+    notices,
+    ...(withoutLine?.offered ? { offeredCenterline: withoutLine.offered } : {}),
     ...(channel ? { channel } : {}),
     ...(stationTable ? { stationTable } : {}),
     files: reports,

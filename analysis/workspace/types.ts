@@ -10,6 +10,8 @@ import type { MouthOption } from "../geometry/types.ts";
 import type { ImportIssue, Survey } from "../survey/survey.ts";
 import type { InputFileKind } from "./fileKind.ts";
 import type { ChannelInput } from "./readCenterline.ts";
+import type { MissingUnit, UnusedColumn } from "../io/mappingChoices.ts";
+import type { StationCenterline } from "../pipeline/centerlineFromStations.ts";
 
 /** One input file: its name (as shown in messages) and content. */
 export interface InputFile {
@@ -37,6 +39,15 @@ export interface InputChoices {
   kindByFile?: Readonly<Record<string, InputFileKind>>;
   /** Stations farther than this from the centerline are off-channel [m] (analysis default when absent). */
   offChannelM?: number;
+  /** Keep off-channel stations in the fits and end-members (they are still listed). */
+  keepOffChannel?: boolean;
+  /** Non-mixing variables (oxygen, chlorophyll, particles...) to analyse against the dilution line all the same. */
+  analyseAsTracers?: readonly string[];
+  /**
+   * Without a centerline file: use the centerline built from the station positions as the channel
+   * (the CLI does, with a notice); otherwise it is only offered (`offeredCenterline`) for the draw tool.
+   */
+  useStationCenterline?: boolean;
   /** River discharge [m³/s] for all surveys, or by survey name. */
   dischargeM3s?: number | Readonly<Record<string, number>>;
   /** Progress of reading, fraction 0…1 over all files. */
@@ -51,6 +62,10 @@ export interface InputFileReport {
   summary?: ImportSummary;
   /** The mapping used (delimited text and station tables). */
   mapping?: ColumnMapping;
+  /** Constituent columns without a usable unit, with the option that supplies it. */
+  missingUnits?: MissingUnit[];
+  /** Numeric columns neither used nor reported as errors, with the reason. */
+  notUsed?: UnusedColumn[];
 }
 
 /** Everything readInputs produces: surveys, the channel, what each file was, and every problem. */
@@ -63,6 +78,10 @@ export interface WorkspaceInputs {
   issues: ImportIssue[];
   /** Rows read, accepted and rejected over all survey files. */
   summary: ImportSummary;
+  /** Choices made for the user (layer, centerline from stations, distances from the mouth), to state. */
+  notices: Array<{ code: string; message: string }>;
+  /** Without a centerline file: a centerline built from the station positions, to offer in the draw tool. */
+  offeredCenterline?: StationCenterline;
   /** The choices that apply to the analysis (callbacks removed). */
   choices: Omit<InputChoices, "onProgress">;
 }

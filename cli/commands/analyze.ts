@@ -3,7 +3,7 @@ import type { SurveyAnalysis } from "../../analysis/index.ts";
 import { analyzeInputs, resultRows, tableCsv, RESULT_COLUMNS, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { UsageError } from "../exitCodes.ts";
 import { checkOut, writeOut } from "../files.ts";
-import { INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings } from "../options.ts";
+import { CHOICE_HELP, INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings } from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
 
 const help = `brackline analyze <survey files...> [options]
@@ -21,7 +21,12 @@ Options:
                                station salinity; the choice is stated on stderr and in the warnings)
   --stations <table.csv>       station table joined to the measurements by station id
   --mapping <mapping.json>     a saved column mapping (as exported by the dashboard)
-  --layer surface|bottom|average|<min>-<max>  depth layer per station (default: every row)
+  --layer shallowest|surface|bottom|average|all|<min>-<max>
+                               one value per station and survey from several depths (default for
+                               depth-resolved files: each constituent from the shallowest sample
+                               that has it, with that sample's salinity)
+  --centerline-out <file>      without --centerline: write the centerline built from the stations
+${CHOICE_HELP}
   --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name
   --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
@@ -44,6 +49,9 @@ export function surveyJson(
     ...facts,
     stations: a.stations,
     constituents: a.constituents,
+    variables: a.variables ?? [],
+    offChannelStations: a.offChannelStations ?? [],
+    offChannel: a.offChannel ?? null,
     warnings: a.warnings,
   };
 }
@@ -53,7 +61,7 @@ export const analyzeCommand: Command = {
   summary: "analyse surveys: stations along the channel and mixing behaviour of every constituent",
   help,
   async run(args, io) {
-    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "format", "out"]);
+    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "format", "out", "centerline-out"]);
     const format = parseFormat(values.format);
     const settings = workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
@@ -62,6 +70,8 @@ export const analyzeCommand: Command = {
     for (const [i, s] of inputs.surveys.entries())
       io.err(`analysing survey ${i + 1}/${inputs.surveys.length}: ${s.name} (${s.stations.length} stations)`);
     const results = analyzeInputs(inputs, settings);
+    if (values["centerline-out"] !== undefined && inputs.offeredCenterline && values.centerline === undefined)
+      writeOut(values["centerline-out"], `${JSON.stringify(inputs.offeredCenterline, null, 2)}\n`);
     const analyses = results.surveys.map((s) => s.analysis);
     let text: string;
     if (format === "csv") text = tableCsv(RESULT_COLUMNS, resultRows(analyses));
@@ -78,6 +88,8 @@ export const analyzeCommand: Command = {
             ...(f.summary ? { summary: f.summary } : {}),
           })),
           issues: inputs.issues,
+          notUsed: inputs.files.flatMap((f) => (f.notUsed ?? []).map((u) => ({ file: f.file, ...u }))),
+          notices: inputs.notices,
         },
         ...(surveys.length === 1 ? { stations: surveys[0]!.stations, constituents: surveys[0]!.constituents } : {}),
         surveys,

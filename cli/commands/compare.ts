@@ -5,7 +5,14 @@ import type { ProvenanceFile, SurveyAnalysis, WorkspaceInputs, WorkspaceResults 
 import { analyzeInputs, comparisonToCsv, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { checkOut, readBytes, writeOut } from "../files.ts";
-import { INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings, type OptionValues } from "../options.ts";
+import {
+  INPUT_OPTIONS,
+  parseCommandLine,
+  parseFormat,
+  workspaceSettings,
+  type OptionValues,
+  CHOICE_HELP,
+} from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
 
 /** Size and SHA-256 of a file, for the briefing's provenance. */
@@ -61,7 +68,8 @@ Options:
   --mouth start|end|lon,lat    which end of the main stem is the mouth (default: a "mouth" point in the file)
   --stations <table.csv>       station table joined by station id
   --mapping <mapping.json>     a saved column mapping
-  --layer surface|bottom|average|<min>-<max>  depth layer per station (default: every row)
+  --layer shallowest|surface|bottom|average|all|<min>-<max>  one value per station and survey
+${CHOICE_HELP}
   --discharge <Q | name=Q,...> river discharge [m³/s] per survey name (needed for the exponent and fluxes)
   --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output

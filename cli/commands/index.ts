@@ -39,4 +39,9 @@ export const commands: CommandEntry[] = [
     summary: "bin an underway (flow-through) log along the channel or in salinity classes",
     load: async () => (await import("./underway.ts")).underwayCommand,
   },
+  {
+    name: "mapping",
+    summary: "print the suggested column mapping of survey files (JSON, for editing and --mapping)",
+    load: async () => (await import("./mapping.ts")).mappingCommand,
+  },
 ];

@@ -3,7 +3,7 @@ import type { ProvenanceFile } from "../../analysis/index.ts";
 import { buildBriefing, renderBriefingHtml, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { checkOut, readBytes, writeOut } from "../files.ts";
-import { INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
+import { CHOICE_HELP, INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
 import { analyzeFiles, provenanceOf } from "./compare.ts";
 
 /** A map file read for the briefing, with its provenance. */
@@ -49,7 +49,9 @@ Options:
                                for identical input and seed)
   --mouth start|end|lon,lat    which end of the main stem is the mouth (default: a "mouth" point in the file)
   --stations <table.csv>       station table joined by station id
-  --mapping <mapping.json>     a saved column mapping
+  --mapping <mapping.json>     a saved column mapping (a partial one is merged with the suggestion)
+  --layer shallowest|surface|bottom|average|all|<min>-<max>  one value per station and survey
+${CHOICE_HELP}
   --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name (for fluxes)
   --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1)

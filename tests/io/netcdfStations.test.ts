@@ -115,7 +115,7 @@ function profileFile(): Uint8Array {
 
 describe("readNetcdfStations (CF-netCDF, fixture written by a netCDF-3 classic writer)", () => {
   it("readNetcdfStations() reads a CF profile file: standard_name roles, CF time, fill values as missing, constituents with units", () => {
-    const r = readNetcdfStations(profileFile(), { fileName: "profiles.nc" });
+    const r = readNetcdfStations(profileFile(), { fileName: "profiles.nc", layer: { kind: "all" } });
     expect(r.summary.rowsRead).toBe(6);
     expect(r.summary.rowsAccepted).toBe(6);
     const st = r.surveys.flatMap((s) => s.stations);

@@ -59,7 +59,12 @@ describe.skipIf(text === undefined)(
           c.header === "POC_uM" || c.header === "PN_uM" ? { ...c, unit: "µg/L" } : c,
         ),
       };
-      const all = readSurveyText(text ?? "", { fileName: "NRE_Stats.csv", mapping, grouping: { by: "date" } });
+      const all = readSurveyText(text ?? "", {
+        fileName: "NRE_Stats.csv",
+        mapping,
+        grouping: { by: "date" },
+        layer: { kind: "all" },
+      });
       expect(all.issues.some((i) => i.expected.includes("check the column unit"))).toBe(false);
       const rows = all.surveys.flatMap((s) => s.stations);
       expect(rows.filter((r) => r.salinity.status === "missing").length).toBe(13);

@@ -28,7 +28,7 @@ describe("station table join and layer selection", () => {
   });
 
   it("readSurveyText() with a station table joins by normalised id, reports leading zeros and case once per id, and unknown ids once", () => {
-    const r = readSurveyText(profiles, { fileName: "profiles.csv", stationTable: table });
+    const r = readSurveyText(profiles, { fileName: "profiles.csv", stationTable: table, layer: { kind: "all" } });
     const st = r.surveys.flatMap((s) => s.stations);
     expectWithin(st[0].lonLat?.[1], 45.1, 1e-12, "station 7 ← table 007");
     expectWithin(st[3].lonLat?.[0], -1.4, 1e-12, "station 'b2 ' ← table B2");

@@ -1,0 +1,182 @@
+import type { ColumnAssignment, ColumnMapping } from "./columnMapping.ts";
+import { columnMappingSchema, columnAssignmentSchema } from "./columnMapping.ts";
+import { parseDelimitedText } from "./delimitedRecords.ts";
+import { detectDialect, stripBom } from "./dialect.ts";
+import { suggestMapping } from "./suggestMapping.ts";
+import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
+import { z } from "zod";
+
+/** Headers and the first data rows of a delimited text (enough to suggest a mapping). */
+export function headOfText(text: string, rows = 50): { headers: string[]; sample: string[][] } {
+  const clean = stripBom(text);
+  const cut = clean.slice(0, 262144);
+  const records: string[][] = [];
+  parseDelimitedText(cut.slice(0, cut.lastIndexOf("\n") + 1 || cut.length), detectDialect(cut.slice(0, 65536)), (r) => {
+    if (records.length <= rows) records.push(r.fields);
+  });
+  return { headers: (records[0] ?? []).map((h) => h.trim()), sample: records.slice(1) };
+}
+
+/** The suggested mapping of a delimited text (as `brackline mapping` prints it for editing). */
+export function suggestMappingForText(text: string): ColumnMapping {
+  const { headers, sample } = headOfText(text);
+  return suggestMapping(headers, sample);
+}
+
+/** A user's unit for a column: `--unit "Silicate=µmol/L"`. */
+export interface UnitOverride {
+  /** Header, header name without unit, or constituent symbol (case-insensitive). */
+  column: string;
+  unit: string;
+}
+
+/**
+ * Reads `Column=unit` (the text of one `--unit` option).
+ *
+ * @param text e.g. "Silicate=µmol/L", "Nitrate_+_Nitrite=umol/L"
+ * @returns the override, or a message saying what is wrong
+ */
+export function parseUnitOverride(text: string): UnitOverride | { error: string } {
+  const i = text.lastIndexOf("=");
+  if (i <= 0 || i === text.length - 1)
+    return { error: `--unit: expected "<column>=<unit>", e.g. --unit "Silicate=µmol/L"; got "${text}"` };
+  const column = text.slice(0, i).trim();
+  const unit = text.slice(i + 1).trim();
+  if (canonicalUnitText(unit) === undefined)
+    return {
+      error: `--unit: "${unit}" is not a unit Brackline knows (e.g. µmol/L, nmol/L, µg/L, mg/L, nmol/kg); got "${text}"`,
+    };
+  return { column, unit };
+}
+
+const norm = (s: string): string => s.trim().toLowerCase();
+
+function matches(c: ColumnAssignment, column: string): boolean {
+  const k = norm(column);
+  return norm(c.header) === k || (c.name !== undefined && norm(c.name) === k);
+}
+
+/**
+ * Applies the user's units to a mapping. A unit given for an unrecognised column makes it a
+ * constituent named by its header.
+ *
+ * @param mapping the mapping
+ * @param overrides the units
+ * @returns the new mapping and the overrides that matched no column
+ */
+export function applyUnitOverrides(
+  mapping: ColumnMapping,
+  overrides: readonly UnitOverride[],
+): { mapping: ColumnMapping; unmatched: UnitOverride[] } {
+  const used = new Set<UnitOverride>();
+  const columns = mapping.columns.map((c) => {
+    const o = overrides.find((x) => matches(c, x.column));
+    if (o === undefined) return c;
+    used.add(o);
+    const unit = concentrationUnitText(o.unit) ?? canonicalUnitText(o.unit) ?? o.unit;
+    if (c.role === "ignore")
+      return { ...c, role: "constituent" as const, name: c.header, unit, reason: `unit ${unit} given by the user` };
+    return { ...c, unit, reason: `${c.reason ?? c.role}; unit ${unit} given by the user` };
+  });
+  return { mapping: { ...mapping, columns }, unmatched: overrides.filter((o) => !used.has(o)) };
+}
+
+/** The usual unit of a constituent, for the example in a message (never applied without the user). */
+function usualUnit(symbol: string): string {
+  return /^(Si|NO3|NO2|NO3\+NO2|NH4|PO4|DIN|DOC|DON|DOP|DIC|TA)\b/.test(symbol) ? "µmol/L" : "nmol/L";
+}
+
+/** A constituent column the mapping cannot read for want of a unit. */
+export interface MissingUnit {
+  header: string;
+  name: string;
+  kind: "tracer" | "nonMixing";
+  /** The option that supplies it, e.g. `--unit "Silicate=µmol/L"` (check the unit in the data source). */
+  option: string;
+}
+
+/**
+ * Lists the constituent columns without a usable unit.
+ *
+ * @param mapping the mapping (suggested, merged or with overrides applied)
+ * @returns one entry per such column
+ */
+export function missingUnits(mapping: ColumnMapping): MissingUnit[] {
+  return mapping.columns
+    .filter((c) => c.role === "constituent")
+    .filter((c) => c.unit === undefined || (c.kind !== "nonMixing" && concentrationUnitText(c.unit) === undefined))
+    .map((c) => ({
+      header: c.header,
+      name: c.name ?? c.header,
+      kind: c.kind ?? "tracer",
+      option: `--unit "${c.header}=${c.kind === "nonMixing" ? "<unit>" : usualUnit(c.name ?? "")}"`,
+    }));
+}
+
+/** A mapping file as users write it: `shape` and column `role`s may be left out (merged with the suggestion). */
+export const partialMappingSchema = columnMappingSchema.extend({
+  shape: z.string().optional(),
+  columns: z.array(columnAssignmentSchema.partial({ role: true })),
+});
+
+/**
+ * Merges a user's (possibly partial) mapping file with the suggestion for a file: columns named in
+ * the user's mapping take its fields over the suggestion's; every other column keeps the suggestion
+ * (nothing is dropped because the user named only some columns); columns of other files are skipped.
+ *
+ * @param user the parsed JSON of the mapping file
+ * @param suggested the suggestion for this file
+ * @returns the merged mapping, or the problems that make the mapping file unusable (field path and message)
+ */
+export function mergeMapping(
+  user: unknown,
+  suggested: ColumnMapping,
+): { mapping: ColumnMapping } | { errors: string[] } {
+  const parsed = partialMappingSchema.safeParse(user);
+  if (!parsed.success)
+    return {
+      errors: parsed.error.issues.map((i) => `${i.path.length > 0 ? i.path.join(".") : "(top level)"}: ${i.message}`),
+    };
+  const u = parsed.data;
+  const columns = suggested.columns.map((c) => {
+    const mine = u.columns.find((x) => x.header !== undefined && norm(x.header) === norm(c.header));
+    return mine === undefined ? c : ({ ...c, ...mine, header: c.header } as ColumnAssignment);
+  });
+  const { columns: _ignored, shape: _shape, ...top } = u;
+  return { mapping: { ...suggested, ...top, shape: suggested.shape, columns } };
+}
+
+/** A numeric column that will not be used, and why. */
+export interface UnusedColumn {
+  header: string;
+  reason: string;
+}
+
+/**
+ * Lists the numeric columns that are neither used nor reported as errors, with the reason.
+ *
+ * @param mapping the mapping that will be applied
+ * @param sample the first data rows (cell text in header order)
+ * @param headers the headers
+ * @returns one entry per unused column whose sample cells are mostly numbers
+ */
+export function unusedColumns(
+  mapping: ColumnMapping,
+  headers: readonly string[],
+  sample: readonly (readonly string[])[],
+): UnusedColumn[] {
+  const out: UnusedColumn[] = [];
+  headers.forEach((h, i) => {
+    const c = mapping.columns.find((x) => norm(x.header) === norm(h));
+    if (c !== undefined && c.role !== "ignore") return;
+    const cells = sample.map((r) => (r[i] ?? "").trim()).filter((x) => x !== "" && x.toUpperCase() !== "NA");
+    const numeric = cells.filter((x) => Number.isFinite(Number(x.replace(",", "."))));
+    if (cells.length === 0 || numeric.length < cells.length / 2) return;
+    const why = c?.reason ?? "not in the mapping";
+    out.push({
+      header: h,
+      reason: `${why === "not recognised" ? "not a recognised constituent or column role" : why}; to use it, give it a role in the mapping (brackline mapping prints one) or a unit (--unit "${h}=<unit>")`,
+    });
+  });
+  return out;
+}
