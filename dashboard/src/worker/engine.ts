@@ -60,7 +60,15 @@ export function readChannel(
 /** Inputs from surveys already read (an import or a restored workspace) and a centerline file. */
 export function inputsOf(surveys: Survey[], centerline: TextFile | undefined): WorkspaceInputs {
   const { channel, issues } = readChannel(centerline, surveys);
-  return { surveys, ...(channel ? { channel } : {}), files: [], issues, summary: emptySummary(), choices: {} };
+  return {
+    surveys,
+    ...(channel ? { channel } : {}),
+    files: [],
+    issues,
+    summary: emptySummary(),
+    choices: {},
+    notices: [],
+  };
 }
 
 /** Per-constituent settings for analyzeInputs from the dashboard's settings. */
