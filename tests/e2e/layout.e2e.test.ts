@@ -60,7 +60,9 @@ function overlaps(boxes: LabelBox[], slackPx = 0.5): string[] {
 async function layoutFacts(page: Page): Promise<{ pageOverflowPx: number; escapes: string[]; headerPx: number }> {
   return page.evaluate(() => {
     const escapes: string[] = [];
-    const regions = [...document.querySelectorAll<HTMLElement>(".panel, .map-area, header.bar, #data-panel")];
+    const regions = [
+      ...document.querySelectorAll<HTMLElement>(".panel, .map-area, header.bar, #data-panel, #data-panel .details > *"),
+    ];
     for (const region of regions) {
       if (region.offsetParent === null && getComputedStyle(region).position !== "fixed") continue;
       const r = region.getBoundingClientRect();
