@@ -5,6 +5,7 @@ import { underwayImportBench } from "./underwayImport.ts";
 import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
+import { archiveBench } from "./archive.ts";
 import { wideHeaderBench } from "./wideHeader.ts";
 import { cliStartBench } from "./cliStart.ts";
 import { dashboardUnderwayBench } from "./dashboardUnderway.ts";
@@ -19,5 +20,6 @@ export const benchCases: BenchCase[] = [
   dashboardBench,
   dashboardUnderwayBench,
   bundleSizeBench,
+  archiveBench,
   cliStartBench,
 ];

@@ -65,9 +65,9 @@ export function inputsOf(surveys: Survey[], centerline: TextFile | undefined): W
     ...(channel ? { channel } : {}),
     files: [],
     issues,
+    notices: [],
     summary: emptySummary(),
     choices: {},
-    notices: [],
   };
 }
 
