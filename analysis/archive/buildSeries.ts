@@ -2,6 +2,7 @@
  * Series points from per-survey analyses: one point per survey and constituent, one
  * salt-intrusion point per survey, and month/season summaries of them.
  */
+import { maxOf, minOf } from "../survey/arrayExtent.ts";
 import type { ComparableSurvey } from "../compare/types.ts";
 import type { MixingWarning } from "../mixing/result.ts";
 import { spreadOf } from "./groupStats.ts";
@@ -84,9 +85,9 @@ export function buildSeriesPoints(
         confidence: c.confidence,
         ...(c.percentChange ? { percentChange: c.percentChange } : {}),
         ...(c.effectiveEndmember && sameUnit ? { effectiveEndmember: c.effectiveEndmember } : {}),
-        ...(ends.length ? { reactionZoneKm: [Math.min(...ends), Math.max(...ends)] as [number, number] } : {}),
+        ...(ends.length ? { reactionZoneKm: [minOf(ends), maxOf(ends)] as [number, number] } : {}),
         ...(z ? { reactionZoneSalinity: z.salinity, reactionZoneKind: z.kind } : {}),
-        ...(c.maximum && c.maximum.km.length ? { maximumKm: Math.max(...c.maximum.km) } : {}),
+        ...(c.maximum && c.maximum.km.length ? { maximumKm: maxOf(c.maximum.km) } : {}),
         ...(c.maximum ? { maximumSalinity: c.maximum.salinity } : {}),
       });
     }
@@ -113,7 +114,7 @@ function intrusionBound(
   if (a.survey.saltIntrusionKm !== undefined || !p || p.km.length === 0) return {};
   const last = p.salinity[p.salinity.length - 1]!;
   if (last > isohaline) return { saltIntrusionAtLeastKm: p.km[p.km.length - 1]! };
-  if (Math.max(...p.salinity) < isohaline) return { saltIntrusionAtMostKm: p.km[0]! };
+  if (maxOf(p.salinity) < isohaline) return { saltIntrusionAtMostKm: p.km[0]! };
   return {};
 }
 

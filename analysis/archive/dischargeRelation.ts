@@ -3,6 +3,7 @@
  * plus Spearman and Kendall rank correlations, and a plain statement when the slope's interval
  * excludes zero.
  */
+import { maxOf, minOf } from "../survey/arrayExtent.ts";
 import { formatSignificant } from "../output/formatNumber.ts";
 import { fitLine, lineBandAt } from "./linearFit.ts";
 import { kendallTauB, spearmanRank } from "./rankCorrelation.ts";
@@ -41,7 +42,7 @@ export function dischargeRelation(
   const qs = points.map((p) => p.dischargeM3s);
   const x = qs.map(Math.log10);
   const y = points.map((p) => p.value);
-  const range: [number, number] = qs.length ? [Math.min(...qs), Math.max(...qs)] : [0, 0];
+  const range: [number, number] = qs.length ? [minOf(qs), maxOf(qs)] : [0, 0];
   const fit = fitLine(x, y);
   const spearman = spearmanRank(x, y);
   const kendall = kendallTauB(x, y);
