@@ -1,0 +1,120 @@
+import { existsSync } from "node:fs";
+import { readFile } from "node:fs/promises";
+import { join } from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import {
+  missingBrowserMessage,
+  openDashboard,
+  REPO_ROOT,
+  screenshot,
+  settle,
+  skipBrowser,
+  waitForAnalysis,
+  waitForMap,
+  type Session,
+} from "./browser.ts";
+
+// The raw 2018 cruise export of the USGS San Francisco Bay water-quality program and its station table
+// (Schraga & Cloern, 2017, Sci. Data 4:170098; ../shared/data/usgs-sfbay-2016-2022/SOURCE.md), read at
+// test time, never copied into the repository.
+const BAY_DIR = join(REPO_ROOT, "..", "shared", "data", "usgs-sfbay-2016-2022");
+const CRUISE = "2018SanFranciscoBayWaterQualityData.csv";
+const STATIONS = "USGSSFBayStations_from_xlsx.csv";
+const present = existsSync(join(BAY_DIR, CRUISE)) && existsSync(join(BAY_DIR, STATIONS));
+if (!present) console.warn(`realData.e2e: skipped, ${BAY_DIR} is absent`);
+
+/** The nutrient columns whose headers carry no unit: µmol/L, as printed in the 2020–2022 headers (SOURCE.md). */
+const UNITLESS = ["Silicate", "Nitrate_+_Nitrite", "Phosphate", "Ammonium", "Nitrite"];
+
+/** Demo station ids and survey names (invented, data-demo/). */
+const DEMO_SURVEYS = ["wet-2025-03", "dry-2025-09"];
+
+async function fileInput(name: string) {
+  return { name, mimeType: "text/csv", buffer: await readFile(join(BAY_DIR, name)) };
+}
+
+describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise export through the dashboard", () => {
+  let s: Session;
+
+  beforeAll(async () => {
+    const missing = missingBrowserMessage();
+    if (missing) throw new Error(missing);
+    s = await openDashboard();
+    await waitForMap(s.page);
+    await waitForAnalysis(s.page);
+    await settle(s.page);
+  }, 120_000);
+
+  afterAll(async () => {
+    await s?.close();
+  });
+
+  it("importing the cruise file with its station table asks for the unit-less nutrients' units", async () => {
+    await expect(s.page.locator('[data-testid="demo-banner"]').count()).resolves.toBe(1);
+    await s.page
+      .locator('[data-testid="import-input"]')
+      .setInputFiles([await fileInput(CRUISE), await fileInput(STATIONS)]);
+    const dialog = s.page.locator('[data-testid="mapping-dialog"][open]');
+    await dialog.waitFor({ timeout: 60_000 });
+    for (const header of UNITLESS) {
+      const unit = dialog.locator(`tr[data-header="${header}"] input[aria-label^="Unit"]`);
+      if ((await unit.count()) === 0) continue;
+      if ((await unit.inputValue()).trim() === "") await unit.fill("µmol/L");
+    }
+    await screenshot(s.page, "realdata-1-mapping-dialog");
+    await dialog.locator('[data-testid="mapping-confirm"]').click();
+    await s.page.locator('[data-testid="import-report"]').waitFor({ timeout: 60_000 });
+  }, 120_000);
+
+  it("the demo leaves: no banner, no demo surveys; the 2018 cruises are the surveys", async () => {
+    await s.page.waitForFunction(
+      (demo) => {
+        const el = document.querySelector('[data-testid="survey-select"]') as HTMLSelectElement | null;
+        const names = [...(el?.options ?? [])].map((o) => o.text);
+        return names.length > 3 && !names.some((n) => demo.includes(n));
+      },
+      DEMO_SURVEYS,
+      { timeout: 90_000 },
+    );
+    await waitForAnalysis(s.page);
+    await expect(s.page.locator('[data-testid="demo-banner"]').count()).resolves.toBe(0);
+    const names = await s.page
+      .locator('[data-testid="survey-select"] option')
+      .evaluateAll((els) => els.map((e) => e.textContent ?? ""));
+    console.log(`realData.e2e: ${names.length} surveys: ${names.slice(0, 4).join(", ")} …`);
+    expect(names.some((n) => DEMO_SURVEYS.includes(n))).toBe(false);
+  }, 120_000);
+
+  it("a winter transect shows a silicate mixing plot, and the map is zoomed to the bay", async () => {
+    const names = await s.page
+      .locator('[data-testid="survey-select"] option')
+      .evaluateAll((els) => els.map((e) => (e as HTMLOptionElement).value + "\t" + (e.textContent ?? "")));
+    const winter = names.find((n) => /2018-0?[12]-|Jan|Feb|2018-01|2018-02/.test(n)) ?? names[0]!;
+    await s.page.locator('[data-testid="survey-select"]').selectOption(winter.split("\t")[0]!);
+    await waitForAnalysis(s.page);
+    const constituents = await s.page
+      .locator('[data-testid="constituent-select"] option')
+      .evaluateAll((els) => els.map((e) => (e as HTMLOptionElement).value));
+    expect(constituents).toContain("Silicate");
+    await s.page.locator('[data-testid="constituent-select"]').selectOption("Silicate");
+    await waitForAnalysis(s.page);
+    await settle(s.page);
+    const plot = s.page.locator("figure.mixing-plot svg title", { hasText: /Silicate/i });
+    await plot.first().waitFor({ state: "attached" });
+    const points = await s.page.locator("figure.mixing-plot svg [aria-label]").count();
+    console.log(`realData.e2e: winter survey ${winter.split("\t")[1]}: ${points} labelled points in the mixing plot`);
+    expect(points).toBeGreaterThan(5);
+    // The map is framed on the bay (about 122.5–121.7 °W, 37.4–38.2 °N), not the invented estuary.
+    const centre = await s.page.evaluate(
+      () =>
+        (window as unknown as { __brackline?: { mapCenter?(): [number, number] } }).__brackline?.mapCenter?.() ?? null,
+    );
+    if (centre) {
+      expect(centre[0]).toBeGreaterThan(-123);
+      expect(centre[0]).toBeLessThan(-121.5);
+      expect(centre[1]).toBeGreaterThan(37.2);
+      expect(centre[1]).toBeLessThan(38.4);
+    }
+    await screenshot(s.page, "realdata-2-winter-silicate");
+  }, 120_000);
+});
