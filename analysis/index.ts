@@ -388,6 +388,7 @@ export { stripControl } from "./output/terminalText.ts";
 
 // --- workspace ---
 export { readInputs } from "./workspace/readInputs.ts";
+export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
 export {
   analyzeInputs,
   type WorkspaceSettings,

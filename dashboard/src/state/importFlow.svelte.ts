@@ -3,7 +3,14 @@
  * column mapping of a delimited file is confirmed in the dialog (or a saved one reused by file
  * shape), and what was read is handed to the saved workspace. Keeps the last import's report.
  */
-import { findSavedMapping, type ColumnMapping, type StationTable } from "../../../analysis/index.ts";
+import {
+  findSavedMapping,
+  missingUnits,
+  unusedColumns,
+  type ColumnMapping,
+  type LayerChoice,
+  type StationTable,
+} from "../../../analysis/index.ts";
 import { proxyCallback, type RemoteApi } from "../worker/client.ts";
 import type { FileInspection, FileOutcome, ImportSource } from "../worker/importTypes.ts";
 import type { SavedWorkspace } from "./savedWorkspace.svelte.ts";
@@ -46,6 +53,8 @@ export class ImportFlow {
   question = $state.raw<MappingQuestion | null>(null);
   report = $state.raw<ReportEntry[]>([]);
   progress = $state<{ stage: string; fraction: number } | null>(null);
+  /** Depth layer kept from depth-resolved files (undefined: the reader's default, the shallowest sample). */
+  layer = $state.raw<LayerChoice | undefined>(undefined);
 
   constructor(
     readonly workspace: SavedWorkspace,
@@ -101,9 +110,24 @@ export class ImportFlow {
           ? unrecognised(inspection)
           : await reader.read(
               file,
-              { kind: inspection.kind, ...(mapping ? { mapping } : {}), ...(stationTable ? { stationTable } : {}) },
+              {
+                kind: inspection.kind,
+                ...(mapping ? { mapping } : {}),
+                ...(stationTable ? { stationTable } : {}),
+                ...(this.layer ? { layer: $state.snapshot(this.layer) as LayerChoice } : {}),
+              },
               proxyCallback(this.#onProgress),
             );
+      if (inspection.kind === "surveyText" && outcome.mapping) {
+        const used = outcome.mapping;
+        outcome.notUsed = [
+          ...unusedColumns(used, inspection.headers, inspection.previewRows),
+          ...missingUnits(used).map((m) => ({
+            header: m.header,
+            reason: "no unit given (a unit typed in the column dialog makes it usable)",
+          })),
+        ];
+      }
       if (outcome.stationTable) stationTable = outcome.stationTable;
       entries.push({ outcome, ...(reusedFrom ? { reusedFrom } : {}) });
     }

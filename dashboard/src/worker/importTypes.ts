@@ -7,9 +7,11 @@ import type {
   ColumnMapping,
   ImportIssue,
   ImportSummary,
+  LayerChoice,
   StationTable,
   Survey,
   TextDialect,
+  UnusedColumn,
 } from "../../../analysis/index.ts";
 
 /** A file to import: a browser File (streamed in the worker) or text already in memory. */
@@ -55,4 +57,8 @@ export interface FileOutcome {
   centerline?: object;
   /** Station table (kind "stationTable"). */
   stationTable?: StationTable;
+  /** The depth layer kept (surveys): the chosen one, else the reader's default for the file. */
+  layer?: LayerChoice;
+  /** Numeric columns that were not used (no unit, not recognised, not a mixing tracer...), with the reason. */
+  notUsed?: UnusedColumn[];
 }
