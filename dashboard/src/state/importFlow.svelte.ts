@@ -76,8 +76,11 @@ export class ImportFlow {
     });
   }
 
+  /** True while files are being read; progress callbacks arriving after the read (another port) are dropped. */
+  #reading = false;
+
   #onProgress = (fraction: number, stage: string): void => {
-    this.progress = { stage, fraction };
+    if (this.#reading) this.progress = { stage, fraction };
   };
 
   /** Imports dropped or picked files: recognise, confirm mappings, read, add the surveys. */
@@ -108,15 +111,17 @@ export class ImportFlow {
       const outcome =
         inspection.kind === "unknown"
           ? unrecognised(inspection)
-          : await reader.read(
-              file,
-              {
-                kind: inspection.kind,
-                ...(mapping ? { mapping } : {}),
-                ...(stationTable ? { stationTable } : {}),
-                ...(this.layer ? { layer: $state.snapshot(this.layer) as LayerChoice } : {}),
-              },
-              proxyCallback(this.#onProgress),
+          : await this.#read(() =>
+              reader.read(
+                file,
+                {
+                  kind: inspection.kind,
+                  ...(mapping ? { mapping } : {}),
+                  ...(stationTable ? { stationTable } : {}),
+                  ...(this.layer ? { layer: $state.snapshot(this.layer) as LayerChoice } : {}),
+                },
+                proxyCallback(this.#onProgress),
+              ),
             );
       if (inspection.kind === "surveyText" && outcome.mapping) {
         const used = outcome.mapping;
@@ -133,6 +138,15 @@ export class ImportFlow {
     }
     this.progress = null;
     this.#finish(entries);
+  }
+
+  async #read<T>(call: () => Promise<T>): Promise<T> {
+    this.#reading = true;
+    try {
+      return await call();
+    } finally {
+      this.#reading = false;
+    }
   }
 
   #finish(entries: ReportEntry[]): void {
