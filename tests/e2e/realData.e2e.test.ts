@@ -64,6 +64,9 @@ describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise expor
     await screenshot(s.page, "realdata-1-mapping-dialog");
     await dialog.locator('[data-testid="mapping-confirm"]').click();
     await s.page.locator('[data-testid="import-report"]').waitFor({ timeout: 60_000 });
+    const notUsed = (await s.page.locator('[data-testid="not-used"]').first().textContent()) ?? "";
+    console.log(`realData.e2e: not used: ${notUsed.replace(/\s+/g, " ").slice(0, 400)}`);
+    expect(notUsed).toMatch(/Oxygen/);
     await screenshot(s.page, "realdata-2-import-report");
     await s.page.locator('[data-testid="data-toggle"]').click();
   }, 120_000);
@@ -119,6 +122,40 @@ describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise expor
       expect(centre[1]).toBeGreaterThan(37.2);
       expect(centre[1]).toBeLessThan(38.4);
     }
+    const row =
+      (await s.page
+        .locator("table tr", { hasText: /^\s*Si\b/ })
+        .first()
+        .textContent()) ?? "";
+    console.log(`realData.e2e: behaviour row: ${row.replace(/\s+/g, " ")}`);
     await screenshot(s.page, "realdata-3-winter-silicate");
+  }, 120_000);
+
+  it("without a centerline the one built from the stations is offered; using it draws a channel with km", async () => {
+    const offer = s.page.locator('[data-testid="use-offered-centerline"]');
+    await offer.waitFor();
+    await offer.click();
+    await waitForAnalysis(s.page);
+    await s.page.waitForSelector('[data-testid="offered-centerline"]', { state: "detached" });
+    await settle(s.page);
+    const notes =
+      (await s.page
+        .locator('[data-testid="channel-notices"]')
+        .textContent()
+        .catch(() => "")) ?? "";
+    console.log(`realData.e2e: channel notices: ${notes.replace(/\s+/g, " ").slice(0, 400)}`);
+    await screenshot(s.page, "realdata-4-station-centerline");
+  }, 120_000);
+
+  it("Compare uses the two surveys chosen in the survey picker", async () => {
+    await s.page.locator('[data-testid="survey-picker"] summary').click();
+    await s.page.locator('[data-testid="survey-picker"] select').selectOption(["2018-01-10", "2018-02-07"]);
+    await s.page.locator('[data-testid="survey-picker"] summary').click();
+    await s.page.getByRole("button", { name: "Compare surveys" }).click();
+    const heading = (await s.page.locator('[data-testid="compare-view"] h2').first().textContent()) ?? "";
+    expect(heading).toBe("Compare surveys: 2018-01-10 and 2018-02-07");
+    await settle(s.page);
+    await screenshot(s.page, "realdata-5-compare");
+    expect(s.errors).toEqual([]);
   }, 120_000);
 });

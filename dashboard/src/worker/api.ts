@@ -141,8 +141,9 @@ export function createWorkerApi() {
     },
 
     /** The self-contained HTML briefing of the analysed surveys (analysis/report). */
-    async briefing(basemap: unknown, dataNotice: string | undefined): Promise<string> {
-      const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
+    async briefing(basemap: unknown, dataNotice: string | undefined, surveyIndices?: number[]): Promise<string> {
+      const chosen = surveyIndices ? surveyIndices.map((i) => analyses[i]) : analyses;
+      const done = chosen.filter((a): a is AnalysisResult => a !== undefined);
       const provenance = await fileProvenance(files, centerlineFile);
       return briefingHtml(done, inputs.channel?.network, provenance, basemap, dataNotice);
     },
