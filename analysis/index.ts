@@ -360,6 +360,55 @@ export { decimatePoints } from "./underway/decimatePoints.ts";
 export type { DecimateOptions, DecimatedPoints } from "./underway/decimatePoints.ts";
 // --- end underway ---
 
+// --- archive ---
+export type {
+  SeriesPoint,
+  Spread,
+  GroupRow,
+  SeasonTest,
+  DischargeRelation,
+  YearRow,
+  QuantityRelations,
+  ConstituentSeries,
+  IntrusionPoint,
+  ArchiveSummary,
+} from "./archive/types.ts";
+export { summarizeArchive, ARCHIVE_METHODS, type ArchiveOptions } from "./archive/summarizeArchive.ts";
+export { buildSeriesPoints, groupRows, isoDay, zoneCentreKm, type DischargeSource } from "./archive/buildSeries.ts";
+export { quantityRelations, seasonTest, type QuantityPoint } from "./archive/quantityRelations.ts";
+export { dischargeRelation, pWords } from "./archive/dischargeRelation.ts";
+export { yearOnYear, type YearValue } from "./archive/yearOnYear.ts";
+export { spreadOf, kruskalWallis } from "./archive/groupStats.ts";
+export { fitLine, lineBandAt, type LineFit } from "./archive/linearFit.ts";
+export { spearmanRank, kendallTauB, midRanks, type RankCorrelation } from "./archive/rankCorrelation.ts";
+export {
+  parseSeasons,
+  seasonOf,
+  monthOfDate,
+  yearOfDate,
+  DEFAULT_SEASONS,
+  MONTH_LABELS,
+  type Season,
+} from "./archive/seasons.ts";
+export {
+  readDischargeTable,
+  dischargeOnDate,
+  CUBIC_FOOT_M3,
+  type DischargeRow,
+  type DischargeTable,
+  type DischargeLookup,
+} from "./archive/dischargeTable.ts";
+export { archiveTableRows, ARCHIVE_TABLE_COLUMNS, type ArchiveCell } from "./archive/archiveTable.ts";
+export { archiveSection, archiveName, type BriefingArchive } from "./archive/archiveSection.ts";
+export {
+  percentChangeSeriesSvg,
+  channelTimeStripSvg,
+  dischargeScatterSvg,
+  decimalYear,
+  seasonColor,
+} from "./archive/archiveFigures.ts";
+export { ARCHIVE_BIBLIOGRAPHY, ARCHIVE_KEYS } from "./archive/archiveReferences.ts";
+// --- end archive ---
 // --- output ---
 export { toCsv, csvField, csvNumber, neutraliseFormula, type CsvValue } from "./output/csv.ts";
 export {

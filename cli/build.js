@@ -33,7 +33,7 @@ export async function buildCli() {
   const esbuild = await import("esbuild");
   esbuild.buildSync({
     absWorkingDir: ROOT,
-    entryPoints: { main: "cli/main.ts" },
+    entryPoints: { main: "cli/main.ts", surveyWorker: "cli/archive/surveyWorker.ts" },
     outdir: DIST,
     bundle: true,
     splitting: true,

@@ -1,9 +1,9 @@
 import { randomLcg, randomNormal } from "d3-random";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
-import { fitSmoothingSpline } from "../stats/smoothingSpline.ts";
+import { fitPreparedSpline, prepareSmoothingSpline } from "../stats/smoothingSpline.ts";
 import { mergeKnots } from "../stats/knotData.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
-import { fitTwoPhase, seawardLine, twoPhaseAt, twoPhaseMaximum } from "./twoPhase.ts";
+import { fitTwoPhase, seawardLine, twoPhaseAt, twoPhaseDesign, twoPhaseMaximum } from "./twoPhase.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
@@ -92,11 +92,16 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const rhoWork = new Float64Array(G);
   const sr = b.referenceSalinity;
   const sMax = b.x[n - 1]!;
+  // The station design is fixed: its break-search sums are built once for all replicates.
+  const design = twoPhaseDesign(b.x, b.w);
+  // So are the spline's merged knots, weights and λ: its band system is factored once.
+  const knots0 = mergeKnots(b.x, b.yHat, b.w, b.tieTol, ws);
+  const prepared = knots0.n >= 4 ? prepareSmoothingSpline(knots0, b.lambda) : undefined;
   let usable = 0;
   for (let d = 0; d < D; d++) {
     for (let i = 0; i < n; i++) ys[i] = b.yHat[i]! + b.sigmaEff[i]! * z();
     const cs = b.sea.conc + b.sea.sd * z();
-    const fit = fitTwoPhase(b.x, ys, b.w, false);
+    const fit = design && fitTwoPhase(b.x, ys, b.w, false, design);
     if (!fit) continue;
     const [ic, sl] = seawardLine(fit);
     const cr =
@@ -112,9 +117,9 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
       mS[d] = m;
       mX[d] = twoPhaseAt(fit, m)[0] - (cr + ((cs - cr) * (m - sr)) / (b.sea.salinity - sr));
     }
+    if (!prepared) continue;
     const knots = mergeKnots(b.x, ys, b.w, b.tieTol, ws);
-    if (knots.n < 4) continue;
-    const spline = fitSmoothingSpline(knots, b.lambda, splineWs);
+    const spline = fitPreparedSpline(prepared, knots.y, splineWs);
     evaluateSplineGrid(spline, b.grid, f, undefined, d2);
     curves.set(f, d * G);
     const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity);

@@ -1,5 +1,18 @@
 import jStat from "jstat";
 import { fUpperP } from "../stats/distributions.ts";
+import {
+  breakRss,
+  gridTerms,
+  termsRss,
+  TERMS,
+  loadResponse,
+  putNormal,
+  solveNormal,
+  twoPhaseDesign,
+  type TwoPhaseDesign,
+} from "./twoPhaseSearch.ts";
+
+export { twoPhaseDesign, type TwoPhaseDesign } from "./twoPhaseSearch.ts";
 
 /**
  * A continuous two-phase fit of C on S: a straight seaward phase C = a + c·S for S ≥ S_b and a
@@ -30,6 +43,8 @@ export const TWO_PHASE_ALPHA = 0.05;
 const GRID = 24;
 /** Golden-section refinement steps around the best grid break. */
 const REFINE = 12;
+/** Coefficient work array of the fits (single-threaded reuse). */
+const COEF = new Float64Array(4);
 
 /** F critical value at TWO_PHASE_ALPHA cached by degrees of freedom (the bootstrap refits thousands of times). */
 const CRIT = new Map<number, number>();
@@ -44,35 +59,7 @@ function fPCached(F: number, d1: number, d2: number): number {
   return F > c ? 0 : 1;
 }
 
-const M = new Float64Array(20);
-/** Solves the k×k weighted normal equations accumulated in `M` (row-major, augmented) in place. */
-function solve(k: number, out: number[]): boolean {
-  const w = k + 1;
-  for (let col = 0; col < k; col++) {
-    let piv = col;
-    for (let r = col + 1; r < k; r++) if (Math.abs(M[r * w + col]!) > Math.abs(M[piv * w + col]!)) piv = r;
-    const p = M[piv * w + col]!;
-    if (!(Math.abs(p) > 1e-13 * (Math.abs(M[0]!) + 1e-300))) return false;
-    if (piv !== col)
-      for (let j = 0; j < w; j++) {
-        const t = M[col * w + j]!;
-        M[col * w + j] = M[piv * w + j]!;
-        M[piv * w + j] = t;
-      }
-    for (let r = 0; r < k; r++) {
-      if (r === col) continue;
-      const f = M[r * w + col]! / p;
-      if (f !== 0) for (let j = col; j < w; j++) M[r * w + j] = M[r * w + j]! - f * M[col * w + j]!;
-    }
-  }
-  for (let i = 0; i < k; i++) {
-    out[i] = M[i * w + k]! / M[i * w + i]!;
-    if (!Number.isFinite(out[i]!)) return false;
-  }
-  return true;
-}
-
-/** Weighted fit at a fixed break (k = 2 line, 3 with h², 4 with h² and h³); RSS or NaN. */
+/** Weighted fit at a fixed break (k = 2 line, 3 with h², 4 with h² and h³) by direct sums; RSS or NaN. */
 function fitAt(
   x: ArrayLike<number>,
   y: ArrayLike<number>,
@@ -81,11 +68,8 @@ function fitAt(
   range: number,
   b: number,
   k: number,
-  coef: number[],
-  quick = false,
-  shift = 0,
+  coef: Float64Array,
 ): number {
-  // Symmetric normal equations accumulated in scalars (this runs ~10⁵ times per analysis).
   let a00 = 0,
     a01 = 0,
     a02 = 0,
@@ -99,17 +83,15 @@ function fitAt(
   let r0 = 0,
     r1 = 0,
     r2 = 0,
-    r3 = 0,
-    ryy = 0;
+    r3 = 0;
   const inv = 1 / range;
   const n = x.length;
   for (let i = 0; i < n; i++) {
     const wi = w[i]!;
     if (!(wi > 0)) continue;
     const t = (x[i]! - sMin) * inv;
-    const yi = y[i]! - shift;
+    const yi = y[i]!;
     const wt = wi * t;
-    ryy += wi * yi * yi;
     a00 += wi;
     a01 += wt;
     a11 += wt * t;
@@ -133,39 +115,9 @@ function fitAt(
       r3 += w3 * yi;
     }
   }
-  const cols = k + 1;
-  const put = (r: number, c: number, v: number): void => {
-    M[r * cols + c] = v;
-  };
-  put(0, 0, a00);
-  put(0, 1, a01);
-  put(1, 0, a01);
-  put(1, 1, a11);
-  put(0, k, r0);
-  put(1, k, r1);
-  if (k >= 3) {
-    put(0, 2, a02);
-    put(2, 0, a02);
-    put(1, 2, a12);
-    put(2, 1, a12);
-    put(2, 2, a22);
-    put(2, k, r2);
-  }
-  if (k >= 4) {
-    put(0, 3, a03);
-    put(3, 0, a03);
-    put(1, 3, a13);
-    put(3, 1, a13);
-    put(2, 3, a23);
-    put(3, 2, a23);
-    put(3, 3, a33);
-    put(3, k, r3);
-  }
+  putNormal(k, a00, a01, a11, a02, a12, a22, a03, a13, a23, a33, r0, r1, r2, r3);
   coef[0] = coef[1] = coef[2] = coef[3] = 0;
-  if (!solve(k, coef)) return Number.NaN;
-  // Inside the break search: RSS from the normal equations (y centred by `shift`, so the
-  // cancellation is small); the chosen break is refitted with the direct residual sum below.
-  if (quick) return Math.max(0, ryy - coef[0]! * r0 - coef[1]! * r1 - coef[2]! * r2 - coef[3]! * r3);
+  if (!solveNormal(k, coef)) return Number.NaN;
   const c0 = coef[0]!,
     c1 = coef[1]! * inv,
     c2 = coef[2]!,
@@ -175,7 +127,7 @@ function fitAt(
     const wi = w[i]!;
     if (!(wi > 0)) continue;
     const d = b - x[i]!;
-    let e = y[i]! - shift - c0 - c1 * (x[i]! - sMin);
+    let e = y[i]! - c0 - c1 * (x[i]! - sMin);
     if (d > 0) {
       const h = d * inv;
       e -= (c2 + c3 * h) * h * h;
@@ -191,11 +143,15 @@ function fitAt(
  * compared with the straight line by an F-test counting the break as one parameter; the line is
  * kept when p ≥ {@link TWO_PHASE_ALPHA} or its residuals are at rounding level (< 1e-18 of Σw·y²).
  * The landward phase has at least 2 stations below S_b (3 for the cubic term); S_b = S_max means
- * the reaction reaches the mouth and the seaward "line" is the tangent there.
+ * the reaction reaches the mouth and the seaward "line" is the tangent there. The break search
+ * evaluates each candidate in O(log n) from prefix sums ({@link breakRss}); the chosen break is
+ * refitted with direct sums.
  *
  * @param x ascending salinities; y concentrations; w weights 1/σ² (0 drops a point)
  * @param exactP false inside the bootstrap: pCurvature is then only 0 (significant) or 1
+ * @param design the design of x and w from {@link twoPhaseDesign} (the bootstrap builds it once)
  * @returns the fit, or undefined with fewer than 2 distinct salinities
+ * @throws RangeError when the salinities are not ascending
  * @see Hudson, D.J. (1966) JASA 61, 1097–1129 (fitting segmented curves with unknown join points);
  *   Hinkley, D.V. (1969) Biometrika 56, 495–504 (two-phase regression, from memory);
  *   Boyle et al. (1974) GCA 38, 1719–1728 (the seaward tangent).
@@ -205,22 +161,18 @@ export function fitTwoPhase(
   y: ArrayLike<number>,
   w: ArrayLike<number>,
   exactP = true,
+  design?: TwoPhaseDesign,
 ): TwoPhaseFit | undefined {
-  const idx: number[] = [];
-  for (let i = 0; i < x.length; i++) if (w[i]! > 0) idx.push(i);
-  const n = idx.length;
-  if (n < 2) return undefined;
-  const sMin = x[idx[0]!]!;
-  const sMax = x[idx[n - 1]!]!;
-  const range = sMax - sMin;
-  if (!(range > 0)) return undefined;
-  const lin = [0, 0, 0, 0];
-  const rssLin = fitAt(x, y, w, sMin, range, sMin, 2, lin);
+  const ds = design ?? twoPhaseDesign(x, w);
+  if (!ds) return undefined;
+  const { n, xs, sMin, sMax, range } = ds;
+  const c = COEF;
+  const rssLin = fitAt(x, y, w, sMin, range, sMin, 2, c);
   if (!Number.isFinite(rssLin)) return undefined;
   const line: TwoPhaseFit = {
     breakSalinity: sMin,
     linear: true,
-    coef: [lin[0]!, lin[1]!, 0, 0],
+    coef: [c[0]!, c[1]!, 0, 0],
     sMin,
     range,
     rss: rssLin,
@@ -229,36 +181,29 @@ export function fitTwoPhase(
     pCurvature: 1,
   };
   let syy = 0;
-  for (const i of idx) syy += w[i]! * y[i]! * y[i]!;
+  for (let i = 0; i < n; i++) {
+    const yi = y[ds.idx[i]!]!;
+    syy += ds.ws[i]! * yi * yi;
+  }
   if (n < 5 || rssLin <= 1e-18 * syy) return line;
   // Candidate breaks: above the 2nd distinct station (≥ 2 landward), up to S_max.
   let second = sMin;
-  for (const i of idx)
-    if (x[i]! > sMin) {
-      second = x[i]!;
+  for (let i = 0; i < n; i++)
+    if (xs[i]! > sMin) {
+      second = xs[i]!;
       break;
     }
   const lo = second + 1e-9 * range;
-  const third = idx.length >= 3 ? x[idx[2]!]! : Number.POSITIVE_INFINITY;
-  const kOf = (b: number): number => (third < b ? 4 : 3);
-  const c = [0, 0, 0, 0];
-  let sw = 0,
-    swy = 0;
-  for (const i of idx) {
-    sw += w[i]!;
-    swy += w[i]! * y[i]!;
-  }
-  const ybar = swy / sw;
-  const rssAt = (b: number): number => {
-    const r = fitAt(x, y, w, sMin, range, b, kOf(b), c, true, ybar);
-    return Number.isFinite(r) ? r : Number.POSITIVE_INFINITY;
-  };
+  // The cubic term needs a 3rd station landward of the break.
+  const third = xs[2]!;
+  loadResponse(ds, y);
   let bestB = sMax;
   let best = Number.POSITIVE_INFINITY;
   let bestI = 0;
+  const tg = gridTerms(ds, lo, GRID, third);
   for (let g = 0; g <= GRID; g++) {
     const b = lo + ((sMax - lo) * g) / GRID;
-    const r = rssAt(b);
+    const r = termsRss(ds, tg, g * TERMS, c);
     if (r < best) {
       best = r;
       bestB = b;
@@ -272,8 +217,8 @@ export function fitTwoPhase(
   // Golden-section search: one new evaluation per step.
   let m1 = z - gr * (z - a);
   let m2 = a + gr * (z - a);
-  let r1 = rssAt(m1);
-  let r2 = rssAt(m2);
+  let r1 = breakRss(ds, m1, third < m1 ? 4 : 3, c);
+  let r2 = breakRss(ds, m2, third < m2 ? 4 : 3, c);
   for (let it = 0; it < REFINE; it++) {
     if (r1 < best) {
       best = r1;
@@ -288,13 +233,13 @@ export function fitTwoPhase(
       m2 = m1;
       r2 = r1;
       m1 = z - gr * (z - a);
-      r1 = rssAt(m1);
+      r1 = breakRss(ds, m1, third < m1 ? 4 : 3, c);
     } else {
       a = m1;
       m1 = m2;
       r1 = r2;
       m2 = a + gr * (z - a);
-      r2 = rssAt(m2);
+      r2 = breakRss(ds, m2, third < m2 ? 4 : 3, c);
     }
   }
   if (r1 < best) {
@@ -306,7 +251,7 @@ export function fitTwoPhase(
     bestB = m2;
   }
   if (!Number.isFinite(best)) return line;
-  const k = kOf(bestB);
+  const k = third < bestB ? 4 : 3;
   best = fitAt(x, y, w, sMin, range, bestB, k, c);
   if (!Number.isFinite(best)) return line;
   const extra = k - 2 + 1;

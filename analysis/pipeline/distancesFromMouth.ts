@@ -1,3 +1,4 @@
+import { maxOf } from "../survey/arrayExtent.ts";
 import { spearmanRho } from "../geometry/suggestMouth.ts";
 import type { Station, Survey } from "../survey/survey.ts";
 import { acceptedValue } from "./mixingSamples.ts";
@@ -31,7 +32,7 @@ export function distancesFromMouth(surveys: readonly Survey[]): { surveys: Surve
   const all = surveys.flatMap((s) =>
     (s.stations as WithDistance[]).flatMap((st) => (st.distanceKm !== undefined ? [st.distanceKm] : [])),
   );
-  const maxKm = Math.max(...all);
+  const maxKm = maxOf(all);
   const flip = rho > 0;
   const out = surveys.map((s) => ({
     ...s,

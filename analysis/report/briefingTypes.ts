@@ -7,6 +7,8 @@ import type { ChannelNetwork } from "../geometry/types.ts";
 import type { SurveyComparison, ComparableSurvey } from "../compare/types.ts";
 import type { SafeHtml } from "./html.ts";
 import type { Finding } from "./findings.ts";
+import type { BriefingArchive } from "../archive/archiveSection.ts";
+import type { ArchiveSummary } from "../archive/types.ts";
 
 /** A figure: inline SVG built by this module (every data text escaped) with title and caption. */
 export interface BriefingFigure {
@@ -61,6 +63,8 @@ export interface BriefingDocument {
   summary: string[];
   surveys: BriefingSurvey[];
   comparison?: BriefingComparison;
+  /** Archive section (three or more surveys): series, strip, relations, findings. */
+  archive?: BriefingArchive;
   provenance: BriefingTable[];
   methods: string[];
   references: string[];
@@ -83,6 +87,8 @@ export interface BriefingInput {
   network?: ChannelNetwork;
   /** Basemap GeoJSON FeatureCollection (polygons with properties.kind, named points). */
   basemap?: unknown;
+  /** Archive summary; computed from the analyses when absent and there are three or more. */
+  archive?: ArchiveSummary;
   /** Comparison; computed from the analyses when absent and there are two or more. */
   comparison?: SurveyComparison;
   files?: ProvenanceFile[];

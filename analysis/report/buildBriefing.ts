@@ -13,6 +13,13 @@ import { comparisonSection } from "./comparisonSection.ts";
 import { briefingReferences, methodsParagraphs } from "./references.ts";
 import { datePart } from "./resultsTable.ts";
 import { surveySection } from "./surveySection.ts";
+import { archiveName, archiveSection } from "../archive/archiveSection.ts";
+import { ARCHIVE_KEYS } from "../archive/archiveReferences.ts";
+import { referenceList } from "./referencesBibliography.ts";
+import { summarizeArchive } from "../archive/summarizeArchive.ts";
+
+/** Up to this many surveys get their own sections and the two-survey comparison; more are an archive. */
+export const BRIEFING_LIST_MAX = 4;
 
 /** The caution printed on every briefing: the one caution text (analysis/output/caution.ts). */
 export const BRIEFING_CAUTION = SCREENING_CAUTION;
@@ -25,6 +32,11 @@ function keyConstituents(a: ComparableSurvey, max: number): string[] {
     .map((c) => c.name);
 }
 
+function dateRangeOf(analyses: BriefingInput["analyses"]): [string, string] | undefined {
+  const d = analyses.flatMap((a) => (a.survey.startDate ? [a.survey.startDate.slice(0, 10)] : [])).sort();
+  return d.length ? [d[0]!, d[d.length - 1]!] : undefined;
+}
+
 function provenance(input: BriefingInput): BriefingTable[] {
   const tables: BriefingTable[] = [];
   if (input.files?.length)
@@ -33,18 +45,40 @@ function provenance(input: BriefingInput): BriefingTable[] {
       header: ["File", "Role", "Size (bytes)", "SHA-256"],
       rows: input.files.map((f) => [f.name, f.role, f.bytes !== undefined ? String(f.bytes) : "—", f.sha256 ?? "—"]),
     });
-  tables.push({
-    caption: "Surveys",
-    header: ["Survey", "Dates", "Samples", "Placed on channel", "Constituents", "River discharge (m³/s)"],
-    rows: input.analyses.map((a) => [
-      a.survey.name,
-      [...new Set([datePart(a.survey.startDate), datePart(a.survey.endDate)].filter(Boolean))].join(" to ") || "—",
-      String(a.stations.length),
-      String(a.stations.filter((s) => s.alongChannelKm !== undefined).length),
-      a.constituents.map((c) => `${c.name} (${c.unit})`).join(", "),
-      a.survey.riverDischargeM3s !== undefined ? formatSignificant(a.survey.riverDischargeM3s, 3) : "not given",
-    ]),
-  });
+  if (input.analyses.length > BRIEFING_LIST_MAX) {
+    const placed = input.analyses.reduce(
+      (n, a) => n + a.stations.filter((s) => s.alongChannelKm !== undefined).length,
+      0,
+    );
+    const withQ = input.analyses.filter((a) => a.survey.riverDischargeM3s !== undefined).length;
+    tables.push({
+      caption: "Surveys",
+      header: ["Surveys", "Samples", "Placed on channel", "River discharge given"],
+      rows: [
+        [
+          archiveName({
+            nSurveys: input.analyses.length,
+            ...(dateRangeOf(input.analyses) ? { dateRange: dateRangeOf(input.analyses)! } : {}),
+          }),
+          String(input.analyses.reduce((n, a) => n + a.stations.length, 0)),
+          String(placed),
+          `${withQ} of ${input.analyses.length}`,
+        ],
+      ],
+    });
+  } else
+    tables.push({
+      caption: "Surveys",
+      header: ["Survey", "Dates", "Samples", "Placed on channel", "Constituents", "River discharge (m³/s)"],
+      rows: input.analyses.map((a) => [
+        a.survey.name,
+        [...new Set([datePart(a.survey.startDate), datePart(a.survey.endDate)].filter(Boolean))].join(" to ") || "—",
+        String(a.stations.length),
+        String(a.stations.filter((s) => s.alongChannelKm !== undefined).length),
+        a.constituents.map((c) => `${c.name} (${c.unit})`).join(", "),
+        a.survey.riverDischargeM3s !== undefined ? formatSignificant(a.survey.riverDischargeM3s, 3) : "not given",
+      ]),
+    });
   const sw: string[][] = [["Software", input.software ?? "Brackline"]];
   if (input.bootstrap) sw.push(["Bootstrap", `${input.bootstrap.draws} draws, seed ${input.bootstrap.seed}`]);
   if (input.dateText) sw.push(["Briefing date", input.dateText]);
@@ -69,7 +103,10 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
   const analyses: ReadonlyArray<ComparableSurvey & { caution?: string }> = input.analyses;
   const key = input.keyConstituents ?? keyConstituents(analyses[0]!, input.maxKeyConstituents ?? 4);
   const basemap = readBasemap(input.basemap);
-  const surveys = analyses.map((a, i) =>
+  const isArchive = analyses.length > BRIEFING_LIST_MAX;
+  const archiveSummary = input.archive ?? (analyses.length >= 3 ? summarizeArchive(analyses) : undefined);
+  const arch = archiveSummary ? archiveSection(archiveSummary) : undefined;
+  const surveys = (isArchive ? [] : analyses).map((a, i) =>
     surveySection(a, {
       ...(input.network ? { network: input.network } : {}),
       basemap,
@@ -77,7 +114,9 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
       idPrefix: `s${i}`,
     }),
   );
-  const comparison = input.comparison ?? (analyses.length >= 2 ? compareSurveys(analyses) : undefined);
+  const comparison = isArchive
+    ? undefined
+    : (input.comparison ?? (analyses.length >= 2 ? compareSurveys(analyses) : undefined));
   const maxKm =
     input.network?.branches[0]?.kmEnd ??
     Math.max(1, ...analyses.flatMap((a) => a.stations.map((s: StationPlacement) => s.alongChannelKm ?? 0)));
@@ -97,7 +136,8 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
       a.survey.riverDischargeM3s !== undefined ? ` at ${formatSignificant(a.survey.riverDischargeM3s, 3)} m³/s` : "";
     summary.push(`${s.name}${q}: ${intr}${changes ? `; net change river → sea: ${changes}` : ""}.`);
   }
-  const firstClear = surveys[0]!.findings.find((f) => f.strength === "clear" && f.constituent);
+  if (isArchive && arch) summary.push(`${arch.heading}.`, ...arch.findings.slice(0, 5));
+  const firstClear = surveys[0]?.findings.find((f) => f.strength === "clear" && f.constituent);
   if (firstClear) summary.push(firstClear.text);
   if (cmp) summary.push(...cmp.findings.slice(0, 2));
   const fitMethod = analyses.flatMap((a) => a.constituents).find((c) => c.fit)?.fit?.method;
@@ -109,15 +149,18 @@ export function buildBriefing(input: BriefingInput): BriefingDocument {
   if (input.dataNotice) cautions.unshift(input.dataNotice);
   return {
     title: input.title ?? "Estuarine mixing briefing",
-    subtitle: `${analyses.length === 1 ? "Survey" : "Surveys"} ${analyses.map((a) => a.survey.name).join(", ")}`,
+    subtitle: isArchive
+      ? `Surveys: ${archiveName(archiveSummary!)}`
+      : `${analyses.length === 1 ? "Survey" : "Surveys"} ${analyses.map((a) => a.survey.name).join(", ")}`,
     ...(input.dateText ? { dateText: input.dateText } : {}),
     ...(input.dataNotice ? { dataNotice: input.dataNotice } : {}),
     summary,
     surveys,
     ...(cmp ? { comparison: cmp } : {}),
+    ...(arch ? { archive: arch } : {}),
     provenance: provenance(input),
     methods: methodsParagraphs(fitMethod, boot ? { draws: boot.draws, seed: boot.seed } : undefined, !!cmp),
-    references: briefingReferences(!!cmp),
+    references: [...new Set([...briefingReferences(!!cmp), ...(arch ? referenceList(ARCHIVE_KEYS) : [])])],
     cautions,
   };
 }

@@ -13,6 +13,7 @@
  */
 import { CHEMISTRY_BIBLIOGRAPHY } from "./referencesChemistry.ts";
 import { MIXING_BIBLIOGRAPHY } from "./referencesMixing.ts";
+import { ARCHIVE_BIBLIOGRAPHY } from "../archive/archiveReferences.ts";
 
 /** One publication. */
 export interface BibEntry {
@@ -32,7 +33,9 @@ export interface BibEntry {
 
 /** All entries, keyed. */
 export const BIBLIOGRAPHY: Readonly<Record<string, BibEntry>> = Object.freeze(
-  Object.fromEntries([...MIXING_BIBLIOGRAPHY, ...CHEMISTRY_BIBLIOGRAPHY].map((e) => [e.key, e])),
+  Object.fromEntries(
+    [...MIXING_BIBLIOGRAPHY, ...CHEMISTRY_BIBLIOGRAPHY, ...ARCHIVE_BIBLIOGRAPHY].map((e) => [e.key, e]),
+  ),
 );
 
 /**

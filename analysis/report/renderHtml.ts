@@ -102,6 +102,25 @@ export function renderBriefingHtml(doc: BriefingDocument): string {
         <p class="table-note">${c.intervalMethod}</p>
       </section>`
     : "";
+  const ar = doc.archive;
+  const archive = ar
+    ? html`<section class="archive">
+        <h2>${ar.heading}</h2>
+        <dl class="facts">
+          ${ar.facts.map(
+            ([k, v]) =>
+              html`<dt>${k}</dt>
+                <dd>${v}</dd>`,
+          )}
+        </dl>
+        <h3>Findings</h3>
+        <ul class="findings">
+          ${ar.findings.map((f) => html`<li>${f}</li>`)}
+        </ul>
+        ${ar.figures.map(figureHtml)}${ar.tables.map(tableHtml)}
+        ${ar.methods.map((m) => html`<p class="table-note">${m}</p>`)}
+      </section>`
+    : "";
   const body = html`<header>
       <h1>${doc.title}</h1>
       <p class="subtitle">${doc.subtitle}${doc.dateText ? html` · ${doc.dateText}` : ""}</p>
@@ -114,7 +133,7 @@ export function renderBriefingHtml(doc: BriefingDocument): string {
         ${doc.summary.map((s) => html`<li>${s}</li>`)}
       </ul>
     </section>
-    ${surveys}${comparison}
+    ${surveys}${comparison}${archive}
     <section class="back">
       <h2>Data provenance</h2>
       ${doc.provenance.map(tableHtml)}

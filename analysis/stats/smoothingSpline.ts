@@ -31,63 +31,12 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
   const n = k.n ?? k.x.length;
   if (n < 3) throw new RangeError(`reinschFit: need ≥ 3 knots, got ${n}`);
   if (!(lambda >= 0)) throw new RangeError(`reinschFit: lambda must be ≥ 0, got ${lambda}`);
-  const x = k.x,
-    y = k.y,
-    w = k.w;
-  const m = n - 2;
   const S = scratch(n);
-  const { h, ih, qa, qb, qc, dd, e, f, z } = S;
-  for (let i = 0; i < n - 1; i++) {
-    h[i] = x[i + 1]! - x[i]!;
-    if (!(h[i]! > 0)) throw new RangeError(`reinschFit: knots must increase (index ${i})`);
-    ih[i] = 1 / h[i]!;
-  }
-  // Column j of Q (interior knot j+1) has rows j, j+1, j+2: qa, qb, qc.
-  for (let j = 0; j < m; j++) {
-    qa[j] = ih[j]!;
-    qc[j] = ih[j + 1]!;
-    qb[j] = -qa[j]! - qc[j]!;
-  }
-  const iw = S.iw;
-  for (let i = 0; i < n; i++) iw[i] = 1 / w[i]!;
-  const idd = S.s0; // 1/dd, reused before the trace band overwrites s0
-  for (let j = 0; j < m; j++) {
-    const d0 = iw[j]!,
-      d1 = iw[j + 1]!,
-      d2 = iw[j + 2]!;
-    const b0 = (h[j]! + h[j + 1]!) / 3 + lambda * (qa[j]! * qa[j]! * d0 + qb[j]! * qb[j]! * d1 + qc[j]! * qc[j]! * d2);
-    const rhs = y[j]! * qa[j]! + y[j + 1]! * qb[j]! + y[j + 2]! * qc[j]!;
-    // Band entries B[j][j-1] and B[j][j-2] (from columns j-1 and j-2).
-    const b1 = j >= 1 ? h[j]! / 6 + lambda * (qb[j - 1]! * qa[j]! * d0 + qc[j - 1]! * qb[j]! * d1) : 0;
-    const b2 = j >= 2 ? lambda * qc[j - 2]! * qa[j]! * d0 : 0;
-    f[j] = j >= 2 ? b2 * idd[j - 2]! : 0;
-    e[j] = j >= 1 ? (b1 - (j >= 2 ? f[j]! * e[j - 1]! * dd[j - 2]! : 0)) * idd[j - 1]! : 0;
-    dd[j] = b0 - (j >= 2 ? f[j]! * f[j]! * dd[j - 2]! : 0) - (j >= 1 ? e[j]! * e[j]! * dd[j - 1]! : 0);
-    idd[j] = 1 / dd[j]!;
-    z[j] = rhs - (j >= 1 ? e[j]! * z[j - 1]! : 0) - (j >= 2 ? f[j]! * z[j - 2]! : 0);
-  }
-  for (let j = 0; j < m; j++) z[j] = z[j]! * idd[j]!;
-  for (let j = m - 1; j >= 0; j--)
-    z[j] = z[j]! - (j + 1 < m ? e[j + 1]! * z[j + 1]! : 0) - (j + 2 < m ? f[j + 2]! * z[j + 2]! : 0);
-  const spline =
-    out && out.knots.length >= n
-      ? out
-      : { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: n };
-  spline.count = n;
-  const gamma = spline.secondDerivs;
-  gamma[0] = 0;
-  gamma[n - 1] = 0;
-  for (let j = 0; j < m; j++) gamma[j + 1] = z[j]!;
-  let rss = 0;
-  for (let i = 0; i < n; i++) {
-    let qg = 0;
-    if (i > 0) qg += (gamma[i - 1]! - gamma[i]!) * ih[i - 1]!;
-    if (i < n - 1) qg += (gamma[i + 1]! - gamma[i]!) * ih[i]!;
-    const v = y[i]! - lambda * qg * iw[i]!;
-    spline.values[i] = v;
-    spline.knots[i] = x[i]!;
-    rss += w[i]! * (y[i]! - v) ** 2;
-  }
+  factorBand(k.x, k.w, n, lambda, S);
+  const { spline, rss } = solveBand(S, n, lambda, k.x, k.y, k.w, out);
+  const { e, f, dd, qa, qb, qc } = S;
+  const w = k.w;
+  const m = n - 2;
   if (!withTrace) return { spline, edf: Number.NaN, rss };
   // Central band of Σ = B⁻¹ from B = L·D·Lᵀ, bottom-up: s0 = Σ[j][j], s1 = Σ[j][j+1], s2 = Σ[j][j+2].
   const { s0, s1, s2 } = S;
@@ -117,6 +66,129 @@ export function reinschFit(k: KnotData, lambda: number, withTrace = false, out?:
   return { spline, edf: n - lambda * tr, rss };
 }
 
+/** A smoothing-spline fit prepared for one set of knots, weights and λ: only y changes between fits. */
+export interface PreparedSmoothingSpline {
+  n: number;
+  lambda: number;
+  x: Float64Array;
+  w: Float64Array;
+  scratch: Scratch;
+}
+
+/**
+ * Factors the penalised band system of {@link reinschFit} once for fixed knots, weights and λ
+ * (a bootstrap on a fixed design refits many responses at the same λ).
+ *
+ * @param k knot data (≥ 3 strictly increasing knots, positive weights); only x, w and n are used
+ * @param lambda smoothing parameter ≥ 0
+ * @returns the prepared fit for {@link fitPreparedSpline}
+ * @throws RangeError as {@link reinschFit}
+ * @see Reinsch, C.H. (1967) Numer. Math. 10, 177–183.
+ */
+export function prepareSmoothingSpline(k: KnotData, lambda: number): PreparedSmoothingSpline {
+  const n = k.n ?? k.x.length;
+  if (n < 3) throw new RangeError(`prepareSmoothingSpline: need ≥ 3 knots, got ${n}`);
+  if (!(lambda >= 0)) throw new RangeError(`prepareSmoothingSpline: lambda must be ≥ 0, got ${lambda}`);
+  const S = newScratch(n);
+  factorBand(k.x, k.w, n, lambda, S);
+  return {
+    n,
+    lambda,
+    x: Float64Array.from({ length: n }, (_, i) => k.x[i]!),
+    w: Float64Array.from({ length: n }, (_, i) => k.w[i]!),
+    scratch: S,
+  };
+}
+
+/**
+ * Smoothing spline of the responses y at the knots, weights and λ of a prepared fit: the same
+ * numbers as {@link fitSmoothingSpline} on those knots, in two O(n) band substitutions.
+ *
+ * @param p prepared fit; y responses at its knots (length ≥ p.n); out optional spline to overwrite
+ * @returns the natural cubic spline
+ */
+export function fitPreparedSpline(
+  p: PreparedSmoothingSpline,
+  y: ArrayLike<number>,
+  out?: NaturalSpline,
+): NaturalSpline {
+  return solveBand(p.scratch, p.n, p.lambda, p.x, y, p.w, out, false).spline;
+}
+
+/** Band LDLᵀ factors of R + λ·Qᵀ W⁻¹ Q (they depend on the knots, weights and λ only, not on y). */
+function factorBand(x: ArrayLike<number>, w: ArrayLike<number>, n: number, lambda: number, S: Scratch): void {
+  const m = n - 2;
+  const { h, ih, qa, qb, qc, dd, e, f, iw } = S;
+  for (let i = 0; i < n - 1; i++) {
+    h[i] = x[i + 1]! - x[i]!;
+    if (!(h[i]! > 0)) throw new RangeError(`reinschFit: knots must increase (index ${i})`);
+    ih[i] = 1 / h[i]!;
+  }
+  // Column j of Q (interior knot j+1) has rows j, j+1, j+2: qa, qb, qc.
+  for (let j = 0; j < m; j++) {
+    qa[j] = ih[j]!;
+    qc[j] = ih[j + 1]!;
+    qb[j] = -qa[j]! - qc[j]!;
+  }
+  for (let i = 0; i < n; i++) iw[i] = 1 / w[i]!;
+  const idd = S.idd;
+  for (let j = 0; j < m; j++) {
+    const d0 = iw[j]!,
+      d1 = iw[j + 1]!,
+      d2 = iw[j + 2]!;
+    const b0 = (h[j]! + h[j + 1]!) / 3 + lambda * (qa[j]! * qa[j]! * d0 + qb[j]! * qb[j]! * d1 + qc[j]! * qc[j]! * d2);
+    // Band entries B[j][j-1] and B[j][j-2] (from columns j-1 and j-2).
+    const b1 = j >= 1 ? h[j]! / 6 + lambda * (qb[j - 1]! * qa[j]! * d0 + qc[j - 1]! * qb[j]! * d1) : 0;
+    const b2 = j >= 2 ? lambda * qc[j - 2]! * qa[j]! * d0 : 0;
+    f[j] = j >= 2 ? b2 * idd[j - 2]! : 0;
+    e[j] = j >= 1 ? (b1 - (j >= 2 ? f[j]! * e[j - 1]! * dd[j - 2]! : 0)) * idd[j - 1]! : 0;
+    dd[j] = b0 - (j >= 2 ? f[j]! * f[j]! * dd[j - 2]! : 0) - (j >= 1 ? e[j]! * e[j]! * dd[j - 1]! : 0);
+    idd[j] = 1 / dd[j]!;
+  }
+}
+
+/** Solves the factored band system for y and sets the knot values f = y − λ·W⁻¹ Q γ; returns the spline and Σw(y − f)². */
+function solveBand(
+  S: Scratch,
+  n: number,
+  lambda: number,
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  out?: NaturalSpline,
+  withRss = true,
+): { spline: NaturalSpline; rss: number } {
+  const m = n - 2;
+  const { ih, qa, qb, qc, e, f, z, idd, iw } = S;
+  for (let j = 0; j < m; j++) {
+    const rhs = y[j]! * qa[j]! + y[j + 1]! * qb[j]! + y[j + 2]! * qc[j]!;
+    z[j] = rhs - (j >= 1 ? e[j]! * z[j - 1]! : 0) - (j >= 2 ? f[j]! * z[j - 2]! : 0);
+  }
+  for (let j = 0; j < m; j++) z[j] = z[j]! * idd[j]!;
+  for (let j = m - 1; j >= 0; j--)
+    z[j] = z[j]! - (j + 1 < m ? e[j + 1]! * z[j + 1]! : 0) - (j + 2 < m ? f[j + 2]! * z[j + 2]! : 0);
+  const spline =
+    out && out.knots.length >= n
+      ? out
+      : { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: n };
+  spline.count = n;
+  const gamma = spline.secondDerivs;
+  gamma[0] = 0;
+  gamma[n - 1] = 0;
+  for (let j = 0; j < m; j++) gamma[j + 1] = z[j]!;
+  let rss = 0;
+  for (let i = 0; i < n; i++) {
+    let qg = 0;
+    if (i > 0) qg += (gamma[i - 1]! - gamma[i]!) * ih[i - 1]!;
+    if (i < n - 1) qg += (gamma[i + 1]! - gamma[i]!) * ih[i]!;
+    const v = y[i]! - lambda * qg * iw[i]!;
+    spline.values[i] = v;
+    spline.knots[i] = x[i]!;
+    if (withRss) rss += w[i]! * (y[i]! - v) ** 2;
+  }
+  return { spline, rss };
+}
+
 interface Scratch {
   size: number;
   h: Float64Array;
@@ -132,31 +204,35 @@ interface Scratch {
   s2: Float64Array;
   ih: Float64Array;
   iw: Float64Array;
+  idd: Float64Array;
 }
 let SCRATCH: Scratch | undefined;
 
 /** Module-level work arrays (single-threaded reuse keeps bootstrap loops free of garbage). */
 function scratch(n: number): Scratch {
-  if (!SCRATCH || SCRATCH.size < n) {
-    const a = (): Float64Array => new Float64Array(n);
-    SCRATCH = {
-      size: n,
-      h: a(),
-      qa: a(),
-      qb: a(),
-      qc: a(),
-      dd: a(),
-      e: a(),
-      f: a(),
-      z: a(),
-      s0: a(),
-      s1: a(),
-      s2: a(),
-      ih: a(),
-      iw: a(),
-    };
-  }
+  if (!SCRATCH || SCRATCH.size < n) SCRATCH = newScratch(n);
   return SCRATCH;
+}
+
+function newScratch(n: number): Scratch {
+  const a = (): Float64Array => new Float64Array(n);
+  return {
+    size: n,
+    h: a(),
+    qa: a(),
+    qb: a(),
+    qc: a(),
+    dd: a(),
+    e: a(),
+    f: a(),
+    z: a(),
+    s0: a(),
+    s1: a(),
+    s2: a(),
+    ih: a(),
+    iw: a(),
+    idd: a(),
+  };
 }
 
 /**

@@ -5,6 +5,7 @@ import { underwayImportBench } from "./underwayImport.ts";
 import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
+import { archiveBench } from "./archive.ts";
 import { wideHeaderBench } from "./wideHeader.ts";
 import { cliStartBench } from "./cliStart.ts";
 
@@ -17,5 +18,6 @@ export const benchCases: BenchCase[] = [
   wideHeaderBench,
   dashboardBench,
   bundleSizeBench,
+  archiveBench,
   cliStartBench,
 ];

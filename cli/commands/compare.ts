@@ -14,6 +14,14 @@ import {
   CHOICE_HELP,
 } from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
+import { ARCHIVE_HELP, compareArchive } from "../archive/compareArchive.ts";
+import { CancelledError } from "../archive/workerPool.ts";
+
+/** Exit code after Ctrl+C (128 + SIGINT), as shells report it. */
+export const EXIT_CANCELLED = 130;
+
+/** Archive options of `compare` (three or more surveys). */
+const ARCHIVE_OPTION_NAMES = ["threads", "cache-dir", "no-cache", "seasons", "discharge-table"] as const;
 
 /** Size and SHA-256 of a file, for the briefing's provenance. */
 export function provenanceOf(path: string, role: ProvenanceFile["role"]): ProvenanceFile {
@@ -27,6 +35,7 @@ export function analyzeFiles(
   values: OptionValues,
   io: CommandIo,
   compare = false,
+  loaded?: WorkspaceInputs,
 ): {
   inputs: WorkspaceInputs;
   results: WorkspaceResults;
@@ -36,7 +45,7 @@ export function analyzeFiles(
   seed: number;
 } {
   const settings = workspaceSettings(values);
-  const inputs = loadWorkspace(paths, values, io);
+  const inputs = loaded ?? loadWorkspace(paths, values, io);
   if (compare && inputs.surveys.length < 2)
     throw new InputError(
       `${paths.join(", ")}: ${inputs.surveys.length} survey found; compare needs at least 2 (one per file, or a survey column)`,
@@ -75,6 +84,8 @@ ${CHOICE_HELP}
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
   --format json|csv            output format (default json)
   --out <file>                 write to a file instead of standard output
+
+${ARCHIVE_HELP}
 ${SCREENING_CAUTION}`;
 
 export const compareCommand: Command = {
@@ -82,13 +93,32 @@ export const compareCommand: Command = {
   summary: "compare surveys: salt intrusion vs discharge, shifts of reaction zones, maxima and C*0",
   help,
   async run(args, io) {
-    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "format", "out"]);
+    const { values, positionals } = parseCommandLine(args, [
+      ...INPUT_OPTIONS,
+      ...ARCHIVE_OPTION_NAMES,
+      "format",
+      "out",
+    ]);
     const format = parseFormat(values.format);
     workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give the survey files to compare");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (values.out !== undefined) checkOut(values.out);
-    const { analyses, results } = analyzeFiles(positionals, values, io, true);
+    const inputs = loadWorkspace(positionals, values, io);
+    if (inputs.surveys.length >= 3) {
+      let text: string;
+      try {
+        text = await compareArchive(inputs, workspaceSettings(values), values, format, io);
+      } catch (error) {
+        if (!(error instanceof CancelledError)) throw error;
+        io.err(`cancelled after ${error.done} surveys; they are cached: run the same command again to continue`);
+        return EXIT_CANCELLED;
+      }
+      if (values.out !== undefined) writeOut(values.out, text);
+      else io.out(text);
+      return 0;
+    }
+    const { analyses, results } = analyzeFiles(positionals, values, io, true, inputs);
     io.err(`comparing ${analyses.length} surveys against ${analyses[0]!.survey.name}`);
     const comparison = results.comparison!;
     const text =

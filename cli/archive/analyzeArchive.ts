@@ -1,0 +1,111 @@
+/**
+ * Analyses every survey of an archive on worker threads, with a per-survey cache, progress on
+ * stderr and cancel (SIGINT): finished surveys stay cached, so a re-run continues where it stopped.
+ */
+import { createHash } from "node:crypto";
+import { availableParallelism } from "node:os";
+import type { CommandIo } from "../command.ts";
+import type { Survey, SurveyAnalysis } from "../../analysis/index.ts";
+import { SurveyCache, surveyCacheKey } from "./surveyCache.ts";
+import { surveyTaskHandler, type SurveySetup } from "./surveyTask.ts";
+import { CancelledError, runPool } from "./workerPool.ts";
+
+/** Options of {@link analyzeArchive}. */
+export interface ArchiveRunOptions {
+  /** Worker threads (default: available parallelism, at most the number of surveys); 0 = this thread only. */
+  threads?: number;
+  /** Cache directory; undefined = no cache. */
+  cacheDir?: string;
+  io: CommandIo;
+  /** Cancels the run (default: a SIGINT handler installed for the run). */
+  signal?: AbortSignal;
+}
+
+/** What {@link analyzeArchive} did, for messages and the bench. */
+export interface ArchiveRunStats {
+  analysed: number;
+  cached: number;
+  threads: number;
+  seconds: number;
+  /** Sum over surveys of the time spent analysing each (inside its thread) [s]. */
+  taskSeconds: number;
+}
+
+const workerUrl = (): URL =>
+  new URL(import.meta.url.endsWith(".ts") ? "./surveyWorkerTs.js" : "./surveyWorker.js", import.meta.url);
+
+/**
+ * Analyses the set-up's surveys in parallel; results come back in survey order.
+ *
+ * @throws CancelledError when cancelled (finished surveys are cached)
+ */
+export async function analyzeArchive(
+  input: SurveySetup & { surveys: readonly Survey[] },
+  o: ArchiveRunOptions,
+): Promise<{ analyses: SurveyAnalysis[]; stats: ArchiveRunStats }> {
+  const t0 = performance.now();
+  const { surveys, ...setup } = input;
+  const cache = new SurveyCache(o.cacheDir);
+  const network = setup.inputs.channel?.network;
+  const channel = network
+    ? createHash("sha256")
+        .update(JSON.stringify({ ...network, segmentIndexData: undefined }))
+        .update(setup.inputs.channel!.mouth.statement)
+        .digest("hex")
+    : "none";
+  const keys = surveys.map((survey) =>
+    surveyCacheKey({ survey, channel, settings: setup.settings, offChannelM: setup.inputs.choices.offChannelM }),
+  );
+  const out = new Array<SurveyAnalysis>(surveys.length);
+  const todo: number[] = [];
+  keys.forEach((k, i) => {
+    const hit = cache.get<SurveyAnalysis>(k);
+    if (hit) out[i] = hit;
+    else todo.push(i);
+  });
+  const n = surveys.length;
+  const threads = Math.min(o.threads ?? availableParallelism(), todo.length);
+  o.io.err(
+    `archive: ${n} surveys, ${n - todo.length} from the cache, ${todo.length} to analyse on ${threads <= 0 ? "this thread" : `${threads} worker thread${threads === 1 ? "" : "s"}`}`,
+  );
+  const controller = new AbortController();
+  const onSigint = () => controller.abort();
+  if (!o.signal) process.once("SIGINT", onSigint);
+  const signal = o.signal ?? controller.signal;
+  let done = 0;
+  let taskSeconds = 0;
+  try {
+    await runPool({
+      workerUrl: workerUrl(),
+      threads,
+      setup,
+      tasks: todo.map((index) => ({ survey: surveys[index]! })),
+      cost: (t) => t.survey.stations.length * Math.max(1, t.survey.constituents.length),
+      inline: surveyTaskHandler,
+      signal,
+      onResult: (ti, result, taskMs) => {
+        taskSeconds += taskMs / 1000;
+        const i = todo[ti]!;
+        out[i] = result;
+        cache.set(keys[i]!, result);
+        done++;
+        o.io.err(`[${n - todo.length + done}/${n}] ${result.survey.name} analysed (${(taskMs / 1000).toFixed(2)} s)`);
+      },
+    });
+  } catch (error) {
+    if (error instanceof CancelledError) throw new CancelledError(done + (n - todo.length));
+    throw error;
+  } finally {
+    if (!o.signal) process.off("SIGINT", onSigint);
+  }
+  return {
+    analyses: out,
+    stats: {
+      analysed: todo.length,
+      cached: n - todo.length,
+      threads,
+      seconds: (performance.now() - t0) / 1000,
+      taskSeconds,
+    },
+  };
+}

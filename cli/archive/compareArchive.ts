@@ -1,0 +1,68 @@
+/**
+ * `brackline compare` with three or more surveys: analyse them on worker threads (cached, with
+ * progress and cancel), join discharges, summarise the archive and write JSON or the long CSV.
+ */
+import type { CommandIo } from "../command.ts";
+import type { SurveyAnalysis, SurveyComparison, WorkspaceInputs } from "../../analysis/index.ts";
+import { compareSurveys, summarizeArchive } from "../../analysis/index.ts";
+import { analyzeArchive } from "./analyzeArchive.ts";
+import { surveySetup } from "./surveyTask.ts";
+import { cacheDirOption, dischargeFromTable, seasonsOption, threadsOption } from "./archiveOptions.ts";
+import { archiveCsv, archiveJson } from "./archiveOutput.ts";
+
+/** Up to this many surveys the JSON also carries the two-survey comparison against the first. */
+export const ARCHIVE_COMPARISON_MAX = 4;
+
+/** Options of the archive path of `compare` (as typed on the command line). */
+export interface ArchiveCompareValues {
+  threads?: string;
+  "cache-dir"?: string;
+  "no-cache"?: boolean;
+  seasons?: string;
+  "discharge-table"?: string;
+}
+
+/** Help lines of the archive options, for `compare --help`. */
+export const ARCHIVE_HELP = `With three or more surveys (an archive): series per constituent and the salt intrusion against date,
+river discharge, month and season, and year on year (README: series[], intrusion[]).
+  --seasons <name=Mon-Mon,...>  seasons for summaries (default meteorological winter/spring/summer/autumn)
+  --discharge-table <flows.csv> daily discharge (date, m³/s); each survey takes its day or the nearest earlier day
+  --threads <n>                 worker threads (default: all cores; 0 = main thread only)
+  --cache-dir <dir>             per-survey result cache (default ~/.cache/brackline/surveys)
+  --no-cache                    analyse every survey again, store nothing
+  Ctrl+C cancels; finished surveys stay cached.`;
+
+/**
+ * Runs the archive comparison and returns the output text.
+ *
+ * @throws CancelledError on Ctrl+C (finished surveys are cached)
+ */
+export async function compareArchive(
+  inputs: WorkspaceInputs,
+  settings: { bootstrapDraws: number; seed: number },
+  values: ArchiveCompareValues,
+  format: "json" | "csv",
+  io: CommandIo,
+): Promise<string> {
+  const seasons = seasonsOption(values.seasons);
+  const threads = threadsOption(values.threads);
+  const cacheDir = cacheDirOption(values["cache-dir"], values["no-cache"]);
+  const discharge = values["discharge-table"]
+    ? dischargeFromTable(values["discharge-table"], inputs.surveys, io.err)
+    : undefined;
+  const { analyses, stats } = await analyzeArchive(
+    { surveys: inputs.surveys, ...surveySetup(inputs, settings) },
+    { threads, ...(cacheDir ? { cacheDir } : {}), io },
+  );
+  io.err(
+    `archive: ${stats.analysed} surveys analysed, ${stats.cached} from the cache, in ${stats.seconds.toFixed(1)} s`,
+  );
+  const archive = summarizeArchive(analyses as SurveyAnalysis[], {
+    ...(seasons ? { seasons } : {}),
+    ...(discharge ? { discharge } : {}),
+  });
+  if (format === "csv") return archiveCsv(archive);
+  const comparison: SurveyComparison | undefined =
+    analyses.length <= ARCHIVE_COMPARISON_MAX ? compareSurveys(analyses) : undefined;
+  return archiveJson(archive, comparison);
+}
