@@ -67,6 +67,15 @@ describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise expor
     const notUsed = (await s.page.locator('[data-testid="not-used"]').first().textContent()) ?? "";
     console.log(`realData.e2e: not used: ${notUsed.replace(/\s+/g, " ").slice(0, 400)}`);
     expect(notUsed).toMatch(/Oxygen/);
+    const [download] = await Promise.all([
+      s.page.waitForEvent("download"),
+      s.page.locator('[data-testid="mapping-download"]').first().click(),
+    ]);
+    expect(download.suggestedFilename()).toBe("2018SanFranciscoBayWaterQualityData.mapping.json");
+    const mapping = JSON.parse(await readFile((await download.path())!, "utf8")) as {
+      columns: Array<{ header: string; unit?: string }>;
+    };
+    expect(mapping.columns.find((c) => c.header === "Silicate")?.unit).toBe("µmol/L");
     await screenshot(s.page, "realdata-2-import-report");
     await s.page.locator('[data-testid="data-toggle"]').click();
   }, 120_000);
