@@ -61,6 +61,8 @@ describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise expor
       if ((await unit.count()) === 0) continue;
       if ((await unit.inputValue()).trim() === "") await unit.fill("µmol/L");
     }
+    // Oxygen is not a mixing tracer: given its unit it is drawn along the channel without end-members.
+    await dialog.locator('tr[data-header="Oxygen"] input[aria-label^="Unit"]').fill("mg/L");
     await screenshot(s.page, "realdata-1-mapping-dialog");
     await dialog.locator('[data-testid="mapping-confirm"]').click();
     await s.page.locator('[data-testid="import-report"]').waitFor({ timeout: 60_000 });
@@ -131,6 +133,13 @@ describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise expor
       expect(centre[1]).toBeGreaterThan(37.2);
       expect(centre[1]).toBeLessThan(38.4);
     }
+    const variables = await s.page
+      .locator('[data-testid="variables"] figure')
+      .evaluateAll((els) => els.map((e) => e.getAttribute("data-variable")));
+    console.log(`realData.e2e: along-channel variables: ${variables.join(", ")}`);
+    expect(variables.length).toBeGreaterThan(0);
+    const selected = await s.page.locator('[data-testid="constituent-select"]').inputValue();
+    expect(selected).not.toMatch(/oxygen|O2/i);
     const row =
       (await s.page
         .locator("table tr", { hasText: /^\s*Si\b/ })

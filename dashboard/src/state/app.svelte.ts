@@ -141,7 +141,11 @@ export class AppState {
       this.results.receive(event);
       if (event.type === "loaded") {
         if (this.selection.surveyIndex >= event.surveys.length) this.selection.surveyIndex = 0;
-        const names = event.surveys[this.selection.surveyIndex]?.constituents.map((c) => c.name) ?? [];
+        // Non-mixing variables (oxygen, chlorophyll...) are never the default constituent.
+        const names =
+          event.surveys[this.selection.surveyIndex]?.constituents
+            .filter((c) => c.kind !== "nonMixing")
+            .map((c) => c.name) ?? [];
         if (names.length > 0 && !names.includes(this.selection.constituent)) this.selection.constituent = names[0];
       }
     });
