@@ -18,7 +18,7 @@ export function pWords(p: number): string {
  * (b = change per tenfold discharge, with its 95 % t interval and the fitted band at 20 points
  * across the discharge range), Spearman's ρ and Kendall's τ-b with p-values. Discharge enters on
  * a log scale because it spans orders of magnitude and its effects scale as powers of Q
- * (mixing-methods.md §5.1). A finding is stated only when the slope's interval excludes zero.
+ * (bibliography keys hansenRattray1965, monismith2002). A finding is stated only when the slope's interval excludes zero.
  *
  * @param points per survey: discharge (> 0 m³/s) and the quantity
  * @param quantity plain name for the statement, e.g. "silicate (Si) % change"

@@ -128,7 +128,7 @@ export function analyzeShape(p: ShapeInput): {
       message: `Only ${bs.usable} of ${draws} bootstrap draws were usable; intervals are rough.`,
     });
   if (!override && bs.riverSe !== undefined && Number.isFinite(bs.riverSe)) river = { ...river, concSd: bs.riverSe };
-  const effective = estimateOf(cStar, bs.effective, unit);
+  let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
   else
@@ -143,6 +143,17 @@ export function analyzeShape(p: ShapeInput): {
   const excludesZero = percent !== undefined && (percent.lower > 0 || percent.upper < 0);
   const nonCons = p.nonConservative || p.evidence.chiSquaredP < 0.01 || excludesZero;
   const cls = classify(nonCons, cStar - river.conc, p.quadCoef, tangent, sMin, sMax, mS !== undefined, n);
+  if (tp.linear && cls !== "conservative") {
+    // The stations depart from conservative mixing, yet no straight seaward phase could be told apart
+    // from the curve: the line kept is the one through all stations, so C*₀ = C₀ by construction and
+    // a "0 %" with a zero-width interval would be a false precision.
+    effective = undefined;
+    percent = undefined;
+    warnings.push({
+      code: "percent-not-determined",
+      message: `The stations depart from conservative mixing (${cls}), but no straight seaward line could be separated from the curve with ${n} stations: the effective river end-member and the % change are not determined. More stations between the reaction and the sea end-member would resolve them.`,
+    });
+  }
   const toKm = (a: number, b: number): Array<[number, number]> => o.salinityToKm?.(a, b) ?? [];
   let zone: ConstituentAnalysis["reactionZone"];
   const z = cls === "conservative" ? undefined : zoneFromCurve(grid, d2, sr, undefined, segStart);

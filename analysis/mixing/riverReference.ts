@@ -29,7 +29,7 @@ export function referenceSalinity(sMin: number, stated?: number): { salinity: nu
  * any reaction between the river and those stations). concSd is provisional here (the group's
  * standard error); the analysis replaces it by the bootstrap standard error.
  *
- * @see Boyle et al. (1974) GCA 38, 1719–1728; mixing-methods.md §1.2.
+ * @see Boyle et al. (1974) GCA 38, 1719–1728; bibliography key boyle1974.
  */
 export function riverAtReference(
   used: readonly PreparedSample[],

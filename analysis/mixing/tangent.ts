@@ -15,7 +15,7 @@ import { fitTwoPhase, seawardLine, type TwoPhaseFit } from "./twoPhase.ts";
  *
  * @param used prepared samples sorted by salinity
  * @returns the tangent line and the fit (undefined when no line can be fitted)
- * @see Boyle et al. (1974) GCA 38, 1719–1728; Hudson (1966) JASA 61, 1097–1129; mixing-methods.md §1.2 and §1.6 item 5.
+ * @see Boyle et al. (1974) GCA 38, 1719–1728; Hudson (1966) JASA 61, 1097–1129; bibliography key boyle1974.
  */
 export function seawardTangent(
   used: readonly PreparedSample[],

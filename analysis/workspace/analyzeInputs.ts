@@ -2,7 +2,7 @@
  * Inputs to results: the one entry point from read inputs to everything the dashboard, the CLI and the
  * briefing show (per-survey analyses, map overlays, comparison, results and deviations tables).
  */
-import { compareSurveys } from "../compare/compareSurveys.ts";
+import { workspaceComparison } from "./comparison.ts";
 import type { SurveyComparison } from "../compare/types.ts";
 import { SCREENING_CAUTION } from "../output/caution.ts";
 import { deviationRows, resultRows, tableObjects, DEVIATION_COLUMNS, RESULT_COLUMNS } from "../output/columns.ts";
@@ -94,14 +94,11 @@ export function analyzeInputs(inputs: WorkspaceInputs, settings: WorkspaceSettin
     return { name: survey.name, analysis, overlay: surveyOverlay(analysis, network, overlay?.ticks ?? []) };
   });
   let comparison: SurveyComparison | undefined;
-  if (settings.compare) {
-    if (surveys.length < 2)
-      throw new RangeError(`analyzeInputs(): a comparison needs at least 2 surveys; got ${surveys.length}`);
-    comparison = compareSurveys(
+  if (settings.compare)
+    comparison = workspaceComparison(
       surveys.map((s) => s.analysis),
       settings.compare,
     );
-  }
   const analyses = surveys.map((s) => s.analysis);
   return {
     caution: SCREENING_CAUTION,

@@ -1,10 +1,9 @@
 /**
- * What the comparison view shows, laid out from analysis/compare: the
- * comparison itself (compareSurveys), the rows of its tables as text, and the
+ * What the comparison view shows, laid out from the worker's comparison (the
+ * workspace API's `analyzeInputs` → `comparison`): the rows of its tables as text, and the
  * series of the overlaid mixing plot. No science here, only layout.
  */
 import {
-  compareSurveys,
   formatSignificant,
   type ConstituentShift,
   type EstimateDifference,
@@ -23,19 +22,15 @@ export function surveyDash(index: number): string {
   return ["", "7 4", "2 3", "10 3 2 3"][index % 4];
 }
 
-/** The comparison of every analysed survey with the first, or a reason it cannot be made. */
-export function comparisonOf(analyses: ReadonlyArray<SurveyAnalysis | undefined>): {
-  comparison?: SurveyComparison;
-  reason?: string;
-} {
-  const done = analyses.filter((a): a is SurveyAnalysis => a !== undefined);
+/** The comparison the worker made (the workspace API's), or a reason it is not shown. */
+export function comparisonOf(
+  analyses: ReadonlyArray<SurveyAnalysis | undefined>,
+  comparison: SurveyComparison | undefined,
+  reason: string | undefined,
+): { comparison?: SurveyComparison; reason?: string } {
   if (analyses.length < 2) return { reason: "Load two or more surveys to compare them." };
-  if (done.length < analyses.length) return { reason: "Waiting for the analysis of every survey…" };
-  try {
-    return { comparison: compareSurveys(done) };
-  } catch (error) {
-    return { reason: `The surveys could not be compared: ${error instanceof Error ? error.message : String(error)}` };
-  }
+  if (comparison) return { comparison };
+  return { reason: reason ?? "Waiting for the analysis of every survey…" };
 }
 
 /** One row of the shift table: a quantity of one constituent in both surveys and its change. */

@@ -1,23 +1,24 @@
-/** Number formatting for display (never rounding inside analysis). */
+/**
+ * Number text for the dashboard's own components (station list, survey facts, map tooltip): the
+ * output spec's one formatter (analysis/output formatSignificant/formatFixed, as the panels, the CLI
+ * and the briefing use), with "—" for an absent value. Never rounds inside the analysis.
+ */
+import { formatFixed, formatSignificant } from "../../../analysis/index.ts";
+
+const absent = (value: number | undefined | null): value is undefined | null =>
+  value === undefined || value === null || !Number.isFinite(value);
 
 /** Formats a number with `digits` significant digits, or "—" when absent. */
 export function fmt(value: number | undefined | null, digits = 3): string {
-  if (value === undefined || value === null || !Number.isFinite(value)) return "—";
-  const abs = Math.abs(value);
-  if (abs !== 0 && (abs >= 1e5 || abs < 1e-3)) return value.toExponential(digits - 1);
-  if (abs >= 10 ** digits) return value.toFixed(0);
-  return Number(value.toPrecision(digits)).toString();
+  return absent(value) ? "—" : formatSignificant(value, digits);
 }
 
 /** Formats with a fixed number of decimals, or "—". */
 export function fixed(value: number | undefined | null, decimals = 1): string {
-  if (value === undefined || value === null || !Number.isFinite(value)) return "—";
-  return value.toFixed(decimals);
+  return absent(value) ? "—" : formatFixed(value, decimals);
 }
 
 /** "+1.2" / "−0.4": signed, with a true minus sign. */
 export function signed(value: number | undefined | null, digits = 3): string {
-  if (value === undefined || value === null || !Number.isFinite(value)) return "—";
-  const text = fmt(Math.abs(value), digits);
-  return value > 0 ? `+${text}` : value < 0 ? `−${text}` : text;
+  return absent(value) ? "—" : formatSignificant(value, digits, true);
 }

@@ -3,6 +3,7 @@
  */
 import type { CarbonateEndmember } from "../../../analysis/index.ts";
 import type { CarbonateSetting } from "../state/settings.svelte.ts";
+import type { SpeciationModel, SpeciationRequest } from "../worker/speciation.ts";
 
 /**
  * Carbonate end-members for the expected-pH curve of the speciation panel while the invented demo
@@ -20,12 +21,19 @@ export function mapCanvases(): HTMLCanvasElement[] {
   return [...document.querySelectorAll<HTMLCanvasElement>(".map-area canvas")];
 }
 
-/** Extra props by panel id; the speciation panel gets the carbonate end-members the user set (or the demo's). */
-export function panelExtras(id: string, carbonate?: CarbonateSetting): Record<string, unknown> {
+/**
+ * Extra props by panel id; the speciation panel gets the worker call that computes it and the
+ * carbonate end-members the user set (or the demo's).
+ */
+export function panelExtras(
+  id: string,
+  carbonate?: CarbonateSetting,
+  speciate?: (request: SpeciationRequest) => Promise<SpeciationModel>,
+): Record<string, unknown> {
   if (id === "SpeciationPanel")
     return carbonate
-      ? { carbonate: { river: carbonate.river, sea: carbonate.sea }, carbonateInvented: carbonate.invented }
-      : {};
+      ? { speciate, carbonate: { river: carbonate.river, sea: carbonate.sea }, carbonateInvented: carbonate.invented }
+      : { speciate };
   if (id === "ExportMenu") return { mapCanvases };
   return {};
 }

@@ -16,6 +16,7 @@ import { proxyCallback, startWorker, type RemoteApi, type WorkerHandle } from ".
 import type { AnalysisJob, TextFile } from "../worker/protocol.ts";
 import type { BrushedStretch } from "../worker/brushStretch.ts";
 import type { DrawnPreview } from "../worker/drawnPreview.ts";
+import type { SpeciationModel, SpeciationRequest } from "../worker/speciation.ts";
 import type { MapData, MapStation } from "../map/mapData.ts";
 import { deviationsById, placementsById } from "../lib/analysisView.ts";
 import { withObservations } from "../panels/lib/observations.ts";
@@ -206,6 +207,14 @@ export class AppState {
     }
     const stretch = await this.#analyser.api.brushStretch(surveyIndex, [range[0], range[1]]);
     if (ask === this.#brushAsk) this.brushedStretch = stretch;
+  }
+
+  /**
+   * Speciation context for the speciation panel, computed in the analysis worker (already running
+   * when the panel shows; a running analysis answers between surveys). A newer request wins in the panel.
+   */
+  speciate(request: SpeciationRequest): Promise<SpeciationModel> {
+    return this.#analysisApi().speciation(request);
   }
 
   /** Km ticks and length of a centerline being drawn, placed by the worker's centerline reader. */

@@ -5,7 +5,7 @@
  * mutated.
  */
 import type { FeatureCollection } from "geojson";
-import type { ImportIssue, Survey } from "../../../analysis/index.ts";
+import type { ImportIssue, Survey, SurveyComparison } from "../../../analysis/index.ts";
 import type { AnalysisEvent, InputNotice } from "../worker/protocol.ts";
 import type { AnalysisResult } from "../worker/engine.ts";
 import type { ChannelOverlay, SurveyOverlay } from "../worker/overlay.ts";
@@ -28,6 +28,10 @@ export class AnalysisResults {
   /** Analysis results by survey index (undefined until the worker answers). */
   analyses = $state.raw<Array<AnalysisResult | undefined>>([]);
   overlays = $state.raw<Array<SurveyOverlay | undefined>>([]);
+  /** The worker's comparison of the surveys (the workspace API's), once every survey is analysed. */
+  comparison = $state.raw<SurveyComparison | undefined>(undefined);
+  /** Why there is no comparison, when the worker could not make one. */
+  comparisonReason = $state<string | undefined>(undefined);
   status = $state<ResultsStatus>("idle");
   progress = $state<Progress | null>(null);
   /** Choices made for the user while reading (layer, distances from the mouth...), to state. */
@@ -53,6 +57,12 @@ export class AnalysisResults {
         this.analyses = message.surveys.map(() => undefined);
         this.overlays = message.surveys.map(() => undefined);
         this.status = "analysing";
+        this.comparison = undefined;
+        this.comparisonReason = undefined;
+        break;
+      case "comparison":
+        this.comparison = message.comparison;
+        this.comparisonReason = message.reason;
         break;
       case "analysis": {
         const analyses = [...this.analyses];
@@ -76,6 +86,8 @@ export class AnalysisResults {
 
   /** Marks the start of a new job (files are being read, or settings changed). */
   begin(reading: boolean): void {
+    this.comparison = undefined;
+    this.comparisonReason = undefined;
     this.status = reading ? "reading" : "analysing";
     this.progress = { stage: reading ? "Reading files" : "Analysing", done: 0, total: 1 };
   }

@@ -4,7 +4,7 @@
  * (built once, here, by the one centerline reader) and the latest analyses; the main thread keeps
  * only a snapshot of the results and the selection. The same object runs in Node for tests.
  */
-import { channelOverlay, type WorkspaceInputs } from "../../../analysis/index.ts";
+import { channelOverlay, workspaceComparison, type WorkspaceInputs } from "../../../analysis/index.ts";
 import type { TextFile } from "./protocol.ts";
 import type { ImportChoice } from "./importFile.ts";
 import type { FileInspection, FileOutcome, ImportSource } from "./importTypes.ts";
@@ -19,6 +19,7 @@ import type { AnalysisEvent, AnalysisJob, ProgressCallback, SourceFile } from ".
 import type { UnderwayRequest, UnderwayResult } from "./underwayProtocol.ts";
 import { readUnderway } from "./underwayEngine.ts";
 import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
+import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -27,6 +28,18 @@ function yieldToQueue(): Promise<void> {
 
 function messageOf(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
+}
+
+/** The workspace API's comparison of the analysed surveys (the first is the reference), or why there is none. */
+function compareAll(analyses: ReadonlyArray<AnalysisResult | undefined>): AnalysisEvent {
+  const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
+  if (done.length < analyses.length)
+    return { type: "comparison", reason: "Some surveys could not be analysed, so they cannot be compared." };
+  try {
+    return { type: "comparison", comparison: workspaceComparison(done) };
+  } catch (error) {
+    return { type: "comparison", reason: `The surveys could not be compared: ${messageOf(error)}` };
+  }
 }
 
 /** Builds the worker's API object with its own held state (one per worker instance). */
@@ -75,6 +88,7 @@ export function createWorkerApi() {
         emit({ type: "error", message: `Survey "${surveys[i].name}": ${messageOf(error)}` });
       }
     }
+    if (total >= 2) emit(compareAll(analyses));
     emit({ type: "progress", stage: "Analysis complete", done: 1, total: 1 });
     emit({ type: "done" });
   }
@@ -146,6 +160,11 @@ export function createWorkerApi() {
       const done = chosen.filter((a): a is AnalysisResult => a !== undefined);
       const provenance = await fileProvenance(files, centerlineFile);
       return briefingHtml(done, inputs.channel?.network, provenance, basemap, dataNotice);
+    },
+
+    /** Speciation context at the focus station and along the mixing line (analysis/seawater). */
+    speciation(request: SpeciationRequest): SpeciationModel {
+      return speciationModel(request);
     },
 
     /** Recognises a dropped file and previews it. */

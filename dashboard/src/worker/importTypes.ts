@@ -3,32 +3,27 @@
  * worker found in its first rows, and what reading it produced. All plain data
  * (structured-clone safe) so they cross the worker boundary.
  */
-import type {
-  ColumnMapping,
-  ImportIssue,
-  ImportSummary,
-  LayerChoice,
-  StationTable,
-  Survey,
-  TextDialect,
-  UnusedColumn,
+import {
+  FILE_KIND_LABELS,
+  type InputFileKind,
+  type ColumnMapping,
+  type ImportIssue,
+  type ImportSummary,
+  type LayerChoice,
+  type StationTable,
+  type Survey,
+  type TextDialect,
+  type UnusedColumn,
 } from "../../../analysis/index.ts";
 
 /** A file to import: a browser File (streamed in the worker) or text already in memory. */
 export type ImportSource = Blob & { name: string };
 
-/** What a file holds, recognised from its content. */
-export type FileKind = "surveyText" | "stationTable" | "surveyGeoJson" | "centerline" | "surveyNetcdf" | "unknown";
+/** What a file holds, recognised from its content (analysis/workspace's file kinds). */
+export type FileKind = InputFileKind;
 
-/** Human names of the file kinds. */
-export const FILE_KIND_LABELS: Record<FileKind, string> = {
-  surveyText: "survey table",
-  stationTable: "station table",
-  surveyGeoJson: "survey points (GeoJSON)",
-  centerline: "channel centerline (GeoJSON)",
-  surveyNetcdf: "survey (netCDF)",
-  unknown: "not recognised",
-};
+/** Human names of the file kinds (the workspace API's). */
+export { FILE_KIND_LABELS };
 
 /** The first look at a file: its kind, and for delimited text its headers, preview and suggested mapping. */
 export interface FileInspection {

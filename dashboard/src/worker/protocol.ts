@@ -4,7 +4,7 @@
  * methods as async functions. Progress and partial results come back through callbacks passed
  * with `Comlink.proxy`. Every value crossing the boundary is plain, structured-clone-safe data.
  */
-import type { ImportIssue, Survey } from "../../../analysis/index.ts";
+import type { ImportIssue, Survey, SurveyComparison } from "../../../analysis/index.ts";
 import type { ChannelOverlay, SurveyOverlay } from "./overlay.ts";
 import type { AnalysisResult } from "./engine.ts";
 
@@ -87,6 +87,11 @@ export type AnalysisEvent =
     }
   /** One survey analysed, with its map overlay (zones and maxima placed on the channel). */
   | { type: "analysis"; surveyIndex: number; analysis: AnalysisResult; overlay: SurveyOverlay }
+  /**
+   * Every survey analysed: the comparison of the later surveys with the first (the workspace API's
+   * `comparison`), or why there is none. Sent only when two or more surveys are held.
+   */
+  | { type: "comparison"; comparison?: SurveyComparison; reason?: string }
   /** All requested work finished. */
   | { type: "done" }
   | { type: "error"; message: string };

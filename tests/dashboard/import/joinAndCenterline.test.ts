@@ -33,6 +33,6 @@ describe("ImportFlow.importFiles() with several files at once (common practice: 
     expect(data.demoBasemap).toBe(false);
     expect(JSON.parse(data.centerline?.text ?? "null")).toEqual(JSON.parse(line));
     const unknown = data.flow.report.find((e) => e.outcome.fileName === "notes.json");
-    expect(unknown?.outcome.issues[0].expected).toMatch(/without point or line features/);
+    expect(unknown?.outcome.issues[0].expected).toMatch(/without GeoJSON point or line features/);
   });
 });

@@ -13,26 +13,18 @@
  *   PuOr (Harrower & Brewer 2003), which is colour-blind safe.
  */
 import { interpolateCividis, interpolatePuOr } from "d3-scale-chromatic";
+import { BEHAVIOUR_STYLE, MARK_STYLE, NEUTRAL_MUTED, NEUTRAL_RULE, OKABE_ITO } from "../../../../analysis/index.ts";
 import type { BehaviourClass } from "../../../../analysis/mixing/result.ts";
 
-/** Okabe & Ito (2008) colour-universal-design set, by its published colour names. */
-export const okabeIto = {
-  black: "#000000",
-  orange: "#E69F00",
-  skyBlue: "#56B4E9",
-  bluishGreen: "#009E73",
-  yellow: "#F0E442",
-  blue: "#0072B2",
-  vermillion: "#D55E00",
-  reddishPurple: "#CC79A7",
-} as const;
+/** Okabe & Ito (2008) colour-universal-design set, by its published colour names (the output spec's). */
+export const okabeIto = OKABE_ITO;
 
-/** Neutral interface colours. */
+/** Neutral interface colours (muted and rule are the output spec's). */
 export const neutral = {
   ink: "#25292e",
   text: "#3d434a",
-  muted: "#6e757d",
-  rule: "#c9cdd2",
+  muted: NEUTRAL_MUTED,
+  rule: NEUTRAL_RULE,
   grid: "#e6e8eb",
   paper: "#fbfbfa",
   panel: "#ffffff",
@@ -49,9 +41,9 @@ export const roles = {
   /** Station under the pointer. */
   hovered: okabeIto.orange,
   /** Below-detection (censored) observations. */
-  censored: neutral.muted,
+  censored: MARK_STYLE.belowDetection.colour,
   /** QC-rejected observations. */
-  rejected: okabeIto.vermillion,
+  rejected: MARK_STYLE.rejected.colour,
   /** Theoretical dilution line. */
   dilutionLine: neutral.muted,
   /** Fitted curve. */
@@ -59,26 +51,21 @@ export const roles = {
   /** 95 % confidence band of the fit. */
   fitBand: "#cfe3f1",
   /** Tangent from the seaward segment and the effective river end-member. */
-  tangent: okabeIto.bluishGreen,
+  tangent: MARK_STYLE.effectiveEndmember.colour,
   /** Salinity line in the channel profile. */
   salinity: okabeIto.skyBlue,
   /** Reaction zone shading. */
   zone: neutral.zone,
   /** Maximum marker. */
-  maximum: okabeIto.orange,
+  maximum: MARK_STYLE.maximum.colour,
   /** Brush rectangle. */
   brush: "rgba(204, 121, 167, 0.14)",
 } as const;
 
-/** One colour per behaviour class (Okabe–Ito). */
-export const behaviourColour: Record<BehaviourClass, string> = {
-  conservative: neutral.muted,
-  removal: okabeIto.blue,
-  addition: okabeIto.vermillion,
-  "removal-then-conservative": okabeIto.skyBlue,
-  "maximum-then-conservative": okabeIto.orange,
-  "insufficient-data": neutral.rule,
-};
+/** One colour per behaviour class: the output spec's colour-and-symbol code (analysis/output). */
+export const behaviourColour = Object.fromEntries(
+  Object.entries(BEHAVIOUR_STYLE).map(([k, v]) => [k, v.colour]),
+) as Record<BehaviourClass, string>;
 
 /** Ordered category colours for series without a fixed meaning (Okabe–Ito without black). */
 export const categorical: readonly string[] = [

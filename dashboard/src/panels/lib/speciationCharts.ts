@@ -3,7 +3,7 @@ import { FE_SPECIES, FE_SPECIES_LABELS, type SeriesSet } from "../../../../analy
 import type { ChartMarker, ChartPoint, ChartSeries } from "./chart.ts";
 import { categorical, neutral, roles } from "./palette.ts";
 import { formatFixed, formatNumber } from "./format.ts";
-import type { SpeciationModel } from "./speciationModel.ts";
+import type { SpeciationModel } from "../../worker/speciation.ts";
 
 /** Series of a SeriesSet as chart lines, coloured in order; `pick` filters and `style` adjusts per key. */
 export function toChartSeries(

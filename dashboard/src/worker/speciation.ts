@@ -1,7 +1,9 @@
 /**
- * Speciation context for the speciation panel. Every value comes from
- * analysis/seawater; this file only chooses grids, picks the station and
- * catches the analysis' errors so the panel can show them as text.
+ * Speciation context, computed in the worker (`WorkerApi.speciation`): Fe(III) species against pH,
+ * Cd chloro-complexes and major ions against salinity, the pH expected along the conservative
+ * mixing line of alkalinity and inorganic carbon, and the speciation at the focus station. Every
+ * value comes from analysis/seawater; this file only chooses grids and turns the analysis' errors
+ * into text the panel shows. Request and snapshot are plain, structured-clone-safe data.
  */
 import {
   carbonatePhAlongMixingLine,
@@ -16,8 +18,7 @@ import {
   type FeSpeciationSeries,
   type SeriesSet,
   type StationSpeciationResult,
-} from "../../../../analysis/index.ts";
-import type { StationPlacement, SurveyAnalysisView } from "./types.ts";
+} from "../../../analysis/index.ts";
 
 /** A value, or the message of the error the analysis raised. */
 export type Outcome<T> = { ok: true; value: T } | { ok: false; error: string };
@@ -51,9 +52,32 @@ export const defaultSpeciationSettings: SpeciationSettings = {
   salinityRange: [0, 35],
 };
 
+/** The conditions of the station speciation is shown for (values as measured). */
+export interface FocusStation {
+  id: string;
+  salinity: number;
+  temperatureC?: number;
+  pH?: number;
+}
+
+/** A station's measured pH and salinity (for the measured-pH chart). */
+export interface MeasuredPh {
+  stationId: string;
+  salinity: number;
+  pH: number;
+}
+
+/** What the panel asks the worker for. */
+export interface SpeciationRequest {
+  station?: FocusStation;
+  measuredPh: MeasuredPh[];
+  settings: SpeciationSettings;
+}
+
+/** The worker's answer: what the panel draws. */
 export interface SpeciationModel {
   /** The station whose conditions are used, if one with salinity is selected. */
-  station?: StationPlacement;
+  station?: FocusStation;
   salinity: number;
   temperatureC: number;
   temperatureAssumed: boolean;
@@ -64,32 +88,17 @@ export interface SpeciationModel {
   /** Speciation at the selected station (needs its pH). */
   atStation?: Outcome<StationSpeciationResult>;
   /** Stations with measured pH and salinity. */
-  measuredPh: Array<{ stationId: string; salinity: number; pH: number }>;
+  measuredPh: MeasuredPh[];
 }
 
-/** The station speciation is shown for: the first selected (or else hovered) station with a salinity. */
-export function focusStation(
-  analysis: SurveyAnalysisView,
-  selectedIds: Iterable<string>,
-  hoveredId: string | null,
-): StationPlacement | undefined {
-  const byId = new Map(analysis.stations.map((s) => [s.id, s]));
-  for (const id of [...selectedIds, ...(hoveredId ? [hoveredId] : [])]) {
-    const s = byId.get(id);
-    if (s && s.salinity !== undefined && Number.isFinite(s.salinity)) return s;
-  }
-  return undefined;
-}
+const finite = (x: number | undefined): x is number => x !== undefined && Number.isFinite(x);
 
-/** Runs the speciation functions of analysis/seawater for the panel. */
-export function speciationModel(
-  analysis: SurveyAnalysisView,
-  station: StationPlacement | undefined,
-  settings: SpeciationSettings,
-): SpeciationModel {
+/** Runs the speciation functions of analysis/seawater for one request (in the worker). */
+export function speciationModel(request: SpeciationRequest): SpeciationModel {
+  const { station, settings } = request;
   const salinity = station?.salinity ?? settings.salinityRange[0];
-  const temperatureAssumed = station?.temperatureC === undefined || !Number.isFinite(station.temperatureC);
-  const temperatureC = temperatureAssumed ? settings.defaultTemperatureC : (station?.temperatureC as number);
+  const temperatureAssumed = !finite(station?.temperatureC);
+  const temperatureC = finite(station?.temperatureC) ? station.temperatureC : settings.defaultTemperatureC;
   const sGrid = linearGrid(settings.salinityRange[0], settings.salinityRange[1], 71);
   const mixing = { riverSalinity: settings.salinityRange[0], seaSalinity: settings.salinityRange[1] };
   const model: SpeciationModel = {
@@ -107,11 +116,7 @@ export function speciationModel(
     ),
     cd: attempt(() => cdSpeciationVsSalinity(settings.cdSetId, sGrid, temperatureC, { mixing })),
     ions: attempt(() => majorIonsVsSalinity(sGrid, mixing)),
-    measuredPh: analysis.stations
-      .filter(
-        (s) => s.pH !== undefined && s.salinity !== undefined && Number.isFinite(s.pH) && Number.isFinite(s.salinity),
-      )
-      .map((s) => ({ stationId: s.id, salinity: s.salinity as number, pH: s.pH as number })),
+    measuredPh: request.measuredPh,
   };
   const carb = settings.carbonate;
   if (carb) {
@@ -125,8 +130,8 @@ export function speciationModel(
       }),
     );
   }
-  if (station && station.pH !== undefined && Number.isFinite(station.pH)) {
-    const pH = station.pH;
+  const pH = station?.pH;
+  if (station && finite(pH)) {
     model.atStation = attempt(() =>
       stationSpeciation(
         { pH, salinity, temperatureC },
