@@ -175,7 +175,7 @@ export function analyzeShape(p: ShapeInput): {
   let maximum: ConstituentAnalysis["maximum"];
   const q = o.riverDischargeM3s;
   const fl =
-    q !== undefined && percent !== undefined
+    q !== undefined && percent !== undefined && effective !== undefined
       ? fluxSummary(q, unit, estimateOf(river.conc, bs.riverConc, unit), effective, bs.netDelta, sr, o.densityKgM3)
       : undefined;
   if (fl) warnings.push(...fl.warnings);

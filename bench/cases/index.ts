@@ -8,6 +8,7 @@ import { dashboardBench } from "./dashboard.ts";
 import { archiveBench } from "./archive.ts";
 import { wideHeaderBench } from "./wideHeader.ts";
 import { cliStartBench } from "./cliStart.ts";
+import { dashboardUnderwayBench } from "./dashboardUnderway.ts";
 
 /** Every benchmark of `npm run bench`, in table order. */
 export const benchCases: BenchCase[] = [
@@ -17,6 +18,7 @@ export const benchCases: BenchCase[] = [
   underwayBinningBench,
   wideHeaderBench,
   dashboardBench,
+  dashboardUnderwayBench,
   bundleSizeBench,
   archiveBench,
   cliStartBench,

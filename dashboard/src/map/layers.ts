@@ -1,12 +1,14 @@
 /**
  * deck.gl layers drawn over the map, built from plain map data and the
- * selection. Pure: the map component hands the result to the overlay.
+ * selection. Pure: the map component hands the result to the overlay. Text is
+ * not drawn here: labels are MapLibre symbol layers with collision handling (labels.ts).
  */
 import type { Layer } from "@deck.gl/core";
-import { LineLayer, PathLayer, ScatterplotLayer, TextLayer } from "@deck.gl/layers";
+import { LineLayer, PathLayer, ScatterplotLayer } from "@deck.gl/layers";
 import type { MapData, MapStation } from "./mapData.ts";
 import { ADDITION_CSS, ADDITION_DARK_CSS, REMOVAL_CSS, toRgba, type ColourScale, type RGBA } from "./colour.ts";
 import type { LonLat } from "../worker/overlay.ts";
+import { stationRadiusPx } from "./labels.ts";
 
 export const INK: RGBA = [33, 41, 48, 255];
 const CHANNEL: RGBA = [52, 84, 102, 230];
@@ -23,19 +25,6 @@ export interface LayerState {
   selected: ReadonlySet<string>;
   hovered: string | null;
 }
-
-/** Screen offset [px] of a label set `distancePx` beside the channel (side +1 = right looking upstream). */
-export function besideChannel(bearingDeg: number, side: 1 | -1, distancePx: number): [number, number] {
-  const b = ((bearingDeg + side * 90) * Math.PI) / 180;
-  return [Math.sin(b) * distancePx, -Math.cos(b) * distancePx];
-}
-
-/** Text anchor that keeps a label clear of its point on the side it is offset to. */
-function anchorFor(offset: [number, number]): "start" | "end" | "middle" {
-  return Math.abs(offset[0]) < 4 ? "middle" : offset[0] > 0 ? "start" : "end";
-}
-
-const LABEL_FONT = "system-ui, -apple-system, 'Segoe UI', Roboto, 'Liberation Sans', sans-serif";
 
 function colourValue(data: MapData, s: MapStation): number | undefined {
   return data.colouring === "deviation" ? s.deviation : s.salinity;
@@ -89,23 +78,6 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
         radiusUnits: "pixels",
         getFillColor: CHANNEL,
       }),
-      new TextLayer({
-        id: "km-labels",
-        data: data.channel.ticks.filter((t) => t.major && t.km > 0),
-        getPosition: (t) => t.lonLat,
-        getText: (t) => t.label,
-        getSize: 12,
-        getColor: INK,
-        getPixelOffset: (t) => besideChannel(t.bearingDeg, 1, 16),
-        getTextAnchor: (t) => anchorFor(besideChannel(t.bearingDeg, 1, 16)),
-        getAlignmentBaseline: "center",
-        characterSet: "auto",
-        fontFamily: LABEL_FONT,
-        fontWeight: 600,
-        outlineWidth: 4,
-        outlineColor: HALO,
-        fontSettings: { sdf: true, fontSize: 48, buffer: 6 },
-      }),
     );
   }
   const isohalines = data.overlay?.isohalines ?? [];
@@ -123,23 +95,6 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
         getLineColor: ISOHALINE,
         getLineWidth: 2,
         lineWidthUnits: "pixels",
-      }),
-      new TextLayer({
-        id: "isohaline-labels",
-        data: isohalines,
-        getPosition: (d) => d.lonLat,
-        getText: (d) => `S = ${d.salinity}`,
-        getSize: 12,
-        getColor: ISOHALINE,
-        getPixelOffset: (d) => besideChannel(d.bearingDeg, -1, 16),
-        getTextAnchor: (d) => anchorFor(besideChannel(d.bearingDeg, -1, 16)),
-        getAlignmentBaseline: "center",
-        characterSet: "auto",
-        fontFamily: LABEL_FONT,
-        fontWeight: 600,
-        outlineWidth: 4,
-        outlineColor: HALO,
-        fontSettings: { sdf: true, fontSize: 48, buffer: 6 },
       }),
     );
   }
@@ -165,7 +120,7 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
       data: stations,
       pickable: true,
       getPosition: (s) => s.lonLat,
-      getRadius: (s) => (selected.has(s.id) ? 9 : s.id === hovered ? 8 : 6),
+      getRadius: (s) => stationRadiusPx(s, selected, hovered),
       radiusUnits: "pixels",
       stroked: true,
       // Off-channel stations (left out of the fits): faded fill in a dark ring, so they read as set apart.
@@ -179,21 +134,6 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
         getLineColor: [selected, hovered],
         getLineWidth: [selected, hovered],
       },
-    }),
-    new TextLayer<MapStation>({
-      id: "selected-labels",
-      data: selectedStations,
-      getPosition: (s) => s.lonLat,
-      getText: (s) => s.id,
-      getSize: 12,
-      getColor: INK,
-      getPixelOffset: [0, -16],
-      characterSet: "auto",
-      fontFamily: LABEL_FONT,
-      fontWeight: 700,
-      outlineWidth: 4,
-      outlineColor: HALO,
-      fontSettings: { sdf: true, fontSize: 48, buffer: 6 },
     }),
   );
   if (zone && zone.maximumPoints.length > 0) {
@@ -209,21 +149,6 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
         getLineColor: MAXIMUM,
         getLineWidth: 3,
         lineWidthUnits: "pixels",
-      }),
-      new TextLayer<LonLat>({
-        id: "maximum-label",
-        data: zone.maximumPoints,
-        getPosition: (p) => p,
-        getText: () => "maximum",
-        getSize: 12,
-        getColor: MAXIMUM,
-        getPixelOffset: [0, 24],
-        characterSet: "auto",
-        fontFamily: LABEL_FONT,
-        fontWeight: 600,
-        outlineWidth: 4,
-        outlineColor: HALO,
-        fontSettings: { sdf: true, fontSize: 48, buffer: 6 },
       }),
     );
   }

@@ -6,6 +6,7 @@
  */
 import type { FeatureCollection } from "geojson";
 import type { ExpressionSpecification, StyleSpecification } from "maplibre-gl";
+import { LABEL_SOURCE, labelLayers } from "./labels.ts";
 
 export const PALETTE = {
   background: "#e3e1da",
@@ -32,14 +33,17 @@ export interface StyleOptions {
   basemap: FeatureCollection | undefined;
   /** Raster tile URL template; used only when non-empty. */
   tileUrl?: string;
+  /** The overlay labels (labels.ts labelFeatures); empty when omitted. */
+  labels?: FeatureCollection;
 }
 
-export function buildStyle({ basemap, tileUrl }: StyleOptions): StyleSpecification {
+export function buildStyle({ basemap, tileUrl, labels }: StyleOptions): StyleSpecification {
   const style: StyleSpecification = {
     version: 8,
     name: "Brackline offline",
     sources: {
       basemap: { type: "geojson", data: basemap ?? EMPTY },
+      [LABEL_SOURCE]: { type: "geojson", data: labels ?? EMPTY },
     },
     layers: [
       { id: "background", type: "background", paint: { "background-color": PALETTE.background } },
@@ -80,9 +84,8 @@ export function buildStyle({ basemap, tileUrl }: StyleOptions): StyleSpecificati
           "text-field": ["get", "name"],
           "text-font": ["sans-serif"],
           "text-size": 13,
-          "text-anchor": "left",
-          "text-offset": [0.6, 0],
-          "text-optional": true,
+          "text-variable-anchor-offset": ["left", [0.6, 0], "right", [-0.6, 0], "top", [0, 0.5], "bottom", [0, -0.5]],
+          "text-padding": 3,
         },
         paint: { "text-color": PALETTE.label, "text-halo-color": PALETTE.halo, "text-halo-width": 1.4 },
       },
@@ -93,6 +96,8 @@ export function buildStyle({ basemap, tileUrl }: StyleOptions): StyleSpecificati
         filter: ["all", POINT, ["has", "name"]],
         paint: { "circle-radius": 2.5, "circle-color": PALETTE.label },
       },
+      // Overlay labels above the place names: MapLibre places the topmost layers first.
+      ...labelLayers(),
     ],
   };
   if (tileUrl && tileUrl.trim() !== "") {

@@ -5,13 +5,13 @@
  * channel from it.
  */
 import type { FeatureCollection } from "geojson";
-import {
-  exportWorkspace,
-  importWorkspace,
-  type ColumnMapping,
-  type ImportIssue,
-  type Survey,
-} from "../../../analysis/index.ts";
+import type { ColumnMapping, ImportIssue, Survey } from "../../../analysis/index.ts";
+
+/**
+ * The workspace reader and writer (with their schema validation) load when a workspace is first
+ * opened or saved, not with the first page: the demo start needs neither.
+ */
+const workspaceIo = () => import("../../../analysis/io/workspace.ts");
 import { demoBundle } from "../lib/demoData.ts";
 import { DEMO_CARBONATE } from "../lib/panelExtras.ts";
 import type { TextFile } from "../worker/protocol.ts";
@@ -77,7 +77,7 @@ export class SavedWorkspace {
   /** Restores the stored workspace, or starts the demo estuary when the store is empty. */
   async boot(): Promise<void> {
     const text = await this.store.load().catch(() => undefined);
-    if (text === undefined || !this.openText(text)) this.startDemo();
+    if (text === undefined || !(await this.openText(text))) this.startDemo();
     else this.dirty = true;
     this.ready = true;
   }
@@ -195,15 +195,17 @@ export class SavedWorkspace {
   }
 
   /** The workspace as versioned JSON text. */
-  exportText(): string {
-    return exportWorkspace(toWorkspaceDocument(this.parts(), this.now().toISOString()));
+  async exportText(): Promise<string> {
+    const doc = toWorkspaceDocument(this.parts(), this.now().toISOString());
+    const { exportWorkspace } = await workspaceIo();
+    return exportWorkspace(doc);
   }
 
   /** Saves the workspace in the store (once the user changed something and there are surveys to keep). */
   async save(): Promise<void> {
     if (!this.ready || !this.dirty || this.host.results.surveys.length === 0) return;
     try {
-      await this.store.save(this.exportText());
+      await this.store.save(await this.exportText());
     } catch (error) {
       this.notices = [
         {
@@ -219,7 +221,8 @@ export class SavedWorkspace {
   }
 
   /** Opens a workspace text (a file, or the stored one); false when it cannot be read. */
-  openText(text: string): boolean {
+  async openText(text: string): Promise<boolean> {
+    const { importWorkspace } = await workspaceIo();
     const { workspace, issues } = importWorkspace(text);
     this.notices = issues;
     if (!workspace) return false;

@@ -8,7 +8,7 @@
 import type { ImportIssue, UnderwayBins, UnderwaySummary } from "../../../analysis/index.ts";
 import { proxyCallback, type RemoteApi } from "../worker/client.ts";
 import type { TextFile } from "../worker/protocol.ts";
-import type { UnderwayPoints, UnderwayResult } from "../worker/underwayProtocol.ts";
+import type { UnderwayPoints, UnderwayResult, UnderwayView } from "../worker/underwayProtocol.ts";
 import { MAX_UNDERWAY_POINTS } from "../map/underwayLayer.ts";
 
 export type UnderwayStatus = "idle" | "reading" | "ready" | "error";
@@ -26,13 +26,18 @@ export class UnderwayState {
   bounds = $state.raw<[number, number, number, number] | undefined>(undefined);
   error = $state<string | undefined>(undefined);
   #ask = 0;
+  #viewAsk = 0;
+  #viewTimer: ReturnType<typeof setTimeout> | undefined;
+  #lastView: UnderwayView | undefined;
+  /** Ms of camera rest before the view's points are asked for (a pan or zoom fires many moves). */
+  static readonly VIEW_DELAY_MS = 150;
 
   /**
    * @param reader the reading worker's API
    * @param centerline the workspace's centerline file now (for km bins; salinity classes without it)
    */
   constructor(
-    readonly reader: () => Pick<RemoteApi, "underway">,
+    readonly reader: () => Pick<RemoteApi, "underway" | "underwayView">,
     readonly centerline: () => TextFile | undefined,
   ) {}
 
@@ -76,6 +81,33 @@ export class UnderwayState {
     }
   }
 
+  /**
+   * The map's view changed: once the camera has rested, the worker re-aggregates the log for it
+   * (finer cells when zoomed in). Answers to older views are dropped; the map keeps drawing the
+   * points it has until the new ones arrive, so nothing blocks.
+   *
+   * @param view visible bounds [deg] and the map's metres per pixel (Web Mercator)
+   */
+  setView(view: { bounds: [number, number, number, number]; metresPerPixel: number }): void {
+    this.#lastView = { bounds: view.bounds, minCellM: 4 * view.metresPerPixel, maxPoints: MAX_UNDERWAY_POINTS };
+    if (this.status !== "ready") return;
+    clearTimeout(this.#viewTimer);
+    this.#viewTimer = setTimeout(() => void this.#askView(), UnderwayState.VIEW_DELAY_MS);
+  }
+
+  async #askView(): Promise<void> {
+    const view = this.#lastView;
+    if (!view || this.status !== "ready") return;
+    const ask = ++this.#viewAsk;
+    const importAsk = this.#ask;
+    try {
+      const points = await this.reader().underwayView(view);
+      if (ask === this.#viewAsk && importAsk === this.#ask && points) this.points = points;
+    } catch {
+      // A failed re-aggregation keeps the points already drawn.
+    }
+  }
+
   /** Keeps a result the worker returned (public for tests). */
   receive(result: UnderwayResult): void {
     this.summary = result.summary;
@@ -85,5 +117,7 @@ export class UnderwayState {
     this.bounds = result.bounds;
     this.status = "ready";
     this.progress = 1;
+    // Detail for the view the user is looking at, once the whole-log overview is drawn.
+    if (this.#lastView) this.#viewTimer = setTimeout(() => void this.#askView(), 0);
   }
 }

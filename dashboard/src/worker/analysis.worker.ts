@@ -5,7 +5,7 @@
  */
 import { expose, transfer } from "comlink";
 import { createWorkerApi } from "./api.ts";
-import { underwayTransfer } from "./underwayEngine.ts";
+import { pointsTransfer, underwayTransfer } from "./underwayEngine.ts";
 
 const api = createWorkerApi();
 
@@ -15,5 +15,10 @@ expose({
   async underway(...args: Parameters<typeof api.underway>) {
     const result = await api.underway(...args);
     return transfer(result, underwayTransfer(result));
+  },
+  /** A view's points with their typed arrays transferred. */
+  underwayView(...args: Parameters<typeof api.underwayView>) {
+    const points = api.underwayView(...args);
+    return transfer(points, pointsTransfer(points));
   },
 } satisfies typeof api);

@@ -16,8 +16,8 @@ import { briefingHtml, fileProvenance } from "./briefing.ts";
 import { brushStretch, type BrushedStretch } from "./brushStretch.ts";
 import type { ChannelOverlay } from "./overlay.ts";
 import type { AnalysisEvent, AnalysisJob, ProgressCallback, SourceFile } from "./protocol.ts";
-import type { UnderwayRequest, UnderwayResult } from "./underwayProtocol.ts";
-import { readUnderway } from "./underwayEngine.ts";
+import type { UnderwayPoints, UnderwayRequest, UnderwayResult, UnderwayView } from "./underwayProtocol.ts";
+import { readUnderway, viewUnderway } from "./underwayEngine.ts";
 import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
 import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
 
@@ -182,6 +182,11 @@ export function createWorkerApi() {
     /** Streams, places and aggregates an underway log (the caller transfers the typed arrays back). */
     underway(request: UnderwayRequest, onProgress?: ProgressCallback): Promise<UnderwayResult> {
       return readUnderway(request, onProgress);
+    },
+
+    /** Re-aggregates the last underway log read by this worker for a map view (undefined before any). */
+    underwayView(view: UnderwayView): UnderwayPoints | undefined {
+      return viewUnderway(view);
     },
   };
 }

@@ -10,7 +10,7 @@ import {
   readUnderwayText,
   type UnderwayImport,
 } from "../../../analysis/index.ts";
-import type { UnderwayRequest, UnderwayResult } from "./underwayProtocol.ts";
+import type { UnderwayPoints, UnderwayRequest, UnderwayResult, UnderwayView } from "./underwayProtocol.ts";
 import type { ProgressCallback } from "./protocol.ts";
 import { readChannel } from "./engine.ts";
 
@@ -24,6 +24,32 @@ async function read(request: UnderwayRequest, progress?: ProgressCallback): Prom
   });
 }
 
+/** The positions and salinity of the last log read, kept in the worker for re-aggregation per view. */
+let lastLog: { lonDeg: Float64Array; latDeg: Float64Array; salinity: Float64Array } | undefined;
+
+/**
+ * Re-aggregates the last log read for a map view: only records inside the view (padded by half
+ * its size each way, so a short pan still has points), on a grid no finer than `minCellM`, so
+ * detail appears as the user zooms in. Undefined when no log has been read.
+ */
+export function viewUnderway(view: UnderwayView): UnderwayPoints | undefined {
+  if (!lastLog) return undefined;
+  const [w, s, e, n] = view.bounds;
+  const dx = (e - w) / 2;
+  const dy = (n - s) / 2;
+  const d = decimatePoints(lastLog.lonDeg, lastLog.latDeg, [lastLog.salinity], {
+    maxPoints: view.maxPoints,
+    minCellM: view.minCellM,
+    bounds: [w - dx, s - dy, e + dx, n + dy],
+  });
+  return { lonDeg: d.lonDeg, latDeg: d.latDeg, salinity: d.values[0]!, count: d.count, cellM: d.cellM };
+}
+
+/** The typed arrays of a view's points, to transfer rather than copy. */
+export function pointsTransfer(p: UnderwayPoints | undefined): Transferable[] {
+  return p ? [p.lonDeg.buffer, p.latDeg.buffer, p.salinity.buffer, p.count.buffer] : [];
+}
+
 /** Reads, places and aggregates one underway log; errors propagate to the caller. */
 export async function readUnderway(request: UnderwayRequest, progress?: ProgressCallback): Promise<UnderwayResult> {
   const imported = await read(request, progress);
@@ -35,6 +61,7 @@ export async function readUnderway(request: UnderwayRequest, progress?: Progress
   const by = projection ? request.bin.by : "salinity";
   const bins = binUnderway(data, projection, { by, width: request.bin.width });
   const salinity = data.columns.find((c) => c.name === "salinity")?.values ?? new Float64Array(data.n).fill(Number.NaN);
+  lastLog = { lonDeg: data.lonDeg, latDeg: data.latDeg, salinity };
   const d = decimatePoints(data.lonDeg, data.latDeg, [salinity], { maxPoints: request.maxPoints });
   let [w, s, e, n] = [Infinity, Infinity, -Infinity, -Infinity];
   for (let i = 0; i < d.lonDeg.length; i++) {

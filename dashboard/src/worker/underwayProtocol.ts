@@ -39,3 +39,13 @@ export interface UnderwayResult {
   /** [west, south, east, north] of the accepted records [deg]. */
   bounds: [number, number, number, number] | undefined;
 }
+
+/** The map's view, for re-aggregating the last log read (WorkerApi.underwayView). */
+export interface UnderwayView {
+  /** [west, south, east, north] of the visible map [deg]. */
+  bounds: [number, number, number, number];
+  /** Smallest grid cell [Web Mercator m]: a few screen pixels at the view's zoom. */
+  minCellM: number;
+  /** Most points the map draws. */
+  maxPoints: number;
+}

@@ -140,11 +140,11 @@ describe("SavedWorkspace and ImportFlow: workspace saved in the store and restor
     const data = new DataState(app, memoryStore(), fixedNow);
     await data.boot();
     await importQuirky(data);
-    const text = data.exportText();
+    const text = await data.exportText();
     expect(JSON.parse(text)).toMatchObject({ format: "brackline-workspace", version: 2 });
     const app2 = fakeApp();
     const data2 = new DataState(app2, memoryStore(), fixedNow);
-    expect(data2.openText(text)).toBe(true);
+    expect(await data2.openText(text)).toBe(true);
     expect(app2.results.surveys).toEqual(app.results.surveys);
   });
 });

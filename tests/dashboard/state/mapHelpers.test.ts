@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { decimateStations } from "../../../dashboard/src/map/decimate.ts";
 import { deviationScale, salinityScale } from "../../../dashboard/src/map/colour.ts";
-import { besideChannel } from "../../../dashboard/src/map/layers.ts";
+import { anchorsFor, labelLayers, sectorOf } from "../../../dashboard/src/map/labels.ts";
 import { buildStyle } from "../../../dashboard/src/map/style.ts";
 import type { MapStation } from "../../../dashboard/src/map/mapData.ts";
 import { expectWithin } from "../../helpers/tolerance.ts";
@@ -44,13 +44,38 @@ describe("map colour scales state their units and stay symmetric (common practic
   });
 });
 
-describe("besideChannel() sets labels perpendicular to the channel (screen y grows downward)", () => {
-  it("for a channel running north, the right side is east (+x) and the left is west", () => {
-    const [xr, yr] = besideChannel(0, 1, 10);
-    expectWithin(xr, 10, 1e-12, "right x");
-    expectWithin(yr, 0, 1e-12, "right y");
-    const [xl] = besideChannel(0, -1, 10);
-    expectWithin(xl, -10, 1e-12, "left x");
+describe("map labels sit beside the channel and are placed by priority (labels.ts)", () => {
+  it("a channel running north has its right side east: km labels want sector E, isohalines sector W", () => {
+    expect(sectorOf(0 + 90)).toBe(2);
+    expect(sectorOf(0 - 90)).toBe(6);
+    expect(sectorOf(359)).toBe(0);
+    expect(sectorOf(-135)).toBe(5);
+  });
+
+  it("the preferred anchor comes first, the other side of the channel after its neighbours", () => {
+    const anchors = anchorsFor(2, 1) as unknown as Array<string | [number, number]>;
+    expect(anchors[0]).toBe("left");
+    expectWithin((anchors[1] as [number, number])[0], 1, 1e-12, "offset x toward east");
+    expect(anchors.filter((a) => typeof a === "string")).toEqual([
+      "left",
+      "top-left",
+      "bottom-left",
+      "right",
+      "top-right",
+      "bottom-right",
+      "top",
+      "bottom",
+    ]);
+  });
+
+  it("stations outrank km ticks, which outrank isohalines, which outrank place names (top layer placed first)", () => {
+    const ids = buildStyle({ basemap: undefined }).layers.map((l) => l.id);
+    const order = ["place-labels", ...labelLayers().map((l) => l.id)];
+    const at = order.map((id) => ids.indexOf(id));
+    expect(at.every((i) => i >= 0)).toBe(true);
+    expect([...at].sort((a, b) => a - b)).toEqual(at);
+    expect(order.indexOf("label-stations")).toBeGreaterThan(order.indexOf("label-km"));
+    expect(order.indexOf("label-km")).toBeGreaterThan(order.indexOf("label-isohalines"));
   });
 });
 
@@ -61,7 +86,7 @@ describe("buildStyle() is offline unless the user turns tiles on (rules: no inte
     expect(text).not.toMatch(/https?:\/\//);
     expect(style.glyphs).toBeUndefined();
     expect(style.sprite).toBeUndefined();
-    expect(Object.keys(style.sources)).toEqual(["basemap"]);
+    expect(Object.keys(style.sources)).toEqual(["basemap", "overlay-labels"]);
   });
 
   it("a user tile URL adds one raster source drawn under the basemap's labels", () => {

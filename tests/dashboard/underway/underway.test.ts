@@ -45,6 +45,27 @@ describe("UnderwayState", () => {
     expect(state.summary?.rowsRead).toBe(2000);
     expect(state.bins?.by).toBe("km");
     expect(state.bounds?.[0]).toBeLessThan(state.bounds![2]);
+    // Zoomed in around one part of the log: the worker re-aggregates only there, on a finer grid.
+    const overview = state.points!;
+    const [w, s, e, n] = state.bounds!;
+    const [cx, cy, hx, hy] = [overview.lonDeg[0]!, overview.latDeg[0]!, (e - w) / 8, (n - s) / 8];
+    const view: [number, number, number, number] = [cx - hx, cy - hy, cx + hx, cy + hy];
+    const coarse = (await api.underwayView({ bounds: [w, s, e, n], minCellM: 500, maxPoints: 20_000 }))!;
+    const detail = (await api.underwayView({ bounds: view, minCellM: 5, maxPoints: 20_000 }))!;
+    expect(coarse.cellM).toBeGreaterThanOrEqual(500);
+    expect(detail.cellM).toBeLessThan(coarse.cellM);
+    const [pw, ps, pe, pn] = [
+      view[0] - (view[2] - view[0]) / 2,
+      view[1] - (view[3] - view[1]) / 2,
+      view[2] + (view[2] - view[0]) / 2,
+      view[3] + (view[3] - view[1]) / 2,
+    ];
+    for (let i = 0; i < detail.lonDeg.length; i++) {
+      expect(
+        detail.lonDeg[i]! >= pw && detail.lonDeg[i]! <= pe && detail.latDeg[i]! >= ps && detail.latDeg[i]! <= pn,
+      ).toBe(true);
+    }
+    expect(detail.lonDeg.length).toBeGreaterThan(0);
     const failing = new UnderwayState(
       () => ({ underway: () => Promise.reject(new Error("boom")) }) as unknown as RemoteApi,
       () => undefined,
