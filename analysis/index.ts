@@ -437,6 +437,7 @@ export { stripControl } from "./output/terminalText.ts";
 
 // --- workspace ---
 export { readInputs } from "./workspace/readInputs.ts";
+export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
 export { workspaceComparison } from "./workspace/comparison.ts";
 export {
   analyzeInputs,

@@ -79,7 +79,7 @@ describe.skipIf(skipBrowser)("importing a survey file: mapping dialog, report, m
     await s.page.locator('[data-testid="issue-filter"]').fill("");
   });
 
-  it("the new survey joins the switcher, is selected, and its stations are on the map", async () => {
+  it("the new survey replaces the invented demo surveys, is selected, and its stations are on the map", async () => {
     await s.page.waitForFunction(() => {
       const el = document.querySelector('[data-testid="survey-select"]') as HTMLSelectElement | null;
       return el?.options[el.selectedIndex]?.text === "autumn-2025-11";
@@ -89,7 +89,8 @@ describe.skipIf(skipBrowser)("importing a survey file: mapping dialog, report, m
     const options = await s.page
       .locator('[data-testid="survey-select"] option')
       .evaluateAll((els) => els.map((e) => e.textContent ?? ""));
-    expect(options).toEqual(["wet-2025-03", "dry-2025-09", "autumn-2025-11"]);
+    expect(options).toEqual(["autumn-2025-11"]);
+    await expect(s.page.locator('[data-testid="demo-banner"]').count()).resolves.toBe(0);
     const p = await stationPixel(s.page, "N01");
     expect(p[0]).toBeGreaterThan(0);
     await screenshot(s.page, "import-2-report-and-map");

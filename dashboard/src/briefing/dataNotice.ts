@@ -14,9 +14,11 @@ export function dataNoticeOf(geojson: unknown): string | undefined {
   return note;
 }
 
-/** File name of the downloaded briefing, from the survey names. */
+/** File name of the downloaded briefing, from the survey names (first and last, and how many, beyond two). */
 export function briefingFileName(surveyNames: readonly string[]): string {
-  const slug = surveyNames
+  const n = surveyNames.length;
+  const parts = n > 2 ? [surveyNames[0]!, "to", surveyNames[n - 1]!, `${n}-surveys`] : surveyNames;
+  const slug = parts
     .join("-")
     .toLowerCase()
     .replace(/[^a-z0-9]+/g, "-")

@@ -99,6 +99,12 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
     );
   }
   const selectedStations = stations.filter((s) => selected.has(s.id));
+  const fade = (c: number[], off: boolean | undefined): [number, number, number, number] => [
+    c[0] ?? 0,
+    c[1] ?? 0,
+    c[2] ?? 0,
+    off ? 70 : (c[3] ?? 255),
+  ];
   layers.push(
     new LineLayer<MapStation>({
       id: "projection-lines",
@@ -117,9 +123,10 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
       getRadius: (s) => stationRadiusPx(s, selected, hovered),
       radiusUnits: "pixels",
       stroked: true,
-      getFillColor: (s) => scale.rgba(colourValue(data, s)),
-      getLineColor: (s) => (selected.has(s.id) || s.id === hovered ? INK : [255, 255, 255, 220]),
-      getLineWidth: (s) => (selected.has(s.id) ? 3 : s.id === hovered ? 2 : 1),
+      // Off-channel stations (left out of the fits): faded fill in a dark ring, so they read as set apart.
+      getFillColor: (s) => fade(scale.rgba(colourValue(data, s)), s.offChannel),
+      getLineColor: (s) => (selected.has(s.id) || s.id === hovered || s.offChannel ? INK : [255, 255, 255, 220]),
+      getLineWidth: (s) => (selected.has(s.id) ? 3 : s.id === hovered || s.offChannel ? 2 : 1),
       lineWidthUnits: "pixels",
       updateTriggers: {
         getFillColor: [data.colouring, data.constituent, scale.domain[0], scale.domain[1]],

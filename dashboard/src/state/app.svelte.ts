@@ -74,6 +74,18 @@ export class AppState {
   readonly panelAnalysis: SurveyAnalysisView | undefined = $derived(
     this.analysis && this.survey ? withObservations(this.analysis, this.survey) : undefined,
   );
+  /**
+   * Indices of the surveys Compare and the Briefing use: the user's choice of two or more, else every
+   * survey when there are at most four, else the active survey and its neighbour.
+   */
+  readonly comparedIndices: number[] = $derived.by(() => {
+    const names = this.results.surveys.map((s) => s.name);
+    const chosen = this.selection.comparedSurveys.map((n) => names.indexOf(n)).filter((i) => i >= 0);
+    if (chosen.length >= 2) return chosen.sort((a, b) => a - b);
+    if (names.length <= 4) return names.map((_, i) => i);
+    const i = this.selection.surveyIndex;
+    return i + 1 < names.length ? [i, i + 1] : [i - 1, i];
+  });
   readonly overlay = $derived(this.results.overlays[this.selection.surveyIndex]);
   readonly constituents = $derived(this.survey?.constituents ?? []);
   readonly unit = $derived(this.constituents.find((c) => c.name === this.selection.constituent)?.unit ?? "");
@@ -130,7 +142,11 @@ export class AppState {
       this.results.receive(event);
       if (event.type === "loaded") {
         if (this.selection.surveyIndex >= event.surveys.length) this.selection.surveyIndex = 0;
-        const names = event.surveys[this.selection.surveyIndex]?.constituents.map((c) => c.name) ?? [];
+        // Non-mixing variables (oxygen, chlorophyll...) are never the default constituent.
+        const names =
+          event.surveys[this.selection.surveyIndex]?.constituents
+            .filter((c) => c.kind !== "nonMixing")
+            .map((c) => c.name) ?? [];
         if (names.length > 0 && !names.includes(this.selection.constituent)) this.selection.constituent = names[0];
       }
     });
@@ -207,9 +223,9 @@ export class AppState {
   }
 
   /** Asks the worker for the self-contained HTML briefing of the analysed surveys. */
-  requestBriefing(dataNotice?: string): Promise<string> {
+  requestBriefing(dataNotice?: string, surveyIndices?: number[]): Promise<string> {
     if (!this.#analyser) return Promise.reject(new Error("The analysis worker is not running."));
-    return this.#analyser.api.briefing($state.snapshot(this.workspace.basemap), dataNotice);
+    return this.#analyser.api.briefing($state.snapshot(this.workspace.basemap), dataNotice, surveyIndices);
   }
 
   destroy(): void {

@@ -3,7 +3,14 @@
  * column mapping of a delimited file is confirmed in the dialog (or a saved one reused by file
  * shape), and what was read is handed to the saved workspace. Keeps the last import's report.
  */
-import { findSavedMapping, type ColumnMapping, type StationTable } from "../../../analysis/index.ts";
+import {
+  findSavedMapping,
+  missingUnits,
+  unusedColumns,
+  type ColumnMapping,
+  type LayerChoice,
+  type StationTable,
+} from "../../../analysis/index.ts";
 import { proxyCallback, type RemoteApi } from "../worker/client.ts";
 import type { FileInspection, FileOutcome, ImportSource } from "../worker/importTypes.ts";
 import type { SavedWorkspace } from "./savedWorkspace.svelte.ts";
@@ -46,6 +53,8 @@ export class ImportFlow {
   question = $state.raw<MappingQuestion | null>(null);
   report = $state.raw<ReportEntry[]>([]);
   progress = $state<{ stage: string; fraction: number } | null>(null);
+  /** Depth layer kept from depth-resolved files (undefined: the reader's default, the shallowest sample). */
+  layer = $state.raw<LayerChoice | undefined>(undefined);
 
   constructor(
     readonly workspace: SavedWorkspace,
@@ -67,8 +76,11 @@ export class ImportFlow {
     });
   }
 
+  /** True while files are being read; progress callbacks arriving after the read (another port) are dropped. */
+  #reading = false;
+
   #onProgress = (fraction: number, stage: string): void => {
-    this.progress = { stage, fraction };
+    if (this.#reading) this.progress = { stage, fraction };
   };
 
   /** Imports dropped or picked files: recognise, confirm mappings, read, add the surveys. */
@@ -99,16 +111,42 @@ export class ImportFlow {
       const outcome =
         inspection.kind === "unknown"
           ? unrecognised(inspection)
-          : await reader.read(
-              file,
-              { kind: inspection.kind, ...(mapping ? { mapping } : {}), ...(stationTable ? { stationTable } : {}) },
-              proxyCallback(this.#onProgress),
+          : await this.#read(() =>
+              reader.read(
+                file,
+                {
+                  kind: inspection.kind,
+                  ...(mapping ? { mapping } : {}),
+                  ...(stationTable ? { stationTable } : {}),
+                  ...(this.layer ? { layer: $state.snapshot(this.layer) as LayerChoice } : {}),
+                },
+                proxyCallback(this.#onProgress),
+              ),
             );
+      if (inspection.kind === "surveyText" && outcome.mapping) {
+        const used = outcome.mapping;
+        outcome.notUsed = [
+          ...unusedColumns(used, inspection.headers, inspection.previewRows),
+          ...missingUnits(used).map((m) => ({
+            header: m.header,
+            reason: "no unit given (a unit typed in the column dialog makes it usable)",
+          })),
+        ];
+      }
       if (outcome.stationTable) stationTable = outcome.stationTable;
       entries.push({ outcome, ...(reusedFrom ? { reusedFrom } : {}) });
     }
     this.progress = null;
     this.#finish(entries);
+  }
+
+  async #read<T>(call: () => Promise<T>): Promise<T> {
+    this.#reading = true;
+    try {
+      return await call();
+    } finally {
+      this.#reading = false;
+    }
   }
 
   #finish(entries: ReportEntry[]): void {

@@ -6,7 +6,7 @@
  */
 import type { FeatureCollection } from "geojson";
 import type { ImportIssue, Survey, SurveyComparison } from "../../../analysis/index.ts";
-import type { AnalysisEvent } from "../worker/protocol.ts";
+import type { AnalysisEvent, InputNotice } from "../worker/protocol.ts";
 import type { AnalysisResult } from "../worker/engine.ts";
 import type { ChannelOverlay, SurveyOverlay } from "../worker/overlay.ts";
 
@@ -34,6 +34,10 @@ export class AnalysisResults {
   comparisonReason = $state<string | undefined>(undefined);
   status = $state<ResultsStatus>("idle");
   progress = $state<Progress | null>(null);
+  /** Choices made for the user while reading (layer, distances from the mouth...), to state. */
+  notices = $state.raw<InputNotice[]>([]);
+  /** Without a centerline: the one built from the station positions, offered to the user (GeoJSON feature). */
+  offeredCenterline = $state.raw<object | undefined>(undefined);
   /** Errors reported by the worker, newest last. */
   errors = $state.raw<string[]>([]);
 
@@ -48,6 +52,8 @@ export class AnalysisResults {
         this.surveys = message.surveys;
         this.issues = message.issues;
         this.channel = message.channel;
+        this.notices = message.notices ?? [];
+        this.offeredCenterline = message.offeredCenterline;
         this.analyses = message.surveys.map(() => undefined);
         this.overlays = message.surveys.map(() => undefined);
         this.status = "analysing";

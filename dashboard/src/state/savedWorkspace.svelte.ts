@@ -56,6 +56,8 @@ export class SavedWorkspace {
   centerline = $state.raw<TextFile | undefined>(undefined);
   /** True while the invented demo basemap fits the data (no centerline of the user's own). */
   demoBasemap = $state(true);
+  /** True while the workspace holds the invented demo (its surveys and centerline); an import replaces it. */
+  isDemo = $state(false);
   /** Basemap drawn by MapLibre (the invented demo's, or none). */
   readonly basemap: FeatureCollection | undefined = $derived(this.demoBasemap ? DEMO_BASEMAP : undefined);
   /** Problems with the workspace itself (restore, open, save). */
@@ -84,6 +86,7 @@ export class SavedWorkspace {
     const bundle = demoBundle();
     this.centerline = bundle.centerline;
     this.demoBasemap = true;
+    this.isDemo = true;
     this.host.settings.carbonate = { ...DEMO_CARBONATE, invented: true };
     void this.host.load(bundle.surveys, bundle.centerline);
   }
@@ -138,15 +141,25 @@ export class SavedWorkspace {
     this.mappingDates = { ...this.mappingDates, [mapping.shape]: this.now().toISOString() };
   }
 
-  /** Adds what an import read: its records, a new centerline (which retires the demo basemap) and surveys. */
+  /**
+   * Adds what an import read: its records, a new centerline (which retires the demo basemap) and
+   * surveys. Real data replace the invented demo: the demo surveys, centerline and basemap leave
+   * ("Reset to demo" brings them back).
+   */
   addImport(records: ImportRecord[], surveys: Survey[], centerline: TextFile | undefined): void {
     this.imports = [...this.imports, ...records];
     this.#dropInventedCarbonate();
+    const leaveDemo = this.isDemo && (surveys.length > 0 || centerline !== undefined);
+    if (leaveDemo) {
+      this.isDemo = false;
+      this.demoBasemap = false;
+      this.centerline = undefined;
+    }
     if (centerline) {
       this.centerline = centerline;
       this.demoBasemap = false;
     }
-    const before = this.host.results.surveys;
+    const before = leaveDemo ? [] : this.host.results.surveys;
     this.setSurveys(uniqueSurveyNames([...before, ...surveys]), surveys.length > 0 ? before.length : undefined);
   }
 
@@ -223,6 +236,7 @@ export class SavedWorkspace {
     settings.carbonate = p.imports.length === 0 ? { ...DEMO_CARBONATE, invented: true } : undefined;
     this.centerline = fileOf(p.centerline);
     this.demoBasemap = p.demoBasemap;
+    this.isDemo = p.imports.length === 0 && p.demoBasemap;
     settings.colouring = p.colouring;
     settings.tileUrl = p.tileUrl;
     settings.useTiles = p.useTiles;

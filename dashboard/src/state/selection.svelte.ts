@@ -12,6 +12,8 @@ export class Selection {
   stationIds = $state<ReadonlySet<string>>(new Set());
   /** Brushed salinity interval [min, max], or null. */
   salinityBrush = $state<[number, number] | null>(null);
+  /** Names of the surveys chosen for Compare and the Briefing (two or more; empty: the default choice). */
+  comparedSurveys = $state.raw<string[]>([]);
   /** Station under the pointer (hover), or null. */
   hoveredStationId = $state<string | null>(null);
 

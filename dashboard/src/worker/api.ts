@@ -113,17 +113,30 @@ export function createWorkerApi() {
           useInputs(read, job.centerline, emit);
           files = job.surveys;
         } else if (job.kind === "setSurveys") {
-          useInputs(inputsOf(job.surveys, job.centerline), job.centerline, emit);
+          useInputs(inputsOf(job.surveys, job.centerline, job.settings.mouth), job.centerline, emit);
           files = [];
         } else if (job.kind === "centerline") {
-          const next = inputsOf(inputs.surveys, job.centerline);
+          const next = inputsOf(inputs.surveys, job.centerline, job.settings.mouth);
           const oldLine = centerlineFile?.name;
           next.issues = [...inputs.issues.filter((i) => i.file !== oldLine), ...next.issues];
           useInputs({ ...next, files: inputs.files, summary: inputs.summary }, job.centerline, emit);
         }
-        if (job.kind !== "analyze") {
+        const mouthChanged = job.kind === "analyze" && centerlineFile && job.settings.mouth !== inputs.choices.mouth;
+        if (mouthChanged) {
+          // Another mouth: the channel is re-read from the held centerline file, the km change.
+          const next = inputsOf(inputs.surveys, centerlineFile, job.settings.mouth);
+          useInputs({ ...next, files: inputs.files, summary: inputs.summary }, centerlineFile, emit);
+        }
+        if (job.kind !== "analyze" || mouthChanged) {
           analyses = inputs.surveys.map(() => undefined);
-          emit({ type: "loaded", surveys: inputs.surveys, issues: inputs.issues, channel });
+          emit({
+            type: "loaded",
+            surveys: inputs.surveys,
+            issues: inputs.issues,
+            channel,
+            notices: inputs.notices,
+            ...(inputs.offeredCenterline ? { offeredCenterline: inputs.offeredCenterline as object } : {}),
+          });
         }
         await analyseAll(run, job.settings, emit);
       } catch (error) {
@@ -142,8 +155,9 @@ export function createWorkerApi() {
     },
 
     /** The self-contained HTML briefing of the analysed surveys (analysis/report). */
-    async briefing(basemap: unknown, dataNotice: string | undefined): Promise<string> {
-      const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
+    async briefing(basemap: unknown, dataNotice: string | undefined, surveyIndices?: number[]): Promise<string> {
+      const chosen = surveyIndices ? surveyIndices.map((i) => analyses[i]) : analyses;
+      const done = chosen.filter((a): a is AnalysisResult => a !== undefined);
       const provenance = await fileProvenance(files, centerlineFile);
       return briefingHtml(done, inputs.channel?.network, provenance, basemap, dataNotice);
     },

@@ -7,6 +7,7 @@
 import {
   analyzeInputs,
   emptySummary,
+  placeWithoutCenterline,
   readCenterline,
   readInputs,
   type ChannelInput,
@@ -48,26 +49,35 @@ export function readFiles(
 export function readChannel(
   file: TextFile | undefined,
   surveys: readonly Survey[] = [],
+  mouth?: "start" | "end",
 ): { channel: ChannelInput | undefined; issues: ImportIssue[] } {
   if (!file) return { channel: undefined, issues: [] };
   const stations = surveys.flatMap((s) =>
     s.stations.map((st) => ({ lonLat: st.lonLat, salinity: st.salinity.accepted ? st.salinity.value : undefined })),
   );
-  const read = readCenterline(file.text, { fileName: file.name, stations });
+  const read = readCenterline(file.text, { fileName: file.name, stations, ...(mouth ? { mouth } : {}) });
   return { channel: read.channel, issues: read.issues };
 }
 
-/** Inputs from surveys already read (an import or a restored workspace) and a centerline file. */
-export function inputsOf(surveys: Survey[], centerline: TextFile | undefined): WorkspaceInputs {
-  const { channel, issues } = readChannel(centerline, surveys);
+/**
+ * Inputs from surveys already read (an import or a restored workspace) and a centerline file. Without
+ * a centerline the stations' along-channel distances are oriented by salinity and a centerline built
+ * from the station positions is offered (readInputs' rule; the user decides whether to use it).
+ */
+export function inputsOf(
+  surveys: Survey[],
+  centerline: TextFile | undefined,
+  mouth?: "start" | "end",
+): WorkspaceInputs {
+  const { channel, issues } = readChannel(centerline, surveys, mouth);
+  const base = { files: [], issues, summary: emptySummary(), choices: mouth ? { mouth } : {} };
+  if (centerline || surveys.length === 0) return { surveys, ...(channel ? { channel } : {}), ...base, notices: [] };
+  const placed = placeWithoutCenterline(surveys, false);
   return {
-    surveys,
-    ...(channel ? { channel } : {}),
-    files: [],
-    issues,
-    notices: [],
-    summary: emptySummary(),
-    choices: {},
+    surveys: placed.surveys,
+    ...base,
+    notices: placed.notices,
+    ...(placed.offered ? { offeredCenterline: placed.offered } : {}),
   };
 }
 
@@ -103,8 +113,13 @@ export function analyse(
   settings: AnalysisSettings,
   onStep?: (fraction: number, label: string) => void,
 ): { analysis: AnalysisResult; overlay: SurveyOverlay } {
+  const choices = {
+    ...inputs.choices,
+    ...(settings.offChannelM !== undefined ? { offChannelM: settings.offChannelM } : {}),
+    ...(settings.keepOffChannel ? { keepOffChannel: true } : {}),
+  };
   const results = analyzeInputs(
-    { ...inputs, surveys: [survey] },
+    { ...inputs, surveys: [survey], choices },
     { ...workspaceSettings(settings), ...(onStep ? { onProgress: onStep } : {}) },
   );
   const [first] = results.surveys;

@@ -11,6 +11,7 @@ import {
   readSurveyStream,
   stripBom,
   type ColumnMapping,
+  type LayerChoice,
   type ReadSurveyOptions,
   type StationTable,
 } from "../../../analysis/index.ts";
@@ -24,6 +25,8 @@ export interface ImportChoice {
   mapping?: ColumnMapping;
   /** Station table to join by station id. */
   stationTable?: StationTable;
+  /** Depth layer to keep per station and time (absent: the reader's default). */
+  layer?: LayerChoice;
 }
 
 /** Bytes per slice when a file is streamed (progress is reported once per slice). */
@@ -59,6 +62,7 @@ export async function importFile(
     fileName: name,
     ...(choice.mapping ? { mapping: choice.mapping } : {}),
     ...(choice.stationTable ? { stationTable: choice.stationTable } : {}),
+    ...(choice.layer ? { layer: choice.layer } : {}),
     ...(onProgress ? { onProgress } : {}),
   };
   const fromResult = (r: Awaited<ReturnType<typeof readSurveyStream>>): FileOutcome => ({
@@ -67,6 +71,7 @@ export async function importFile(
     issues: r.issues,
     summary: r.summary,
     mapping: r.mapping,
+    layer: r.layer,
   });
   switch (choice.kind) {
     case "surveyText":

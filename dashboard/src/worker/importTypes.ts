@@ -9,9 +9,11 @@ import {
   type ColumnMapping,
   type ImportIssue,
   type ImportSummary,
+  type LayerChoice,
   type StationTable,
   type Survey,
   type TextDialect,
+  type UnusedColumn,
 } from "../../../analysis/index.ts";
 
 /** A file to import: a browser File (streamed in the worker) or text already in memory. */
@@ -50,4 +52,8 @@ export interface FileOutcome {
   centerline?: object;
   /** Station table (kind "stationTable"). */
   stationTable?: StationTable;
+  /** The depth layer kept (surveys): the chosen one, else the reader's default for the file. */
+  layer?: LayerChoice;
+  /** Numeric columns that were not used (no unit, not recognised, not a mixing tracer...), with the reason. */
+  notUsed?: UnusedColumn[];
 }

@@ -39,6 +39,18 @@ export interface AnalysisSettings {
   constantSet: string;
   /** Salinity of the isohaline that marks the salt intrusion (default 2). */
   saltIntrusionSalinity: number;
+  /** Which end of an imported or drawn centerline is the mouth (absent: the one mouth rule decides). */
+  mouth?: "start" | "end";
+  /** Stations farther than this from the centerline are off-channel [m] (analysis default when absent). */
+  offChannelM?: number;
+  /** Keep off-channel stations in the fits and end-members (they are still listed). */
+  keepOffChannel?: boolean;
+}
+
+/** A choice made for the user while reading (layer, centerline from stations, distances), to state. */
+export interface InputNotice {
+  code: string;
+  message: string;
 }
 
 export type { WorkerApi } from "./api.ts";
@@ -63,7 +75,16 @@ export type AnalysisEvent =
   /** Work in progress: `done` of `total` steps of `stage`. */
   | { type: "progress"; stage: string; done: number; total: number }
   /** Files read: surveys, problems found, and the channel drawn on the map. */
-  | { type: "loaded"; surveys: Survey[]; issues: ImportIssue[]; channel: ChannelOverlay | undefined }
+  | {
+      type: "loaded";
+      surveys: Survey[];
+      issues: ImportIssue[];
+      channel: ChannelOverlay | undefined;
+      /** Choices made for the user while reading, to state. */
+      notices?: InputNotice[];
+      /** Without a centerline: one built from the station positions (GeoJSON LineString feature), offered to the user. */
+      offeredCenterline?: object;
+    }
   /** One survey analysed, with its map overlay (zones and maxima placed on the channel). */
   | { type: "analysis"; surveyIndex: number; analysis: AnalysisResult; overlay: SurveyOverlay }
   /**
