@@ -79,10 +79,18 @@ export function surveyObservations(survey: Survey, name: string): ObservationPoi
   return out;
 }
 
-/** The analysis with each constituent's `observations` filled from the survey (for drawing rejected values). */
+/**
+ * The analysis with each constituent's `observations` filled from the survey (for drawing rejected values).
+ * Stations left out of the fits as off-channel (unless the user kept them) are not drawn as observations:
+ * the plots show what was analysed, as the CLI's deviations do; the map and the notices list them.
+ */
 export function withObservations(analysis: SurveyAnalysisView, survey: Survey): SurveyAnalysisView {
+  const left = new Set(analysis.offChannel?.kept ? [] : (analysis.offChannelStations ?? []).map((o) => o.id));
   return {
     ...analysis,
-    constituents: analysis.constituents.map((c) => ({ ...c, observations: surveyObservations(survey, c.name) })),
+    constituents: analysis.constituents.map((c) => ({
+      ...c,
+      observations: surveyObservations(survey, c.name).filter((o) => !left.has(o.stationId)),
+    })),
   };
 }
