@@ -64,6 +64,8 @@ describe.skipIf(skipBrowser)("map tooltips, keyboard use and re-analysis in the 
     await s.page.locator("summary", { hasText: "Settings" }).click();
     await s.page.getByLabel("River discharge override (m³/s)").fill("321");
     await s.page.getByRole("button", { name: "Re-run analysis" }).click();
+    // Close the settings panel (it lies over the station list), as a user would, while the worker runs.
+    await s.page.locator("summary", { hasText: "Settings" }).click();
     // The progress bar shows while the worker runs; on a fast machine it may already be gone, so only responsiveness is asserted.
     await s.page.locator('[data-station-id="W07"]').click();
     expect(await selectionStatus(s.page)).toBe("Selected: W07");
