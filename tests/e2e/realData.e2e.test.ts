@@ -3,14 +3,12 @@ import { readFile } from "node:fs/promises";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
-  missingBrowserMessage,
-  openDashboard,
+  openReadyDashboard,
   REPO_ROOT,
   screenshot,
   settle,
   skipBrowser,
   waitForAnalysis,
-  waitForMap,
   type Session,
 } from "./browser.ts";
 
@@ -37,12 +35,7 @@ describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise expor
   let s: Session;
 
   beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-    await settle(s.page);
+    s = await openReadyDashboard();
   }, 120_000);
 
   afterAll(async () => {
