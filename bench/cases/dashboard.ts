@@ -5,8 +5,7 @@
 // every panel has finished changing, against a no-op choice (event to next frame) in the same run.
 import type { Page } from "playwright-core";
 import type { BenchCase, BenchRow } from "../benchCase.ts";
-import { chromiumAvailable, openDashboard } from "../../tests/e2e/browser.ts";
-import { ensureDist } from "../fixtures/dashboardDist.ts";
+import { openBenchDashboard } from "../fixtures/dashboardDist.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
 
 const READY =
@@ -73,14 +72,8 @@ function noOpRoundTrip(page: Page): Promise<number> {
 export const dashboardBench: BenchCase = {
   name: "dashboard",
   async run(): Promise<BenchRow[]> {
-    if (!chromiumAvailable) throw new Error("Chromium not found at /usr/bin/chromium (apt-get install -y chromium)");
-    ensureDist();
     const bare = await serveBareMap();
-    const s = await openDashboard();
-    // tsx (esbuild keepNames) wraps named functions in __name(); give the page a no-op one.
-    const nameShim = "globalThis.__name = globalThis.__name || ((f) => f);";
-    await s.context.addInitScript({ content: nameShim });
-    await s.page.evaluate(nameShim);
+    const s = await openBenchDashboard();
     try {
       const cold = await readyAt(s.page);
       const warm: number[] = [];

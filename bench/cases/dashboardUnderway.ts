@@ -8,8 +8,8 @@ import { loadavg } from "node:os";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
 import type { BenchCase, BenchRow } from "../benchCase.ts";
-import { chromiumAvailable, openDashboard, waitForAnalysis, waitForMap } from "../../tests/e2e/browser.ts";
-import { REPO, ensureDist } from "../fixtures/dashboardDist.ts";
+import { waitForAnalysis, waitForMap } from "../../tests/e2e/browser.ts";
+import { REPO, openBenchDashboard } from "../fixtures/dashboardDist.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
 import { underwayCsvChunks } from "../fixtures/underwayLog.ts";
 
@@ -67,17 +67,11 @@ function panZoomFps(page: Page, ms: number): Promise<number> {
 export const dashboardUnderwayBench: BenchCase = {
   name: "dashboard-underway",
   async run(): Promise<BenchRow[]> {
-    if (!chromiumAvailable) throw new Error("Chromium not found at /usr/bin/chromium (apt-get install -y chromium)");
-    ensureDist();
     const dir = join(REPO, "node_modules", ".cache", "brackline-underway-bench");
     mkdirSync(dir, { recursive: true });
     const logPath = writeLog(dir);
     const bare = await serveBareMap();
-    const s = await openDashboard();
-    // tsx (esbuild keepNames) wraps named functions in __name(); give the pages a no-op one.
-    const nameShim = "globalThis.__name = globalThis.__name || ((f) => f);";
-    await s.context.addInitScript({ content: nameShim });
-    await s.page.evaluate(nameShim);
+    const s = await openBenchDashboard();
     try {
       await waitForMap(s.page);
       await waitForAnalysis(s.page);
