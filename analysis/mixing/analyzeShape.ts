@@ -37,6 +37,8 @@ export interface ShapeInput {
   tangent: TangentLine;
   /** Extra river sd from a river history within the flushing time (Loder & Reichard 1981). */
   riverExtraSd?: number;
+  /** The freshest stations' group (mean, sd, salinity): the river when extrapolation is not possible. */
+  riverGroup: Endmember;
   evidence: MixingEvidence;
   nonConservative: boolean;
   quadCoef: number;
@@ -57,6 +59,13 @@ function interpolate(xs: Float64Array, ys: number[], x: number): number {
 /** Half-width (salinity units) of a break interval the tool calls located; wider intervals get a warning. */
 export const BREAK_GOAL_S = 2;
 
+/**
+ * Largest bootstrap standard error of the extrapolated river value, as a fraction of it, before the
+ * extrapolation to the reference salinity is called unstable and the freshest stations' mean is used
+ * at their own salinity instead (documented choice).
+ */
+export const RIVER_SE_LIMIT = 0.2;
+
 /** Fewest stations inside a reaction zone before a warning. */
 export const MIN_ZONE_STATIONS = 3;
 
@@ -72,6 +81,8 @@ export const MIN_ZONE_STATIONS = 3;
 export function analyzeShape(p: ShapeInput): {
   cls: BehaviourClass;
   river: Endmember;
+  /** The river end-member was replaced by the freshest stations' mean (the dilution line must follow). */
+  riverReplaced: boolean;
   fit: FitCurve;
   effective: ConstituentAnalysis["effectiveEndmember"];
   percent?: ConstituentAnalysis["percentChange"];
@@ -97,31 +108,74 @@ export function analyzeShape(p: ShapeInput): {
   const d1 = new Float64Array(G);
   const d2 = new Float64Array(G);
   evaluateSplineGrid(curve.spline, grid, f, d1, d2);
-  const sr = river.salinity;
-  const cStar = tangent.intercept + tangent.slope * sr;
+
   const draws = o.bootstrapDraws ?? 2000;
   const bGrid = salinityGrid(sMin, sMax, Math.min(G, BOOTSTRAP_GRID_POINTS));
   const seed = o.seed ?? 1;
   const x = Float64Array.from(used, (s) => s.salinity);
-  const yHat = Float64Array.from(used, (s) => twoPhaseAt(tp, s.salinity)[0]);
+  // Replicates are drawn around the two-phase fit; when the straight line was kept, around the best
+  // two-phase alternative it was tested against, so each replicate re-runs the selection (Efron 2014).
+  const centre: TwoPhaseFit = tp.linear && tp.alternative ? { ...tp, ...tp.alternative, linear: false } : tp;
+  const yHat = Float64Array.from(used, (s) => twoPhaseAt(centre, s.salinity)[0]);
   const dof = Math.max(1, n - tp.params);
   const scatter = Math.max(1, Math.sqrt(tp.rss / dof));
-  const override = river.source === "override";
-  const bs = runBootstrap({
-    x,
-    yHat,
-    sigmaEff: Float64Array.from(used, (s) => s.sigma * scatter),
-    w: Float64Array.from(used, (s) => 1 / s.sigma ** 2),
-    lambda: curve.lambda,
-    tieTol: TIE_FRACTION * (sMax - sMin),
-    grid: bGrid,
-    referenceSalinity: sr,
-    riverOverride: override ? { conc: river.conc, sd: river.concSd } : undefined,
-    riverExtraSd: p.riverExtraSd,
-    sea: { salinity: sea.salinity, conc: sea.conc, sd: sea.concSd / Math.sqrt(Math.max(1, sea.n)) },
-    draws,
-    seed,
-  });
+  const boot = (sRef: number, rv: Endmember, override: boolean, effectiveAt: number) =>
+    runBootstrap({
+      x,
+      yHat,
+      sigmaEff: Float64Array.from(used, (s) => s.sigma * scatter),
+      w: Float64Array.from(used, (s) => 1 / s.sigma ** 2),
+      lambda: curve.lambda,
+      tieTol: TIE_FRACTION * (sMax - sMin),
+      grid: bGrid,
+      referenceSalinity: sRef,
+      riverOverride: override ? { conc: rv.conc, sd: rv.concSd } : undefined,
+      riverExtraSd: p.riverExtraSd,
+      sea: { salinity: sea.salinity, conc: sea.conc, sd: sea.concSd / Math.sqrt(Math.max(1, sea.n)) },
+      draws,
+      seed,
+      estimates: {
+        effective: effectiveAt,
+        percent: rv.conc > 0 ? (100 * (effectiveAt - rv.conc)) / rv.conc : Number.NaN,
+        riverConc: rv.conc,
+        netDelta: effectiveAt - rv.conc,
+      },
+    });
+  let override = river.source === "override";
+  // The straight line through all stations is rejected yet kept (no seaward phase separates): its
+  // value at S = 0 is no estimate of the river, so the freshest stations' mean is used.
+  const lineRejected = tp.linear && (p.nonConservative || p.evidence.chiSquaredP < 0.01);
+  let riverReplaced = false;
+  const useGroup = (why: string): void => {
+    const g = p.riverGroup;
+    river = {
+      ...g,
+      concSd: g.n >= 2 ? g.concSd / Math.sqrt(g.n) : g.concSd,
+      method: `mean of the freshest stations at S = ${g.salinity.toFixed(2)} (${why})`,
+    };
+    override = true;
+    riverReplaced = true;
+  };
+  if (!override && lineRejected) useGroup("no curve to extrapolate along");
+  let sr = river.salinity;
+  let cStar = tangent.intercept + tangent.slope * sr;
+  let bs = boot(sr, river, override, cStar);
+  if (
+    !override &&
+    draws > 0 &&
+    (!(river.conc > 0) || (bs.riverSe !== undefined && bs.riverSe > RIVER_SE_LIMIT * Math.abs(river.conc)))
+  ) {
+    const extrapolated = river.conc;
+    const se = bs.riverSe;
+    useGroup("extrapolation to S = 0 unstable");
+    warnings.push({
+      code: "river-extrapolation-unstable",
+      message: `Extrapolating the fitted curve from the freshest stations to S = ${sr} gives C₀ = ${extrapolated.toPrecision(3)} ${unit}${se !== undefined ? ` ± ${se.toPrecision(2)} (bootstrap standard error)` : ""}, too uncertain to use: the freshest stations disagree more than a mixing curve explains (river variability or a steep change at the lowest salinities). C₀ and C*₀ are given at the freshest stations' salinity S = ${river.salinity.toFixed(2)} instead. A river sample upstream of the salt intrusion would settle it.`,
+    });
+    sr = river.salinity;
+    cStar = tangent.intercept + tangent.slope * sr;
+    bs = boot(sr, river, override, cStar);
+  }
   if (draws > 0 && bs.usable < 0.9 * draws)
     warnings.push({
       code: "bootstrap-degenerate",
@@ -208,6 +262,7 @@ export function analyzeShape(p: ShapeInput): {
   return {
     cls,
     river,
+    riverReplaced,
     fit: {
       method: curve.method,
       salinity: Array.from(grid),
