@@ -1,6 +1,6 @@
 // `npm run calibrate`: seeded calibration study of the mixing engine against synthetic surveys
 // (bench/calibration/forwardModel.ts). Prints one table; goals from issue 14 beside it.
-// Options: --surveys N (default 40), --draws D (default 200), --full (every design × 1, 2, 5 % noise),
+// Options: --surveys N (default 100), --draws D (default 200), --full (every design × 1, 2, 5 % noise),
 // --shape TEXT (only shapes whose name contains TEXT).
 import { SHAPES, type SurveyDesign } from "./calibration/forwardModel.ts";
 import { scoreCell, type CellScore } from "./calibration/cell.ts";
@@ -10,7 +10,7 @@ const opt = (name: string, dflt: number): number => {
   const i = args.indexOf(`--${name}`);
   return i >= 0 ? Number(args[i + 1]) : dflt;
 };
-const surveys = opt("surveys", 40);
+const surveys = opt("surveys", 100);
 const draws = opt("draws", 200);
 const full = args.includes("--full");
 const onlyIdx = args.indexOf("--shape");

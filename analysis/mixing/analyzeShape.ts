@@ -185,7 +185,26 @@ export function analyzeShape(p: ShapeInput): {
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
-  else
+  if (tangent.method === "curve-tangent") {
+    // No straight seaward phase: C*₀ is the tangent at the seaward-most station, a slope at the end of
+    // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
+    // their difference widens the intervals (between-model term of Buckland et al. 1997).
+    const cSpline = f[G - 1]! - (sMax - sr) * d1[G - 1]!;
+    const delta = Math.abs(cSpline - cStar);
+    const widen = (e: Estimate, d: number): Estimate => ({
+      ...e,
+      lower: e.value - Math.hypot(e.value - e.lower, d),
+      upper: e.value + Math.hypot(e.upper - e.value, d),
+    });
+    if (Number.isFinite(delta)) {
+      effective = widen(effective, delta);
+      if (percent) percent = widen(percent, (100 * delta) / river.conc);
+    }
+    warnings.push({
+      code: "reaction-reaches-mouth",
+      message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it). It is the effective end-member for that section only; stations farther seaward would fix it.`,
+    });
+  } else
     warnings.push({
       code: "river-nonpositive",
       message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,

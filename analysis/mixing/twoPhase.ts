@@ -43,8 +43,11 @@ export interface TwoPhaseFit {
   alternative?: { breakSalinity: number; coef: [number, number, number, number] };
 }
 
-/** Significance of the two-phase vs straight-line F-test (documented choice). */
-export const TWO_PHASE_ALPHA = 0.05;
+/**
+ * Significance of the two-phase vs straight-line F-test: half of 0.05 (Bonferroni), shared with
+ * the quadratic F-test of the class decision (evidence.ts CURVATURE_ALPHA; documented choice).
+ */
+export const TWO_PHASE_ALPHA = 0.025;
 /** Break candidates on the grid before refinement. */
 const GRID = 24;
 /** Golden-section refinement steps around the best grid break. */

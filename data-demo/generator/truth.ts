@@ -3,8 +3,8 @@
  *
  * "True" means the value of the noise-free forward model, not a property of the noisy
  * station data: end-members are the model's boundary concentrations, the effective river
- * end-member is the prescribed C*₀ at the mouth (= net mouth flux / Q, Eq. 3 of
- * mixing-methods.md §1.2), the reaction zone is the salinity interval where the prescribed
+ * end-member is the prescribed C*₀ at the mouth (= net mouth flux / Q,
+ * Boyle et al. 1974, Eq. 3), the reaction zone is the salinity interval where the prescribed
  * reaction acts, and the maximum is the model concentration maximum inside the estuary.
  * An analysis of the station data recovers them only within its own uncertainty.
  */

@@ -23,7 +23,7 @@ describe("mixing calibration guards (seeded synthetic surveys; Boyle et al. 1974
     expectWithin(s.effectiveCoverage >= 10 / 12 ? 1 : 0, 1, 0, `coverage ${s.effectiveCoverage}`);
   });
 
-  it("exact data (no noise, 35 km-even stations): C*₀ within 1 %, rate integral within 5 % of Q·(C*₀ − C₀) (mixing-methods.md §1.3 Eq. 5)", () => {
+  it("exact data (no noise, 35 km-even stations): C*₀ within 1 %, rate integral within 5 % of Q·(C*₀ − C₀) (Boyle et al. 1974 integrated form, Eq. 5)", () => {
     for (const name of ["removal→S5", "desorption→S10"]) {
       const s = scoreCell(shape(name), { stations: 35, spacing: "km", noise: 0 }, 1, 0, 1, true);
       expectWithin(s.effectiveBiasPct, 0, 1, `${name} C*₀ error [%]`);
