@@ -185,6 +185,11 @@ export function analyzeShape(p: ShapeInput): {
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
+  else
+    warnings.push({
+      code: "river-nonpositive",
+      message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,
+    });
   if (tangent.method === "curve-tangent") {
     // No straight seaward phase: C*₀ is the tangent at the seaward-most station, a slope at the end of
     // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
@@ -204,11 +209,7 @@ export function analyzeShape(p: ShapeInput): {
       code: "reaction-reaches-mouth",
       message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it). It is the effective end-member for that section only; stations farther seaward would fix it.`,
     });
-  } else
-    warnings.push({
-      code: "river-nonpositive",
-      message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,
-    });
+  }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
   const mS = twoPhaseMaximum(tp, sMax);
   // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the
