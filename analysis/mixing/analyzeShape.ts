@@ -23,6 +23,7 @@ import { dilutionAt } from "./dilutionLine.ts";
 import { fluxSummary } from "./flux.ts";
 import { rateProfile } from "./rateProfile.ts";
 import { estimateOf, finiteEstimate } from "./estimate.ts";
+import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -65,6 +66,9 @@ export const BREAK_GOAL_S = 2;
  * at their own salinity instead (documented choice).
  */
 export const RIVER_SE_LIMIT = 0.2;
+
+/** Smallest χ²_ν of the two-phase fit at which C₀ and C*₀ are bootstrap bias-corrected (documented choice). */
+export const BIAS_CORRECTION_MIN_CHI2 = 0.25;
 
 /** Fewest stations inside a reaction zone before a warning. */
 export const MIN_ZONE_STATIONS = 3;
@@ -182,6 +186,15 @@ export function analyzeShape(p: ShapeInput): {
       message: `Only ${bs.usable} of ${draws} bootstrap draws were usable; intervals are rough.`,
     });
   if (!override && bs.riverSe !== undefined && Number.isFinite(bs.riverSe)) river = { ...river, concSd: bs.riverSe };
+  // Bootstrap bias correction of C₀ (extrapolated along the curve) and C*₀ (break selection): both
+  // are nonlinear in the data and biased by the noise (Efron & Tibshirani 1993). Only for a two-phase
+  // fit (the kept line gives C*₀ = C₀ by construction) and only where the residuals show noise of
+  // the stated precision (χ²_ν ≥ {@link BIAS_CORRECTION_MIN_CHI2}): on data far smoother than that
+  // the replicates' noise is not the data's. The tangent drawn stays the fitted line.
+  if (draws > 0 && !tp.linear && tp.rss / dof >= BIAS_CORRECTION_MIN_CHI2) {
+    if (!override) river = { ...river, conc: bootstrapBiasCorrected(bs.riverDraws, river.conc) };
+    cStar = bootstrapBiasCorrected(bs.effectiveDraws, cStar);
+  }
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
