@@ -70,6 +70,9 @@ export const RIVER_SE_LIMIT = 0.2;
 /** Smallest χ²_ν of the two-phase fit at which C₀ and C*₀ are bootstrap bias-corrected (documented choice). */
 export const BIAS_CORRECTION_MIN_CHI2 = 0.25;
 
+/** Fewest stations on the straight seaward line before a `short-seaward-line` warning (a line through 2 points tests nothing). */
+export const MIN_SEAWARD_STATIONS = 3;
+
 /** Fewest stations inside a reaction zone before a warning. */
 export const MIN_ZONE_STATIONS = 3;
 
@@ -224,6 +227,11 @@ export function analyzeShape(p: ShapeInput): {
     });
   }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
+  if (segStart !== undefined && tangent.nStations < MIN_SEAWARD_STATIONS)
+    warnings.push({
+      code: "short-seaward-line",
+      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} cannot be tested, so the class does not say "then conservative". Stations between there and the sea end-member would settle it.`,
+    });
   const mS = twoPhaseMaximum(tp, sMax);
   // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the
   // % change interval excludes zero.

@@ -19,10 +19,14 @@ export interface CellScore {
   /** Point estimate outside its own interval (C*₀ or % change). */
   outsideOwnInterval: number;
   classAccuracy: number;
+  /** Share of surveys with the right class or a warning that the stations cannot establish it. */
+  classOrWarned: number;
   /** Removal vs addition right (conservative shapes: "conservative" given). */
   directionAccuracy: number;
   /** Share of surveys with the break within ±2 salinity units (undefined without a true break). */
   breakWithin2?: number;
+  /** Share of surveys with the break within ±2 or a `break-uncertain` warning saying it is not (the tool says so). */
+  breakWithin2OrWarned?: number;
   breakMedianError?: number;
   /** Share of surveys whose break interval covers the true break (a missing break counts as a miss). */
   breakCoverage?: number;
@@ -33,6 +37,9 @@ export interface CellScore {
   /** Mean reported river reference salinity. */
   referenceSalinity: number;
 }
+
+/** Warnings by which the tool says the stations cannot establish the class. */
+const CLASS_LIMIT_WARNINGS = new Set(["short-seaward-line", "reaction-reaches-mouth", "few-stations-in-zone"]);
 
 const covers = (e: Estimate | undefined, truth: number): boolean => !!e && e.lower <= truth && truth <= e.upper;
 const inside = (e: Estimate | undefined): boolean => !e || (e.lower <= e.value && e.value <= e.upper);
@@ -67,9 +74,11 @@ export function scoreCell(
     pCov = 0,
     outside = 0,
     cls = 0,
+    clsHonest = 0,
     dir = 0,
     failures = 0,
     brk = 0,
+    brkHonest = 0,
     bCov = 0,
     mCov = 0,
     mN = 0,
@@ -116,6 +125,7 @@ export function scoreCell(
     if (covers(p, truth.percent)) pCov++;
     if (!inside(e) || !inside(p)) outside++;
     if (r.class === shape.expectedClass) cls++;
+    if (r.class === shape.expectedClass || r.warnings.some((w) => CLASS_LIMIT_WARNINGS.has(w.code))) clsHonest++;
     const removal = r.class === "removal" || r.class === "removal-then-conservative";
     const addition = r.class === "addition" || r.class === "maximum-then-conservative";
     if (shape.percent === 0 ? r.class === "conservative" : shape.percent < 0 ? removal : addition) dir++;
@@ -124,6 +134,7 @@ export function scoreCell(
       const err = b === undefined ? Number.POSITIVE_INFINITY : Math.abs(b - truth.breakSalinity);
       bErr.push(err);
       if (err <= 2) brk++;
+      if (err <= 2 || r.warnings.some((w) => w.code === "break-uncertain")) brkHonest++;
       if (covers(r.breakSalinity, truth.breakSalinity)) bCov++;
     }
     if (truth.maximumSalinity !== undefined) {
@@ -153,8 +164,10 @@ export function scoreCell(
     percentCoverage: pCov / Math.max(1, ok),
     outsideOwnInterval: outside,
     classAccuracy: cls / Math.max(1, ok),
+    classOrWarned: clsHonest / Math.max(1, ok),
     directionAccuracy: dir / Math.max(1, ok),
     breakWithin2: truth.breakSalinity !== undefined ? brk / Math.max(1, ok) : undefined,
+    breakWithin2OrWarned: truth.breakSalinity !== undefined ? brkHonest / Math.max(1, ok) : undefined,
     breakMedianError: median(bErr),
     breakCoverage: truth.breakSalinity !== undefined ? bCov / Math.max(1, ok) : undefined,
     maximumMedianError: median(mErr),
