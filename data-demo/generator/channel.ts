@@ -6,7 +6,7 @@
  * (Savenije 1993, J. Hydrol. 148, 203–218). The dispersion
  * coefficient is constant along the channel within one survey and grows weakly with discharge,
  * K = K_ref·(Q/Q_ref)^0.3, an invented rule standing in for stronger gravitational
- * circulation at high flow (cf. the Q⁻¹ and Q^(−1/3) intrusion scalings of Hansen & Rattray 1965 and Chatwin 1976, from memory).
+ * circulation at high flow (cf. the Q^(−1/3) scaling of Hansen & Rattray 1965 / Chatwin 1976, from memory).
  */
 import type { TransportGrid } from "./transport.ts";
 
