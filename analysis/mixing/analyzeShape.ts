@@ -206,8 +206,9 @@ export function analyzeShape(p: ShapeInput): {
       code: "river-nonpositive",
       message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,
     });
-  if (tangent.method === "curve-tangent") {
-    // No straight seaward phase: C*₀ is the tangent at the seaward-most station, a slope at the end of
+  const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
+  if (tangent.method === "curve-tangent" || shortLine) {
+    // No straight seaward phase, or one resting on < 3 stations: C*₀ is a slope at the end of
     // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
     // their difference widens the intervals (between-model term of Buckland et al. 1997).
     const cSpline = f[G - 1]! - (sMax - sr) * d1[G - 1]!;
@@ -221,10 +222,11 @@ export function analyzeShape(p: ShapeInput): {
       effective = widen(effective, delta);
       if (percent) percent = widen(percent, (100 * delta) / river.conc);
     }
-    warnings.push({
-      code: "reaction-reaches-mouth",
-      message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it). It is the effective end-member for that section only; stations farther seaward would fix it.`,
-    });
+    if (!shortLine)
+      warnings.push({
+        code: "reaction-reaches-mouth",
+        message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it). It is the effective end-member for that section only; stations farther seaward would fix it.`,
+      });
   }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
   if (segStart !== undefined && tangent.nStations < MIN_SEAWARD_STATIONS)

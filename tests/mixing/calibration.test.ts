@@ -32,6 +32,13 @@ describe("mixing calibration guards (seeded synthetic surveys; Boyle et al. 1974
     }
   });
 
+  it("desorption ending at S 10, 20 salinity-even stations, 2 % noise: % change bias within 2 pp (bootstrap bias correction, Efron & Tibshirani 1993 §10) and the 95 % BC interval (Efron 1987) covers the truth in ≥ 85 % of 40 surveys", () => {
+    const s = scoreCell(shape("desorption→S10"), { stations: 20, spacing: "salinity", noise: 0.02 }, 40, 150);
+    expectWithin(s.percentBiasPp, 0, 2, "bias of % change [pp]");
+    expectWithin(s.percentCoverage >= 0.85 ? 1 : 0, 1, 0, `coverage of % change ${s.percentCoverage}`);
+    expectWithin(s.outsideOwnInterval, 0, 0, "estimates outside their own interval");
+  });
+
   const analyse = (name: string, stations: number, seed: number, draws = 200) =>
     analyzeConstituent(
       survey(shape(name), { stations, spacing: "km", noise: 0.02 }, seed).map((st) => ({
