@@ -8,7 +8,7 @@ export interface CellScore {
   shape: string;
   design: SurveyDesign;
   surveys: number;
-  /** Surveys where analyzeConstituent threw or gave no C*₀. */
+  /** Surveys where analyzeConstituent threw or gave no C*₀ (class accuracy still counts the latter). */
   failures: number;
   effectiveBiasPct: number;
   effectiveRmsePct: number;
@@ -75,6 +75,7 @@ export function scoreCell(
     outside = 0,
     cls = 0,
     clsHonest = 0,
+    analysed = 0,
     dir = 0,
     failures = 0,
     brk = 0,
@@ -112,6 +113,13 @@ export function scoreCell(
       failures++;
       continue;
     }
+    // Class and direction over every analysed survey (also those whose % change is not determined).
+    analysed++;
+    if (r.class === shape.expectedClass) cls++;
+    if (r.class === shape.expectedClass || r.warnings.some((w) => CLASS_LIMIT_WARNINGS.has(w.code))) clsHonest++;
+    const removal = r.class === "removal" || r.class === "removal-then-conservative";
+    const addition = r.class === "addition" || r.class === "maximum-then-conservative";
+    if (shape.percent === 0 ? r.class === "conservative" : shape.percent < 0 ? removal : addition) dir++;
     const e = r.effectiveEndmember;
     const p = r.percentChange;
     if (!e || !p) {
@@ -124,11 +132,6 @@ export function scoreCell(
     if (covers(e, truth.effective)) eCov++;
     if (covers(p, truth.percent)) pCov++;
     if (!inside(e) || !inside(p)) outside++;
-    if (r.class === shape.expectedClass) cls++;
-    if (r.class === shape.expectedClass || r.warnings.some((w) => CLASS_LIMIT_WARNINGS.has(w.code))) clsHonest++;
-    const removal = r.class === "removal" || r.class === "removal-then-conservative";
-    const addition = r.class === "addition" || r.class === "maximum-then-conservative";
-    if (shape.percent === 0 ? r.class === "conservative" : shape.percent < 0 ? removal : addition) dir++;
     if (truth.breakSalinity !== undefined) {
       const b = reportedBreak(r);
       const err = b === undefined ? Number.POSITIVE_INFINITY : Math.abs(b - truth.breakSalinity);
@@ -163,9 +166,9 @@ export function scoreCell(
     effectiveCoverage: eCov / Math.max(1, ok),
     percentCoverage: pCov / Math.max(1, ok),
     outsideOwnInterval: outside,
-    classAccuracy: cls / Math.max(1, ok),
-    classOrWarned: clsHonest / Math.max(1, ok),
-    directionAccuracy: dir / Math.max(1, ok),
+    classAccuracy: cls / Math.max(1, analysed),
+    classOrWarned: clsHonest / Math.max(1, analysed),
+    directionAccuracy: dir / Math.max(1, analysed),
     breakWithin2: truth.breakSalinity !== undefined ? brk / Math.max(1, ok) : undefined,
     breakWithin2OrWarned: truth.breakSalinity !== undefined ? brkHonest / Math.max(1, ok) : undefined,
     breakMedianError: median(bErr),
