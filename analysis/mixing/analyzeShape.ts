@@ -195,8 +195,12 @@ export function analyzeShape(p: ShapeInput): {
   // the stated precision (χ²_ν ≥ {@link BIAS_CORRECTION_MIN_CHI2}): on data far smoother than that
   // the replicates' noise is not the data's. The tangent drawn stays the fitted line.
   if (draws > 0 && !tp.linear && tp.rss / dof >= BIAS_CORRECTION_MIN_CHI2) {
-    if (!override) river = { ...river, conc: bootstrapBiasCorrected(bs.riverDraws, river.conc) };
-    cStar = bootstrapBiasCorrected(bs.effectiveDraws, cStar);
+    // A correction that leaves the bootstrap interval is not credible (skewed, unstable replicates).
+    const within = (v: number, iv: [number, number] | undefined, fallback: number): number =>
+      iv && v >= iv[0] && v <= iv[1] ? v : fallback;
+    if (!override)
+      river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
+    cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
   }
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
