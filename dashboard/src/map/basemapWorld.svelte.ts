@@ -68,6 +68,7 @@ export class WorldBasemap {
         this.#requested.delete(resolution);
         this.error = `World land (Natural Earth 1:${resolution}) could not be loaded: ${error instanceof Error ? error.message : String(error)}`;
         if (this.loading === resolution) this.loading = undefined;
+        console.warn(this.error);
       },
     );
   }
