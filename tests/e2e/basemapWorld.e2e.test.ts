@@ -175,9 +175,14 @@ describe.skipIf(skipBrowser || !present)("world land around San Francisco Bay af
     expect(landRequests.some((u) => /land-10m/.test(u))).toBe(true);
   }, 240_000);
 
-  it("the map attribution names Natural Earth (public domain)", async () => {
-    const text = (await s.page.locator(".maplibregl-ctrl-attrib").textContent()) ?? "";
+  it("the map attribution (folded behind its button) names Natural Earth (public domain)", async () => {
+    const attribution = s.page.locator(".maplibregl-ctrl-attrib");
+    await attribution.locator(".maplibregl-ctrl-attrib-button").click();
+    await expect.poll(async () => attribution.locator(".maplibregl-ctrl-attrib-inner").isVisible()).toBe(true);
+    const text = (await attribution.locator(".maplibregl-ctrl-attrib-inner").textContent()) ?? "";
     expect(text).toMatch(/Natural Earth.*public domain/);
+    await screenshot(s.page, "basemap-world-2-attribution");
+    await attribution.locator(".maplibregl-ctrl-attrib-button").click();
   });
 
   it("the settings switch takes the world land off and puts it back", async () => {
