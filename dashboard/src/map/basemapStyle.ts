@@ -58,6 +58,8 @@ export function worldLandStyle(
       [WORLD_LAND_SOURCE]: {
         type: "geojson",
         data: source.url,
+        // Natural Earth 1:10m vertices lie ≥ 0.0017° (≈ 200 m) apart: tiles past zoom 12 add nothing, MapLibre overzooms.
+        maxzoom: 12,
         attribution: worldLandAttribution(source.resolution),
       },
     },
