@@ -295,8 +295,12 @@ export function fitTwoPhase(
       p = exactP ? fUpperP(F, extra, dfRes) : fPCached(F, extra, dfRes);
     }
   }
-  if (!(p < TWO_PHASE_ALPHA))
-    return { ...line, pCurvature: p, alternative: { breakSalinity: bestB, coef: [c[0]!, c[1]!, c[2]!, c[3]!] } };
+  if (!(p < TWO_PHASE_ALPHA)) {
+    line.pCurvature = p;
+    // The alternative is for the full-data fit's bootstrap; replicates (exactP false) never use it.
+    if (exactP) line.alternative = { breakSalinity: bestB, coef: [c[0]!, c[1]!, c[2]!, c[3]!] };
+    return line;
+  }
   return {
     breakSalinity: bestB,
     linear: false,
