@@ -5,7 +5,7 @@
  * range. No science here: every value is the summary's; this file only places it.
  */
 import { scaleUtc } from "d3-scale";
-import { formatSignificant, type ArchiveSummary, type Estimate } from "../../../analysis/index.ts";
+import { classWords, formatSignificant, type ArchiveSummary, type Estimate } from "../../../analysis/index.ts";
 import { okabeIto, neutral } from "../panels/lib/palette.ts";
 import { linear, makeFrame, round, type Frame } from "../panels/lib/scales.ts";
 
@@ -92,6 +92,8 @@ export function timeAxis(summary: ArchiveSummary, frame: Frame, nTicks = 5): Tim
 /** One survey's mark in a panel: position, interval and style. */
 export interface PanelPoint {
   survey: string;
+  /** The survey's date (YYYY-MM-DD), when dated. */
+  date?: string;
   x: number;
   y: number;
   /** Interval ends in px (absent: no interval). */
@@ -117,8 +119,13 @@ export interface SmallMultiple {
   unit: string;
   axis: ValueAxis;
   points: PanelPoint[];
-  /** Surveys of the series without this quantity (no date or no estimate). */
-  missing: number;
+  /**
+   * Dated surveys of the series without an estimate of the quantity (e.g. too little data): a
+   * hollow mark on the bottom edge at their date, so every survey of the series shows.
+   */
+  unestimated: PanelPoint[];
+  /** Surveys of the series without a date (not drawn). */
+  undated: number;
 }
 
 /** The quantities the small multiples show. */
@@ -177,6 +184,7 @@ export function smallMultiples(
       const st = styleOf(p, styles);
       return {
         survey: p.survey,
+        date: p.date!.slice(0, 10),
         x: time.x(dayMs(p.date)!),
         y: y(e.value),
         ...(Number.isFinite(e.lower) && Number.isFinite(e.upper) ? { y0: y(e.lower), y1: y(e.upper) } : {}),
@@ -185,6 +193,21 @@ export function smallMultiples(
         title: `${p.survey}, ${p.date}${p.season ? `, ${p.season}` : ""}: ${estimateText(e, unit)}`,
       };
     });
-    return { name: s.name, unit, axis, points, missing: s.points.length - pts.length };
+    const unestimated = s.points
+      .filter((p) => dayMs(p.date) !== undefined && p[quantity] === undefined)
+      .map((p): PanelPoint => {
+        const st = styleOf(p, styles);
+        return {
+          survey: p.survey,
+          date: p.date!.slice(0, 10),
+          x: time.x(dayMs(p.date)!),
+          y: frame.y1 - 4,
+          colour: st.colour,
+          mark: st.mark,
+          title: `${p.survey}, ${p.date}${p.season ? `, ${p.season}` : ""}: no estimate (${classWords(p.class)})`,
+        };
+      });
+    const undated = s.points.filter((p) => dayMs(p.date) === undefined).length;
+    return { name: s.name, unit, axis, points, unestimated, undated };
   });
 }

@@ -58,8 +58,27 @@ describe("archive view model", () => {
     const jan = si!.points.find((p) => p.survey === "cruise 2016-01")!;
     expect(jan.colour).toBe(styles.get("winter")!.colour);
     expect(jan.title).toContain(formatSignificant(summary.series[0]!.points[0]!.percentChange!.value, 3));
+    expect(si!.unestimated).toHaveLength(0);
     const c0 = smallMultiples(summary, "effectiveEndmember", time, styles)[0]!;
     expect(c0.axis.title).toBe("C*₀ (µmol/L)");
+  });
+
+  it("smallMultiples() keeps a survey without an estimate as a hollow mark on the time axis", () => {
+    const time = timeAxis(summary, MULTIPLE_FRAME);
+    const cut = {
+      ...summary,
+      series: summary.series.map((s) => ({
+        ...s,
+        points: s.points.map((p, i) =>
+          i === 3 ? { ...p, class: "insufficient-data" as const, percentChange: undefined } : p,
+        ),
+      })),
+    };
+    const [si] = smallMultiples(cut, "percentChange", time, styles);
+    expect(si!.points).toHaveLength(83);
+    expect(si!.unestimated).toHaveLength(1);
+    expect(si!.unestimated[0]!.y).toBe(MULTIPLE_FRAME.y1 - 4);
+    expect(si!.unestimated[0]!.title).toMatch(/no estimate/);
   });
 
   it("surveysInRange() chooses the surveys dated inside the brushed dates, in either drag direction", () => {
