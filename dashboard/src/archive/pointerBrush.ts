@@ -42,7 +42,11 @@ export function attachBrush(svg: SVGSVGElement, handlers: () => BrushHandlers): 
       id: e.pointerId,
     };
     dragging = false;
-    svg.setPointerCapture?.(e.pointerId);
+    try {
+      svg.setPointerCapture?.(e.pointerId);
+    } catch {
+      // a pointer the browser does not track (a synthetic event): brushing works without capture
+    }
   };
   const move = (e: PointerEvent) => {
     if (!start || e.pointerId !== start.id) return;
