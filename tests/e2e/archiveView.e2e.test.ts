@@ -127,10 +127,27 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2018 
     await s.page.setViewportSize({ width: 1280, height: 800 });
     await settle(s.page);
     await s.page.screenshot({ path: `${SHOTS}/archview-3-brushed-1280.png` });
+    await s.page.locator('[data-testid="archive-findings"]').scrollIntoViewIfNeeded();
+    await s.page.screenshot({ path: `${SHOTS}/archview-3b-findings-1280.png` });
     await s.page.locator('[data-testid="archive-chosen"]').scrollIntoViewIfNeeded();
     await s.page.screenshot({ path: `${SHOTS}/archview-4-chosen-1280.png` });
     await s.page.setViewportSize({ width: 1440, height: 900 });
   }, 120_000);
+
+  it("a period typed in the date fields (keyboard) chooses the surveys dated inside it", async () => {
+    await s.page.locator('[data-testid="archive-from"]').fill("2018-06-01");
+    await s.page.locator('[data-testid="archive-to"]').fill("2018-08-31");
+    await s.page.locator('[data-testid="archive-to"]').dispatchEvent("change");
+    await s.page.waitForFunction(() =>
+      document.querySelector('[data-testid="archive-chosen"] h3 span')?.textContent?.includes("2018-06"),
+    );
+    const dates = await s.page
+      .locator('[data-testid="archive-chosen-table"] tbody tr td:first-of-type')
+      .evaluateAll((els) => els.map((e) => e.textContent ?? ""));
+    console.log(`archiveView.e2e: typed period chose ${dates.join(", ")}`);
+    expect(dates.length).toBeGreaterThan(0);
+    for (const d of dates) expect(d >= "2018-06-01" && d <= "2018-08-31", d).toBe(true);
+  }, 60_000);
 
   it("clicking a mark opens that survey in the main view", async () => {
     const mark = s.page.locator(`[data-testid="archive-multiple"][data-constituent="${silicate}"] g.pt`).nth(2);
