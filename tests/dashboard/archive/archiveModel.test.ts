@@ -135,3 +135,22 @@ describe("archive view model", () => {
     expect(few.reason).toMatch(/3 or more/);
   });
 });
+
+describe("ArchiveState", () => {
+  it("refresh() keeps the newest of two overlapping answers from the worker", async () => {
+    const { ArchiveState } = await import("../../../dashboard/src/archive/archiveState.svelte.ts");
+    const waits: Array<(a: { reason: string }) => void> = [];
+    const state = new ArchiveState(() => ({
+      archive: () => new Promise((resolve) => waits.push(resolve)),
+    }));
+    const first = state.refresh();
+    const second = state.refresh();
+    expect(state.loading).toBe(true);
+    waits[1]!({ reason: "newer" });
+    await second;
+    waits[0]!({ reason: "older" });
+    await first;
+    expect(state.answer?.reason).toBe("newer");
+    expect(state.loading).toBe(false);
+  });
+});
