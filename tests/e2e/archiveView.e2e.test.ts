@@ -92,6 +92,14 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2018 
     await expect(s.page.locator('[data-testid="archive-legend"]').textContent()).resolves.toMatch(/winter/);
     await expect(s.page.locator('[data-testid="archive-view"] .caution').textContent()).resolves.toMatch(/screening/i);
     await expect(s.page.locator('[data-testid="archive-strip"]').count()).resolves.toBe(1);
+    // pointing at a mark highlights that survey in every panel and names it under the legend
+    const first = s.page.locator(`[data-testid="archive-multiple"][data-constituent="${silicate}"] g.pt`).last();
+    const name = (await first.getAttribute("data-survey")) ?? "";
+    await first.locator("path").hover();
+    await expect(s.page.locator('[data-testid="archive-hover"]').textContent()).resolves.toContain(name);
+    await expect(
+      s.page.locator(`[data-testid="archive-strip"] g.col.hov[data-survey="${name}"]`).count(),
+    ).resolves.toBe(1);
     await settle(s.page);
     await s.page.screenshot({ path: `${SHOTS}/archview-1-archive-1440.png` });
   }, 120_000);

@@ -3,7 +3,13 @@
  * constituent. The survey set is the app's shared Selection (`comparedSurveys`), so the map of
  * zones, the overlaid mixing plot, the tables, Compare and the Briefing all follow it.
  */
-import type { ArchiveSummary, ConstituentSeries, Estimate } from "../../../analysis/index.ts";
+import type {
+  ArchiveSummary,
+  ConstituentSeries,
+  Estimate,
+  IntrusionPoint,
+  SeriesPoint,
+} from "../../../analysis/index.ts";
 import { formatSignificant } from "../../../analysis/index.ts";
 import { behaviourShort } from "../panels/lib/format.ts";
 import { dayMs } from "./archiveModel.ts";
@@ -78,4 +84,25 @@ export function chosenRows(
                 : "—",
       };
     });
+}
+
+/**
+ * One survey in words for the line under the legend: name, date, season, discharge, and the focus
+ * constituent's behaviour and % change with its interval (the summary's values, formatted).
+ */
+export function hoverWords(
+  survey: string,
+  ip: IntrusionPoint | undefined,
+  p: SeriesPoint | undefined,
+  constituent: string,
+): string {
+  const parts = [survey];
+  if (ip?.date && ip.date !== survey) parts.push(ip.date);
+  if (ip?.season) parts.push(ip.season);
+  if (ip?.dischargeM3s !== undefined) parts.push(`${num(ip.dischargeM3s)} m³/s`);
+  if (p) {
+    parts.push(`${constituent}: ${behaviourShort[p.class]}`);
+    if (p.percentChange) parts.push(`% change ${est(p.percentChange)}`);
+  }
+  return parts.join(" · ");
 }

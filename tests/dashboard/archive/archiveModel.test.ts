@@ -16,7 +16,7 @@ import {
 } from "../../../dashboard/src/archive/archiveModel.ts";
 import { dischargeScatter } from "../../../dashboard/src/archive/scatterModel.ts";
 import { STRIP_FRAME, zoneStrip } from "../../../dashboard/src/archive/stripModel.ts";
-import { chosenRows, surveysInRange, toggleSurvey } from "../../../dashboard/src/archive/selectionModel.ts";
+import { chosenRows, hoverWords, surveysInRange, toggleSurvey } from "../../../dashboard/src/archive/selectionModel.ts";
 import { archiveOf } from "../../../dashboard/src/worker/archive.ts";
 import { okabeIto } from "../../../dashboard/src/panels/lib/palette.ts";
 
@@ -125,6 +125,16 @@ describe("archive view model", () => {
     expect(rows[0]!.season).toBe("winter");
     expect(rows[0]!.behaviour).not.toBe("");
     expect(NO_SEASON.colour).toBeTruthy();
+  });
+
+  it("hoverWords() describes a survey with the summary's own values", () => {
+    const ip = summary.intrusion[1]!;
+    const p = summary.series[0]!.points[1]!;
+    const text = hoverWords(ip.survey, ip, p, "Si");
+    expect(text).toContain("cruise 2016-02");
+    expect(text).toContain("winter");
+    expect(text).toContain(formatSignificant(p.percentChange!.value, 3));
+    expect(hoverWords("x", undefined, undefined, "Si")).toBe("x");
   });
 
   it("archiveOf() in the worker is summarizeArchive() of the analysed surveys, and says why below three", () => {
