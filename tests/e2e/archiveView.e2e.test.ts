@@ -11,12 +11,12 @@ import {
   STATION_FILE,
 } from "../archive/helpers/sfBayArchive.ts";
 
-// The archive view over real cruises: the 2018 export of the USGS San Francisco Bay water-quality
+// The archive view over real cruises: the 2017 and 2018 exports of the USGS San Francisco Bay water-quality
 // program with its station table (Schraga & Cloern, 2017, Sci. Data 4:170098;
 // ../shared/data/usgs-sfbay-2016-2022/SOURCE.md), read at test time, never copied into the
 // repository, with a centerline through the North-Bay channel stations (tests/archive/helpers).
-const CRUISE = "2018SanFranciscoBayWaterQualityData.csv";
-const present = SF_PRESENT && existsSync(join(SF_DIR, CRUISE));
+const CRUISES = ["2017ver.3.0SanFranciscoBayWaterQualityData.csv", "2018SanFranciscoBayWaterQualityData.csv"];
+const present = SF_PRESENT && CRUISES.every((f) => existsSync(join(SF_DIR, f)));
 if (!present) console.warn(`archiveView.e2e: skipped, ${SF_DIR} is absent`);
 
 /** Nutrient columns whose headers carry no unit: µmol/L, as printed in the 2020–2022 headers (SOURCE.md). */
@@ -27,7 +27,7 @@ async function fileInput(name: string) {
   return { name, mimeType: "text/csv", buffer: await readFile(join(SF_DIR, name)) };
 }
 
-describe.skipIf(skipBrowser || !present)("the survey archive view over the 2018 San Francisco Bay cruises", () => {
+describe.skipIf(skipBrowser || !present)("the survey archive view over the 2017–2018 San Francisco Bay cruises", () => {
   let s: Session;
   let silicate = "";
 
@@ -39,7 +39,7 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2018 
     await s?.close();
   });
 
-  it("imports the 2018 cruises with the station table and a North-Bay centerline", async () => {
+  it("imports the 2017 and 2018 cruises with the station table and a North-Bay centerline", async () => {
     const line = {
       name: "north-bay-channel.geojson",
       mimeType: "application/geo+json",
@@ -47,7 +47,7 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2018 
     };
     await s.page
       .locator('[data-testid="import-input"]')
-      .setInputFiles([await fileInput(CRUISE), await fileInput(STATION_FILE), line]);
+      .setInputFiles([...(await Promise.all(CRUISES.map(fileInput))), await fileInput(STATION_FILE), line]);
     const dialog = s.page.locator('[data-testid="mapping-dialog"][open]');
     await dialog.waitFor({ timeout: 60_000 });
     for (const header of UNITLESS) {
@@ -71,7 +71,7 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2018 
     await waitForAnalysis(s.page);
   }, 240_000);
 
-  it("the archive view has a silicate mark for every 2018 North-Bay transect", async () => {
+  it("the archive view has a silicate mark for every 2017–2018 North-Bay transect", async () => {
     const toggle = s.page.locator('[data-testid="archive-toggle"]');
     await expect(toggle.isDisabled()).resolves.toBe(false);
     await toggle.click();
@@ -85,8 +85,10 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2018 
     const marks = await s.page
       .locator(`[data-testid="archive-multiple"][data-constituent="${silicate}"] g.pt`)
       .evaluateAll((els) => els.map((e) => e.getAttribute("data-date") ?? ""));
-    const transects = northBayNutrientTransects().filter((d) => d.startsWith("2018-"));
-    console.log(`archiveView.e2e: ${marks.length} silicate marks; North-Bay transects 2018: ${transects.join(", ")}`);
+    const transects = northBayNutrientTransects().filter((d) => d.startsWith("2017-") || d.startsWith("2018-"));
+    console.log(
+      `archiveView.e2e: ${marks.length} silicate marks; North-Bay transects 2017–2018: ${transects.join(", ")}`,
+    );
     expect(transects.length).toBeGreaterThan(3);
     for (const d of transects) expect(marks, d).toContain(d);
     await expect(s.page.locator('[data-testid="archive-legend"]').textContent()).resolves.toMatch(/winter/);
