@@ -94,6 +94,8 @@ export type { KnotData } from "./stats/knotData.ts";
 export { evaluateSpline, evaluateSplineGrid } from "./stats/naturalSpline.ts";
 export type { NaturalSpline, SplinePoint } from "./stats/naturalSpline.ts";
 export { interval95, percentileSorted } from "./stats/percentile.ts";
+export { intervalBc95 } from "./stats/biasCorrectedInterval.ts";
+export { bootstrapBiasCorrected } from "./stats/bootstrapBias.ts";
 // --- end mixing ---
 
 // --- seawater ---
