@@ -73,6 +73,12 @@ export const BIAS_CORRECTION_MIN_CHI2 = 0.25;
 /** Fewest stations on the straight seaward line before a `short-seaward-line` warning (a line through 2 points tests nothing). */
 export const MIN_SEAWARD_STATIONS = 3;
 
+/** −1 for a net removal, +1 for a net addition (the quadratic coefficient decides a zero change, as in classify). */
+function netSign(netDelta: number, quadCoef: number): -1 | 1 {
+  if (netDelta !== 0 && Number.isFinite(netDelta)) return netDelta < 0 ? -1 : 1;
+  return quadCoef > 0 ? -1 : 1;
+}
+
 /** Fewest stations inside a reaction zone before a warning. */
 export const MIN_ZONE_STATIONS = 3;
 
@@ -147,6 +153,7 @@ export function analyzeShape(p: ShapeInput): {
         riverConc: rv.conc,
         netDelta: effectiveAt - rv.conc,
       },
+      zoneSign: netSign(effectiveAt - rv.conc, p.quadCoef),
     });
   let override = river.source === "override";
   // The straight line through all stations is rejected yet kept (no seaward phase separates): its
@@ -257,7 +264,16 @@ export function analyzeShape(p: ShapeInput): {
   }
   const toKm = (a: number, b: number): Array<[number, number]> => o.salinityToKm?.(a, b) ?? [];
   let zone: ConstituentAnalysis["reactionZone"];
-  const z = cls === "conservative" ? undefined : zoneFromCurve(grid, d2, sr, undefined, segStart);
+  // The zone has the sign of the class (the net change), so a "removal" never comes with an
+  // "addition zone"; when the curve's strongest reaction has the other sign, both are said.
+  const classSign = cls === "conservative" ? undefined : netSign(cStar - river.conc, p.quadCoef);
+  const z = classSign === undefined ? undefined : zoneFromCurve(grid, d2, sr, undefined, segStart, classSign);
+  const strongest = classSign === undefined ? undefined : zoneFromCurve(grid, d2, sr, undefined, segStart);
+  if (strongest && (!z || strongest.kind !== z.kind))
+    warnings.push({
+      code: "opposing-reactions",
+      message: `The net change is ${classSign! < 0 ? "a removal (C*₀ below C₀)" : "an addition (C*₀ above C₀)"}, but the fitted curve's strongest reaction is ${strongest.kind} over S = ${strongest.from.toFixed(1)}–${strongest.to.toFixed(1)}: both act along this estuary and the % change is their balance${z ? `; the ${z.kind} zone shown is S = ${z.from.toFixed(1)}–${z.to.toFixed(1)}` : ""}.`,
+    });
   if (z) {
     zone = {
       salinity: [z.from, z.to],

@@ -34,6 +34,8 @@ export interface BootstrapInput {
    * percentile intervals about them (Efron 1987) instead of plain percentile intervals.
    */
   estimates?: { effective: number; percent: number; riverConc: number; netDelta: number };
+  /** Sign of the reaction zone to locate in each replicate (that of the point estimate's net change). */
+  zoneSign?: -1 | 1;
 }
 
 /** 95 % percentile intervals of the bootstrap replicates (undefined when too few usable draws). */
@@ -133,7 +135,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     const spline = fitPreparedSpline(prepared, knots.y, splineWs);
     evaluateSplineGrid(spline, b.grid, f, undefined, d2);
     curves.set(f, d * G);
-    const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity);
+    const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity, b.zoneSign);
     if (zone) {
       zLo[d] = zone.from;
       zHi[d] = zone.to;
