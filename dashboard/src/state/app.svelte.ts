@@ -119,6 +119,14 @@ export class AppState {
     return out;
   });
 
+  /**
+   * Starts the analysis worker now, so it downloads and compiles its code while the map starts
+   * (App calls this before mounting the map; otherwise the first job starts it).
+   */
+  startAnalysis(): void {
+    this.#analysisApi();
+  }
+
   /** The worker that analyses (started on first use). */
   #analysisApi(): RemoteApi {
     this.#analyser ??= this.#connect("brackline-analysis", (message) =>

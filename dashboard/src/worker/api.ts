@@ -20,6 +20,7 @@ import type { UnderwayPoints, UnderwayRequest, UnderwayResult, UnderwayView } fr
 import { readUnderway, viewUnderway } from "./underwayEngine.ts";
 import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
 import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
+import type { CachedAnalysis, ResultCache } from "./resultCache.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -42,8 +43,12 @@ function compareAll(analyses: ReadonlyArray<AnalysisResult | undefined>): Analys
   }
 }
 
-/** Builds the worker's API object with its own held state (one per worker instance). */
-export function createWorkerApi() {
+/**
+ * Builds the worker's API object with its own held state (one per worker instance). With a
+ * `cache` (the browser's, see resultCache.ts) a survey whose inputs, settings and engine are
+ * unchanged takes its stored result instead of being analysed again.
+ */
+export function createWorkerApi(cache?: ResultCache) {
   let latestRun = 0;
   /** What readInputs read (surveys, the channel built by the one centerline reader, problems). */
   let inputs: WorkspaceInputs = inputsOf([], undefined);
@@ -65,6 +70,17 @@ export function createWorkerApi() {
     }
   }
 
+  /** What one survey's result depends on besides the engine: the survey, its channel, choices and settings. */
+  function cacheParts(survey: WorkspaceInputs["surveys"][number], settings: AnalysisSettings): unknown {
+    return {
+      survey,
+      centerline: inputs.channel ? { geojson: inputs.channel.geojson, mouth: inputs.channel.mouth } : null,
+      stationTable: inputs.stationTable ?? null,
+      choices: inputs.choices,
+      settings,
+    };
+  }
+
   async function analyseAll(run: number, settings: AnalysisSettings, emit: (e: AnalysisEvent) => void) {
     const { surveys } = inputs;
     const total = surveys.length;
@@ -74,14 +90,20 @@ export function createWorkerApi() {
       if (run !== latestRun) return;
       try {
         const name = surveys[i].name;
-        const { analysis, overlay } = analyse(inputs, surveys[i], settings, (fraction, label) =>
-          emit({
-            type: "progress",
-            stage: `${name}: ${label}`,
-            done: Math.round((i + fraction) * 100),
-            total: total * 100,
-          }),
-        );
+        const key = cache ? await cache.key(cacheParts(surveys[i], settings)) : undefined;
+        const stored = key ? await cache!.get(key) : undefined;
+        if (run !== latestRun) return;
+        const { analysis, overlay }: CachedAnalysis =
+          stored ??
+          analyse(inputs, surveys[i], settings, (fraction, label) =>
+            emit({
+              type: "progress",
+              stage: `${name}: ${label}`,
+              done: Math.round((i + fraction) * 100),
+              total: total * 100,
+            }),
+          );
+        if (key && !stored) void cache!.put(key, { analysis, overlay });
         analyses[i] = analysis;
         emit({ type: "analysis", surveyIndex: i, analysis, overlay });
       } catch (error) {
