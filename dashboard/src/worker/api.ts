@@ -4,7 +4,14 @@
  * (built once, here, by the one centerline reader) and the latest analyses; the main thread keeps
  * only a snapshot of the results and the selection. The same object runs in Node for tests.
  */
-import { channelOverlay, workspaceComparison, type WorkspaceInputs } from "../../../analysis/index.ts";
+import {
+  channelOverlay,
+  exportWorkspace,
+  importWorkspace,
+  workspaceComparison,
+  type WorkspaceDocument,
+  type WorkspaceInputs,
+} from "../../../analysis/index.ts";
 import type { TextFile } from "./protocol.ts";
 import type { ImportChoice } from "./importFile.ts";
 import type { FileInspection, FileOutcome, ImportSource } from "./importTypes.ts";
@@ -187,6 +194,16 @@ export function createWorkerApi(cache?: ResultCache) {
     /** Speciation context at the focus station and along the mixing line (analysis/seawater). */
     speciation(request: SpeciationRequest): SpeciationModel {
       return speciationModel(request);
+    },
+
+    /** Reads and validates workspace text (analysis/io importWorkspace: migrations, problems as issues). */
+    importWorkspace(text: string): ReturnType<typeof importWorkspace> {
+      return importWorkspace(text);
+    },
+
+    /** Workspace text of a document, validated (analysis/io exportWorkspace; throws TypeError when invalid). */
+    exportWorkspace(doc: WorkspaceDocument): string {
+      return exportWorkspace(doc);
     },
 
     /** Recognises a dropped file and previews it. */
