@@ -462,10 +462,9 @@ export {
   geoJsonKind,
   delimitedKind,
   isNetcdfMagic,
-  FILE_KIND_LABELS,
   EXPECTED_FILE,
-  type InputFileKind,
 } from "./workspace/fileKind.ts";
+export { FILE_KIND_LABELS, type InputFileKind } from "./workspace/fileKindLabels.ts";
 export {
   channelOverlay,
   surveyOverlay,
