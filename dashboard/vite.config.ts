@@ -4,6 +4,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { defineConfig } from "vite";
 import { svelte } from "@sveltejs/vite-plugin-svelte";
+import { proj4Trim } from "./proj4Trim.ts";
 
 const dashboardDir = fileURLToPath(new URL(".", import.meta.url));
 const repoDir = fileURLToPath(new URL("..", import.meta.url));
@@ -29,9 +30,9 @@ function engineFingerprint(): string {
 export default defineConfig({
   root: dashboardDir,
   base: "./",
-  plugins: [svelte({ configFile: false })],
+  plugins: [proj4Trim, svelte({ configFile: false })],
   define: { __BRACKLINE_ENGINE__: JSON.stringify(engineFingerprint()) },
-  worker: { format: "es" },
+  worker: { format: "es", plugins: () => [proj4Trim] },
   server: { fs: { allow: [repoDir] } },
   build: {
     outDir: "dist",
