@@ -127,7 +127,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
     );
   const withoutLine =
     channel === undefined && !kinds.includes("centerline")
-      ? placeWithoutCenterline(surveys, choices.useStationCenterline === true)
+      ? placeWithoutCenterline(surveys, choices.useStationCenterline !== false, choices.mouth)
       : undefined;
   if (withoutLine) {
     notices.push(...withoutLine.notices);

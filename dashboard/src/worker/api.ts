@@ -38,8 +38,10 @@ function messageOf(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
 }
 
+type ComparisonEvent = Extract<AnalysisEvent, { type: "comparison" }>;
+
 /** The workspace API's comparison of the analysed surveys (the first is the reference), or why there is none. */
-function compareAll(analyses: ReadonlyArray<AnalysisResult | undefined>): AnalysisEvent {
+function compareAll(analyses: ReadonlyArray<AnalysisResult | undefined>): ComparisonEvent {
   const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
   if (done.length < analyses.length)
     return { type: "comparison", reason: "Some surveys could not be analysed, so they cannot be compared." };
@@ -150,7 +152,8 @@ export function createWorkerApi(cache?: ResultCache) {
           next.issues = [...inputs.issues.filter((i) => i.file !== oldLine), ...next.issues];
           useInputs({ ...next, files: inputs.files, summary: inputs.summary }, job.centerline, emit);
         }
-        const mouthChanged = job.kind === "analyze" && centerlineFile && job.settings.mouth !== inputs.choices.mouth;
+        const mouthChanged =
+          job.kind === "analyze" && (centerlineFile || inputs.channel) && job.settings.mouth !== inputs.choices.mouth;
         if (mouthChanged) {
           // Another mouth: the channel is re-read from the held centerline file, the km change.
           const next = inputsOf(inputs.surveys, centerlineFile, job.settings.mouth);
@@ -171,6 +174,16 @@ export function createWorkerApi(cache?: ResultCache) {
       } catch (error) {
         emit({ type: "error", message: messageOf(error) });
       }
+    },
+
+    /**
+     * The comparison of exactly the chosen surveys (indices into the held surveys, the first is the
+     * reference), made by the workspace API's comparison, or why there is none.
+     */
+    compare(surveyIndices: number[]): Omit<ComparisonEvent, "type"> {
+      if (surveyIndices.length < 2) return { reason: "Choose two or more surveys to compare them." };
+      const e = compareAll(surveyIndices.map((i) => analyses[i]));
+      return { ...(e.comparison ? { comparison: e.comparison } : {}), ...(e.reason ? { reason: e.reason } : {}) };
     },
 
     /** The channel stretch where one survey's salinity lies within a brushed range (km and map paths). */
