@@ -377,8 +377,15 @@ export type {
   ConstituentSeries,
   IntrusionPoint,
   ArchiveSummary,
+  ArchiveWarning,
+  FrontEnd,
 } from "./archive/types.ts";
-export { summarizeArchive, ARCHIVE_METHODS, type ArchiveOptions } from "./archive/summarizeArchive.ts";
+export {
+  summarizeArchive,
+  ARCHIVE_METHODS,
+  NO_DISCHARGE_HINT,
+  type ArchiveOptions,
+} from "./archive/summarizeArchive.ts";
 export { buildSeriesPoints, groupRows, isoDay, zoneCentreKm, type DischargeSource } from "./archive/buildSeries.ts";
 export { quantityRelations, seasonTest, type QuantityPoint } from "./archive/quantityRelations.ts";
 export { dischargeRelation, pWords } from "./archive/dischargeRelation.ts";
@@ -403,6 +410,12 @@ export {
   type DischargeTable,
   type DischargeLookup,
 } from "./archive/dischargeTable.ts";
+export {
+  joinDischargeTable,
+  DISCHARGE_JOIN_RULE,
+  DISCHARGE_JOIN_MAX_DAYS,
+  type DischargeJoin,
+} from "./archive/dischargeJoin.ts";
 export { archiveTableRows, ARCHIVE_TABLE_COLUMNS, type ArchiveCell } from "./archive/archiveTable.ts";
 export { archiveSection, archiveName, type BriefingArchive } from "./archive/archiveSection.ts";
 export {

@@ -1,12 +1,17 @@
 import type { ComparableSurvey } from "../compare/types.ts";
 import { dischargeScaling } from "../compare/dischargeScaling.ts";
-import type { MixingWarning } from "../mixing/result.ts";
 import { classWords, constituentWords } from "../report/wording.ts";
 import { buildSeriesPoints, groupRows, zoneCentreKm, type DischargeSource } from "./buildSeries.ts";
 import { dischargeRelation } from "./dischargeRelation.ts";
 import { quantityRelations, type QuantityPoint } from "./quantityRelations.ts";
 import { DEFAULT_SEASONS, type Season } from "./seasons.ts";
-import type { ArchiveSummary, ConstituentSeries, SeriesPoint } from "./types.ts";
+import type { ArchiveSummary, ArchiveWarning, ConstituentSeries, FrontEnd, SeriesPoint } from "./types.ts";
+
+/** How each front end supplies missing river discharges (the "no-discharge" warning's hint). */
+export const NO_DISCHARGE_HINT: Readonly<Record<FrontEnd, string>> = {
+  cli: "give --discharge or --discharge-table",
+  dashboard: "add a discharge table (date, m³/s) in the archive view, or give the survey's discharge",
+};
 
 /** Options of {@link summarizeArchive}. */
 export interface ArchiveOptions {
@@ -113,11 +118,12 @@ export function summarizeArchive(analyses: readonly ComparableSurvey[], options:
     s0,
   );
   const noQ = intrusion.filter((p) => p.dischargeM3s === undefined).length;
-  const allWarnings: MixingWarning[] = [...warnings];
+  const allWarnings: ArchiveWarning[] = [...warnings];
   if (noQ)
     allWarnings.push({
       code: "no-discharge",
-      message: `River discharge not known for ${noQ} of ${intrusion.length} surveys: they are left out of the relations to discharge (give --discharge or --discharge-table).`,
+      message: `River discharge not known for ${noQ} of ${intrusion.length} surveys: they are left out of the relations to discharge.`,
+      hint: NO_DISCHARGE_HINT,
     });
   const dates = intrusion.flatMap((p) => (p.date ? [p.date] : [])).sort();
   return {

@@ -114,7 +114,7 @@ export interface ConstituentSeries {
   percentChangeRelations: QuantityRelations;
   /** Plain findings, only those that exceed their uncertainty. */
   statements: string[];
-  warnings: MixingWarning[];
+  warnings: ArchiveWarning[];
 }
 
 /** Salt intrusion of one survey. */
@@ -147,5 +147,16 @@ export interface ArchiveSummary {
   statements: string[];
   /** How intervals, fits and tests were obtained (each with its citation). */
   methods: string[];
-  warnings: MixingWarning[];
+  warnings: ArchiveWarning[];
+}
+
+/** Which front end shows a hint: the command line or the dashboard. */
+export type FrontEnd = "cli" | "dashboard";
+
+/**
+ * An archive warning: a neutral message (no front end's controls named) and, where the remedy
+ * differs by front end, a hint for each (e.g. the CLI's option, the dashboard's control).
+ */
+export interface ArchiveWarning extends MixingWarning {
+  hint?: Readonly<Record<FrontEnd, string>>;
 }

@@ -19,4 +19,6 @@ export const WORKSPACE_LIMITS = {
   maxCenterlineVertices: 1_000_000,
   /** Longest text field (ids, names, original cell text) [characters]. */
   maxTextChars: 10_000,
+  /** Longest discharge table kept in a workspace [characters] (a century of daily rows is ~0.7 M). */
+  maxDischargeTableChars: 5_000_000,
 } as const;

@@ -166,6 +166,13 @@ export const analysisChoicesSchema = z.looseObject({
   offChannelM: nonNegative.optional(),
   /** Keep off-channel stations in the fits and end-members. */
   keepOffChannel: z.boolean().optional(),
+  /** Archive seasons: named sets of months 1–12 (absent: meteorological seasons). */
+  archiveSeasons: z
+    .array(z.object({ name: text.min(1), months: z.array(z.number().int().min(1).max(12)).min(1).max(12) }))
+    .max(12)
+    .optional(),
+  /** A daily river discharge table (date, m³/s) joined to the surveys by date, kept as its file text. */
+  dischargeTable: z.object({ name: text, text: z.string().max(WORKSPACE_LIMITS.maxDischargeTableChars) }).optional(),
 });
 
 /** One file's import record: what was read and what was found. */

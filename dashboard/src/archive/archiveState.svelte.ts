@@ -5,9 +5,13 @@
  */
 import type { Season } from "../../../analysis/index.ts";
 import type { ArchiveAnswer } from "../worker/archive.ts";
+import type { TextFile } from "../worker/protocol.ts";
+import type { ArchiveChoices } from "./archiveChoices.ts";
 
 /** What the state needs from the worker. */
-export type ArchiveSource = () => { archive(seasons?: Season[]): Promise<ArchiveAnswer> };
+export type ArchiveSource = () => {
+  archive(seasons?: Season[], dischargeTable?: TextFile): Promise<ArchiveAnswer>;
+};
 
 export class ArchiveState {
   /** The worker's answer: the summary, or why there is none (undefined until asked). */
@@ -23,12 +27,12 @@ export class ArchiveState {
     this.#source = source;
   }
 
-  /** Asks the worker for the archive of the analysed surveys; a newer request wins. */
-  async refresh(seasons?: Season[]): Promise<void> {
+  /** Asks the worker for the archive of the analysed surveys (with the user's seasons and discharge table); a newer request wins. */
+  async refresh(choices: ArchiveChoices = {}): Promise<void> {
     const ask = ++this.#ask;
     this.loading = true;
     try {
-      const answer = await this.#source().archive(seasons);
+      const answer = await this.#source().archive(choices.seasons, choices.dischargeTable);
       if (ask === this.#ask) this.answer = answer;
     } catch (error) {
       if (ask === this.#ask) this.answer = { reason: `The archive could not be made: ${String(error)}` };

@@ -202,6 +202,7 @@ export class SavedWorkspace {
       analysis: $state.snapshot(settings.analysis) as WorkspaceParts["analysis"],
       ...(name !== undefined ? { selectedSurvey: name } : {}),
       selectedConstituent: selection.constituent,
+      archive: $state.snapshot(settings.archive) as WorkspaceParts["archive"],
     };
   }
 
@@ -252,6 +253,7 @@ export class SavedWorkspace {
     settings.useTiles = p.useTiles;
     // Settings the document does not hold go back to their defaults (a workspace saved before they existed).
     settings.updateAnalysis({ mouth: undefined, offChannelM: undefined, keepOffChannel: undefined, ...p.analysis });
+    settings.archive = p.archive ?? {};
     const index = Math.max(
       0,
       p.surveys.findIndex((s) => s.name === p.selectedSurvey),

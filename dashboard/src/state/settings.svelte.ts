@@ -5,6 +5,7 @@ import type { CarbonateEndmember } from "../../../analysis/index.ts";
  */
 
 import type { AnalysisSettings, ConstituentOverrides } from "../worker/protocol.ts";
+import type { ArchiveChoices } from "../archive/archiveChoices.ts";
 
 export type { AnalysisSettings, ConstituentOverrides, EndmemberOverride } from "../worker/protocol.ts";
 
@@ -32,6 +33,8 @@ export class Settings {
     constantSet: "default",
     saltIntrusionSalinity: 2,
   });
+  /** Archive view: the user's seasons and discharge table (not part of the per-survey analysis). */
+  archive = $state.raw<ArchiveChoices>({});
   /** Colour stations by salinity or by deviation from the dilution line. */
   colouring = $state<StationColouring>("salinity");
   /** Optional raster tile URL template ({z}/{x}/{y}); used only when `useTiles` is on. */

@@ -10,6 +10,7 @@ import {
   type WorkspaceDocument,
 } from "../../../analysis/index.ts";
 import type { AnalysisSettings, StationColouring } from "./settings.svelte.ts";
+import type { ArchiveChoices } from "../archive/archiveChoices.ts";
 
 /** One file's import record as kept in the workspace. */
 export type ImportRecord = WorkspaceDocument["imports"][number];
@@ -32,6 +33,8 @@ export interface WorkspaceParts {
   analysis: AnalysisSettings;
   selectedSurvey?: string;
   selectedConstituent?: string;
+  /** Archive view seasons and discharge table (absent: the defaults). */
+  archive?: ArchiveChoices;
 }
 
 /** Drops keys whose value is undefined (JSON cannot hold them; the schema wants them absent). */
@@ -66,6 +69,8 @@ export function toWorkspaceDocument(parts: WorkspaceParts, savedAt: string): Wor
     keepOffChannel: parts.analysis.keepOffChannel,
     selectedSurvey: parts.selectedSurvey,
     selectedConstituent: parts.selectedConstituent,
+    archiveSeasons: parts.archive?.seasons,
+    dischargeTable: parts.archive?.dischargeTable,
   });
   return ws;
 }
@@ -102,5 +107,10 @@ export function fromWorkspaceDocument(ws: WorkspaceDocument): WorkspaceParts {
     ...(ws.settings.layer ? { layer: ws.settings.layer } : {}),
     ...(a.selectedSurvey !== undefined ? { selectedSurvey: a.selectedSurvey } : {}),
     ...(a.selectedConstituent !== undefined ? { selectedConstituent: a.selectedConstituent } : {}),
+    // Older workspaces have no archive choices: the default seasons, no discharge table.
+    archive: {
+      ...(a.archiveSeasons ? { seasons: a.archiveSeasons } : {}),
+      ...(a.dischargeTable ? { dischargeTable: a.dischargeTable } : {}),
+    },
   };
 }

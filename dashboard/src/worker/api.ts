@@ -194,8 +194,8 @@ export function createWorkerApi(cache?: ResultCache) {
     },
 
     /** The analysed surveys as an archive: series, relations and statements (analysis/archive). */
-    archive(seasons?: Season[]): ArchiveAnswer {
-      return archiveOf(analyses, seasons);
+    archive(seasons?: Season[], dischargeTable?: TextFile): ArchiveAnswer {
+      return archiveOf(analyses, seasons, dischargeTable);
     },
 
     /** Km ticks and length of a centerline being drawn on the map (read by the one centerline reader). */

@@ -1,0 +1,116 @@
+/**
+ * The archive view's own inputs: a discharge table joined in the worker by the analysis' join
+ * (the CLI's discharge-table rule), the seasons editor text, the neutral no-discharge warning with
+ * per-front-end hints, and the workspace round trip of both choices (older workspaces: defaults).
+ * Invented synthetic archive and an invented flows table; no measurements.
+ */
+import { describe, expect, it } from "vitest";
+import {
+  createWorkspace,
+  DEFAULT_SEASONS,
+  DISCHARGE_JOIN_RULE,
+  joinDischargeTable,
+  parseSeasons,
+  readDischargeTable,
+  workspaceSchema,
+} from "../../../analysis/index.ts";
+import { syntheticArchive } from "../../archive/helpers/syntheticArchive.ts";
+import { archiveOf } from "../../../dashboard/src/worker/archive.ts";
+import { readSeasonsText, seasonsText } from "../../../dashboard/src/archive/archiveChoices.ts";
+import { fromWorkspaceDocument, toWorkspaceDocument } from "../../../dashboard/src/state/workspaceDoc.ts";
+
+const truth = { pctAt1000: -20, pctPerDecade: 15, pctNoiseSd: 3, l1000Km: 40, exponent: -0.3, lNoiseSd: 0.05 };
+/** The synthetic archive of 2016 only, with the files' discharges taken away. */
+const noFlow = syntheticArchive(truth, 7, [2016]).map((a) => {
+  const { riverDischargeM3s: _, ...survey } = a.survey;
+  return { ...a, survey };
+});
+/** The same as the worker holds them (the synthetic surveys carry only what the archive reads). */
+const held = noFlow as never;
+
+/** INVENTED daily flows (not measurements): one row a week, 2015-12-01 … 2016-12-31, 500 + 10·week m³/s. */
+function inventedFlows(): string {
+  const lines = ["date,flow_m3s"];
+  for (let d = Date.UTC(2015, 11, 1), w = 0; d <= Date.UTC(2016, 11, 31); d += 7 * 86_400_000, w++)
+    lines.push(`${new Date(d).toISOString().slice(0, 10)},${500 + 10 * w}`);
+  lines.push("2016-13-01,5"); // a bad row: reported, never dropped silently
+  return lines.join("\n");
+}
+
+describe("discharge table in the archive view (invented flows)", () => {
+  it("without discharges the warning is neutral and carries a hint per front end", () => {
+    const answer = archiveOf(held);
+    const w = answer.summary!.warnings.find((x) => x.code === "no-discharge")!;
+    expect(w.message).not.toMatch(/--/);
+    expect(w.message).toMatch(/River discharge not known for 12 of 12 surveys/);
+    expect(w.hint!.cli).toMatch(/--discharge-table/);
+    expect(w.hint!.dashboard).toMatch(/discharge table/);
+    expect(w.hint!.dashboard).not.toMatch(/--/);
+  });
+
+  it("archiveOf() joins the table by the analysis' rule: the same day, else the nearest earlier day", () => {
+    const text = inventedFlows();
+    const answer = archiveOf(held, DEFAULT_SEASONS, { name: "invented-flows.csv", text });
+    const report = answer.discharge!;
+    expect(report.rule).toBe(DISCHARGE_JOIN_RULE);
+    expect(report.joined).toBe(12);
+    expect(report.missing).toEqual([]);
+    expect(report.issues).toHaveLength(1);
+    expect(report.issues[0]).toMatchObject({ file: "invented-flows.csv", column: "date", value: "2016-13-01" });
+    // Same numbers as the CLI's path: readDischargeTable + joinDischargeTable.
+    const cli = joinDischargeTable(
+      readDischargeTable(text, "invented-flows.csv"),
+      noFlow.map((a) => a.survey),
+    );
+    const points = answer.summary!.intrusion;
+    for (const p of points) expect(p.dischargeM3s).toBe(cli.discharge[p.survey]!.dischargeM3s);
+    // 2016-01-15 (a Friday): the weekly rows fall on Tuesdays from 2015-12-01, so 2016-01-12 is used (3 days before).
+    const jan = answer.summary!.series[0]!.points.find((p) => p.date === "2016-01-15")!;
+    expect(jan.dischargeSource).toMatch(
+      /discharge of 2016-01-12 \(3 days before the survey\) from invented-flows\.csv/,
+    );
+    expect(answer.summary!.warnings.some((x) => x.code === "no-discharge")).toBe(false);
+  });
+
+  it("joinDischargeTable() names surveys with no row within 31 days before them", () => {
+    const table = readDischargeTable("date,Q m3/s\n2016-03-01,10\n", "invented.csv");
+    const j = joinDischargeTable(table, [
+      { name: "a", startDate: "2016-03-20" },
+      { name: "b", startDate: "2016-02-20" },
+      { name: "c", startDate: "2016-05-01" },
+      { name: "d" },
+    ]);
+    expect(Object.keys(j.discharge)).toEqual(["a"]);
+    expect(j.missing).toEqual(["b", "c", "d"]);
+  });
+});
+
+describe("seasons editor text", () => {
+  it("seasonsText() writes seasons that parseSeasons reads back unchanged", () => {
+    expect(seasonsText(DEFAULT_SEASONS)).toBe("winter=Dec-Feb, spring=Mar-May, summer=Jun-Aug, autumn=Sep-Nov");
+    const odd = parseSeasons("wet=Dec-Apr, dry=Aug-Nov, odd=May+Jul");
+    expect(parseSeasons(seasonsText(odd))).toEqual(odd);
+  });
+
+  it("readSeasonsText() gives the analysis' message for a bad text and nothing for an empty one", () => {
+    expect(readSeasonsText("wet=Dec-Apr, dry=Apr-Nov").error).toMatch(/Apr is in both "wet" and "dry"/);
+    expect(readSeasonsText("  ")).toEqual({});
+    expect(readSeasonsText("wet=Dec-Apr").seasons).toEqual([{ name: "wet", months: [12, 1, 2, 3, 4] }]);
+  });
+});
+
+describe("workspace keeps the archive choices", () => {
+  const base = fromWorkspaceDocument(createWorkspace("t"));
+  it("an older workspace (no archive choices) opens with the defaults", () => {
+    expect(base.archive).toEqual({});
+  });
+  it("seasons and the discharge table survive a save and a schema check", () => {
+    const archive = {
+      seasons: parseSeasons("wet=Dec-Apr,dry=Aug-Nov"),
+      dischargeTable: { name: "f.csv", text: "date,q\n" },
+    };
+    const doc = toWorkspaceDocument({ ...base, archive }, "2026-01-01T00:00:00Z");
+    const checked = workspaceSchema.parse(JSON.parse(JSON.stringify(doc)));
+    expect(fromWorkspaceDocument(checked as typeof doc).archive).toEqual(archive);
+  });
+});
