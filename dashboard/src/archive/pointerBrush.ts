@@ -12,6 +12,14 @@ export function svgX(svg: SVGSVGElement, clientX: number, clientY: number): numb
   return p.x;
 }
 
+/** SVG user-space point [x, y] of a pointer event on `svg`. */
+export function svgPoint(svg: SVGSVGElement, clientX: number, clientY: number): [number, number] {
+  const m = svg.getScreenCTM();
+  if (!m) return [clientX, clientY];
+  const p = new DOMPoint(clientX, clientY).matrixTransform(m.inverse());
+  return [p.x, p.y];
+}
+
 /** What a time panel reports: a brush between two x (SVG units), or a click on a survey. */
 export interface BrushHandlers {
   /** A brush from x0 to x1 (SVG units); `done` on release. */

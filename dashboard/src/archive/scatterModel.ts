@@ -93,3 +93,17 @@ export function dischargeScatter(
     statement: rel?.statement ?? "No fit: too few surveys with a known discharge.",
   };
 }
+
+/**
+ * Surveys whose mark lies inside a box dragged on the scatter (SVG units, corners in any order),
+ * in the scatter's order.
+ */
+export function surveysInBox(
+  points: ReadonlyArray<{ survey: string; x: number; y: number }>,
+  box: readonly [number, number, number, number],
+): string[] {
+  const [xa, ya, xb, yb] = box;
+  const [x0, x1] = xa <= xb ? [xa, xb] : [xb, xa];
+  const [y0, y1] = ya <= yb ? [ya, yb] : [yb, ya];
+  return points.filter((p) => p.x >= x0 && p.x <= x1 && p.y >= y0 && p.y <= y1).map((p) => p.survey);
+}

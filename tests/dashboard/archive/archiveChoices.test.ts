@@ -16,6 +16,7 @@ import {
 } from "../../../analysis/index.ts";
 import { syntheticArchive } from "../../archive/helpers/syntheticArchive.ts";
 import { archiveOf } from "../../../dashboard/src/worker/archive.ts";
+import { surveysInBox } from "../../../dashboard/src/archive/scatterModel.ts";
 import { readSeasonsText, seasonsText } from "../../../dashboard/src/archive/archiveChoices.ts";
 import { fromWorkspaceDocument, toWorkspaceDocument } from "../../../dashboard/src/state/workspaceDoc.ts";
 
@@ -112,5 +113,17 @@ describe("workspace keeps the archive choices", () => {
     const doc = toWorkspaceDocument({ ...base, archive }, "2026-01-01T00:00:00Z");
     const checked = workspaceSchema.parse(JSON.parse(JSON.stringify(doc)));
     expect(fromWorkspaceDocument(checked as typeof doc).archive).toEqual(archive);
+  });
+});
+
+describe("box on the discharge scatter", () => {
+  it("surveysInBox() takes the marks inside the box, corners in any order, edges included", () => {
+    const pts = [
+      { survey: "a", x: 10, y: 10 },
+      { survey: "b", x: 20, y: 30 },
+      { survey: "c", x: 40, y: 5 },
+    ];
+    expect(surveysInBox(pts, [25, 35, 5, 10])).toEqual(["a", "b"]);
+    expect(surveysInBox(pts, [0, 0, 1, 1])).toEqual([]);
   });
 });
