@@ -159,6 +159,62 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2017â
     for (const d of dates) expect(d >= "2018-06-01" && d <= "2018-08-31", d).toBe(true);
   }, 60_000);
 
+  it("an invented discharge table is joined by date: the scatter appears, a box on it chooses surveys; seasons edited", async () => {
+    // INVENTED flows (not measurements): a smooth wet-winter, dry-autumn cycle, one row a day, 2016-12-01 â€¦ 2018-12-31.
+    const lines = ["date,discharge m3/s"];
+    for (let d = Date.UTC(2016, 11, 1); d <= Date.UTC(2018, 11, 31); d += 86_400_000) {
+      const doy = (d - Date.UTC(new Date(d).getUTCFullYear(), 0, 1)) / 86_400_000;
+      lines.push(
+        `${new Date(d).toISOString().slice(0, 10)},${(300 + 1200 * Math.max(0, Math.cos((2 * Math.PI * (doy - 30)) / 365))).toFixed(1)}`,
+      );
+    }
+    await s.page.locator('[data-testid="discharge-table-input"]').setInputFiles({
+      name: "invented-flows-not-measured.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from(lines.join("\n")),
+    });
+    const status = s.page.locator('[data-testid="discharge-table-status"]');
+    await status.waitFor({ timeout: 60_000 });
+    const scatter = s.page.locator('[data-testid="archive-scatter"]');
+    await scatter.waitFor({ timeout: 60_000 });
+    console.log(`archiveView.e2e: discharge table: ${await status.textContent()}`);
+    await expect(s.page.locator('[data-testid="discharge-join-rule"]').textContent()).resolves.toMatch(
+      /nearest earlier day/,
+    );
+    expect(Number(await scatter.getAttribute("data-points"))).toBeGreaterThan(2);
+    await expect(s.page.locator('[data-testid="archive-findings"] .warnings').count()).resolves.toBe(0);
+
+    const box = (await scatter.locator("svg").boundingBox())!;
+    await s.page.mouse.move(box.x + box.width * 0.15, box.y + box.height * 0.05);
+    await s.page.mouse.down();
+    await s.page.mouse.move(box.x + box.width * 0.6, box.y + box.height * 0.5, { steps: 4 });
+    await s.page.mouse.move(box.x + box.width * 0.98, box.y + box.height * 0.85, { steps: 4 });
+    await s.page.mouse.up();
+    await s.page.waitForFunction(
+      () => Number(document.querySelector('[data-testid="archive-chosen"]')?.getAttribute("data-count")) > 0,
+    );
+    const inBox = Number(await s.page.locator('[data-testid="archive-chosen"]').getAttribute("data-count"));
+    console.log(`archiveView.e2e: box on the scatter chose ${inBox} surveys`);
+    expect(inBox).toBeGreaterThan(0);
+    await expect(s.page.locator('[data-testid="archive-view"]').count()).resolves.toBe(1);
+
+    const seasons = s.page.locator('[data-testid="archive-seasons"]');
+    await seasons.fill("wet=Dec-Apr, dry=Apr-Nov");
+    await expect(s.page.locator('[data-testid="archive-seasons-apply"]').isDisabled()).resolves.toBe(true);
+    await seasons.fill("wet=Dec-Apr, transition=May-Jul, dry=Aug-Nov");
+    await s.page.locator('[data-testid="archive-seasons-apply"]').click();
+    await s.page.waitForFunction(() =>
+      document.querySelector('[data-testid="archive-legend"]')?.textContent?.includes("transition"),
+    );
+    await settle(s.page);
+    await s.page.screenshot({ path: `${SHOTS}/archview2-1-discharge-1440.png` });
+    await s.page.setViewportSize({ width: 1280, height: 800 });
+    await scatter.scrollIntoViewIfNeeded();
+    await settle(s.page);
+    await s.page.screenshot({ path: `${SHOTS}/archview2-2-scatter-1280.png` });
+    await s.page.setViewportSize({ width: 1440, height: 900 });
+  }, 120_000);
+
   it("clicking a mark opens that survey in the main view", async () => {
     const mark = s.page.locator(`[data-testid="archive-multiple"][data-constituent="${silicate}"] g.pt`).nth(2);
     const survey = (await mark.getAttribute("data-survey")) ?? "";
