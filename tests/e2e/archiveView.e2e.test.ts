@@ -184,6 +184,12 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2017â
     expect(Number(await scatter.getAttribute("data-points"))).toBeGreaterThan(2);
     await expect(s.page.locator('[data-testid="archive-findings"] .warnings').count()).resolves.toBe(0);
 
+    const clear = s.page.getByRole("button", { name: "Clear choice" });
+    if (!(await clear.isDisabled())) await clear.click();
+    await s.page.waitForFunction(
+      () => Number(document.querySelector('[data-testid="archive-chosen"]')?.getAttribute("data-count") ?? 0) === 0,
+    );
+    await scatter.scrollIntoViewIfNeeded();
     const box = (await scatter.locator("svg").boundingBox())!;
     await s.page.mouse.move(box.x + box.width * 0.15, box.y + box.height * 0.05);
     await s.page.mouse.down();
