@@ -8,7 +8,7 @@ import type { CommandIo } from "../command.ts";
 import type { Survey, SurveyAnalysis } from "../../analysis/index.ts";
 import { SurveyCache, surveyCacheKey } from "./surveyCache.ts";
 import { surveyTaskHandler, type SurveySetup } from "./surveyTask.ts";
-import { CancelledError, runPool } from "./workerPool.ts";
+import { CancelledError, runPool, startWorkers, type StartedWorkers } from "./workerPool.ts";
 
 /** Options of {@link analyzeArchive}. */
 export interface ArchiveRunOptions {
@@ -19,6 +19,8 @@ export interface ArchiveRunOptions {
   io: CommandIo;
   /** Cancels the run (default: a SIGINT handler installed for the run). */
   signal?: AbortSignal;
+  /** Worker threads started before the inputs were read ({@link startSurveyWorkers}); ended by the run. */
+  started?: StartedWorkers;
 }
 
 /** What {@link analyzeArchive} did, for messages and the bench. */
@@ -33,6 +35,29 @@ export interface ArchiveRunStats {
 
 const workerUrl = (): URL =>
   new URL(import.meta.url.endsWith(".ts") ? "./surveyWorkerTs.js" : "./surveyWorker.js", import.meta.url);
+
+/**
+ * Starts the survey worker threads now (before reading the inputs, so loading their code overlaps
+ * the reading); pass them to {@link analyzeArchive} as `started`.
+ */
+export function startSurveyWorkers(threads: number): StartedWorkers {
+  return startWorkers(workerUrl(), threads);
+}
+
+/**
+ * Relative cost of analysing a survey, for largest-first scheduling: the bootstrap dominates, so
+ * the count of (station, mixing constituent) values, plus the stations for the rest.
+ */
+export function surveyCost(survey: Survey): number {
+  const tracers = survey.constituents.filter((c) => c.kind !== "nonMixing").map((c) => c.name);
+  let values = 0;
+  for (const st of survey.stations)
+    for (const name of tracers) {
+      const cell = st.values[name];
+      if (cell && Number.isFinite(cell.value)) values++;
+    }
+  return values * 100 + survey.stations.length;
+}
 
 /**
  * Analyses the set-up's surveys in parallel; results come back in survey order.
@@ -64,7 +89,9 @@ export async function analyzeArchive(
     else todo.push(i);
   });
   const n = surveys.length;
-  const threads = Math.min(o.threads ?? availableParallelism(), todo.length);
+  // One survey left to analyse is faster here than on a thread that must first load the code.
+  const threads =
+    todo.length < 2 ? 0 : Math.min(o.threads ?? o.started?.workers.length ?? availableParallelism(), todo.length);
   o.io.err(
     `archive: ${n} surveys, ${n - todo.length} from the cache, ${todo.length} to analyse on ${threads <= 0 ? "this thread" : `${threads} worker thread${threads === 1 ? "" : "s"}`}`,
   );
@@ -78,9 +105,10 @@ export async function analyzeArchive(
     await runPool({
       workerUrl: workerUrl(),
       threads,
+      ...(o.started ? { started: o.started } : {}),
       setup,
       tasks: todo.map((index) => ({ survey: surveys[index]! })),
-      cost: (t) => t.survey.stations.length * Math.max(1, t.survey.constituents.length),
+      cost: (t) => surveyCost(t.survey),
       inline: surveyTaskHandler,
       signal,
       onResult: (ti, result, taskMs) => {

@@ -1,9 +1,10 @@
-// Worker thread entry of the archive analysis: set-up from workerData, then one survey per message.
-import { parentPort, workerData } from "node:worker_threads";
+// Worker thread entry of the archive analysis: the set-up message first, then one survey per message.
+import { parentPort } from "node:worker_threads";
 import { surveyTaskHandler, type SurveySetup, type SurveyTask } from "./surveyTask.ts";
+import type { ToWorker } from "./workerPool.ts";
 
-surveyTaskHandler.setup(workerData as SurveySetup);
-parentPort!.on("message", (m: { index: number; task: SurveyTask }) => {
+parentPort!.on("message", (m: ToWorker<SurveySetup, SurveyTask>) => {
+  if ("setup" in m) return surveyTaskHandler.setup(m.setup);
   try {
     const t0 = performance.now();
     const result = surveyTaskHandler.run(m.task);

@@ -1,7 +1,10 @@
 /**
- * A small pool of worker threads for independent tasks: one shared set-up message per worker, then
- * tasks handed out largest first; progress per finished task; cancel through an AbortSignal
- * (workers are terminated). With 0 threads the tasks run in this thread (the one-thread baseline).
+ * A small pool of worker threads for independent tasks: the workers can be started before the
+ * inputs are read (their start-up overlaps the reading), get one shared set-up message each, then
+ * take tasks from one shared queue, largest first (a worker asks for the next task when it finishes
+ * one, so no thread idles while another holds a static share); progress per finished task; cancel
+ * through an AbortSignal (workers are terminated). With 0 threads the tasks run in this thread
+ * (the one-thread baseline).
  */
 import { Worker } from "node:worker_threads";
 
@@ -11,12 +14,48 @@ export interface TaskHandler<Setup, Task, Result> {
   run(task: Task): Result;
 }
 
+/** Messages to a worker: the set-up once, then tasks. */
+export type ToWorker<Setup, Task> = { setup: Setup } | { index: number; task: Task };
+/** Messages from a worker: a result or an error of one task. */
+export interface FromWorker<Result> {
+  index: number;
+  result?: Result;
+  error?: string;
+  taskMs?: number;
+}
+
+/** Worker threads started ahead of their tasks (see {@link startWorkers}). */
+export interface StartedWorkers {
+  readonly workers: readonly Worker[];
+}
+
+/**
+ * Starts worker threads now, so that loading their code overlaps whatever this thread does next
+ * (reading the input files). Hand them to {@link runPool}, which ends them; end unused ones with
+ * {@link stopWorkers}.
+ *
+ * @param workerUrl the worker script
+ * @param threads number of threads (0 starts none)
+ */
+export function startWorkers(workerUrl: URL, threads: number): StartedWorkers {
+  if (!Number.isInteger(threads) || threads < 0)
+    throw new RangeError(`startWorkers: threads must be a whole number ≥ 0; got ${threads}`);
+  return { workers: Array.from({ length: threads }, () => new Worker(workerUrl)) };
+}
+
+/** Ends started workers that are not needed (safe to call twice). */
+export async function stopWorkers(started: StartedWorkers | undefined): Promise<void> {
+  if (started) await Promise.all(started.workers.map((w) => w.terminate()));
+}
+
 /** Options of {@link runPool}. */
 export interface PoolOptions<Setup, Task, Result> {
   /** Worker script (plain JavaScript; a TypeScript worker goes through a small .js entry that registers tsx). */
   workerUrl: URL;
   /** Number of worker threads; 0 runs everything in this thread with `inline`. */
   threads: number;
+  /** Workers already started with {@link startWorkers} (used first; extra ones are ended, missing ones started). */
+  started?: StartedWorkers;
   setup: Setup;
   tasks: readonly Task[];
   /** Relative cost of a task, for largest-first scheduling (default: equal). */
@@ -37,16 +76,25 @@ export class CancelledError extends Error {
 }
 
 /**
- * Runs every task and returns the results in task order.
+ * Runs every task and returns the results in task order. The worker threads (given or started
+ * here) are ended before it returns.
  *
  * @throws CancelledError when the signal aborts; the first task error otherwise
  */
 export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, Result>): Promise<Result[]> {
   const results = new Array<Result>(o.tasks.length);
   const order = o.tasks.map((_, i) => i);
-  if (o.cost) order.sort((a, b) => o.cost!(o.tasks[b]!) - o.cost!(o.tasks[a]!));
+  if (o.cost) {
+    const costs = o.tasks.map(o.cost);
+    order.sort((a, b) => costs[b]! - costs[a]! || a - b);
+  }
   let done = 0;
-  if (o.threads <= 0) {
+  const n = o.threads <= 0 ? 0 : Math.max(1, Math.min(o.threads, o.tasks.length));
+  const given = o.started?.workers ?? [];
+  // Started workers beyond what the tasks need are ended at once.
+  const unused = given.slice(n);
+  void Promise.all(unused.map((w) => w.terminate()));
+  if (n === 0) {
     if (!o.inline) throw new TypeError("runPool: threads = 0 needs an inline handler");
     o.inline.setup(o.setup);
     for (const i of order) {
@@ -59,8 +107,10 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
     }
     return results;
   }
-  const n = Math.max(1, Math.min(o.threads, o.tasks.length));
-  const workers = Array.from({ length: n }, () => new Worker(o.workerUrl, { workerData: o.setup }));
+  const workers = [
+    ...given.slice(0, n),
+    ...Array.from({ length: Math.max(0, n - given.length) }, () => new Worker(o.workerUrl)),
+  ];
   let next = 0;
   try {
     await new Promise<void>((resolve, reject) => {
@@ -70,21 +120,23 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
       const feed = (w: Worker): void => {
         if (next >= order.length) return;
         const i = order[next++]!;
-        w.postMessage({ index: i, task: o.tasks[i] });
+        w.postMessage({ index: i, task: o.tasks[i] } satisfies ToWorker<Setup, Task>);
       };
       for (const w of workers) {
-        w.on("message", (m: { index: number; result?: Result; error?: string; taskMs?: number }) => {
+        w.on("message", (m: FromWorker<Result>) => {
           if (m.error !== undefined) return reject(new Error(m.error));
           results[m.index] = m.result!;
           done++;
+          // The next task goes out before this result is handled, so the worker never waits on us.
+          if (done < order.length) feed(w);
           o.onResult?.(m.index, m.result!, m.taskMs ?? Number.NaN);
           if (done === order.length) resolve();
-          else feed(w);
         });
         w.on("error", reject);
         w.on("exit", (code) => {
           if (done < order.length && code !== 0) reject(new Error(`worker stopped with exit code ${code}`));
         });
+        w.postMessage({ setup: o.setup } satisfies ToWorker<Setup, Task>);
         feed(w);
       }
       if (order.length === 0) resolve();
