@@ -436,7 +436,7 @@ export { stripControl } from "./output/terminalText.ts";
 // --- end output ---
 
 // --- workspace ---
-export { readInputs } from "./workspace/readInputs.ts";
+export { readInputs, readStationTableFile, readSurveyFileAs, type PreReadFiles } from "./workspace/readInputs.ts";
 export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
 export { workspaceComparison } from "./workspace/comparison.ts";
 export {

@@ -33,7 +33,8 @@ export interface ArchiveRunStats {
   taskSeconds: number;
 }
 
-const workerUrl = (): URL =>
+/** The worker script of the survey pool (the build's JavaScript, or a tsx entry from the TypeScript sources). */
+export const surveyWorkerUrl = (): URL =>
   new URL(import.meta.url.endsWith(".ts") ? "./surveyWorkerTs.js" : "./surveyWorker.js", import.meta.url);
 
 /**
@@ -41,7 +42,7 @@ const workerUrl = (): URL =>
  * the reading); pass them to {@link analyzeArchive} as `started`.
  */
 export function startSurveyWorkers(threads: number): StartedWorkers {
-  return startWorkers(workerUrl(), threads);
+  return startWorkers(surveyWorkerUrl(), threads);
 }
 
 /**
@@ -103,7 +104,7 @@ export async function analyzeArchive(
   let taskSeconds = 0;
   try {
     await runPool({
-      workerUrl: workerUrl(),
+      workerUrl: surveyWorkerUrl(),
       threads,
       ...(o.started ? { started: o.started } : {}),
       setup,

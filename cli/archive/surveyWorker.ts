@@ -1,13 +1,24 @@
-// Worker thread entry of the archive analysis: the set-up message first, then one survey per message.
+// Worker thread entry of the archive analysis: a set-up message naming its handler (read a survey
+// file, or analyse a survey; default: analyse), then one task per message.
 import { parentPort } from "node:worker_threads";
-import { surveyTaskHandler, type SurveySetup, type SurveyTask } from "./surveyTask.ts";
-import type { ToWorker } from "./workerPool.ts";
+import { readTaskHandler } from "./readTask.ts";
+import { surveyTaskHandler } from "./surveyTask.ts";
+import type { TaskHandler, ToWorker } from "./workerPool.ts";
 
-parentPort!.on("message", (m: ToWorker<SurveySetup, SurveyTask>) => {
-  if ("setup" in m) return surveyTaskHandler.setup(m.setup);
+const HANDLERS: Record<string, TaskHandler<unknown, unknown, unknown>> = {
+  survey: surveyTaskHandler as TaskHandler<unknown, unknown, unknown>,
+  read: readTaskHandler as TaskHandler<unknown, unknown, unknown>,
+};
+let handler = HANDLERS.survey!;
+
+parentPort!.on("message", (m: ToWorker<unknown, unknown>) => {
+  if ("setup" in m) {
+    handler = HANDLERS[m.handler ?? "survey"]!;
+    return handler.setup(m.setup);
+  }
   try {
     const t0 = performance.now();
-    const result = surveyTaskHandler.run(m.task);
+    const result = handler.run(m.task);
     parentPort!.postMessage({ index: m.index, result, taskMs: performance.now() - t0 });
   } catch (error) {
     parentPort!.postMessage({ index: m.index, error: (error as Error).stack ?? String(error) });

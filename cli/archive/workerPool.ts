@@ -14,8 +14,8 @@ export interface TaskHandler<Setup, Task, Result> {
   run(task: Task): Result;
 }
 
-/** Messages to a worker: the set-up once, then tasks. */
-export type ToWorker<Setup, Task> = { setup: Setup } | { index: number; task: Task };
+/** Messages to a worker: a set-up (naming the handler when the worker has several), then tasks. */
+export type ToWorker<Setup, Task> = { setup: Setup; handler?: string } | { index: number; task: Task };
 /** Messages from a worker: a result or an error of one task. */
 export interface FromWorker<Result> {
   index: number;
@@ -65,6 +65,10 @@ export interface PoolOptions<Setup, Task, Result> {
   /** Called after each finished task (index into tasks, time spent in the task itself [ms]). */
   onResult?: (index: number, result: Result, taskMs: number) => void;
   signal?: AbortSignal;
+  /** Handler name sent with the set-up, for a worker script with several handlers. */
+  handler?: string;
+  /** Keep the `started` workers running after a successful run (for a next run with another handler). */
+  keepStarted?: boolean;
 }
 
 /** Thrown when the run was cancelled; `done` tasks had finished. */
@@ -93,7 +97,7 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
   const given = o.started?.workers ?? [];
   // Started workers beyond what the tasks need are ended at once.
   const unused = given.slice(n);
-  void Promise.all(unused.map((w) => w.terminate()));
+  if (!o.keepStarted) void Promise.all(unused.map((w) => w.terminate()));
   if (n === 0) {
     if (!o.inline) throw new TypeError("runPool: threads = 0 needs an inline handler");
     o.inline.setup(o.setup);
@@ -112,6 +116,8 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
     ...Array.from({ length: Math.max(0, n - given.length) }, () => new Worker(o.workerUrl)),
   ];
   let next = 0;
+  let ok = false;
+  const listeners: Array<() => void> = [];
   try {
     await new Promise<void>((resolve, reject) => {
       const stop = () => reject(new CancelledError(done));
@@ -123,7 +129,7 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
         w.postMessage({ index: i, task: o.tasks[i] } satisfies ToWorker<Setup, Task>);
       };
       for (const w of workers) {
-        w.on("message", (m: FromWorker<Result>) => {
+        const onMessage = (m: FromWorker<Result>) => {
           if (m.error !== undefined) return reject(new Error(m.error));
           results[m.index] = m.result!;
           done++;
@@ -131,18 +137,31 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
           if (done < order.length) feed(w);
           o.onResult?.(m.index, m.result!, m.taskMs ?? Number.NaN);
           if (done === order.length) resolve();
-        });
-        w.on("error", reject);
-        w.on("exit", (code) => {
+        };
+        const onExit = (code: number) => {
           if (done < order.length && code !== 0) reject(new Error(`worker stopped with exit code ${code}`));
+        };
+        w.on("message", onMessage);
+        w.on("error", reject);
+        w.on("exit", onExit);
+        listeners.push(() => {
+          w.off("message", onMessage);
+          w.off("error", reject);
+          w.off("exit", onExit);
         });
-        w.postMessage({ setup: o.setup } satisfies ToWorker<Setup, Task>);
+        w.postMessage({
+          setup: o.setup,
+          ...(o.handler ? { handler: o.handler } : {}),
+        } satisfies ToWorker<Setup, Task>);
         feed(w);
       }
       if (order.length === 0) resolve();
     });
+    ok = true;
   } finally {
-    await Promise.all(workers.map((w) => w.terminate()));
+    for (const off of listeners) off();
+    const keep = ok && o.keepStarted ? new Set(given) : new Set<Worker>();
+    await Promise.all(workers.filter((w) => !keep.has(w)).map((w) => w.terminate()));
   }
   return results;
 }

@@ -4,7 +4,7 @@ import { resultRows, tableCsv, RESULT_COLUMNS, SCREENING_CAUTION } from "../../a
 import { UsageError } from "../exitCodes.ts";
 import { checkOut, writeOut } from "../files.ts";
 import { CHOICE_HELP, INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings } from "../options.ts";
-import { loadWorkspace } from "../workspace.ts";
+import { loadWorkspaceOnWorkers } from "../archive/parallelRead.ts";
 import { POOL_HELP, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
 import { CancelledError, stopWorkers } from "../archive/workerPool.ts";
 import { analyzeFiles, EXIT_CANCELLED } from "./compare.ts";
@@ -80,7 +80,8 @@ export const analyzeCommand: Command = {
     const started = startWorkersEarly(positionals, values);
     let inputs;
     try {
-      inputs = loadWorkspace(positionals, values, io);
+      // The survey files are parsed on those workers when there are several.
+      inputs = await loadWorkspaceOnWorkers(positionals, values, io, started);
     } catch (error) {
       await stopWorkers(started);
       throw error;

@@ -14,6 +14,7 @@ import {
   CHOICE_HELP,
 } from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
+import { loadWorkspaceOnWorkers } from "../archive/parallelRead.ts";
 import { ARCHIVE_HELP, compareArchive } from "../archive/compareArchive.ts";
 import { CancelledError, stopWorkers, type StartedWorkers } from "../archive/workerPool.ts";
 import { cacheDirOption } from "../archive/archiveOptions.ts";
@@ -128,7 +129,8 @@ export const compareCommand: Command = {
     const started = startWorkersEarly(positionals, values);
     let inputs: WorkspaceInputs;
     try {
-      inputs = loadWorkspace(positionals, values, io);
+      // The survey files are parsed on those workers when there are several.
+      inputs = await loadWorkspaceOnWorkers(positionals, values, io, started);
     } catch (error) {
       await stopWorkers(started);
       throw error;

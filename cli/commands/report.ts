@@ -7,6 +7,7 @@ import { CHOICE_HELP, INPUT_OPTIONS, parseCommandLine, workspaceSettings } from 
 import { analyzeFiles, EXIT_CANCELLED, provenanceOf } from "./compare.ts";
 import { POOL_HELP, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
 import { CancelledError } from "../archive/workerPool.ts";
+import { loadWorkspaceOnWorkers } from "../archive/parallelRead.ts";
 
 /** A map file read for the briefing, with its provenance. */
 export interface MapFile {
@@ -100,7 +101,10 @@ export const reportCommand: Command = {
     // Several surveys go through the worker pool; its threads start loading while the files are read.
     let analysed: Awaited<ReturnType<typeof analyzeFiles>>;
     try {
-      analysed = await analyzeFiles(positionals, values, io, false, undefined, startWorkersEarly(positionals, values));
+      const started = startWorkersEarly(positionals, values);
+      // The survey files are parsed on those workers when there are several.
+      const inputs = await loadWorkspaceOnWorkers(positionals, values, io, started);
+      analysed = await analyzeFiles(positionals, values, io, false, inputs, started);
     } catch (error) {
       if (!(error instanceof CancelledError)) throw error;
       io.err(`cancelled after ${error.done} surveys`);
