@@ -3,10 +3,10 @@
  * depth, width and a discharge-dependent dispersion coefficient.
  *
  * A(x) = A0·exp(−x/a) (x landward from the mouth) is the usual alluvial-estuary shape
- * (Savenije 1993, J. Hydrol. 148, 203–218; mixing-methods.md §5.2). The dispersion
+ * (Savenije 1993, J. Hydrol. 148, 203–218). The dispersion
  * coefficient is constant along the channel within one survey and grows weakly with discharge,
  * K = K_ref·(Q/Q_ref)^0.3, an invented rule standing in for stronger gravitational
- * circulation at high flow (cf. the discharge scalings quoted in mixing-methods.md §5.1 end).
+ * circulation at high flow (cf. the Q^(−1/3) scaling of Hansen & Rattray 1965 / Chatwin 1976, from memory).
  */
 import type { TransportGrid } from "./transport.ts";
 

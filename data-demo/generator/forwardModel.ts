@@ -5,7 +5,7 @@
  * - river end-member C_r: the concentration imposed at the head (river water, S = S_r);
  * - sea end-member C_s: the concentration imposed at the mouth (S = S0);
  * - effective river end-member C*₀: the prescribed C_r + Δ, which equals the net seaward flux
- *   through the mouth divided by Q (Eq. 3 of mixing-methods.md §1.2); the finite-difference flux
+ *   through the mouth divided by Q (Boyle et al. 1974); the finite-difference flux
  *   is reported alongside as a check;
  * - % change: 100·(C*₀ − C_r)/C_r (negative = net removal).
  */

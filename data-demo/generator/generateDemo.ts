@@ -4,7 +4,7 @@
  * Everything this module produces is invented: the estuary, its names, its coastline (placed in
  * the open North Atlantic near 45.2° N, 35.5° W, where there is no land) and both surveys. The
  * numbers come from a steady 1-D advection–dispersion–reaction model with prescribed reactions
- * (Boyle et al. 1974, Geochim. Cosmochim. Acta 38, 1719–1728; mixing-methods.md §1.2–1.3, §5.1)
+ * (Boyle et al. 1974, Geochim. Cosmochim. Acta 38, 1719–1728)
  * plus seeded analytical noise; they are not measurements.
  *
  * Deterministic: the only randomness is d3-random `randomLcg(seed)`, so the same seed gives

@@ -1,7 +1,7 @@
 /**
  * Prescribed reactions, written as the effective river end-member C*₀(S).
  *
- * By Eq. 3 of mixing-methods.md §1.2 the net seaward flux through the section at salinity S
+ * By the flux relation of Boyle et al. (1974) §1.2 the net seaward flux through the section at salinity S
  * is F = Q·C*₀(S) with C*₀(S) = C − (S − S_r)·dC/dS, and by Eq. 5 the reaction integrated between
  * two sections equals Q·[C*₀(S₂) − C*₀(S₁)]. The generator therefore prescribes each reaction as
  *   C*₀(S) = C_r + Δ·G(S),

@@ -3,8 +3,8 @@
  *
  * Salt is conservative: the net seaward flux is the same at every section, and with a
  * river salinity S_r > 0 the balance is K·A·dS/dx = −Q·(S − S_r) (x landward; Eq. 2′ of
- * mixing-methods.md §1.2 with the sign of §5.1). For constant A and K on a long channel the
- * solution is S = S_r + (S0 − S_r)·exp(−U·x/K), U = Q/A (mixing-methods.md §5.1 Eq. 6).
+ * Boyle et al. 1974, with x landward). For constant A and K on a long channel the
+ * solution is S = S_r + (S0 − S_r)·exp(−U·x/K), U = Q/A (steady 1-D advection–dispersion closed form, derived).
  */
 import { solveSteadyTransport, type TransportGrid } from "./transport.ts";
 

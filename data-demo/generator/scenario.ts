@@ -1,8 +1,8 @@
 /**
  * The two invented surveys: discharge, end-members, prescribed reactions, noise and
- * formatting of every column. All values are choices for a demonstration, loosely guided by
- * the suggested end-members and behaviours of mixing-methods.md §6 (which itself labels them
- * "choice, not data"); the wet-season river end-members are lower (dilution at high discharge).
+ * formatting of every column. All values are choices for a demonstration, not data, loosely
+ * guided by world-river and open-ocean orders of magnitude (Gaillardet, Viers & Dupré 2003;
+ * Li 1982; from memory); the wet-season river end-members are lower (dilution at high discharge).
  */
 import type { ReactionSpec } from "./reaction.ts";
 

@@ -2,7 +2,7 @@
  * Steady one-dimensional advection–dispersion–reaction solver for a tidally averaged estuary.
  *
  * Coordinate x is measured LANDWARD from the mouth (x = 0) to the head (x = L), as in
- * mixing-methods.md §5.1. The net seaward flux through a section is
+ * the steady 1-D advection–dispersion balance (common practice). The net seaward flux through a section is
  *   F(x) = Q·C + K(x)·A(x)·dC/dx,
  * and the steady balance of a slab is dF/dx = −A·R, with R the volumetric reaction rate
  * (positive = production). Salt is the special case R = 0, for which F is constant (Eq. 2′
@@ -15,7 +15,7 @@
  * telescopes exactly: F_{1/2} = F_{N−1/2} + Σ production.
  *
  * @see Boyle, E. et al. (1974) Geochim. Cosmochim. Acta 38, 1719–1728 (1-D steady mass balance)
- * @see mixing-methods.md §1.2 Eq. 2′–3 and §1.3 Eq. 4–5
+ * @see Boyle et al. (1974), Geochim. Cosmochim. Acta 38, 1719–1728 (flux F = Q·C*0; curvature–rate relation, with Officer 1979, from memory)
  */
 
 /** Channel description on the solver grid. */

@@ -4,7 +4,7 @@
  * "True" means the value of the noise-free forward model, not a property of the noisy
  * station data: end-members are the model's boundary concentrations, the effective river
  * end-member is the prescribed C*₀ at the mouth (= net mouth flux / Q, Eq. 3 of
- * mixing-methods.md §1.2), the reaction zone is the salinity interval where the prescribed
+ * Boyle et al. 1974), the reaction zone is the salinity interval where the prescribed
  * reaction acts, and the maximum is the model concentration maximum inside the estuary.
  * An analysis of the station data recovers them only within its own uncertainty.
  */
@@ -121,7 +121,7 @@ export function truthDocument(
       riverEndmember: "Concentration imposed at the head boundary (river water at S = riverSalinity).",
       seaEndmember: "Concentration imposed at the mouth boundary (S = seaSalinity).",
       effectiveRiverEndmember:
-        "Prescribed C*0 at the mouth = riverEndmember + reaction change; equals the net seaward flux through the mouth divided by Q (Boyle et al. 1974; mixing-methods.md §1.2 Eq. 3). effectiveRiverEndmemberFromModelFlux is the finite-difference check.",
+        "Prescribed C*0 at the mouth = riverEndmember + reaction change; equals the net seaward flux through the mouth divided by Q (Boyle et al. 1974). effectiveRiverEndmemberFromModelFlux is the finite-difference check.",
       percentChange: "100·(effectiveRiverEndmember − riverEndmember)/riverEndmember; negative = net removal.",
       reactionZoneSalinity:
         "Salinity interval where the prescribed reaction acts; conservative mixing beyond its upper end.",
@@ -134,7 +134,7 @@ export function truthDocument(
     },
     model: {
       equations:
-        "Steady 1-D: d/dx(Q·C + K·A·dC/dx) = −A·R, x landward; salt R = 0; reactions prescribed as C*0(S) (mixing-methods.md §1.3 Eq. 4–5).",
+        "Steady 1-D: d/dx(Q·C + K·A·dC/dx) = −A·R, x landward; salt R = 0; reactions prescribed as C*0(S) (Boyle et al. 1974; Officer 1979, from memory).",
       mouthAreaM2: DEMO_CHANNEL.mouthAreaM2,
       convergenceLengthKm: DEMO_CHANNEL.convergenceLengthKm,
       minAreaM2: DEMO_CHANNEL.minAreaM2,

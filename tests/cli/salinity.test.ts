@@ -106,7 +106,7 @@ describe("brackline salinity", () => {
     expect(r.code).toBe(0);
     const t = table(r.out);
     expect(t[0][3]).toBe("salinity_pss78");
-    // chemistry-constants.md §1.6 row 12: (35.2039, 2 °C, 1000 dbar) → 40.0000516292 (python3-gsw)
+    // TEOS-10 (IOC et al. 2010) via python3-gsw: (35.2039, 2 °C, 1000 dbar) → 40.0000516292 (python3-gsw)
     expectWithin(Number(t[1][3]), 40.0000516292, 1e-8, "S at 1000 dbar");
   });
 
@@ -119,7 +119,7 @@ describe("brackline salinity", () => {
     const r = await run(["salinity", file, "--pres", "Depth (m)"]);
     expect(r.code).toBe(0);
     expect(r.err).toMatch(/depth in m, taken as dbar/);
-    // chemistry-constants.md §1.6 row 12 (python3-gsw): 1000 dbar → 40.0000516292
+    // TEOS-10 (IOC et al. 2010) via python3-gsw: 1000 dbar → 40.0000516292
     expectWithin(Number(table(r.out)[1][3]), 40.0000516292, 1e-8, "S");
   });
 

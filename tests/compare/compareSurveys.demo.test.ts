@@ -24,7 +24,7 @@ describe("compareSurveys() on the invented demo surveys (data-demo truth.json, g
     expectWithin(dry!.saltIntrusionKm, D.saltIntrusionKm.S2, 1, "dry S = 2 intrusion [km]");
   });
 
-  it("compareSurveys() apparent exponent n of L ∝ Q^n matches ln(L_dry/L_wet)/ln(Q_dry/Q_wet) of truth.json within 0.03, beside the −1, −1/3, −1/7 scalings (mixing-methods.md §5.1, §5.3)", () => {
+  it("compareSurveys() apparent exponent n of L ∝ Q^n matches ln(L_dry/L_wet)/ln(Q_dry/Q_wet) of truth.json within 0.03, beside the −1, −1/3, −1/7 scalings (steady 1-D advection–dispersion closed form, derived; Monismith et al. 2002, from memory)", () => {
     const s = c.scaling.find((x) => x.salinity === 2)!;
     const nTrue = Math.log(D.saltIntrusionKm.S2 / W.saltIntrusionKm.S2) / Math.log(D.dischargeM3s / W.dischargeM3s);
     expectWithin(s.exponent, nTrue, 0.03, "apparent exponent");

@@ -14,8 +14,8 @@ interface ReferenceCase {
 }
 const [expCase, savenijeCase, quadCase] = reference.cases as unknown as ReferenceCase[];
 
-describe("demo forward model against closed forms (mixing-methods.md §5.1, §5.2, §7.2)", () => {
-  it("solveSalinity() with constant A and K reproduces S = S0·exp(−U·x/K) and x2 = 28.62 km (mixing-methods.md §5.1 Eq. 6)", () => {
+describe("demo forward model against closed forms (steady 1-D advection–dispersion closed forms, derived; Savenije 1993)", () => {
+  it("solveSalinity() with constant A and K reproduces S = S0·exp(−U·x/K) and x2 = 28.62 km (steady 1-D advection–dispersion closed form, derived)", () => {
     const { dischargeM3s: q, areaM2: a, dispersionM2s: k, seaSalinity: s0, riverSalinity: sr } = expCase.inputs;
     const grid = buildGrid(
       200,
@@ -37,7 +37,7 @@ describe("demo forward model against closed forms (mixing-methods.md §5.1, §5.
     expectWithin(isohalineKm(field, 2), expCase.expected.x2Km, expCase.tol.x2Km, "x2 [km] (§5.1 check 28.62 km)");
   });
 
-  it("solveSalinity() in a convergent channel gives S(10 km) = 25.305 (mixing-methods.md §5.2 constant-D closed form)", () => {
+  it("solveSalinity() in a convergent channel gives S(10 km) = 25.305 (Savenije 1993 model with constant D, closed form derived)", () => {
     const c = savenijeCase.inputs;
     const grid = buildGrid(
       80,

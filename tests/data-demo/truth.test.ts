@@ -80,7 +80,7 @@ describe("demo truth.json: the invented scenario's known answers", () => {
     }
   });
 
-  it("the model's mouth flux / Q equals the prescribed C*0 for every constituent (Boyle et al. 1974 Eq. 3, mixing-methods.md §1.2)", () => {
+  it("the model's mouth flux / Q equals the prescribed C*0 for every constituent (Boyle et al. 1974)", () => {
     for (const s of both) {
       for (const [el, c] of Object.entries(s.constituents)) {
         expectWithin(
@@ -93,7 +93,7 @@ describe("demo truth.json: the invented scenario's known answers", () => {
     }
   });
 
-  it("the tangent intercept of the model C–S line seaward of the reaction zone equals truth C*0 (Boyle et al. 1974 two-point form, mixing-methods.md §1.2)", () => {
+  it("the tangent intercept of the model C–S line seaward of the reaction zone equals truth C*0 (Boyle et al. 1974, two-point form)", () => {
     for (const m of models) {
       const t = truth.surveys[m.spec.id];
       const sr = t.riverSalinity;
@@ -118,7 +118,7 @@ describe("demo truth.json: the invented scenario's known answers", () => {
     }
   });
 
-  it("the conservative Si of the forward model lies on the theoretical dilution line (Liss 1976; mixing-methods.md §1.1 Eq. 1)", () => {
+  it("the conservative Si of the forward model lies on the theoretical dilution line (Burton & Liss 1976)", () => {
     for (const m of models) {
       const si = m.spec.constituents.Si;
       const sr = m.spec.riverSalinity;
@@ -131,7 +131,7 @@ describe("demo truth.json: the invented scenario's known answers", () => {
     }
   });
 
-  it("wet-season (Q = 450 m³/s) S = 2 intrusion 15–25 km is shorter than the dry-season (Q = 60 m³/s) 40–50 km (mixing-methods.md §5.1: intrusion falls with Q)", () => {
+  it("wet-season (Q = 450 m³/s) S = 2 intrusion 15–25 km is shorter than the dry-season (Q = 60 m³/s) 40–50 km (steady 1-D advection–dispersion closed form, derived: intrusion falls with Q)", () => {
     expectWithin(wet.saltIntrusionKm.S2, 20, 5, "wet S2 [km]");
     expectWithin(dry.saltIntrusionKm.S2, 45, 5, "dry S2 [km]");
     expect(wet.saltIntrusionKm.S2 < dry.saltIntrusionKm.S2).toBe(true);

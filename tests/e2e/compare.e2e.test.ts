@@ -2,28 +2,20 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
-  missingBrowserMessage,
-  openDashboard,
-  SCREENSHOT_DIR,
+  openReadyDashboard,
   screenshot,
+  SCREENSHOT_DIR,
   selectionStatus,
+  type Session,
   settle,
   skipBrowser,
-  waitForAnalysis,
-  waitForMap,
-  type Session,
 } from "./browser.ts";
 
 describe.skipIf(skipBrowser)("survey comparison view and the briefing download", () => {
   let s: Session;
 
   beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-    await settle(s.page);
+    s = await openReadyDashboard();
   });
 
   afterAll(async () => {

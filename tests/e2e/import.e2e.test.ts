@@ -1,14 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
-  missingBrowserMessage,
-  openDashboard,
+  openReadyDashboard,
   screenshot,
+  type Session,
   settle,
   skipBrowser,
   stationPixel,
   waitForAnalysis,
   waitForMap,
-  type Session,
 } from "./browser.ts";
 
 // An invented survey file with the quirks of real exports: semicolons, decimal commas, a censored
@@ -35,12 +34,7 @@ describe.skipIf(skipBrowser)("importing a survey file: mapping dialog, report, m
   let s: Session;
 
   beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-    await settle(s.page);
+    s = await openReadyDashboard();
   });
 
   afterAll(async () => {

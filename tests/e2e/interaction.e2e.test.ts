@@ -1,27 +1,20 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
-  missingBrowserMessage,
-  openDashboard,
+  openReadyDashboard,
   screenshot,
   selectionStatus,
+  type Session,
   settle,
   skipBrowser,
   stationPixel,
   waitForAnalysis,
-  waitForMap,
-  type Session,
 } from "./browser.ts";
 
 describe.skipIf(skipBrowser)("map tooltips, keyboard use and re-analysis in the worker", () => {
   let s: Session;
 
   beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-    await settle(s.page);
+    s = await openReadyDashboard();
   });
 
   afterAll(async () => {

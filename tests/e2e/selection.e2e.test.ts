@@ -1,15 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
-  missingBrowserMessage,
-  openDashboard,
+  openReadyDashboard,
   screenshot,
   selectionStatus,
+  type Session,
   settle,
   skipBrowser,
   stationPixel,
-  waitForAnalysis,
-  waitForMap,
-  type Session,
 } from "./browser.ts";
 import { changedShare } from "./pixels.ts";
 
@@ -20,12 +17,7 @@ describe.skipIf(skipBrowser)("selection links the map, the station list and the 
   let s: Session;
 
   beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-    await settle(s.page);
+    s = await openReadyDashboard();
   });
 
   afterAll(async () => {

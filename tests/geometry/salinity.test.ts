@@ -32,8 +32,8 @@ function exponentialSurvey(noise?: () => number): SalinityPoint[] {
   });
 }
 
-describe("salinity profile and isohalines on the exponential profile of mixing-methods.md §5.1", () => {
-  it(`saltIntrusionLengthKm() gives x2 = ${exp.expected} km (mixing-methods.md §5.1, eq. 6) within ${exp.tol} km from stations every 1 km`, () => {
+describe("salinity profile and isohalines on the exponential profile of the steady 1-D advection–dispersion closed form, derived", () => {
+  it(`saltIntrusionLengthKm() gives x2 = ${exp.expected} km (steady 1-D advection–dispersion closed form, derived) within ${exp.tol} km from stations every 1 km`, () => {
     const profile = fitSalinityProfile(exponentialSurvey())!;
     expect(profile.method).toBe("isotonic");
     expect(profile.monotone).toBe(true);
@@ -42,7 +42,7 @@ describe("salinity profile and isohalines on the exponential profile of mixing-m
     expect(r.warnings).toEqual([]);
   });
 
-  it("isohalinePositions() places S = 1, 5, 10, 20 at (K/U)·ln(S0/S*) (mixing-methods.md §5.1) within 0.03 km", () => {
+  it("isohalinePositions() places S = 1, 5, 10, 20 at (K/U)·ln(S0/S*) (steady 1-D advection–dispersion closed form, derived) within 0.03 km", () => {
     const profile = fitSalinityProfile(exponentialSurvey())!;
     const { positions, warnings } = isohalinePositions(profile, [1, 5, 10, 20]);
     for (const p of positions) {
@@ -52,13 +52,13 @@ describe("salinity profile and isohalines on the exponential profile of mixing-m
     expect(warnings).toEqual([]);
   });
 
-  it("saltIntrusionLengthKm() with seeded noise (σ = 0.1) stays within 1 km of x2 = 28.62 km (mixing-methods.md §5.1); noise/gradient ≈ 0.5 km", () => {
+  it("saltIntrusionLengthKm() with seeded noise (σ = 0.1) stays within 1 km of x2 = 28.62 km (steady 1-D advection–dispersion closed form, derived); noise/gradient ≈ 0.5 km", () => {
     const profile = fitSalinityProfile(exponentialSurvey(randomNormal.source(randomLcg(4))(0, 0.1)))!;
     expect(profile.method).toBe("isotonic");
     expectWithin(saltIntrusionLengthKm(profile).km, exp.expected, 1, "x2 from noisy stations");
   });
 
-  it("salinityIntervalToKm() maps S in [5, 10] to [10·ln 3.5, 10·ln 7] km (mixing-methods.md §5.1) within 0.03 km", () => {
+  it("salinityIntervalToKm() maps S in [5, 10] to [10·ln 3.5, 10·ln 7] km (steady 1-D advection–dispersion closed form, derived) within 0.03 km", () => {
     const profile = fitSalinityProfile(exponentialSurvey())!;
     const r = salinityIntervalToKm(profile, [10, 5]);
     expect(r.intervalsKm).toHaveLength(1);

@@ -3,6 +3,7 @@ import { readNetcdfStations } from "../../analysis/io/netcdfStations.ts";
 import { cfTimeToIso, parseCfTimeUnits } from "../../analysis/io/cfTime.ts";
 import { expectWithin } from "../helpers/tolerance.ts";
 import { writeNetcdf3 } from "./helpers/netcdf3Writer.ts";
+import { cfStationVariables } from "./helpers/cfStationVariables.ts";
 
 const FILL = -999;
 
@@ -19,43 +20,14 @@ function profileFile(): Uint8Array {
       { name: "featureType", value: "profile" },
     ],
     vars: [
-      {
-        name: "station_name",
-        dims: ["station", "name_strlen"],
-        type: "char",
-        attrs: [{ name: "cf_role", value: "profile_id" }],
-        data: ["ST01", "ST02"],
-      },
-      {
-        name: "time",
-        dims: ["station"],
-        type: "double",
-        attrs: [
-          { name: "standard_name", value: "time" },
-          { name: "units", value: "days since 1970-01-01 00:00:00" },
-        ],
-        data: [20089.5, 20090.25],
-      },
-      {
-        name: "lat",
-        dims: ["station"],
-        type: "double",
-        attrs: [
-          { name: "standard_name", value: "latitude" },
-          { name: "units", value: "degrees_north" },
-        ],
-        data: [45.1, 45.2],
-      },
-      {
-        name: "lon",
-        dims: ["station"],
-        type: "double",
-        attrs: [
-          { name: "standard_name", value: "longitude" },
-          { name: "units", value: "degrees_east" },
-        ],
-        data: [-1.5, -1.4],
-      },
+      ...cfStationVariables({
+        names: ["ST01", "ST02"],
+        role: "profile_id",
+        timeDays: [20089.5, 20090.25],
+        timeUnits: "days since 1970-01-01 00:00:00",
+        latDeg: [45.1, 45.2],
+        lonDeg: [-1.5, -1.4],
+      }),
       {
         name: "depth",
         dims: ["z"],

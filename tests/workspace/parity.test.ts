@@ -12,6 +12,7 @@ import Papa from "papaparse";
 import { main } from "../../cli/main.ts";
 import { analyzeInputs, readInputs, type InputChoices, type WorkspaceSettings } from "../../analysis/index.ts";
 import { writeNetcdf3 } from "../io/helpers/netcdf3Writer.ts";
+import { cfStationVariables } from "../io/helpers/cfStationVariables.ts";
 import { expectWithin } from "../helpers/tolerance.ts";
 
 const DRAWS = 200;
@@ -107,43 +108,14 @@ function netcdfSurvey(): string {
       { name: "featureType", value: "profile" },
     ],
     vars: [
-      {
-        name: "station_name",
-        dims: ["station", "name_strlen"],
-        type: "char",
-        attrs: [{ name: "cf_role", value: "profile_id" }],
-        data: rows.map((r) => r["station"]!),
-      },
-      {
-        name: "time",
-        dims: ["station"],
-        type: "double",
-        attrs: [
-          { name: "standard_name", value: "time" },
-          { name: "units", value: "days since 1970-01-01 00:00:00" },
-        ],
-        data: days,
-      },
-      {
-        name: "lat",
-        dims: ["station"],
-        type: "double",
-        attrs: [
-          { name: "standard_name", value: "latitude" },
-          { name: "units", value: "degrees_north" },
-        ],
-        data: rows.map((r) => Number(r["latitude"])),
-      },
-      {
-        name: "lon",
-        dims: ["station"],
-        type: "double",
-        attrs: [
-          { name: "standard_name", value: "longitude" },
-          { name: "units", value: "degrees_east" },
-        ],
-        data: rows.map((r) => Number(r["longitude"])),
-      },
+      ...cfStationVariables({
+        names: rows.map((r) => r["station"]!),
+        role: "profile_id",
+        timeDays: days,
+        timeUnits: "days since 1970-01-01 00:00:00",
+        latDeg: rows.map((r) => Number(r["latitude"])),
+        lonDeg: rows.map((r) => Number(r["longitude"])),
+      }),
       {
         name: "depth",
         dims: ["z"],

@@ -15,6 +15,7 @@ import type { AnalysisEvent, SourceFile, TextFile } from "../../../dashboard/src
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
 import type { SurveyAnalysis } from "../../../analysis/index.ts";
 import { writeNetcdf3 } from "../../io/helpers/netcdf3Writer.ts";
+import { cfStationVariables } from "../../io/helpers/cfStationVariables.ts";
 
 const demo = (p: string) => readFileSync(new URL(`../../../data-demo/${p}`, import.meta.url), "utf8");
 const dir = mkdtempSync(join(tmpdir(), "brackline-parity-"));
@@ -68,37 +69,14 @@ function wetNetcdf(): Uint8Array {
       { name: "featureType", value: "timeSeries" },
     ],
     vars: [
-      {
-        name: "station_name",
-        dims: ["station", "name_strlen"],
-        type: "char",
-        attrs: [{ name: "cf_role", value: "timeseries_id" }],
-        data: rows.map((r) => r["station"]!),
-      },
-      double(
-        "time",
-        [
-          { name: "standard_name", value: "time" },
-          { name: "units", value: "days since 2025-03-18 00:00:00" },
-        ],
-        rows.map((_, i) => 0.4 + i * 0.01),
-      ),
-      double(
-        "lat",
-        [
-          { name: "standard_name", value: "latitude" },
-          { name: "units", value: "degrees_north" },
-        ],
-        num("latitude"),
-      ),
-      double(
-        "lon",
-        [
-          { name: "standard_name", value: "longitude" },
-          { name: "units", value: "degrees_east" },
-        ],
-        num("longitude"),
-      ),
+      ...cfStationVariables({
+        names: rows.map((r) => r["station"]!),
+        role: "timeseries_id",
+        timeDays: rows.map((_, i) => 0.4 + i * 0.01),
+        timeUnits: "days since 2025-03-18 00:00:00",
+        latDeg: num("latitude"),
+        lonDeg: num("longitude"),
+      }),
       double(
         "PSAL",
         [
