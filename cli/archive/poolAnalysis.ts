@@ -40,13 +40,14 @@ const EARLY_START_BYTES = 256 * 1024;
 
 /**
  * Starts the worker threads before the files are read when they will likely be used (explicit
- * `--threads n > 0`, or default threads and survey files of at least 256 KiB together); their
- * start-up then overlaps the reading. Pass the result to {@link analyzeSurveysThroughPool}.
+ * `--threads n > 0`, or default threads and two or more survey files of at least 256 KiB together);
+ * they then parse the files in parallel, and their start-up overlaps the reading. Pass the result to {@link analyzeSurveysThroughPool}.
  */
 export function startWorkersEarly(paths: readonly string[], values: PoolValues): StartedWorkers | undefined {
   const threads = threadsOption(values.threads);
   if (threads <= 0) return undefined;
   if (values.threads === undefined) {
+    if (paths.length < 2) return undefined;
     let bytes = 0;
     for (const p of paths) bytes += statSync(p, { throwIfNoEntry: false })?.size ?? 0;
     if (bytes < EARLY_START_BYTES) return undefined;
