@@ -64,8 +64,14 @@ export function readSurveyFileAs(
   });
 }
 
-/** A survey file already read by {@link readSurveyFileAs} (with its kind), keyed by file name. */
-export type PreReadFiles = ReadonlyMap<string, { kind: InputFileKind; result?: ImportResult }>;
+/**
+ * A survey file already read by {@link readSurveyFileAs} (with its kind and, optionally, its
+ * columnReport for the file's report), keyed by file name.
+ */
+export type PreReadFiles = ReadonlyMap<
+  string,
+  { kind: InputFileKind; result?: ImportResult; columns?: ReturnType<typeof columnReport> }
+>;
 
 /**
  * Reads input files into surveys and a channel with one file-kind dispatch: delimited text, GeoJSON
@@ -128,7 +134,7 @@ export function readInputs(
         onProgress ? (x: number) => onProgress((n + x) / surveyIdx.length) : undefined,
       );
     Object.assign(reports[i]!, { surveys: r.surveys.map((s) => s.name), summary: r.summary, mapping: r.mapping });
-    Object.assign(reports[i]!, columnReport(f, kinds[i]!, r.mapping));
+    Object.assign(reports[i]!, preRead?.get(f.name)?.columns ?? columnReport(f, kinds[i]!, r.mapping));
     appendAll(issues, r.issues);
     return r;
   });

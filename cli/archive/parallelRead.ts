@@ -5,7 +5,7 @@
  * reports) on this thread. Falls back to reading everything here when that cannot be the same.
  */
 import type { CommandIo } from "../command.ts";
-import type { InputFileKind, PreReadFiles, WorkspaceInputs } from "../../analysis/index.ts";
+import type { PreReadFiles, WorkspaceInputs } from "../../analysis/index.ts";
 import type { OptionValues } from "../options.ts";
 import { loadWorkspace, workspaceFiles } from "../workspace.ts";
 import { surveyWorkerUrl } from "./analyzeArchive.ts";
@@ -48,10 +48,10 @@ export async function loadWorkspaceOnWorkers(
     // Without --stations, a station table among the files would be joined to every survey: the
     // workers did not know it, so such inputs are read again here.
     if (!stationFile && results.some((r) => r.kind === "stationTable")) return loadWorkspace(paths, values, io);
-    const preRead = new Map<string, { kind: InputFileKind; result?: NonNullable<ReadResult["result"]> }>();
+    const preRead = new Map<string, ReadResult>();
     tasks.forEach((t, i) => {
       const r = results[i]!;
-      if (r.result) preRead.set(t.file.name, { kind: r.kind, result: r.result });
+      if (r.result) preRead.set(t.file.name, r);
     });
     return loadWorkspace(paths, values, io, { files, choices, preRead: preRead as PreReadFiles });
   } catch (error) {

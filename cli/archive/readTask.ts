@@ -5,6 +5,7 @@
  */
 import type { ImportResult, InputChoices, InputFile, InputFileKind, StationTable } from "../../analysis/index.ts";
 import { detectFileKind, readStationTableFile, readSurveyFileAs } from "../../analysis/index.ts";
+import { columnReport } from "../../analysis/workspace/stationPlacement.ts";
 import type { TaskHandler } from "./workerPool.ts";
 
 /** What every worker receives once for reading: the choices (plain data) and the station table file. */
@@ -18,10 +19,11 @@ export interface ReadTask {
   file: InputFile;
 }
 
-/** The file's kind (as readInputs decides it) and, for a survey file, what it read. */
+/** The file's kind (as readInputs decides it) and, for a survey file, what it read and its column report. */
 export interface ReadResult {
   kind: InputFileKind;
   result?: ImportResult;
+  columns?: ReturnType<typeof columnReport>;
 }
 
 let setup: ReadSetup | undefined;
@@ -37,6 +39,7 @@ export const readTaskHandler: TaskHandler<ReadSetup, ReadTask, ReadResult> = {
     if (!setup) throw new Error("readTaskHandler: run before setup");
     const kind = setup.choices.kindByFile?.[file.name] ?? detectFileKind(file.content).kind;
     if (!kind.startsWith("survey")) return { kind };
-    return { kind, result: readSurveyFileAs(file, kind, setup.choices, table) };
+    const result = readSurveyFileAs(file, kind, setup.choices, table);
+    return { kind, result, columns: columnReport(file, kind, result.mapping) };
   },
 };

@@ -4,6 +4,7 @@ import { join } from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
 import type { InputFile, InputFileKind, PreReadFiles } from "../../analysis/index.ts";
 import { detectFileKind, readInputs, readSurveyFileAs } from "../../analysis/index.ts";
+import { columnReport } from "../../analysis/workspace/stationPlacement.ts";
 import { main } from "../../cli/main.ts";
 import { DEMO_DIR } from "../compare/helpers/demoAnalyses.ts";
 
@@ -43,11 +44,15 @@ describe("survey files read elsewhere (worker threads) and handed to readInputs"
       kindByFile: { "centerline.geojson": "centerline" as InputFileKind },
       layer: { kind: "all" as const },
     };
-    const preRead = new Map<string, { kind: InputFileKind; result: ReturnType<typeof readSurveyFileAs> }>();
+    const preRead = new Map<
+      string,
+      { kind: InputFileKind; result: ReturnType<typeof readSurveyFileAs>; columns: ReturnType<typeof columnReport> }
+    >();
     for (const f of files.slice(0, 3)) {
       const kind = detectFileKind(f.content).kind;
       // A structured clone, as a worker thread's answer arrives.
-      preRead.set(f.name, structuredClone({ kind, result: readSurveyFileAs(f, kind, choices) }));
+      const result = readSurveyFileAs(f, kind, choices);
+      preRead.set(f.name, structuredClone({ kind, result, columns: columnReport(f, kind, result.mapping) }));
     }
     const here = readInputs(files, choices);
     const there = readInputs(files, choices, preRead as PreReadFiles);
