@@ -60,6 +60,20 @@ export function surveyCost(survey: Survey): number {
   return values * 100 + survey.stations.length;
 }
 
+/** The cache key of every survey of a run. */
+function cacheKeys(surveys: readonly Survey[], setup: SurveySetup): string[] {
+  const network = setup.inputs.channel?.network;
+  const channel = network
+    ? createHash("sha256")
+        .update(JSON.stringify({ ...network, segmentIndexData: undefined }))
+        .update(setup.inputs.channel!.mouth.statement)
+        .digest("hex")
+    : "none";
+  return surveys.map((survey) =>
+    surveyCacheKey({ survey, channel, settings: setup.settings, offChannelM: setup.inputs.choices.offChannelM }),
+  );
+}
+
 /**
  * Analyses the set-up's surveys in parallel; results come back in survey order.
  *
@@ -72,20 +86,12 @@ export async function analyzeArchive(
   const t0 = performance.now();
   const { surveys, ...setup } = input;
   const cache = new SurveyCache(o.cacheDir);
-  const network = setup.inputs.channel?.network;
-  const channel = network
-    ? createHash("sha256")
-        .update(JSON.stringify({ ...network, segmentIndexData: undefined }))
-        .update(setup.inputs.channel!.mouth.statement)
-        .digest("hex")
-    : "none";
-  const keys = surveys.map((survey) =>
-    surveyCacheKey({ survey, channel, settings: setup.settings, offChannelM: setup.inputs.choices.offChannelM }),
-  );
+  // Keys (a hash of each survey, the channel, the settings and the analysis code) only with a cache.
+  const keys: Array<string | undefined> = o.cacheDir ? cacheKeys(surveys, setup) : surveys.map(() => undefined);
   const out = new Array<SurveyAnalysis>(surveys.length);
   const todo: number[] = [];
   keys.forEach((k, i) => {
-    const hit = cache.get<SurveyAnalysis>(k);
+    const hit = k === undefined ? undefined : cache.get<SurveyAnalysis>(k);
     if (hit) out[i] = hit;
     else todo.push(i);
   });
@@ -116,7 +122,7 @@ export async function analyzeArchive(
         taskSeconds += taskMs / 1000;
         const i = todo[ti]!;
         out[i] = result;
-        cache.set(keys[i]!, result);
+        if (keys[i] !== undefined) cache.set(keys[i], result);
         done++;
         o.io.err(`[${n - todo.length + done}/${n}] ${result.survey.name} analysed (${(taskMs / 1000).toFixed(2)} s)`);
       },
