@@ -4,7 +4,7 @@
 // a fresh process, in the same run. The load average is printed beside the numbers: on a shared
 // machine, compare runs made at different loads with care.
 import { execFile } from "node:child_process";
-import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import { mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -30,6 +30,19 @@ interface CliRun {
   cpuS: number;
   surveys: number;
   output: string;
+  /** CPU [s] of the main thread, of the busiest `threads` other threads (the workers) and of all threads, sampled from /proc every 20 ms. */
+  threadsCpu?: { main: number; workers: number[]; total: number };
+}
+
+/**
+ * Wall time this run would take on an idle 2-core machine, from its threads' CPU: at least the
+ * busiest chain (main thread + busiest worker, as the main thread's own work is mostly before and
+ * after the workers') and at least all CPU shared by 2 cores.
+ */
+function idleEstimateS(r: CliRun): number {
+  const t = r.threadsCpu;
+  if (!t) return Number.NaN;
+  return Math.max(t.main + (t.workers[0] ?? 0), t.total / 2);
 }
 
 function archiveArgs(threads: number): string[] {
@@ -53,15 +66,50 @@ function archiveArgs(threads: number): string[] {
   ];
 }
 
+/** CPU seconds of each thread of a running process (Linux /proc; empty elsewhere). */
+function threadCpuS(pid: number): Map<number, number> {
+  const out = new Map<number, number>();
+  try {
+    for (const tid of readdirSync(`/proc/${pid}/task`)) {
+      const stat = readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8");
+      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      out.set(Number(tid), (Number(f[11]) + Number(f[12])) / 100); // utime + stime, clock ticks (100 Hz)
+    }
+  } catch {
+    // The process ended between two looks.
+  }
+  return out;
+}
+
 function cli(threads: number): Promise<CliRun> {
   return new Promise((resolve, reject) => {
     const t0 = performance.now();
-    execFile(process.execPath, archiveArgs(threads), { maxBuffer: 1 << 28 }, (e, out, err) => {
+    const perThread = new Map<number, number>();
+    const child = execFile(process.execPath, archiveArgs(threads), { maxBuffer: 1 << 28 }, (e, out, err) => {
+      clearInterval(poll);
       const wallS = (performance.now() - t0) / 1000;
       if (e) return reject(new Error(`threads ${threads}: ${e.message} ${err.slice(-500)}`));
       const m = /archive: (\d+) surveys analysed, \d+ from the cache, in ([\d.]+) s/.exec(err);
-      resolve({ wallS, analyseS: Number(m?.[2] ?? NaN), cpuS: NaN, surveys: Number(m?.[1] ?? 0), output: out });
+      const pid = child.pid ?? -1;
+      const main = perThread.get(pid) ?? Number.NaN;
+      const others = [...perThread.entries()]
+        .filter(([t]) => t !== pid)
+        .map(([, c]) => c)
+        .sort((x, y) => y - x);
+      const workers = others.slice(0, threads);
+      const total = [...perThread.values()].reduce((x, y) => x + y, 0);
+      resolve({
+        wallS,
+        analyseS: Number(m?.[2] ?? NaN),
+        cpuS: NaN,
+        surveys: Number(m?.[1] ?? 0),
+        output: out,
+        threadsCpu: { main, workers, total },
+      });
     });
+    const poll = setInterval(() => {
+      if (child.pid !== undefined) for (const [t, c] of threadCpuS(child.pid)) perThread.set(t, c);
+    }, 20);
   });
 }
 
@@ -104,7 +152,7 @@ export const archiveBench: BenchCase = {
         ratio: one.wallS / two.wallS,
         ratioLabel: "× speed-up (whole process)",
         goal: "≤ 5 s",
-        note: `${load}; CPU ${two.cpuS.toFixed(1)} s (one thread ${one.cpuS.toFixed(1)} s)`,
+        note: `${load}; CPU ${two.cpuS.toFixed(1)} s (one thread ${one.cpuS.toFixed(1)} s); per thread: main ${two.threadsCpu?.main.toFixed(1)} s, workers ${two.threadsCpu?.workers.map((w) => w.toFixed(1)).join(" + ")} s, V8/libuv helpers ${((two.threadsCpu?.total ?? NaN) - (two.threadsCpu?.main ?? NaN) - (two.threadsCpu?.workers.reduce((x, y) => x + y, 0) ?? NaN)).toFixed(1)} s; idle-machine estimate from the threads' CPU ${idleEstimateS(two).toFixed(1)} s (one thread ${idleEstimateS(one).toFixed(1)} s)`,
       },
       {
         name: "archive: analysis phase of the same runs (as the CLI reports it: queue, threads, results)",
@@ -114,7 +162,7 @@ export const archiveBench: BenchCase = {
         ratio: one.analyseS / two.analyseS,
         ratioLabel: "× speed-up",
         goal: "≥ 1.7× on 2 cores",
-        note: `${load}; the 2-thread workers start while the files are read`,
+        note: `${load}; the 2-thread workers start while the files are read; idle-machine estimate of the whole-process speed-up from the threads' CPU ${(idleEstimateS(one) / idleEstimateS(two)).toFixed(2)}×`,
       },
     ];
   },
