@@ -24,8 +24,11 @@ export function headOfText(text: string, rows = 50): { headers: string[]; sample
   // record ended before the cut, so they are the records the longer parse below gives.
   let end = -1;
   for (let i = 0; i < 2 * (rows + 2) && (i === 0 || end >= 0); i++) end = cut.indexOf("\n", end + 1);
-  let { records, total } = end >= 0 ? head(cut.slice(0, end + 1)) : { records: [], total: 0 };
-  if (total < rows + 2) ({ records } = head(cut.slice(0, cut.lastIndexOf("\n") + 1 || cut.length)));
+  const quick = end >= 0 ? head(cut.slice(0, end + 1)) : undefined;
+  const records =
+    quick && quick.total >= rows + 2
+      ? quick.records
+      : head(cut.slice(0, cut.lastIndexOf("\n") + 1 || cut.length)).records;
   return { headers: (records[0] ?? []).map((h) => h.trim()), sample: records.slice(1) };
 }
 
