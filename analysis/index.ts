@@ -438,6 +438,8 @@ export { stripControl } from "./output/terminalText.ts";
 // --- workspace ---
 export { readInputs, readStationTableFile, readSurveyFileAs, type PreReadFiles } from "./workspace/readInputs.ts";
 export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
+export { plottedObservations, surveyObservations } from "./workspace/observations.ts";
+export type { ObservationPoint } from "./workspace/observations.ts";
 export { workspaceComparison } from "./workspace/comparison.ts";
 export {
   analyzeInputs,

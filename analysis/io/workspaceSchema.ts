@@ -177,6 +177,12 @@ export const analysisChoicesSchema = z.looseObject({
   saltIntrusionSalinity: finite.optional(),
   selectedSurvey: z.string().optional(),
   selectedConstituent: z.string().optional(),
+  /** Which end of the centerline is the mouth (absent: the one mouth rule decides). */
+  mouth: z.enum(["start", "end"]).optional(),
+  /** Stations farther than this from the centerline are off-channel [m]. */
+  offChannelM: nonNegative.optional(),
+  /** Keep off-channel stations in the fits and end-members. */
+  keepOffChannel: z.boolean().optional(),
 });
 
 /** One file's import record: what was read and what was found. */

@@ -71,6 +71,19 @@ export interface OffChannelStation {
   branchId?: string;
 }
 
+/** One observation as a plot draws it, including values the analysis set aside. */
+export interface ObservationPoint {
+  stationId: string;
+  /** Practical salinity of the sample (PSS-78). */
+  salinity: number;
+  /** Measured value, or the detection limit when below detection [constituent unit]. */
+  value: number;
+  /** measured; below the detection limit (drawn at the limit); rejected by quality control (not analysed). */
+  kind: "measured" | "belowDetection" | "rejected";
+  /** The text as it stood in the file. */
+  original?: string;
+}
+
 /** Everything Brackline concludes about one survey. */
 export interface SurveyAnalysis {
   survey: SurveyFacts;
@@ -84,6 +97,12 @@ export interface SurveyAnalysis {
   offChannelStations?: OffChannelStation[];
   /** The off-channel limit used [km], and whether off-channel stations were kept in the fits. */
   offChannel?: { limitKm: number; kept: boolean };
+  /**
+   * What the plots draw per constituent name (analysis/workspace plottedObservations: every value
+   * read, rejected and below-detection ones included, off-channel stations left out unless kept);
+   * filled by analyzeInputs.
+   */
+  observations?: Record<string, ObservationPoint[]>;
   /** Survey-level warnings and notices (geometry, import, pipeline). */
   warnings: MixingWarning[];
   /** The caution to show beside every result. */

@@ -8,6 +8,7 @@ import { SCREENING_CAUTION } from "../output/caution.ts";
 import { deviationRows, resultRows, tableObjects, DEVIATION_COLUMNS, RESULT_COLUMNS } from "../output/columns.ts";
 import { analyzeSurvey, type ConstituentSettings } from "../pipeline/analyzeSurvey.ts";
 import type { SurveyAnalysis } from "../pipeline/surveyAnalysis.ts";
+import { plottedObservations } from "./observations.ts";
 import { channelOverlay, surveyOverlay, type ChannelOverlay, type SurveyOverlay } from "./overlay.ts";
 import type { MouthDecision } from "./readCenterline.ts";
 import type { WorkspaceInputs } from "./types.ts";
@@ -91,6 +92,7 @@ export function analyzeInputs(inputs: WorkspaceInputs, settings: WorkspaceSettin
       ...(settings.constituents ? { settings: { ...settings.constituents } } : {}),
       onProgress: perSurvey(i),
     });
+    analysis.observations = plottedObservations(survey, analysis);
     return { name: survey.name, analysis, overlay: surveyOverlay(analysis, network, overlay?.ticks ?? []) };
   });
   let comparison: SurveyComparison | undefined;

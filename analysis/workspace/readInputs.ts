@@ -171,7 +171,7 @@ export function readInputs(
     );
   const withoutLine =
     channel === undefined && !kinds.includes("centerline")
-      ? placeWithoutCenterline(surveys, choices.useStationCenterline === true)
+      ? placeWithoutCenterline(surveys, choices.useStationCenterline !== false, choices.mouth)
       : undefined;
   if (withoutLine) {
     notices.push(...withoutLine.notices);

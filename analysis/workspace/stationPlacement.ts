@@ -8,6 +8,7 @@ import { headOfText, missingUnits, unusedColumns } from "../io/mappingChoices.ts
 import type { StationCenterline } from "../pipeline/centerlineFromStations.ts";
 import { centerlineFromSurveys } from "../pipeline/centerlineFromStations.ts";
 import { distancesFromMouth } from "../pipeline/distancesFromMouth.ts";
+import type { MouthOption } from "../geometry/types.ts";
 import type { Survey } from "../survey/survey.ts";
 import { decodeText, type InputFileKind } from "./fileKind.ts";
 import { readCenterline, type ChannelInput } from "./readCenterline.ts";
@@ -42,11 +43,13 @@ export function columnReport(
  *
  * @param surveys the surveys read
  * @param use whether to use the built centerline as the channel
+ * @param mouth the user's mouth choice for the built line (else the one mouth rule: its salinity suggestion)
  * @returns surveys (distances from the mouth when oriented), the channel if used, the offered line, notices
  */
 export function placeWithoutCenterline(
   surveys: readonly Survey[],
   use: boolean,
+  mouth?: MouthOption,
 ): {
   surveys: Survey[];
   channel?: ChannelInput;
@@ -60,7 +63,11 @@ export function placeWithoutCenterline(
     const stations = surveys.flatMap((s) =>
       s.stations.map((st) => ({ lonLat: st.lonLat, salinity: st.salinity.accepted ? st.salinity.value : undefined })),
     );
-    const read = readCenterline(JSON.stringify(offered), { fileName: "centerline from stations", stations });
+    const read = readCenterline(JSON.stringify(offered), {
+      fileName: "centerline from stations",
+      stations,
+      ...(mouth !== undefined ? { mouth } : {}),
+    });
     if (read.channel !== undefined) {
       const left = offered.properties.leftOut;
       notices.push({

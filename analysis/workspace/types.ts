@@ -44,8 +44,9 @@ export interface InputChoices {
   /** Non-mixing variables (oxygen, chlorophyll, particles...) to analyse against the dilution line all the same. */
   analyseAsTracers?: readonly string[];
   /**
-   * Without a centerline file: use the centerline built from the station positions as the channel
-   * (the CLI does, with a notice); otherwise it is only offered (`offeredCenterline`) for the draw tool.
+   * Without a centerline file the centerline built from the station positions is the channel, with a
+   * notice (the CLI and the dashboard alike; the dashboard then lets the user edit or replace it in its
+   * draw tool). `false` only offers it (`offeredCenterline`) and orients the station table's distances.
    */
   useStationCenterline?: boolean;
   /** River discharge [m³/s] for all surveys, or by survey name. */

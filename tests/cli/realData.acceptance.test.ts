@@ -200,3 +200,36 @@ describe.skipIf(!neusePresent)("brackline analyze on the Neuse axial surveys (Ho
     }
   }, 120_000);
 });
+
+describe.skipIf(!bayPresent)(
+  "brackline analyze on the 2018 bay cruises without a centerline (issue 13: km from the station-built line)",
+  () => {
+    it("every North-Bay station of a full transect gets an along-channel km, increasing up the river; South-Bay stations are off the channel", async () => {
+      const r = await run(["analyze", BAY_FILES[1]!, "--stations", STATION_TABLE, ...UNITS, "--draws", "20"]);
+      expect(r.code).toBe(0);
+      const doc = JSON.parse(r.out) as Doc;
+      expect(doc.import.notices.map((n) => n.code)).toContain("centerlineFromStations");
+      const full = doc.surveys.filter(
+        (s) => s.stations.some((st) => st.id === "657") && s.stations.some((st) => st.id === "18"),
+      );
+      expect(full.length).toBeGreaterThan(5);
+      for (const s of full) {
+        const north = s.stations.filter((st) => NORTH_BAY.includes(st.id) || st.id === "18");
+        for (const st of north) {
+          expect(st.offChannel, `${s.name} station ${st.id}`).toBe(false);
+          expect(st.alongChannelKm, `${s.name} station ${st.id} km`).toBeTypeOf("number");
+        }
+        // Up the river from Central Bay (18) to Rio Vista (657): common practice, stations numbered down the channel.
+        const km = (id: string) => s.stations.find((st) => st.id === id)?.alongChannelKm ?? NaN;
+        expect(km("657")).toBeGreaterThan(km("6"));
+        expect(km("6")).toBeGreaterThan(km("12"));
+        expect(km("12")).toBeGreaterThan(km("18"));
+        // The USGS transect puts Rio Vista about 90 km up-channel of Central Bay (SOURCE.md: ~145 km Rio Vista to
+        // station 36, the South Bay arm ~55 km of it; derived): the station-built line follows the stations: within ±15 km.
+        expect(Math.abs(km("657") - km("18") - 90)).toBeLessThan(15);
+        const southOnChannel = s.stations.filter((st) => SOUTH_BAY.has(st.id) && !st.offChannel).map((st) => st.id);
+        expect(southOnChannel, `${s.name}: South-Bay stations on the channel`).toEqual([]);
+      }
+    }, 120_000);
+  },
+);

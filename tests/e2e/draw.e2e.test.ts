@@ -90,14 +90,24 @@ describe.skipIf(skipBrowser)("drawing a channel centerline on the map", () => {
     await screenshot(s.page, "draw-2-finished");
   });
 
-  // Known regression since the map labels moved to MapLibre symbol layers: in editing mode the drag no longer
-  // moves the vertex (the drawn length stays the same). Skipped until the draw tool's hit test is mended.
-  it.skip("dragging a vertex handle moves it and changes the drawn length", async () => {
+  // Regression guard: the map's style update (setStyle, after the labels moved to MapLibre symbol layers)
+  // must keep the draw tool's source and vertex layer, which the drag's hit test queries.
+  it("dragging a vertex handle moves it and changes the drawn length", async () => {
+    const drawLayers = await s.page.evaluate(() => {
+      const m = (window as unknown as { __brackline?: { map?: { getLayer(id: string): unknown } } }).__brackline?.map;
+      return ["brackline-draw-line", "brackline-draw-vertices"].map((id) => m?.getLayer(id) !== undefined);
+    });
+    console.log(`draw.e2e: draw layers present before the drag: ${drawLayers.join(", ")}`);
+    expect(drawLayers).toEqual([true, true]);
     const before = (await s.page.locator('[data-testid="drawn-length"]').textContent()) ?? "";
     const p = await stationPixel(s.page, ALONG_CHANNEL[2]);
     await s.page.mouse.move(p[0], p[1]);
     await s.page.mouse.down();
-    await s.page.mouse.move(p[0] + 60, p[1] + 40, { steps: 6 });
+    // Across the line (perpendicular to its neighbours W08 → W22), so the drawn length must grow.
+    const [a, b] = [await stationPixel(s.page, ALONG_CHANNEL[1]), await stationPixel(s.page, ALONG_CHANNEL[3])];
+    const len = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
+    const across = [(-(b[1] - a[1]) / len) * 80, ((b[0] - a[0]) / len) * 80];
+    await s.page.mouse.move(p[0] + across[0], p[1] + across[1], { steps: 6 });
     await s.page.mouse.up();
     await settle(s.page);
     // The length is measured in the worker (the one centerline reader), so it arrives asynchronously.

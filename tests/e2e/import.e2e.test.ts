@@ -121,6 +121,38 @@ describe.skipIf(skipBrowser)("importing a survey file: mapping dialog, report, m
     });
   });
 
+  it("with “Review saved column mappings” a re-import reopens the saved mapping; a unit added there is saved and used", async () => {
+    await s.page.locator('[data-testid="review-saved-mappings"]').check();
+    await s.page.locator('[data-testid="import-input"]').setInputFiles(csvFile("autumn-again.csv"));
+    const dialog = s.page.locator('[data-testid="mapping-dialog"][open]');
+    await dialog.waitFor();
+    expect(await dialog.locator('[data-testid="mapping-saved-on"]').textContent()).toMatch(/saved \d{4}-\d{2}-\d{2}/);
+    // The saved mapping, not the suggestion: S_field is salinity as the user set it on the first import.
+    expect(await dialog.locator('tr[data-header="S_field"] select').inputValue()).toBe("salinity");
+    // Mn is re-read as µmol/L (an edit a user makes when a unit was wrong or missing).
+    const mn = dialog.locator('tr[data-header="Mn (nmol/L)"] input[aria-label^="Unit"]');
+    await mn.fill("µmol/L");
+    await screenshot(s.page, "import-4-saved-mapping-reopened");
+    await dialog.locator('[data-testid="mapping-confirm"]').click();
+    await s.page.waitForFunction(() => {
+      const el = document.querySelector('[data-testid="survey-select"]') as HTMLSelectElement | null;
+      return el?.options[el.selectedIndex]?.text === "autumn-2025-11 (3)";
+    });
+    await s.page.locator('[data-testid="review-saved-mappings"]').uncheck();
+    // The edited mapping replaced the saved one: the next file of this shape is read with it, silently.
+    await s.page.locator('[data-testid="import-input"]').setInputFiles(csvFile("autumn-fourth.csv"));
+    await s.page.locator('[data-testid="mapping-reused"]').waitFor();
+    const [download] = await Promise.all([
+      s.page.waitForEvent("download"),
+      s.page.locator('[data-testid="mapping-download"]').first().click(),
+    ]);
+    const { readFile } = await import("node:fs/promises");
+    const mapping = JSON.parse(await readFile((await download.path())!, "utf8")) as {
+      columns: Array<{ header: string; unit?: string }>;
+    };
+    expect(mapping.columns.find((c) => c.header === "Mn (nmol/L)")?.unit).toBe("µmol/L");
+  });
+
   it("Reset to demo brings back the two demo surveys", async () => {
     await s.page.locator('[data-testid="workspace-reset"]').click();
     await s.page.waitForFunction(() => document.querySelectorAll('[data-testid="survey-select"] option').length === 2);

@@ -142,20 +142,42 @@ describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise expor
     await screenshot(s.page, "realdata-3-winter-silicate");
   }, 120_000);
 
-  it("without a centerline the one built from the stations is offered; using it draws a channel with km", async () => {
-    const offer = s.page.locator('[data-testid="use-offered-centerline"]');
-    await offer.waitFor();
-    await offer.click();
+  it("without a centerline the one built from the stations is the channel (as in the CLI): on-channel stations get km, off-channel ones say how far off", async () => {
+    const built = s.page.locator('[data-testid="station-centerline-built"]');
+    await built.waitFor();
     await waitForAnalysis(s.page);
-    await s.page.waitForSelector('[data-testid="offered-centerline"]', { state: "detached" });
+    const notes = ((await s.page.locator('[data-testid="channel-notices"]').textContent()) ?? "").replace(/\s+/g, " ");
+    console.log(`realData.e2e: channel notices: ${notes.slice(0, 500)}`);
+    expect(await s.page.locator('[data-testid="use-offered-centerline"]').count()).toBe(0);
+    const rows = await s.page
+      .locator("nav.stations li button")
+      .evaluateAll((els) =>
+        els.map((e) => [e.querySelector(".id")?.textContent ?? "", e.querySelector(".km")?.textContent ?? ""]),
+      );
+    console.log(`realData.e2e: station list: ${rows.map((r) => r.join(" ")).join("; ")}`);
+    const onChannel = rows.filter(([, km]) => / km$/.test(km) && !/off channel/.test(km));
+    const offChannel = rows.filter(([, km]) => /off channel/.test(km));
+    // Every station is either placed along the channel or said to be off it; none shows a bare "0.0 km" off it.
+    expect(onChannel.length + offChannel.length).toBe(rows.length);
+    expect(onChannel.length).toBeGreaterThan(5);
+    for (const [, km] of offChannel) expect(km).toMatch(/^off channel, \d+\.\d km away$/);
     await settle(s.page);
-    const notes =
-      (await s.page
-        .locator('[data-testid="channel-notices"]')
-        .textContent()
-        .catch(() => "")) ?? "";
-    console.log(`realData.e2e: channel notices: ${notes.replace(/\s+/g, " ").slice(0, 400)}`);
     await screenshot(s.page, "realdata-4-station-centerline");
+  }, 120_000);
+
+  it("the station-built centerline opens in the draw tool's edit mode with its vertices", async () => {
+    await s.page.locator('[data-testid="edit-station-centerline"]').click();
+    const panel = s.page.locator('[data-testid="draw-panel"]');
+    await expect.poll(() => panel.getAttribute("data-draw-mode")).toBe("editing");
+    const vertices = Number(await panel.getAttribute("data-vertices"));
+    console.log(`realData.e2e: station-built line opened for editing with ${vertices} vertices`);
+    expect(vertices).toBeGreaterThan(5);
+    await expect
+      .poll(async () => (await s.page.locator('[data-testid="drawn-length"]').textContent()) ?? "")
+      .toMatch(/\d+\.\d km from the mouth/);
+    await settle(s.page);
+    await screenshot(s.page, "realdata-4b-station-centerline-editing");
+    await s.page.getByRole("button", { name: "Hide line" }).click();
   }, 120_000);
 
   it("Compare uses the two surveys chosen in the survey picker", async () => {
@@ -165,6 +187,12 @@ describe.skipIf(skipBrowser || !present)("the raw San Francisco Bay cruise expor
     await s.page.getByRole("button", { name: "Compare surveys" }).click();
     const heading = (await s.page.locator('[data-testid="compare-view"] h2').first().textContent()) ?? "";
     expect(heading).toBe("Compare surveys: 2018-01-10 and 2018-02-07");
+    // The comparison table is made for exactly these two surveys (the worker compares the chosen ones).
+    const table = s.page.locator('[data-testid="compare-view"] table').first();
+    await table.waitFor({ timeout: 90_000 });
+    const text = (await s.page.locator('[data-testid="compare-view"]').textContent()) ?? "";
+    expect(text).toContain("2018-02-07");
+    expect(text).not.toMatch(/2018-0[3-9]-\d\d|2018-1[0-2]-\d\d/);
     await settle(s.page);
     await screenshot(s.page, "realdata-5-compare");
     expect(s.errors).toEqual([]);

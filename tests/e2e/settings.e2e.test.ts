@@ -35,6 +35,27 @@ describe.skipIf(skipBrowser)("changing an end-member in the settings re-runs the
     expect(await feRowText()).toMatch(/−9\d\.\d/);
   });
 
+  it("the mouth choice and off-channel distance and keep option are saved with the workspace and come back after a reload", async () => {
+    const summary = s.page.locator("summary", { hasText: "Settings" });
+    if ((await s.page.locator("details.settings[open]").count()) === 0) await summary.click();
+    await s.page.locator('[data-testid="mouth-select"]').selectOption("start");
+    await s.page.locator('[data-testid="offchannel-input"]').fill("4300");
+    await s.page.locator('[data-testid="keep-offchannel"]').check();
+    await s.page.getByRole("button", { name: "Re-run analysis" }).click();
+    await waitForAnalysis(s.page);
+    await settle(s.page);
+    // Stored in IndexedDB when the workspace changes (analysis/io workspace document).
+    await s.page.waitForTimeout(1500);
+    await s.page.reload({ waitUntil: "load" });
+    await s.page.waitForSelector('[data-testid="data-bar"][data-workspace-ready="true"]');
+    await waitForAnalysis(s.page);
+    await s.page.locator("summary", { hasText: "Settings" }).click();
+    await expect.poll(() => s.page.locator('[data-testid="mouth-select"]').inputValue()).toBe("start");
+    expect(await s.page.locator('[data-testid="offchannel-input"]').inputValue()).toBe("4300");
+    expect(await s.page.locator('[data-testid="keep-offchannel"]').isChecked()).toBe(true);
+    await screenshot(s.page, "settings-2-restored-after-reload");
+  });
+
   it("logs no console errors, page errors or off-line requests", () => {
     expect(s.errors).toEqual([]);
   });

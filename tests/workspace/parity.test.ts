@@ -187,6 +187,21 @@ describe("parity: brackline analyze and the worker's readInputs → analyzeInput
     });
   }
 
+  it("no centerline: the CLI and readInputs' default both use the centerline built from the stations, with the same notice", async () => {
+    const cli = await analyzeWithCli([WET]);
+    const files = [WET].map((p) => ({ name: basename(p), content: new Uint8Array(readFileSync(p)) }));
+    const inputs = readInputs(files, {});
+    expect(inputs.notices.map((n) => n.code)).toContain("centerlineFromStations");
+    expect(inputs.channel).toBeDefined();
+    const api = analyzeInputs(inputs, SETTINGS).surveys.map((s) => essentials(s.analysis));
+    expect(cli[0]!.stations.every((s) => s.km !== null)).toBe(true);
+    expect(api).toEqual(cli);
+    // Only offered when the caller says so (stations then keep no channel position of a line).
+    const offered = readInputs(files, { useStationCenterline: false });
+    expect(offered.channel).toBeUndefined();
+    expect(offered.offeredCenterline).toBeDefined();
+  });
+
   it('a centerline marked properties.mouth "end" (reversed line): identical on both sides and the same km as the original', async () => {
     const line = centerlineMouthAtEnd();
     const cli = await analyzeWithCli([WET, "--centerline", line]);

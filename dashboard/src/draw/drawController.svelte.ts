@@ -74,6 +74,21 @@ export class DrawController {
     this.render();
   }
 
+  /**
+   * Opens an existing line (e.g. the centerline built from the station positions) in editing mode
+   * with its vertices: drag a vertex to edit it; the edited line is handed on at the end of each drag.
+   * Not handed on here: the line is already the active channel.
+   */
+  edit(vertices: readonly LonLat[], mouth: MouthEnd): void {
+    const v = dedupeVertices(vertices);
+    if (v.length < 2) return;
+    this.vertices = v;
+    this.mouth = mouth;
+    this.mode = "editing";
+    this.#map?.doubleClickZoom.enable();
+    this.render();
+  }
+
   /** Ends drawing; with ≥ 2 distinct vertices the line is kept for editing and handed on. */
   finish(): void {
     const v = dedupeVertices(this.vertices);
@@ -172,9 +187,33 @@ export class DrawController {
     if (this.mode === "editing") this.onChange?.(this.vertices, this.mouth);
   }
 
+  #retryPending = false;
+
+  /**
+   * Adds the draw tool's sources and layers when the map's style lacks them: at attach, and again after
+   * every style change. The map view's `setStyle` (diffed) removes every source and layer its style does
+   * not name, ours included, and fires "styledata" while its own sources are still loading, so
+   * `isStyleLoaded()` is false then; waiting for it dropped the layers for good (the vertex hit test then
+   * found nothing to drag). The layers are added as soon as the style itself is parsed, else once the map
+   * is idle.
+   */
   #ensureLayers(): void {
     const map = this.#map;
-    if (!map || !map.isStyleLoaded() || map.getSource(SOURCE)) return;
+    if (!map || map.getSource(SOURCE)) return;
+    try {
+      this.#addLayers(map);
+    } catch {
+      // The style is not parsed yet (a new style is loading): try again when the map is idle.
+      if (this.#retryPending) return;
+      this.#retryPending = true;
+      map.once("idle", () => {
+        this.#retryPending = false;
+        if (this.#map === map) this.#ensureLayers();
+      });
+    }
+  }
+
+  #addLayers(map: MapLibreMap): void {
     const empty: FeatureCollection = { type: "FeatureCollection", features: [] };
     map.addSource(SOURCE, { type: "geojson", data: empty });
     map.addSource(TICK_SOURCE, { type: "geojson", data: empty });

@@ -2,11 +2,12 @@
  * The offline map style: built from our own basemap GeoJSON (water, land,
  * marsh polygons, place labels). No remote tiles, glyphs or sprites; labels
  * are drawn with local fonts. An optional user raster tile URL is added only
- * when the user turns it on.
+ * when the user turns it on; it is drawn over the optional Natural Earth world land.
  */
 import type { FeatureCollection } from "geojson";
 import type { ExpressionSpecification, StyleSpecification } from "maplibre-gl";
 import { LABEL_SOURCE, labelLayers } from "./labels.ts";
+import { worldLandStyle, type WorldLandSource } from "./basemapStyle.ts";
 
 export const PALETTE = {
   background: "#e3e1da",
@@ -35,18 +36,23 @@ export interface StyleOptions {
   tileUrl?: string;
   /** The overlay labels (labels.ts labelFeatures); empty when omitted. */
   labels?: FeatureCollection;
+  /** Natural Earth world land (basemapStyle.ts), drawn beneath user tiles and our own basemap. */
+  worldLand?: WorldLandSource;
 }
 
-export function buildStyle({ basemap, tileUrl, labels }: StyleOptions): StyleSpecification {
+export function buildStyle({ basemap, tileUrl, labels, worldLand }: StyleOptions): StyleSpecification {
+  const world = worldLand ? worldLandStyle(worldLand, PALETTE) : undefined;
   const style: StyleSpecification = {
     version: 8,
     name: "Brackline offline",
     sources: {
       basemap: { type: "geojson", data: basemap ?? EMPTY },
       [LABEL_SOURCE]: { type: "geojson", data: labels ?? EMPTY },
+      ...world?.sources,
     },
     layers: [
       { id: "background", type: "background", paint: { "background-color": PALETTE.background } },
+      ...(world?.layers ?? []),
       {
         id: "land",
         type: "fill",
@@ -102,7 +108,7 @@ export function buildStyle({ basemap, tileUrl, labels }: StyleOptions): StyleSpe
   };
   if (tileUrl && tileUrl.trim() !== "") {
     style.sources.userTiles = { type: "raster", tiles: [tileUrl.trim()], tileSize: 256 };
-    style.layers.splice(1, 0, {
+    style.layers.splice(1 + (world?.layers.length ?? 0), 0, {
       id: "user-tiles",
       type: "raster",
       source: "userTiles",

@@ -11,6 +11,7 @@ import { Settings, type AnalysisSettings } from "./settings.svelte.ts";
 import { AnalysisResults } from "./results.svelte.ts";
 import { SavedWorkspace } from "./savedWorkspace.svelte.ts";
 import { ImportFlow } from "./importFlow.svelte.ts";
+import { ArchiveState } from "../archive/archiveState.svelte.ts";
 import { memoryStore, type WorkspaceStore } from "./workspaceStore.ts";
 import { proxyCallback, startWorker, type RemoteApi, type WorkerHandle } from "../worker/client.ts";
 import type { AnalysisJob, TextFile } from "../worker/protocol.ts";
@@ -21,6 +22,7 @@ import type { MapData, MapStation } from "../map/mapData.ts";
 import { deviationsById, placementsById } from "../lib/analysisView.ts";
 import { withObservations } from "../panels/lib/observations.ts";
 import type { SurveyAnalysisView } from "../panels/lib/types.ts";
+import type { SurveyComparison } from "../../../analysis/index.ts";
 
 /** What the root needs from outside: where to keep the workspace and how to start a worker. */
 export interface AppOptions {
@@ -32,12 +34,20 @@ export interface AppOptions {
 
 const NO_STRETCH: BrushedStretch = { km: [], paths: [] };
 
+/** A line the draw tool opens in editing mode (a new object opens it again). */
+export interface DrawRequest {
+  vertices: Array<[number, number]>;
+  mouth: "start" | "end";
+}
+
 export class AppState {
   readonly settings = new Settings();
   readonly selection = new Selection();
   readonly results = new AnalysisResults();
   readonly workspace: SavedWorkspace;
   readonly importFlow: ImportFlow;
+  /** The archive view's state: the worker's archive summary of the analysed surveys, the brushed dates. */
+  readonly archive = new ArchiveState(() => this.#analysisApi());
   readonly #connect: NonNullable<AppOptions["connect"]>;
   #analyser: WorkerHandle | undefined;
   #reader: WorkerHandle | undefined;
@@ -48,6 +58,8 @@ export class AppState {
   brushedStretch = $state.raw<BrushedStretch>(NO_STRETCH);
   /** Everything the map draws. */
   readonly mapData: MapData;
+  /** The line the draw tool is asked to open for editing (the centerline built from the stations). */
+  drawRequest = $state.raw<DrawRequest | undefined>(undefined);
 
   constructor(options: AppOptions = {}) {
     this.#connect = options.connect ?? startWorker;
@@ -70,9 +82,9 @@ export class AppState {
   readonly survey: Survey | undefined = $derived(this.results.surveys[this.selection.surveyIndex]);
   /** The active survey's analysis (undefined while the worker works). */
   readonly analysis = $derived(this.results.analyses[this.selection.surveyIndex]);
-  /** The analysis as the panels take it: with every observation, QC-rejected ones included, for drawing. */
+  /** The analysis as the panels take it: with the observations the analysis says to draw (QC-rejected ones included). */
   readonly panelAnalysis: SurveyAnalysisView | undefined = $derived(
-    this.analysis && this.survey ? withObservations(this.analysis, this.survey) : undefined,
+    this.analysis ? withObservations(this.analysis) : undefined,
   );
   /**
    * Indices of the surveys Compare and the Briefing use: the user's choice of two or more, else every
@@ -196,6 +208,20 @@ export class AppState {
   }
 
   /**
+   * Opens the centerline built from the station positions in the draw tool's editing mode with its
+   * vertices (the mouth as chosen, else at the saltiest end, as the analysis placed it). Dragging a
+   * vertex makes the edited line the channel; the draw tool exports it as GeoJSON.
+   */
+  editStationCenterline(): void {
+    const line = this.results.offeredCenterline as
+      { geometry?: { coordinates?: Array<[number, number]> }; properties?: { mouth?: "start" | "end" } } | undefined;
+    const vertices = line?.geometry?.coordinates;
+    if (!vertices || vertices.length < 2) return;
+    const mouth = this.settings.analysis.mouth ?? line?.properties?.mouth ?? "end";
+    this.drawRequest = { vertices: vertices.map(([lon, lat]) => [lon, lat]), mouth };
+  }
+
+  /**
    * Asks the worker where the brushed salinity range lies on the channel for the active survey;
    * a newer request wins.
    */
@@ -220,6 +246,24 @@ export class AppState {
   /** Km ticks and length of a centerline being drawn, placed by the worker's centerline reader. */
   previewCenterline(file: TextFile): Promise<DrawnPreview> {
     return this.#analysisApi().previewCenterline(file);
+  }
+
+  /**
+   * The comparison of exactly the surveys chosen for comparison (`comparedIndices`): the worker's
+   * comparison event when every survey is chosen, else asked of the worker for the chosen ones once
+   * they are analysed. Reads the chosen analyses, so a derived promise re-asks when they arrive.
+   */
+  comparisonOfChosen(): Promise<{ comparison?: SurveyComparison; reason?: string }> {
+    const indices = this.comparedIndices;
+    if (indices.length === this.results.surveys.length)
+      return Promise.resolve({
+        ...(this.results.comparison ? { comparison: this.results.comparison } : {}),
+        ...(this.results.comparisonReason ? { reason: this.results.comparisonReason } : {}),
+      });
+    if (indices.length < 2) return Promise.resolve({ reason: "Choose two or more surveys to compare them." });
+    if (!indices.every((i) => this.results.analyses[i] !== undefined) || !this.#analyser)
+      return Promise.resolve({ reason: "Waiting for the analysis of the chosen surveys…" });
+    return this.#analyser.api.compare([...indices]);
   }
 
   /** Asks the worker for the self-contained HTML briefing of the analysed surveys. */

@@ -19,6 +19,8 @@ import type { SavedWorkspace } from "./savedWorkspace.svelte.ts";
 export interface MappingQuestion {
   inspection: FileInspection;
   mapping: ColumnMapping;
+  /** When the mapping shown is one saved earlier for files of this shape: the date it was confirmed. */
+  savedOn?: string;
   answer: (mapping: ColumnMapping | undefined) => void;
 }
 
@@ -53,21 +55,37 @@ export class ImportFlow {
   question = $state.raw<MappingQuestion | null>(null);
   report = $state.raw<ReportEntry[]>([]);
   progress = $state<{ stage: string; fraction: number } | null>(null);
-  /** Depth layer kept from depth-resolved files (undefined: the reader's default, the shallowest sample). */
-  layer = $state.raw<LayerChoice | undefined>(undefined);
+  /** Depth layer kept from depth-resolved files (undefined: the reader's default); saved with the workspace. */
+  get layer(): LayerChoice | undefined {
+    return this.workspace.layer;
+  }
+  set layer(choice: LayerChoice | undefined) {
+    this.workspace.layer = choice;
+    this.workspace.dirty = true;
+  }
 
   constructor(
     readonly workspace: SavedWorkspace,
     readonly reader: () => Pick<RemoteApi, "inspect" | "read">,
   ) {}
 
-  /** Asks the user to confirm the mapping of a delimited file (resolves undefined on cancel). */
-  #ask(inspection: FileInspection): Promise<ColumnMapping | undefined> {
-    const mapping = structuredClone(inspection.suggested) as ColumnMapping;
+  /**
+   * Opens the saved mapping of a file's shape in the dialog again on the next imports instead of
+   * reusing it silently (to add a unit or change a role); the edited mapping replaces the saved one.
+   */
+  reviewSaved = $state(false);
+
+  /**
+   * Asks the user to confirm the mapping of a delimited file, starting from a saved mapping of the
+   * same shape when given, else from the suggestion (resolves undefined on cancel).
+   */
+  #ask(inspection: FileInspection, saved?: { mapping: ColumnMapping; on: string }): Promise<ColumnMapping | undefined> {
+    const mapping = structuredClone(saved?.mapping ?? inspection.suggested) as ColumnMapping;
     return new Promise((resolve) => {
       this.question = {
         inspection,
         mapping,
+        ...(saved ? { savedOn: saved.on } : {}),
         answer: (m) => {
           this.question = null;
           resolve(m);
@@ -98,12 +116,13 @@ export class ImportFlow {
       let reusedFrom: string | undefined;
       if (inspection.kind === "surveyText" && inspection.suggested) {
         const saved = findSavedMapping(inspection.headers, this.workspace.mappings);
-        if (saved) {
+        const savedOn = saved ? (this.workspace.mappingDates[saved.shape] ?? "an earlier import") : undefined;
+        if (saved && savedOn && !this.reviewSaved) {
           mapping = saved;
-          reusedFrom = this.workspace.mappingDates[saved.shape] ?? "an earlier import";
+          reusedFrom = savedOn;
         } else {
           this.progress = null;
-          mapping = await this.#ask(inspection);
+          mapping = await this.#ask(inspection, saved && savedOn ? { mapping: saved, on: savedOn } : undefined);
           if (!mapping) continue;
           this.workspace.remember(mapping);
         }

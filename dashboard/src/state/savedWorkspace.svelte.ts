@@ -5,7 +5,7 @@
  * channel from it.
  */
 import type { FeatureCollection } from "geojson";
-import type { ColumnMapping, ImportIssue, Survey } from "../../../analysis/index.ts";
+import type { ColumnMapping, ImportIssue, LayerChoice, Survey } from "../../../analysis/index.ts";
 
 /**
  * The workspace reader and writer (with their schema validation) load when a workspace is first
@@ -54,6 +54,8 @@ export class SavedWorkspace {
   imports = $state.raw<ImportRecord[]>([]);
   /** The channel centerline file the analysis uses (demo, imported, drawn or restored); the only copy kept. */
   centerline = $state.raw<TextFile | undefined>(undefined);
+  /** Depth layer kept from depth-resolved files at import (undefined: the reader's default, the shallowest sample). */
+  layer = $state.raw<LayerChoice | undefined>(undefined);
   /** True while the invented demo basemap fits the data (no centerline of the user's own). */
   demoBasemap = $state(true);
   /** True while the workspace holds the invented demo (its surveys and centerline); an import replaces it. */
@@ -97,6 +99,7 @@ export class SavedWorkspace {
     this.mappings = [];
     this.mappingDates = {};
     this.imports = [];
+    this.layer = undefined;
     this.notices = [];
     this.host.selection.surveyIndex = 0;
     this.dirty = false;
@@ -188,6 +191,7 @@ export class SavedWorkspace {
       colouring: settings.colouring,
       tileUrl: settings.tileUrl,
       useTiles: settings.useTiles,
+      ...(this.layer ? { layer: $state.snapshot(this.layer) as LayerChoice } : {}),
       analysis: $state.snapshot(settings.analysis) as WorkspaceParts["analysis"],
       ...(name !== undefined ? { selectedSurvey: name } : {}),
       selectedConstituent: selection.constituent,
@@ -232,6 +236,7 @@ export class SavedWorkspace {
     this.mappings = p.mappings;
     this.mappingDates = p.mappingDates;
     this.imports = p.imports;
+    this.layer = p.layer;
     // The demo's invented carbonate end-members stay only with the demo (a workspace with no imports).
     settings.carbonate = p.imports.length === 0 ? { ...DEMO_CARBONATE, invented: true } : undefined;
     this.centerline = fileOf(p.centerline);
@@ -240,7 +245,8 @@ export class SavedWorkspace {
     settings.colouring = p.colouring;
     settings.tileUrl = p.tileUrl;
     settings.useTiles = p.useTiles;
-    settings.updateAnalysis(p.analysis);
+    // Settings the document does not hold go back to their defaults (a workspace saved before they existed).
+    settings.updateAnalysis({ mouth: undefined, offChannelM: undefined, keepOffChannel: undefined, ...p.analysis });
     const index = Math.max(
       0,
       p.surveys.findIndex((s) => s.name === p.selectedSurvey),

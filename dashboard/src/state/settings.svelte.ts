@@ -38,6 +38,8 @@ export class Settings {
   tileUrl = $state("");
   /** Off by default: the dashboard is offline unless the user opts in. */
   useTiles = $state(false);
+  /** Natural Earth world land under imported data (an offline asset, fetched when first needed). */
+  worldLand = $state(true);
 
   /** Replaces some analysis settings (triggers a new analysis). */
   updateAnalysis(patch: Partial<AnalysisSettings>): void {

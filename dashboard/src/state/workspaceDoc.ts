@@ -2,7 +2,13 @@
  * Builds the versioned workspace document (analysis/io) from the dashboard's
  * state, and reads the dashboard's pieces back out of one.
  */
-import { createWorkspace, type ColumnMapping, type Survey, type WorkspaceDocument } from "../../../analysis/index.ts";
+import {
+  createWorkspace,
+  type ColumnMapping,
+  type LayerChoice,
+  type Survey,
+  type WorkspaceDocument,
+} from "../../../analysis/index.ts";
 import type { AnalysisSettings, StationColouring } from "./settings.svelte.ts";
 
 /** One file's import record as kept in the workspace. */
@@ -21,6 +27,8 @@ export interface WorkspaceParts {
   colouring: StationColouring;
   tileUrl: string;
   useTiles: boolean;
+  /** Depth layer kept from depth-resolved files at import (absent: the reader's default, the shallowest sample). */
+  layer?: LayerChoice;
   analysis: AnalysisSettings;
   selectedSurvey?: string;
   selectedConstituent?: string;
@@ -45,6 +53,7 @@ export function toWorkspaceDocument(parts: WorkspaceParts, savedAt: string): Wor
     useTiles: parts.useTiles,
     mappingDates: parts.mappingDates,
     demoBasemap: parts.demoBasemap,
+    ...(parts.layer ? { layer: parts.layer } : {}),
   };
   ws.analysis = defined({
     endmemberOverrides: parts.analysis.endmemberOverrides,
@@ -52,6 +61,9 @@ export function toWorkspaceDocument(parts: WorkspaceParts, savedAt: string): Wor
     riverDischargeM3s: parts.analysis.riverDischargeM3s,
     constantSet: parts.analysis.constantSet,
     saltIntrusionSalinity: parts.analysis.saltIntrusionSalinity,
+    mouth: parts.analysis.mouth,
+    offChannelM: parts.analysis.offChannelM,
+    keepOffChannel: parts.analysis.keepOffChannel,
     selectedSurvey: parts.selectedSurvey,
     selectedConstituent: parts.selectedConstituent,
   });
@@ -82,7 +94,12 @@ export function fromWorkspaceDocument(ws: WorkspaceDocument): WorkspaceParts {
       riverDischargeM3s: a.riverDischargeM3s,
       constantSet: a.constantSet ?? "default",
       saltIntrusionSalinity: a.saltIntrusionSalinity ?? 2,
+      // Older workspaces have none of these: the one mouth rule, the default off-channel distance, left out.
+      ...(a.mouth !== undefined ? { mouth: a.mouth } : {}),
+      ...(a.offChannelM !== undefined ? { offChannelM: a.offChannelM } : {}),
+      ...(a.keepOffChannel === true ? { keepOffChannel: true } : {}),
     },
+    ...(ws.settings.layer ? { layer: ws.settings.layer } : {}),
     ...(a.selectedSurvey !== undefined ? { selectedSurvey: a.selectedSurvey } : {}),
     ...(a.selectedConstituent !== undefined ? { selectedConstituent: a.selectedConstituent } : {}),
   };

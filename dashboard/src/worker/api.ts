@@ -20,6 +20,8 @@ import type { UnderwayPoints, UnderwayRequest, UnderwayResult, UnderwayView } fr
 import { readUnderway, viewUnderway } from "./underwayEngine.ts";
 import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
 import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
+import { archiveOf, type ArchiveAnswer } from "./archive.ts";
+import type { Season } from "../../../analysis/index.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -30,8 +32,10 @@ function messageOf(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
 }
 
+type ComparisonEvent = Extract<AnalysisEvent, { type: "comparison" }>;
+
 /** The workspace API's comparison of the analysed surveys (the first is the reference), or why there is none. */
-function compareAll(analyses: ReadonlyArray<AnalysisResult | undefined>): AnalysisEvent {
+function compareAll(analyses: ReadonlyArray<AnalysisResult | undefined>): ComparisonEvent {
   const done = analyses.filter((a): a is AnalysisResult => a !== undefined);
   if (done.length < analyses.length)
     return { type: "comparison", reason: "Some surveys could not be analysed, so they cannot be compared." };
@@ -121,7 +125,8 @@ export function createWorkerApi() {
           next.issues = [...inputs.issues.filter((i) => i.file !== oldLine), ...next.issues];
           useInputs({ ...next, files: inputs.files, summary: inputs.summary }, job.centerline, emit);
         }
-        const mouthChanged = job.kind === "analyze" && centerlineFile && job.settings.mouth !== inputs.choices.mouth;
+        const mouthChanged =
+          job.kind === "analyze" && (centerlineFile || inputs.channel) && job.settings.mouth !== inputs.choices.mouth;
         if (mouthChanged) {
           // Another mouth: the channel is re-read from the held centerline file, the km change.
           const next = inputsOf(inputs.surveys, centerlineFile, job.settings.mouth);
@@ -144,9 +149,24 @@ export function createWorkerApi() {
       }
     },
 
+    /**
+     * The comparison of exactly the chosen surveys (indices into the held surveys, the first is the
+     * reference), made by the workspace API's comparison, or why there is none.
+     */
+    compare(surveyIndices: number[]): Omit<ComparisonEvent, "type"> {
+      if (surveyIndices.length < 2) return { reason: "Choose two or more surveys to compare them." };
+      const e = compareAll(surveyIndices.map((i) => analyses[i]));
+      return { ...(e.comparison ? { comparison: e.comparison } : {}), ...(e.reason ? { reason: e.reason } : {}) };
+    },
+
     /** The channel stretch where one survey's salinity lies within a brushed range (km and map paths). */
     brushStretch(surveyIndex: number, range: [number, number] | null): BrushedStretch {
       return brushStretch(inputs.channel?.network, analyses[surveyIndex]?.salinityProfile, range);
+    },
+
+    /** The analysed surveys as an archive: series, relations and statements (analysis/archive). */
+    archive(seasons?: Season[]): ArchiveAnswer {
+      return archiveOf(analyses, seasons);
     },
 
     /** Km ticks and length of a centerline being drawn on the map (read by the one centerline reader). */

@@ -61,8 +61,8 @@ export function readChannel(
 
 /**
  * Inputs from surveys already read (an import or a restored workspace) and a centerline file. Without
- * a centerline the stations' along-channel distances are oriented by salinity and a centerline built
- * from the station positions is offered (readInputs' rule; the user decides whether to use it).
+ * a centerline the centerline built from the station positions is the channel, with readInputs' notice
+ * (the CLI's rule, placeWithoutCenterline); it is also offered to the draw tool for editing.
  */
 export function inputsOf(
   surveys: Survey[],
@@ -72,10 +72,11 @@ export function inputsOf(
   const { channel, issues } = readChannel(centerline, surveys, mouth);
   const base = { files: [], issues, summary: emptySummary(), choices: mouth ? { mouth } : {} };
   if (centerline || surveys.length === 0) return { surveys, ...(channel ? { channel } : {}), ...base, notices: [] };
-  const placed = placeWithoutCenterline(surveys, false);
+  const placed = placeWithoutCenterline(surveys, true, mouth);
   return {
     surveys: placed.surveys,
     ...base,
+    ...(placed.channel ? { channel: placed.channel } : {}),
     notices: placed.notices,
     ...(placed.offered ? { offeredCenterline: placed.offered } : {}),
   };

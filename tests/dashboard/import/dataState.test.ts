@@ -147,6 +147,100 @@ describe("SavedWorkspace and ImportFlow: workspace saved in the store and restor
     expect(await data2.openText(text)).toBe(true);
     expect(app2.results.surveys).toEqual(app.results.surveys);
   });
+
+  it("the mouth choice, off-channel distance, keep option and depth layer are saved and restored (common practice)", async () => {
+    const app = fakeApp();
+    const data = new DataState(app, memoryStore(), fixedNow);
+    await data.boot();
+    await importQuirky(data);
+    app.settings.updateAnalysis({ mouth: "end", offChannelM: 4300, keepOffChannel: true });
+    data.flow.layer = { kind: "depthRange", minM: 1, maxM: 3 };
+    const text = await data.exportText();
+    const doc = JSON.parse(text);
+    expect(doc.analysis).toMatchObject({ mouth: "end", offChannelM: 4300, keepOffChannel: true });
+    expect(doc.settings.layer).toEqual({ kind: "depthRange", minM: 1, maxM: 3 });
+
+    const app2 = fakeApp();
+    const data2 = new DataState(app2, memoryStore(), fixedNow);
+    expect(await data2.openText(text)).toBe(true);
+    expect(app2.settings.analysis.mouth).toBe("end");
+    expectWithin(app2.settings.analysis.offChannelM!, 4300, 0, "restored off-channel distance [m]");
+    expect(app2.settings.analysis.keepOffChannel).toBe(true);
+    expect(data2.flow.layer).toEqual({ kind: "depthRange", minM: 1, maxM: 3 });
+  });
+
+  it("a workspace saved before these settings existed still opens, with the defaults (one mouth rule, default distance, shallowest layer)", async () => {
+    const app = fakeApp();
+    const data = new DataState(app, memoryStore(), fixedNow);
+    await data.boot();
+    await importQuirky(data);
+    const doc = JSON.parse(await data.exportText());
+    for (const k of ["mouth", "offChannelM", "keepOffChannel"]) delete doc.analysis[k];
+    delete doc.settings.layer;
+    const app2 = fakeApp();
+    const data2 = new DataState(app2, memoryStore(), fixedNow);
+    app2.settings.updateAnalysis({ mouth: "start", offChannelM: 10, keepOffChannel: true });
+    expect(await data2.openText(JSON.stringify(doc))).toBe(true);
+    expect(data2.notices).toEqual([]);
+    expect(app2.settings.analysis.mouth).toBeUndefined();
+    expect(app2.settings.analysis.offChannelM).toBeUndefined();
+    expect(app2.settings.analysis.keepOffChannel).toBeUndefined();
+    expect(data2.flow.layer).toBeUndefined();
+  });
+
+  it("a workspace with an off-channel distance that is not a distance is refused with the path of the value", async () => {
+    const app = fakeApp();
+    const data = new DataState(app, memoryStore(), fixedNow);
+    await data.boot();
+    await importQuirky(data);
+    const doc = JSON.parse(await data.exportText());
+    doc.analysis.offChannelM = -5;
+    doc.analysis.mouth = "middle";
+    const data2 = new DataState(fakeApp(), memoryStore(), fixedNow);
+    await data2.openText(JSON.stringify(doc));
+    expect(data2.notices.map((n) => n.column).join(" ")).toMatch(/offChannelM|mouth/);
+  });
+});
+
+describe("ImportFlow: a saved mapping reopened on re-import to add a unit (issue 13)", () => {
+  const SI_CSV = [
+    "Cruise,Stn,Date,Lat,Lon,Salinity,Fe (nmol/L),Silicate",
+    "s1,N01,2025-11-04,45.04869,-35.30269,33.2,2.0,10",
+    "s1,N02,2025-11-04,45.05041,-35.30234,20.1,5.5,40",
+    "s1,N03,2025-11-04,45.05351,-35.30693,5.4,9.1,90",
+  ].join("\n");
+
+  it("with 'Review saved column mappings' the dialog opens with the saved mapping; the unit added is saved and the column read", async () => {
+    const app = fakeApp();
+    const data = new DataState(app, memoryStore(), fixedNow);
+    await data.boot();
+    let done = data.flow.importFiles([file("si.csv", SI_CSV)]);
+    for (let i = 0; i < 50 && !data.flow.question; i++) await new Promise((r) => setTimeout(r, 5));
+    expect(data.flow.question?.savedOn).toBeUndefined();
+    data.flow.question!.answer(data.flow.question!.mapping);
+    await done;
+    const first = data.mappings[0].columns.find((c) => c.header === "Silicate");
+    expect(first?.unit).toBeUndefined();
+    expect(app.results.surveys[0].constituents.map((c) => c.name)).not.toContain("Silicate");
+
+    data.flow.reviewSaved = true;
+    done = data.flow.importFiles([file("si.csv", SI_CSV)]);
+    for (let i = 0; i < 50 && !data.flow.question; i++) await new Promise((r) => setTimeout(r, 5));
+    const q = data.flow.question!;
+    expect(q.savedOn).toBe("2026-01-05T10:00:00.000Z");
+    expect(q.mapping).toEqual(data.mappings[0]);
+    const edited = structuredClone(q.mapping);
+    const si = edited.columns.find((c) => c.header === "Silicate")!;
+    si.role = "constituent";
+    si.name = "Silicate";
+    si.unit = "µmol/L";
+    q.answer(edited);
+    await done;
+    expect(data.mappings).toHaveLength(1);
+    expect(data.mappings[0].columns.find((c) => c.header === "Silicate")?.unit).toBe("µmol/L");
+    const last = app.results.surveys.at(-1)!;
+    expect(last.constituents.find((c) => c.name === "Silicate")?.unit).toBe("µmol/L");
+  });
 });
 
 describe("uniqueSurveyNames()", () => {

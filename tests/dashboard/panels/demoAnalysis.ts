@@ -6,7 +6,13 @@
 import { readFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { analyzeSurvey, buildChannelNetwork, readSurveyText, type CenterlineGeoJson } from "../../../analysis/index.ts";
+import {
+  analyzeSurvey,
+  buildChannelNetwork,
+  plottedObservations,
+  readSurveyText,
+  type CenterlineGeoJson,
+} from "../../../analysis/index.ts";
 import type { Survey } from "../../../analysis/survey/survey.ts";
 import { withObservations } from "../../../dashboard/src/panels/lib/observations.ts";
 import type { SurveyAnalysisView } from "../../../dashboard/src/panels/lib/types.ts";
@@ -39,5 +45,6 @@ export function demoAnalysis(): { survey: Survey; analysis: SurveyAnalysisView }
     seed: 1,
     constituents: ["Fe", "Ba", "Si", "Cu"],
   });
-  return { survey, analysis: withObservations(analysis, survey) };
+  analysis.observations = plottedObservations(survey, analysis);
+  return { survey, analysis: withObservations(analysis) };
 }

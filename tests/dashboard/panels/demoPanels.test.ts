@@ -7,7 +7,7 @@ import MixingPlot from "../../../dashboard/src/panels/MixingPlot.svelte";
 import ChannelProfile from "../../../dashboard/src/panels/ChannelProfile.svelte";
 import BehaviourTable from "../../../dashboard/src/panels/BehaviourTable.svelte";
 import { Selection } from "../../../dashboard/src/state/selection.svelte.ts";
-import { surveyObservations, withObservations } from "../../../dashboard/src/panels/lib/observations.ts";
+import { surveyObservations } from "../../../analysis/index.ts";
 import { behaviourLabel, formatNumber } from "../../../dashboard/src/panels/lib/format.ts";
 import { resultsCsv } from "../../../dashboard/src/panels/lib/export.ts";
 import type { SurveyAnalysisView } from "../../../dashboard/src/panels/lib/types.ts";
@@ -31,20 +31,6 @@ describe("panels on the real analysis of the invented demo survey", () => {
       obs.filter((o) => o.kind === "belowDetection").length,
     );
     expect(obs.filter((o) => o.kind === "belowDetection").length).toBeGreaterThan(0);
-  });
-
-  it("withObservations() leaves the off-channel stations (left out of the fits) out of the plotted observations (common practice)", () => {
-    const all = surveyObservations(survey, "Fe");
-    const offId = all[all.length - 1]!.stationId;
-    const left: SurveyAnalysisView = { ...analysis, offChannelStations: [{ id: offId, distanceKm: 4.2 }] };
-    const drawn = withObservations(left, survey).constituents.find((c) => c.name === "Fe")!.observations!;
-    expect(drawn.some((o) => o.stationId === offId)).toBe(false);
-    expect(drawn).toHaveLength(all.filter((o) => o.stationId !== offId).length);
-    // Kept by the user: drawn again.
-    const kept: SurveyAnalysisView = { ...left, offChannel: { limitKm: 2, kept: true } };
-    expect(withObservations(kept, survey).constituents.find((c) => c.name === "Fe")!.observations!).toHaveLength(
-      all.length,
-    );
   });
 
   it("MixingPlot labels C*₀ with the value analyzeSurvey() returned", () => {

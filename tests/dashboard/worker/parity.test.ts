@@ -11,9 +11,9 @@ import { afterAll, describe, expect, it } from "vitest";
 import { expose, proxy, wrap } from "comlink";
 import { main } from "../../../cli/main.ts";
 import { createWorkerApi, type WorkerApi } from "../../../dashboard/src/worker/api.ts";
-import type { AnalysisEvent, SourceFile, TextFile } from "../../../dashboard/src/worker/protocol.ts";
+import type { AnalysisEvent, AnalysisJob, SourceFile, TextFile } from "../../../dashboard/src/worker/protocol.ts";
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
-import type { SurveyAnalysis } from "../../../analysis/index.ts";
+import { readSurveyText, type SurveyAnalysis } from "../../../analysis/index.ts";
 import { writeNetcdf3 } from "../../io/helpers/netcdf3Writer.ts";
 import { cfStationVariables } from "../../io/helpers/cfStationVariables.ts";
 
@@ -113,7 +113,8 @@ function mouthAtEnd(): string {
 interface Case {
   name: string;
   surveys: SourceFile[];
-  centerline: TextFile;
+  /** Absent: both build the centerline from the station positions (one decision in readInputs). */
+  centerline?: TextFile;
 }
 
 const line = { name: "centerline.geojson", text: demo("centerline.geojson") };
@@ -129,6 +130,10 @@ const CASES: Case[] = [
     name: 'a centerline marked properties.mouth "end"',
     surveys: [{ name: "wet-2025-03.csv", text: demo("surveys/wet-2025-03.csv") }],
     centerline: { name: "reversed.geojson", text: mouthAtEnd() },
+  },
+  {
+    name: "no centerline (both use the centerline built from the stations, with the same notice)",
+    surveys: [{ name: "wet-2025-03.csv", text: demo("surveys/wet-2025-03.csv") }],
   },
 ];
 
@@ -152,10 +157,14 @@ async function viaCli(c: Case): Promise<ReturnType<typeof essentials>> {
     writeFileSync(p, "text" in f ? f.text : f.bytes);
     return p;
   });
-  const linePath = join(dir, c.centerline.name);
-  writeFileSync(linePath, c.centerline.text);
+  const lineArgs: string[] = [];
+  if (c.centerline) {
+    const linePath = join(dir, c.centerline.name);
+    writeFileSync(linePath, c.centerline.text);
+    lineArgs.push("--centerline", linePath);
+  }
   let out = "";
-  const code = await main(["analyze", ...paths, "--centerline", linePath], { out: (t) => (out += t), err: () => {} });
+  const code = await main(["analyze", ...paths, ...lineArgs], { out: (t) => (out += t), err: () => {} });
   expect(code).toBe(0);
   const doc = JSON.parse(out) as {
     surveys: Array<SurveyAnalysis["survey"] & Pick<SurveyAnalysis, "stations" | "constituents">>;
@@ -163,14 +172,20 @@ async function viaCli(c: Case): Promise<ReturnType<typeof essentials>> {
   return essentials(doc.surveys.map((s) => ({ survey: s, stations: s.stations, constituents: s.constituents })));
 }
 
-async function viaWorker(c: Case): Promise<ReturnType<typeof essentials>> {
+async function viaWorker(c: Case, notices: string[] = [], job?: AnalysisJob): Promise<ReturnType<typeof essentials>> {
   const analyses: SurveyAnalysis[] = [];
   const errors: string[] = [];
   // Events come back on the callback's own channel, so wait for "done" rather than for run() itself.
   await new Promise<void>((resolve) => {
     void worker.run(
-      { kind: "load", surveys: c.surveys, centerline: c.centerline, settings: new Settings().analysis },
+      job ?? {
+        kind: "load",
+        surveys: c.surveys,
+        ...(c.centerline ? { centerline: c.centerline } : {}),
+        settings: new Settings().analysis,
+      },
       proxy((e: AnalysisEvent) => {
+        if (e.type === "loaded") notices.push(...(e.notices ?? []).map((n) => n.code));
         if (e.type === "analysis") analyses[e.surveyIndex] = e.analysis;
         if (e.type === "error") errors.push(e.message);
         if (e.type === "done") resolve();
@@ -199,5 +214,21 @@ describe("CLI and dashboard worker parity (one input-to-results API)", () => {
     // W01 is the saltiest, seaward station of the invented wet survey.
     expect(kmOf(cli, "W01")).toBeLessThan(kmOf(cli, "W25") ?? Infinity);
     expect(kmOf(dash, "W01")).toBe(kmOf(cli, "W01"));
+  });
+
+  it("without a centerline both place every station by the station-built line and say so; an import (surveys already read) too", async () => {
+    const c = CASES[4]!;
+    const notices: string[] = [];
+    const [cli, dash] = [await viaCli(c), await viaWorker(c, notices)];
+    expect(notices).toContain("centerlineFromStations");
+    const placed = cli[0]!.km.filter(([, km]) => km !== null);
+    expect(placed.length).toBe(cli[0]!.km.length);
+    expect(dash).toEqual(cli);
+    // The dashboard's import path: surveys read in the reading worker, sent with setSurveys.
+    const surveys = readSurveyText(demo("surveys/wet-2025-03.csv"), { fileName: "wet-2025-03.csv" }).surveys;
+    const imported: string[] = [];
+    const viaImport = await viaWorker(c, imported, { kind: "setSurveys", surveys, settings: new Settings().analysis });
+    expect(imported).toContain("centerlineFromStations");
+    expect(viaImport).toEqual(cli);
   });
 });

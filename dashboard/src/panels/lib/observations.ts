@@ -2,7 +2,6 @@
  * The observations a panel draws for one constituent, and look-ups between
  * constituents, stations and the shared selection. Data handling only.
  */
-import type { Survey } from "../../../../analysis/survey/survey.ts";
 import type { ConstituentAnalysisView, ObservationPoint, StationPlacement, SurveyAnalysisView } from "./types.ts";
 
 /** The constituent result by name, or undefined. */
@@ -48,49 +47,18 @@ export const observationKindLabel: Record<ObservationPoint["kind"], string> = {
 };
 
 /**
- * Observations of constituent `name` read straight from the survey, including
- * QC-rejected values (drawn as crosses) and below-detection values at their
- * limit. Values without a readable salinity are left out.
+ * The analysis with each constituent's `observations` taken from the analysis result's plotted
+ * observations (analysis/workspace plottedObservations: rejected and below-detection values included,
+ * off-channel stations left out unless kept). The analysis decides what is plotted; panels render it.
  */
-export function surveyObservations(survey: Survey, name: string): ObservationPoint[] {
-  const out: ObservationPoint[] = [];
-  for (const st of survey.stations) {
-    const cell = st.values[name];
-    const s = st.salinity.value;
-    if (!cell || s === undefined || !Number.isFinite(s)) continue;
-    if (cell.status === "measured" && cell.value !== undefined) {
-      out.push({
-        stationId: st.id,
-        salinity: s,
-        value: cell.value,
-        kind: cell.accepted ? "measured" : "rejected",
-        original: cell.original,
-      });
-    } else if (cell.status === "belowDetection" && cell.detectionLimit !== undefined) {
-      out.push({
-        stationId: st.id,
-        salinity: s,
-        value: cell.detectionLimit,
-        kind: cell.accepted ? "belowDetection" : "rejected",
-        original: cell.original,
-      });
-    }
-  }
-  return out;
-}
-
-/**
- * The analysis with each constituent's `observations` filled from the survey (for drawing rejected values).
- * Stations left out of the fits as off-channel (unless the user kept them) are not drawn as observations:
- * the plots show what was analysed, as the CLI's deviations do; the map and the notices list them.
- */
-export function withObservations(analysis: SurveyAnalysisView, survey: Survey): SurveyAnalysisView {
-  const left = new Set(analysis.offChannel?.kept ? [] : (analysis.offChannelStations ?? []).map((o) => o.id));
+export function withObservations(analysis: SurveyAnalysisView): SurveyAnalysisView {
+  const plotted = analysis.observations;
+  if (!plotted) return analysis;
   return {
     ...analysis,
-    constituents: analysis.constituents.map((c) => ({
-      ...c,
-      observations: surveyObservations(survey, c.name).filter((o) => !left.has(o.stationId)),
-    })),
+    constituents: analysis.constituents.map((c) => {
+      const observations = plotted[c.name];
+      return observations ? { ...c, observations } : c;
+    }),
   };
 }

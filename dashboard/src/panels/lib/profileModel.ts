@@ -41,8 +41,10 @@ export function profileModel(
     const km = byId.get(o.stationId)?.alongChannelKm;
     return km === undefined || !Number.isFinite(km) ? [] : [{ ...o, km }];
   });
+  // Off-channel stations (a side basin) have no place on this channel's salinity profile unless kept in the fits.
+  const keepOff = analysis.offChannel?.kept === true;
   const sal = analysis.stations
-    .filter((s) => s.alongChannelKm !== undefined && s.salinity !== undefined)
+    .filter((s) => s.alongChannelKm !== undefined && s.salinity !== undefined && (keepOff || !s.offChannel))
     .map((s) => ({ stationId: s.id, km: s.alongChannelKm as number, salinity: s.salinity as number }))
     .sort((a, b) => a.km - b.km);
   const zoneKm = c?.reactionZone?.km ?? [];

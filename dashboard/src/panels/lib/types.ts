@@ -35,16 +35,9 @@ export type {
   SurveyFacts,
 };
 
-/** One observation as drawn, including values the analysis set aside. */
-export interface ObservationPoint {
-  stationId: string;
-  salinity: number;
-  /** Measured value, or the detection limit when below detection [constituent unit]. */
-  value: number;
-  kind: "measured" | "belowDetection" | "rejected";
-  /** The text as it stood in the file. */
-  original?: string;
-}
+import type { ObservationPoint } from "../../../../analysis/index.ts";
+
+export type { ObservationPoint };
 
 /**
  * Per-constituent mixing result as the panels read it: the analysis contract
