@@ -12,7 +12,11 @@ import { CancelledError, runPool, startWorkers, type StartedWorkers } from "./wo
 
 /** Options of {@link analyzeArchive}. */
 export interface ArchiveRunOptions {
-  /** Worker threads (default: available parallelism, at most the number of surveys); 0 = this thread only. */
+  /**
+   * Threads that analyse, this one included (default: available parallelism, at most the number of
+   * surveys): n ≥ 2 is this thread and n − 1 worker threads taking surveys from one queue; 0 or 1 =
+   * this thread only.
+   */
   threads?: number;
   /** Cache directory; undefined = no cache. */
   cacheDir?: string;
@@ -97,10 +101,10 @@ export async function analyzeArchive(
   });
   const n = surveys.length;
   // One survey left to analyse is faster here than on a thread that must first load the code.
-  const threads =
-    todo.length < 2 ? 0 : Math.min(o.threads ?? o.started?.workers.length ?? availableParallelism(), todo.length);
+  const asked = o.threads ?? (o.started ? o.started.workers.length + 1 : availableParallelism());
+  const threads = todo.length < 2 || asked < 2 ? 0 : Math.min(asked, todo.length);
   o.io.err(
-    `archive: ${n} surveys, ${n - todo.length} from the cache, ${todo.length} to analyse on ${threads <= 0 ? "this thread" : `${threads} worker thread${threads === 1 ? "" : "s"}`}`,
+    `archive: ${n} surveys, ${n - todo.length} from the cache, ${todo.length} to analyse on ${threads <= 0 ? "this thread" : `${threads} threads (this one and ${threads - 1} worker thread${threads === 2 ? "" : "s"})`}`,
   );
   const controller = new AbortController();
   const onSigint = () => controller.abort();
@@ -111,7 +115,8 @@ export async function analyzeArchive(
   try {
     await runPool({
       workerUrl: surveyWorkerUrl(),
-      threads,
+      threads: Math.max(0, threads - 1),
+      alsoHere: threads >= 2,
       ...(o.started ? { started: o.started } : {}),
       setup,
       tasks: todo.map((index) => ({ survey: surveys[index]! })),

@@ -28,7 +28,7 @@ export const ARCHIVE_HELP = `With three or more surveys (an archive): series per
 river discharge, month and season, and year on year (README: series[], intrusion[]).
   --seasons <name=Mon-Mon,...>  seasons for summaries (default meteorological winter/spring/summer/autumn)
   --discharge-table <flows.csv> daily discharge (date, m³/s); each survey takes its day or the nearest earlier day
-  --threads <n>                 worker threads (default: all cores; 0 = main thread only)
+  --threads <n>                 threads, this one included (default: all cores; 0 or 1 = this thread only)
   --cache-dir <dir>             per-survey result cache (default ~/.cache/brackline/surveys)
   --no-cache                    analyse every survey again, store nothing
   Ctrl+C cancels; finished surveys stay cached.`;

@@ -37,6 +37,7 @@ export async function loadWorkspaceOnWorkers(
     const results = await runPool<ReadSetup, ReadTask, ReadResult>({
       workerUrl: surveyWorkerUrl(),
       threads: started.workers.length,
+      alsoHere: true,
       started,
       handler: "read",
       keepStarted: true,

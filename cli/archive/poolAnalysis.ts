@@ -23,8 +23,8 @@ export interface PoolValues {
 export const POOL_OPTION_NAMES = ["threads", "cache-dir", "no-cache"] as const;
 
 /** Help lines of the pool options (analyze, report; compare has them in its archive help). */
-export const POOL_HELP = `  --threads <n>                worker threads for several surveys (default: all cores when the work
-                               pays for starting them; 0 = this thread only)
+export const POOL_HELP = `  --threads <n>                threads analysing several surveys, this one included (default: all
+                               cores when the work pays for a worker; 0 or 1 = this thread only)
   --cache-dir <dir>            keep each survey's result there and reuse it when nothing changed
   --no-cache                   analyse every survey again, store nothing`;
 
@@ -45,14 +45,14 @@ const EARLY_START_BYTES = 256 * 1024;
  */
 export function startWorkersEarly(paths: readonly string[], values: PoolValues): StartedWorkers | undefined {
   const threads = threadsOption(values.threads);
-  if (threads <= 0) return undefined;
+  if (threads < 2) return undefined;
   if (values.threads === undefined) {
     if (paths.length < 2) return undefined;
     let bytes = 0;
     for (const p of paths) bytes += statSync(p, { throwIfNoEntry: false })?.size ?? 0;
     if (bytes < EARLY_START_BYTES) return undefined;
   }
-  return startSurveyWorkers(threads);
+  return startSurveyWorkers(threads - 1);
 }
 
 /**

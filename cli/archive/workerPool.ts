@@ -69,6 +69,13 @@ export interface PoolOptions<Setup, Task, Result> {
   handler?: string;
   /** Keep the `started` workers running after a successful run (for a next run with another handler). */
   keepStarted?: boolean;
+  /**
+   * This thread takes tasks from the same queue too (with `inline`), between handling the workers'
+   * messages: on 2 cores, this thread and one worker do the work of two workers without a third
+   * JavaScript engine loading and compiling the same code. Each worker then keeps two tasks in hand,
+   * so it never waits while this thread finishes a task.
+   */
+  alsoHere?: boolean;
 }
 
 /** Thrown when the run was cancelled; `done` tasks had finished. */
@@ -98,6 +105,7 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
   // Started workers beyond what the tasks need are ended at once.
   const unused = given.slice(n);
   if (!o.keepStarted) void Promise.all(unused.map((w) => w.terminate()));
+  if (o.alsoHere && !o.inline) throw new TypeError("runPool: alsoHere needs an inline handler");
   if (n === 0) {
     if (!o.inline) throw new TypeError("runPool: threads = 0 needs an inline handler");
     o.inline.setup(o.setup);
@@ -128,6 +136,22 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
         const i = order[next++]!;
         w.postMessage({ index: i, task: o.tasks[i] } satisfies ToWorker<Setup, Task>);
       };
+      const here = async (): Promise<void> => {
+        o.inline!.setup(o.setup);
+        while (next < order.length && !o.signal?.aborted) {
+          const i = order[next++]!;
+          const t0 = performance.now();
+          try {
+            results[i] = o.inline!.run(o.tasks[i]!);
+          } catch (error) {
+            return reject(error);
+          }
+          done++;
+          o.onResult?.(i, results[i]!, performance.now() - t0);
+          if (done === order.length) return resolve();
+          await new Promise((r) => setImmediate(r)); // the workers' results and a SIGINT get through
+        }
+      };
       for (const w of workers) {
         const onMessage = (m: FromWorker<Result>) => {
           if (m.error !== undefined) return reject(new Error(m.error));
@@ -154,8 +178,11 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
           ...(o.handler ? { handler: o.handler } : {}),
         } satisfies ToWorker<Setup, Task>);
         feed(w);
+        // A second task in hand, as long as this thread is still left one to start with.
+        if (o.alsoHere && order.length - next >= 2) feed(w);
       }
       if (order.length === 0) resolve();
+      else if (o.alsoHere) void here();
     });
     ok = true;
   } finally {

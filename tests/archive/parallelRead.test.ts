@@ -59,13 +59,13 @@ describe("survey files read elsewhere (worker threads) and handed to readInputs"
     expect(JSON.stringify(there)).toBe(JSON.stringify(here));
   });
 
-  it("brackline compare reads and analyses on 2 worker threads with the same output as on this thread", async () => {
+  it("brackline compare reads and analyses on this thread and a worker thread with the same output as on this thread", async () => {
     const common = ["--centerline", LINE, "--draws", "30", "--seed", "2", "--no-cache"];
     const one = await run(["compare", ...paths, ...common, "--threads", "0"]);
     const two = await run(["compare", ...paths, ...common, "--threads", "2"]);
     expect(one.code, one.err).toBe(0);
     expect(two.code, two.err).toBe(0);
-    expect(two.err).toMatch(/3 to analyse on 2 worker threads/);
+    expect(two.err).toMatch(/3 to analyse on 2 threads \(this one and 1 worker thread\)/);
     expect(two.out).toBe(one.out);
   }, 180_000);
 });
