@@ -5,7 +5,7 @@
 import { availableParallelism } from "node:os";
 import { basename } from "node:path";
 import type { DischargeSource, Season, Survey } from "../../analysis/index.ts";
-import { dischargeOnDate, isoDay, parseSeasons, readDischargeTable } from "../../analysis/index.ts";
+import { joinDischargeTable, parseSeasons, readDischargeTable } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { readFileSync } from "node:fs";
 import { defaultCacheDir } from "./surveyCache.ts";
@@ -61,14 +61,7 @@ export function dischargeFromTable(
   if (table.rows.length === 0)
     throw new InputError(`${path}: no usable row (expected a date column and a discharge column in m³/s)`);
   err(`discharge table ${table.fileName}: ${table.rows.length} days, ${table.unitNote}`);
-  const out: Record<string, DischargeSource> = {};
-  const missing: string[] = [];
-  for (const s of surveys) {
-    const day = isoDay(s.startDate);
-    const hit = day ? dischargeOnDate(table, day) : undefined;
-    if (hit) out[s.name] = { dischargeM3s: hit.dischargeM3s, source: hit.statement };
-    else missing.push(s.name);
-  }
+  const { discharge: out, missing } = joinDischargeTable(table, surveys);
   if (missing.length)
     err(
       `discharge table ${table.fileName}: no row on or up to 31 days before ${missing.length} survey(s) (${missing.slice(0, 5).join(", ")}${missing.length > 5 ? ", …" : ""}); their discharge stays as given in the files or by --discharge`,
