@@ -130,6 +130,12 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2017â
     expect(pickerAfter).not.toBe(pickerBefore);
     await expect(chosen.locator('[data-testid="compare-map"]').count()).resolves.toBe(1);
     await expect(chosen.locator('[data-testid="compare-plot"]').count()).resolves.toBe(1);
+    const note = s.page.locator('[data-testid="map-chosen-zones"]');
+    await expect(note.textContent()).resolves.toContain(`${count} surveys chosen`);
+    console.log(
+      `archiveView.e2e: main map: ${(await note.textContent())?.replace(/\s+/g, " ")}; ${await note.getAttribute("data-paths")} zone stretches`,
+    );
+    expect(Number(await note.getAttribute("data-paths"))).toBeGreaterThan(0);
     const dimmed = await s.page.locator('[data-testid="archive-strip"] g.col.dim').count();
     expect(dimmed).toBeGreaterThan(0);
     await settle(s.page);

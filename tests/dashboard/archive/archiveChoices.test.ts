@@ -16,6 +16,8 @@ import {
 } from "../../../analysis/index.ts";
 import { syntheticArchive } from "../../archive/helpers/syntheticArchive.ts";
 import { archiveOf } from "../../../dashboard/src/worker/archive.ts";
+import { chosenZonePaths, zoneAlpha } from "../../../dashboard/src/archive/chosenZonesLayer.ts";
+import { expectWithin } from "../../helpers/tolerance.ts";
 import { surveysInBox } from "../../../dashboard/src/archive/scatterModel.ts";
 import { readSeasonsText, seasonsText } from "../../../dashboard/src/archive/archiveChoices.ts";
 import { fromWorkspaceDocument, toWorkspaceDocument } from "../../../dashboard/src/state/workspaceDoc.ts";
@@ -125,5 +127,39 @@ describe("box on the discharge scatter", () => {
     ];
     expect(surveysInBox(pts, [25, 35, 5, 10])).toEqual(["a", "b"]);
     expect(surveysInBox(pts, [0, 0, 1, 1])).toEqual([]);
+  });
+});
+
+describe("the main map follows the chosen surveys", () => {
+  it("chosenZonePaths() takes the chosen surveys' zone stretches of one constituent, with their kind", () => {
+    const o = (kind: "removal" | "addition" | undefined, n: number) => ({
+      isohalines: [],
+      constituents: {
+        Si: {
+          zonePaths: Array.from({ length: n }, () => [[0, 0] as [number, number], [1, 1] as [number, number]]),
+          zoneKind: kind,
+          maximumPoints: [],
+        },
+      },
+    });
+    const paths = chosenZonePaths(
+      ["b", "c"],
+      ["a", "b", "c"],
+      [o("removal", 1), o("addition", 2), o(undefined, 0)],
+      "Si",
+    );
+    expect(paths.map((p) => [p.survey, p.kind])).toEqual([
+      ["b", "addition"],
+      ["b", "addition"],
+    ]);
+    expect(chosenZonePaths(["b"], ["a", "b"], [o("removal", 1), undefined], "Si")).toEqual([]);
+  });
+
+  it("zoneAlpha(): k overlapping surveys together reach 90 % opacity", () => {
+    for (const k of [1, 2, 5, 40]) {
+      const a = zoneAlpha(k) / 255;
+      // rounding alpha to a byte moves the total by at most ~0.02 (k = 40)
+      expectWithin(1 - Math.pow(1 - a, k), 0.9, 0.02, `k = ${k}`);
+    }
   });
 });

@@ -1,0 +1,63 @@
+/**
+ * The main map following the surveys chosen in the archive view: the reaction zones of the chosen
+ * surveys (one constituent) drawn along the channel, semi-transparent so a stretch that is a zone
+ * in many chosen surveys reads darker. Positions come from the worker's overlays (analysis/workspace);
+ * nothing is recomputed here.
+ */
+import { PathLayer } from "@deck.gl/layers";
+import type { LonLat, SurveyOverlay } from "../worker/overlay.ts";
+import { ADDITION_CSS, REMOVAL_CSS, toRgba } from "../map/colour.ts";
+
+/** One chosen survey's zone stretch on the channel. */
+export interface ChosenZonePath {
+  survey: string;
+  kind: "removal" | "addition";
+  path: LonLat[];
+}
+
+/** The zone stretches of the chosen surveys (in workspace order) for one constituent. */
+export function chosenZonePaths(
+  chosen: readonly string[],
+  surveyNames: readonly string[],
+  overlays: ReadonlyArray<SurveyOverlay | undefined>,
+  constituent: string,
+): ChosenZonePath[] {
+  const want = new Set(chosen);
+  const out: ChosenZonePath[] = [];
+  surveyNames.forEach((name, i) => {
+    if (!want.has(name)) return;
+    const c = overlays[i]?.constituents[constituent];
+    if (!c || c.zonePaths.length === 0) return;
+    const kind = c.zoneKind === "addition" ? "addition" : "removal";
+    for (const path of c.zonePaths) out.push({ survey: name, kind, path });
+  });
+  return out;
+}
+
+/**
+ * Opacity of one survey's zone so that k overlapping surveys approach full colour: alpha per
+ * survey = 1 − (1 − 0.9)^(1/k) (k = surveys chosen), i.e. all k together reach 90 % opacity.
+ */
+export function zoneAlpha(nChosen: number): number {
+  const k = Math.max(1, nChosen);
+  return Math.round(255 * (1 - Math.pow(0.1, 1 / k)));
+}
+
+/** The deck.gl layer of the chosen surveys' zones (empty list: no layer). */
+export function chosenZonesLayer(paths: readonly ChosenZonePath[], nChosen: number): PathLayer<ChosenZonePath>[] {
+  if (paths.length === 0) return [];
+  const alpha = zoneAlpha(nChosen);
+  const removal = toRgba(REMOVAL_CSS, alpha);
+  const addition = toRgba(ADDITION_CSS, alpha);
+  return [
+    new PathLayer<ChosenZonePath>({
+      id: "archive-chosen-zones",
+      data: paths as ChosenZonePath[],
+      getPath: (p) => p.path,
+      getColor: (p) => (p.kind === "addition" ? addition : removal),
+      getWidth: 10,
+      widthUnits: "pixels",
+      capRounded: true,
+    }),
+  ];
+}
