@@ -34,19 +34,23 @@ export function chosenZonePaths(
   return out;
 }
 
+/** Least opacity of one survey's zone (a byte), so one zone among many stays visible. */
+export const MIN_ZONE_ALPHA = 64;
+
 /**
- * Opacity of one survey's zone so that k overlapping surveys approach full colour: alpha per
- * survey = 1 − (1 − 0.9)^(1/k) (k = surveys chosen), i.e. all k together reach 90 % opacity.
+ * Opacity of one survey's zone so that k overlapping zones approach full colour: alpha per
+ * survey = 1 − (1 − 0.9)^(1/k) (k = chosen surveys with a zone), i.e. all k together reach 90 %
+ * opacity; never below {@link MIN_ZONE_ALPHA}.
  */
-export function zoneAlpha(nChosen: number): number {
-  const k = Math.max(1, nChosen);
-  return Math.round(255 * (1 - Math.pow(0.1, 1 / k)));
+export function zoneAlpha(nZoned: number): number {
+  const k = Math.max(1, nZoned);
+  return Math.max(MIN_ZONE_ALPHA, Math.round(255 * (1 - Math.pow(0.1, 1 / k))));
 }
 
 /** The deck.gl layer of the chosen surveys' zones (empty list: no layer). */
-export function chosenZonesLayer(paths: readonly ChosenZonePath[], nChosen: number): PathLayer<ChosenZonePath>[] {
+export function chosenZonesLayer(paths: readonly ChosenZonePath[], nZoned: number): PathLayer<ChosenZonePath>[] {
   if (paths.length === 0) return [];
-  const alpha = zoneAlpha(nChosen);
+  const alpha = zoneAlpha(nZoned);
   const removal = toRgba(REMOVAL_CSS, alpha);
   const addition = toRgba(ADDITION_CSS, alpha);
   return [
