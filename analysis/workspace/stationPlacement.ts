@@ -77,7 +77,7 @@ export function placeWithoutCenterline(
       return { surveys: [...surveys], channel: read.channel, offered, notices };
     }
   }
-  const oriented = distancesFromMouth(surveys);
+  const oriented = distancesFromMouth(surveys, mouth);
   if (oriented.notice) notices.push(oriented.notice);
   return { surveys: oriented.surveys, ...(offered ? { offered } : {}), notices };
 }
