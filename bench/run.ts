@@ -9,9 +9,14 @@ function fmt(x: number): string {
 }
 
 const only = process.argv.slice(2);
+/** A case runs when an argument names it exactly, or is part of its name and names no case exactly. */
+function selected(name: string): boolean {
+  if (only.length === 0) return true;
+  return only.some((o) => o === name || (name.includes(o) && !benchCases.some((c) => c.name === o)));
+}
 const rows: BenchRow[] = [];
 for (const c of benchCases) {
-  if (only.length > 0 && !only.some((o) => c.name.includes(o))) continue;
+  if (!selected(c.name)) continue;
   process.stderr.write(`bench: ${c.name} ...\n`);
   try {
     rows.push(...(await c.run()));

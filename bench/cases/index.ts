@@ -6,6 +6,7 @@ import { underwayBinningBench } from "./underwayBinning.ts";
 import { bundleSizeBench } from "./bundleSize.ts";
 import { dashboardBench } from "./dashboard.ts";
 import { archiveBench } from "./archive.ts";
+import { archiveViewBench } from "./archiveView.ts";
 import { wideHeaderBench } from "./wideHeader.ts";
 import { cliStartBench } from "./cliStart.ts";
 import { dashboardUnderwayBench } from "./dashboardUnderway.ts";
@@ -21,5 +22,6 @@ export const benchCases: BenchCase[] = [
   dashboardUnderwayBench,
   bundleSizeBench,
   archiveBench,
+  archiveViewBench,
   cliStartBench,
 ];

@@ -11,6 +11,7 @@ import { Settings, type AnalysisSettings } from "./settings.svelte.ts";
 import { AnalysisResults } from "./results.svelte.ts";
 import { SavedWorkspace } from "./savedWorkspace.svelte.ts";
 import { ImportFlow } from "./importFlow.svelte.ts";
+import { ArchiveState } from "../archive/archiveState.svelte.ts";
 import { memoryStore, type WorkspaceStore } from "./workspaceStore.ts";
 import { proxyCallback, startWorker, type RemoteApi, type WorkerHandle } from "../worker/client.ts";
 import type { AnalysisJob, TextFile } from "../worker/protocol.ts";
@@ -45,6 +46,8 @@ export class AppState {
   readonly results = new AnalysisResults();
   readonly workspace: SavedWorkspace;
   readonly importFlow: ImportFlow;
+  /** The archive view's state: the worker's archive summary of the analysed surveys, the brushed dates. */
+  readonly archive = new ArchiveState(() => this.#analysisApi());
   readonly #connect: NonNullable<AppOptions["connect"]>;
   #analyser: WorkerHandle | undefined;
   #reader: WorkerHandle | undefined;

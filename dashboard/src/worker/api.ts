@@ -20,6 +20,8 @@ import type { UnderwayPoints, UnderwayRequest, UnderwayResult, UnderwayView } fr
 import { readUnderway, viewUnderway } from "./underwayEngine.ts";
 import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
 import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
+import { archiveOf, type ArchiveAnswer } from "./archive.ts";
+import type { Season } from "../../../analysis/index.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -160,6 +162,11 @@ export function createWorkerApi() {
     /** The channel stretch where one survey's salinity lies within a brushed range (km and map paths). */
     brushStretch(surveyIndex: number, range: [number, number] | null): BrushedStretch {
       return brushStretch(inputs.channel?.network, analyses[surveyIndex]?.salinityProfile, range);
+    },
+
+    /** The analysed surveys as an archive: series, relations and statements (analysis/archive). */
+    archive(seasons?: Season[]): ArchiveAnswer {
+      return archiveOf(analyses, seasons);
     },
 
     /** Km ticks and length of a centerline being drawn on the map (read by the one centerline reader). */
