@@ -42,7 +42,8 @@ function noticeOf(o: DistanceOrigin, armIds: string[], stated: boolean): string 
  * side, and the stations beyond the maximum get `sideArmKm` = |d − d_max| and no km (off channel).
  *
  * @param surveys the surveys (stations may carry `distanceKm`)
- * @param mouth the user's choice: "start" (smallest distance is the mouth) or "end" (largest); other values are ignored
+ * @param mouth the user's choice: "start" (smallest distance is the mouth) or "end" (largest); a position is not
+ *   used (the notice says so)
  * @returns new surveys with distances from the mouth, and a notice saying what was decided and how to change it;
  *   the surveys unchanged and no notice when fewer than 3 distinct distances have a salinity (and no mouth was stated)
  * @see Spearman (1904) for the rank correlation; the mouth at the salinity maximum is common practice
@@ -81,5 +82,9 @@ export function distancesFromMouth(
     for (const s of out)
       for (const st of s.stations as WithDistance[])
         if (st.sideArmKm !== undefined && !armIds.includes(st.id)) armIds.push(st.id);
-  return { surveys: out, notice: { code: "distanceOrigin", message: noticeOf(origin, armIds, isStated) } };
+  const point =
+    mouth !== undefined && !isStated
+      ? " A mouth given as a position (--mouth lon,lat) needs station positions or a centerline; it is not used for distances."
+      : "";
+  return { surveys: out, notice: { code: "distanceOrigin", message: noticeOf(origin, armIds, isStated) + point } };
 }

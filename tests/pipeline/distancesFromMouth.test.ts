@@ -111,6 +111,9 @@ describe("distance axis origin from salinity (common practice: the mouth is wher
     const end = distancesFromMouth([sideArmTransect(0)], "end");
     expect(byId(end.surveys[0]!).get("R10")!.distanceKm).toBe(0);
     expect(end.notice!.message).toContain("as stated (--mouth end)");
+    const point = distancesFromMouth([sideArmTransect(0)], [-122.4, 37.8]);
+    expect(byId(point.surveys[0]!).get("M")!.distanceKm).toBe(0);
+    expect(point.notice!.message).toContain("it is not used for distances");
   });
 
   it("a station sampled once cannot hold the maximum (a dry-month visit would otherwise move the mouth)", () => {
