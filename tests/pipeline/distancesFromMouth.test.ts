@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   analyzeSurvey,
+  centerlineFromSurveys,
   distanceOrigin,
   distancesFromMouth,
   integralStationId,
@@ -124,6 +125,25 @@ describe("distance axis origin from salinity (common practice: the mouth is wher
       ),
     );
     expect(r).toMatchObject({ kind: "interior", mouthKm: 50, riverSide: 1 });
+  });
+});
+
+describe("centerline from stations when the file's distances count from a side arm's head (common practice)", () => {
+  it("the side-arm stations are left off the line, which ends at the mouth", () => {
+    // positions: the river arm runs east from the mouth at lon 0.5, the side bay runs south from it
+    const withPositions = (s: Survey): Survey => ({
+      ...s,
+      stations: (s.stations as Placed[]).map((st) => {
+        const d = st.distanceKm!;
+        const lonLat: [number, number] = d >= 50 ? [0.5 + (d - 50) / 111, 0] : [0.5, -(50 - d) / 111];
+        return { ...st, lonLat };
+      }),
+    });
+    const line = centerlineFromSurveys([withPositions(sideArmTransect(0)), withPositions(sideArmTransect(0.3))])!;
+    expect(line.properties.sideArm).toEqual(["S0", "S1", "S2", "S3", "S4"]);
+    expect(line.properties.stationIds.some((id) => id.startsWith("S"))).toBe(false);
+    expect(line.properties.stationIds.at(-1)).toBe("M");
+    expect(line.properties.mouth).toBe("end");
   });
 });
 

@@ -95,6 +95,18 @@ describe.skipIf(!present)("bay cruise distances counted from a side arm's head (
     expect(full.saltIntrusionKm!).toBeLessThan(northKm.at(-1)!);
   }, 120_000);
 
+  it("wqdata21.csv with the station table (centerline built from the stations): South Bay left off the line by the file's own distances, so the mouth, km and salt intrusion agree with the distance route", async () => {
+    const byFile = await analyze([Y2021]);
+    const byTable = await analyze([Y2021, "--stations", TABLE]);
+    const a = byFile.surveys.find((s) => s.name === "2021-09-29")!;
+    const b = byTable.surveys.find((s) => s.name === "2021-09-29")!;
+    const kmB = new Map(b.stations.map((s) => [s.id, s]));
+    expect(kmB.get("18")!.alongChannelKm!).toBeLessThan(1);
+    for (const id of SOUTH_BAY.filter((x) => kmB.has(x))) expect(kmB.get(id)!.offChannel, id).toBe(true);
+    // before this, the station line ran on into South Bay and the salinity-2 isohaline read 120 km from a South-Bay "mouth"
+    expect(Math.abs(a.saltIntrusionKm! - b.saltIntrusionKm!)).toBeLessThan(0.05 * a.saltIntrusionKm! + 1);
+  }, 240_000);
+
   it("km of North-Bay stations agree with the station-table placement (2019 file + station table) within 5 % + 1 km", async () => {
     const byFile = await analyze([Y2021]);
     const byTable = await analyze([Y2019, "--stations", TABLE, ...UNITS]);
