@@ -94,6 +94,8 @@ export type { KnotData } from "./stats/knotData.ts";
 export { evaluateSpline, evaluateSplineGrid } from "./stats/naturalSpline.ts";
 export type { NaturalSpline, SplinePoint } from "./stats/naturalSpline.ts";
 export { interval95, percentileSorted } from "./stats/percentile.ts";
+export { intervalBc95 } from "./stats/biasCorrectedInterval.ts";
+export { bootstrapBiasCorrected } from "./stats/bootstrapBias.ts";
 // --- end mixing ---
 
 // --- seawater ---
@@ -197,7 +199,8 @@ export { readNetcdfStations } from "./io/netcdfStations.ts";
 export { parseCfTimeUnits, cfTimeToIso } from "./io/cfTime.ts";
 export type { CfTimeUnit } from "./io/cfTime.ts";
 export { suggestMapping } from "./io/suggestMapping.ts";
-export { COLUMN_ROLES, columnMappingSchema, columnAssignmentSchema, columnWithRole } from "./io/columnMapping.ts";
+export { COLUMN_ROLES } from "./io/columnRoles.ts";
+export { columnMappingSchema, columnAssignmentSchema, columnWithRole } from "./io/columnMapping.ts";
 export type { ColumnMapping, ColumnAssignment, ColumnRole } from "./io/columnMapping.ts";
 export { fileShapeSignature, findSavedMapping } from "./io/fileShape.ts";
 export { emptySummary, mergeSummaries } from "./io/importSummary.ts";
@@ -212,11 +215,11 @@ export {
   suggestMappingForText,
   parseUnitOverride,
   applyUnitOverrides,
-  missingUnits,
   mergeMapping,
-  unusedColumns,
 } from "./io/mappingChoices.ts";
-export type { UnitOverride, MissingUnit, UnusedColumn } from "./io/mappingChoices.ts";
+export { missingUnits, unusedColumns } from "./io/mappingGaps.ts";
+export type { UnitOverride } from "./io/mappingChoices.ts";
+export type { MissingUnit, UnusedColumn } from "./io/mappingGaps.ts";
 export { classifyTable } from "./io/tableKind.ts";
 export { groupSurveys, DEFAULT_SURVEY_GAP_DAYS } from "./io/groupSurveys.ts";
 export type { SurveyGrouping } from "./io/groupSurveys.ts";
@@ -243,12 +246,14 @@ export { crossCheckUnits, COUNTED_ELEMENT } from "./io/unitCrossCheck.ts";
 export { integralStationId, normaliseStationId } from "./io/stationIds.ts";
 export type { NormalisedStationId } from "./io/stationIds.ts";
 export { detectDialect, detectNewline, stripBom } from "./io/dialect.ts";
-export { WORKSPACE_LIMITS } from "./io/workspaceSchema.ts";
+export { WORKSPACE_LIMITS } from "./io/workspaceFormat.ts";
 export { conflictingStationPositions, STATION_POSITION_TOLERANCE_KM } from "./io/stationPositionCheck.ts";
 export { MAX_DISCHARGE_M3S, MAX_STATION_ID_CHARS, PSS78_MAX_SALINITY } from "./io/rowReader.ts";
 export type { TextDialect } from "./io/dialect.ts";
-export { createWorkspace, exportWorkspace, importWorkspace } from "./io/workspace.ts";
-export { workspaceSchema, WORKSPACE_VERSION, WORKSPACE_FORMAT } from "./io/workspaceSchema.ts";
+export { exportWorkspace, importWorkspace } from "./io/workspace.ts";
+export { createWorkspace } from "./io/newWorkspace.ts";
+export { workspaceSchema } from "./io/workspaceSchema.ts";
+export { WORKSPACE_VERSION, WORKSPACE_FORMAT } from "./io/workspaceFormat.ts";
 export type { WorkspaceDocument } from "./io/workspaceSchema.ts";
 export { migrateV1toV2, workspaceV1Schema } from "./io/workspaceMigrations.ts";
 // --- end io ---
@@ -438,7 +443,7 @@ export { stripControl } from "./output/terminalText.ts";
 // --- end output ---
 
 // --- workspace ---
-export { readInputs } from "./workspace/readInputs.ts";
+export { readInputs, readStationTableFile, readSurveyFileAs, type PreReadFiles } from "./workspace/readInputs.ts";
 export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
 export { plottedObservations, surveyObservations } from "./workspace/observations.ts";
 export type { ObservationPoint } from "./workspace/observations.ts";
@@ -463,10 +468,9 @@ export {
   geoJsonKind,
   delimitedKind,
   isNetcdfMagic,
-  FILE_KIND_LABELS,
   EXPECTED_FILE,
-  type InputFileKind,
 } from "./workspace/fileKind.ts";
+export { FILE_KIND_LABELS, type InputFileKind } from "./workspace/fileKindLabels.ts";
 export {
   channelOverlay,
   surveyOverlay,

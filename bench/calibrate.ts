@@ -1,6 +1,6 @@
 // `npm run calibrate`: seeded calibration study of the mixing engine against synthetic surveys
 // (bench/calibration/forwardModel.ts). Prints one table; goals from issue 14 beside it.
-// Options: --surveys N (default 40), --draws D (default 200), --full (every design × 1, 2, 5 % noise),
+// Options: --surveys N (default 100), --draws D (default 200), --full (every design × 1, 2, 5 % noise),
 // --shape TEXT (only shapes whose name contains TEXT).
 import { SHAPES, type SurveyDesign } from "./calibration/forwardModel.ts";
 import { scoreCell, type CellScore } from "./calibration/cell.ts";
@@ -10,7 +10,7 @@ const opt = (name: string, dflt: number): number => {
   const i = args.indexOf(`--${name}`);
   return i >= 0 ? Number(args[i + 1]) : dflt;
 };
-const surveys = opt("surveys", 40);
+const surveys = opt("surveys", 100);
 const draws = opt("draws", 200);
 const full = args.includes("--full");
 const onlyIdx = args.indexOf("--shape");
@@ -25,6 +25,27 @@ if (!full) designs.push({ stations: 20, spacing: "km", noise: 0.01 }, { stations
 const f = (x: number | undefined, d = 1): string => (x === undefined ? "–" : Number.isFinite(x) ? x.toFixed(d) : "∞");
 const pc = (x: number | undefined): string => (x === undefined ? "–" : `${Math.round(100 * x)}`);
 const rows: string[][] = [];
+/** Goals of issue 14 this row misses (empty: all met; "–": none applies). */
+function missed(s: CellScore, d: SurveyDesign, reaction: boolean): string {
+  const out: string[] = [];
+  const inBand = (x: number): boolean => x >= 0.9 && x <= 0.98;
+  let applies = false;
+  if (d.stations >= 20) {
+    applies = true;
+    if (!inBand(s.effectiveCoverage)) out.push("cov C*0");
+    // Conservative: the kept line gives % change 0 = the truth by construction, so its coverage is 100 %.
+    if (reaction && !inBand(s.percentCoverage)) out.push("cov %chg");
+  }
+  if (reaction) {
+    applies = true;
+    if (Math.abs(s.percentBiasPp) > 2) out.push("bias");
+    if (s.classAccuracy < 0.95) out.push(s.classOrWarned >= 0.95 ? "class (warned)" : "class");
+    if (s.breakWithin2 !== undefined && s.breakWithin2 < 0.8)
+      out.push((s.breakWithin2OrWarned ?? 0) >= 0.8 ? "break (warned)" : "break");
+  }
+  if (s.outsideOwnInterval > 0) out.push("own interval");
+  return !applies && out.length === 0 ? "–" : out.length === 0 ? "ok" : out.join(", ");
+}
 const t0 = performance.now();
 for (const shape of SHAPES) {
   if (only && !shape.name.includes(only)) continue;
@@ -46,11 +67,13 @@ for (const shape of SHAPES) {
       pc(s.classAccuracy),
       pc(s.directionAccuracy),
       pc(s.breakWithin2),
+      pc(s.breakWithin2OrWarned),
       f(s.breakMedianError),
       pc(s.breakCoverage),
       f(s.maximumMedianError),
       pc(s.maximumCoverage),
       String(s.failures),
+      missed(s, d, shape.percent !== 0),
     ]);
   }
   process.stderr.write(`calibrate: ${shape.name} done (${((performance.now() - t0) / 1000).toFixed(0)} s)\n`);
@@ -96,16 +119,18 @@ table(
     "class %",
     "direction %",
     "break ±2 %",
+    "±2 or warned %",
     "break med err",
     "break cov %",
     "max med err",
     "max cov %",
     "failed",
+    "goals missed",
   ],
   rows,
 );
 console.log("\nExact data (35 stations, km-even, no noise; Q = 100 m³/s, A = 5000 m²):\n");
 table(["shape", "C*0 err %", "%chg err pp", "∫A·R dx err %", "break err", "max err"], exact);
 console.log(
-  `\nGoals (issue 14): 95 % coverage 90–98 % for n ≥ 20; |bias of % change| ≤ 2 pp and class accuracy ≥ 95 % for reactions ending at S ≥ 5; break within ±2 in ≥ 80 % of surveys; rate integral within 5 % on exact data.\nTruth: % change against the river value at S = 0. ${((performance.now() - t0) / 1000).toFixed(0)} s on Node ${process.version}.`,
+  `\nGoals (issue 14): 95 % coverage 90–98 % for n ≥ 20; |bias of % change| ≤ 2 pp and class accuracy ≥ 95 % for reactions ending at S ≥ 5; break within ±2 in ≥ 80 % of surveys; rate integral within 5 % on exact data. "goals missed" names this row's misses; "class (warned)": the class is wrong in over 5 % of surveys, but in ≥ 95 % it is right or a warning says the stations cannot establish it (short-seaward-line, reaction-reaches-mouth, few-stations-in-zone); "break (warned)": the break is off by more than 2 in over 20 % of surveys, but in ≥ 80 % it is within ±2 or the tool warns (break-uncertain) that it is not located that well. "failed": surveys without C*0 or % change (the tool says "not determined").\nTruth: % change against the river value at S = 0. ${((performance.now() - t0) / 1000).toFixed(0)} s on Node ${process.version}.`,
 );

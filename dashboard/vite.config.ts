@@ -1,17 +1,38 @@
+import { createHash } from "node:crypto";
+import { readFileSync, readdirSync } from "node:fs";
+import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { defineConfig } from "vite";
 import { svelte } from "@sveltejs/vite-plugin-svelte";
+import { proj4Trim } from "./proj4Trim.ts";
 
 const dashboardDir = fileURLToPath(new URL(".", import.meta.url));
 const repoDir = fileURLToPath(new URL("..", import.meta.url));
+
+/**
+ * Fingerprint of the analysis engine: every source file under analysis/ and the dashboard worker.
+ * The worker's result cache (src/worker/resultCache.ts) keys results by it, so a changed estimator
+ * never serves a stored result.
+ */
+function engineFingerprint(): string {
+  const h = createHash("sha256");
+  for (const dir of ["analysis", "dashboard/src/worker"]) {
+    const files = (readdirSync(join(repoDir, dir), { recursive: true }) as string[])
+      .filter((f) => f.endsWith(".ts"))
+      .sort();
+    for (const f of files) h.update(f).update(readFileSync(join(repoDir, dir, f)));
+  }
+  return h.digest("hex").slice(0, 32);
+}
 
 // The dashboard is a static, offline bundle: no CDN, no remote tiles or fonts.
 // Demo data are imported from data-demo/ at build time (see src/lib/demoData.ts).
 export default defineConfig({
   root: dashboardDir,
   base: "./",
-  plugins: [svelte({ configFile: false })],
-  worker: { format: "es" },
+  plugins: [proj4Trim, svelte({ configFile: false })],
+  define: { __BRACKLINE_ENGINE__: JSON.stringify(engineFingerprint()) },
+  worker: { format: "es", plugins: () => [proj4Trim] },
   server: { fs: { allow: [repoDir] } },
   build: {
     outDir: "dist",

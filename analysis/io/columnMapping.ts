@@ -1,32 +1,8 @@
 import { z } from "zod";
 
-/** What a column holds. */
-export const COLUMN_ROLES = [
-  "station",
-  "survey",
-  "dateTime",
-  "date",
-  "time",
-  "latitude",
-  "longitude",
-  "x",
-  "y",
-  "depth",
-  "depthLabel",
-  "salinity",
-  "conductivity",
-  "temperature",
-  "pH",
-  "constituent",
-  "flag",
-  "rowFlag",
-  "discharge",
-  "distance",
-  "ignore",
-] as const;
+import { COLUMN_ROLES, type ColumnRole } from "./columnRoles.ts";
 
-/** What a column holds (see {@link COLUMN_ROLES}). */
-export type ColumnRole = (typeof COLUMN_ROLES)[number];
+export { COLUMN_ROLES, type ColumnRole };
 
 export const columnAssignmentSchema = z.object({
   /** Header text exactly as in the file. */

@@ -10,10 +10,25 @@ import { z } from "zod";
 export function headOfText(text: string, rows = 50): { headers: string[]; sample: string[][] } {
   const clean = stripBom(text);
   const cut = clean.slice(0, 262144);
-  const records: string[][] = [];
-  parseDelimitedText(cut.slice(0, cut.lastIndexOf("\n") + 1 || cut.length), detectDialect(cut.slice(0, 65536)), (r) => {
-    if (records.length <= rows) records.push(r.fields);
-  });
+  const dialect = detectDialect(cut.slice(0, 65536));
+  const head = (part: string): { records: string[][]; total: number } => {
+    const records: string[][] = [];
+    let total = 0;
+    parseDelimitedText(part, dialect, (r) => {
+      total++;
+      if (records.length <= rows) records.push(r.fields);
+    });
+    return { records, total };
+  };
+  // First the first 2·(rows + 2) lines only: when they hold more records than are kept, every kept
+  // record ended before the cut, so they are the records the longer parse below gives.
+  let end = -1;
+  for (let i = 0; i < 2 * (rows + 2) && (i === 0 || end >= 0); i++) end = cut.indexOf("\n", end + 1);
+  const quick = end >= 0 ? head(cut.slice(0, end + 1)) : undefined;
+  const records =
+    quick && quick.total >= rows + 2
+      ? quick.records
+      : head(cut.slice(0, cut.lastIndexOf("\n") + 1 || cut.length)).records;
   return { headers: (records[0] ?? []).map((h) => h.trim()), sample: records.slice(1) };
 }
 
@@ -82,37 +97,6 @@ export function applyUnitOverrides(
 }
 
 /** The usual unit of a constituent, for the example in a message (never applied without the user). */
-function usualUnit(symbol: string): string {
-  return /^(Si|NO3|NO2|NO3\+NO2|NH4|PO4|DIN|DOC|DON|DOP|DIC|TA)\b/.test(symbol) ? "µmol/L" : "nmol/L";
-}
-
-/** A constituent column the mapping cannot read for want of a unit. */
-export interface MissingUnit {
-  header: string;
-  name: string;
-  kind: "tracer" | "nonMixing";
-  /** The option that supplies it, e.g. `--unit "Silicate=µmol/L"` (check the unit in the data source). */
-  option: string;
-}
-
-/**
- * Lists the constituent columns without a usable unit.
- *
- * @param mapping the mapping (suggested, merged or with overrides applied)
- * @returns one entry per such column
- */
-export function missingUnits(mapping: ColumnMapping): MissingUnit[] {
-  return mapping.columns
-    .filter((c) => c.role === "constituent")
-    .filter((c) => c.unit === undefined || (c.kind !== "nonMixing" && concentrationUnitText(c.unit) === undefined))
-    .map((c) => ({
-      header: c.header,
-      name: c.name ?? c.header,
-      kind: c.kind ?? "tracer",
-      option: `--unit "${c.header}=${c.kind === "nonMixing" ? "<unit>" : usualUnit(c.name ?? "")}"`,
-    }));
-}
-
 /** A mapping file as users write it: `shape` and column `role`s may be left out (merged with the suggestion). */
 export const partialMappingSchema = columnMappingSchema.extend({
   shape: z.string().optional(),
@@ -146,37 +130,4 @@ export function mergeMapping(
   return { mapping: { ...suggested, ...top, shape: suggested.shape, columns } };
 }
 
-/** A numeric column that will not be used, and why. */
-export interface UnusedColumn {
-  header: string;
-  reason: string;
-}
-
-/**
- * Lists the numeric columns that are neither used nor reported as errors, with the reason.
- *
- * @param mapping the mapping that will be applied
- * @param sample the first data rows (cell text in header order)
- * @param headers the headers
- * @returns one entry per unused column whose sample cells are mostly numbers
- */
-export function unusedColumns(
-  mapping: ColumnMapping,
-  headers: readonly string[],
-  sample: readonly (readonly string[])[],
-): UnusedColumn[] {
-  const out: UnusedColumn[] = [];
-  headers.forEach((h, i) => {
-    const c = mapping.columns.find((x) => norm(x.header) === norm(h));
-    if (c !== undefined && c.role !== "ignore") return;
-    const cells = sample.map((r) => (r[i] ?? "").trim()).filter((x) => x !== "" && x.toUpperCase() !== "NA");
-    const numeric = cells.filter((x) => Number.isFinite(Number(x.replace(",", "."))));
-    if (cells.length === 0 || numeric.length < cells.length / 2) return;
-    const why = c?.reason ?? "not in the mapping";
-    out.push({
-      header: h,
-      reason: `${why === "not recognised" ? "not a recognised constituent or column role" : why}; to use it, give it a role in the mapping (brackline mapping prints one) or a unit (--unit "${h}=<unit>")`,
-    });
-  });
-  return out;
-}
+export { missingUnits, unusedColumns, type MissingUnit, type UnusedColumn } from "./mappingGaps.ts";

@@ -6,7 +6,6 @@ import type { WorkspaceDocument } from "./workspaceSchema.ts";
 import {
   isTileUrlTemplate,
   surveySchema,
-  WORKSPACE_FORMAT,
   WORKSPACE_LIMITS,
   WORKSPACE_VERSION,
   workspaceSchema,
@@ -15,21 +14,7 @@ import { appendAll } from "../survey/arrayExtent.ts";
 
 const FILE = "workspace";
 
-/** A new, empty workspace document (current version). */
-export function createWorkspace(name?: string): WorkspaceDocument {
-  const ws: WorkspaceDocument = {
-    format: WORKSPACE_FORMAT,
-    version: WORKSPACE_VERSION,
-    surveys: [],
-    centerline: null,
-    mappings: [],
-    imports: [],
-    settings: {},
-    analysis: {},
-  };
-  if (name !== undefined) ws.name = name;
-  return ws;
-}
+export { createWorkspace } from "./newWorkspace.ts";
 
 /**
  * Writes a workspace document as JSON text after validating it against the current schema.

@@ -3,26 +3,9 @@ import type { Survey } from "../survey/survey.ts";
 import { columnMappingSchema } from "./columnMapping.ts";
 import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
 
-/** Current workspace document version. */
-export const WORKSPACE_VERSION = 2;
-/** The format tag every workspace document carries. */
-export const WORKSPACE_FORMAT = "brackline-workspace";
+import { WORKSPACE_FORMAT, WORKSPACE_LIMITS, WORKSPACE_VERSION } from "./workspaceFormat.ts";
 
-/** Size caps of a workspace document (see README "Limits"). */
-export const WORKSPACE_LIMITS = {
-  /** Longest workspace text read [characters]. */
-  maxChars: 100_000_000,
-  /** Most stations over all surveys. */
-  maxStations: 100_000,
-  /** Most surveys. */
-  maxSurveys: 1_000,
-  /** Most constituents per survey. */
-  maxConstituents: 500,
-  /** Most vertices in the centerline. */
-  maxCenterlineVertices: 1_000_000,
-  /** Longest text field (ids, names, original cell text) [characters]. */
-  maxTextChars: 10_000,
-} as const;
+export { WORKSPACE_FORMAT, WORKSPACE_LIMITS, WORKSPACE_VERSION };
 
 const finite = z.number().refine(Number.isFinite, "a finite number");
 const nonNegative = finite.refine((v) => v >= 0, "a number ≥ 0");

@@ -146,20 +146,27 @@ function analyzeChecked(samples: readonly MixingSample[], options: AnalyzeOption
     twoPhase: tp.fit,
     tangent: tp.tangent,
     riverExtraSd: rv.widenedSd,
+    riverGroup: group,
     evidence,
     nonConservative: isNonConservative(evidence) || !tp.fit.linear,
     quadCoef: evidence.quadraticCoefficient,
     warnings,
   });
-  const all = [...warnings, ...result.warnings];
+  // The river was replaced by the freshest stations' mean: the dilution line and deviations follow it,
+  // and the slope warning about an extrapolation that was not used is dropped.
+  const finalLine = result.riverReplaced ? dilutionLine(result.river, sea, unit) : line;
+  const finalDevs = result.riverReplaced ? deviations(finalLine, used, k) : devs;
+  const all = [...warnings, ...result.warnings].filter(
+    (w) => !(result.riverReplaced && w.code === "river-extrapolated"),
+  );
   return {
     name,
     unit,
     class: result.cls,
     confidence: all.some((w) => LOW_CONFIDENCE_CODES.has(w.code)) ? "low" : "normal",
     endmembers: { river: result.river, sea },
-    dilutionLine: line,
-    deviations: devs,
+    dilutionLine: finalLine,
+    deviations: finalDevs,
     fit: result.fit,
     tangent: tp.tangent,
     evidence,

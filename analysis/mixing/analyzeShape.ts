@@ -23,6 +23,7 @@ import { dilutionAt } from "./dilutionLine.ts";
 import { fluxSummary } from "./flux.ts";
 import { rateProfile } from "./rateProfile.ts";
 import { estimateOf, finiteEstimate } from "./estimate.ts";
+import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -37,6 +38,8 @@ export interface ShapeInput {
   tangent: TangentLine;
   /** Extra river sd from a river history within the flushing time (Loder & Reichard 1981). */
   riverExtraSd?: number;
+  /** The freshest stations' group (mean, sd, salinity): the river when extrapolation is not possible. */
+  riverGroup: Endmember;
   evidence: MixingEvidence;
   nonConservative: boolean;
   quadCoef: number;
@@ -57,6 +60,25 @@ function interpolate(xs: Float64Array, ys: number[], x: number): number {
 /** Half-width (salinity units) of a break interval the tool calls located; wider intervals get a warning. */
 export const BREAK_GOAL_S = 2;
 
+/**
+ * Largest bootstrap standard error of the extrapolated river value, as a fraction of it, before the
+ * extrapolation to the reference salinity is called unstable and the freshest stations' mean is used
+ * at their own salinity instead (documented choice).
+ */
+export const RIVER_SE_LIMIT = 0.2;
+
+/** Smallest χ²_ν of the two-phase fit at which C₀ and C*₀ are bootstrap bias-corrected (documented choice). */
+export const BIAS_CORRECTION_MIN_CHI2 = 0.25;
+
+/** Fewest stations on the straight seaward line before a `short-seaward-line` warning (a line through 2 points tests nothing). */
+export const MIN_SEAWARD_STATIONS = 3;
+
+/** −1 for a net removal, +1 for a net addition (the quadratic coefficient decides a zero change, as in classify). */
+function netSign(netDelta: number, quadCoef: number): -1 | 1 {
+  if (netDelta !== 0 && Number.isFinite(netDelta)) return netDelta < 0 ? -1 : 1;
+  return quadCoef > 0 ? -1 : 1;
+}
+
 /** Fewest stations inside a reaction zone before a warning. */
 export const MIN_ZONE_STATIONS = 3;
 
@@ -72,6 +94,8 @@ export const MIN_ZONE_STATIONS = 3;
 export function analyzeShape(p: ShapeInput): {
   cls: BehaviourClass;
   river: Endmember;
+  /** The river end-member was replaced by the freshest stations' mean (the dilution line must follow). */
+  riverReplaced: boolean;
   fit: FitCurve;
   effective: ConstituentAnalysis["effectiveEndmember"];
   percent?: ConstituentAnalysis["percentChange"];
@@ -97,37 +121,94 @@ export function analyzeShape(p: ShapeInput): {
   const d1 = new Float64Array(G);
   const d2 = new Float64Array(G);
   evaluateSplineGrid(curve.spline, grid, f, d1, d2);
-  const sr = river.salinity;
-  const cStar = tangent.intercept + tangent.slope * sr;
+
   const draws = o.bootstrapDraws ?? 2000;
   const bGrid = salinityGrid(sMin, sMax, Math.min(G, BOOTSTRAP_GRID_POINTS));
   const seed = o.seed ?? 1;
   const x = Float64Array.from(used, (s) => s.salinity);
-  const yHat = Float64Array.from(used, (s) => twoPhaseAt(tp, s.salinity)[0]);
+  // Replicates are drawn around the two-phase fit; when the straight line was kept, around the best
+  // two-phase alternative it was tested against, so each replicate re-runs the selection (Efron 2014).
+  const centre: TwoPhaseFit = tp.linear && tp.alternative ? { ...tp, ...tp.alternative, linear: false } : tp;
+  const yHat = Float64Array.from(used, (s) => twoPhaseAt(centre, s.salinity)[0]);
   const dof = Math.max(1, n - tp.params);
   const scatter = Math.max(1, Math.sqrt(tp.rss / dof));
-  const override = river.source === "override";
-  const bs = runBootstrap({
-    x,
-    yHat,
-    sigmaEff: Float64Array.from(used, (s) => s.sigma * scatter),
-    w: Float64Array.from(used, (s) => 1 / s.sigma ** 2),
-    lambda: curve.lambda,
-    tieTol: TIE_FRACTION * (sMax - sMin),
-    grid: bGrid,
-    referenceSalinity: sr,
-    riverOverride: override ? { conc: river.conc, sd: river.concSd } : undefined,
-    riverExtraSd: p.riverExtraSd,
-    sea: { salinity: sea.salinity, conc: sea.conc, sd: sea.concSd / Math.sqrt(Math.max(1, sea.n)) },
-    draws,
-    seed,
-  });
+  const boot = (sRef: number, rv: Endmember, override: boolean, effectiveAt: number) =>
+    runBootstrap({
+      x,
+      yHat,
+      sigmaEff: Float64Array.from(used, (s) => s.sigma * scatter),
+      w: Float64Array.from(used, (s) => 1 / s.sigma ** 2),
+      lambda: curve.lambda,
+      tieTol: TIE_FRACTION * (sMax - sMin),
+      grid: bGrid,
+      referenceSalinity: sRef,
+      riverOverride: override ? { conc: rv.conc, sd: rv.concSd } : undefined,
+      riverExtraSd: p.riverExtraSd,
+      sea: { salinity: sea.salinity, conc: sea.conc, sd: sea.concSd / Math.sqrt(Math.max(1, sea.n)) },
+      draws,
+      seed,
+      estimates: {
+        effective: effectiveAt,
+        percent: rv.conc > 0 ? (100 * (effectiveAt - rv.conc)) / rv.conc : Number.NaN,
+        riverConc: rv.conc,
+        netDelta: effectiveAt - rv.conc,
+      },
+      zoneSign: netSign(effectiveAt - rv.conc, p.quadCoef),
+    });
+  let override = river.source === "override";
+  // The straight line through all stations is rejected yet kept (no seaward phase separates): its
+  // value at S = 0 is no estimate of the river, so the freshest stations' mean is used.
+  const lineRejected = tp.linear && (p.nonConservative || p.evidence.chiSquaredP < 0.01);
+  let riverReplaced = false;
+  const useGroup = (why: string): void => {
+    const g = p.riverGroup;
+    river = {
+      ...g,
+      concSd: g.n >= 2 ? g.concSd / Math.sqrt(g.n) : g.concSd,
+      method: `mean of the freshest stations at S = ${g.salinity.toFixed(2)} (${why})`,
+    };
+    override = true;
+    riverReplaced = true;
+  };
+  if (!override && lineRejected) useGroup("no curve to extrapolate along");
+  let sr = river.salinity;
+  let cStar = tangent.intercept + tangent.slope * sr;
+  let bs = boot(sr, river, override, cStar);
+  if (
+    !override &&
+    draws > 0 &&
+    (!(river.conc > 0) || (bs.riverSe !== undefined && bs.riverSe > RIVER_SE_LIMIT * Math.abs(river.conc)))
+  ) {
+    const extrapolated = river.conc;
+    const se = bs.riverSe;
+    useGroup("extrapolation to S = 0 unstable");
+    warnings.push({
+      code: "river-extrapolation-unstable",
+      message: `Extrapolating the fitted curve from the freshest stations to S = ${sr} gives C₀ = ${extrapolated.toPrecision(3)} ${unit}${se !== undefined ? ` ± ${se.toPrecision(2)} (bootstrap standard error)` : ""}, too uncertain to use: the freshest stations disagree more than a mixing curve explains (river variability or a steep change at the lowest salinities). C₀ and C*₀ are given at the freshest stations' salinity S = ${river.salinity.toFixed(2)} instead. A river sample upstream of the salt intrusion would settle it.`,
+    });
+    sr = river.salinity;
+    cStar = tangent.intercept + tangent.slope * sr;
+    bs = boot(sr, river, override, cStar);
+  }
   if (draws > 0 && bs.usable < 0.9 * draws)
     warnings.push({
       code: "bootstrap-degenerate",
       message: `Only ${bs.usable} of ${draws} bootstrap draws were usable; intervals are rough.`,
     });
   if (!override && bs.riverSe !== undefined && Number.isFinite(bs.riverSe)) river = { ...river, concSd: bs.riverSe };
+  // Bootstrap bias correction of C₀ (extrapolated along the curve) and C*₀ (break selection): both
+  // are nonlinear in the data and biased by the noise (Efron & Tibshirani 1993). Only for a two-phase
+  // fit (the kept line gives C*₀ = C₀ by construction) and only where the residuals show noise of
+  // the stated precision (χ²_ν ≥ {@link BIAS_CORRECTION_MIN_CHI2}): on data far smoother than that
+  // the replicates' noise is not the data's. The tangent drawn stays the fitted line.
+  if (draws > 0 && !tp.linear && tp.rss / dof >= BIAS_CORRECTION_MIN_CHI2) {
+    // A correction that leaves the bootstrap interval is not credible (skewed, unstable replicates).
+    const within = (v: number, iv: [number, number] | undefined, fallback: number): number =>
+      iv && v >= iv[0] && v <= iv[1] ? v : fallback;
+    if (!override)
+      river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
+    cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
+  }
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
@@ -136,7 +217,34 @@ export function analyzeShape(p: ShapeInput): {
       code: "river-nonpositive",
       message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,
     });
+  const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
+  if (tangent.method === "curve-tangent" || shortLine) {
+    // No straight seaward phase, or one resting on < 3 stations: C*₀ is a slope at the end of
+    // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
+    // their difference widens the intervals (between-model term of Buckland et al. 1997).
+    const cSpline = f[G - 1]! - (sMax - sr) * d1[G - 1]!;
+    const delta = Math.abs(cSpline - cStar);
+    const widen = (e: Estimate, d: number): Estimate => ({
+      ...e,
+      lower: e.value - Math.hypot(e.value - e.lower, d),
+      upper: e.value + Math.hypot(e.upper - e.value, d),
+    });
+    if (Number.isFinite(delta)) {
+      effective = widen(effective, delta);
+      if (percent) percent = widen(percent, (100 * delta) / river.conc);
+    }
+    if (!shortLine)
+      warnings.push({
+        code: "reaction-reaches-mouth",
+        message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it). It is the effective end-member for that section only; stations farther seaward would fix it.`,
+      });
+  }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
+  if (segStart !== undefined && tangent.nStations < MIN_SEAWARD_STATIONS)
+    warnings.push({
+      code: "short-seaward-line",
+      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} cannot be tested, so the class does not say "then conservative". Stations between there and the sea end-member would settle it.`,
+    });
   const mS = twoPhaseMaximum(tp, sMax);
   // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the
   // % change interval excludes zero.
@@ -156,7 +264,16 @@ export function analyzeShape(p: ShapeInput): {
   }
   const toKm = (a: number, b: number): Array<[number, number]> => o.salinityToKm?.(a, b) ?? [];
   let zone: ConstituentAnalysis["reactionZone"];
-  const z = cls === "conservative" ? undefined : zoneFromCurve(grid, d2, sr, undefined, segStart);
+  // The zone has the sign of the class (the net change), so a "removal" never comes with an
+  // "addition zone"; when the curve's strongest reaction has the other sign, both are said.
+  const classSign = cls === "conservative" ? undefined : netSign(cStar - river.conc, p.quadCoef);
+  const z = classSign === undefined ? undefined : zoneFromCurve(grid, d2, sr, undefined, segStart, classSign);
+  const strongest = classSign === undefined ? undefined : zoneFromCurve(grid, d2, sr, undefined, segStart);
+  if (strongest && (!z || strongest.kind !== z.kind))
+    warnings.push({
+      code: "opposing-reactions",
+      message: `The net change is ${classSign! < 0 ? "a removal (C*₀ below C₀)" : "an addition (C*₀ above C₀)"}, but the fitted curve's strongest reaction is ${strongest.kind} over S = ${strongest.from.toFixed(1)}–${strongest.to.toFixed(1)}: both act along this estuary and the % change is their balance${z ? `; the ${z.kind} zone shown is S = ${z.from.toFixed(1)}–${z.to.toFixed(1)}` : ""}.`,
+    });
   if (z) {
     zone = {
       salinity: [z.from, z.to],
@@ -208,6 +325,7 @@ export function analyzeShape(p: ShapeInput): {
   return {
     cls,
     river,
+    riverReplaced,
     fit: {
       method: curve.method,
       salinity: Array.from(grid),

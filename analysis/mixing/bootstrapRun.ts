@@ -3,6 +3,7 @@ import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitPreparedSpline, prepareSmoothingSpline } from "../stats/smoothingSpline.ts";
 import { mergeKnots } from "../stats/knotData.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
+import { intervalBc95 } from "../stats/biasCorrectedInterval.ts";
 import { fitTwoPhase, seawardLine, twoPhaseAt, twoPhaseDesign, twoPhaseMaximum } from "./twoPhase.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
 
@@ -28,6 +29,13 @@ export interface BootstrapInput {
   sea: { salinity: number; conc: number; sd: number };
   draws: number;
   seed: number;
+  /**
+   * Full-data point estimates: when given, C*₀, % change, C₀ and C*₀ − C₀ get bias-corrected
+   * percentile intervals about them (Efron 1987) instead of plain percentile intervals.
+   */
+  estimates?: { effective: number; percent: number; riverConc: number; netDelta: number };
+  /** Sign of the reaction zone to locate in each replicate (that of the point estimate's net change). */
+  zoneSign?: -1 | 1;
 }
 
 /** 95 % percentile intervals of the bootstrap replicates (undefined when too few usable draws). */
@@ -56,12 +64,17 @@ export interface BootstrapResult {
  * curve, then refits everything — the two-phase model with its break (so C*₀ carries the break
  * uncertainty), the river value at the reference salinity from the same fit, the smoothing spline
  * at the full-data λ (band, zone) and the maximum. No station is duplicated or dropped, so the
- * linearity tests see the design the survey had. Intervals are percentile intervals.
+ * linearity tests see the design the survey had. Intervals are percentile intervals, bias-corrected
+ * (BC, Efron 1987) about the full-data estimates when those are given. When the full-data fit kept
+ * the straight line, the caller passes the best two-phase fit as Ĉ so that every replicate re-runs the
+ * model selection and the intervals carry its uncertainty (Efron 2014).
  *
  * @param b inputs
  * @returns intervals and the curve band on the grid
  * @see Efron, B. & Tibshirani, R.J. (1993) An Introduction to the Bootstrap, Chapman & Hall, ch. 6 (parametric
- *   bootstrap) and ch. 9 (regression models: resampling on a fixed design).
+ *   bootstrap) and ch. 9 (regression models: resampling on a fixed design); Efron, B. (2014) Estimation
+ *   and accuracy after model selection. JASA 109, 991–1007 (bootstrap from the larger model, selection
+ *   re-run in each replicate; from memory).
  */
 export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const n = b.x.length;
@@ -122,7 +135,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     const spline = fitPreparedSpline(prepared, knots.y, splineWs);
     evaluateSplineGrid(spline, b.grid, f, undefined, d2);
     curves.set(f, d * G);
-    const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity);
+    const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity, b.zoneSign);
     if (zone) {
       zLo[d] = zone.from;
       zHi[d] = zone.to;
@@ -150,13 +163,14 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
       k++;
     }
   const delta = eff.map((v, i) => v - c0[i]!);
+  const est = b.estimates;
   return {
     usable,
-    effective: interval95(eff),
-    percent: interval95(pct),
-    riverConc: interval95(c0),
+    effective: est ? intervalBc95(eff, est.effective) : interval95(eff),
+    percent: est ? intervalBc95(pct, est.percent) : interval95(pct),
+    riverConc: est ? intervalBc95(c0, est.riverConc) : interval95(c0),
     riverSe: k >= 2 ? Math.sqrt(Math.max(0, (s2 - (s1 * s1) / k) / (k - 1))) : undefined,
-    netDelta: interval95(delta),
+    netDelta: est ? intervalBc95(delta, est.netDelta) : interval95(delta),
     zoneLower: interval95(zLo),
     zoneUpper: interval95(zHi),
     maxSalinity: interval95(mS),

@@ -8,6 +8,12 @@ import { runsTest } from "../stats/runsTest.ts";
 export const CHI2_1_95 = 3.841;
 /** Significance level of the tests. */
 export const ALPHA = 0.05;
+/**
+ * Level of each of the two curvature tests (quadratic F-test here, two-phase F-test in twoPhase.ts)
+ * whose "either" decides the class: α/2 each (Bonferroni), so a conservative constituent is called
+ * non-conservative by curvature in ≤ 5 % of surveys. @see Holm, S. (1979) Scand. J. Statist. 6, 65–70.
+ */
+export const CURVATURE_ALPHA = ALPHA / 2;
 
 /**
  * Statistical evidence for non-conservative behaviour (common practice):
@@ -58,7 +64,7 @@ export function mixingEvidence(
 
 /**
  * Decision rule (documented choice): non-conservative when
- * (a) curvature is significant — F-test p < 0.05 AND the quadratic term lowers χ² by more
+ * (a) curvature is significant — F-test p < 0.025 (Bonferroni half of 0.05, shared with the two-phase test) AND the quadratic term lowers χ² by more
  *     than χ²₁(95 %) = 3.84 in precision units (curvature larger than analytical precision); or
  * (b) the straight-line residuals exceed precision (χ² p < 0.05) AND are grouped by salinity
  *     (runs test p < 0.05).
@@ -67,7 +73,7 @@ export function mixingEvidence(
  * @returns true when the constituent departs from conservative mixing
  */
 export function isNonConservative(e: MixingEvidence): boolean {
-  const curvature = e.fTestCurvatureP < ALPHA && e.curvatureDeltaChiSquared > CHI2_1_95;
+  const curvature = e.fTestCurvatureP < CURVATURE_ALPHA && e.curvatureDeltaChiSquared > CHI2_1_95;
   const systematic = e.chiSquaredP < ALPHA && e.runsTestP < ALPHA;
   return curvature || systematic;
 }

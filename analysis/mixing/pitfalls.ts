@@ -12,6 +12,7 @@ export const SEA_END_MIN_S = 20;
 /** Warning codes that set the analysis confidence to "low". */
 export const LOW_CONFIDENCE_CODES = new Set([
   "endmember-variability",
+  "river-extrapolation-unstable",
   "few-stations-in-zone",
   "salinity-range",
   "non-monotonic-salinity",

@@ -35,10 +35,19 @@ export interface TwoPhaseFit {
   params: number;
   /** p of the F-test two-phase vs straight line (1 when it could not be made). */
   pCurvature: number;
+  /**
+   * When the straight line was kept: the best two-phase fit it was tested against (break and
+   * coefficients). The bootstrap draws around it so that each replicate can re-run the model
+   * selection (Efron 2014), instead of drawing around the selected line only.
+   */
+  alternative?: { breakSalinity: number; coef: [number, number, number, number] };
 }
 
-/** Significance of the two-phase vs straight-line F-test (documented choice). */
-export const TWO_PHASE_ALPHA = 0.05;
+/**
+ * Significance of the two-phase vs straight-line F-test: half of 0.05 (Bonferroni), shared with
+ * the quadratic F-test of the class decision (evidence.ts CURVATURE_ALPHA; documented choice).
+ */
+export const TWO_PHASE_ALPHA = 0.025;
 /** Break candidates on the grid before refinement. */
 const GRID = 24;
 /** Golden-section refinement steps around the best grid break. */
@@ -186,21 +195,29 @@ export function fitTwoPhase(
     syy += ds.ws[i]! * yi * yi;
   }
   if (n < 5 || rssLin <= 1e-18 * syy) return line;
-  // Candidate breaks: above the 2nd distinct station (≥ 2 landward), up to S_max.
-  let second = sMin;
-  for (let i = 0; i < n; i++)
-    if (xs[i]! > sMin) {
-      second = xs[i]!;
+  // Candidate breaks: above the 3rd distinct station (≥ 3 distinct salinities landward, so the
+  // landward curvature is never set by one station or by two near-tied ones), up to S_max.
+  // The cubic term needs a 4th distinct station landward of the break.
+  let third = Number.NaN;
+  let fourth = Number.NaN;
+  for (let i = 1, distinct = 1, prev = xs[0]!; i < n; i++) {
+    if (!(xs[i]! > prev)) continue;
+    prev = xs[i]!;
+    distinct++;
+    if (distinct === 3) third = prev;
+    else if (distinct === 4) {
+      fourth = prev;
       break;
     }
-  const lo = second + 1e-9 * range;
-  // The cubic term needs a 3rd station landward of the break.
-  const third = xs[2]!;
+  }
+  if (!(third < sMax)) return line;
+  const lo = third + 1e-9 * range;
+  if (!(fourth < sMax)) fourth = sMax;
   loadResponse(ds, y);
   let bestB = sMax;
   let best = Number.POSITIVE_INFINITY;
   let bestI = 0;
-  const tg = gridTerms(ds, lo, GRID, third);
+  const tg = gridTerms(ds, lo, GRID, fourth);
   for (let g = 0; g <= GRID; g++) {
     const b = lo + ((sMax - lo) * g) / GRID;
     const r = termsRss(ds, tg, g * TERMS, c);
@@ -217,8 +234,8 @@ export function fitTwoPhase(
   // Golden-section search: one new evaluation per step.
   let m1 = z - gr * (z - a);
   let m2 = a + gr * (z - a);
-  let r1 = breakRss(ds, m1, third < m1 ? 4 : 3, c);
-  let r2 = breakRss(ds, m2, third < m2 ? 4 : 3, c);
+  let r1 = breakRss(ds, m1, fourth < m1 ? 4 : 3, c);
+  let r2 = breakRss(ds, m2, fourth < m2 ? 4 : 3, c);
   for (let it = 0; it < REFINE; it++) {
     if (r1 < best) {
       best = r1;
@@ -233,13 +250,13 @@ export function fitTwoPhase(
       m2 = m1;
       r2 = r1;
       m1 = z - gr * (z - a);
-      r1 = breakRss(ds, m1, third < m1 ? 4 : 3, c);
+      r1 = breakRss(ds, m1, fourth < m1 ? 4 : 3, c);
     } else {
       a = m1;
       m1 = m2;
       r1 = r2;
       m2 = a + gr * (z - a);
-      r2 = breakRss(ds, m2, third < m2 ? 4 : 3, c);
+      r2 = breakRss(ds, m2, fourth < m2 ? 4 : 3, c);
     }
   }
   if (r1 < best) {
@@ -250,8 +267,21 @@ export function fitTwoPhase(
     best = r2;
     bestB = m2;
   }
+  // A station inside the final bracket: the RSS has a kink there, and on exact data its minimum
+  // sits on it (the golden section would stop a hair to one side).
+  const tol = z - a;
+  for (let i = 0; i < n; i++) {
+    const xi = xs[i]!;
+    if (xi < bestB - tol || xi <= lo) continue;
+    if (xi > bestB + tol) break;
+    const r = breakRss(ds, xi, fourth < xi ? 4 : 3, c);
+    if (r <= best) {
+      best = r;
+      bestB = xi;
+    }
+  }
   if (!Number.isFinite(best)) return line;
-  const k = third < bestB ? 4 : 3;
+  const k = fourth < bestB ? 4 : 3;
   best = fitAt(x, y, w, sMin, range, bestB, k, c);
   if (!Number.isFinite(best)) return line;
   const extra = k - 2 + 1;
@@ -265,7 +295,12 @@ export function fitTwoPhase(
       p = exactP ? fUpperP(F, extra, dfRes) : fPCached(F, extra, dfRes);
     }
   }
-  if (!(p < TWO_PHASE_ALPHA)) return { ...line, pCurvature: p };
+  if (!(p < TWO_PHASE_ALPHA)) {
+    line.pCurvature = p;
+    // The alternative is for the full-data fit's bootstrap; replicates (exactP false) never use it.
+    if (exactP) line.alternative = { breakSalinity: bestB, coef: [c[0]!, c[1]!, c[2]!, c[3]!] };
+    return line;
+  }
   return {
     breakSalinity: bestB,
     linear: false,

@@ -360,14 +360,14 @@ export function breakRss(d: TwoPhaseDesign, b: number, k: number, coef: Float64A
  * Design terms of the grid of candidate breaks lo + (S_max − lo)·g/G, g = 0…G (cached on the
  * design: the bootstrap's replicates share the grid).
  *
- * @param third salinity of the 3rd station (the cubic term needs it landward of the break)
+ * @param fourth salinity of the 4th distinct station (the cubic term needs it landward of the break)
  */
-export function gridTerms(d: TwoPhaseDesign, lo: number, G: number, third: number): Float64Array {
+export function gridTerms(d: TwoPhaseDesign, lo: number, G: number, fourth: number): Float64Array {
   if (d.grid && d.gridLo === lo && d.grid.length === (G + 1) * TERMS) return d.grid;
   const grid = new Float64Array((G + 1) * TERMS);
   for (let g = 0; g <= G; g++) {
     const b = lo + ((d.sMax - lo) * g) / G;
-    const k = third < b ? 4 : 3;
+    const k = fourth < b ? 4 : 3;
     const at = g * TERMS;
     breakTerms(d, b, k, grid, at);
     if (grid[at + T_FAST] === 1) continue;

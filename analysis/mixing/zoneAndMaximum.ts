@@ -4,8 +4,10 @@ export const ZONE_THRESHOLD = 0.05;
 /**
  * Reaction zone from the fitted curve. The reaction per unit salinity follows from
  * Eqs. 3–5: Q·dC*₀/dS = −Q·(S − S_r)·d²C/dS², so ρ(S) = −(S − S_r)·C''(S) (ρ < 0 removal).
- * The dominant sign is that of ∫ρ dS; the zone is the contiguous salinity interval
- * around the peak of that sign where ρ stays ≥ 5 % of the peak (documented choice).
+ * The zone's sign is the one asked for (the sign of the net change C*₀ − C₀, so the zone and
+ * the class never disagree), otherwise the dominant sign, that of ∫ρ dS; the zone is the
+ * contiguous salinity interval around the peak of that sign where ρ stays ≥ 5 % of the peak
+ * (documented choice). With a sign asked for and no ρ of that sign there is no zone.
  * When a straight seaward segment starts at S_b, the search is limited to S ≤ S_b and the
  * zone ends at S_b (conservative beyond it).
  *
@@ -14,6 +16,7 @@ export const ZONE_THRESHOLD = 0.05;
  * @param riverSalinity S_r
  * @param work optional scratch array of length ≥ grid.length
  * @param segmentStart S_b of the seaward linear segment, when there is one
+ * @param sign −1 for a removal zone, +1 for an addition zone; omitted: the dominant sign
  * @returns [from, to] salinity and kind, or undefined when there is no curvature
  * @see bibliography keys officer1979, kaulFroelich1984 (derived and checked numerically in tests/mixing).
  */
@@ -23,6 +26,7 @@ export function zoneFromCurve(
   riverSalinity: number,
   work?: Float64Array,
   segmentStart?: number,
+  sign?: -1 | 1,
 ): { from: number; to: number; kind: "removal" | "addition" } | undefined {
   let G = grid.length;
   if (segmentStart !== undefined) {
@@ -42,16 +46,16 @@ export function zoneFromCurve(
     }
   }
   if (!(maxAbs > 0)) return undefined;
-  const sign = total !== 0 ? Math.sign(total) : Math.sign(maxAbsSigned);
+  const sgn = sign ?? (total !== 0 ? Math.sign(total) : Math.sign(maxAbsSigned));
   let peak = 0;
-  for (let i = 1; i < G; i++) if (sign * rho[i]! > sign * rho[peak]!) peak = i;
-  const thr = ZONE_THRESHOLD * sign * rho[peak]!;
+  for (let i = 1; i < G; i++) if (sgn * rho[i]! > sgn * rho[peak]!) peak = i;
+  const thr = ZONE_THRESHOLD * sgn * rho[peak]!;
   if (!(thr > 0)) return undefined;
   let lo = peak;
   let hi = peak;
-  while (lo > 0 && sign * rho[lo - 1]! >= thr) lo--;
-  while (hi < G - 1 && sign * rho[hi + 1]! >= thr) hi++;
-  return { from: grid[lo]!, to: segmentStart ?? grid[hi]!, kind: sign < 0 ? "removal" : "addition" };
+  while (lo > 0 && sgn * rho[lo - 1]! >= thr) lo--;
+  while (hi < G - 1 && sgn * rho[hi + 1]! >= thr) hi++;
+  return { from: grid[lo]!, to: segmentStart ?? grid[hi]!, kind: sgn < 0 ? "removal" : "addition" };
 }
 
 /**

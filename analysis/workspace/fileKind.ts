@@ -7,18 +7,9 @@ import Papa from "papaparse";
 import { detectDialect, stripBom } from "../io/dialect.ts";
 import { suggestMapping } from "../io/suggestMapping.ts";
 
-/** File kinds readInputs reads. */
-export type InputFileKind = "surveyText" | "stationTable" | "surveyGeoJson" | "centerline" | "surveyNetcdf" | "unknown";
+import { FILE_KIND_LABELS, type InputFileKind } from "./fileKindLabels.ts";
 
-/** Plain-words names of the file kinds (messages, dashboard labels). */
-export const FILE_KIND_LABELS: Record<InputFileKind, string> = {
-  surveyText: "survey table",
-  stationTable: "station table",
-  surveyGeoJson: "survey points (GeoJSON)",
-  centerline: "channel centerline (GeoJSON)",
-  surveyNetcdf: "survey (netCDF)",
-  unknown: "not recognised",
-};
+export { FILE_KIND_LABELS, type InputFileKind };
 
 /** What readInputs expects a file to be, for messages about unrecognised content. */
 export const EXPECTED_FILE =

@@ -8,7 +8,7 @@ export interface CellScore {
   shape: string;
   design: SurveyDesign;
   surveys: number;
-  /** Surveys where analyzeConstituent threw or gave no C*₀. */
+  /** Surveys where analyzeConstituent threw or gave no C*₀ (class accuracy still counts the latter). */
   failures: number;
   effectiveBiasPct: number;
   effectiveRmsePct: number;
@@ -19,10 +19,14 @@ export interface CellScore {
   /** Point estimate outside its own interval (C*₀ or % change). */
   outsideOwnInterval: number;
   classAccuracy: number;
+  /** Share of surveys with the right class or a warning that the stations cannot establish it. */
+  classOrWarned: number;
   /** Removal vs addition right (conservative shapes: "conservative" given). */
   directionAccuracy: number;
   /** Share of surveys with the break within ±2 salinity units (undefined without a true break). */
   breakWithin2?: number;
+  /** Share of surveys with the break within ±2 or a `break-uncertain` warning saying it is not (the tool says so). */
+  breakWithin2OrWarned?: number;
   breakMedianError?: number;
   /** Share of surveys whose break interval covers the true break (a missing break counts as a miss). */
   breakCoverage?: number;
@@ -33,6 +37,9 @@ export interface CellScore {
   /** Mean reported river reference salinity. */
   referenceSalinity: number;
 }
+
+/** Warnings by which the tool says the stations cannot establish the class. */
+const CLASS_LIMIT_WARNINGS = new Set(["short-seaward-line", "reaction-reaches-mouth", "few-stations-in-zone"]);
 
 const covers = (e: Estimate | undefined, truth: number): boolean => !!e && e.lower <= truth && truth <= e.upper;
 const inside = (e: Estimate | undefined): boolean => !e || (e.lower <= e.value && e.value <= e.upper);
@@ -67,9 +74,12 @@ export function scoreCell(
     pCov = 0,
     outside = 0,
     cls = 0,
+    clsHonest = 0,
+    analysed = 0,
     dir = 0,
     failures = 0,
     brk = 0,
+    brkHonest = 0,
     bCov = 0,
     mCov = 0,
     mN = 0,
@@ -103,6 +113,13 @@ export function scoreCell(
       failures++;
       continue;
     }
+    // Class and direction over every analysed survey (also those whose % change is not determined).
+    analysed++;
+    if (r.class === shape.expectedClass) cls++;
+    if (r.class === shape.expectedClass || r.warnings.some((w) => CLASS_LIMIT_WARNINGS.has(w.code))) clsHonest++;
+    const removal = r.class === "removal" || r.class === "removal-then-conservative";
+    const addition = r.class === "addition" || r.class === "maximum-then-conservative";
+    if (shape.percent === 0 ? r.class === "conservative" : shape.percent < 0 ? removal : addition) dir++;
     const e = r.effectiveEndmember;
     const p = r.percentChange;
     if (!e || !p) {
@@ -115,15 +132,12 @@ export function scoreCell(
     if (covers(e, truth.effective)) eCov++;
     if (covers(p, truth.percent)) pCov++;
     if (!inside(e) || !inside(p)) outside++;
-    if (r.class === shape.expectedClass) cls++;
-    const removal = r.class === "removal" || r.class === "removal-then-conservative";
-    const addition = r.class === "addition" || r.class === "maximum-then-conservative";
-    if (shape.percent === 0 ? r.class === "conservative" : shape.percent < 0 ? removal : addition) dir++;
     if (truth.breakSalinity !== undefined) {
       const b = reportedBreak(r);
       const err = b === undefined ? Number.POSITIVE_INFINITY : Math.abs(b - truth.breakSalinity);
       bErr.push(err);
       if (err <= 2) brk++;
+      if (err <= 2 || r.warnings.some((w) => w.code === "break-uncertain")) brkHonest++;
       if (covers(r.breakSalinity, truth.breakSalinity)) bCov++;
     }
     if (truth.maximumSalinity !== undefined) {
@@ -152,9 +166,11 @@ export function scoreCell(
     effectiveCoverage: eCov / Math.max(1, ok),
     percentCoverage: pCov / Math.max(1, ok),
     outsideOwnInterval: outside,
-    classAccuracy: cls / Math.max(1, ok),
-    directionAccuracy: dir / Math.max(1, ok),
+    classAccuracy: cls / Math.max(1, analysed),
+    classOrWarned: clsHonest / Math.max(1, analysed),
+    directionAccuracy: dir / Math.max(1, analysed),
     breakWithin2: truth.breakSalinity !== undefined ? brk / Math.max(1, ok) : undefined,
+    breakWithin2OrWarned: truth.breakSalinity !== undefined ? brkHonest / Math.max(1, ok) : undefined,
     breakMedianError: median(bErr),
     breakCoverage: truth.breakSalinity !== undefined ? bCov / Math.max(1, ok) : undefined,
     maximumMedianError: median(mErr),

@@ -16,14 +16,14 @@ const em = (salinity: number, conc: number): Endmember => ({
 const A = CASES.caseA;
 const B = CASES.caseB;
 
-describe("theoretical dilution line (Liss 1976; mixing-methods.md §1.1 Eq. 1)", () => {
-  it("dilutionLine() slope and C_TDL(17.5) = 77.5000 for Si 150 → 5 µmol/kg (mixing-methods.md §7.2 case A)", () => {
+describe("theoretical dilution line (Liss 1976, Eq. 1)", () => {
+  it("dilutionLine() slope and C_TDL(17.5) = 77.5000 for Si 150 → 5 µmol/kg (Liss 1976 Eq. 1, derived Si case 150 → 5 µmol/kg)", () => {
     const line = dilutionLine(em(0, A.inputs.riverConc!), em(A.inputs.seaSalinity!, A.inputs.seaConc!), "µmol/kg");
     expectWithin(line.slope, A.expected.slope!, A.tol.slope!, "slope");
     expectWithin(dilutionAt(line, A.inputs.salinity!), A.expected.tdl!, A.tol.tdl!, "C_TDL(17.5)");
   });
 
-  it("dilutionLine() with river salinity 0.2 gives C_TDL(17.5) = 77.9167 (mixing-methods.md §7.2 case A)", () => {
+  it("dilutionLine() with river salinity 0.2 gives C_TDL(17.5) = 77.9167 (Liss 1976 Eq. 1, derived Si case 150 → 5 µmol/kg)", () => {
     const line = dilutionLine(
       em(A.inputs.riverSalinityAlt!, A.inputs.riverConc!),
       em(A.inputs.seaSalinity!, A.inputs.seaConc!),
@@ -37,7 +37,7 @@ describe("theoretical dilution line (Liss 1976; mixing-methods.md §1.1 Eq. 1)",
     );
   });
 
-  it("analyzeConstituent() with river override at S_r = 0.2 places the station at S = 17.5 on 77.9167 (mixing-methods.md §7.2 case A)", () => {
+  it("analyzeConstituent() with river override at S_r = 0.2 places the station at S = 17.5 on 77.9167 (Liss 1976 Eq. 1, derived Si case 150 → 5 µmol/kg)", () => {
     const s = [0.2, 5, 10, 17.5, 25, 30, 35];
     const line = dilutionLine(em(0.2, 150), em(35, 5), "µmol/kg");
     const r = analyzeConstituent(
@@ -52,7 +52,7 @@ describe("theoretical dilution line (Liss 1976; mixing-methods.md §1.1 Eq. 1)",
     expectWithin(d.deviation, 0, 1e-9, "conservative data deviate by 0");
   });
 
-  it("deviations() at S = 10 in the Fe flocculation curve: TDL 7.1443, ΔC = −6.0952, significant (mixing-methods.md §7.2 case B)", () => {
+  it("deviations() at S = 10 in the Fe flocculation curve: TDL 7.1443, ΔC = −6.0952, significant (derived Fe flocculation case C = 1 − 0.995·S/35 + 9·(1 − S/15)³, Boyle et al. 1974 tangent)", () => {
     const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), {
       name: "Fe",
       unit: "µmol/kg",

@@ -8,8 +8,8 @@ const B = CASES.caseB;
 const C = CASES.caseC;
 const dB = (s: number): number => (0.005 - 1) / 35 + (s < 15 ? (-27 / 15) * (1 - s / 15) ** 2 : 0);
 
-describe("effective river end-member by the tangent method (Boyle et al. 1974; mixing-methods.md §1.2 Eq. 3)", () => {
-  it("effectiveEndmemberAt() reproduces the local C*₀(S) table of the Fe flocculation curve (mixing-methods.md §7.2 case B) within 1e-6", () => {
+describe("effective river end-member by the tangent method (Boyle et al. 1974, Eq. 3)", () => {
+  it("effectiveEndmemberAt() reproduces the local C*₀(S) table of the Fe flocculation curve (derived Fe flocculation case C = 1 − 0.995·S/35 + 9·(1 − S/15)³, Boyle et al. 1974 tangent) within 1e-6", () => {
     B.inputs.salinity.forEach((s, i) => {
       expectWithin(
         effectiveEndmemberAt(caseBConc(s), dB(s), s, 0),
@@ -21,7 +21,7 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
     });
   });
 
-  it("effectiveEndmemberAt() two-point form (C_a·S_b − C_b·S_a)/(S_b − S_a) at S = 20 and 30 gives 1.000 (mixing-methods.md §7.2 case B)", () => {
+  it("effectiveEndmemberAt() two-point form (C_a·S_b − C_b·S_a)/(S_b − S_a) at S = 20 and 30 gives 1.000 (derived Fe flocculation case C = 1 − 0.995·S/35 + 9·(1 − S/15)³, Boyle et al. 1974 tangent)", () => {
     const [ca, cb] = [caseBConc(20), caseBConc(30)];
     const slope = (cb - ca) / 10;
     expectWithin(effectiveEndmemberAt(ca, slope, 20), 1, 1e-12, "two-point C*₀");
@@ -33,7 +33,7 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
     );
   });
 
-  it("analyzeConstituent() finds the seaward segment S ≥ 15 and C*₀ = 1.000000 µmol/kg within 1e-6 (Boyle et al. 1974; mixing-methods.md §7.2 case B)", () => {
+  it("analyzeConstituent() finds the seaward segment S ≥ 15 and C*₀ = 1.000000 µmol/kg within 1e-6 (Boyle et al. 1974; derived Fe flocculation case C = 1 − 0.995·S/35 + 9·(1 − S/15)³, Boyle et al. 1974 tangent)", () => {
     const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), {
       name: "Fe",
       unit: "µmol/kg",
@@ -48,7 +48,7 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
     expectWithin(r.class === "removal-then-conservative" ? 1 : 0, 1, 0, `class ${r.class}`);
   });
 
-  it("analyzeConstituent() fluxes with Q = 100 m³/s: 1000 / 100 / −900 mmol/s and 8.64 kmol/d, 3.154e6 mol/yr (mixing-methods.md §7.2 case B)", () => {
+  it("analyzeConstituent() fluxes with Q = 100 m³/s: 1000 / 100 / −900 mmol/s and 8.64 kmol/d, 3.154e6 mol/yr (derived Fe flocculation case C = 1 − 0.995·S/35 + 9·(1 − S/15)³, Boyle et al. 1974 tangent)", () => {
     const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), {
       name: "Fe",
       unit: "µmol/kg",
@@ -77,11 +77,11 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
       r.warnings.some((w) => w.code === "per-kg-as-per-litre") ? 1 : 0,
       1,
       0,
-      "per-kg shortcut is warned about (mixing-methods.md §0)",
+      "per-kg shortcut is warned about (common practice: per-kg vs per-L differ by the density, ≈ 2.5 % at S ≈ 35)",
     );
   });
 
-  it("analyzeConstituent() with densityKgM3 = 1025 scales per-kg fluxes by 1.025 (mixing-methods.md §0: 1 µmol/kg ≈ 1.025 µmol/L at S ≈ 35)", () => {
+  it("analyzeConstituent() with densityKgM3 = 1025 scales per-kg fluxes by 1.025 (1 µmol/kg ≈ 1.025 µmol/L at S ≈ 35, seawater density ≈ 1025 kg/m³, common practice)", () => {
     const r = analyzeConstituent(samplesOf(B.inputs.salinity, B.inputs.salinity.map(caseBConc)), {
       name: "Fe",
       unit: "µmol/kg",
@@ -92,7 +92,7 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
     expectWithinRel(r.flux!.grossRiver.value * 1000, 1025, 1e-5, "gross river [mmol/s]");
   });
 
-  it("percentChange() of case C: C*₀(35) = 88.75 from C(S) = 150 − 5.892857·S + 0.05·S² gives −40.83 % (mixing-methods.md §7.2 case C)", () => {
+  it("percentChange() of case C: C*₀(35) = 88.75 from C(S) = 150 − 5.892857·S + 0.05·S² gives −40.83 % (derived steady 1-D case C = 150 − 5.892857·S + 0.05·S², Boyle et al. 1974 Eqs. 3–5)", () => {
     const { a, b, c } = C.inputs as { a: number; b: number; c: number };
     const s = 35;
     const eff = effectiveEndmemberAt(a + b * s + c * s * s, b + 2 * c * s, s, 0);
@@ -101,7 +101,7 @@ describe("effective river end-member by the tangent method (Boyle et al. 1974; m
     expectWithin(a + b * 17.5 + c * 17.5 ** 2, C.expected.concAt17_5!, 1e-3, "C(17.5)");
   });
 
-  it("analyzeConstituent() on dense exact case C data (no linear seaward segment) uses the curve tangent at the mouth: C*₀ within 1 % of 88.75 (mixing-methods.md §7.2 case C)", () => {
+  it("analyzeConstituent() on dense exact case C data (no linear seaward segment) uses the curve tangent at the mouth: C*₀ within 1 % of 88.75 (derived steady 1-D case C = 150 − 5.892857·S + 0.05·S², Boyle et al. 1974 Eqs. 3–5)", () => {
     const s = Array.from({ length: 71 }, (_, i) => i * 0.5);
     const { a, b, c } = C.inputs as { a: number; b: number; c: number };
     const r = analyzeConstituent(

@@ -20,8 +20,8 @@ const profile = (days: number): ((s: number) => number) =>
   });
 const salinities = [0.1, 0.3, 0.6, 1, 2, 3, 4, 5, 6.5, 8, 10, 12, 14, 16, 18, 20, 22.5, 25, 27.5, 30, 32.5, 35];
 
-describe("river end-member variability mimics reactions (Loder & Reichard 1981; mixing-methods.md §1.5 and §7.2 case F)", () => {
-  it("an independent Crank–Nicolson transient solve reproduces the apparent C*₀ table 100.2 / 92.1 / 67.2 / 52.0 / 50.1 from a line fitted at S ≥ 20 (mixing-methods.md §7.2 case F)", () => {
+describe("river end-member variability mimics reactions (Loder & Reichard 1981; derived river-step case 100 → 50)", () => {
+  it("an independent Crank–Nicolson transient solve reproduces the apparent C*₀ table 100.2 / 92.1 / 67.2 / 52.0 / 50.1 from a line fitted at S ≥ 20 (Loder & Reichard 1981, derived river-step case: 100 → 50)", () => {
     F.expected.days.forEach((d, i) => {
       const f = profile(d);
       const s = Array.from({ length: 16 }, (_, k) => F.inputs.fitFromSalinity! + k);
@@ -40,7 +40,7 @@ describe("river end-member variability mimics reactions (Loder & Reichard 1981; 
     });
   });
 
-  it("analyzeConstituent() on the 2-day profile with a river history inside the flushing time warns (endmember-variability), lowers confidence and gives a % change interval spanning 0 instead of a confident +100 % (mixing-methods.md §7.2 case F)", () => {
+  it("analyzeConstituent() on the 2-day profile with a river history inside the flushing time warns (endmember-variability), lowers confidence and gives a % change interval spanning 0 instead of a confident +100 % (Loder & Reichard 1981, derived river-step case: 100 → 50)", () => {
     const f = profile(2);
     const r = analyzeConstituent(samplesOf(salinities, salinities.map(f)), {
       name: "tracer",
@@ -66,7 +66,7 @@ describe("river end-member variability mimics reactions (Loder & Reichard 1981; 
     );
   });
 
-  it("analyzeConstituent() warns when several river samples disagree (mixing-methods.md §1.5, Loder & Reichard 1981)", () => {
+  it("analyzeConstituent() warns when several river samples disagree (Loder & Reichard 1981)", () => {
     const f = profile(2);
     const s = [0.05, 0.1, 0.2, ...salinities.slice(3)];
     const c = [50, 75, 100, ...s.slice(3).map(f)];

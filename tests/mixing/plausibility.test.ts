@@ -17,7 +17,7 @@ function run(name: string, unit: string, spec: SyntheticSpec, seed: number) {
 }
 const inInterval = (v: number, e: { lower: number; upper: number }): number => (v >= e.lower && v <= e.upper ? 1 : 0);
 
-describe("plausibility against published estuarine behaviour (mixing-methods.md §2–4, §7.1)", () => {
+describe("plausibility against published estuarine behaviour (Boyle, Edmond & Sholkovitz 1977; Sholkovitz 1978; Stecher & Kogut 1999; Helder & de Vries 1986)", () => {
   it("Fe flocculation of ~92 % finished by S = 15 is classed removal-then-conservative with % change in −95…−88 (Boyle, Edmond & Sholkovitz 1977 ≈ −90 %; Sholkovitz 1978 95 %, complete by S 15–18)", () => {
     const r = run("Fe", "nmol/L", { c0: 1000, cStar: 75, cSea: 2, sBreak: 15 }, 21);
     expectWithin(r.class === "removal-then-conservative" ? 1 : 0, 1, 0, `class ${r.class}`);
@@ -82,7 +82,7 @@ describe("plausibility against published estuarine behaviour (mixing-methods.md 
     expectWithin(r.reactionZone === undefined ? 1 : 0, 1, 0, "no reaction zone");
   });
 
-  it("a high r² does not make Fe conservative: r² > 0.6 for the straight line yet class removal (mixing-methods.md §1.6 item 2, common practice)", () => {
+  it("a high r² does not make Fe conservative: r² > 0.6 for the straight line yet class removal (common practice)", () => {
     const samples = synthSamples({ c0: 1000, cStar: 75, cSea: 2, sBreak: 15 }, S, 0.03, 71);
     const x = samples.map((s) => s.salinity);
     const y = samples.map((s) => s.conc);

@@ -10,8 +10,8 @@ const U = Q! / A!;
 /** Salinity profile of case C: S = 35·exp(U·x/K), x ≤ 0 seaward-positive, mouth at 0. */
 const gradient = (s: number): number => (U * s) / K!;
 
-describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-methods.md §1.3 Eqs. 4–5)", () => {
-  it("reactionRate() at S = 17.5 is −1.5313e-4 mmol m⁻³ s⁻¹ in all three forms (mixing-methods.md §7.2 case C)", () => {
+describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979, Eqs. 4–5)", () => {
+  it("reactionRate() at S = 17.5 is −1.5313e-4 mmol m⁻³ s⁻¹ in all three forms (derived steady 1-D case C = 150 − 5.892857·S + 0.05·S², Boyle et al. 1974 Eqs. 3–5)", () => {
     const d2 = 2 * c!;
     const forms = [
       reactionRate({ salinity: 17.5, d2, dischargeM3s: Q, crossSectionM2: A, dispersionM2s: K }),
@@ -22,7 +22,7 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
     expectWithin(forms[0]! * 86400, C.expected.rateAt17_5PerDay!, 0.01, "per day");
   });
 
-  it("reactionRate() is negative (removal) for d²C/dS² > 0 and positive (production) for d²C/dS² < 0 (mixing-methods.md §0 sign convention)", () => {
+  it("reactionRate() is negative (removal) for d²C/dS² > 0 and positive (production) for d²C/dS² < 0 (Boyle et al. 1974 Eq. 4 sign: R > 0 production)", () => {
     expectWithin(
       Math.sign(reactionRate({ salinity: 10, d2: 0.1, dispersionM2s: 500, gradientPerM: 1e-3 })),
       -1,
@@ -37,7 +37,7 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
     );
   });
 
-  it("∫A·R dx over the case C estuary = Q·(C*₀(35) − C₀) = −6125 mmol/s by quadrature along x (mixing-methods.md §7.2 case C, Eq. 5)", () => {
+  it("∫A·R dx over the case C estuary = Q·(C*₀(35) − C₀) = −6125 mmol/s by quadrature along x (derived steady 1-D case C = 150 − 5.892857·S + 0.05·S², Boyle et al. 1974 Eqs. 3–5)", () => {
     const xLand = (K! / U) * Math.log(1e-6 / 35);
     const N = 200000;
     let integral = 0;
@@ -52,7 +52,7 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
     expectWithin((K! / U) * Math.log(2 / 35), C.expected.xAtS2M!, 1, "x(S = 2) [m]");
   });
 
-  it("analyzeConstituent() rate profile on dense case C data: R(17.5) within 3 %, Q·ΔC*₀ within 1 % and ∫A·R dx within 8 % of −6125 mmol/s (natural-spline end effect) (mixing-methods.md §7.2 case C)", () => {
+  it("analyzeConstituent() rate profile on dense case C data: R(17.5) within 3 %, Q·ΔC*₀ within 1 % and ∫A·R dx within 8 % of −6125 mmol/s (natural-spline end effect) (derived steady 1-D case C = 150 − 5.892857·S + 0.05·S², Boyle et al. 1974 Eqs. 3–5)", () => {
     const s = Array.from({ length: 141 }, (_, i) => i * 0.25);
     const r = analyzeConstituent(
       samplesOf(
@@ -78,7 +78,7 @@ describe("reaction rate from curvature (Boyle et al. 1974; Officer 1979; mixing-
     expectWithin(p.relativeDifference, 0, 0.08, "Eq. 5 integrated check");
   });
 
-  it("analyzeConstituent() derives dS/dx from the salinityToKmPoint callback when only K is given (mixing-methods.md Eq. 4, K form)", () => {
+  it("analyzeConstituent() derives dS/dx from the salinityToKmPoint callback when only K is given (Boyle et al. 1974; Officer 1979, Eq. 4, K form)", () => {
     const s = Array.from({ length: 141 }, (_, i) => i * 0.25);
     const toKm = (sal: number): number[] => [-((K! / U) * Math.log(Math.max(sal, 1e-9) / 35)) / 1000];
     const r = analyzeConstituent(

@@ -3,15 +3,15 @@ import { expectWithin } from "../helpers/tolerance.ts";
 import { molarFactor, toMolPerM3 } from "../../analysis/mixing/units.ts";
 import { defaultPrecision, sigmaOf } from "../../analysis/mixing/precision.ts";
 
-describe("concentration units for fluxes (mixing-methods.md §0)", () => {
-  it("toMolPerM3() makes 1 µmol/L = 1 mmol/m³ and 1 nmol/L = 1 µmol/m³ (mixing-methods.md §0, SI prefixes)", () => {
+describe("concentration units for fluxes (common practice: per-kg vs per-L differ by the density, ≈ 2.5 % at S ≈ 35)", () => {
+  it("toMolPerM3() makes 1 µmol/L = 1 mmol/m³ and 1 nmol/L = 1 µmol/m³ (SI prefixes, common practice)", () => {
     expectWithin(toMolPerM3("µmol/L", 1000)!, 1e-3, 1e-18, "µmol/L");
     expectWithin(toMolPerM3("umol/L", 1000)!, 1e-3, 1e-18, "umol/L spelling");
     expectWithin(toMolPerM3("nmol L-1", 1000)!, 1e-6, 1e-21, "nmol L-1");
     expectWithin(toMolPerM3("µM", 1000)!, 1e-3, 1e-18, "µM");
   });
 
-  it("toMolPerM3() converts per-kg with the density: 1 µmol/kg × 1025 kg/m³ = 1.025 mmol/m³ (mixing-methods.md §0)", () => {
+  it("toMolPerM3() converts per-kg with the density: 1 µmol/kg × 1025 kg/m³ = 1.025 mmol/m³ (common practice: per-kg vs per-L differ by the density, ≈ 2.5 % at S ≈ 35)", () => {
     expectWithin(toMolPerM3("µmol/kg", 1025)!, 1.025e-3, 1e-18, "µmol/kg at 1025 kg/m³");
   });
 

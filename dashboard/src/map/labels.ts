@@ -74,27 +74,35 @@ const SECTOR_DIR: Array<[number, number]> = [
   [-0.71, -0.71],
 ];
 
+/** How much farther than `gapEm` the last two anchors put a label, clear of a row of markers on the channel. */
+export const FAR_GAP_FACTOR = 4;
+
 /**
  * Anchors tried for a label wanting `sector`, best first: the sector and its two neighbours at
- * `gapEm` from the point, the same three twice as far out (where markers crowd the channel), then
- * the opposite side and its neighbours. Each anchor appears once (MapLibre tries each anchor once).
+ * `gapEm` from the point, the opposite side and its neighbours, then straight out on its own side
+ * and on the opposite side `FAR_GAP_FACTOR` times as far (near a crowded mouth the stations fill
+ * the channel, and a label beside its point would overlap them; out on the perpendicular it keeps
+ * its place in line with its point). Each anchor appears once (MapLibre tries each anchor once), so
+ * the far positions use the two anchors left over (those of the sectors at ±90°).
  */
 export function anchorsFor(sector: number, gapEm: number): VariableAnchorOffsetCollectionSpecification {
-  const order: Array<[number, number]> = [
-    [0, 1],
-    [1, 1],
-    [-1, 1],
-    [4, 1],
-    [3, 1],
-    [5, 1],
-    [2, 2.4],
-    [-2, 2.4],
+  /** [sector step from the preferred one, distance in gaps, anchor step from the sector]. */
+  const order: Array<[number, number, number]> = [
+    [0, 1, 0],
+    [1, 1, 0],
+    [-1, 1, 0],
+    [4, 1, 0],
+    [3, 1, 0],
+    [5, 1, 0],
+    [0, FAR_GAP_FACTOR, 2],
+    [4, FAR_GAP_FACTOR, 2],
   ];
   const out: Array<Anchor | [number, number]> = [];
-  for (const [d, far] of order) {
+  for (const [d, far, anchorStep] of order) {
     const s = (((sector + d) % 8) + 8) % 8;
     const [dx, dy] = SECTOR_DIR[s]!;
-    out.push(SECTOR_ANCHOR[s]!, [Number((dx * gapEm * far).toFixed(2)), Number((dy * gapEm * far).toFixed(2))]);
+    const anchor = SECTOR_ANCHOR[(s + anchorStep) % 8]!;
+    out.push(anchor, [Number((dx * gapEm * far).toFixed(2)), Number((dy * gapEm * far).toFixed(2))]);
   }
   return out as unknown as VariableAnchorOffsetCollectionSpecification;
 }

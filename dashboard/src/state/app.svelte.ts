@@ -9,7 +9,7 @@ import type { Survey } from "../../../analysis/index.ts";
 import { Selection } from "./selection.svelte.ts";
 import { Settings, type AnalysisSettings } from "./settings.svelte.ts";
 import { AnalysisResults } from "./results.svelte.ts";
-import { SavedWorkspace } from "./savedWorkspace.svelte.ts";
+import { SavedWorkspace, type WorkspaceIo } from "./savedWorkspace.svelte.ts";
 import { ImportFlow } from "./importFlow.svelte.ts";
 import { ArchiveState } from "../archive/archiveState.svelte.ts";
 import { memoryStore, type WorkspaceStore } from "./workspaceStore.ts";
@@ -131,12 +131,28 @@ export class AppState {
     return out;
   });
 
+  /**
+   * Starts the analysis worker now, so it downloads and compiles its code while the map starts
+   * (App calls this before mounting the map; otherwise the first job starts it).
+   */
+  startAnalysis(): void {
+    this.#analysisApi();
+  }
+
   /** The worker that analyses (started on first use). */
   #analysisApi(): RemoteApi {
     this.#analyser ??= this.#connect("brackline-analysis", (message) =>
       this.results.receive({ type: "error", message }),
     );
     return this.#analyser.api;
+  }
+
+  /** The workspace reader and writer, run in the analysis worker (which holds the schema library). */
+  workspaceIo(): WorkspaceIo {
+    return {
+      importWorkspace: (text) => this.#analysisApi().importWorkspace(text),
+      exportWorkspace: (doc) => this.#analysisApi().exportWorkspace($state.snapshot(doc) as typeof doc),
+    };
   }
 
   /** The worker that reads dropped files and underway logs (started on first use). */

@@ -5,13 +5,8 @@
  * channel from it.
  */
 import type { FeatureCollection } from "geojson";
-import type { ColumnMapping, ImportIssue, LayerChoice, Survey } from "../../../analysis/index.ts";
+import type { ColumnMapping, ImportIssue, LayerChoice, Survey, WorkspaceDocument } from "../../../analysis/index.ts";
 
-/**
- * The workspace reader and writer (with their schema validation) load when a workspace is first
- * opened or saved, not with the first page: the demo start needs neither.
- */
-const workspaceIo = () => import("../../../analysis/io/workspace.ts");
 import { demoBundle } from "../lib/demoData.ts";
 import { DEMO_CARBONATE } from "../lib/panelExtras.ts";
 import type { TextFile } from "../worker/protocol.ts";
@@ -29,6 +24,18 @@ export interface WorkspaceHost {
   readonly results: AnalysisResults;
   load(surveys: TextFile[], centerline: TextFile | undefined): Promise<void>;
   loadSurveys(surveys: Survey[], centerline: TextFile | undefined): Promise<void>;
+  /**
+   * The workspace reader and writer (analysis/io, with their schema validation). The app root runs
+   * them in the analysis worker, so neither the first page nor any other main-thread chunk carries
+   * the schema library.
+   */
+  workspaceIo(): WorkspaceIo;
+}
+
+/** Reads and writes workspace text (analysis/io importWorkspace and exportWorkspace, possibly in a worker). */
+export interface WorkspaceIo {
+  importWorkspace(text: string): Promise<{ workspace: WorkspaceDocument | undefined; issues: ImportIssue[] }>;
+  exportWorkspace(doc: WorkspaceDocument): Promise<string>;
 }
 
 /** Parses GeoJSON text for the basemap, or undefined. */
@@ -202,8 +209,7 @@ export class SavedWorkspace {
   /** The workspace as versioned JSON text. */
   async exportText(): Promise<string> {
     const doc = toWorkspaceDocument(this.parts(), this.now().toISOString());
-    const { exportWorkspace } = await workspaceIo();
-    return exportWorkspace(doc);
+    return this.host.workspaceIo().exportWorkspace(doc);
   }
 
   /** Saves the workspace in the store (once the user changed something and there are surveys to keep). */
@@ -227,8 +233,7 @@ export class SavedWorkspace {
 
   /** Opens a workspace text (a file, or the stored one); false when it cannot be read. */
   async openText(text: string): Promise<boolean> {
-    const { importWorkspace } = await workspaceIo();
-    const { workspace, issues } = importWorkspace(text);
+    const { workspace, issues } = await this.host.workspaceIo().importWorkspace(text);
     this.notices = issues;
     if (!workspace) return false;
     this.dirty = true;

@@ -6,8 +6,9 @@
 import { expose, transfer } from "comlink";
 import { createWorkerApi } from "./api.ts";
 import { pointsTransfer, underwayTransfer } from "./underwayEngine.ts";
+import { browserResultCache } from "./resultCache.ts";
 
-const api = createWorkerApi();
+const api = createWorkerApi(browserResultCache());
 
 expose({
   ...api,

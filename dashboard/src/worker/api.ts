@@ -4,7 +4,15 @@
  * (built once, here, by the one centerline reader) and the latest analyses; the main thread keeps
  * only a snapshot of the results and the selection. The same object runs in Node for tests.
  */
-import { channelOverlay, workspaceComparison, type WorkspaceInputs } from "../../../analysis/index.ts";
+import {
+  channelOverlay,
+  exportWorkspace,
+  importWorkspace,
+  workspaceComparison,
+  type Season,
+  type WorkspaceDocument,
+  type WorkspaceInputs,
+} from "../../../analysis/index.ts";
 import type { TextFile } from "./protocol.ts";
 import type { ImportChoice } from "./importFile.ts";
 import type { FileInspection, FileOutcome, ImportSource } from "./importTypes.ts";
@@ -21,7 +29,7 @@ import { readUnderway, viewUnderway } from "./underwayEngine.ts";
 import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
 import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
 import { archiveOf, type ArchiveAnswer } from "./archive.ts";
-import type { Season } from "../../../analysis/index.ts";
+import type { CachedAnalysis, ResultCache } from "./resultCache.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -46,8 +54,12 @@ function compareAll(analyses: ReadonlyArray<AnalysisResult | undefined>): Compar
   }
 }
 
-/** Builds the worker's API object with its own held state (one per worker instance). */
-export function createWorkerApi() {
+/**
+ * Builds the worker's API object with its own held state (one per worker instance). With a
+ * `cache` (the browser's, see resultCache.ts) a survey whose inputs, settings and engine are
+ * unchanged takes its stored result instead of being analysed again.
+ */
+export function createWorkerApi(cache?: ResultCache) {
   let latestRun = 0;
   /** What readInputs read (surveys, the channel built by the one centerline reader, problems). */
   let inputs: WorkspaceInputs = inputsOf([], undefined);
@@ -69,6 +81,17 @@ export function createWorkerApi() {
     }
   }
 
+  /** What one survey's result depends on besides the engine: the survey, its channel, choices and settings. */
+  function cacheParts(survey: WorkspaceInputs["surveys"][number], settings: AnalysisSettings): unknown {
+    return {
+      survey,
+      centerline: inputs.channel ? { geojson: inputs.channel.geojson, mouth: inputs.channel.mouth } : null,
+      stationTable: inputs.stationTable ?? null,
+      choices: inputs.choices,
+      settings,
+    };
+  }
+
   async function analyseAll(run: number, settings: AnalysisSettings, emit: (e: AnalysisEvent) => void) {
     const { surveys } = inputs;
     const total = surveys.length;
@@ -78,14 +101,20 @@ export function createWorkerApi() {
       if (run !== latestRun) return;
       try {
         const name = surveys[i].name;
-        const { analysis, overlay } = analyse(inputs, surveys[i], settings, (fraction, label) =>
-          emit({
-            type: "progress",
-            stage: `${name}: ${label}`,
-            done: Math.round((i + fraction) * 100),
-            total: total * 100,
-          }),
-        );
+        const key = cache ? await cache.key(cacheParts(surveys[i], settings)) : undefined;
+        const stored = key ? await cache!.get(key) : undefined;
+        if (run !== latestRun) return;
+        const { analysis, overlay }: CachedAnalysis =
+          stored ??
+          analyse(inputs, surveys[i], settings, (fraction, label) =>
+            emit({
+              type: "progress",
+              stage: `${name}: ${label}`,
+              done: Math.round((i + fraction) * 100),
+              total: total * 100,
+            }),
+          );
+        if (key && !stored) void cache!.put(key, { analysis, overlay });
         analyses[i] = analysis;
         emit({ type: "analysis", surveyIndex: i, analysis, overlay });
       } catch (error) {
@@ -185,6 +214,16 @@ export function createWorkerApi() {
     /** Speciation context at the focus station and along the mixing line (analysis/seawater). */
     speciation(request: SpeciationRequest): SpeciationModel {
       return speciationModel(request);
+    },
+
+    /** Reads and validates workspace text (analysis/io importWorkspace: migrations, problems as issues). */
+    importWorkspace(text: string): ReturnType<typeof importWorkspace> {
+      return importWorkspace(text);
+    },
+
+    /** Workspace text of a document, validated (analysis/io exportWorkspace; throws TypeError when invalid). */
+    exportWorkspace(doc: WorkspaceDocument): string {
+      return exportWorkspace(doc);
     },
 
     /** Recognises a dropped file and previews it. */

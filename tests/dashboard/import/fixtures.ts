@@ -1,5 +1,5 @@
 /** Small invented import files for the dashboard import tests (not measurements). */
-import type { Survey } from "../../../analysis/index.ts";
+import { exportWorkspace, importWorkspace, type Survey } from "../../../analysis/index.ts";
 import { createWorkerApi } from "../../../dashboard/src/worker/api.ts";
 import type { RemoteApi } from "../../../dashboard/src/worker/client.ts";
 import type { ImportSource } from "../../../dashboard/src/worker/importTypes.ts";
@@ -41,6 +41,10 @@ export function fakeApp(): FakeApp {
       app.results.surveys = surveys;
       return Promise.resolve();
     },
+    workspaceIo: () => ({
+      importWorkspace: (text: string) => Promise.resolve(importWorkspace(text)),
+      exportWorkspace: (doc: Parameters<typeof exportWorkspace>[0]) => Promise.resolve(exportWorkspace(doc)),
+    }),
     load() {
       app.started += 1;
       app.results.surveys = [];

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { decimateStations } from "../../../dashboard/src/map/decimate.ts";
 import { deviationScale, salinityScale } from "../../../dashboard/src/map/colour.ts";
-import { anchorsFor, labelLayers, sectorOf } from "../../../dashboard/src/map/labels.ts";
+import { FAR_GAP_FACTOR, anchorsFor, labelLayers, sectorOf } from "../../../dashboard/src/map/labels.ts";
 import { buildStyle } from "../../../dashboard/src/map/style.ts";
 import type { MapStation } from "../../../dashboard/src/map/mapData.ts";
 import { expectWithin } from "../../helpers/tolerance.ts";
@@ -66,6 +66,13 @@ describe("map labels sit beside the channel and are placed by priority (labels.t
       "top",
       "bottom",
     ]);
+  });
+
+  it("the last two anchors put the label straight out on its own side, then on the other, FAR_GAP_FACTOR gaps away", () => {
+    const anchors = anchorsFor(2, 0.75) as unknown as Array<string | [number, number]>;
+    const far = 0.75 * FAR_GAP_FACTOR;
+    expect(anchors[13]).toEqual([far, 0]);
+    expect(anchors[15]).toEqual([-far, 0]);
   });
 
   it("stations outrank km ticks, which outrank isohalines, which outrank place names (top layer placed first)", () => {

@@ -1,4 +1,4 @@
-// Loads tests/reference/mixing-cases.json (mixing-methods.md §7.2) and builds case samples.
+// Loads tests/reference/mixing-cases.json (derived check cases of Boyle et al. 1974 and Liss 1976) and builds case samples.
 import { readFileSync } from "node:fs";
 import type { MixingSample } from "../../../analysis/mixing/options.ts";
 
@@ -32,7 +32,7 @@ export function samplesOf(salinity: number[], conc: number[], prefix = "S"): Mix
   }));
 }
 
-/** Case B curve: C(S) = 1 + (0.005 − 1)·S/35 + 9·(1 − S/15)³ for S < 15 (mixing-methods.md §7.2). */
+/** Case B curve: C(S) = 1 + (0.005 − 1)·S/35 + 9·(1 − S/15)³ for S < 15 (derived check cases of Boyle et al. 1974 and Liss 1976). */
 export function caseBConc(s: number): number {
   return 1 + ((0.005 - 1) * s) / 35 + (s < 15 ? 9 * (1 - s / 15) ** 3 : 0);
 }

@@ -5,7 +5,7 @@ import type { MixingSample } from "../../../analysis/mixing/options.ts";
 /**
  * A constituent whose true effective end-member is known: a straight line from
  * (S_r, C*₀) to (S_s, C_s) plus a reaction term A·(1 − S/S_b)³ that vanishes with
- * its first two derivatives at S_b (same shape as mixing-methods.md §7.2 case B).
+ * its first two derivatives at S_b (same shape as the derived Fe flocculation case C = 1 − 0.995·S/35 + 9·(1 − S/15)³, Boyle et al. 1974 tangent).
  * C(S_r = 0) = C*₀ + A, so A = C₀ − C*₀ (A > 0 removal, A < 0 addition).
  */
 export interface SyntheticSpec {

@@ -1,5 +1,5 @@
 // Transient 1-D advection–dispersion of a conservative tracer after a river step
-// (mixing-methods.md §1.5 illustration / §7.2 case F), solved by Crank–Nicolson.
+// (Loder & Reichard 1981; derived river-step case 100 → 50), solved by Crank–Nicolson.
 
 /**
  * Concentration profile t seconds after the river value steps from `before` to `after`,
