@@ -34,6 +34,12 @@ export interface AppOptions {
 
 const NO_STRETCH: BrushedStretch = { km: [], paths: [] };
 
+/** Calls `f` after the next frame is drawn (or on the next task where there are no frames, e.g. Node). */
+function afterNextFrame(f: () => void): void {
+  if (typeof requestAnimationFrame === "function") requestAnimationFrame(() => setTimeout(f, 0));
+  else setTimeout(f, 0);
+}
+
 /** A line the draw tool opens in editing mode (a new object opens it again). */
 export interface DrawRequest {
   vertices: Array<[number, number]>;
@@ -161,13 +167,24 @@ export class AppState {
     return this.#reader.api;
   }
 
-  /** Sends one job to the analysis worker; its events fill the results until a newer job starts. */
+  /**
+   * Sends one job to the analysis worker; its events fill the results until a newer job starts.
+   * The survey on screen is analysed first; once it is drawn (the frame after its result, when the
+   * panels have sent their own requests) the worker goes on with the other surveys.
+   */
   run(job: AnalysisJob): Promise<void> {
     const id = ++this.#job;
     this.results.begin(job.kind === "load");
+    let firstDrawn = false;
     const onEvent = proxyCallback((event: Parameters<AnalysisResults["receive"]>[0]) => {
       if (id !== this.#job) return;
       this.results.receive(event);
+      if (event.type === "analysis" && !firstDrawn) {
+        firstDrawn = true;
+        afterNextFrame(() => {
+          if (id === this.#job) void this.#analyser?.api.resumeBackground();
+        });
+      }
       if (event.type === "loaded") {
         if (this.selection.surveyIndex >= event.surveys.length) this.selection.surveyIndex = 0;
         // Non-mixing variables (oxygen, chlorophyll...) are never the default constituent.
@@ -179,7 +196,7 @@ export class AppState {
       }
     });
     return this.#analysisApi()
-      .run(job, onEvent)
+      .run({ ...job, firstSurvey: this.selection.surveyIndex }, onEvent)
       .catch((error: unknown) => {
         if (id === this.#job) this.results.receive({ type: "error", message: String(error) });
       });
@@ -274,11 +291,15 @@ export class AppState {
     if (indices.length === this.results.surveys.length)
       return Promise.resolve({
         ...(this.results.comparison ? { comparison: this.results.comparison } : {}),
-        ...(this.results.comparisonReason ? { reason: this.results.comparisonReason } : {}),
+        ...(this.results.comparisonReason
+          ? { reason: this.results.comparisonReason }
+          : this.results.waitingText
+            ? { reason: this.results.waitingText }
+            : {}),
       });
     if (indices.length < 2) return Promise.resolve({ reason: "Choose two or more surveys to compare them." });
     if (!indices.every((i) => this.results.analyses[i] !== undefined) || !this.#analyser)
-      return Promise.resolve({ reason: "Waiting for the analysis of the chosen surveys…" });
+      return Promise.resolve({ reason: this.results.waitingText ?? "Waiting for the analysis of the chosen surveys…" });
     return this.#analyser.api.compare([...indices]);
   }
 
