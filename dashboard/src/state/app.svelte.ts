@@ -60,6 +60,10 @@ export class AppState {
   /** Counts analysis jobs; events of a superseded job are dropped. */
   #job = 0;
   #brushAsk = 0;
+  /** false until the map's first idle when the background surveys wait for it; undefined when they do not. */
+  #mapIdle: boolean | undefined;
+  /** Lets the running job's background surveys start once the map is idle. */
+  #onMapIdle: (() => void) | undefined;
   /** The channel stretch where salinity lies in the brushed range (placed by the worker). */
   brushedStretch = $state.raw<BrushedStretch>(NO_STRETCH);
   /** Everything the map draws. */
@@ -141,8 +145,21 @@ export class AppState {
    * Starts the analysis worker now, so it downloads and compiles its code while the map starts
    * (App calls this before mounting the map; otherwise the first job starts it).
    */
-  startAnalysis(): void {
+  startAnalysis(options: { untilMapIdle?: boolean } = {}): void {
+    if (options.untilMapIdle) this.#mapIdle ??= false;
     this.#analysisApi();
+  }
+
+  /**
+   * The map has drawn its first view and gone idle. With `startAnalysis({ untilMapIdle: true })`
+   * the other surveys wait for this (as well as for the survey on screen to be drawn), so on a
+   * small machine they do not take the processor from the map's first frames.
+   */
+  mapIdle(): void {
+    this.#mapIdle = true;
+    const resume = this.#onMapIdle;
+    this.#onMapIdle = undefined;
+    resume?.();
   }
 
   /** The worker that analyses (started on first use). */
@@ -170,7 +187,8 @@ export class AppState {
   /**
    * Sends one job to the analysis worker; its events fill the results until a newer job starts.
    * The survey on screen is analysed first; once it is drawn (the frame after its result, when the
-   * panels have sent their own requests) the worker goes on with the other surveys.
+   * panels have sent their own requests) and, if asked, the map is idle, the worker goes on with the
+   * other surveys.
    */
   run(job: AnalysisJob): Promise<void> {
     const id = ++this.#job;
@@ -182,7 +200,11 @@ export class AppState {
       if (event.type === "analysis" && !firstDrawn) {
         firstDrawn = true;
         afterNextFrame(() => {
-          if (id === this.#job) void this.#analyser?.api.resumeBackground();
+          const resume = () => {
+            if (id === this.#job) void this.#analyser?.api.resumeBackground();
+          };
+          if (this.#mapIdle !== false) resume();
+          else this.#onMapIdle = resume;
         });
       }
       if (event.type === "loaded") {

@@ -37,7 +37,7 @@ function yieldToQueue(): Promise<void> {
 }
 
 /** Longest wait, after the first survey of a job, for the main thread's `resumeBackground`. */
-const FIRST_VIEW_WAIT_MS = 1000;
+const FIRST_VIEW_WAIT_MS = 3000;
 
 function messageOf(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
@@ -101,7 +101,7 @@ export function createWorkerApi(cache?: ResultCache) {
   /**
    * Waits, after the first survey of a job, until the main thread has drawn it and sent the
    * requests its first view makes (speciation, brushed stretch), so those are answered before the
-   * background surveys hold the worker; at most FIRST_VIEW_WAIT_MS.
+   * background surveys hold the worker; at most FIRST_VIEW_WAIT_MS (the map's first idle may be part of it).
    */
   function firstViewGate(): Promise<void> {
     return new Promise((resolve) => {

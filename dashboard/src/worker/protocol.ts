@@ -61,7 +61,7 @@ export type SourceFile = TextFile | { name: string; bytes: Uint8Array };
 
 /**
  * Which survey a job analyses first. With `firstSurvey` (the survey on screen) the worker posts it,
- * then waits for `resumeBackground` (the first view drawn; at most a second) before the others;
+ * then waits for `resumeBackground` (the first view drawn; at most 3 s) before the others;
  * without it the surveys are analysed in order without a pause.
  */
 export interface JobOrder {
