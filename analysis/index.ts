@@ -441,7 +441,7 @@ export { stripControl } from "./output/terminalText.ts";
 // --- end output ---
 
 // --- workspace ---
-export { readInputs } from "./workspace/readInputs.ts";
+export { readInputs, readStationTableFile, readSurveyFileAs, type PreReadFiles } from "./workspace/readInputs.ts";
 export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
 export { plottedObservations, surveyObservations } from "./workspace/observations.ts";
 export type { ObservationPoint } from "./workspace/observations.ts";

@@ -1,7 +1,14 @@
 /** The CLI's one way from files on disk to results: read the files, call readInputs, report, check. */
 import { basename } from "node:path";
 import type { CommandIo } from "./command.ts";
-import type { ImportIssue, InputFile, InputFileKind, WorkspaceInputs } from "../analysis/index.ts";
+import type {
+  ImportIssue,
+  InputChoices,
+  InputFile,
+  InputFileKind,
+  PreReadFiles,
+  WorkspaceInputs,
+} from "../analysis/index.ts";
 import { EXPECTED_FILE, readInputs } from "../analysis/index.ts";
 import { InputError } from "./exitCodes.ts";
 import { readBytes } from "./files.ts";
@@ -27,13 +34,11 @@ export function describeImport(inputs: WorkspaceInputs): string {
   return lines.join("\n");
 }
 
-/**
- * Reads the survey files given on the command line (any kind the dashboard reads), the station table
- * (`--stations`) and the centerline (`--centerline`) through readInputs.
- *
- * @throws InputError (exit 2) for an unreadable or unrecognised file, an unusable centerline or no survey
- */
-export function loadWorkspace(paths: readonly string[], values: OptionValues, io: CommandIo): WorkspaceInputs {
+/** The files named on the command line (station table, surveys, centerline) and the readInputs choices. */
+export function workspaceFiles(
+  paths: readonly string[],
+  values: OptionValues,
+): { files: InputFile[]; choices: InputChoices } {
   const choices = inputChoices(values);
   if (paths.length === 0) throw new InputError("no survey file given");
   const kindByFile: Record<string, InputFileKind> = {};
@@ -47,7 +52,25 @@ export function loadWorkspace(paths: readonly string[], values: OptionValues, io
     if (kind) kindByFile[name] = kind;
     return { name, content: readBytes(path, what) };
   });
-  const inputs = readInputs(files, { ...choices, kindByFile });
+  return { files, choices: { ...choices, kindByFile } };
+}
+
+/**
+ * Reads the survey files given on the command line (any kind the dashboard reads), the station table
+ * (`--stations`) and the centerline (`--centerline`) through readInputs.
+ *
+ * @param read the files and choices of {@link workspaceFiles} with the survey files already read on
+ *   worker threads (cli/archive/parallelRead.ts); default: read everything here
+ * @throws InputError (exit 2) for an unreadable or unrecognised file, an unusable centerline or no survey
+ */
+export function loadWorkspace(
+  paths: readonly string[],
+  values: OptionValues,
+  io: CommandIo,
+  read?: { files: InputFile[]; choices: InputChoices; preRead: PreReadFiles },
+): WorkspaceInputs {
+  const { files, choices } = read ?? workspaceFiles(paths, values);
+  const inputs = readInputs(files, choices, read?.preRead);
   io.err(describeImport(inputs));
   const unknown = inputs.files.find((f) => f.kind === "unknown");
   if (unknown) {

@@ -63,6 +63,16 @@ const COMMA_DECIMAL = /^[+-]?\d+,\d+$/;
  * @returns the detected dialect; "," and decimal point when nothing better is found
  */
 export function detectDialect(sample: string): TextDialect {
+  // A file's head is examined by several readers (kind, mapping, rows): the last answer is kept.
+  if (lastDialect !== undefined && lastDialect.sample === sample) return { ...lastDialect.dialect };
+  const dialect = detectDialectOf(sample);
+  lastDialect = { sample, dialect };
+  return { ...dialect };
+}
+
+let lastDialect: { sample: string; dialect: TextDialect } | undefined;
+
+function detectDialectOf(sample: string): TextDialect {
   const text = stripBom(sample);
   let best = ",";
   let bestScore = -1;

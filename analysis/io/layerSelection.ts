@@ -125,9 +125,10 @@ export function selectLayer(
   if (choice.kind === "all") return { stations: [...rows], issues: [] };
   const groups = new Map<string, ImportedStation[]>();
   for (const r of rows) {
-    const g = groups.get(groupKey(r)) ?? [];
-    g.push(r);
-    groups.set(groupKey(r), g);
+    const key = groupKey(r);
+    const g = groups.get(key);
+    if (g) g.push(r);
+    else groups.set(key, [r]);
   }
   const stations: ImportedStation[] = [];
   const issues: ImportIssue[] = [];

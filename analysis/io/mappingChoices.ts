@@ -10,10 +10,25 @@ import { z } from "zod";
 export function headOfText(text: string, rows = 50): { headers: string[]; sample: string[][] } {
   const clean = stripBom(text);
   const cut = clean.slice(0, 262144);
-  const records: string[][] = [];
-  parseDelimitedText(cut.slice(0, cut.lastIndexOf("\n") + 1 || cut.length), detectDialect(cut.slice(0, 65536)), (r) => {
-    if (records.length <= rows) records.push(r.fields);
-  });
+  const dialect = detectDialect(cut.slice(0, 65536));
+  const head = (part: string): { records: string[][]; total: number } => {
+    const records: string[][] = [];
+    let total = 0;
+    parseDelimitedText(part, dialect, (r) => {
+      total++;
+      if (records.length <= rows) records.push(r.fields);
+    });
+    return { records, total };
+  };
+  // First the first 2·(rows + 2) lines only: when they hold more records than are kept, every kept
+  // record ended before the cut, so they are the records the longer parse below gives.
+  let end = -1;
+  for (let i = 0; i < 2 * (rows + 2) && (i === 0 || end >= 0); i++) end = cut.indexOf("\n", end + 1);
+  const quick = end >= 0 ? head(cut.slice(0, end + 1)) : undefined;
+  const records =
+    quick && quick.total >= rows + 2
+      ? quick.records
+      : head(cut.slice(0, cut.lastIndexOf("\n") + 1 || cut.length)).records;
   return { headers: (records[0] ?? []).map((h) => h.trim()), sample: records.slice(1) };
 }
 

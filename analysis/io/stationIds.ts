@@ -14,6 +14,18 @@ export interface NormalisedStationId {
  * @returns the comparable id and the list of changes made
  */
 export function normaliseStationId(raw: string): NormalisedStationId {
+  // Readers ask for the same few ids once per row and step: answers are kept (a copy is returned).
+  const known = NORMALISED.get(raw);
+  if (known !== undefined) return { id: known.id, changes: [...known.changes] };
+  const out = normalise(raw);
+  if (NORMALISED.size >= 4096) NORMALISED.clear();
+  NORMALISED.set(raw, { id: out.id, changes: [...out.changes] });
+  return out;
+}
+
+const NORMALISED = new Map<string, NormalisedStationId>();
+
+function normalise(raw: string): NormalisedStationId {
   const changes: string[] = [];
   let id = raw.trim().replace(/\s+/g, " ");
   if (id !== raw) changes.push("white space");

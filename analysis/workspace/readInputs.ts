@@ -32,6 +32,47 @@ function readSurveyFile(file: InputFile, kind: InputFileKind, options: ReadSurve
   return kind === "surveyGeoJson" ? readGeoJsonPoints(text, options) : readSurveyText(text, options);
 }
 
+/** The station table of a file as readInputs reads it (the file's saved mapping applied). */
+export function readStationTableFile(file: InputFile, choices: InputChoices = {}): StationTable {
+  const mapping = choices.mappingByFile?.[file.name];
+  return readStationTable(decodeText(file.content), { fileName: file.name, ...(mapping ? { mapping } : {}) });
+}
+
+/**
+ * One survey file read exactly as readInputs reads it (same options from the choices and the station
+ * table), so a caller may read files elsewhere (the CLI's worker threads) and hand the results to
+ * readInputs as `preRead`.
+ *
+ * @param kind the file's kind (a survey kind: surveyText, surveyGeoJson or surveyNetcdf)
+ */
+export function readSurveyFileAs(
+  file: InputFile,
+  kind: InputFileKind,
+  choices: InputChoices = {},
+  stationTable?: StationTable,
+  onProgress?: (fraction: number) => void,
+): ImportResult {
+  const mapping = choices.mappingByFile?.[file.name] ?? (kind === "surveyText" ? choices.mapping : undefined);
+  return readSurveyFile(file, kind, {
+    fileName: file.name,
+    ...(mapping ? { mapping } : {}),
+    ...(stationTable ? { stationTable } : {}),
+    ...(choices.layer ? { layer: choices.layer } : {}),
+    ...(choices.unitOverrides ? { unitOverrides: choices.unitOverrides } : {}),
+    ...(choices.dischargeM3s !== undefined ? { riverDischargeM3s: choices.dischargeM3s } : {}),
+    ...(onProgress ? { onProgress } : {}),
+  });
+}
+
+/**
+ * A survey file already read by {@link readSurveyFileAs} (with its kind and, optionally, its
+ * columnReport for the file's report), keyed by file name.
+ */
+export type PreReadFiles = ReadonlyMap<
+  string,
+  { kind: InputFileKind; result?: ImportResult; columns?: ReturnType<typeof columnReport> }
+>;
+
 /**
  * Reads input files into surveys and a channel with one file-kind dispatch: delimited text, GeoJSON
  * points and CF-netCDF are surveys; a delimited table with places but nothing measured is a station
@@ -41,10 +82,15 @@ function readSurveyFile(file: InputFile, kind: InputFileKind, options: ReadSurve
  *
  * @param files names and contents (bytes or text)
  * @param choices mapping, unit overrides, layer, mouth, kinds given by the user, off-channel distance, discharge
+ * @param preRead files already read elsewhere with {@link readSurveyFileAs} (their kind and result are used as given)
  * @returns surveys, channel, station table, per-file reports, issues and the import summary
  * @throws TypeError when files is not an array of { name, content } (caller mistake)
  */
-export function readInputs(files: readonly InputFile[], choices: InputChoices = {}): WorkspaceInputs {
+export function readInputs(
+  files: readonly InputFile[],
+  choices: InputChoices = {},
+  preRead?: PreReadFiles,
+): WorkspaceInputs {
   if (!Array.isArray(files)) throw new TypeError(`readInputs(): files must be an array, got ${typeof files}`);
   for (const [i, f] of files.entries())
     if (!f || typeof f.name !== "string" || (typeof f.content !== "string" && !(f.content instanceof Uint8Array)))
@@ -53,7 +99,7 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
   const issues: ImportIssue[] = [];
   const notices: WorkspaceInputs["notices"] = [];
   const kinds = files.map((f) => {
-    const given = choices.kindByFile?.[f.name];
+    const given = choices.kindByFile?.[f.name] ?? preRead?.get(f.name)?.kind;
     if (given) return given;
     const { kind, reason } = detectFileKind(f.content);
     if (kind === "unknown") issues.push(fileIssue(f.name, reason ?? "", EXPECTED_FILE));
@@ -69,9 +115,8 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
       issues.push(fileIssue(f.name, "", `one station table (already read ${stationFile})`));
       return;
     }
-    const mapping = choices.mappingByFile?.[f.name];
     stationFile = f.name;
-    stationTable = readStationTable(decodeText(f.content), { fileName: f.name, ...(mapping ? { mapping } : {}) });
+    stationTable = readStationTableFile(f, choices);
     appendAll(issues, stationTable.issues);
     reports[i]!.mapping = stationTable.mapping;
   });
@@ -79,18 +124,17 @@ export function readInputs(files: readonly InputFile[], choices: InputChoices = 
   const surveyIdx = files.flatMap((_, i) => (kinds[i]!.startsWith("survey") ? [i] : []));
   const results = surveyIdx.map((i, n) => {
     const f = files[i]!;
-    const mapping = choices.mappingByFile?.[f.name] ?? (kinds[i] === "surveyText" ? choices.mapping : undefined);
-    const r = readSurveyFile(f, kinds[i]!, {
-      fileName: f.name,
-      ...(mapping ? { mapping } : {}),
-      ...(stationTable ? { stationTable } : {}),
-      ...(choices.layer ? { layer: choices.layer } : {}),
-      ...(choices.unitOverrides ? { unitOverrides: choices.unitOverrides } : {}),
-      ...(choices.dischargeM3s !== undefined ? { riverDischargeM3s: choices.dischargeM3s } : {}),
-      ...(onProgress ? { onProgress: (x: number) => onProgress((n + x) / surveyIdx.length) } : {}),
-    });
+    const r =
+      preRead?.get(f.name)?.result ??
+      readSurveyFileAs(
+        f,
+        kinds[i]!,
+        choices,
+        stationTable,
+        onProgress ? (x: number) => onProgress((n + x) / surveyIdx.length) : undefined,
+      );
     Object.assign(reports[i]!, { surveys: r.surveys.map((s) => s.name), summary: r.summary, mapping: r.mapping });
-    Object.assign(reports[i]!, columnReport(f, kinds[i]!, r.mapping));
+    Object.assign(reports[i]!, preRead?.get(f.name)?.columns ?? columnReport(f, kinds[i]!, r.mapping));
     appendAll(issues, r.issues);
     return r;
   });

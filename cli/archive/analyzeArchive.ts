@@ -8,17 +8,23 @@ import type { CommandIo } from "../command.ts";
 import type { Survey, SurveyAnalysis } from "../../analysis/index.ts";
 import { SurveyCache, surveyCacheKey } from "./surveyCache.ts";
 import { surveyTaskHandler, type SurveySetup } from "./surveyTask.ts";
-import { CancelledError, runPool } from "./workerPool.ts";
+import { CancelledError, runPool, startWorkers, type StartedWorkers } from "./workerPool.ts";
 
 /** Options of {@link analyzeArchive}. */
 export interface ArchiveRunOptions {
-  /** Worker threads (default: available parallelism, at most the number of surveys); 0 = this thread only. */
+  /**
+   * Threads that analyse, this one included (default: available parallelism, at most the number of
+   * surveys): n ≥ 2 is this thread and n − 1 worker threads taking surveys from one queue; 0 or 1 =
+   * this thread only.
+   */
   threads?: number;
   /** Cache directory; undefined = no cache. */
   cacheDir?: string;
   io: CommandIo;
   /** Cancels the run (default: a SIGINT handler installed for the run). */
   signal?: AbortSignal;
+  /** Worker threads started before the inputs were read ({@link startSurveyWorkers}); ended by the run. */
+  started?: StartedWorkers;
 }
 
 /** What {@link analyzeArchive} did, for messages and the bench. */
@@ -31,8 +37,46 @@ export interface ArchiveRunStats {
   taskSeconds: number;
 }
 
-const workerUrl = (): URL =>
+/** The worker script of the survey pool (the build's JavaScript, or a tsx entry from the TypeScript sources). */
+export const surveyWorkerUrl = (): URL =>
   new URL(import.meta.url.endsWith(".ts") ? "./surveyWorkerTs.js" : "./surveyWorker.js", import.meta.url);
+
+/**
+ * Starts the survey worker threads now (before reading the inputs, so loading their code overlaps
+ * the reading); pass them to {@link analyzeArchive} as `started`.
+ */
+export function startSurveyWorkers(threads: number): StartedWorkers {
+  return startWorkers(surveyWorkerUrl(), threads);
+}
+
+/**
+ * Relative cost of analysing a survey, for largest-first scheduling: the bootstrap dominates, so
+ * the count of (station, mixing constituent) values, plus the stations for the rest.
+ */
+export function surveyCost(survey: Survey): number {
+  const tracers = survey.constituents.filter((c) => c.kind !== "nonMixing").map((c) => c.name);
+  let values = 0;
+  for (const st of survey.stations)
+    for (const name of tracers) {
+      const cell = st.values[name];
+      if (cell && Number.isFinite(cell.value)) values++;
+    }
+  return values * 100 + survey.stations.length;
+}
+
+/** The cache key of every survey of a run. */
+function cacheKeys(surveys: readonly Survey[], setup: SurveySetup): string[] {
+  const network = setup.inputs.channel?.network;
+  const channel = network
+    ? createHash("sha256")
+        .update(JSON.stringify({ ...network, segmentIndexData: undefined }))
+        .update(setup.inputs.channel!.mouth.statement)
+        .digest("hex")
+    : "none";
+  return surveys.map((survey) =>
+    surveyCacheKey({ survey, channel, settings: setup.settings, offChannelM: setup.inputs.choices.offChannelM }),
+  );
+}
 
 /**
  * Analyses the set-up's surveys in parallel; results come back in survey order.
@@ -46,27 +90,21 @@ export async function analyzeArchive(
   const t0 = performance.now();
   const { surveys, ...setup } = input;
   const cache = new SurveyCache(o.cacheDir);
-  const network = setup.inputs.channel?.network;
-  const channel = network
-    ? createHash("sha256")
-        .update(JSON.stringify({ ...network, segmentIndexData: undefined }))
-        .update(setup.inputs.channel!.mouth.statement)
-        .digest("hex")
-    : "none";
-  const keys = surveys.map((survey) =>
-    surveyCacheKey({ survey, channel, settings: setup.settings, offChannelM: setup.inputs.choices.offChannelM }),
-  );
+  // Keys (a hash of each survey, the channel, the settings and the analysis code) only with a cache.
+  const keys: Array<string | undefined> = o.cacheDir ? cacheKeys(surveys, setup) : surveys.map(() => undefined);
   const out = new Array<SurveyAnalysis>(surveys.length);
   const todo: number[] = [];
   keys.forEach((k, i) => {
-    const hit = cache.get<SurveyAnalysis>(k);
+    const hit = k === undefined ? undefined : cache.get<SurveyAnalysis>(k);
     if (hit) out[i] = hit;
     else todo.push(i);
   });
   const n = surveys.length;
-  const threads = Math.min(o.threads ?? availableParallelism(), todo.length);
+  // One survey left to analyse is faster here than on a thread that must first load the code.
+  const asked = o.threads ?? (o.started ? o.started.workers.length + 1 : availableParallelism());
+  const threads = todo.length < 2 || asked < 2 ? 0 : Math.min(asked, todo.length);
   o.io.err(
-    `archive: ${n} surveys, ${n - todo.length} from the cache, ${todo.length} to analyse on ${threads <= 0 ? "this thread" : `${threads} worker thread${threads === 1 ? "" : "s"}`}`,
+    `archive: ${n} surveys, ${n - todo.length} from the cache, ${todo.length} to analyse on ${threads <= 0 ? "this thread" : `${threads} threads (this one and ${threads - 1} worker thread${threads === 2 ? "" : "s"})`}`,
   );
   const controller = new AbortController();
   const onSigint = () => controller.abort();
@@ -76,18 +114,20 @@ export async function analyzeArchive(
   let taskSeconds = 0;
   try {
     await runPool({
-      workerUrl: workerUrl(),
-      threads,
+      workerUrl: surveyWorkerUrl(),
+      threads: Math.max(0, threads - 1),
+      alsoHere: threads >= 2,
+      ...(o.started ? { started: o.started } : {}),
       setup,
       tasks: todo.map((index) => ({ survey: surveys[index]! })),
-      cost: (t) => t.survey.stations.length * Math.max(1, t.survey.constituents.length),
+      cost: (t) => surveyCost(t.survey),
       inline: surveyTaskHandler,
       signal,
       onResult: (ti, result, taskMs) => {
         taskSeconds += taskMs / 1000;
         const i = todo[ti]!;
         out[i] = result;
-        cache.set(keys[i]!, result);
+        if (keys[i] !== undefined) cache.set(keys[i], result);
         done++;
         o.io.err(`[${n - todo.length + done}/${n}] ${result.survey.name} analysed (${(taskMs / 1000).toFixed(2)} s)`);
       },

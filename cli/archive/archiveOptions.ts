@@ -20,7 +20,7 @@ export function seasonsOption(text: string | undefined): Season[] | undefined {
   }
 }
 
-/** Worker threads from `--threads n` (default: available parallelism); 0 = analyse on the main thread. */
+/** Threads from `--threads n`, this one included (default: available parallelism); 0 or 1 = this thread only. */
 export function threadsOption(text: string | undefined): number {
   if (text === undefined) return availableParallelism();
   if (!/^\s*\d+\s*$/.test(text) || Number(text) > 256)

@@ -9,6 +9,7 @@ import { analyzeArchive } from "./analyzeArchive.ts";
 import { surveySetup } from "./surveyTask.ts";
 import { cacheDirOption, dischargeFromTable, seasonsOption, threadsOption } from "./archiveOptions.ts";
 import { archiveCsv, archiveJson } from "./archiveOutput.ts";
+import { stopWorkers, type StartedWorkers } from "./workerPool.ts";
 
 /** Up to this many surveys the JSON also carries the two-survey comparison against the first. */
 export const ARCHIVE_COMPARISON_MAX = 4;
@@ -27,7 +28,7 @@ export const ARCHIVE_HELP = `With three or more surveys (an archive): series per
 river discharge, month and season, and year on year (README: series[], intrusion[]).
   --seasons <name=Mon-Mon,...>  seasons for summaries (default meteorological winter/spring/summer/autumn)
   --discharge-table <flows.csv> daily discharge (date, m³/s); each survey takes its day or the nearest earlier day
-  --threads <n>                 worker threads (default: all cores; 0 = main thread only)
+  --threads <n>                 threads, this one included (default: all cores; 0 or 1 = this thread only)
   --cache-dir <dir>             per-survey result cache (default ~/.cache/brackline/surveys)
   --no-cache                    analyse every survey again, store nothing
   Ctrl+C cancels; finished surveys stay cached.`;
@@ -43,26 +44,31 @@ export async function compareArchive(
   values: ArchiveCompareValues,
   format: "json" | "csv",
   io: CommandIo,
+  started?: StartedWorkers,
 ): Promise<string> {
-  const seasons = seasonsOption(values.seasons);
-  const threads = threadsOption(values.threads);
-  const cacheDir = cacheDirOption(values["cache-dir"], values["no-cache"]);
-  const discharge = values["discharge-table"]
-    ? dischargeFromTable(values["discharge-table"], inputs.surveys, io.err)
-    : undefined;
-  const { analyses, stats } = await analyzeArchive(
-    { surveys: inputs.surveys, ...surveySetup(inputs, settings) },
-    { threads, ...(cacheDir ? { cacheDir } : {}), io },
-  );
-  io.err(
-    `archive: ${stats.analysed} surveys analysed, ${stats.cached} from the cache, in ${stats.seconds.toFixed(1)} s`,
-  );
-  const archive = summarizeArchive(analyses as SurveyAnalysis[], {
-    ...(seasons ? { seasons } : {}),
-    ...(discharge ? { discharge } : {}),
-  });
-  if (format === "csv") return archiveCsv(archive);
-  const comparison: SurveyComparison | undefined =
-    analyses.length <= ARCHIVE_COMPARISON_MAX ? compareSurveys(analyses) : undefined;
-  return archiveJson(archive, comparison);
+  try {
+    const seasons = seasonsOption(values.seasons);
+    const threads = threadsOption(values.threads);
+    const cacheDir = cacheDirOption(values["cache-dir"], values["no-cache"]);
+    const discharge = values["discharge-table"]
+      ? dischargeFromTable(values["discharge-table"], inputs.surveys, io.err)
+      : undefined;
+    const { analyses, stats } = await analyzeArchive(
+      { surveys: inputs.surveys, ...surveySetup(inputs, settings) },
+      { threads, ...(cacheDir ? { cacheDir } : {}), ...(started ? { started } : {}), io },
+    );
+    io.err(
+      `archive: ${stats.analysed} surveys analysed, ${stats.cached} from the cache, in ${stats.seconds.toFixed(1)} s`,
+    );
+    const archive = summarizeArchive(analyses as SurveyAnalysis[], {
+      ...(seasons ? { seasons } : {}),
+      ...(discharge ? { discharge } : {}),
+    });
+    if (format === "csv") return archiveCsv(archive);
+    const comparison: SurveyComparison | undefined =
+      analyses.length <= ARCHIVE_COMPARISON_MAX ? compareSurveys(analyses) : undefined;
+    return archiveJson(archive, comparison);
+  } finally {
+    await stopWorkers(started);
+  }
 }

@@ -1,12 +1,24 @@
-// Worker thread entry of the archive analysis: set-up from workerData, then one survey per message.
-import { parentPort, workerData } from "node:worker_threads";
-import { surveyTaskHandler, type SurveySetup, type SurveyTask } from "./surveyTask.ts";
+// Worker thread entry of the archive analysis: a set-up message naming its handler (read a survey
+// file, or analyse a survey; default: analyse), then one task per message.
+import { parentPort } from "node:worker_threads";
+import { readTaskHandler } from "./readTask.ts";
+import { surveyTaskHandler } from "./surveyTask.ts";
+import type { TaskHandler, ToWorker } from "./workerPool.ts";
 
-surveyTaskHandler.setup(workerData as SurveySetup);
-parentPort!.on("message", (m: { index: number; task: SurveyTask }) => {
+const HANDLERS: Record<string, TaskHandler<unknown, unknown, unknown>> = {
+  survey: surveyTaskHandler as TaskHandler<unknown, unknown, unknown>,
+  read: readTaskHandler as TaskHandler<unknown, unknown, unknown>,
+};
+let handler = HANDLERS.survey!;
+
+parentPort!.on("message", (m: ToWorker<unknown, unknown>) => {
+  if ("setup" in m) {
+    handler = HANDLERS[m.handler ?? "survey"]!;
+    return handler.setup(m.setup);
+  }
   try {
     const t0 = performance.now();
-    const result = surveyTaskHandler.run(m.task);
+    const result = handler.run(m.task);
     parentPort!.postMessage({ index: m.index, result, taskMs: performance.now() - t0 });
   } catch (error) {
     parentPort!.postMessage({ index: m.index, error: (error as Error).stack ?? String(error) });

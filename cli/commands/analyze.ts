@@ -1,10 +1,13 @@
 import type { Command } from "../command.ts";
 import type { SurveyAnalysis } from "../../analysis/index.ts";
-import { analyzeInputs, resultRows, tableCsv, RESULT_COLUMNS, SCREENING_CAUTION } from "../../analysis/index.ts";
+import { resultRows, tableCsv, RESULT_COLUMNS, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { UsageError } from "../exitCodes.ts";
 import { checkOut, writeOut } from "../files.ts";
 import { CHOICE_HELP, INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings } from "../options.ts";
-import { loadWorkspace } from "../workspace.ts";
+import { loadWorkspaceOnWorkers } from "../archive/parallelRead.ts";
+import { POOL_HELP, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
+import { CancelledError, stopWorkers } from "../archive/workerPool.ts";
+import { analyzeFiles, EXIT_CANCELLED } from "./compare.ts";
 
 const help = `brackline analyze <survey files...> [options]
 
@@ -30,6 +33,7 @@ ${CHOICE_HELP}
   --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name
   --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
+${POOL_HELP}
   --format json|csv            output format (default json); csv is the results table
   --out <file>                 write to a file instead of standard output
 
@@ -61,25 +65,44 @@ export const analyzeCommand: Command = {
   summary: "analyse surveys: stations along the channel and mixing behaviour of every constituent",
   help,
   async run(args, io) {
-    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "format", "out", "centerline-out"]);
+    const { values, positionals } = parseCommandLine(args, [
+      ...INPUT_OPTIONS,
+      ...POOL_OPTION_NAMES,
+      "format",
+      "out",
+      "centerline-out",
+    ]);
     const format = parseFormat(values.format);
-    const settings = workspaceSettings(values);
+    workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
     if (values.out !== undefined) checkOut(values.out);
-    const inputs = loadWorkspace(positionals, values, io);
-    for (const [i, s] of inputs.surveys.entries())
-      io.err(`analysing survey ${i + 1}/${inputs.surveys.length}: ${s.name} (${s.stations.length} stations)`);
-    const results = analyzeInputs(inputs, settings);
+    // Several surveys go through the worker pool; its threads start loading while the files are read.
+    const started = startWorkersEarly(positionals, values);
+    let inputs;
+    try {
+      // The survey files are parsed on those workers when there are several.
+      inputs = await loadWorkspaceOnWorkers(positionals, values, io, started);
+    } catch (error) {
+      await stopWorkers(started);
+      throw error;
+    }
+    let analyses: SurveyAnalysis[];
+    try {
+      ({ analyses } = await analyzeFiles(positionals, values, io, false, inputs, started));
+    } catch (error) {
+      if (!(error instanceof CancelledError)) throw error;
+      io.err(`cancelled after ${error.done} surveys`);
+      return EXIT_CANCELLED;
+    }
     if (values["centerline-out"] !== undefined && inputs.offeredCenterline && values.centerline === undefined)
       writeOut(values["centerline-out"], `${JSON.stringify(inputs.offeredCenterline, null, 2)}\n`);
-    const analyses = results.surveys.map((s) => s.analysis);
     let text: string;
     if (format === "csv") text = tableCsv(RESULT_COLUMNS, resultRows(analyses));
     else {
       const surveys = analyses.map(surveyJson);
       const doc = {
-        caution: results.caution,
-        ...(results.mouth ? { mouth: results.mouth } : {}),
+        caution: SCREENING_CAUTION,
+        ...(inputs.channel ? { mouth: inputs.channel.mouth } : {}),
         import: {
           summary: inputs.summary,
           files: inputs.files.map((f) => ({

@@ -1,8 +1,8 @@
 import { createHash } from "node:crypto";
 import { basename } from "node:path";
 import type { Command, CommandIo } from "../command.ts";
-import type { ProvenanceFile, SurveyAnalysis, WorkspaceInputs, WorkspaceResults } from "../../analysis/index.ts";
-import { analyzeInputs, comparisonToCsv, SCREENING_CAUTION } from "../../analysis/index.ts";
+import type { ProvenanceFile, SurveyAnalysis, SurveyComparison, WorkspaceInputs } from "../../analysis/index.ts";
+import { comparisonToCsv, SCREENING_CAUTION, workspaceComparison } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { checkOut, readBytes, writeOut } from "../files.ts";
 import {
@@ -14,14 +14,17 @@ import {
   CHOICE_HELP,
 } from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
+import { loadWorkspaceOnWorkers } from "../archive/parallelRead.ts";
 import { ARCHIVE_HELP, compareArchive } from "../archive/compareArchive.ts";
-import { CancelledError } from "../archive/workerPool.ts";
+import { CancelledError, stopWorkers, type StartedWorkers } from "../archive/workerPool.ts";
+import { cacheDirOption } from "../archive/archiveOptions.ts";
+import { analyzeSurveysThroughPool, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
 
 /** Exit code after Ctrl+C (128 + SIGINT), as shells report it. */
 export const EXIT_CANCELLED = 130;
 
 /** Archive options of `compare` (three or more surveys). */
-const ARCHIVE_OPTION_NAMES = ["threads", "cache-dir", "no-cache", "seasons", "discharge-table"] as const;
+const ARCHIVE_OPTION_NAMES = [...POOL_OPTION_NAMES, "seasons", "discharge-table"] as const;
 
 /** Size and SHA-256 of a file, for the briefing's provenance. */
 export function provenanceOf(path: string, role: ProvenanceFile["role"]): ProvenanceFile {
@@ -29,35 +32,53 @@ export function provenanceOf(path: string, role: ProvenanceFile["role"]): Proven
   return { name: basename(path), role, bytes: bytes.length, sha256: createHash("sha256").update(bytes).digest("hex") };
 }
 
-/** Reads the files and analyses every survey (progress on stderr); with `compare`, compares them too. */
-export function analyzeFiles(
+/**
+ * Reads the files and analyses every survey through the worker pool (progress on stderr; cache only
+ * with --cache-dir); with `compare`, compares them too. The results are those of analyzeInputs.
+ *
+ * @param started workers started before reading ({@link startWorkersEarly}); ended here
+ * @throws CancelledError on Ctrl+C
+ */
+export async function analyzeFiles(
   paths: string[],
   values: OptionValues,
   io: CommandIo,
   compare = false,
   loaded?: WorkspaceInputs,
-): {
+  started?: StartedWorkers,
+): Promise<{
   inputs: WorkspaceInputs;
-  results: WorkspaceResults;
   analyses: SurveyAnalysis[];
+  comparison?: SurveyComparison;
   files: ProvenanceFile[];
   draws: number;
   seed: number;
-} {
+}> {
   const settings = workspaceSettings(values);
-  const inputs = loaded ?? loadWorkspace(paths, values, io);
-  if (compare && inputs.surveys.length < 2)
+  let inputs: WorkspaceInputs;
+  try {
+    inputs = loaded ?? loadWorkspace(paths, values, io);
+  } catch (error) {
+    await stopWorkers(started);
+    throw error;
+  }
+  if (compare && inputs.surveys.length < 2) {
+    await stopWorkers(started);
     throw new InputError(
       `${paths.join(", ")}: ${inputs.surveys.length} survey found; compare needs at least 2 (one per file, or a survey column)`,
     );
+  }
   for (const [i, s] of inputs.surveys.entries())
     io.err(`analysing survey ${i + 1}/${inputs.surveys.length}: ${s.name} (${s.stations.length} stations)`);
-  const results = analyzeInputs(inputs, { ...settings, ...(compare ? { compare: {} } : {}) });
+  const cacheDir =
+    values["cache-dir"] !== undefined ? cacheDirOption(values["cache-dir"], values["no-cache"]) : undefined;
+  const { analyses } = await analyzeSurveysThroughPool(inputs, settings, values, io, cacheDir, started);
+  const comparison = compare ? workspaceComparison(analyses, {}) : undefined;
   const files = paths.map((p) => provenanceOf(p, "survey"));
   return {
     inputs,
-    results,
-    analyses: results.surveys.map((s) => s.analysis),
+    analyses,
+    ...(comparison ? { comparison } : {}),
     files,
     draws: settings.bootstrapDraws,
     seed: settings.seed,
@@ -104,11 +125,20 @@ export const compareCommand: Command = {
     if (positionals.length === 0) throw new UsageError("give the survey files to compare");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (values.out !== undefined) checkOut(values.out);
-    const inputs = loadWorkspace(positionals, values, io);
+    // Worker threads start loading now, while the files are read.
+    const started = startWorkersEarly(positionals, values);
+    let inputs: WorkspaceInputs;
+    try {
+      // The survey files are parsed on those workers when there are several.
+      inputs = await loadWorkspaceOnWorkers(positionals, values, io, started);
+    } catch (error) {
+      await stopWorkers(started);
+      throw error;
+    }
     if (inputs.surveys.length >= 3) {
       let text: string;
       try {
-        text = await compareArchive(inputs, workspaceSettings(values), values, format, io);
+        text = await compareArchive(inputs, workspaceSettings(values), values, format, io, started);
       } catch (error) {
         if (!(error instanceof CancelledError)) throw error;
         io.err(`cancelled after ${error.done} surveys; they are cached: run the same command again to continue`);
@@ -118,9 +148,17 @@ export const compareCommand: Command = {
       else io.out(text);
       return 0;
     }
-    const { analyses, results } = analyzeFiles(positionals, values, io, true, inputs);
+    let analysed: Awaited<ReturnType<typeof analyzeFiles>>;
+    try {
+      analysed = await analyzeFiles(positionals, values, io, true, inputs, started);
+    } catch (error) {
+      if (!(error instanceof CancelledError)) throw error;
+      io.err(`cancelled after ${error.done} surveys`);
+      return EXIT_CANCELLED;
+    }
+    const { analyses } = analysed;
     io.err(`comparing ${analyses.length} surveys against ${analyses[0]!.survey.name}`);
-    const comparison = results.comparison!;
+    const comparison = analysed.comparison!;
     const text =
       format === "csv"
         ? comparisonToCsv(comparison)

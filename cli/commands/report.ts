@@ -4,7 +4,10 @@ import { buildBriefing, renderBriefingHtml, SCREENING_CAUTION } from "../../anal
 import { InputError, UsageError } from "../exitCodes.ts";
 import { checkOut, readBytes, writeOut } from "../files.ts";
 import { CHOICE_HELP, INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
-import { analyzeFiles, provenanceOf } from "./compare.ts";
+import { analyzeFiles, EXIT_CANCELLED, provenanceOf } from "./compare.ts";
+import { POOL_HELP, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
+import { CancelledError } from "../archive/workerPool.ts";
+import { loadWorkspaceOnWorkers } from "../archive/parallelRead.ts";
 
 /** A map file read for the briefing, with its provenance. */
 export interface MapFile {
@@ -55,6 +58,7 @@ ${CHOICE_HELP}
   --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name (for fluxes)
   --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1)
+${POOL_HELP}
 To make a PDF: open the file in a browser and print, or
   chromium --headless --no-pdf-header-footer --print-to-pdf=briefing.pdf file:///path/briefing.html
 ${SCREENING_CAUTION}`;
@@ -80,14 +84,33 @@ export const reportCommand: Command = {
   summary: "write a self-contained HTML stakeholder briefing (prints to A4 PDF)",
   help,
   async run(args, io) {
-    const { values, positionals } = parseCommandLine(args, [...INPUT_OPTIONS, "basemap", "out", "title", "date"]);
+    const { values, positionals } = parseCommandLine(args, [
+      ...INPUT_OPTIONS,
+      ...POOL_OPTION_NAMES,
+      "basemap",
+      "out",
+      "title",
+      "date",
+    ]);
     workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
     if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (!values.out) throw new UsageError("missing --out <briefing.html>");
     if (values.out !== undefined) checkOut(values.out);
     const basemap = values.basemap ? readGeoJsonFile(values.basemap, "basemap") : undefined;
-    const { inputs, analyses, files, draws, seed } = analyzeFiles(positionals, values, io);
+    // Several surveys go through the worker pool; its threads start loading while the files are read.
+    let analysed: Awaited<ReturnType<typeof analyzeFiles>>;
+    try {
+      const started = startWorkersEarly(positionals, values);
+      // The survey files are parsed on those workers when there are several.
+      const inputs = await loadWorkspaceOnWorkers(positionals, values, io, started);
+      analysed = await analyzeFiles(positionals, values, io, false, inputs, started);
+    } catch (error) {
+      if (!(error instanceof CancelledError)) throw error;
+      io.err(`cancelled after ${error.done} surveys`);
+      return EXIT_CANCELLED;
+    }
+    const { inputs, analyses, files, draws, seed } = analysed;
     const channel = inputs.channel!;
     const centerline: MapFile = {
       geojson: channel.geojson as MapFile["geojson"],

@@ -28,7 +28,7 @@ afterAll(() => dirs.forEach((d) => rmSync(d, { recursive: true, force: true })))
 const quiet = { out: () => undefined, err: () => undefined };
 
 describe("analyzeArchive() (worker threads, cache, cancel)", () => {
-  it("gives the same analyses on 2 worker threads as on this thread, in survey order", async () => {
+  it("gives the same analyses on 2 threads (this one and a worker taking from one queue) as on this thread alone, in survey order", async () => {
     const one = await analyzeArchive(setup, { threads: 0, io: quiet });
     const two = await analyzeArchive(setup, { threads: 2, io: quiet });
     expect(two.stats.threads).toBe(2);

@@ -78,3 +78,38 @@ export function northBayNutrientTransects(): string[] {
     .map(([d]) => d)
     .sort();
 }
+
+/**
+ * For every cruise date (YYYY-MM-DD), the most landward North-Bay channel station with a salinity
+ * and that salinity (shallowest sample), read from the raw files independently of Brackline.
+ */
+export function northBayReachByDate(): Map<string, { station: number; salinity: number; stations: number }> {
+  const rank = new Map(NORTH_BAY_ORDER.map((s, i) => [s, i]));
+  const byDate = new Map<string, Map<number, { depthM: number; salinity: number }>>();
+  for (const f of surveyFiles()) {
+    const rows = csvRows(readFileSync(join(SF_DIR, f), "utf8"));
+    const h = rows[0]!;
+    const di = h.indexOf("Date");
+    const st = h.findIndex((c) => c === "Station_Number" || c === "Station");
+    const sal = h.indexOf("Salinity");
+    const dep = h.findIndex((c) => c === "Depth" || c === "Depth (m)");
+    for (const r of rows.slice(1)) {
+      const s = Number(r[st]);
+      const text = r[sal]?.trim() ?? "";
+      if (!rank.has(s) || text === "") continue;
+      const m = /^(\d+)\/(\d+)\/(\d+)$/.exec(r[di]!);
+      const iso = m ? `20${m[3]!.padStart(2, "0")}-${m[1]!.padStart(2, "0")}-${m[2]!.padStart(2, "0")}` : r[di]!;
+      const stations = byDate.get(iso) ?? new Map<number, { depthM: number; salinity: number }>();
+      const depthM = Number(r[dep]);
+      const had = stations.get(s);
+      if (!had || depthM < had.depthM) stations.set(s, { depthM, salinity: Number(text) });
+      byDate.set(iso, stations);
+    }
+  }
+  const out = new Map<string, { station: number; salinity: number; stations: number }>();
+  for (const [date, stations] of byDate) {
+    const landward = [...stations.keys()].sort((a, b) => rank.get(b)! - rank.get(a)!)[0]!;
+    out.set(date, { station: landward, salinity: stations.get(landward)!.salinity, stations: stations.size });
+  }
+  return out;
+}
