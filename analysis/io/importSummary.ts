@@ -24,8 +24,12 @@ export interface ImportedStation extends Station {
   surveyLabel?: string;
   /** Layer from a depth-label column ("S"/"B" style) or from layer selection. */
   layer?: "surface" | "bottom" | "middle" | "shallowest" | "depthAveraged" | "depthRange";
+  /** The station id as written in the file, when the reader normalised it ("36.0" read as "36"). */
+  idText?: string;
   /** Along-channel distance given in the file [km]. */
   distanceKm?: number;
+  /** Set by distancesFromMouth for a station on a side arm of the distance axis: km along the arm from the mouth. */
+  sideArmKm?: number;
   /** River discharge given on the row [m³/s]. */
   dischargeM3s?: number;
   /** The row-level QC flag text, when present. */

@@ -11,6 +11,7 @@ import { DEFAULT_FLAG_MAP, readQcFlag } from "./qcFlags.ts";
 import { readRowPlace } from "./rowPlace.ts";
 import type { SalinityFromConductivity } from "./conductivitySalinity.ts";
 import { salinityFromConductivityCell } from "./conductivitySalinity.ts";
+import { integralStationId } from "./stationIds.ts";
 
 export type { SalinityFromConductivity };
 
@@ -63,6 +64,7 @@ export function createRowReader(
   const issues: ImportIssue[] = [];
   const stations: ImportedStation[] = [];
   const summary = emptySummary();
+  const integral = { ids: new Set<string>(), issue: undefined as ImportIssue | undefined };
   const flagMap = options.flagMap ?? DEFAULT_FLAG_MAP;
   const s = compiled.single;
   const width = compiled.headers.length;
@@ -105,7 +107,16 @@ export function createRowReader(
       return f === undefined ? undefined : { text: cellText(f), header: header(f) };
     };
     // station id
-    const id = s.station === undefined ? `row ${row}` : cellText(s.station).trim();
+    const idWritten = s.station === undefined ? `row ${row}` : cellText(s.station).trim();
+    const { id, changed: idChanged } = integralStationId(idWritten);
+    if (idChanged) {
+      integral.ids.add(idWritten);
+      if (integral.issue === undefined) {
+        integral.issue = makeIssue(options.file, row, header(s.station ?? 0), idWritten, "", "warning");
+        issues.push(integral.issue);
+      }
+      integral.issue.expected = `station ids written as whole numbers with a trailing ".0" are read without it ("${integral.issue.value}" as "${integralStationId(integral.issue.value).id}"; ${integral.ids.size} such id(s) in this column); the text as written is kept with each station (idText)`;
+    }
     if (id.length === 0) {
       countRejected(summary, "missing station id");
       issues.push(makeIssue(options.file, row, header(s.station ?? 0), cellText(s.station), "a station id"));
@@ -179,6 +190,7 @@ export function createRowReader(
       values[c.key] = cell;
     }
     const st: ImportedStation = { id, salinity, values, sourceRow: row, sourceFile: options.file, ...place };
+    if (idChanged) st.idText = idWritten;
     if (cells.temperature !== undefined) st.temperatureC = cells.temperature;
     if (cells.pH !== undefined) st.pH = cells.pH;
     if (s.survey !== undefined && cellText(s.survey).trim() !== "") st.surveyLabel = cellText(s.survey).trim();

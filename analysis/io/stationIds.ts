@@ -41,3 +41,17 @@ function normalise(raw: string): NormalisedStationId {
   }
   return { id, changes };
 }
+
+/**
+ * A station id written as a whole number with a trailing ".0" (a numeric id column that went
+ * through a floating-point export: "36.0", "7.00") reduced to the whole number ("36", "7"). Other
+ * ids are returned unchanged ("21.5", "A.0", "036", "S36").
+ *
+ * @param raw the id as written (trimmed by the caller)
+ * @returns the id to use and whether it was changed
+ * @see common practice (spreadsheet and data-frame exports write integer ids of float columns as "36.0")
+ */
+export function integralStationId(raw: string): { id: string; changed: boolean } {
+  const m = /^([+-]?\d+)\.0+$/.exec(raw);
+  return m ? { id: m[1]!, changed: true } : { id: raw, changed: false };
+}

@@ -131,6 +131,8 @@ export const workspaceSettingsSchema = z.looseObject({
   /** Raster tile URL template; checked by {@link isTileUrlTemplate} when a workspace is read. */
   tileUrl: z.string().max(2048).optional(),
   useTiles: z.boolean().optional(),
+  /** Natural Earth world land under imported data (absent in older workspaces: on). */
+  worldLand: z.boolean().optional(),
 });
 
 /**

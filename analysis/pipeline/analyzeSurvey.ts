@@ -108,10 +108,18 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
   warnings.push(...placeWarnings.filter((w) => w.code !== "offChannel"));
   const off = offChannelStations(placements);
   const kept = options.keepOffChannel === true;
-  if (off.length > 0)
+  const offLine = off.filter((o) => o.sideArm !== true);
+  const onArm = off.filter((o) => o.sideArm === true);
+  const keepHint = kept ? "" : "Keep them with --keep-off-channel or the dashboard's off-channel setting";
+  if (offLine.length > 0)
     warnings.push({
       code: "offChannel",
-      message: `${off.length} station(s) lie more than ${limitM / 1000} km from the channel and are ${kept ? "kept in" : "left out of"} the fits and end-members: ${off.map((o) => `${o.id} (${o.distanceKm.toFixed(1)} km)`).join(", ")}. ${kept ? "" : "Keep them with --keep-off-channel or the dashboard's off-channel setting; "}change the limit with --off-channel-km.`,
+      message: `${offLine.length} station(s) lie more than ${limitM / 1000} km from the channel and are ${kept ? "kept in" : "left out of"} the fits and end-members: ${offLine.map((o) => `${o.id} (${o.distanceKm.toFixed(1)} km)`).join(", ")}. ${kept ? "" : `${keepHint}; `}change the limit with --off-channel-km.`,
+    });
+  if (onArm.length > 0)
+    warnings.push({
+      code: "offChannel",
+      message: `${onArm.length} station(s) lie on a separate arm beyond the mouth (the salinity maximum of the distance axis) and are ${kept ? "kept in" : "left out of"} the fits and end-members: ${onArm.map((o) => `${o.id} (${o.distanceKm.toFixed(1)} km along the arm)`).join(", ")}.${kept ? "" : ` ${keepHint}.`}`,
     });
   const excluded = new Set(kept ? [] : off.map((o) => o.id));
   const profile = profileOf(placements, network, warnings);

@@ -1,5 +1,6 @@
 import type { Survey } from "../survey/survey.ts";
 import { localSegmentLengthM } from "../geometry/ellipsoid.ts";
+import { distanceOrigin } from "./distanceOrigin.ts";
 
 /** A station as evidence for a centerline: id, position and salinity (one entry per sample; ids may repeat). */
 export interface CenterlineStation {
@@ -21,6 +22,11 @@ export interface StationCenterline {
     stationIds: string[];
     /** Stations left out because they would make the line double back (side basins, off the salinity gradient). */
     leftOut: string[];
+    /**
+     * Stations left off because the surveys' own along-channel distances put them on a separate arm
+     * beyond the mouth (see distanceOrigin); also listed in `leftOut`.
+     */
+    sideArm?: string[];
   };
 }
 
@@ -137,19 +143,35 @@ export function centerlineFromStations(
 
 /**
  * {@link centerlineFromStations} over every station of the surveys (accepted measured salinity only),
- * for the dashboard's draw tool and the CLI.
+ * for the dashboard's draw tool and the CLI. When the surveys also carry along-channel distances
+ * counted from the head of a second arm (the salinity maximum inside the distance range, see
+ * {@link distanceOrigin}), the stations on that arm are left off the line (listed in `sideArm`), so
+ * the line ends at the mouth rather than running on into the side bay.
  *
  * @param surveys the imported surveys
  * @returns the offered centerline, or undefined with fewer than 2 positioned stations with salinity
  */
 export function centerlineFromSurveys(surveys: readonly Survey[]): StationCenterline | undefined {
-  return centerlineFromStations(
-    surveys.flatMap((s) =>
-      s.stations.map((st) => ({
-        id: st.id,
-        lonLat: st.lonLat,
-        salinity: st.salinity.status === "measured" && st.salinity.accepted ? st.salinity.value : undefined,
-      })),
-    ),
+  const samples = surveys.flatMap((s) =>
+    s.stations.map((st) => ({
+      id: st.id,
+      lonLat: st.lonLat,
+      salinity: st.salinity.status === "measured" && st.salinity.accepted ? st.salinity.value : undefined,
+      distanceKm: (st as { distanceKm?: number }).distanceKm,
+    })),
   );
+  const pairs = samples.flatMap((p) =>
+    p.distanceKm !== undefined && p.salinity !== undefined ? [[p.distanceKm, p.salinity] as const] : [],
+  );
+  const origin = distanceOrigin(pairs);
+  const arm = new Set<string>();
+  if (origin?.kind === "interior")
+    for (const p of samples)
+      if (p.distanceKm !== undefined && (p.distanceKm - origin.mouthKm) * origin.riverSide < 0) arm.add(p.id);
+  const line = centerlineFromStations(samples.filter((p) => !arm.has(p.id)));
+  if (line === undefined || arm.size === 0) return line;
+  const sideArm = [...arm];
+  line.properties.leftOut = [...sideArm, ...line.properties.leftOut];
+  line.properties.sideArm = sideArm;
+  return line;
 }

@@ -7,7 +7,8 @@ import { acceptedValue } from "./mixingSamples.ts";
 /**
  * Places survey stations on the channel: along-channel distance from the mouth [km], signed
  * cross-channel offset [m], branch and nearest channel point, through the geometry core. Without a
- * network, a distance given in the file (`distanceKm` on imported stations) is used as the chainage.
+ * network, a distance given in the file (`distanceKm` on imported stations) is used as the chainage,
+ * and a station on a side arm of that distance axis (`sideArmKm`, see distancesFromMouth) is off the channel.
  *
  * @param stations survey stations
  * @param network channel network, when a centerline was given
@@ -20,7 +21,8 @@ export function placeStations(
   offChannelThresholdM: number | undefined,
 ): { placements: StationPlacement[]; warnings: MixingWarning[] } {
   const base = stations.map((st): StationPlacement => {
-    const given = (st as Station & { distanceKm?: number }).distanceKm;
+    const { distanceKm: given, sideArmKm } = st as Station & { distanceKm?: number; sideArmKm?: number };
+    const onArm = sideArmKm !== undefined && !network;
     const salinity = acceptedValue(st.salinity);
     const temperatureC = acceptedValue(st.temperatureC);
     const pH = acceptedValue(st.pH);
@@ -28,7 +30,8 @@ export function placeStations(
       id: st.id,
       ...(st.lonLat ? { lonLat: st.lonLat } : {}),
       ...(given !== undefined && !network ? { alongChannelKm: given } : {}),
-      offChannel: false,
+      offChannel: onArm,
+      ...(onArm ? { sideArmKm } : {}),
       ...(salinity !== undefined ? { salinity } : {}),
       ...(temperatureC !== undefined ? { temperatureC } : {}),
       ...(pH !== undefined ? { pH } : {}),

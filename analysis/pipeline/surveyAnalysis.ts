@@ -19,8 +19,13 @@ export interface StationPlacement {
   branchId?: string;
   /** Nearest point on the centerline [lon, lat]. */
   nearestLonLat?: [number, number];
-  /** True when farther off the channel than the threshold. */
+  /** True when farther off the channel than the threshold, or on a side arm of a distance axis. */
   offChannel: boolean;
+  /**
+   * Without a centerline, a station on the far side of the salinity maximum of a distance axis (a
+   * separate arm, not on the river's mixing path): its distance from the mouth along that arm [km].
+   */
+  sideArmKm?: number;
   /** Practical salinity, when measured and accepted. */
   salinity?: number;
   temperatureC?: number;
@@ -66,9 +71,11 @@ export interface AlongChannelSeries {
 /** A station left out of the fits and end-members because it lies off the channel. */
 export interface OffChannelStation {
   id: string;
-  /** Distance from the centerline [km]. */
+  /** Distance from the centerline [km]; for a side-arm station, its distance along the arm from the mouth. */
   distanceKm: number;
   branchId?: string;
+  /** Set for a station on a side arm of a distance axis (see StationPlacement.sideArmKm). */
+  sideArm?: true;
 }
 
 /** One observation as a plot draws it, including values the analysis set aside. */

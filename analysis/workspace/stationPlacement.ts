@@ -72,12 +72,12 @@ export function placeWithoutCenterline(
       const left = offered.properties.leftOut;
       notices.push({
         code: "centerlineFromStations",
-        message: `No centerline given: one was built from the station positions, ordered along the salinity gradient and smoothed (${offered.properties.stationIds.length} stations on it${left.length > 0 ? `; ${left.join(", ")} left off it` : ""}). It follows the stations, not the deep channel: check it (--centerline-out saves it) and pass an edited one with --centerline, or draw one in the dashboard.`,
+        message: `No centerline given: one was built from the station positions, ordered along the salinity gradient and smoothed (${offered.properties.stationIds.length} stations on it${left.length > 0 ? `; ${left.join(", ")} left off it` : ""}).${(offered.properties.sideArm?.length ?? 0) > 0 ? ` The file's along-channel distances do not count from the mouth (their salinity maximum lies inside the range): ${offered.properties.sideArm!.join(", ")} lie on a separate arm beyond it and were left off the line.` : ""} It follows the stations, not the deep channel: check it (--centerline-out saves it) and pass an edited one with --centerline, or draw one in the dashboard.`,
       });
       return { surveys: [...surveys], channel: read.channel, offered, notices };
     }
   }
-  const oriented = distancesFromMouth(surveys);
+  const oriented = distancesFromMouth(surveys, mouth);
   if (oriented.notice) notices.push(oriented.notice);
   return { surveys: oriented.surveys, ...(offered ? { offered } : {}), notices };
 }

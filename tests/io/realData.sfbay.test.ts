@@ -109,15 +109,20 @@ describe.skipIf(!present)("USGS San Francisco Bay files with the station table j
     expect(castsWithSi.size).toBeGreaterThan(150);
   });
 
-  it('2020 file (all values quoted, units in headers): ids like "2.0" join station "2" (reported once for each of the 36 such ids; "29.5" matches as written), distance and units kept', () => {
+  it('2020 file (all values quoted, units in headers): ids written "2.0" are read as "2" with the text kept, reported once; "29.5" kept as written; they join the table\'s "2"; distance and units kept', () => {
     const r = readSurveyText(y2020 ?? "", { fileName: "wqdata20.csv", stationTable: table, grouping: { by: "date" } });
     expect(r.issues.filter((i) => i.severity === "error")).toEqual([]);
     expect(r.summary).toMatchObject({ rowsRead: 3507, rowsAccepted: 3507 });
     expect(r.surveys.length).toBe(10);
-    const norm = r.issues.filter((i) => i.expected.includes("after normalising"));
-    expect(norm.length).toBe(36);
-    expect(norm.every((i) => i.expected.includes("decimal form"))).toBe(true);
-    const st = r.surveys[0].stations.find((x) => x.id === "2.0") as ImportedStation;
+    expect(r.issues.filter((i) => i.expected.includes("after normalising"))).toEqual([]);
+    const dotZero = r.issues.filter((i) => i.expected.includes('trailing ".0"'));
+    expect(dotZero.length).toBe(1);
+    expect(dotZero[0]!.expected).toContain("36 such id(s)");
+    const ids = new Set(r.surveys.flatMap((s) => s.stations.map((x) => x.id)));
+    expect([...ids].filter((id) => id.endsWith(".0"))).toEqual([]);
+    expect(ids.has("29.5")).toBe(true);
+    const st = r.surveys[0].stations.find((x) => x.id === "2") as ImportedStation;
+    expect(st.idText).toBe("2.0");
     expect(st.sourceRow).toBe(2);
     expectWithin(st.distanceKm, 127.7053, 0, "Distance from Sta. 36 (km)");
     expectWithin(st.lonLat?.[1], 38.063333, 1e-9, "station 2 latitude");

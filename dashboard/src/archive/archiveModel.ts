@@ -5,7 +5,14 @@
  * range. No science here: every value is the summary's; this file only places it.
  */
 import { scaleUtc } from "d3-scale";
-import { classWords, formatSignificant, type ArchiveSummary, type Estimate } from "../../../analysis/index.ts";
+import {
+  classWords,
+  formatSignificant,
+  maxOf,
+  minOf,
+  type ArchiveSummary,
+  type Estimate,
+} from "../../../analysis/index.ts";
 import { okabeIto, neutral } from "../panels/lib/palette.ts";
 import { linear, makeFrame, round, type Frame } from "../panels/lib/scales.ts";
 
@@ -74,8 +81,8 @@ export function timeAxis(summary: ArchiveSummary, frame: Frame, nTicks = 5): Tim
     const t = dayMs(p.date);
     return t === undefined ? [] : [t];
   });
-  const lo = ms.length ? Math.min(...ms) : 0;
-  const hi = ms.length ? Math.max(...ms) : 86_400_000;
+  const lo = ms.length ? minOf(ms) : 0;
+  const hi = ms.length ? maxOf(ms) : 86_400_000;
   const pad = Math.max((hi - lo) * 0.03, 15 * 86_400_000);
   const s = scaleUtc()
     .domain([lo - pad, hi + pad])
@@ -142,7 +149,7 @@ export function estimateText(e: Estimate | undefined, unit: string): string {
 }
 
 export function valueAxis(values: number[], frame: Frame, title: string, zero: boolean) {
-  const y = linear(values.length ? [Math.min(...values), Math.max(...values)] : undefined, [frame.y1, frame.y0], {
+  const y = linear(values.length ? [minOf(values), maxOf(values)] : undefined, [frame.y1, frame.y0], {
     zero,
     ticks: 4,
   });

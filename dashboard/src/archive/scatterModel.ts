@@ -4,7 +4,7 @@
  * (`vsDischarge.percentChange`); only placed here.
  */
 import { scaleLog } from "d3-scale";
-import type { ConstituentSeries } from "../../../analysis/index.ts";
+import { maxOf, minOf, type ConstituentSeries } from "../../../analysis/index.ts";
 import { makeFrame, round, type Frame } from "../panels/lib/scales.ts";
 import {
   estimateText,
@@ -47,7 +47,7 @@ export function dischargeScatter(
   const band = rel?.band ?? [];
   const qAll = [...qs, ...band.map((b) => b.dischargeM3s)];
   const xs = scaleLog()
-    .domain([Math.min(...qAll), Math.max(...qAll)])
+    .domain([minOf(qAll), maxOf(qAll)])
     .range([frame.x0, frame.x1])
     .nice();
   const x = (q: number) => round(xs(q));

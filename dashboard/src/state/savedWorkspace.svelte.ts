@@ -198,6 +198,7 @@ export class SavedWorkspace {
       colouring: settings.colouring,
       tileUrl: settings.tileUrl,
       useTiles: settings.useTiles,
+      worldLand: settings.worldLand,
       ...(this.layer ? { layer: $state.snapshot(this.layer) as LayerChoice } : {}),
       analysis: $state.snapshot(settings.analysis) as WorkspaceParts["analysis"],
       ...(name !== undefined ? { selectedSurvey: name } : {}),
@@ -250,6 +251,7 @@ export class SavedWorkspace {
     settings.colouring = p.colouring;
     settings.tileUrl = p.tileUrl;
     settings.useTiles = p.useTiles;
+    settings.worldLand = p.worldLand;
     // Settings the document does not hold go back to their defaults (a workspace saved before they existed).
     settings.updateAnalysis({ mouth: undefined, offChannelM: undefined, keepOffChannel: undefined, ...p.analysis });
     const index = Math.max(

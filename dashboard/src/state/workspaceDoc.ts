@@ -27,6 +27,8 @@ export interface WorkspaceParts {
   colouring: StationColouring;
   tileUrl: string;
   useTiles: boolean;
+  /** Natural Earth world land under imported data (Settings → Basemap). */
+  worldLand: boolean;
   /** Depth layer kept from depth-resolved files at import (absent: the reader's default, the shallowest sample). */
   layer?: LayerChoice;
   analysis: AnalysisSettings;
@@ -51,6 +53,7 @@ export function toWorkspaceDocument(parts: WorkspaceParts, savedAt: string): Wor
     colouring: parts.colouring,
     tileUrl: parts.tileUrl,
     useTiles: parts.useTiles,
+    worldLand: parts.worldLand,
     mappingDates: parts.mappingDates,
     demoBasemap: parts.demoBasemap,
     ...(parts.layer ? { layer: parts.layer } : {}),
@@ -88,6 +91,8 @@ export function fromWorkspaceDocument(ws: WorkspaceDocument): WorkspaceParts {
     colouring: s.colouring === "deviation" ? "deviation" : "salinity",
     tileUrl: typeof s.tileUrl === "string" ? s.tileUrl : "",
     useTiles: s.useTiles === true,
+    // Older workspaces do not hold it: the world land is on by default.
+    worldLand: s.worldLand !== false,
     analysis: {
       endmemberOverrides: a.endmemberOverrides ?? {},
       precisionPercent: a.precisionPercent ?? {},
