@@ -23,12 +23,21 @@ describe.skipIf(skipBrowser)("cold start: the survey on screen first, the other 
     const missing = missingBrowserMessage();
     if (missing) throw new Error(missing);
     s = await openDashboard();
+    // Read in the page, in the first frame that shows the survey on screen analysed (not a later round trip).
+    const first = await s.page.waitForFunction(
+      () =>
+        document.querySelector('[data-active-analysis="ready"]')
+          ? {
+              analysed: document.querySelector("[data-surveys-analysed]")?.getAttribute("data-surveys-analysed") ?? "",
+              briefing: document.querySelector('[data-testid="briefing-status"]')?.textContent ?? "",
+              mixing: document.querySelector('[data-panel="MixingPlot"] svg') !== null,
+            }
+          : false,
+      undefined,
+      { polling: "raf", timeout: 90_000 },
+    );
+    atFirstView = (await first.jsonValue()) as typeof atFirstView;
     await waitForFirstView(s.page);
-    atFirstView = await s.page.evaluate(() => ({
-      analysed: document.querySelector("[data-surveys-analysed]")?.getAttribute("data-surveys-analysed") ?? "",
-      briefing: document.querySelector('[data-testid="briefing-status"]')?.textContent ?? "",
-      mixing: document.querySelector('[data-panel="MixingPlot"] svg') !== null,
-    }));
     await waitForMap(s.page);
     await waitForAnalysis(s.page);
   });
