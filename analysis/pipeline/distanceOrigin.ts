@@ -1,3 +1,4 @@
+import { maxOf } from "../survey/arrayExtent.ts";
 import { spearmanRho } from "../geometry/suggestMouth.ts";
 
 /** The salinity at one distance value: the median over every survey that sampled it. */
@@ -103,7 +104,7 @@ export function salinityByDistance(pairs: ReadonlyArray<readonly [number, number
 export function distanceOrigin(pairs: ReadonlyArray<readonly [number, number]>): DistanceOrigin | undefined {
   const st = salinityByDistance(pairs);
   if (st.length < 3) return undefined;
-  const minN = MAX_STATION_MIN_SHARE * Math.max(...st.map((p) => p.n));
+  const minN = MAX_STATION_MIN_SHARE * maxOf(st.map((p) => p.n));
   let iMax = -1;
   let iMin = 0;
   st.forEach((p, i) => {

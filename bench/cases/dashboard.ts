@@ -1,28 +1,59 @@
 // Benchmark: the dashboard in headless Chromium (software WebGL), through the e2e harness
-// (tests/e2e/browser.ts: static server + Debian Chromium). Cold start to the first complete render
-// (analysis ready and map idle) against a bare MapLibre + deck.gl page with the same style and
-// basemap built by the same Vite in the same run (fixtures/bareMap.ts); choosing a constituent until
-// every panel has finished changing, against a no-op choice (event to next frame) in the same run.
+// (tests/e2e/browser.ts: static server + Debian Chromium). Two cold-start rows in one page load, each
+// against a bare MapLibre + deck.gl page with the same style and basemap built by the same Vite in
+// the same run (fixtures/bareMap.ts): the first complete view (the survey on screen analysed, its
+// panels drawn, speciation answered, map idle) and every survey analysed (what Compare, the archive
+// and the briefing need). Then choosing a constituent until every panel has finished changing,
+// against a no-op choice (event to next frame) in the same run.
 import type { Page } from "playwright-core";
 import type { BenchCase, BenchRow } from "../benchCase.ts";
 import { openBenchDashboard } from "../fixtures/dashboardDist.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
 
-const READY =
-  '[data-analysis-status="ready"] [data-map-ready="true"], [data-analysis-status="ready"][data-map-ready="true"]';
+/** What a page must show (every `all` selector present, no `none` selector) to count as ready. */
+interface ReadySpec {
+  all: string[];
+  none?: string[];
+}
+
+/** The survey on screen analysed and drawn: mixing plot, profile, behaviour table, speciation answered, map idle. */
+const FIRST_VIEW: ReadySpec = {
+  all: [
+    '[data-active-analysis="ready"]',
+    '[data-map-ready="true"]',
+    '[data-panel="MixingPlot"] svg',
+    '[data-panel="ChannelProfile"] svg',
+    '[data-panel="BehaviourTable"] table',
+  ],
+  none: ['[data-testid="speciation-pending"]'],
+};
+/** Every survey analysed (the comparison made) and the map idle. */
+const ALL_SURVEYS: ReadySpec = { all: ['[data-analysis-status="ready"]', '[data-map-ready="true"]'] };
+const BARE: ReadySpec = { all: ['[data-ready="true"]'] };
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
   return s[Math.floor(s.length / 2)]!;
 }
 
-/** ms since navigation start when the page first showed the analysis ready and the map idle (polled each frame). */
-async function readyAt(page: Page, selector = READY): Promise<number> {
-  const h = await page.waitForFunction((sel) => (document.querySelector(sel) ? performance.now() : false), selector, {
-    polling: "raf",
-    timeout: 180_000,
-  });
+/** ms since navigation start when the page first met `spec` (polled each frame). */
+async function readyAt(page: Page, spec: ReadySpec): Promise<number> {
+  const h = await page.waitForFunction(
+    ({ all, none }) =>
+      all.every((sel) => document.querySelector(sel)) && !(none ?? []).some((sel) => document.querySelector(sel))
+        ? performance.now()
+        : false,
+    spec,
+    { polling: "raf", timeout: 180_000 },
+  );
   return (await h.jsonValue()) as number;
+}
+
+/** Both cold-start moments of one page load: the first complete view, then every survey analysed. */
+async function loadTimes(page: Page): Promise<{ first: number; all: number }> {
+  const first = await readyAt(page, FIRST_VIEW);
+  const all = await readyAt(page, ALL_SURVEYS);
+  return { first, all };
 }
 
 /**
@@ -75,26 +106,35 @@ export const dashboardBench: BenchCase = {
     const bare = await serveBareMap();
     const s = await openBenchDashboard();
     try {
-      const cold = await readyAt(s.page);
-      const warm: number[] = [];
+      const cold = await loadTimes(s.page);
+      const warm: Array<{ first: number; all: number }> = [];
       for (let i = 0; i < 2; i++) {
         await s.page.reload({ waitUntil: "load" });
-        warm.push(await readyAt(s.page));
+        warm.push(await loadTimes(s.page));
       }
       // The bare map page in the same browser: cold (its first load), then two warm reloads.
       const barePage = await s.context.newPage();
       await barePage.goto(bare.url, { waitUntil: "load" });
-      const bareCold = await readyAt(barePage, '[data-ready="true"]');
+      const bareCold = await readyAt(barePage, BARE);
       const bareWarm: number[] = [];
       for (let i = 0; i < 2; i++) {
         await barePage.reload({ waitUntil: "load" });
-        bareWarm.push(await readyAt(barePage, '[data-ready="true"]'));
+        bareWarm.push(await readyAt(barePage, BARE));
       }
       await barePage.close();
       const load = (await import("node:os"))
         .loadavg()
         .map((l) => l.toFixed(1))
         .join(" ");
+      const s2 = (ms: number) => (ms / 1000).toFixed(2);
+      const warmNote = (pick: (w: { first: number; all: number }) => number) =>
+        `warm reloads ${warm.map((w) => s2(pick(w))).join(", ")} s (bare map ${bareWarm.map(s2).join(", ")} s, ` +
+        `${(median(warm.map(pick)) / median(bareWarm)).toFixed(2)}× warm; a reload takes each survey's stored result from the IndexedDB result cache, the cold start analyses)`;
+      const since = `since navigation start, polled every frame; load average ${load}`;
+      const bareBaseline = {
+        name: "bare MapLibre + deck.gl page, same style and basemap, cold",
+        value: bareCold / 1000,
+      };
 
       const options = await s.page
         .locator('[data-testid="constituent-select"] option')
@@ -114,17 +154,24 @@ export const dashboardBench: BenchCase = {
       const base = median(noop);
       return [
         {
-          name: "dashboard cold start to first complete render (analysis ready, map idle), headless Chromium, software WebGL",
-          value: cold / 1000,
+          name: "dashboard cold start to the first complete view (survey on screen analysed; mixing plot, profile, table, speciation drawn; map idle), headless Chromium, software WebGL",
+          value: cold.first / 1000,
           unit: "s",
-          baseline: { name: "bare MapLibre + deck.gl page, same style and basemap, cold", value: bareCold / 1000 },
-          ratio: cold / Math.max(bareCold, 1e-3),
+          baseline: bareBaseline,
+          ratio: cold.first / Math.max(bareCold, 1e-3),
           ratioLabel: "× the bare map",
           goal: "≤ 1.3× and ≤ 2.5 s",
-          note:
-            `warm reloads ${warm.map((w) => (w / 1000).toFixed(2)).join(", ")} s (bare map ${bareWarm.map((w) => (w / 1000).toFixed(2)).join(", ")} s, ` +
-            `${(median(warm) / median(bareWarm)).toFixed(2)}× warm; a reload takes each survey's stored result from the IndexedDB result cache, the cold start analyses); ` +
-            `since navigation start, polled every frame; load average ${load}`,
+          note: `the other surveys are analysed after this view; ${warmNote((w) => w.first)}; ${since}`,
+        },
+        {
+          name: "dashboard cold start until every survey is analysed (Compare, archive, briefing ready; map idle), same page load",
+          value: cold.all / 1000,
+          unit: "s",
+          baseline: bareBaseline,
+          ratio: cold.all / Math.max(bareCold, 1e-3),
+          ratioLabel: "× the bare map",
+          goal: "≤ 1.3× and ≤ 2.5 s",
+          note: `${((cold.all - cold.first) / 1000).toFixed(2)} s after the first complete view; ${warmNote((w) => w.all)}; ${since}`,
         },
         {
           name: "choose a constituent until all panels stop changing (last DOM change)",

@@ -139,7 +139,18 @@ export async function waitForMap(page: Page): Promise<void> {
   await page.waitForSelector('[data-map-ready="true"]', { timeout: 90_000 });
 }
 
-/** Waits until the worker has analysed every survey. */
+/**
+ * Waits until the survey on screen has its analysis (its panels can draw); the other surveys may
+ * still be analysing (the worker analyses them after the first view).
+ */
+export async function waitForFirstView(page: Page): Promise<void> {
+  await page.waitForSelector('[data-active-analysis="ready"]', { timeout: 90_000 });
+}
+
+/**
+ * Waits until the worker has analysed every survey (Compare, the archive view and the briefing
+ * need them all); not only the one on screen.
+ */
 export async function waitForAnalysis(page: Page): Promise<void> {
   await page.waitForSelector('[data-analysis-status="ready"]', { timeout: 90_000 });
 }

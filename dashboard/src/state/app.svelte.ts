@@ -34,6 +34,12 @@ export interface AppOptions {
 
 const NO_STRETCH: BrushedStretch = { km: [], paths: [] };
 
+/** Calls `f` after the next frame is drawn (or on the next task where there are no frames, e.g. Node). */
+function afterNextFrame(f: () => void): void {
+  if (typeof requestAnimationFrame === "function") requestAnimationFrame(() => setTimeout(f, 0));
+  else setTimeout(f, 0);
+}
+
 /** A line the draw tool opens in editing mode (a new object opens it again). */
 export interface DrawRequest {
   vertices: Array<[number, number]>;
@@ -54,6 +60,10 @@ export class AppState {
   /** Counts analysis jobs; events of a superseded job are dropped. */
   #job = 0;
   #brushAsk = 0;
+  /** false until the map's first idle when the background surveys wait for it; undefined when they do not. */
+  #mapIdle: boolean | undefined;
+  /** Lets the running job's background surveys start once the map is idle. */
+  #onMapIdle: (() => void) | undefined;
   /** The channel stretch where salinity lies in the brushed range (placed by the worker). */
   brushedStretch = $state.raw<BrushedStretch>(NO_STRETCH);
   /** Everything the map draws. */
@@ -135,8 +145,21 @@ export class AppState {
    * Starts the analysis worker now, so it downloads and compiles its code while the map starts
    * (App calls this before mounting the map; otherwise the first job starts it).
    */
-  startAnalysis(): void {
+  startAnalysis(options: { untilMapIdle?: boolean } = {}): void {
+    if (options.untilMapIdle) this.#mapIdle ??= false;
     this.#analysisApi();
+  }
+
+  /**
+   * The map has drawn its first view and gone idle. With `startAnalysis({ untilMapIdle: true })`
+   * the other surveys wait for this (as well as for the survey on screen to be drawn), so on a
+   * small machine they do not take the processor from the map's first frames.
+   */
+  mapIdle(): void {
+    this.#mapIdle = true;
+    const resume = this.#onMapIdle;
+    this.#onMapIdle = undefined;
+    resume?.();
   }
 
   /** The worker that analyses (started on first use). */
@@ -161,13 +184,29 @@ export class AppState {
     return this.#reader.api;
   }
 
-  /** Sends one job to the analysis worker; its events fill the results until a newer job starts. */
+  /**
+   * Sends one job to the analysis worker; its events fill the results until a newer job starts.
+   * The survey on screen is analysed first; once it is drawn (the frame after its result, when the
+   * panels have sent their own requests) and, if asked, the map is idle, the worker goes on with the
+   * other surveys.
+   */
   run(job: AnalysisJob): Promise<void> {
     const id = ++this.#job;
     this.results.begin(job.kind === "load");
+    let firstDrawn = false;
     const onEvent = proxyCallback((event: Parameters<AnalysisResults["receive"]>[0]) => {
       if (id !== this.#job) return;
       this.results.receive(event);
+      if (event.type === "analysis" && !firstDrawn) {
+        firstDrawn = true;
+        afterNextFrame(() => {
+          const resume = () => {
+            if (id === this.#job) void this.#analyser?.api.resumeBackground();
+          };
+          if (this.#mapIdle !== false) resume();
+          else this.#onMapIdle = resume;
+        });
+      }
       if (event.type === "loaded") {
         if (this.selection.surveyIndex >= event.surveys.length) this.selection.surveyIndex = 0;
         // Non-mixing variables (oxygen, chlorophyll...) are never the default constituent.
@@ -179,7 +218,7 @@ export class AppState {
       }
     });
     return this.#analysisApi()
-      .run(job, onEvent)
+      .run({ ...job, firstSurvey: this.selection.surveyIndex }, onEvent)
       .catch((error: unknown) => {
         if (id === this.#job) this.results.receive({ type: "error", message: String(error) });
       });
@@ -274,11 +313,15 @@ export class AppState {
     if (indices.length === this.results.surveys.length)
       return Promise.resolve({
         ...(this.results.comparison ? { comparison: this.results.comparison } : {}),
-        ...(this.results.comparisonReason ? { reason: this.results.comparisonReason } : {}),
+        ...(this.results.comparisonReason
+          ? { reason: this.results.comparisonReason }
+          : this.results.waitingText
+            ? { reason: this.results.waitingText }
+            : {}),
       });
     if (indices.length < 2) return Promise.resolve({ reason: "Choose two or more surveys to compare them." });
     if (!indices.every((i) => this.results.analyses[i] !== undefined) || !this.#analyser)
-      return Promise.resolve({ reason: "Waiting for the analysis of the chosen surveys…" });
+      return Promise.resolve({ reason: this.results.waitingText ?? "Waiting for the analysis of the chosen surveys…" });
     return this.#analyser.api.compare([...indices]);
   }
 

@@ -41,6 +41,18 @@ export class AnalysisResults {
   /** Errors reported by the worker, newest last. */
   errors = $state.raw<string[]>([]);
 
+  /** How many of the surveys have their analysis (the survey on screen comes first, the rest after). */
+  readonly analysedCount = $derived(this.analyses.filter((a) => a !== undefined).length);
+  /**
+   * "Analysing k of n surveys…" while a job still works on the surveys Compare, the archive and the
+   * briefing need; undefined once every survey is in (or nothing runs).
+   */
+  readonly waitingText: string | undefined = $derived(
+    (this.status === "analysing" || this.status === "reading") && this.surveys.length > 1
+      ? `Analysing the surveys: ${this.analysedCount} of ${this.surveys.length} done…`
+      : undefined,
+  );
+
   /** Folds one worker event into the results. */
   receive(message: AnalysisEvent): void {
     switch (message.type) {

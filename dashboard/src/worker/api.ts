@@ -36,6 +36,9 @@ function yieldToQueue(): Promise<void> {
   return new Promise((resolve) => setTimeout(resolve, 0));
 }
 
+/** Longest wait, after the first survey of a job, for the main thread's `resumeBackground`. */
+const FIRST_VIEW_WAIT_MS = 3000;
+
 function messageOf(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
 }
@@ -92,15 +95,47 @@ export function createWorkerApi(cache?: ResultCache) {
     };
   }
 
-  async function analyseAll(run: number, settings: AnalysisSettings, emit: (e: AnalysisEvent) => void) {
+  /** Opens the gate of the running job's background surveys (see `resumeBackground`). */
+  let openGate: (() => void) | undefined;
+
+  /**
+   * Waits, after the first survey of a job, until the main thread has drawn it and sent the
+   * requests its first view makes (speciation, brushed stretch), so those are answered before the
+   * background surveys hold the worker; at most FIRST_VIEW_WAIT_MS (the map's first idle may be part of it).
+   */
+  function firstViewGate(): Promise<void> {
+    return new Promise((resolve) => {
+      const timer = setTimeout(resolve, FIRST_VIEW_WAIT_MS);
+      openGate = () => {
+        clearTimeout(timer);
+        resolve();
+      };
+    });
+  }
+
+  /**
+   * Analyses every held survey: `first` (the survey on screen) first, then the others in order,
+   * yielding between surveys so a newer job, a speciation request or the first view's requests
+   * are answered in between. With `gate` the background surveys wait for `resumeBackground`.
+   */
+  async function analyseAll(
+    run: number,
+    settings: AnalysisSettings,
+    emit: (e: AnalysisEvent) => void,
+    first: number,
+    gate: boolean,
+  ) {
     const { surveys } = inputs;
     const total = surveys.length;
-    for (let i = 0; i < total; i++) {
-      emit({ type: "progress", stage: `Analysing ${surveys[i].name}`, done: i * 100, total: total * 100 });
+    const start = first >= 0 && first < total ? first : 0;
+    const order = [start, ...surveys.map((_, i) => i).filter((i) => i !== start)];
+    for (const [k, i] of order.entries()) {
+      const name = surveys[i].name;
+      const stage = total > 1 ? `Analysing survey ${k + 1} of ${total}, ${name}` : `Analysing ${name}`;
+      emit({ type: "progress", stage, done: k * 100, total: total * 100 });
       await yieldToQueue();
       if (run !== latestRun) return;
       try {
-        const name = surveys[i].name;
         const key = cache ? await cache.key(cacheParts(surveys[i], settings)) : undefined;
         const stored = key ? await cache!.get(key) : undefined;
         if (run !== latestRun) return;
@@ -109,8 +144,8 @@ export function createWorkerApi(cache?: ResultCache) {
           analyse(inputs, surveys[i], settings, (fraction, label) =>
             emit({
               type: "progress",
-              stage: `${name}: ${label}`,
-              done: Math.round((i + fraction) * 100),
+              stage: `${stage}: ${label}`,
+              done: Math.round((k + fraction) * 100),
               total: total * 100,
             }),
           );
@@ -118,7 +153,11 @@ export function createWorkerApi(cache?: ResultCache) {
         analyses[i] = analysis;
         emit({ type: "analysis", surveyIndex: i, analysis, overlay });
       } catch (error) {
-        emit({ type: "error", message: `Survey "${surveys[i].name}": ${messageOf(error)}` });
+        emit({ type: "error", message: `Survey "${name}": ${messageOf(error)}` });
+      }
+      if (gate && k === 0 && total > 1) {
+        await firstViewGate();
+        if (run !== latestRun) return;
       }
     }
     if (total >= 2) emit(compareAll(analyses));
@@ -128,8 +167,9 @@ export function createWorkerApi(cache?: ResultCache) {
 
   return {
     /**
-     * Runs one analysis job, reporting through `onEvent`. A newer call supersedes this one: its
-     * remaining surveys are not analysed (the promise still resolves).
+     * Runs one analysis job, reporting through `onEvent`: the survey `job.firstSurvey` (the one
+     * on screen) first, then the others. A newer call supersedes this one: its remaining surveys
+     * are not analysed (the promise still resolves).
      */
     async run(job: AnalysisJob, onEvent: (event: AnalysisEvent) => void): Promise<void> {
       const run = ++latestRun;
@@ -172,10 +212,19 @@ export function createWorkerApi(cache?: ResultCache) {
             ...(inputs.offeredCenterline ? { offeredCenterline: inputs.offeredCenterline as object } : {}),
           });
         }
-        await analyseAll(run, job.settings, emit);
+        await analyseAll(run, job.settings, emit, job.firstSurvey ?? 0, job.firstSurvey !== undefined);
       } catch (error) {
         emit({ type: "error", message: messageOf(error) });
       }
+    },
+
+    /**
+     * The main thread has drawn the first survey of the running job and sent its first view's
+     * requests: the background surveys may start (before FIRST_VIEW_WAIT_MS has passed).
+     */
+    resumeBackground(): void {
+      openGate?.();
+      openGate = undefined;
     },
 
     /**

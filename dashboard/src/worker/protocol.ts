@@ -59,16 +59,27 @@ export type { UnderwayRequest, UnderwayResult, UnderwayPoints } from "./underway
 /** A survey file as given to the worker: text, or bytes (netCDF). */
 export type SourceFile = TextFile | { name: string; bytes: Uint8Array };
 
-/** One analysis job. A newer job supersedes an older one (the worker stops between steps). */
-export type AnalysisJob =
+/**
+ * Which survey a job analyses first. With `firstSurvey` (the survey on screen) the worker posts it,
+ * then waits for `resumeBackground` (the first view drawn; at most 3 s) before the others;
+ * without it the surveys are analysed in order without a pause.
+ */
+export interface JobOrder {
+  firstSurvey?: number;
+}
+
+/** One analysis job. A newer job supersedes an older one (the worker stops between surveys). */
+export type AnalysisJob = JobOrder &
   /** Read survey files and a centerline, then analyse every survey. */
-  | { kind: "load"; surveys: SourceFile[]; centerline?: TextFile; settings: AnalysisSettings }
-  /** Re-analyse the surveys held with new settings. */
-  | { kind: "analyze"; settings: AnalysisSettings }
-  /** Replace the channel centerline (e.g. one drawn on the map) and re-analyse every survey. */
-  | { kind: "centerline"; centerline: TextFile; settings: AnalysisSettings }
-  /** Surveys already read (an import or a restored workspace): replace the held set and analyse. */
-  | { kind: "setSurveys"; surveys: Survey[]; centerline?: TextFile; settings: AnalysisSettings };
+  (
+    | { kind: "load"; surveys: SourceFile[]; centerline?: TextFile; settings: AnalysisSettings }
+    /** Re-analyse the surveys held with new settings. */
+    | { kind: "analyze"; settings: AnalysisSettings }
+    /** Replace the channel centerline (e.g. one drawn on the map) and re-analyse every survey. */
+    | { kind: "centerline"; centerline: TextFile; settings: AnalysisSettings }
+    /** Surveys already read (an import or a restored workspace): replace the held set and analyse. */
+    | { kind: "setSurveys"; surveys: Survey[]; centerline?: TextFile; settings: AnalysisSettings }
+  );
 
 /** What an analysis job reports while it runs, in order: loaded, progress…, analysis…, done. */
 export type AnalysisEvent =
