@@ -1,14 +1,12 @@
 // The offline world land (Natural Earth, public domain, from the world-atlas npm package): not fetched
 // with the first page (the demo has its own invented coast), drawn around San Francisco Bay once the
 // real cruise export is imported, named in the map attribution, and switched off from the settings.
-import { copyFileSync, existsSync } from "node:fs";
-import { readFile } from "node:fs/promises";
+import { copyFileSync } from "node:fs";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
   openReadyDashboard,
-  REPO_ROOT,
   SCREENSHOT_DIR,
   screenshot,
   settle,
@@ -16,19 +14,10 @@ import {
   waitForAnalysis,
   type Session,
 } from "./browser.ts";
+import { BAY_CRUISE_2018, BAY_DIR, BAY_STATIONS, BAY_UNITLESS, bayFileInput, bayFilesPresent } from "./bayFiles.ts";
 import { decodePng } from "./pixels.ts";
 
-// The raw 2018 cruise export of the USGS San Francisco Bay water-quality program and its station table
-// (Schraga & Cloern, 2017, Sci. Data 4:170098; ../shared/data/usgs-sfbay-2016-2022/SOURCE.md), read at
-// test time, never copied into the repository.
-const BAY_DIR = join(REPO_ROOT, "..", "shared", "data", "usgs-sfbay-2016-2022");
-const CRUISE = "2018SanFranciscoBayWaterQualityData.csv";
-const STATIONS = "USGSSFBayStations_from_xlsx.csv";
-const present = existsSync(join(BAY_DIR, CRUISE)) && existsSync(join(BAY_DIR, STATIONS));
-if (!present) console.warn(`basemapWorld.e2e: skipped, ${BAY_DIR} is absent`);
-
-/** The nutrient columns whose headers carry no unit: µmol/L (SOURCE.md). */
-const UNITLESS = ["Silicate", "Nitrate_+_Nitrite", "Phosphate", "Ammonium", "Nitrite"];
+if (!bayFilesPresent) console.warn(`basemapWorld.e2e: skipped, ${BAY_DIR} is absent`);
 
 // Probe points [lon, lat] (common practice: read off any chart of the bay, away from the sampled channel).
 const LAND = { "Berkeley Hills": [-122.22, 37.87], "Marin, north of Sausalito": [-122.53, 37.9] } as const;
@@ -77,10 +66,6 @@ function patchColour(png: ReturnType<typeof decodePng>, x: number, y: number): [
 const near = (a: [number, number, number], b: [number, number, number]) =>
   Math.max(...a.map((v, i) => Math.abs(v - b[i]!))) <= 12;
 
-async function fileInput(name: string) {
-  return { name, mimeType: "text/csv", buffer: await readFile(join(BAY_DIR, name)) };
-}
-
 describe.skipIf(skipBrowser)("the first page load does not fetch the world land", () => {
   let s: Session;
   beforeAll(async () => {
@@ -107,7 +92,7 @@ describe.skipIf(skipBrowser)("the first page load does not fetch the world land"
   });
 });
 
-describe.skipIf(skipBrowser || !present)("world land around San Francisco Bay after an import", () => {
+describe.skipIf(skipBrowser || !bayFilesPresent)("world land around San Francisco Bay after an import", () => {
   let s: Session;
   const landRequests: string[] = [];
 
@@ -125,10 +110,10 @@ describe.skipIf(skipBrowser || !present)("world land around San Francisco Bay af
   it("importing the cruise export and its station table draws Natural Earth land around the bay", async () => {
     await s.page
       .locator('[data-testid="import-input"]')
-      .setInputFiles([await fileInput(CRUISE), await fileInput(STATIONS)]);
+      .setInputFiles([await bayFileInput(BAY_CRUISE_2018), await bayFileInput(BAY_STATIONS)]);
     const dialog = s.page.locator('[data-testid="mapping-dialog"][open]');
     await dialog.waitFor({ timeout: 60_000 });
-    for (const header of UNITLESS) {
+    for (const header of BAY_UNITLESS) {
       const unit = dialog.locator(`tr[data-header="${header}"] input[aria-label^="Unit"]`);
       if ((await unit.count()) === 0) continue;
       if ((await unit.inputValue()).trim() === "") await unit.fill("µmol/L");
