@@ -4,7 +4,7 @@ import { fitPreparedSpline, prepareSmoothingSpline } from "../stats/smoothingSpl
 import { mergeKnots } from "../stats/knotData.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import { intervalBc95 } from "../stats/biasCorrectedInterval.ts";
-import { fitTwoPhase, seawardLine, twoPhaseAt, twoPhaseDesign, twoPhaseMaximum } from "./twoPhase.ts";
+import { fitTwoPhase, seawardLine, twoPhaseDesign, twoPhaseMaximum, twoPhaseValue } from "./twoPhase.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
@@ -91,6 +91,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const mS = nan();
   const mX = nan();
   const brk = nan();
+  // Replicate curves column by column (curves[g·D + d]): the band's percentiles read one contiguous column.
   const curves = new Float64Array(D * G).fill(Number.NaN);
   const ys = new Float64Array(n);
   const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
@@ -118,7 +119,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     if (!fit) continue;
     const [ic, sl] = seawardLine(fit);
     const cr =
-      (b.riverOverride ? b.riverOverride.conc + b.riverOverride.sd * z() : twoPhaseAt(fit, sr)[0]) +
+      (b.riverOverride ? b.riverOverride.conc + b.riverOverride.sd * z() : twoPhaseValue(fit, sr)) +
       (b.riverExtraSd ? b.riverExtraSd * z() : 0);
     usable++;
     eff[d] = ic + sl * sr;
@@ -128,13 +129,13 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     const m = twoPhaseMaximum(fit, sMax);
     if (m !== undefined) {
       mS[d] = m;
-      mX[d] = twoPhaseAt(fit, m)[0] - (cr + ((cs - cr) * (m - sr)) / (b.sea.salinity - sr));
+      mX[d] = twoPhaseValue(fit, m) - (cr + ((cs - cr) * (m - sr)) / (b.sea.salinity - sr));
     }
     if (!prepared) continue;
     const knots = mergeKnots(b.x, ys, b.w, b.tieTol, ws);
     const spline = fitPreparedSpline(prepared, knots.y, splineWs);
     evaluateSplineGrid(spline, b.grid, f, undefined, d2);
-    curves.set(f, d * G);
+    for (let g = 0; g < G; g++) curves[g * D + d] = f[g]!;
     const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity, b.zoneSign);
     if (zone) {
       zLo[d] = zone.from;
@@ -146,8 +147,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const col = new Float64Array(D);
   for (let g = 0; g < G; g++) {
     let k = 0;
-    for (let d = 0; d < D; d++) {
-      const v = curves[d * G + g]!;
+    for (let d = 0, o = g * D; d < D; d++) {
+      const v = curves[o + d]!;
       if (Number.isFinite(v)) col[k++] = v;
     }
     bandLower[g] = percentileSelect(col, k, 0.025) ?? Number.NaN;

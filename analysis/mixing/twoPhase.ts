@@ -316,13 +316,27 @@ export function fitTwoPhase(
 
 /** Value, dC/dS and d²C/dS² of the two-phase fit at salinity s. */
 export function twoPhaseAt(f: TwoPhaseFit, s: number): [number, number, number] {
-  const [a0, a1, b2, b3] = f.coef;
+  const [, a1, b2, b3] = f.coef;
   const R = f.range;
   const h = Math.max(0, f.breakSalinity - s) / R;
-  const v = a0 + (a1 * (s - f.sMin)) / R + b2 * h * h + b3 * h * h * h;
   const d1 = (a1 - 2 * b2 * h - 3 * b3 * h * h) / R;
-  const d2 = ((2 * b2 + 6 * b3 * h) / (R * R)) * (h > 0 ? 1 : 0);
-  return [v, d1, d2];
+  return [twoPhaseValue(f, s), d1, twoPhaseCurvature(f, s)];
+}
+
+/** Value of the two-phase fit at salinity s (the first entry of {@link twoPhaseAt}, without an array). */
+export function twoPhaseValue(f: TwoPhaseFit, s: number): number {
+  const c = f.coef;
+  const R = f.range;
+  const h = Math.max(0, f.breakSalinity - s) / R;
+  return c[0] + (c[1] * (s - f.sMin)) / R + c[2] * h * h + c[3] * h * h * h;
+}
+
+/** d²C/dS² of the two-phase fit at salinity s (the third entry of {@link twoPhaseAt}). */
+function twoPhaseCurvature(f: TwoPhaseFit, s: number): number {
+  const c = f.coef;
+  const R = f.range;
+  const h = Math.max(0, f.breakSalinity - s) / R;
+  return ((2 * c[2] + 6 * c[3] * h) / (R * R)) * (h > 0 ? 1 : 0);
 }
 
 /** The seaward line [intercept, slope] in C = intercept + slope·S (the tangent at S_b). */
@@ -341,26 +355,35 @@ export function twoPhaseMaximum(f: TwoPhaseFit, sMax: number): number | undefine
   if (f.linear) return undefined;
   const [, a1, b2, b3] = f.coef;
   const hMax = (f.breakSalinity - f.sMin) / f.range;
-  const roots: number[] = [];
+  // Roots h of the derivative (scaled distance below S_b), at most two, in that order.
+  let roots = 0,
+    h0 = 0,
+    h1 = 0;
   if (Math.abs(b3) > 1e-14 * (Math.abs(b2) + Math.abs(a1))) {
     const disc = 4 * b2 * b2 + 12 * b3 * a1;
     if (disc >= 0) {
       const sq = Math.sqrt(disc);
-      roots.push((-2 * b2 + sq) / (6 * b3), (-2 * b2 - sq) / (6 * b3));
+      h0 = (-2 * b2 + sq) / (6 * b3);
+      h1 = (-2 * b2 - sq) / (6 * b3);
+      roots = 2;
     }
-  } else if (b2 !== 0) roots.push(a1 / (2 * b2));
+  } else if (b2 !== 0) {
+    h0 = a1 / (2 * b2);
+    roots = 1;
+  }
   let best: number | undefined;
   let bestV = Number.NEGATIVE_INFINITY;
-  for (const h of roots) {
+  for (let r = 0; r < roots; r++) {
+    const h = r === 0 ? h0 : h1;
     if (!(h > 0 && h < hMax)) continue;
     const s = f.breakSalinity - h * f.range;
-    const [v, , d2] = twoPhaseAt(f, s);
-    if (d2 < 0 && v > bestV) {
+    const v = twoPhaseValue(f, s);
+    if (twoPhaseCurvature(f, s) < 0 && v > bestV) {
       best = s;
       bestV = v;
     }
   }
   if (best === undefined) return undefined;
-  const ends = Math.max(twoPhaseAt(f, f.sMin)[0], twoPhaseAt(f, sMax)[0]);
+  const ends = Math.max(twoPhaseValue(f, f.sMin), twoPhaseValue(f, sMax));
   return bestV > ends ? best : undefined;
 }
