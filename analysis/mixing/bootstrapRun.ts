@@ -2,6 +2,7 @@ import { randomLcg, randomNormal } from "d3-random";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitPreparedSpline, prepareSmoothingSpline } from "../stats/smoothingSpline.ts";
 import { mergeKnots } from "../stats/knotData.ts";
+import { evaluatePlannedGrid, planSplineGrid } from "../stats/splineGridPlan.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import { intervalBc95 } from "../stats/biasCorrectedInterval.ts";
 import { fitTwoPhase, seawardLine, twoPhaseDesign, twoPhaseMaximum, twoPhaseValue } from "./twoPhase.ts";
@@ -111,6 +112,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   // So are the spline's merged knots, weights and λ: its band system is factored once.
   const knots0 = mergeKnots(b.x, b.yHat, b.w, b.tieTol, ws);
   const prepared = knots0.n >= 4 ? prepareSmoothingSpline(knots0, b.lambda) : undefined;
+  // And the replicate curves' knots on the grid: interval and weights of every grid point.
+  const plan = prepared && planSplineGrid(prepared.x, prepared.n, b.grid);
   let usable = 0;
   for (let d = 0; d < D; d++) {
     for (let i = 0; i < n; i++) ys[i] = b.yHat[i]! + b.sigmaEff[i]! * z();
@@ -134,7 +137,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     if (!prepared) continue;
     const knots = mergeKnots(b.x, ys, b.w, b.tieTol, ws);
     const spline = fitPreparedSpline(prepared, knots.y, splineWs);
-    evaluateSplineGrid(spline, b.grid, f, undefined, d2);
+    if (plan) evaluatePlannedGrid(plan, spline.values, spline.secondDerivs, f, d2);
+    else evaluateSplineGrid(spline, b.grid, f, undefined, d2);
     for (let g = 0; g < G; g++) curves[g * D + d] = f[g]!;
     const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity, b.zoneSign);
     if (zone) {
