@@ -1,7 +1,7 @@
 import { randomLcg, randomNormal } from "d3-random";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitPreparedSpline, prepareSmoothingSpline } from "../stats/smoothingSpline.ts";
-import { mergeKnots } from "../stats/knotData.ts";
+import { mergeKnotResponses, mergeKnots } from "../stats/knotData.ts";
 import { evaluatePlannedGrid, planSplineGrid } from "../stats/splineGridPlan.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import { intervalBc95 } from "../stats/biasCorrectedInterval.ts";
@@ -110,7 +110,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   // The station design is fixed: its break-search sums are built once for all replicates.
   const design = twoPhaseDesign(b.x, b.w);
   // So are the spline's merged knots, weights and λ: its band system is factored once.
-  const knots0 = mergeKnots(b.x, b.yHat, b.w, b.tieTol, ws);
+  const knotOf = new Int32Array(n);
+  const knots0 = mergeKnots(b.x, b.yHat, b.w, b.tieTol, ws, knotOf);
   const prepared = knots0.n >= 4 ? prepareSmoothingSpline(knots0, b.lambda) : undefined;
   // And the replicate curves' knots on the grid: interval and weights of every grid point.
   const plan = prepared && planSplineGrid(prepared.x, prepared.n, b.grid);
@@ -135,8 +136,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
       mX[d] = twoPhaseValue(fit, m) - (cr + ((cs - cr) * (m - sr)) / (b.sea.salinity - sr));
     }
     if (!prepared) continue;
-    const knots = mergeKnots(b.x, ys, b.w, b.tieTol, ws);
-    const spline = fitPreparedSpline(prepared, knots.y, splineWs);
+    mergeKnotResponses(knotOf, b.w, ys, prepared.w, prepared.n, ws.y);
+    const spline = fitPreparedSpline(prepared, ws.y, splineWs);
     if (plan) evaluatePlannedGrid(plan, spline.values, spline.secondDerivs, f, d2);
     else evaluateSplineGrid(spline, b.grid, f, undefined, d2);
     for (let g = 0; g < G; g++) curves[g * D + d] = f[g]!;
