@@ -2,6 +2,7 @@ import jStat from "jstat";
 import { fUpperP } from "../stats/distributions.ts";
 import {
   breakRss,
+  fitLine,
   gridTerms,
   termsRss,
   TERMS,
@@ -176,7 +177,7 @@ export function fitTwoPhase(
   if (!ds) return undefined;
   const { n, xs, sMin, sMax, range } = ds;
   const c = COEF;
-  const rssLin = fitAt(x, y, w, sMin, range, sMin, 2, c);
+  const rssLin = fitLine(ds, y, c);
   if (!Number.isFinite(rssLin)) return undefined;
   const line: TwoPhaseFit = {
     breakSalinity: sMin,

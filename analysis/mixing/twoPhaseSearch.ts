@@ -28,6 +28,12 @@ export interface TwoPhaseDesign {
   rssLine: number;
   /** Determinant of the straight line's normal matrix [[Σw, Σwt], [Σwt, Σwt²]]. */
   det11: number;
+  /** Scaled salinities t of the stations (as xs). */
+  ts: Float64Array;
+  /** The straight line's normal-matrix entries Σw, Σw·t, Σ(w·t)·t summed station by station ({@link fitLine}). */
+  lineA00: number;
+  lineA01: number;
+  lineA11: number;
   /** Cached design terms of the grid of candidate breaks starting at gridLo ({@link gridTerms}). */
   grid?: Float64Array;
   gridLo?: number;
@@ -73,7 +79,69 @@ export function twoPhaseDesign(x: ArrayLike<number>, w: ArrayLike<number>): TwoP
   const e = n * 7;
   const det11 = p[e]! * p[e + 2]! - p[e + 1]! * p[e + 1]!;
   const q = new Float64Array((n + 1) * 4);
-  return { xs, ws, idx, n, sMin, sMax, range, p, q, ryy: 0, ybar: 0, line0: 0, line1: 0, rssLine: 0, det11 };
+  const ts = new Float64Array(n);
+  let lineA00 = 0,
+    lineA01 = 0,
+    lineA11 = 0;
+  for (let i = 0; i < n; i++) {
+    const t = (xs[i]! - sMin) * inv;
+    const wt = ws[i]! * t;
+    ts[i] = t;
+    lineA00 += ws[i]!;
+    lineA01 += wt;
+    lineA11 += wt * t;
+  }
+  return {
+    xs,
+    ws,
+    idx,
+    n,
+    sMin,
+    sMax,
+    range,
+    p,
+    q,
+    ryy: 0,
+    ybar: 0,
+    line0: 0,
+    line1: 0,
+    rssLine: 0,
+    det11,
+    ts,
+    lineA00,
+    lineA01,
+    lineA11,
+  };
+}
+
+/**
+ * Weighted straight-line fit C = α₀ + α₁·t of a response y (indexed like the caller's x) on the
+ * design: the normal equations with the design's response-free sums, solved by {@link solveNormal},
+ * and the RSS from the residuals (the same sums in the same order as a direct fit).
+ *
+ * @returns the weighted RSS with α₀, α₁ in coef[0], coef[1], or NaN when the equations are singular
+ */
+export function fitLine(d: TwoPhaseDesign, y: ArrayLike<number>, coef: Float64Array): number {
+  const { n, ws, ts, idx, xs, sMin } = d;
+  let r0 = 0,
+    r1 = 0;
+  for (let i = 0; i < n; i++) {
+    const wi = ws[i]!;
+    const yi = y[idx[i]!]!;
+    r0 += wi * yi;
+    r1 += wi * ts[i]! * yi;
+  }
+  putNormal(2, d.lineA00, d.lineA01, d.lineA11, 0, 0, 0, 0, 0, 0, 0, r0, r1, 0, 0);
+  coef[0] = coef[1] = coef[2] = coef[3] = 0;
+  if (!solveNormal(2, coef)) return Number.NaN;
+  const c0 = coef[0]!,
+    c1 = coef[1]! * (1 / d.range);
+  let rss = 0;
+  for (let i = 0; i < n; i++) {
+    const e = y[idx[i]!]! - c0 - c1 * (xs[i]! - sMin);
+    rss += ws[i]! * e * e;
+  }
+  return rss;
 }
 
 /**
