@@ -131,9 +131,8 @@ export function fitLine(d: TwoPhaseDesign, y: ArrayLike<number>, coef: Float64Ar
     r0 += wi * yi;
     r1 += wi * ts[i]! * yi;
   }
-  putNormal(2, d.lineA00, d.lineA01, d.lineA11, 0, 0, 0, 0, 0, 0, 0, r0, r1, 0, 0);
   coef[0] = coef[1] = coef[2] = coef[3] = 0;
-  if (!solveNormal(2, coef)) return Number.NaN;
+  if (!solveNormal2(d.lineA00, d.lineA01, d.lineA11, r0, r1, coef)) return Number.NaN;
   const c0 = coef[0]!,
     c1 = coef[1]! * (1 / d.range);
   let rss = 0;
@@ -208,6 +207,56 @@ export function solveNormal(k: number, out: Float64Array): boolean {
     if (!Number.isFinite(out[i]!)) return false;
   }
   return true;
+}
+
+/**
+ * {@link solveNormal} for k = 2 ([[a00, a01], [a01, a11]]·β = [r0, r1]) written out in locals: the
+ * same pivot choice, singularity test and operations in the same order.
+ */
+export function solveNormal2(
+  a00: number,
+  a01: number,
+  a11: number,
+  r0: number,
+  r1: number,
+  out: Float64Array,
+): boolean {
+  // Rows [m00 m01 m02] and [m10 m11 m12] of the augmented matrix.
+  let m00 = a00,
+    m01 = a01,
+    m02 = r0,
+    m10 = a01,
+    m11 = a11,
+    m12 = r1;
+  // Column 0: partial pivoting (a strictly larger |entry| swaps), tested against the current M[0].
+  const swap = Math.abs(m10) > Math.abs(m00);
+  const p0 = swap ? m10 : m00;
+  if (!(Math.abs(p0) > 1e-13 * (Math.abs(m00) + 1e-300))) return false;
+  if (swap) {
+    m10 = m00;
+    m00 = p0;
+    let t = m01;
+    m01 = m11;
+    m11 = t;
+    t = m02;
+    m02 = m12;
+    m12 = t;
+  }
+  const f1 = m10 / p0;
+  // (The eliminated entries themselves are not needed again.)
+  if (f1 !== 0) {
+    m11 = m11 - f1 * m01;
+    m12 = m12 - f1 * m02;
+  }
+  // Column 1.
+  const p1 = m11;
+  if (!(Math.abs(p1) > 1e-13 * (Math.abs(m00) + 1e-300))) return false;
+  const f0 = m01 / p1;
+  if (f0 !== 0) m02 = m02 - f0 * m12;
+  out[0] = m02 / m00;
+  if (!Number.isFinite(out[0]!)) return false;
+  out[1] = m12 / m11;
+  return Number.isFinite(out[1]!);
 }
 
 /** Writes the symmetric k×k normal equations with right-hand side into `M`. */
