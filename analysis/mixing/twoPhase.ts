@@ -69,6 +69,21 @@ function fPCached(F: number, d1: number, d2: number): number {
   return F > c ? 0 : 1;
 }
 
+/** The fit that keeps the straight line C = α₀ + α₁·t through all stations. */
+function lineResult(a0: number, a1: number, sMin: number, range: number, rss: number): TwoPhaseFit {
+  return {
+    breakSalinity: sMin,
+    linear: true,
+    coef: [a0, a1, 0, 0],
+    sMin,
+    range,
+    rss,
+    rssLinear: rss,
+    params: 2,
+    pCurvature: 1,
+  };
+}
+
 /** Weighted fit at a fixed break (k = 2 line, 3 with h², 4 with h² and h³) by direct sums; RSS or NaN. */
 function fitAt(
   x: ArrayLike<number>,
@@ -179,23 +194,15 @@ export function fitTwoPhase(
   const c = COEF;
   const rssLin = fitLine(ds, y, c);
   if (!Number.isFinite(rssLin)) return undefined;
-  const line: TwoPhaseFit = {
-    breakSalinity: sMin,
-    linear: true,
-    coef: [c[0]!, c[1]!, 0, 0],
-    sMin,
-    range,
-    rss: rssLin,
-    rssLinear: rssLin,
-    params: 2,
-    pCurvature: 1,
-  };
+  // The straight-line result is built only when it is returned (the bootstrap refits thousands of times).
+  const lc0 = c[0]!,
+    lc1 = c[1]!;
   let syy = 0;
   for (let i = 0; i < n; i++) {
     const yi = y[ds.idx[i]!]!;
     syy += ds.ws[i]! * yi * yi;
   }
-  if (n < 5 || rssLin <= 1e-18 * syy) return line;
+  if (n < 5 || rssLin <= 1e-18 * syy) return lineResult(lc0, lc1, sMin, range, rssLin);
   // Candidate breaks: above the 3rd distinct station (≥ 3 distinct salinities landward, so the
   // landward curvature is never set by one station or by two near-tied ones), up to S_max.
   // The cubic term needs a 4th distinct station landward of the break.
@@ -211,7 +218,7 @@ export function fitTwoPhase(
       break;
     }
   }
-  if (!(third < sMax)) return line;
+  if (!(third < sMax)) return lineResult(lc0, lc1, sMin, range, rssLin);
   const lo = third + 1e-9 * range;
   if (!(fourth < sMax)) fourth = sMax;
   loadResponse(ds, y);
@@ -281,10 +288,10 @@ export function fitTwoPhase(
       bestB = xi;
     }
   }
-  if (!Number.isFinite(best)) return line;
+  if (!Number.isFinite(best)) return lineResult(lc0, lc1, sMin, range, rssLin);
   const k = fourth < bestB ? 4 : 3;
   best = fitAt(x, y, w, sMin, range, bestB, k, c);
-  if (!Number.isFinite(best)) return line;
+  if (!Number.isFinite(best)) return lineResult(lc0, lc1, sMin, range, rssLin);
   const extra = k - 2 + 1;
   const dfRes = n - k - 1;
   let p = 1;
@@ -297,6 +304,7 @@ export function fitTwoPhase(
     }
   }
   if (!(p < TWO_PHASE_ALPHA)) {
+    const line = lineResult(lc0, lc1, sMin, range, rssLin);
     line.pCurvature = p;
     // The alternative is for the full-data fit's bootstrap; replicates (exactP false) never use it.
     if (exactP) line.alternative = { breakSalinity: bestB, coef: [c[0]!, c[1]!, c[2]!, c[3]!] };
