@@ -1,10 +1,11 @@
 import { randomLcg, randomNormal } from "d3-random";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitPreparedSpline, prepareSmoothingSpline } from "../stats/smoothingSpline.ts";
-import { mergeKnots } from "../stats/knotData.ts";
+import { mergeKnotResponses, mergeKnots } from "../stats/knotData.ts";
+import { evaluatePlannedGrid, planSplineGrid } from "../stats/splineGridPlan.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import { intervalBc95 } from "../stats/biasCorrectedInterval.ts";
-import { fitTwoPhase, seawardLine, twoPhaseAt, twoPhaseDesign, twoPhaseMaximum } from "./twoPhase.ts";
+import { fitTwoPhase, seawardLine, twoPhaseDesign, twoPhaseMaximum, twoPhaseValue } from "./twoPhase.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
@@ -91,6 +92,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const mS = nan();
   const mX = nan();
   const brk = nan();
+  // Replicate curves column by column (curves[g·D + d]): the band's percentiles read one contiguous column.
   const curves = new Float64Array(D * G).fill(Number.NaN);
   const ys = new Float64Array(n);
   const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
@@ -108,8 +110,11 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   // The station design is fixed: its break-search sums are built once for all replicates.
   const design = twoPhaseDesign(b.x, b.w);
   // So are the spline's merged knots, weights and λ: its band system is factored once.
-  const knots0 = mergeKnots(b.x, b.yHat, b.w, b.tieTol, ws);
+  const knotOf = new Int32Array(n);
+  const knots0 = mergeKnots(b.x, b.yHat, b.w, b.tieTol, ws, knotOf);
   const prepared = knots0.n >= 4 ? prepareSmoothingSpline(knots0, b.lambda) : undefined;
+  // And the replicate curves' knots on the grid: interval and weights of every grid point.
+  const plan = prepared && planSplineGrid(prepared.x, prepared.n, b.grid);
   let usable = 0;
   for (let d = 0; d < D; d++) {
     for (let i = 0; i < n; i++) ys[i] = b.yHat[i]! + b.sigmaEff[i]! * z();
@@ -118,7 +123,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     if (!fit) continue;
     const [ic, sl] = seawardLine(fit);
     const cr =
-      (b.riverOverride ? b.riverOverride.conc + b.riverOverride.sd * z() : twoPhaseAt(fit, sr)[0]) +
+      (b.riverOverride ? b.riverOverride.conc + b.riverOverride.sd * z() : twoPhaseValue(fit, sr)) +
       (b.riverExtraSd ? b.riverExtraSd * z() : 0);
     usable++;
     eff[d] = ic + sl * sr;
@@ -128,13 +133,14 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     const m = twoPhaseMaximum(fit, sMax);
     if (m !== undefined) {
       mS[d] = m;
-      mX[d] = twoPhaseAt(fit, m)[0] - (cr + ((cs - cr) * (m - sr)) / (b.sea.salinity - sr));
+      mX[d] = twoPhaseValue(fit, m) - (cr + ((cs - cr) * (m - sr)) / (b.sea.salinity - sr));
     }
     if (!prepared) continue;
-    const knots = mergeKnots(b.x, ys, b.w, b.tieTol, ws);
-    const spline = fitPreparedSpline(prepared, knots.y, splineWs);
-    evaluateSplineGrid(spline, b.grid, f, undefined, d2);
-    curves.set(f, d * G);
+    mergeKnotResponses(knotOf, b.w, ys, prepared.w, prepared.n, ws.y);
+    const spline = fitPreparedSpline(prepared, ws.y, splineWs);
+    if (plan) evaluatePlannedGrid(plan, spline.values, spline.secondDerivs, f, d2);
+    else evaluateSplineGrid(spline, b.grid, f, undefined, d2);
+    for (let g = 0; g < G; g++) curves[g * D + d] = f[g]!;
     const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity, b.zoneSign);
     if (zone) {
       zLo[d] = zone.from;
@@ -146,8 +152,8 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const col = new Float64Array(D);
   for (let g = 0; g < G; g++) {
     let k = 0;
-    for (let d = 0; d < D; d++) {
-      const v = curves[d * G + g]!;
+    for (let d = 0, o = g * D; d < D; d++) {
+      const v = curves[o + d]!;
       if (Number.isFinite(v)) col[k++] = v;
     }
     bandLower[g] = percentileSelect(col, k, 0.025) ?? Number.NaN;

@@ -2,6 +2,7 @@ import jStat from "jstat";
 import { fUpperP } from "../stats/distributions.ts";
 import {
   breakRss,
+  fitLine,
   gridTerms,
   termsRss,
   TERMS,
@@ -66,6 +67,21 @@ function fPCached(F: number, d1: number, d2: number): number {
     CRIT.set(key, c);
   }
   return F > c ? 0 : 1;
+}
+
+/** The fit that keeps the straight line C = α₀ + α₁·t through all stations. */
+function lineResult(a0: number, a1: number, sMin: number, range: number, rss: number): TwoPhaseFit {
+  return {
+    breakSalinity: sMin,
+    linear: true,
+    coef: [a0, a1, 0, 0],
+    sMin,
+    range,
+    rss,
+    rssLinear: rss,
+    params: 2,
+    pCurvature: 1,
+  };
 }
 
 /** Weighted fit at a fixed break (k = 2 line, 3 with h², 4 with h² and h³) by direct sums; RSS or NaN. */
@@ -176,25 +192,17 @@ export function fitTwoPhase(
   if (!ds) return undefined;
   const { n, xs, sMin, sMax, range } = ds;
   const c = COEF;
-  const rssLin = fitAt(x, y, w, sMin, range, sMin, 2, c);
+  const rssLin = fitLine(ds, y, c);
   if (!Number.isFinite(rssLin)) return undefined;
-  const line: TwoPhaseFit = {
-    breakSalinity: sMin,
-    linear: true,
-    coef: [c[0]!, c[1]!, 0, 0],
-    sMin,
-    range,
-    rss: rssLin,
-    rssLinear: rssLin,
-    params: 2,
-    pCurvature: 1,
-  };
+  // The straight-line result is built only when it is returned (the bootstrap refits thousands of times).
+  const lc0 = c[0]!,
+    lc1 = c[1]!;
   let syy = 0;
   for (let i = 0; i < n; i++) {
     const yi = y[ds.idx[i]!]!;
     syy += ds.ws[i]! * yi * yi;
   }
-  if (n < 5 || rssLin <= 1e-18 * syy) return line;
+  if (n < 5 || rssLin <= 1e-18 * syy) return lineResult(lc0, lc1, sMin, range, rssLin);
   // Candidate breaks: above the 3rd distinct station (≥ 3 distinct salinities landward, so the
   // landward curvature is never set by one station or by two near-tied ones), up to S_max.
   // The cubic term needs a 4th distinct station landward of the break.
@@ -210,7 +218,7 @@ export function fitTwoPhase(
       break;
     }
   }
-  if (!(third < sMax)) return line;
+  if (!(third < sMax)) return lineResult(lc0, lc1, sMin, range, rssLin);
   const lo = third + 1e-9 * range;
   if (!(fourth < sMax)) fourth = sMax;
   loadResponse(ds, y);
@@ -280,10 +288,10 @@ export function fitTwoPhase(
       bestB = xi;
     }
   }
-  if (!Number.isFinite(best)) return line;
+  if (!Number.isFinite(best)) return lineResult(lc0, lc1, sMin, range, rssLin);
   const k = fourth < bestB ? 4 : 3;
   best = fitAt(x, y, w, sMin, range, bestB, k, c);
-  if (!Number.isFinite(best)) return line;
+  if (!Number.isFinite(best)) return lineResult(lc0, lc1, sMin, range, rssLin);
   const extra = k - 2 + 1;
   const dfRes = n - k - 1;
   let p = 1;
@@ -296,6 +304,7 @@ export function fitTwoPhase(
     }
   }
   if (!(p < TWO_PHASE_ALPHA)) {
+    const line = lineResult(lc0, lc1, sMin, range, rssLin);
     line.pCurvature = p;
     // The alternative is for the full-data fit's bootstrap; replicates (exactP false) never use it.
     if (exactP) line.alternative = { breakSalinity: bestB, coef: [c[0]!, c[1]!, c[2]!, c[3]!] };
@@ -316,13 +325,27 @@ export function fitTwoPhase(
 
 /** Value, dC/dS and d²C/dS² of the two-phase fit at salinity s. */
 export function twoPhaseAt(f: TwoPhaseFit, s: number): [number, number, number] {
-  const [a0, a1, b2, b3] = f.coef;
+  const [, a1, b2, b3] = f.coef;
   const R = f.range;
   const h = Math.max(0, f.breakSalinity - s) / R;
-  const v = a0 + (a1 * (s - f.sMin)) / R + b2 * h * h + b3 * h * h * h;
   const d1 = (a1 - 2 * b2 * h - 3 * b3 * h * h) / R;
-  const d2 = ((2 * b2 + 6 * b3 * h) / (R * R)) * (h > 0 ? 1 : 0);
-  return [v, d1, d2];
+  return [twoPhaseValue(f, s), d1, twoPhaseCurvature(f, s)];
+}
+
+/** Value of the two-phase fit at salinity s (the first entry of {@link twoPhaseAt}, without an array). */
+export function twoPhaseValue(f: TwoPhaseFit, s: number): number {
+  const c = f.coef;
+  const R = f.range;
+  const h = Math.max(0, f.breakSalinity - s) / R;
+  return c[0] + (c[1] * (s - f.sMin)) / R + c[2] * h * h + c[3] * h * h * h;
+}
+
+/** d²C/dS² of the two-phase fit at salinity s (the third entry of {@link twoPhaseAt}). */
+function twoPhaseCurvature(f: TwoPhaseFit, s: number): number {
+  const c = f.coef;
+  const R = f.range;
+  const h = Math.max(0, f.breakSalinity - s) / R;
+  return ((2 * c[2] + 6 * c[3] * h) / (R * R)) * (h > 0 ? 1 : 0);
 }
 
 /** The seaward line [intercept, slope] in C = intercept + slope·S (the tangent at S_b). */
@@ -341,26 +364,35 @@ export function twoPhaseMaximum(f: TwoPhaseFit, sMax: number): number | undefine
   if (f.linear) return undefined;
   const [, a1, b2, b3] = f.coef;
   const hMax = (f.breakSalinity - f.sMin) / f.range;
-  const roots: number[] = [];
+  // Roots h of the derivative (scaled distance below S_b), at most two, in that order.
+  let roots = 0,
+    h0 = 0,
+    h1 = 0;
   if (Math.abs(b3) > 1e-14 * (Math.abs(b2) + Math.abs(a1))) {
     const disc = 4 * b2 * b2 + 12 * b3 * a1;
     if (disc >= 0) {
       const sq = Math.sqrt(disc);
-      roots.push((-2 * b2 + sq) / (6 * b3), (-2 * b2 - sq) / (6 * b3));
+      h0 = (-2 * b2 + sq) / (6 * b3);
+      h1 = (-2 * b2 - sq) / (6 * b3);
+      roots = 2;
     }
-  } else if (b2 !== 0) roots.push(a1 / (2 * b2));
+  } else if (b2 !== 0) {
+    h0 = a1 / (2 * b2);
+    roots = 1;
+  }
   let best: number | undefined;
   let bestV = Number.NEGATIVE_INFINITY;
-  for (const h of roots) {
+  for (let r = 0; r < roots; r++) {
+    const h = r === 0 ? h0 : h1;
     if (!(h > 0 && h < hMax)) continue;
     const s = f.breakSalinity - h * f.range;
-    const [v, , d2] = twoPhaseAt(f, s);
-    if (d2 < 0 && v > bestV) {
+    const v = twoPhaseValue(f, s);
+    if (twoPhaseCurvature(f, s) < 0 && v > bestV) {
       best = s;
       bestV = v;
     }
   }
   if (best === undefined) return undefined;
-  const ends = Math.max(twoPhaseAt(f, f.sMin)[0], twoPhaseAt(f, sMax)[0]);
+  const ends = Math.max(twoPhaseValue(f, f.sMin), twoPhaseValue(f, sMax));
   return bestV > ends ? best : undefined;
 }

@@ -28,6 +28,12 @@ export interface TwoPhaseDesign {
   rssLine: number;
   /** Determinant of the straight line's normal matrix [[Σw, Σwt], [Σwt, Σwt²]]. */
   det11: number;
+  /** Scaled salinities t of the stations (as xs). */
+  ts: Float64Array;
+  /** The straight line's normal-matrix entries Σw, Σw·t, Σ(w·t)·t summed station by station ({@link fitLine}). */
+  lineA00: number;
+  lineA01: number;
+  lineA11: number;
   /** Cached design terms of the grid of candidate breaks starting at gridLo ({@link gridTerms}). */
   grid?: Float64Array;
   gridLo?: number;
@@ -73,7 +79,68 @@ export function twoPhaseDesign(x: ArrayLike<number>, w: ArrayLike<number>): TwoP
   const e = n * 7;
   const det11 = p[e]! * p[e + 2]! - p[e + 1]! * p[e + 1]!;
   const q = new Float64Array((n + 1) * 4);
-  return { xs, ws, idx, n, sMin, sMax, range, p, q, ryy: 0, ybar: 0, line0: 0, line1: 0, rssLine: 0, det11 };
+  const ts = new Float64Array(n);
+  let lineA00 = 0,
+    lineA01 = 0,
+    lineA11 = 0;
+  for (let i = 0; i < n; i++) {
+    const t = (xs[i]! - sMin) * inv;
+    const wt = ws[i]! * t;
+    ts[i] = t;
+    lineA00 += ws[i]!;
+    lineA01 += wt;
+    lineA11 += wt * t;
+  }
+  return {
+    xs,
+    ws,
+    idx,
+    n,
+    sMin,
+    sMax,
+    range,
+    p,
+    q,
+    ryy: 0,
+    ybar: 0,
+    line0: 0,
+    line1: 0,
+    rssLine: 0,
+    det11,
+    ts,
+    lineA00,
+    lineA01,
+    lineA11,
+  };
+}
+
+/**
+ * Weighted straight-line fit C = α₀ + α₁·t of a response y (indexed like the caller's x) on the
+ * design: the normal equations with the design's response-free sums, solved by {@link solveNormal},
+ * and the RSS from the residuals (the same sums in the same order as a direct fit).
+ *
+ * @returns the weighted RSS with α₀, α₁ in coef[0], coef[1], or NaN when the equations are singular
+ */
+export function fitLine(d: TwoPhaseDesign, y: ArrayLike<number>, coef: Float64Array): number {
+  const { n, ws, ts, idx, xs, sMin } = d;
+  let r0 = 0,
+    r1 = 0;
+  for (let i = 0; i < n; i++) {
+    const wi = ws[i]!;
+    const yi = y[idx[i]!]!;
+    r0 += wi * yi;
+    r1 += wi * ts[i]! * yi;
+  }
+  coef[0] = coef[1] = coef[2] = coef[3] = 0;
+  if (!solveNormal2(d.lineA00, d.lineA01, d.lineA11, r0, r1, coef)) return Number.NaN;
+  const c0 = coef[0]!,
+    c1 = coef[1]! * (1 / d.range);
+  let rss = 0;
+  for (let i = 0; i < n; i++) {
+    const e = y[idx[i]!]! - c0 - c1 * (xs[i]! - sMin);
+    rss += ws[i]! * e * e;
+  }
+  return rss;
 }
 
 /**
@@ -140,6 +207,56 @@ export function solveNormal(k: number, out: Float64Array): boolean {
     if (!Number.isFinite(out[i]!)) return false;
   }
   return true;
+}
+
+/**
+ * {@link solveNormal} for k = 2 ([[a00, a01], [a01, a11]]·β = [r0, r1]) written out in locals: the
+ * same pivot choice, singularity test and operations in the same order.
+ */
+export function solveNormal2(
+  a00: number,
+  a01: number,
+  a11: number,
+  r0: number,
+  r1: number,
+  out: Float64Array,
+): boolean {
+  // Rows [m00 m01 m02] and [m10 m11 m12] of the augmented matrix.
+  let m00 = a00,
+    m01 = a01,
+    m02 = r0,
+    m10 = a01,
+    m11 = a11,
+    m12 = r1;
+  // Column 0: partial pivoting (a strictly larger |entry| swaps), tested against the current M[0].
+  const swap = Math.abs(m10) > Math.abs(m00);
+  const p0 = swap ? m10 : m00;
+  if (!(Math.abs(p0) > 1e-13 * (Math.abs(m00) + 1e-300))) return false;
+  if (swap) {
+    m10 = m00;
+    m00 = p0;
+    let t = m01;
+    m01 = m11;
+    m11 = t;
+    t = m02;
+    m02 = m12;
+    m12 = t;
+  }
+  const f1 = m10 / p0;
+  // (The eliminated entries themselves are not needed again.)
+  if (f1 !== 0) {
+    m11 = m11 - f1 * m01;
+    m12 = m12 - f1 * m02;
+  }
+  // Column 1.
+  const p1 = m11;
+  if (!(Math.abs(p1) > 1e-13 * (Math.abs(m00) + 1e-300))) return false;
+  const f0 = m01 / p1;
+  if (f0 !== 0) m02 = m02 - f0 * m12;
+  out[0] = m02 / m00;
+  if (!Number.isFinite(out[0]!)) return false;
+  out[1] = m12 / m11;
+  return Number.isFinite(out[1]!);
 }
 
 /** Writes the symmetric k×k normal equations with right-hand side into `M`. */

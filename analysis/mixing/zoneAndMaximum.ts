@@ -39,7 +39,8 @@ export function zoneFromCurve(
   const rho = work && work.length >= G ? work : new Float64Array(G);
   for (let i = 0; i < G; i++) {
     rho[i] = -(grid[i]! - riverSalinity) * d2[i]!;
-    if (i > 0) total += 0.5 * (rho[i]! + rho[i - 1]!) * (grid[i]! - grid[i - 1]!);
+    // ∫ρ dS only decides the sign when none is asked for.
+    if (i > 0 && sign === undefined) total += 0.5 * (rho[i]! + rho[i - 1]!) * (grid[i]! - grid[i - 1]!);
     if (Math.abs(rho[i]!) > maxAbs) {
       maxAbs = Math.abs(rho[i]!);
       maxAbsSigned = rho[i]!;

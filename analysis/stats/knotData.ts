@@ -17,6 +17,8 @@ export interface KnotData {
  * @param w non-negative weights
  * @param tieTol abscissae closer than this are merged (same unit as x)
  * @param out optional workspace arrays of length ≥ x.length (reused in loops)
+ * @param knotOf optional array of length ≥ x.length that receives each point's knot index (−1 when
+ *   dropped), for {@link mergeKnotResponses}
  * @returns merged knot data (n = number of knots)
  */
 export function mergeKnots(
@@ -25,6 +27,7 @@ export function mergeKnots(
   w: ArrayLike<number>,
   tieTol: number,
   out?: { x: Float64Array; y: Float64Array; w: Float64Array },
+  knotOf?: Int32Array,
 ): KnotData & { x: Float64Array; y: Float64Array; w: Float64Array; n: number } {
   const o = out ?? { x: new Float64Array(x.length), y: new Float64Array(x.length), w: new Float64Array(x.length) };
   let n = 0;
@@ -34,7 +37,10 @@ export function mergeKnots(
     anchor = Number.NaN;
   for (let i = 0; i <= x.length; i++) {
     const wi = i < x.length ? w[i]! : 0;
-    if (i < x.length && !(wi > 0)) continue;
+    if (i < x.length && !(wi > 0)) {
+      if (knotOf) knotOf[i] = -1;
+      continue;
+    }
     if (i === x.length || !(Math.abs(x[i]! - anchor) <= tieTol)) {
       if (sw > 0) {
         o.x[n] = sx / sw;
@@ -46,9 +52,36 @@ export function mergeKnots(
       if (i === x.length) break;
       anchor = x[i]!;
     }
+    if (knotOf) knotOf[i] = n;
     sx += wi * x[i]!;
     sy += wi * y[i]!;
     sw += wi;
   }
   return { x: o.x, y: o.y, w: o.w, n };
+}
+
+/**
+ * The merged y of {@link mergeKnots} for a new response on the same abscissae and weights: each
+ * knot's weighted mean Σwᵢyᵢ / Σwᵢ, summed in the same order (so the same numbers), without
+ * re-grouping the abscissae.
+ *
+ * @param knotOf each point's knot index from mergeKnots (−1 = dropped)
+ * @param w the weights given to mergeKnots; y the new response
+ * @param knotW the merged weights Σwᵢ of mergeKnots; n the number of knots
+ * @param out receives the n merged responses
+ */
+export function mergeKnotResponses(
+  knotOf: Int32Array,
+  w: ArrayLike<number>,
+  y: ArrayLike<number>,
+  knotW: ArrayLike<number>,
+  n: number,
+  out: Float64Array,
+): void {
+  out.fill(0, 0, n);
+  for (let i = 0; i < y.length; i++) {
+    const k = knotOf[i]!;
+    if (k >= 0) out[k] = out[k]! + w[i]! * y[i]!;
+  }
+  for (let k = 0; k < n; k++) out[k] = out[k]! / knotW[k]!;
 }

@@ -1,3 +1,5 @@
+import quickselect from "quickselect";
+
 /**
  * Percentile of a sample by linear interpolation between order statistics
  * (Hyndman & Fan 1996, definition 7, the default of most statistics packages).
@@ -33,38 +35,6 @@ export function interval95(values: ArrayLike<number>): [number, number] | undefi
   return [percentileSelect(work, n, 0.025)!, percentileSelect(work, n, 0.975)!];
 }
 
-/** Rearranges a[lo..hi] so that a[k] holds the value it would have if sorted (Hoare's selection). */
-function selectInPlace(a: Float64Array, k: number, lo: number, hi: number): void {
-  while (hi > lo) {
-    const mid = (lo + hi) >> 1;
-    // Median-of-three pivot.
-    if (a[mid]! < a[lo]!) swap(a, mid, lo);
-    if (a[hi]! < a[lo]!) swap(a, hi, lo);
-    if (a[hi]! < a[mid]!) swap(a, hi, mid);
-    const pivot = a[mid]!;
-    let i = lo;
-    let j = hi;
-    while (i <= j) {
-      while (a[i]! < pivot) i++;
-      while (a[j]! > pivot) j--;
-      if (i <= j) {
-        swap(a, i, j);
-        i++;
-        j--;
-      }
-    }
-    if (k <= j) hi = j;
-    else if (k >= i) lo = i;
-    else return;
-  }
-}
-
-function swap(a: Float64Array, i: number, j: number): void {
-  const t = a[i]!;
-  a[i] = a[j]!;
-  a[j] = t;
-}
-
 /**
  * Percentile (Hyndman & Fan 1996 definition 7) of the first `n` values of a work array,
  * by selection in O(n) instead of sorting; the array order is changed.
@@ -78,10 +48,25 @@ export function percentileSelect(a: Float64Array, n: number, p: number): number 
   if (n === 0) return undefined;
   const h = (n - 1) * p;
   const lo = Math.floor(h);
-  selectInPlace(a, lo, 0, n - 1);
-  const vLo = a[lo]!;
-  if (lo + 1 >= n || h === lo) return vLo;
-  let vHi = Number.POSITIVE_INFINITY;
-  for (let i = lo + 1; i < n; i++) if (a[i]! < vHi) vHi = a[i]!;
+  // Floyd–Rivest selection (the quickselect package) on the finite values; the order statistics it
+  // leaves at lo (and lo + 1) are unique, whatever the order of the rest.
+  const values = a as unknown as number[];
+  if (lo + 1 >= n || h === lo) {
+    quickselect(values, lo, 0, n - 1);
+    return a[lo]!;
+  }
+  let vLo = Number.NEGATIVE_INFINITY,
+    vHi = Number.POSITIVE_INFINITY;
+  if (2 * lo < n) {
+    // Lower tail: select order statistic lo + 1; order statistic lo is the largest before it.
+    quickselect(values, lo + 1, 0, n - 1);
+    vHi = a[lo + 1]!;
+    for (let i = 0; i <= lo; i++) if (a[i]! > vLo) vLo = a[i]!;
+  } else {
+    // Upper tail: select order statistic lo; order statistic lo + 1 is the smallest after it.
+    quickselect(values, lo, 0, n - 1);
+    vLo = a[lo]!;
+    for (let i = lo + 1; i < n; i++) if (a[i]! < vHi) vHi = a[i]!;
+  }
   return vLo + (h - lo) * (vHi - vLo);
 }

@@ -112,7 +112,69 @@ export function fitPreparedSpline(
   y: ArrayLike<number>,
   out?: NaturalSpline,
 ): NaturalSpline {
-  return solveBand(p.scratch, p.n, p.lambda, p.x, y, p.w, out, false).spline;
+  const n = p.n;
+  if (n < 5) return solveBand(p.scratch, n, p.lambda, p.x, y, p.w, out, false).spline;
+  const spline =
+    out && out.knots.length >= n
+      ? out
+      : { knots: new Float64Array(n), values: new Float64Array(n), secondDerivs: new Float64Array(n), count: n };
+  spline.count = n;
+  solvePrepared(p.scratch, n, p.lambda, p.x, y, spline);
+  return spline;
+}
+
+/**
+ * {@link solveBand} without the RSS for n ≥ 5 knots, its bounds tests moved out of the loops and
+ * the back substitution written straight into γ: the same operations in the same order (a
+ * subtracted 0 is left out, which changes no number, −0 included).
+ */
+function solvePrepared(
+  S: Scratch,
+  n: number,
+  lambda: number,
+  x: Float64Array,
+  y: ArrayLike<number>,
+  spline: NaturalSpline,
+): void {
+  const m = n - 2;
+  const { ih, qa, qb, qc, e, f, z, idd, iw } = S;
+  // Forward substitution L·u = Qᵀy (u unscaled in the recurrence), z = D⁻¹·u.
+  let u2 = y[0]! * qa[0]! + y[1]! * qb[0]! + y[2]! * qc[0]!;
+  z[0] = u2 * idd[0]!;
+  let u1 = y[1]! * qa[1]! + y[2]! * qb[1]! + y[3]! * qc[1]! - e[1]! * u2;
+  z[1] = u1 * idd[1]!;
+  for (let j = 2; j < m; j++) {
+    const u = y[j]! * qa[j]! + y[j + 1]! * qb[j]! + y[j + 2]! * qc[j]! - e[j]! * u1 - f[j]! * u2;
+    z[j] = u * idd[j]!;
+    u2 = u1;
+    u1 = u;
+  }
+  // Back substitution Lᵀ·γ = z into γ at the interior knots.
+  const gamma = spline.secondDerivs;
+  gamma[0] = 0;
+  gamma[n - 1] = 0;
+  let g2 = z[m - 1]!;
+  gamma[m] = g2;
+  let g1 = z[m - 2]! - e[m - 1]! * g2;
+  gamma[m - 1] = g1;
+  for (let j = m - 3; j >= 0; j--) {
+    const g = z[j]! - e[j + 1]! * g1 - f[j + 2]! * g2;
+    gamma[j + 1] = g;
+    g2 = g1;
+    g1 = g;
+  }
+  const values = spline.values,
+    knots = spline.knots;
+  values[0] = y[0]! - lambda * (0 + (gamma[1]! - gamma[0]!) * ih[0]!) * iw[0]!;
+  knots[0] = x[0]!;
+  for (let i = 1; i < n - 1; i++) {
+    let qg = 0 + (gamma[i - 1]! - gamma[i]!) * ih[i - 1]!;
+    qg += (gamma[i + 1]! - gamma[i]!) * ih[i]!;
+    values[i] = y[i]! - lambda * qg * iw[i]!;
+    knots[i] = x[i]!;
+  }
+  values[n - 1] = y[n - 1]! - lambda * (0 + (gamma[n - 2]! - gamma[n - 1]!) * ih[n - 2]!) * iw[n - 1]!;
+  knots[n - 1] = x[n - 1]!;
 }
 
 /** Band LDLᵀ factors of R + λ·Qᵀ W⁻¹ Q (they depend on the knots, weights and λ only, not on y). */

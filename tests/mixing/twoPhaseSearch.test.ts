@@ -1,7 +1,16 @@
 import { describe, expect, it } from "vitest";
 import { randomLcg, randomNormal } from "d3-random";
 import { expectWithin } from "../helpers/tolerance.ts";
-import { breakRss, gridTerms, loadResponse, termsRss, TERMS } from "../../analysis/mixing/twoPhaseSearch.ts";
+import {
+  breakRss,
+  gridTerms,
+  loadResponse,
+  putNormal,
+  solveNormal,
+  solveNormal2,
+  termsRss,
+  TERMS,
+} from "../../analysis/mixing/twoPhaseSearch.ts";
 import { twoPhaseDesign } from "../../analysis/mixing/twoPhase.ts";
 import { stationSalinities, trueConc } from "./helpers/synthetic.ts";
 
@@ -83,5 +92,29 @@ describe("two-phase break search from prefix sums of the fixed design", () => {
 
   it("rejects salinities that are not ascending", () => {
     expect(() => twoPhaseDesign([0, 5, 3, 10], [1, 1, 1, 1])).toThrow(RangeError);
+  });
+
+  it("solveNormal2() gives solveNormal()'s k = 2 solution bit for bit, with and without a row swap, and its singular verdicts", () => {
+    const u = randomLcg(77);
+    const cases: number[][] = [
+      [0, 0, 1, 1, 1],
+      [1, 1, 1, 2, 3],
+      [1e-20, 1e-20, 1e-20, 1, 1],
+    ];
+    for (let i = 0; i < 200; i++) {
+      const a00 = 0.1 + 10 * u(),
+        a01 = (u() - 0.5) * 20,
+        a11 = 0.1 + 10 * u();
+      cases.push([a00, a01, a11, (u() - 0.5) * 100, (u() - 0.5) * 100]);
+    }
+    for (const [a00, a01, a11, r0, r1] of cases) {
+      putNormal(2, a00!, a01!, a11!, 0, 0, 0, 0, 0, 0, 0, r0!, r1!, 0, 0);
+      const general = new Float64Array(4);
+      const okGeneral = solveNormal(2, general);
+      const fast = new Float64Array(4);
+      const okFast = solveNormal2(a00!, a01!, a11!, r0!, r1!, fast);
+      expect(okFast).toBe(okGeneral);
+      if (okGeneral) expect(Array.from(fast)).toEqual(Array.from(general));
+    }
   });
 });

@@ -1,7 +1,7 @@
-import { describe, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { randomLcg, randomNormal } from "d3-random";
 import { expectWithin } from "../helpers/tolerance.ts";
-import { reinschFit } from "../../analysis/stats/smoothingSpline.ts";
+import { fitPreparedSpline, prepareSmoothingSpline, reinschFit } from "../../analysis/stats/smoothingSpline.ts";
 import { mergeKnots } from "../../analysis/stats/knotData.ts";
 import { evaluateSpline } from "../../analysis/stats/naturalSpline.ts";
 import { minimiseGcv, splinePath } from "../../analysis/stats/splineGcv.ts";
@@ -89,5 +89,16 @@ describe("smoothing spline (Reinsch 1967; Green & Silverman 1994 §2.3)", () => 
     const g = minimiseGcv(splinePath(k), 1);
     expectWithin(g.edf > 2 && g.edf < k.n ? 1 : 0, 1, 0, `edf ${g.edf} in (2, ${k.n})`);
     expectWithin(Number.isFinite(g.lambda) && g.lambda > 0 ? 1 : 0, 1, 0, "λ finite and positive");
+  });
+
+  it("fitPreparedSpline() gives reinschFit()'s knot values and second derivatives bit for bit (one factorisation, many responses)", () => {
+    const prepared = prepareSmoothingSpline(k, 0.7);
+    for (let r = 0; r < 5; r++) {
+      const y2 = Array.from({ length: k.n }, (_, i) => k.y[i]! + (r === 0 ? 0 : 0.2 * z()));
+      const direct = reinschFit({ x: k.x, y: y2, w: k.w, n: k.n }, 0.7).spline;
+      const fast = fitPreparedSpline(prepared, y2);
+      expect(Array.from(fast.values)).toEqual(Array.from(direct.values));
+      expect(Array.from(fast.secondDerivs)).toEqual(Array.from(direct.secondDerivs));
+    }
   });
 });

@@ -1,4 +1,5 @@
-import { describe, it } from "vitest";
+import { randomLcg } from "d3-random";
+import { describe, expect, it } from "vitest";
 import { expectWithin } from "../helpers/tolerance.ts";
 import { runsTest, runsCritical } from "../../analysis/stats/runsTest.ts";
 import { chiSquareUpperP, fUpperP, normalCdf } from "../../analysis/stats/distributions.ts";
@@ -79,6 +80,19 @@ describe("percentiles (Hyndman & Fan 1996 definition 7)", () => {
     const iv = interval95(v)!;
     expectWithin(iv[0], 25, 1e-9, "2.5 % of 0…1000");
     expectWithin(iv[1], 975, 1e-9, "97.5 % of 0…1000");
+  });
+
+  it("percentileSelect() equals percentileSorted() bit for bit in both tails, with ties, small and large samples (definition 7)", () => {
+    const u = randomLcg(5);
+    for (const n of [1, 2, 3, 7, 40, 1001, 2000]) {
+      for (const ties of [false, true]) {
+        const v = Array.from({ length: n }, () => (ties ? Math.floor(10 * u()) : u() - 0.5));
+        const sorted = [...v].sort((a, b) => a - b);
+        for (const p of [0, 0.01, 0.025, 0.3, 0.5, 0.7, 0.975, 0.99, 1]) {
+          expect(percentileSelect(Float64Array.from(v), n, p)).toBe(percentileSorted(sorted, p));
+        }
+      }
+    }
   });
 });
 
