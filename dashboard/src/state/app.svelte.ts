@@ -328,7 +328,12 @@ export class AppState {
   /** Asks the worker for the self-contained HTML briefing of the analysed surveys. */
   requestBriefing(dataNotice?: string, surveyIndices?: number[]): Promise<string> {
     if (!this.#analyser) return Promise.reject(new Error("The analysis worker is not running."));
-    return this.#analyser.api.briefing($state.snapshot(this.workspace.basemap), dataNotice, surveyIndices);
+    return this.#analyser.api.briefing(
+      $state.snapshot(this.workspace.basemap),
+      dataNotice,
+      surveyIndices,
+      $state.snapshot(this.settings.archive),
+    );
   }
 
   destroy(): void {

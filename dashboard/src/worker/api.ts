@@ -253,11 +253,20 @@ export function createWorkerApi(cache?: ResultCache) {
     },
 
     /** The self-contained HTML briefing of the analysed surveys (analysis/report). */
-    async briefing(basemap: unknown, dataNotice: string | undefined, surveyIndices?: number[]): Promise<string> {
+    async briefing(
+      basemap: unknown,
+      dataNotice: string | undefined,
+      surveyIndices?: number[],
+      archiveChoices?: { seasons?: Season[]; dischargeTable?: TextFile },
+    ): Promise<string> {
       const chosen = surveyIndices ? surveyIndices.map((i) => analyses[i]) : analyses;
       const done = chosen.filter((a): a is AnalysisResult => a !== undefined);
       const provenance = await fileProvenance(files, centerlineFile);
-      return briefingHtml(done, inputs.channel?.network, provenance, basemap, dataNotice);
+      // The archive section states what the archive view shows: the same seasons and discharge table.
+      const archive = archiveChoices
+        ? archiveOf(done, archiveChoices.seasons, archiveChoices.dischargeTable)
+        : undefined;
+      return briefingHtml(done, inputs.channel?.network, provenance, basemap, dataNotice, archive?.summary);
     },
 
     /** Speciation context at the focus station and along the mixing line (analysis/seawater). */

@@ -6,6 +6,7 @@
 import {
   buildBriefing,
   renderBriefingHtml,
+  type ArchiveSummary,
   type ProvenanceFile,
   type SurveyAnalysis,
 } from "../../../analysis/index.ts";
@@ -40,16 +41,22 @@ export async function fileProvenance(
   return out;
 }
 
-/** The self-contained HTML briefing of the analysed surveys (the first is the comparison's reference). */
+/**
+ * The self-contained HTML briefing of the analysed surveys (the first is the comparison's reference).
+ * `archive`: the archive summary the archive view shows (the user's seasons and discharge table), so the
+ * briefing's archive section states the same numbers; without it the briefing summarises with defaults.
+ */
 export function briefingHtml(
   analyses: SurveyAnalysis[],
   network: ChannelNetwork | undefined,
   files: ProvenanceFile[],
   basemap: unknown,
   dataNotice: string | undefined,
+  archive?: ArchiveSummary,
 ): string {
   const doc = buildBriefing({
     analyses,
+    ...(archive ? { archive } : {}),
     ...(network ? { network } : {}),
     ...(basemap ? { basemap } : {}),
     files,
