@@ -48,6 +48,14 @@ const INIT = `(() => {
       map.on("render", () => { t.mapEvents.renders++; t.mapEvents.lastRender = performance.now(); });
       map.on("moveend", () => { t.mapEvents.moveends = (t.mapEvents.moveends || 0) + 1; t.mapEvents.lastMoveend = performance.now(); });
       map.on("styledata", () => { t.mapEvents.styledatas = (t.mapEvents.styledatas || 0) + 1; t.mapEvents.lastStyledata = performance.now(); });
+      t.mapEvents.log = [];
+      for (const fn of ["setStyle", "addSource", "removeSource", "addLayer", "removeLayer", "resize", "fitBounds"]) {
+        const orig = map[fn].bind(map);
+        map[fn] = (...a) => { t.mapEvents.log.push(Math.round(performance.now()) + " " + fn + " " + (typeof a[0] === "string" ? a[0] : "")); return orig(...a); };
+      }
+      map.on("moveend", () => t.mapEvents.log.push(Math.round(performance.now()) + " moveend z" + map.getZoom().toFixed(2)));
+      map.on("resize", () => t.mapEvents.log.push(Math.round(performance.now()) + " resize " + map.getCanvas().width + "x" + map.getCanvas().height));
+      map.on("sourcedata", (e) => e.sourceDataType === "content" && t.mapEvents.log.push(Math.round(performance.now()) + " content " + e.sourceId));
       map.on("idle", () => { t.mapEvents.idles = (t.mapEvents.idles || 0) + 1; });
     }
     requestAnimationFrame(tick);
@@ -196,7 +204,7 @@ function print(label: string, s: Summary): void {
   console.log(
     "map events:",
     Object.entries(s.mapEvents)
-      .map(([k, v]) => `${k} ${v.toFixed(0)}`)
+      .map(([k, v]) => `${k} ${typeof v === "number" ? v.toFixed(0) : JSON.stringify(v)}`)
       .join(", "),
   );
   console.log("workers:", JSON.stringify((s as unknown as { workers: unknown }).workers));
