@@ -459,6 +459,7 @@ export { stripControl } from "./output/terminalText.ts";
 export { readInputs, readStationTableFile, readSurveyFileAs, type PreReadFiles } from "./workspace/readInputs.ts";
 export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
 export { plottedObservations, surveyObservations } from "./workspace/observations.ts";
+export { stationListOrder } from "./workspace/stationOrder.ts";
 export type { ObservationPoint } from "./workspace/observations.ts";
 export { workspaceComparison } from "./workspace/comparison.ts";
 export {
