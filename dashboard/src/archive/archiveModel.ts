@@ -84,7 +84,10 @@ export function timeAxis(summary: ArchiveSummary, frame: Frame, nTicks = 5): Tim
   return {
     x: (t) => round(s(t)),
     ms: (x) => s.invert(x).getTime(),
-    ticks: timeTicks(domain, nTicks).map((t) => ({ x: round(s(t.ms)), label: t.label })),
+    // A label centred on the frame's right edge would be cut by the panel: such a tick is left out.
+    ticks: timeTicks(domain, nTicks)
+      .map((t) => ({ x: round(s(t.ms)), label: t.label }))
+      .filter((t) => t.x <= frame.x1 - 14),
     frame,
   };
 }
