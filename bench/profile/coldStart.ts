@@ -222,10 +222,9 @@ function print(label: string, s: Summary): void {
   for (const l of s.cpu) console.log(l);
 }
 
-async function main(): Promise<void> {
-  ensureDist();
-  const bare = await serveBareMap();
-  const server = spawn(process.execPath, [join(REPO, "scripts", "serve.js"), "--dir", DIST], {
+/** Serves a built dashboard directory; resolves with its URL and the server process. */
+async function serveDist(dir: string): Promise<{ url: string; kill(): void }> {
+  const server = spawn(process.execPath, [join(REPO, "scripts", "serve.js"), "--dir", dir], {
     env: { ...process.env, PORT: "0" },
     stdio: ["ignore", "pipe", "pipe"],
   });
@@ -237,19 +236,52 @@ async function main(): Promise<void> {
       if (m) resolve(m[1]!);
     });
   });
+  return { url, kill: () => server.kill() };
+}
+
+function argValues(name: string): string[] {
+  return process.argv.flatMap((a, i) => (a === name && process.argv[i + 1] ? [process.argv[i + 1]!] : []));
+}
+
+/** The first complete view as the bench defines it (bench/cases/dashboard.ts FIRST_VIEW). */
+const FIRST_VIEW = [
+  MARKERS.mapReady!,
+  MARKERS.activeAnalysis!,
+  MARKERS.mixingSvg!,
+  MARKERS.profileSvg!,
+  MARKERS.table!,
+];
+
+async function main(): Promise<void> {
+  ensureDist();
+  // --dist DIR (repeatable): other built dashboards to profile in turn with this one, e.g. main's.
+  const dists = [DIST, ...argValues("--dist")];
+  const brief = process.argv.includes("--brief");
+  const bare = await serveBareMap();
+  const servers = await Promise.all(dists.map(serveDist));
   const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_FLAGS });
   try {
-    const runs = Number(process.argv[process.argv.indexOf("--runs") + 1] ?? 1) || 1;
+    const runs = Number(argValues("--runs")[0] ?? 1) || 1;
     for (let i = 0; i < runs; i++) {
-      print(`bare map, run ${i + 1}`, await profile(browser, bare.url, [MARKERS.bareReady!]));
-      print(
-        `dashboard, run ${i + 1}`,
-        await profile(browser, url, [MARKERS.mapReady!, MARKERS.activeAnalysis!, MARKERS.table!]),
-      );
+      const b = await profile(browser, bare.url, [MARKERS.bareReady!]);
+      if (brief) console.log(`run ${i + 1} bare map ready ${b.marks.bareReady!.toFixed(0)} ms`);
+      else print(`bare map, run ${i + 1}`, b);
+      for (const [k, server] of servers.entries()) {
+        const d = await profile(browser, server.url, FIRST_VIEW);
+        const first = FIRST_VIEW.map((sel) => d.marks[Object.keys(MARKERS).find((m) => MARKERS[m] === sel)!]!).reduce(
+          (a, x) => (x > a ? x : a),
+          0,
+        );
+        if (brief)
+          console.log(
+            `run ${i + 1} ${dists[k]}: first view ${first.toFixed(0)} ms (analysis ${d.marks.activeAnalysis!.toFixed(0)}, map idle ${d.marks.mapReady!.toFixed(0)}, map load ${(d.mapEvents.load ?? NaN).toFixed(0)}) = ${(first / b.marks.bareReady!).toFixed(2)}× bare`,
+          );
+        else print(`dashboard ${dists[k]}, run ${i + 1}`, d);
+      }
     }
   } finally {
     await browser.close();
-    server.kill();
+    for (const s of servers) s.kill();
     bare.close();
   }
 }
