@@ -24,6 +24,7 @@ import { fluxSummary } from "./flux.ts";
 import { rateProfile } from "./rateProfile.ts";
 import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
+import { fitQuarticExtension } from "./riverExtension.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -129,13 +130,22 @@ export function analyzeShape(p: ShapeInput): {
   // Replicates are drawn around the two-phase fit; when the straight line was kept, around the best
   // two-phase alternative it was tested against, so each replicate re-runs the selection (Efron 2014).
   const centre: TwoPhaseFit = tp.linear && tp.alternative ? { ...tp, ...tp.alternative, linear: false } : tp;
+  const conc = used.map((s) => s.conc);
+  const wts = used.map((s) => 1 / s.sigma ** 2);
+  // River value at S_ref from the quartic extension of the landward phase (riverExtension.ts) when the
+  // stations allow, recomputed in every replicate. The replicates stay drawn around the cubic two-phase
+  // fit: drawing them around the quartic curve made the C*₀ intervals cover less (calibration).
+  const quarticRiver =
+    !tp.linear && p.river.source !== "override" && fitQuarticExtension(x, conc, wts, tp) !== undefined;
   const yHat = Float64Array.from(used, (s) => twoPhaseAt(centre, s.salinity)[0]);
+  let riverModel: "quartic" | "cubic" = quarticRiver ? "quartic" : "cubic";
   const dof = Math.max(1, n - tp.params);
   const scatter = Math.max(1, Math.sqrt(tp.rss / dof));
   const boot = (sRef: number, rv: Endmember, override: boolean, effectiveAt: number) =>
     runBootstrap({
       x,
       yHat,
+      riverModel,
       sigmaEff: Float64Array.from(used, (s) => s.sigma * scatter),
       w: Float64Array.from(used, (s) => 1 / s.sigma ** 2),
       lambda: curve.lambda,
@@ -176,6 +186,17 @@ export function analyzeShape(p: ShapeInput): {
   let bs = boot(sr, river, override, cStar);
   if (
     !override &&
+    riverModel === "quartic" &&
+    draws > 0 &&
+    (!(river.conc > 0) || (bs.riverSe !== undefined && bs.riverSe > RIVER_SE_LIMIT * Math.abs(river.conc)))
+  ) {
+    // The quartic extension is too uncertain with this noise: the cubic landward phase instead.
+    river = { ...river, conc: twoPhaseAt(tp, sr)[0] };
+    riverModel = "cubic";
+    bs = boot(sr, river, override, cStar);
+  }
+  if (
+    !override &&
     draws > 0 &&
     (!(river.conc > 0) || (bs.riverSe !== undefined && bs.riverSe > RIVER_SE_LIMIT * Math.abs(river.conc)))
   ) {
@@ -196,7 +217,7 @@ export function analyzeShape(p: ShapeInput): {
       message: `Only ${bs.usable} of ${draws} bootstrap draws were usable; intervals are rough.`,
     });
   if (!override && bs.riverSe !== undefined && Number.isFinite(bs.riverSe)) river = { ...river, concSd: bs.riverSe };
-  // Bootstrap bias correction of C₀ (extrapolated along the curve) and C*₀ (break selection): both
+  // Bootstrap bias correction of C₀ (extrapolated along the cubic curve) and C*₀ (break selection): both
   // are nonlinear in the data and biased by the noise (Efron & Tibshirani 1993). Only for a two-phase
   // fit (the kept line gives C*₀ = C₀ by construction) and only where the residuals show noise of
   // the stated precision (χ²_ν ≥ {@link BIAS_CORRECTION_MIN_CHI2}): on data far smoother than that
@@ -205,7 +226,9 @@ export function analyzeShape(p: ShapeInput): {
     // A correction that leaves the bootstrap interval is not credible (skewed, unstable replicates).
     const within = (v: number, iv: [number, number] | undefined, fallback: number): number =>
       iv && v >= iv[0] && v <= iv[1] ? v : fallback;
-    if (!override)
+    // C₀ from the quartic extension is not corrected: its bias is small and the correction's extra
+    // variance (not in the bootstrap distribution) would make the interval cover less (calibration).
+    if (!override && riverModel === "cubic")
       river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
     cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
   }

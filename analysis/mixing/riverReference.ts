@@ -1,6 +1,7 @@
 import type { Endmember, MixingWarning } from "./result.ts";
 import type { PreparedSample } from "./prepareSamples.ts";
 import { twoPhaseAt, type TwoPhaseFit } from "./twoPhase.ts";
+import { riverByQuarticExtension } from "./riverExtension.ts";
 
 /** Farthest extrapolation (salinity units) from the freshest station down to S = 0. */
 export const MAX_RIVER_EXTRAPOLATION_S = 2;
@@ -26,7 +27,8 @@ export function referenceSalinity(sMin: number, stated?: number): { salinity: nu
 /**
  * River end-member at the reference salinity from the fitted two-phase curve (extrapolated from
  * the freshest stations along the curve, not the mean of the freshest group, which would leave out
- * any reaction between the river and those stations). concSd is provisional here (the group's
+ * any reaction between the river and those stations; with the landward phase extended by a quartic
+ * term when enough stations allow, {@link riverByQuarticExtension}). concSd is provisional here (the group's
  * standard error); the analysis replaces it by the bootstrap standard error.
  *
  * @see Boyle et al. (1974) GCA 38, 1719–1728; bibliography key boyle1974.
@@ -37,7 +39,14 @@ export function riverAtReference(
   fit: TwoPhaseFit,
   salinity: number,
 ): Endmember {
-  const conc = twoPhaseAt(fit, salinity)[0];
+  const conc =
+    riverByQuarticExtension(
+      used.map((s) => s.salinity),
+      used.map((s) => s.conc),
+      used.map((s) => 1 / (s.sigma * s.sigma)),
+      fit,
+      salinity,
+    ) ?? twoPhaseAt(fit, salinity)[0];
   const se = group.n >= 2 ? group.concSd / Math.sqrt(group.n) : used[0]!.sigma;
   return {
     ...group,
