@@ -16,7 +16,7 @@ import { salinityGrid, TIE_FRACTION } from "./curveFit.ts";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { runBootstrap } from "./bootstrapRun.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
-import { twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
+import { fitTwoPhaseAtBreak, twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
 import { verdictOf } from "./verdict.ts";
 import { classify } from "./classify.ts";
 import { dilutionAt } from "./dilutionLine.ts";
@@ -25,6 +25,7 @@ import { rateProfile } from "./rateProfile.ts";
 import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
 import { fitQuarticExtension } from "./riverExtension.ts";
+import { coarseExtrapolationWarning } from "./riverReference.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -232,6 +233,7 @@ export function analyzeShape(p: ShapeInput): {
       river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
     cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
   }
+  if (!override) warnings.push(...coarseExtrapolationWarning(used, tp, river, riverModel, unit));
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
@@ -246,7 +248,20 @@ export function analyzeShape(p: ShapeInput): {
     // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
     // their difference widens the intervals (between-model term of Buckland et al. 1997).
     const cSpline = f[G - 1]! - (sMax - sr) * d1[G - 1]!;
-    const delta = Math.abs(cSpline - cStar);
+    let delta = Math.abs(cSpline - cStar);
+    // A seaward line on < 3 stations cannot be told from a reaction reaching the mouth: the tangent of
+    // the two-phase curve with its break at the seaward-most station is a third model (its chord-vs-
+    // tangent difference is the bias of the short line when the reaction does reach the mouth).
+    const mouthFit = shortLine ? fitTwoPhaseAtBreak(x, conc, wts, sMax) : undefined;
+    if (mouthFit) {
+      const [v, dv] = twoPhaseAt(mouthFit, sMax);
+      // Akaike weight of the mouth model against the chosen break (same parameter count): the squared
+      // difference enters in proportion to it (Buckland et al. 1997: weighted between-model term).
+      const dChi2 = Math.max(0, mouthFit.rss - tp.rss) / scatter ** 2;
+      const wMouth = 1 / (1 + Math.exp(dChi2 / 2));
+      const dMouth = Math.sqrt(wMouth) * Math.abs(v - (sMax - sr) * dv - cStar);
+      if (Number.isFinite(dMouth) && dMouth > delta) delta = dMouth;
+    }
     const widen = (e: Estimate, d: number): Estimate => ({
       ...e,
       lower: e.value - Math.hypot(e.value - e.lower, d),
@@ -259,14 +274,14 @@ export function analyzeShape(p: ShapeInput): {
     if (!shortLine)
       warnings.push({
         code: "reaction-reaches-mouth",
-        message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it). It is the effective end-member for that section only; stations farther seaward would fix it.`,
+        message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it, but C*₀ and the % change can still be biased by a few percentage points because the curvature there is poorly resolved). It is the effective end-member for that section only; stations farther seaward would fix it.`,
       });
   }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
   if (segStart !== undefined && tangent.nStations < MIN_SEAWARD_STATIONS)
     warnings.push({
       code: "short-seaward-line",
-      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} cannot be tested, so the class does not say "then conservative". Stations between there and the sea end-member would settle it.`,
+      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} cannot be tested, so the class does not say "then conservative". If the reaction in fact continues seaward, a line through these stations is a chord of the curve, not its tangent, and C*₀ is biased toward C₀ (the % change understated, by several percentage points in calibration with synthetic surveys); the interval includes the difference from a curve reaching the mouth only in proportion to how well the data support it. Stations between there and the sea end-member would settle it.`,
     });
   const mS = twoPhaseMaximum(tp, sMax);
   // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the

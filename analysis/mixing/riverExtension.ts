@@ -5,7 +5,7 @@ import type { TwoPhaseFit } from "./twoPhase.ts";
  * quartic landward phase (three landward terms h², h³, h⁴ need at least three; two more keep the
  * extrapolation from resting on an exact fit; documented choice).
  */
-export const MIN_LANDWARD_FOR_QUARTIC = 5;
+export const MIN_LANDWARD_FOR_QUARTIC = 6;
 
 /** Unknowns of the extended fit: α₀, α₁, β₂, β₃, β₄. */
 const K = 5;

@@ -323,6 +323,51 @@ export function fitTwoPhase(
   };
 }
 
+/**
+ * The two-phase model at a given break (no search, no test): weighted least squares with the cubic
+ * landward term when ≥ 4 distinct stations lie landward of it (else the quadratic). Used for the
+ * "reaction reaches the mouth" alternative (break at the seaward-most station) of a short seaward line.
+ *
+ * @param x ascending salinities; y concentrations; w weights 1/σ²
+ * @param breakSalinity the break S_b
+ * @returns the fit, or undefined (fewer than 3 distinct landward stations, singular system)
+ * @see Hudson, D.J. (1966) JASA 61, 1097–1129 (segmented regression at a given join point).
+ */
+export function fitTwoPhaseAtBreak(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  breakSalinity: number,
+): TwoPhaseFit | undefined {
+  const n = x.length;
+  if (n < 2) return undefined;
+  const sMin = x[0]!;
+  const range = x[n - 1]! - sMin;
+  if (!(range > 0)) return undefined;
+  let distinct = 0;
+  for (let i = 0, prev = Number.NEGATIVE_INFINITY; i < n; i++)
+    if (w[i]! > 0 && x[i]! < breakSalinity && x[i]! > prev) {
+      distinct++;
+      prev = x[i]!;
+    }
+  if (distinct < 3) return undefined;
+  const k = distinct >= 4 ? 4 : 3;
+  const c = COEF;
+  const rss = fitAt(x, y, w, sMin, range, breakSalinity, k, c);
+  if (!Number.isFinite(rss)) return undefined;
+  return {
+    breakSalinity,
+    linear: false,
+    coef: [c[0]!, c[1]!, c[2]!, c[3]!],
+    sMin,
+    range,
+    rss,
+    rssLinear: Number.NaN,
+    params: k + 1,
+    pCurvature: Number.NaN,
+  };
+}
+
 /** Value, dC/dS and d²C/dS² of the two-phase fit at salinity s. */
 export function twoPhaseAt(f: TwoPhaseFit, s: number): [number, number, number] {
   const [, a1, b2, b3] = f.coef;
