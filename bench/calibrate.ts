@@ -50,8 +50,10 @@ function missed(s: CellScore, d: SurveyDesign, reaction: boolean): string {
   }
   if (reaction) {
     applies = true;
-    // "bias (warned)": the surveys without a warning that C₀ or C*₀ may be biased are within 2 pp.
-    if (Math.abs(s.percentBiasPp) > 2) out.push(Math.abs(s.percentBiasUnwarnedPp ?? 0) <= 2 ? "bias (warned)" : "bias");
+    // "bias (warned)": ≥ 95 % of the surveys carry a warning that C₀ or C*₀ may be biased, or those
+    // without one are within 2 pp (as "class (warned)": right or warned in ≥ 95 %).
+    if (Math.abs(s.percentBiasPp) > 2)
+      out.push(s.biasWarned >= 0.95 || Math.abs(s.percentBiasUnwarnedPp ?? 0) <= 2 ? "bias (warned)" : "bias");
     if (s.classAccuracy < 0.95) out.push(s.classOrWarned >= 0.95 ? "class (warned)" : "class");
     if (s.breakWithin2 !== undefined && s.breakWithin2 < 0.8)
       out.push((s.breakWithin2OrWarned ?? 0) >= 0.8 ? "break (warned)" : "break");
@@ -150,5 +152,5 @@ table(
 console.log("\nExact data (35 stations, km-even, no noise; Q = 100 m³/s, A = 5000 m²):\n");
 table(["shape", "C*0 err %", "%chg err pp", "∫A·R dx err %", "break err", "max err"], exact);
 console.log(
-  `\nGoals (issue 14): 95 % coverage 90–98 % for n ≥ 20; |bias of % change| ≤ 2 pp and class accuracy ≥ 95 % for reactions ending at S ≥ 5; break within ±2 in ≥ 80 % of surveys; rate integral within 5 % on exact data. "goals missed" names this row's misses; "bias (warned)": |bias| > 2 pp over all surveys, but within 2 pp over those without a warning that C₀ or C*₀ may be biased (river-extrapolation-coarse, reaction-reaches-mouth, short-seaward-line; "bias warned %" = share of surveys with one); "class (warned)": the class is wrong in over 5 % of surveys, but in ≥ 95 % it is right or a warning says the stations cannot establish it (short-seaward-line, reaction-reaches-mouth, few-stations-in-zone); "break (warned)": the break is off by more than 2 in over 20 % of surveys, but in ≥ 80 % it is within ±2 or the tool warns (break-uncertain) that it is not located that well. "failed": surveys without C*0 or % change (the tool says "not determined").\nTruth: % change against the river value at S = 0. ${((performance.now() - t0) / 1000).toFixed(0)} s on Node ${process.version}.`,
+  `\nGoals (issue 14): 95 % coverage 90–98 % for n ≥ 20; |bias of % change| ≤ 2 pp and class accuracy ≥ 95 % for reactions ending at S ≥ 5; break within ±2 in ≥ 80 % of surveys; rate integral within 5 % on exact data. "goals missed" names this row's misses; "bias (warned)": |bias| > 2 pp over all surveys, but ≥ 95 % of the surveys carry a warning that C₀ or C*₀ may be biased (river-extrapolation-coarse, reaction-reaches-mouth, short-seaward-line; "bias warned %") or the surveys without one are within 2 pp ("bias unwarned pp"); "class (warned)": the class is wrong in over 5 % of surveys, but in ≥ 95 % it is right or a warning says the stations cannot establish it (short-seaward-line, reaction-reaches-mouth, few-stations-in-zone); "break (warned)": the break is off by more than 2 in over 20 % of surveys, but in ≥ 80 % it is within ±2 or the tool warns (break-uncertain) that it is not located that well. "failed": surveys without C*0 or % change (the tool says "not determined").\nTruth: % change against the river value at S = 0. ${((performance.now() - t0) / 1000).toFixed(0)} s on Node ${process.version}.`,
 );
