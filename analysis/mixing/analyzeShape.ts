@@ -348,7 +348,8 @@ export function analyzeShape(p: ShapeInput): {
   const rD2 = Float64Array.from(rGrid, (s) => twoPhaseAt(tp, s)[2]);
   const rp = rateProfile(rGrid, rD2, sr, o, cStar, river.conc);
   warnings.push(...rp.warnings);
-  const breakEst = segStart !== undefined ? estimateOf(tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
+  const breakEst =
+    segStart !== undefined ? estimateOf(tp.breakAveraged ?? tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
   if (breakEst && breakEst.upper - breakEst.lower > 2 * BREAK_GOAL_S)
     warnings.push({
       code: "break-uncertain",

@@ -139,7 +139,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     eff[d] = ic + sl * sr;
     c0[d] = cr;
     if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
-    if (!fit.linear) brk[d] = fit.breakSalinity;
+    if (!fit.linear) brk[d] = fit.breakAveraged ?? fit.breakSalinity;
     const m = twoPhaseMaximum(fit, sMax);
     if (m !== undefined) {
       mS[d] = m;

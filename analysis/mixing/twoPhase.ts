@@ -42,6 +42,14 @@ export interface TwoPhaseFit {
    * selection (Efron 2014), instead of drawing around the selected line only.
    */
   alternative?: { breakSalinity: number; coef: [number, number, number, number] };
+  /**
+   * Break averaged over the profile likelihood: the grid breaks and the chosen break weighted by
+   * exp(−(RSS(S_b) − RSS_min)/(2·s²)), s² = max(1, χ²_ν) (Akaike weights of the breaks, Buckland et
+   * al. 1997). Where the curvature fades gradually the profile is flat seaward of the best break and the
+   * averaged break moves toward the true end of the reaction; for a sharp break it equals S_b.
+   * Undefined for the straight line.
+   */
+  breakAveraged?: number;
 }
 
 /**
@@ -53,6 +61,8 @@ export const TWO_PHASE_ALPHA = 0.025;
 const GRID = 24;
 /** Golden-section refinement steps around the best grid break. */
 const REFINE = 12;
+/** Profile RSS of the grid breaks of the last search (single-threaded reuse). */
+const PROFILE = new Float64Array(GRID + 1);
 /** Coefficient work array of the fits (single-threaded reuse). */
 const COEF = new Float64Array(4);
 
@@ -229,6 +239,7 @@ export function fitTwoPhase(
   for (let g = 0; g <= GRID; g++) {
     const b = lo + ((sMax - lo) * g) / GRID;
     const r = termsRss(ds, tg, g * TERMS, c);
+    PROFILE[g] = r;
     if (r < best) {
       best = r;
       bestB = b;
@@ -310,16 +321,29 @@ export function fitTwoPhase(
     if (exactP) line.alternative = { breakSalinity: bestB, coef: [c[0]!, c[1]!, c[2]!, c[3]!] };
     return line;
   }
+  const coef: [number, number, number, number] = [c[0]!, c[1]!, c[2]!, c[3]!];
+  // Profile-averaged break (Akaike weights over the grid breaks and the chosen one).
+  const s2 = dfRes >= 1 ? Math.max(1, best / dfRes) : 1;
+  let sw = 1,
+    swb = bestB;
+  for (let g = 0; g <= GRID; g++) {
+    const r = PROFILE[g]!;
+    if (!Number.isFinite(r)) continue;
+    const wg = Math.exp(-Math.max(0, r - best) / (2 * s2));
+    sw += wg;
+    swb += wg * (lo + ((sMax - lo) * g) / GRID);
+  }
   return {
     breakSalinity: bestB,
     linear: false,
-    coef: [c[0]!, c[1]!, c[2]!, c[3]!],
+    coef,
     sMin,
     range,
     rss: best,
     rssLinear: rssLin,
     params: k + 1,
     pCurvature: p,
+    breakAveraged: swb / sw,
   };
 }
 
