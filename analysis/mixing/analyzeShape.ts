@@ -24,7 +24,7 @@ import { fluxSummary } from "./flux.ts";
 import { rateProfile } from "./rateProfile.ts";
 import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
-import { fitQuarticExtension } from "./riverExtension.ts";
+import { fitQuarticExtension, riverModelSpread } from "./riverExtension.ts";
 import { coarseExtrapolationWarning } from "./riverReference.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
@@ -242,6 +242,19 @@ export function analyzeShape(p: ShapeInput): {
       code: "river-nonpositive",
       message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,
     });
+  // Model-selection uncertainty of C₀ (quartic vs cubic landward phase): the Akaike-weighted
+  // between-model term widens the % change interval (Buckland et al. 1997).
+  const c0Spread =
+    percent && riverModel === "quartic" ? riverModelSpread(x, conc, wts, tp, sr, Math.max(1, tp.rss / dof)) : undefined;
+  if (percent && c0Spread !== undefined && river.conc > 0) {
+    const dPct = (100 * Math.abs(cStar) * c0Spread) / river.conc ** 2;
+    if (Number.isFinite(dPct))
+      percent = {
+        ...percent,
+        lower: percent.value - Math.hypot(percent.value - percent.lower, dPct),
+        upper: percent.value + Math.hypot(percent.upper - percent.value, dPct),
+      };
+  }
   const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
   if (tangent.method === "curve-tangent" || shortLine) {
     // No straight seaward phase, or one resting on < 3 stations: C*₀ is a slope at the end of

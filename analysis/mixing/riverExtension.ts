@@ -1,4 +1,4 @@
-import type { TwoPhaseFit } from "./twoPhase.ts";
+import { twoPhaseValue, type TwoPhaseFit } from "./twoPhase.ts";
 
 /**
  * Fewest distinct stations landward of the break before the river value is extrapolated with the
@@ -47,6 +47,46 @@ export function riverByQuarticExtension(
   if (!coef) return undefined;
   const v = quarticExtensionAt(coef, fit, sRef);
   return Number.isFinite(v) ? v : undefined;
+}
+
+/**
+ * Between-model term of C₀ for the choice quartic extension vs cubic landward phase:
+ * √w_cubic·|C₀,quartic − C₀,cubic|, with w_cubic the Akaike weight of the cubic,
+ * 1/(1 + exp(ΔAIC/2)), ΔAIC = AIC_cubic − AIC_quartic = (RSS_cubic − RSS_quartic)/s² − 2 (one parameter more).
+ * Added in quadrature to the bootstrap spread of the reported (quartic) C₀, it is the model-selection
+ * part of the model-averaged variance of Buckland et al. (1997).
+ *
+ * @param x ascending salinities; y concentrations; w weights 1/σ²
+ * @param fit the (cubic) two-phase fit of the same data
+ * @param sRef reference salinity
+ * @param s2 residual variance factor (max(1, χ²_ν) of the fit)
+ * @returns the term, or undefined when the quartic extension cannot be fitted
+ * @see Buckland, S.T., Burnham, K.P. & Augustin, N.H. (1997) Model selection: an integral part of
+ *   inference. Biometrics 53, 603–618 (Akaike weights, unconditional variance; from memory);
+ *   Akaike, H. (1974) IEEE Trans. Automatic Control 19, 716–723.
+ */
+export function riverModelSpread(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  fit: TwoPhaseFit,
+  sRef: number,
+  s2: number,
+): number | undefined {
+  const q = fitQuarticExtension(x, y, w, fit);
+  if (!q) return undefined;
+  const coef = Float64Array.from(q);
+  let rssQ = 0;
+  let rssC = 0;
+  for (let i = 0; i < x.length; i++) {
+    if (!(w[i]! > 0)) continue;
+    rssQ += w[i]! * (y[i]! - quarticExtensionAt(coef, fit, x[i]!)) ** 2;
+    rssC += w[i]! * (y[i]! - twoPhaseValue(fit, x[i]!)) ** 2;
+  }
+  const dAic = (rssC - rssQ) / s2 - 2;
+  const wCubic = 1 / (1 + Math.exp(dAic / 2));
+  const d = Math.sqrt(wCubic) * Math.abs(quarticExtensionAt(coef, fit, sRef) - twoPhaseValue(fit, sRef));
+  return Number.isFinite(d) ? d : undefined;
 }
 
 /** Value at S of the quartic extension with coefficients `coef` ({@link fitQuarticExtension}) of `fit`. */

@@ -3,7 +3,11 @@ import { expectWithin } from "../helpers/tolerance.ts";
 import { SHAPES, survey } from "../../bench/calibration/forwardModel.ts";
 import { scoreCell, BIAS_WARNINGS } from "../../bench/calibration/cell.ts";
 import { fitTwoPhase, twoPhaseValue } from "../../analysis/mixing/twoPhase.ts";
-import { MIN_LANDWARD_FOR_QUARTIC, riverByQuarticExtension } from "../../analysis/mixing/riverExtension.ts";
+import {
+  MIN_LANDWARD_FOR_QUARTIC,
+  riverByQuarticExtension,
+  riverModelSpread,
+} from "../../analysis/mixing/riverExtension.ts";
 import { analyzeConstituent } from "../../analysis/mixing/analyzeConstituent.ts";
 
 // River end-member at S = 0 from the landward phase extended by a quartic term (riverExtension.ts) and
@@ -86,5 +90,21 @@ describe("river value at S = 0 by the quartic extension of the landward phase (s
       if (r.warnings.some((w) => BIAS_WARNINGS.has(w.code))) warned++;
     }
     expectWithin(warned >= 0.7 * n ? 1 : 0, 1, 0, `surveys warned: ${warned} of ${n}`);
+  });
+
+  it("between-model term of C₀ (Akaike-weighted quartic vs cubic, Buckland et al. 1997, from memory): 0 where the cubic landward phase is exact, and at most the full difference of the two C₀ otherwise", () => {
+    const x = Array.from({ length: 20 }, (_, i) => 0.3 + (32.7 * i) / 19);
+    const w = x.map(() => 1);
+    const cubic = x.map((s) => 60 - 1.5 * s + 40 * Math.max(0, 1 - s / 12) ** 3);
+    const fitC = fitTwoPhase(x, cubic, w)!;
+    expectWithin(riverModelSpread(x, cubic, w, fitC, 0, 1), 0, 1e-6, "exact cubic hinge: no model spread");
+    const st = survey(shape("removal→S12"), { stations: 20, spacing: "km", noise: 0 }, 5);
+    const xs = st.map((s) => s.salinity);
+    const ys = st.map((s) => s.conc);
+    const ws = ys.map((c) => 1 / (0.01 * c) ** 2);
+    const fit = fitTwoPhase(xs, ys, ws)!;
+    const spread = riverModelSpread(xs, ys, ws, fit, 0, 1)!;
+    const full = Math.abs(riverByQuarticExtension(xs, ys, ws, fit, 0)! - twoPhaseValue(fit, 0));
+    expectWithin(spread >= 0 && spread <= full + 1e-12 ? 1 : 0, 1, 0, `spread ${spread} within [0, ${full}]`);
   });
 });
