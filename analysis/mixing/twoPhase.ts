@@ -329,7 +329,9 @@ export function fitTwoPhase(
   for (let g = 0; g <= GRID; g++) {
     const r = PROFILE[g]!;
     if (!Number.isFinite(r)) continue;
-    const wg = Math.exp(-Math.max(0, r - best) / (2 * s2));
+    const e = Math.max(0, r - best) / (2 * s2);
+    if (!(e < 36)) continue; // weight < 1e-15: no effect on the average
+    const wg = Math.exp(-e);
     sw += wg;
     swb += wg * (lo + ((sMax - lo) * g) / GRID);
   }
