@@ -11,7 +11,6 @@ export const MIN_LANDWARD_FOR_QUARTIC = 6;
 const K = 5;
 /** Augmented normal equations (K rows, K + 1 columns), reused (single-threaded). */
 const A = new Float64Array(K * (K + 1));
-const ROW = new Float64Array(K);
 
 /**
  * River value at the reference salinity from the two-phase fit's landward phase extended by a
@@ -118,33 +117,91 @@ export function fitQuarticExtension(
   const hInv = 1 / (b - sMin);
   let distinct = 0;
   let prev = Number.NEGATIVE_INFINITY;
-  A.fill(0);
+  // Upper triangle and right-hand side of the normal equations in locals (aRC += (wᵢ·rowᵣ)·row_c over the
+  // stations in order; the constant first row entry 1 multiplies exactly, so it is left out).
+  let a00 = 0,
+    a01 = 0,
+    a02 = 0,
+    a03 = 0,
+    a04 = 0,
+    a11 = 0,
+    a12 = 0,
+    a13 = 0,
+    a14 = 0,
+    a22 = 0,
+    a23 = 0,
+    a24 = 0,
+    a33 = 0,
+    a34 = 0,
+    a44 = 0;
+  let r0 = 0,
+    r1 = 0,
+    r2 = 0,
+    r3 = 0,
+    r4 = 0;
   const n = x.length;
   for (let i = 0; i < n; i++) {
     const wi = w[i]!;
     if (!(wi > 0)) continue;
     const xi = x[i]!;
     const h = b > xi ? (b - xi) * hInv : 0;
-    if (h > 0 && xi > prev) {
+    const t = (xi - sMin) * inv;
+    const yi = y[i]!;
+    const w1 = wi * t;
+    a00 += wi;
+    a01 += wi * t;
+    r0 += wi * yi;
+    a11 += w1 * t;
+    r1 += w1 * yi;
+    if (!(h > 0)) continue;
+    if (xi > prev) {
       distinct++;
       prev = xi;
     }
     const h2 = h * h;
-    ROW[0] = 1;
-    ROW[1] = (xi - sMin) * inv;
-    ROW[2] = h2;
-    ROW[3] = h2 * h;
-    ROW[4] = h2 * h2;
-    const m = h > 0 ? K : 2;
-    const yi = y[i]!;
-    for (let r = 0; r < m; r++) {
-      const wr = wi * ROW[r]!;
-      for (let c = r; c < m; c++) A[r * (K + 1) + c] += wr * ROW[c]!;
-      A[r * (K + 1) + K] += wr * yi;
-    }
+    const h3 = h2 * h;
+    const h4 = h2 * h2;
+    a02 += wi * h2;
+    a03 += wi * h3;
+    a04 += wi * h4;
+    a12 += w1 * h2;
+    a13 += w1 * h3;
+    a14 += w1 * h4;
+    const w2 = wi * h2;
+    a22 += w2 * h2;
+    a23 += w2 * h3;
+    a24 += w2 * h4;
+    r2 += w2 * yi;
+    const w3 = wi * h3;
+    a33 += w3 * h3;
+    a34 += w3 * h4;
+    r3 += w3 * yi;
+    const w4 = wi * h4;
+    a44 += w4 * h4;
+    r4 += w4 * yi;
   }
   if (distinct < MIN_LANDWARD_FOR_QUARTIC) return undefined;
-  for (let r = 1; r < K; r++) for (let c = 0; c < r; c++) A[r * (K + 1) + c] = A[c * (K + 1) + r]!;
+  const W = K + 1;
+  A[0] = a00;
+  A[1] = A[W] = a01;
+  A[2] = A[2 * W] = a02;
+  A[3] = A[3 * W] = a03;
+  A[4] = A[4 * W] = a04;
+  A[W + 1] = a11;
+  A[W + 2] = A[2 * W + 1] = a12;
+  A[W + 3] = A[3 * W + 1] = a13;
+  A[W + 4] = A[4 * W + 1] = a14;
+  A[2 * W + 2] = a22;
+  A[2 * W + 3] = A[3 * W + 2] = a23;
+  A[2 * W + 4] = A[4 * W + 2] = a24;
+  A[3 * W + 3] = a33;
+  A[3 * W + 4] = A[4 * W + 3] = a34;
+  A[4 * W + 4] = a44;
+  A[K] = r0;
+  A[W + K] = r1;
+  A[2 * W + K] = r2;
+  A[3 * W + K] = r3;
+  A[4 * W + K] = r4;
   return solve();
 }
 
