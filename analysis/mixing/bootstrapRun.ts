@@ -1,10 +1,10 @@
-import { randomLcg, randomNormal } from "d3-random";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { fitPreparedSpline, prepareSmoothingSpline } from "../stats/smoothingSpline.ts";
 import { mergeKnotResponses, mergeKnots } from "../stats/knotData.ts";
 import { evaluatePlannedGrid, planSplineGrid } from "../stats/splineGridPlan.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import { intervalBc95 } from "../stats/biasCorrectedInterval.ts";
+import { seededNormal } from "../stats/seededNormal.ts";
 import { fitTwoPhase, seawardLine, twoPhaseDesign, twoPhaseMaximum, twoPhaseValue } from "./twoPhase.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
@@ -88,8 +88,7 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const n = b.x.length;
   const G = b.grid.length;
   const D = b.draws;
-  const rand = randomLcg(b.seed);
-  const z = randomNormal.source(rand)(0, 1);
+  const z = seededNormal(b.seed);
   const nan = (): Float64Array => new Float64Array(D).fill(Number.NaN);
   const eff = nan();
   const c0 = nan();

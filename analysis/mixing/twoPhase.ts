@@ -1,10 +1,11 @@
 import jStat from "jstat";
 import { fUpperP } from "../stats/distributions.ts";
 import {
-  breakRss,
+  breakRssInto,
   fitLine,
   gridTerms,
-  termsRss,
+  termsRssInto,
+  RSS_OUT,
   TERMS,
   loadResponse,
   putNormal,
@@ -238,7 +239,8 @@ export function fitTwoPhase(
   const tg = gridTerms(ds, lo, GRID, fourth);
   for (let g = 0; g <= GRID; g++) {
     const b = lo + ((sMax - lo) * g) / GRID;
-    const r = termsRss(ds, tg, g * TERMS, c);
+    termsRssInto(ds, tg, g * TERMS, c);
+    const r = RSS_OUT[0]!;
     PROFILE[g] = r;
     if (r < best) {
       best = r;
@@ -253,8 +255,10 @@ export function fitTwoPhase(
   // Golden-section search: one new evaluation per step.
   let m1 = z - gr * (z - a);
   let m2 = a + gr * (z - a);
-  let r1 = breakRss(ds, m1, fourth < m1 ? 4 : 3, c);
-  let r2 = breakRss(ds, m2, fourth < m2 ? 4 : 3, c);
+  breakRssInto(ds, m1, fourth < m1 ? 4 : 3, c);
+  let r1 = RSS_OUT[0]!;
+  breakRssInto(ds, m2, fourth < m2 ? 4 : 3, c);
+  let r2 = RSS_OUT[0]!;
   for (let it = 0; it < REFINE; it++) {
     if (r1 < best) {
       best = r1;
@@ -269,13 +273,15 @@ export function fitTwoPhase(
       m2 = m1;
       r2 = r1;
       m1 = z - gr * (z - a);
-      r1 = breakRss(ds, m1, fourth < m1 ? 4 : 3, c);
+      breakRssInto(ds, m1, fourth < m1 ? 4 : 3, c);
+      r1 = RSS_OUT[0]!;
     } else {
       a = m1;
       m1 = m2;
       r1 = r2;
       m2 = a + gr * (z - a);
-      r2 = breakRss(ds, m2, fourth < m2 ? 4 : 3, c);
+      breakRssInto(ds, m2, fourth < m2 ? 4 : 3, c);
+      r2 = RSS_OUT[0]!;
     }
   }
   if (r1 < best) {
@@ -293,7 +299,8 @@ export function fitTwoPhase(
     const xi = xs[i]!;
     if (xi < bestB - tol || xi <= lo) continue;
     if (xi > bestB + tol) break;
-    const r = breakRss(ds, xi, fourth < xi ? 4 : 3, c);
+    breakRssInto(ds, xi, fourth < xi ? 4 : 3, c);
+    const r = RSS_OUT[0]!;
     if (r <= best) {
       best = r;
       bestB = xi;

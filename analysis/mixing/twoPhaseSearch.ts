@@ -406,6 +406,12 @@ export function breakTerms(d: TwoPhaseDesign, b: number, k: number, out: Float64
 }
 
 /**
+ * Result slot of {@link termsRssInto} and {@link breakRssInto}: a double returned from a call that is
+ * not inlined is boxed on the heap, and the break search of every bootstrap replicate makes ~40 of them.
+ */
+export const RSS_OUT = new Float64Array(1);
+
+/**
  * Weighted RSS of the two-phase model at a break whose design terms are in tm[at …] for the
  * response loaded by {@link loadResponse}: the closed form when safe, else the normal equations
  * solved by {@link solveNormal} (RSS = Σw·ỹ² − βᵀr).
@@ -413,6 +419,12 @@ export function breakTerms(d: TwoPhaseDesign, b: number, k: number, out: Float64
  * @returns the RSS, or +∞ when the normal equations are singular
  */
 export function termsRss(d: TwoPhaseDesign, tm: Float64Array, at: number, coef: Float64Array): number {
+  termsRssInto(d, tm, at, coef);
+  return RSS_OUT[0]!;
+}
+
+/** {@link termsRss} with the RSS written to {@link RSS_OUT}[0] instead of returned (no boxing). */
+export function termsRssInto(d: TwoPhaseDesign, tm: Float64Array, at: number, coef: Float64Array): void {
   const Q = d.q;
   const oq = tm[at + T_M]! * 4;
   const h = tm[at + T_H]!;
@@ -428,13 +440,20 @@ export function termsRss(d: TwoPhaseDesign, tm: Float64Array, at: number, coef: 
   const r2 = (h * q0 - 2 * q1) * h + q2;
   const r3 = k >= 4 ? ((h * q0 - 3 * q1) * h + 3 * q2) * h - q3 : 0;
   const fast = tm[at + T_FAST]!;
-  if (fast === 2) return Number.POSITIVE_INFINITY;
+  if (fast === 2) {
+    RSS_OUT[0] = Number.POSITIVE_INFINITY;
+    return;
+  }
   if (fast === 1) {
     const rt2 = r2 - a02 * d.line0 - a12 * d.line1;
-    if (k < 4) return Math.max(0, d.rssLine - rt2 * rt2 * tm[at + T_C22]!);
+    if (k < 4) {
+      RSS_OUT[0] = Math.max(0, d.rssLine - rt2 * rt2 * tm[at + T_C22]!);
+      return;
+    }
     const rt3 = r3 - a03 * d.line0 - a13 * d.line1;
     const gain = tm[at + T_C22]! * rt2 * rt2 + 2 * tm[at + T_C23]! * rt2 * rt3 + tm[at + T_C33]! * rt3 * rt3;
-    return Math.max(0, d.rssLine - gain);
+    RSS_OUT[0] = Math.max(0, d.rssLine - gain);
+    return;
   }
   const P = d.p,
     e = d.n * 7,
@@ -459,9 +478,12 @@ export function termsRss(d: TwoPhaseDesign, tm: Float64Array, at: number, coef: 
     r3,
   );
   coef[0] = coef[1] = coef[2] = coef[3] = 0;
-  if (!solveNormal(k, coef)) return Number.POSITIVE_INFINITY;
+  if (!solveNormal(k, coef)) {
+    RSS_OUT[0] = Number.POSITIVE_INFINITY;
+    return;
+  }
   const rss = d.ryy - coef[0]! * r0 - coef[1]! * r1 - coef[2]! * r2 - coef[3]! * r3;
-  return Number.isFinite(rss) ? Math.max(0, rss) : Number.POSITIVE_INFINITY;
+  RSS_OUT[0] = Number.isFinite(rss) ? Math.max(0, rss) : Number.POSITIVE_INFINITY;
 }
 
 const ONE = new Float64Array(TERMS);
@@ -469,8 +491,14 @@ const SINK = new Float64Array(4);
 
 /** Weighted RSS at break b for the loaded response ({@link breakTerms} then {@link termsRss}). */
 export function breakRss(d: TwoPhaseDesign, b: number, k: number, coef: Float64Array): number {
+  breakRssInto(d, b, k, coef);
+  return RSS_OUT[0]!;
+}
+
+/** {@link breakRss} with the RSS written to {@link RSS_OUT}[0] instead of returned (no boxing). */
+export function breakRssInto(d: TwoPhaseDesign, b: number, k: number, coef: Float64Array): void {
   breakTerms(d, b, k, ONE);
-  return termsRss(d, ONE, 0, coef);
+  termsRssInto(d, ONE, 0, coef);
 }
 
 /**
