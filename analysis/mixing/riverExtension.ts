@@ -222,15 +222,17 @@ function solve(): Float64Array | undefined {
         A[col * W + j] = A[piv * W + j]!;
         A[piv * W + j] = t;
       }
-    for (let r = 0; r < K; r++) {
+    const co = col * W;
+    for (let r = 0, ro = 0; r < K; r++, ro += W) {
       if (r === col) continue;
-      const f = A[r * W + col]! / p;
-      if (f !== 0) for (let j = col; j < W; j++) A[r * W + j] = A[r * W + j]! - f * A[col * W + j]!;
+      const f = A[ro + col]! / p;
+      if (f !== 0) for (let j = col; j < W; j++) A[ro + j] = A[ro + j]! - f * A[co + j]!;
     }
   }
   for (let i = 0; i < K; i++) {
-    OUT[i] = A[i * W + K]! / A[i * W + i]!;
-    if (!Number.isFinite(OUT[i]!)) return undefined;
+    const v = A[i * W + K]! / A[i * W + i]!;
+    OUT[i] = v;
+    if (!Number.isFinite(v)) return undefined;
   }
   return OUT;
 }

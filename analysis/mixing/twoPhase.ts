@@ -208,11 +208,7 @@ export function fitTwoPhase(
   // The straight-line result is built only when it is returned (the bootstrap refits thousands of times).
   const lc0 = c[0]!,
     lc1 = c[1]!;
-  let syy = 0;
-  for (let i = 0; i < n; i++) {
-    const yi = y[ds.idx[i]!]!;
-    syy += ds.ws[i]! * yi * yi;
-  }
+  const syy = ds.syy;
   if (n < 5 || rssLin <= 1e-18 * syy) return lineResult(lc0, lc1, sMin, range, rssLin);
   // Candidate breaks: above the 3rd distinct station (≥ 3 distinct salinities landward, so the
   // landward curvature is never set by one station or by two near-tied ones), up to S_max.
@@ -232,7 +228,7 @@ export function fitTwoPhase(
   if (!(third < sMax)) return lineResult(lc0, lc1, sMin, range, rssLin);
   const lo = third + 1e-9 * range;
   if (!(fourth < sMax)) fourth = sMax;
-  loadResponse(ds, y);
+  loadResponse(ds, y, ds.swy);
   let bestB = sMax;
   let best = Number.POSITIVE_INFINITY;
   let bestI = 0;

@@ -19,6 +19,11 @@ export interface TwoPhaseDesign {
   p: Float64Array;
   /** Prefix sums of w·(y − ȳ)·tᵏ of the current response, 4 per row ({@link loadResponse}). */
   q: Float64Array;
+  /** Σw of the stations (summed in station order). */
+  sw: number;
+  /** Σw·y and Σw·y² of the response last given to {@link fitLine}. */
+  swy: number;
+  syy: number;
   /** Σw·(y − ȳ)² and ȳ of the current response. */
   ryy: number;
   ybar: number;
@@ -82,7 +87,9 @@ export function twoPhaseDesign(x: ArrayLike<number>, w: ArrayLike<number>): TwoP
   const ts = new Float64Array(n);
   let lineA00 = 0,
     lineA01 = 0,
-    lineA11 = 0;
+    lineA11 = 0,
+    sw = 0;
+  for (let i = 0; i < n; i++) sw += ws[i]!;
   for (let i = 0; i < n; i++) {
     const t = (xs[i]! - sMin) * inv;
     const wt = ws[i]! * t;
@@ -101,6 +108,9 @@ export function twoPhaseDesign(x: ArrayLike<number>, w: ArrayLike<number>): TwoP
     range,
     p,
     q,
+    sw,
+    swy: 0,
+    syy: 0,
     ryy: 0,
     ybar: 0,
     line0: 0,
@@ -117,20 +127,25 @@ export function twoPhaseDesign(x: ArrayLike<number>, w: ArrayLike<number>): TwoP
 /**
  * Weighted straight-line fit C = α₀ + α₁·t of a response y (indexed like the caller's x) on the
  * design: the normal equations with the design's response-free sums, solved by {@link solveNormal},
- * and the RSS from the residuals (the same sums in the same order as a direct fit).
+ * and the RSS from the residuals (the same sums in the same order as a direct fit). Also leaves
+ * Σw·y and Σw·y² of y in d.swy and d.syy (for {@link loadResponse} and the rounding-level test).
  *
  * @returns the weighted RSS with α₀, α₁ in coef[0], coef[1], or NaN when the equations are singular
  */
 export function fitLine(d: TwoPhaseDesign, y: ArrayLike<number>, coef: Float64Array): number {
   const { n, ws, ts, idx, xs, sMin } = d;
   let r0 = 0,
-    r1 = 0;
+    r1 = 0,
+    syy = 0;
   for (let i = 0; i < n; i++) {
     const wi = ws[i]!;
     const yi = y[idx[i]!]!;
     r0 += wi * yi;
     r1 += wi * ts[i]! * yi;
+    syy += wi * yi * yi;
   }
+  d.swy = r0;
+  d.syy = syy;
   coef[0] = coef[1] = coef[2] = coef[3] = 0;
   if (!solveNormal2(d.lineA00, d.lineA01, d.lineA11, r0, r1, coef)) return Number.NaN;
   const c0 = coef[0]!,
@@ -147,16 +162,16 @@ export function fitLine(d: TwoPhaseDesign, y: ArrayLike<number>, coef: Float64Ar
  * Loads a response y (indexed like the caller's x) into the design: ȳ (weighted mean), the
  * prefix sums of w·(y − ȳ)·tᵏ and Σw·(y − ȳ)² (y centred so the normal-equation RSS loses little
  * to cancellation).
+ *
+ * @param swy Σw·y of this y in station order when already known (d.swy after {@link fitLine} of it)
  */
-export function loadResponse(d: TwoPhaseDesign, y: ArrayLike<number>): void {
+export function loadResponse(d: TwoPhaseDesign, y: ArrayLike<number>, swy?: number): void {
   const { n, xs, ws, idx, q } = d;
-  let sw = 0,
+  if (swy === undefined) {
     swy = 0;
-  for (let i = 0; i < n; i++) {
-    sw += ws[i]!;
-    swy += ws[i]! * y[idx[i]!]!;
+    for (let i = 0; i < n; i++) swy += ws[i]! * y[idx[i]!]!;
   }
-  const ybar = swy / sw;
+  const ybar = swy / d.sw;
   const inv = 1 / d.range;
   let ryy = 0;
   for (let i = 0; i < n; i++) {
@@ -196,15 +211,17 @@ export function solveNormal(k: number, out: Float64Array): boolean {
         M[col * w + j] = M[piv * w + j]!;
         M[piv * w + j] = t;
       }
-    for (let r = 0; r < k; r++) {
+    const co = col * w;
+    for (let r = 0, ro = 0; r < k; r++, ro += w) {
       if (r === col) continue;
-      const f = M[r * w + col]! / p;
-      if (f !== 0) for (let j = col; j < w; j++) M[r * w + j] = M[r * w + j]! - f * M[col * w + j]!;
+      const f = M[ro + col]! / p;
+      if (f !== 0) for (let j = col; j < w; j++) M[ro + j] = M[ro + j]! - f * M[co + j]!;
     }
   }
   for (let i = 0; i < k; i++) {
-    out[i] = M[i * w + k]! / M[i * w + i]!;
-    if (!Number.isFinite(out[i]!)) return false;
+    const v = M[i * w + k]! / M[i * w + i]!;
+    out[i] = v;
+    if (!Number.isFinite(v)) return false;
   }
   return true;
 }
