@@ -6,6 +6,7 @@ import { createHash } from "node:crypto";
 import { availableParallelism } from "node:os";
 import type { CommandIo } from "../command.ts";
 import type { Survey, SurveyAnalysis } from "../../analysis/index.ts";
+import { surveyDischarge } from "../../analysis/index.ts";
 import { SurveyCache, surveyCacheKey } from "./surveyCache.ts";
 import { surveyTaskHandler, type SurveySetup } from "./surveyTask.ts";
 import { CancelledError, runPool, startWorkers, type StartedWorkers } from "./workerPool.ts";
@@ -64,8 +65,8 @@ export function surveyCost(survey: Survey): number {
   return values * 100 + survey.stations.length;
 }
 
-/** The cache key of every survey of a run. */
-function cacheKeys(surveys: readonly Survey[], setup: SurveySetup): string[] {
+/** The cache key of every survey of a run (exported for tests). */
+export function cacheKeys(surveys: readonly Survey[], setup: SurveySetup): string[] {
   const network = setup.inputs.channel?.network;
   const channel = network
     ? createHash("sha256")
@@ -73,8 +74,22 @@ function cacheKeys(surveys: readonly Survey[], setup: SurveySetup): string[] {
         .update(setup.inputs.channel!.mouth.statement)
         .digest("hex")
     : "none";
+  // The table itself is not hashed for every survey: what it gives each one (its resolved discharge,
+  // with origin, table date and days before) is, so a changed discharge changes the key.
+  const { dischargeTable, ...settings } = setup.settings;
   return surveys.map((survey) =>
-    surveyCacheKey({ survey, channel, settings: setup.settings, offChannelM: setup.inputs.choices.offChannelM }),
+    surveyCacheKey({
+      survey,
+      channel,
+      settings,
+      offChannelM: setup.inputs.choices.offChannelM,
+      discharge:
+        surveyDischarge(survey, {
+          settingM3s: settings.riverDischargeM3s,
+          chosenM3s: setup.inputs.choices.dischargeM3s,
+          table: dischargeTable,
+        }) ?? null,
+    }),
   );
 }
 
