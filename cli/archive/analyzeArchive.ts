@@ -8,6 +8,7 @@ import type { CommandIo } from "../command.ts";
 import type { Survey, SurveyAnalysis } from "../../analysis/index.ts";
 import { surveyDischarge } from "../../analysis/index.ts";
 import { SurveyCache, surveyCacheKey } from "./surveyCache.ts";
+import { surveyWorkerUrl } from "./earlyStart.ts";
 import { surveyTaskHandler, type SurveySetup } from "./surveyTask.ts";
 import { CancelledError, runPool, startWorkers, type StartedWorkers } from "./workerPool.ts";
 
@@ -38,9 +39,7 @@ export interface ArchiveRunStats {
   taskSeconds: number;
 }
 
-/** The worker script of the survey pool (the build's JavaScript, or a tsx entry from the TypeScript sources). */
-export const surveyWorkerUrl = (): URL =>
-  new URL(import.meta.url.endsWith(".ts") ? "./surveyWorkerTs.js" : "./surveyWorker.js", import.meta.url);
+export { surveyWorkerUrl };
 
 /**
  * Starts the survey worker threads now (before reading the inputs, so loading their code overlaps

@@ -2,7 +2,6 @@
  * The archive options of `brackline compare`: seasons, threads and the cache, turned into what
  * summarizeArchive and analyzeArchive take, and the report of a discharge table joined by date.
  */
-import { availableParallelism } from "node:os";
 import type { DischargeTable, Season, SurveyAnalysis } from "../../analysis/index.ts";
 import { DISCHARGE_JOIN_MAX_DAYS, dischargeTableReport, parseSeasons } from "../../analysis/index.ts";
 import { UsageError } from "../exitCodes.ts";
@@ -18,13 +17,7 @@ export function seasonsOption(text: string | undefined): Season[] | undefined {
   }
 }
 
-/** Threads from `--threads n`, this one included (default: available parallelism); 0 or 1 = this thread only. */
-export function threadsOption(text: string | undefined): number {
-  if (text === undefined) return availableParallelism();
-  if (!/^\s*\d+\s*$/.test(text) || Number(text) > 256)
-    throw new UsageError(`--threads: expected a whole number 0…256; got "${text}"`);
-  return Number(text);
-}
+export { threadsOption } from "./earlyStart.ts";
 
 /** Cache directory from `--cache-dir` / `--no-cache` (default: the user's cache directory). */
 export function cacheDirOption(dir: string | undefined, noCache: boolean | undefined): string | undefined {
