@@ -477,23 +477,36 @@ export function termsRssInto(d: TwoPhaseDesign, tm: Float64Array, at: number, co
     eq = d.n * 4;
   const r0 = Q[eq]!,
     r1 = Q[eq + 1]!;
-  putNormal(
-    k,
-    P[e]!,
-    P[e + 1]!,
-    P[e + 2]!,
-    a02,
-    a12,
-    tm[at + T_A22]!,
-    a03,
-    a13,
-    tm[at + T_A23]!,
-    tm[at + T_A33]!,
-    r0,
-    r1,
-    r2,
-    r3,
-  );
+  // The normal equations written into M here rather than through putNormal (the same entries): a
+  // call with 15 numbers that is not inlined boxes each of them.
+  const a00 = P[e]!,
+    a01 = P[e + 1]!,
+    c = k + 1;
+  M[0] = a00;
+  M[1] = a01;
+  M[c] = a01;
+  M[c + 1] = P[e + 2]!;
+  M[k] = r0;
+  M[c + k] = r1;
+  if (k >= 3) {
+    M[2] = a02;
+    M[2 * c] = a02;
+    M[c + 2] = a12;
+    M[2 * c + 1] = a12;
+    M[2 * c + 2] = tm[at + T_A22]!;
+    M[2 * c + k] = r2;
+  }
+  if (k >= 4) {
+    const a23 = tm[at + T_A23]!;
+    M[3] = a03;
+    M[3 * c] = a03;
+    M[c + 3] = a13;
+    M[3 * c + 1] = a13;
+    M[2 * c + 3] = a23;
+    M[3 * c + 2] = a23;
+    M[3 * c + 3] = tm[at + T_A33]!;
+    M[3 * c + k] = r3;
+  }
   coef[0] = coef[1] = coef[2] = coef[3] = 0;
   if (!solveNormal(k, coef)) {
     RSS_OUT[0] = Number.POSITIVE_INFINITY;
