@@ -226,7 +226,8 @@ function solve(): Float64Array | undefined {
     for (let r = 0, ro = 0; r < K; r++, ro += W) {
       if (r === col) continue;
       const f = A[ro + col]! / p;
-      if (f !== 0) for (let j = col; j < W; j++) A[ro + j] = A[ro + j]! - f * A[co + j]!;
+      // Column col itself (≈ 0 after elimination) is never read again: the update starts right of it.
+      if (f !== 0) for (let j = col + 1; j < W; j++) A[ro + j] = A[ro + j]! - f * A[co + j]!;
     }
   }
   for (let i = 0; i < K; i++) {

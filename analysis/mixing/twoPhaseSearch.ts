@@ -215,7 +215,8 @@ export function solveNormal(k: number, out: Float64Array): boolean {
     for (let r = 0, ro = 0; r < k; r++, ro += w) {
       if (r === col) continue;
       const f = M[ro + col]! / p;
-      if (f !== 0) for (let j = col; j < w; j++) M[ro + j] = M[ro + j]! - f * M[co + j]!;
+      // Column col itself (≈ 0 after elimination) is never read again: the update starts right of it.
+      if (f !== 0) for (let j = col + 1; j < w; j++) M[ro + j] = M[ro + j]! - f * M[co + j]!;
     }
   }
   for (let i = 0; i < k; i++) {
