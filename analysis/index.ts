@@ -429,6 +429,8 @@ export {
   decimalYear,
   seasonColor,
 } from "./archive/archiveFigures.ts";
+export { dayMs, paddedTimeDomain, timeTicks } from "./archive/timeTicks.ts";
+export type { TimeTick } from "./archive/timeTicks.ts";
 export { ARCHIVE_BIBLIOGRAPHY, ARCHIVE_KEYS } from "./archive/archiveReferences.ts";
 // --- end archive ---
 // --- output ---
@@ -461,6 +463,7 @@ export { stripControl } from "./output/terminalText.ts";
 export { readInputs, readStationTableFile, readSurveyFileAs, type PreReadFiles } from "./workspace/readInputs.ts";
 export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
 export { plottedObservations, surveyObservations } from "./workspace/observations.ts";
+export { stationListOrder } from "./workspace/stationOrder.ts";
 export type { ObservationPoint } from "./workspace/observations.ts";
 export { workspaceComparison } from "./workspace/comparison.ts";
 export {
@@ -485,7 +488,7 @@ export {
   isNetcdfMagic,
   EXPECTED_FILE,
 } from "./workspace/fileKind.ts";
-export { FILE_KIND_LABELS, type InputFileKind } from "./workspace/fileKindLabels.ts";
+export { FILE_KIND_LABELS, provenanceRoleOf, type InputFileKind } from "./workspace/fileKindLabels.ts";
 export {
   channelOverlay,
   surveyOverlay,

@@ -7,6 +7,20 @@ import { formatSignificant } from "../output/formatNumber.ts";
 import { html, joinHtml, type SafeHtml } from "../report/html.ts";
 import { axesSvg, c1, extentOf, legendSvg, linePath, makeFrame, PALETTE } from "../report/svgFrame.ts";
 import type { ConstituentSeries, DischargeRelation, IntrusionPoint } from "./types.ts";
+import { dayMs, paddedTimeDomain, timeTicks } from "./timeTicks.ts";
+import type { PlotFrame } from "../report/svgFrame.ts";
+
+/** A frame whose x axis is time [ms] over the padded domain of the survey days, with calendar ticks. */
+function timeFrame(
+  ms: readonly number[],
+  yDomain: [number, number],
+  size: { width: number; height: number },
+  nTicks: number,
+): { f: PlotFrame; ticks: Array<{ value: number; label: string }> } {
+  const domain = paddedTimeDomain(ms);
+  const f = makeFrame(domain, yDomain, { ...size, niceX: false });
+  return { f, ticks: timeTicks(domain, nTicks).map((t) => ({ value: t.ms, label: t.label })) };
+}
 
 /** Date YYYY-MM-DD as a decimal year (mid-day). */
 export function decimalYear(date: string): number {
@@ -34,13 +48,35 @@ const svgWrap = (w: number, h: number, id: string, title: string, body: SafeHtml
  * @param s the constituent's series
  * @param seasons season names in order (for colours)
  * @param id unique id prefix
+ * @param surveyDaysMs the days [ms] the date axis spans (every survey of the archive, so that the small
+ *   multiples share one axis); default: the days of this constituent's points
  */
-export function percentChangeSeriesSvg(s: ConstituentSeries, seasons: readonly string[], id: string): SafeHtml {
-  const pts = s.points.filter((p) => p.date !== undefined && p.percentChange);
-  const xs = pts.map((p) => decimalYear(p.date!));
+export function percentChangeSeriesSvg(
+  s: ConstituentSeries,
+  seasons: readonly string[],
+  id: string,
+  surveyDaysMs?: readonly number[],
+): SafeHtml {
+  const pts = s.points.filter((p) => dayMs(p.date) !== undefined && p.percentChange);
+  if (!pts.length)
+    return svgWrap(
+      340,
+      200,
+      id,
+      `${s.name} % change by survey date`,
+      html`<text x="170" y="100" text-anchor="middle" class="tick"
+        >No survey has a determined % change of ${s.name}.</text
+      >`,
+    );
+  const xs = pts.map((p) => dayMs(p.date)!);
   const lo = pts.map((p) => p.percentChange!.lower);
   const hi = pts.map((p) => p.percentChange!.upper);
-  const f = makeFrame(extentOf(xs, [2000, 2001]), extentOf([...lo, ...hi, 0], [-10, 10]), { width: 340, height: 200 });
+  const { f, ticks } = timeFrame(
+    surveyDaysMs?.length ? surveyDaysMs : xs,
+    extentOf([...lo, ...hi, 0], [-10, 10]),
+    { width: 340, height: 200 },
+    4,
+  );
   const marks = pts.map((p, i) => {
     const x = c1(f.x(xs[i]!));
     const col = seasonColor(p.season, seasons);
@@ -66,7 +102,7 @@ export function percentChangeSeriesSvg(s: ConstituentSeries, seasons: readonly s
     200,
     id,
     `${s.name} % change by survey date`,
-    html`${axesSvg(f, "Survey date (year)", `${s.name} % change (%)`)}${zero}${joinHtml(marks)}`,
+    html`${axesSvg(f, "Survey date", `${s.name} % change (%)`, ticks)}${zero}${joinHtml(marks)}`,
   );
 }
 
@@ -83,19 +119,19 @@ export function channelTimeStripSvg(
   intrusion: readonly IntrusionPoint[],
   id: string,
 ): SafeHtml {
-  const dated = intrusion.filter((p) => p.date !== undefined);
+  const dated = intrusion.filter((p) => dayMs(p.date) !== undefined);
   const zones = (s?.points ?? []).filter(
-    (p) => p.date !== undefined && (p.reactionZoneKm || p.maximumKm !== undefined),
+    (p) => dayMs(p.date) !== undefined && (p.reactionZoneKm || p.maximumKm !== undefined),
   );
-  const xs = [...dated.map((p) => decimalYear(p.date!)), ...zones.map((p) => decimalYear(p.date!))];
+  const xs = [...dated.map((p) => dayMs(p.date)!), ...zones.map((p) => dayMs(p.date)!)];
   const kms = [
     0,
     ...dated.flatMap((p) => (p.saltIntrusionKm !== undefined ? [p.saltIntrusionKm] : [])),
     ...zones.flatMap((p) => [...(p.reactionZoneKm ?? []), ...(p.maximumKm !== undefined ? [p.maximumKm] : [])]),
   ];
-  const f = makeFrame(extentOf(xs, [2000, 2001]), extentOf(kms, [0, 10]), { width: 680, height: 220 });
+  const { f, ticks } = timeFrame(xs, extentOf(kms, [0, 10]), { width: 680, height: 220 }, 8);
   const bars = zones.map((p) => {
-    const x = f.x(decimalYear(p.date!));
+    const x = f.x(dayMs(p.date)!);
     const z = p.reactionZoneKm;
     const bar = z
       ? html`<rect
@@ -116,12 +152,11 @@ export function channelTimeStripSvg(
   const withL = dated.filter((p) => p.saltIntrusionKm !== undefined);
   const line = linePath(
     f,
-    withL.map((p) => decimalYear(p.date!)),
+    withL.map((p) => dayMs(p.date)!),
     withL.map((p) => p.saltIntrusionKm!),
   );
   const dots = withL.map(
-    (p) =>
-      html`<circle cx="${c1(f.x(decimalYear(p.date!)))}" cy="${c1(f.y(p.saltIntrusionKm!))}" r="1.8" fill="#d9480f" />`,
+    (p) => html`<circle cx="${c1(f.x(dayMs(p.date)!))}" cy="${c1(f.y(p.saltIntrusionKm!))}" r="1.8" fill="#d9480f" />`,
   );
   const legend = legendSvg(f, [
     { label: `salt intrusion (S = ${intrusion[0]?.saltIntrusionSalinity ?? 2})`, color: "#d9480f", mark: "line" },
@@ -138,7 +173,7 @@ export function channelTimeStripSvg(
     220,
     id,
     "Reaction zones and salt intrusion along the channel over time",
-    html`${axesSvg(f, "Survey date (year)", "Distance from the mouth (km)")}${joinHtml(bars)}<path
+    html`${axesSvg(f, "Survey date", "Distance from the mouth (km)", ticks)}${joinHtml(bars)}<path
         d="${line}"
         fill="none"
         stroke="#d9480f"

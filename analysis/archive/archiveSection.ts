@@ -10,6 +10,7 @@ import { pWords } from "./dischargeRelation.ts";
 import { channelTimeStripSvg, dischargeScatterSvg, percentChangeSeriesSvg, seasonColor } from "./archiveFigures.ts";
 import { zoneCentreKm } from "./buildSeries.ts";
 import type { ArchiveSummary, DischargeRelation, Spread } from "./types.ts";
+import { dayMs } from "./timeTicks.ts";
 
 /** The archive section of the briefing. */
 export interface BriefingArchive {
@@ -57,12 +58,17 @@ export function archiveSection(a: ArchiveSummary, maxConstituents = 4): Briefing
     .sort((x, y) => y.points.filter((p) => p.percentChange).length - x.points.filter((p) => p.percentChange).length)
     .slice(0, maxConstituents);
   const legend = a.seasons.map((s) => ({ label: s.name, color: seasonColor(s.name, seasons) }));
+  // Small multiples share one date axis: every survey of the archive (common practice).
+  const surveyDays = a.intrusion.flatMap((p) => {
+    const t = dayMs(p.date);
+    return t === undefined ? [] : [t];
+  });
   const figures: BriefingFigure[] = key.map((s, i) => ({
     id: `arch-pc-${i}`,
     title: `${constituentWords(s.name)}: % change by survey`,
     caption:
       "Net change from river to sea, 100·(C*₀ − C₀)/C₀, of each survey with its 95 % bootstrap interval; below the dashed line = removal. Colour = season.",
-    svg: percentChangeSeriesSvg(s, seasons, `arch-pc-${i}`),
+    svg: percentChangeSeriesSvg(s, seasons, `arch-pc-${i}`, surveyDays),
     legend,
     size: "half",
   }));

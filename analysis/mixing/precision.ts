@@ -1,5 +1,7 @@
 import type { Precision } from "./options.ts";
 import { molarFactor } from "./units.ts";
+import { parseUnit } from "../seawater/units.ts";
+import { ATOMIC_WEIGHTS } from "../seawater/atomicWeights.ts";
 
 /**
  * Default analytical precision by constituent, relative % plus an absolute floor
@@ -30,23 +32,57 @@ export const DEFAULT_PRECISION: Record<string, { relative: number; absolute: num
 /** Fallback when the constituent is not in the table: 5 % relative, no floor. */
 export const FALLBACK_PRECISION: Precision = { relative: 0.05, absolute: 0 };
 
+/** Element a tabulated constituent is counted per, for mass units (DOC in mg C/L, NO3 in mg N/L). */
+const COUNTED_ELEMENT: Readonly<Record<string, string>> = {
+  DOC: "C",
+  NO3: "N",
+  NO2: "N",
+  NH4: "N",
+  PO4: "P",
+  Si: "Si",
+};
+
 /**
- * Default analytical precision for a constituent in a given unit.
+ * The table key of a constituent name: exact, then case-insensitive, then without a parenthesised
+ * column suffix ("DOC (DOC_mgL)", the name a second column of the same constituent gets).
+ */
+function tableKey(name: string): string | undefined {
+  const keys = Object.keys(DEFAULT_PRECISION);
+  const find = (n: string) => keys.find((k) => k === n) ?? keys.find((k) => k.toLowerCase() === n.toLowerCase());
+  return find(name) ?? find(name.replace(/\s*\([^()]*\)\s*$/, ""));
+}
+
+/**
+ * The tabulated absolute floor, given per amount in `tableUnit`, in the data's `unit`: a molar unit
+ * by the ratio of amount factors; a mass unit (mg/L, µg/kg) through the atomic weight of the element
+ * the constituent is counted per (CIAAW 2021). 0 when the unit cannot be converted.
+ */
+function absoluteIn(key: string, absolute: number, tableUnit: string, unit: string): number {
+  const from = molarFactor(tableUnit);
+  if (!from) return 0;
+  const to = molarFactor(unit);
+  if (to) return (absolute * from.molPerUnit) / to.molPerUnit;
+  const mass = parseUnit(unit);
+  const element = COUNTED_ELEMENT[key] ?? key;
+  const weight = Object.hasOwn(ATOMIC_WEIGHTS, element) ? ATOMIC_WEIGHTS[element]!.gPerMol : undefined;
+  if (!mass || mass.quantity !== "mass" || weight === undefined) return 0;
+  return (absolute * from.molPerUnit * weight) / mass.toBase;
+}
+
+/**
+ * Default analytical precision for a constituent in a given unit. The same constituent gets the same
+ * precision whatever its unit (a file with DOC in µmol/L and in mg/L is weighted alike in both).
  *
- * @param name constituent symbol, e.g. "Fe" (case-sensitive first, then case-insensitive)
- * @param unit the data's concentration unit, e.g. "µmol/kg"
+ * @param name constituent symbol, e.g. "Fe" (case-sensitive first, then case-insensitive, then
+ *   without a parenthesised column suffix such as "DOC (DOC_mgL)")
+ * @param unit the data's concentration unit, e.g. "µmol/kg" or "mg/L"
  * @returns the precision and whether it came from the table
  */
 export function defaultPrecision(name: string, unit: string): { precision: Precision; fromTable: boolean } {
-  const key =
-    Object.keys(DEFAULT_PRECISION).find((k) => k === name) ??
-    Object.keys(DEFAULT_PRECISION).find((k) => k.toLowerCase() === name.toLowerCase());
+  const key = tableKey(name);
   if (!key) return { precision: FALLBACK_PRECISION, fromTable: false };
   const d = DEFAULT_PRECISION[key]!;
-  const from = molarFactor(d.unit);
-  const to = molarFactor(unit);
-  const absolute = from && to ? (d.absolute * from.molPerUnit) / to.molPerUnit : 0;
-  return { precision: { relative: d.relative, absolute }, fromTable: true };
+  return { precision: { relative: d.relative, absolute: absoluteIn(key, d.absolute, d.unit, unit) }, fromTable: true };
 }
 
 /**

@@ -7,7 +7,8 @@ const g = (v: number): string => (Math.abs(v) >= 100 ? v.toFixed(0) : v.toPrecis
 
 /**
  * Plain-language verdict that agrees with the numbers (documented rules): a % change whose
- * interval crosses zero says "direction not determined"; an interval wider than ±1000 % says
+ * interval crosses or touches zero says "not determined in sign" (a limit of exactly 0 % comes from
+ * bootstrap draws that kept the straight line, i.e. conservative mixing is not excluded); an interval wider than ±1000 % says
  * "not determined"; a negative C*₀ is flagged (warning "effective-negative").
  *
  * @param cls behaviour class
@@ -41,7 +42,7 @@ export function verdictOf(
   }
   if (cls === "conservative")
     return `conservative mixing within the uncertainty (% change ${g(percent.value)} %, 95 % interval ${span})`;
-  if (percent.lower < 0 && percent.upper > 0)
+  if (percent.lower <= 0 && percent.upper >= 0)
     return `${cls} in the curve's shape, but the net % change is not determined in sign (${g(percent.value)} %, 95 % interval ${span})`;
   return `${cls}: net ${percent.value < 0 ? "removal" : "addition"} of ${g(Math.abs(percent.value))} % (95 % interval ${span})`;
 }

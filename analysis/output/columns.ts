@@ -44,6 +44,11 @@ export const RESULT_COLUMNS: ReadonlyArray<ColumnSpec<ResultRow>> = [
   { name: "percent_change", description: "%", value: (r) => r.c.percentChange?.value },
   { name: "percent_change_lower", description: "% (95 % limit)", value: (r) => r.c.percentChange?.lower },
   { name: "percent_change_upper", description: "% (95 % limit)", value: (r) => r.c.percentChange?.upper },
+  {
+    name: "verdict",
+    description: "plain-language verdict that agrees with the numbers (e.g. % change not determined)",
+    value: (r) => r.c.verdict,
+  },
   { name: "effective_river_endmember", description: "C*0, unit", value: (r) => r.c.effectiveEndmember?.value },
   {
     name: "effective_river_endmember_lower",

@@ -24,7 +24,7 @@ ul { margin: 0 0 3mm; padding-left: 6mm; }
 .tag.context { background: #f1f3f5; color: #495057; }
 table { border-collapse: collapse; width: 100%; margin: 2mm 0 1mm; font-size: 8.6pt; page-break-inside: auto; }
 caption { text-align: left; font-weight: 600; margin-bottom: 1mm; font-size: 9.5pt; }
-th, td { border: 0.5px solid #bbb; padding: 1mm 1.4mm; vertical-align: top; text-align: left; }
+th, td { border: 0.5px solid #bbb; padding: 1mm 1.4mm; vertical-align: top; text-align: left; overflow-wrap: anywhere; }
 th { background: #eef2f6; }
 thead { display: table-header-group; }
 tr { break-inside: avoid; page-break-inside: avoid; }

@@ -74,7 +74,7 @@ export interface BriefingDocument {
 /** A survey file or map file that went into the briefing. */
 export interface ProvenanceFile {
   name: string;
-  role: "survey" | "centerline" | "basemap" | "other";
+  role: "survey" | "stations" | "centerline" | "basemap" | "other";
   bytes?: number;
   sha256?: string;
 }

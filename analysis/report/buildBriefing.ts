@@ -8,7 +8,7 @@ import { SCREENING_CAUTION } from "../output/caution.ts";
 import type { StationPlacement } from "../pipeline/surveyAnalysis.ts";
 import type { ConstituentAnalysis } from "../mixing/result.ts";
 import { readBasemap } from "./basemap.ts";
-import type { BriefingDocument, BriefingInput, BriefingTable } from "./briefingTypes.ts";
+import type { BriefingDocument, BriefingInput, BriefingTable, ProvenanceFile } from "./briefingTypes.ts";
 import { comparisonSection } from "./comparisonSection.ts";
 import { briefingReferences, methodsParagraphs } from "./references.ts";
 import { datePart } from "./resultsTable.ts";
@@ -37,13 +37,27 @@ function dateRangeOf(analyses: BriefingInput["analyses"]): [string, string] | un
   return d.length ? [d[0]!, d[d.length - 1]!] : undefined;
 }
 
+/** A provenance role in words. */
+const ROLE_WORDS: Record<ProvenanceFile["role"], string> = {
+  survey: "survey",
+  stations: "station table",
+  centerline: "centerline",
+  basemap: "basemap",
+  other: "other",
+};
+
 function provenance(input: BriefingInput): BriefingTable[] {
   const tables: BriefingTable[] = [];
   if (input.files?.length)
     tables.push({
       caption: "Input files",
       header: ["File", "Role", "Size (bytes)", "SHA-256"],
-      rows: input.files.map((f) => [f.name, f.role, f.bytes !== undefined ? String(f.bytes) : "—", f.sha256 ?? "—"]),
+      rows: input.files.map((f) => [
+        f.name,
+        ROLE_WORDS[f.role],
+        f.bytes !== undefined ? String(f.bytes) : "—",
+        f.sha256 ?? "—",
+      ]),
     });
   if (input.analyses.length > BRIEFING_LIST_MAX) {
     const placed = input.analyses.reduce(

@@ -61,7 +61,16 @@ export function extentOf(values: readonly number[], fallback: [number, number]):
 export function makeFrame(
   xDomain: [number, number],
   yDomain: [number, number],
-  size: { width: number; height: number; left?: number; right?: number; top?: number; bottom?: number },
+  size: {
+    width: number;
+    height: number;
+    left?: number;
+    right?: number;
+    top?: number;
+    bottom?: number;
+    /** Round the x domain to nice numbers (default true; false for a date axis with its own ticks). */
+    niceX?: boolean;
+  },
 ): PlotFrame {
   const left = size.left ?? 48;
   const right = size.right ?? 12;
@@ -69,8 +78,8 @@ export function makeFrame(
   const bottom = size.bottom ?? 34;
   const x = scaleLinear()
     .domain(xDomain)
-    .range([left, size.width - right])
-    .nice(6);
+    .range([left, size.width - right]);
+  if (size.niceX !== false) x.nice(6);
   const y = scaleLinear()
     .domain(yDomain)
     .range([size.height - bottom, top])
@@ -101,24 +110,29 @@ export function linePath(frame: PlotFrame, xs: readonly number[], ys: readonly n
  * @param frame the frame
  * @param xLabel x-axis label with unit
  * @param yLabel y-axis label with unit
+ * @param xTicks ticks of the x axis with their labels (e.g. a date axis); default: nice numbers
  */
-export function axesSvg(frame: PlotFrame, xLabel: string, yLabel: string): SafeHtml {
+export function axesSvg(
+  frame: PlotFrame,
+  xLabel: string,
+  yLabel: string,
+  xTicks?: ReadonlyArray<{ value: number; label: string }>,
+): SafeHtml {
   const { x, y, left, top, width, height, right, bottom } = frame;
   const x0 = left;
   const x1 = width - right;
   const y0 = height - bottom;
-  const xt = x
-    .ticks(6)
-    .map(
-      (t) =>
-        html`<line class="grid" x1="${c1(x(t))}" x2="${c1(x(t))}" y1="${c1(top)}" y2="${c1(y0)}" /><text
-            class="tick"
-            x="${c1(x(t))}"
-            y="${c1(y0 + 11)}"
-            text-anchor="middle"
-            >${formatSignificant(t, 4)}</text
-          >`,
-    );
+  const ticks = xTicks ?? x.ticks(6).map((t) => ({ value: t, label: formatSignificant(t, 4) }));
+  const xt = ticks.map(
+    (t) =>
+      html`<line class="grid" x1="${c1(x(t.value))}" x2="${c1(x(t.value))}" y1="${c1(top)}" y2="${c1(y0)}" /><text
+          class="tick"
+          x="${c1(x(t.value))}"
+          y="${c1(y0 + 11)}"
+          text-anchor="middle"
+          >${t.label}</text
+        >`,
+  );
   const yt = y
     .ticks(5)
     .map(

@@ -12,3 +12,16 @@ export const FILE_KIND_LABELS: Record<InputFileKind, string> = {
   surveyNetcdf: "survey (netCDF)",
   unknown: "not recognised",
 };
+
+/**
+ * The role a file read by readInputs plays in a briefing's provenance table (CLI and dashboard alike).
+ *
+ * @param kind the kind readInputs recognised (`InputFileReport.kind`)
+ * @returns "survey", "stations", "centerline" or "other"
+ */
+export function provenanceRoleOf(kind: InputFileKind | undefined): "survey" | "stations" | "centerline" | "other" {
+  if (kind === "stationTable") return "stations";
+  if (kind === "centerline") return "centerline";
+  if (kind === "surveyText" || kind === "surveyGeoJson" || kind === "surveyNetcdf") return "survey";
+  return "other";
+}

@@ -2,7 +2,7 @@ import { createHash } from "node:crypto";
 import { basename } from "node:path";
 import type { Command, CommandIo } from "../command.ts";
 import type { ProvenanceFile, SurveyAnalysis, SurveyComparison, WorkspaceInputs } from "../../analysis/index.ts";
-import { comparisonToCsv, SCREENING_CAUTION, workspaceComparison } from "../../analysis/index.ts";
+import { comparisonToCsv, provenanceRoleOf, SCREENING_CAUTION, workspaceComparison } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { checkOut, readBytes, writeOut } from "../files.ts";
 import {
@@ -74,7 +74,13 @@ export async function analyzeFiles(
     values["cache-dir"] !== undefined ? cacheDirOption(values["cache-dir"], values["no-cache"]) : undefined;
   const { analyses } = await analyzeSurveysThroughPool(inputs, settings, values, io, cacheDir, started);
   const comparison = compare ? workspaceComparison(analyses, {}) : undefined;
-  const files = paths.map((p) => provenanceOf(p, "survey"));
+  // Each file in the role readInputs recognised (a station table among the positionals is one), and
+  // the --stations table, which is not among them.
+  const kindOf = new Map(inputs.files.map((f) => [f.file, f.kind]));
+  const files = [
+    ...paths.map((p) => provenanceOf(p, provenanceRoleOf(kindOf.get(p) ?? kindOf.get(basename(p))))),
+    ...(values.stations !== undefined ? [provenanceOf(values.stations, "stations")] : []),
+  ];
   return {
     inputs,
     analyses,
@@ -85,7 +91,7 @@ export async function analyzeFiles(
   };
 }
 
-const help = `brackline compare <survey files...> --centerline <line.geojson> [options]
+const help = `brackline compare <survey files...> [--centerline <line.geojson>] [options]
 
 Compares two or more surveys of the same estuary (the first survey read is the reference):
 salt intrusion and isohaline positions against river discharge with the apparent exponent n of
@@ -94,7 +100,8 @@ of the reaction zone and maximum (km and salinity), the change in C*0, % change 
 with an approximate 95 % interval, and class changes.
 
 Options:
-  --centerline <file.geojson>  channel centerline (required for km positions)
+  --centerline <file.geojson>  channel centerline (default: one built from the station positions,
+                               as in analyze; the choice is stated on stderr)
   --mouth start|end|lon,lat    which end of the main stem is the mouth (default: a "mouth" point in the file)
   --stations <table.csv>       station table joined by station id
   --mapping <mapping.json>     a saved column mapping
@@ -123,7 +130,6 @@ export const compareCommand: Command = {
     const format = parseFormat(values.format);
     workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give the survey files to compare");
-    if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (values.out !== undefined) checkOut(values.out);
     // Worker threads start loading now, while the files are read.
     const started = startWorkersEarly(positionals, values);

@@ -35,7 +35,7 @@ export function readGeoJsonFile(path: string, role: ProvenanceFile["role"]): Map
   return { geojson, file: provenanceOf(path, role) };
 }
 
-const help = `brackline report <survey files...> --centerline <line.geojson> --out <briefing.html> [options]
+const help = `brackline report <survey files...> --out <briefing.html> [--centerline <line.geojson>] [options]
 
 Writes a stakeholder briefing as ONE self-contained HTML file (inline styles and vector
 graphics, no scripts, nothing loaded from elsewhere) that prints cleanly to A4 PDF: summary,
@@ -44,7 +44,8 @@ the survey comparison when there are several surveys, data provenance, methods w
 and cautions.
 
 Options:
-  --centerline <file.geojson>  channel centerline (required)
+  --centerline <file.geojson>  channel centerline (default: one built from the station positions,
+                               as in analyze; the choice is stated on stderr)
   --basemap <file.geojson>     offline basemap polygons (properties.kind land/water/marsh) and named points
   --out <file.html>            where to write the briefing (required)
   --title <text>               title (default "Estuarine mixing briefing")
@@ -94,7 +95,6 @@ export const reportCommand: Command = {
     ]);
     workspaceSettings(values);
     if (positionals.length === 0) throw new UsageError("give at least one survey file");
-    if (!values.centerline) throw new UsageError("missing --centerline <line.geojson>");
     if (!values.out) throw new UsageError("missing --out <briefing.html>");
     if (values.out !== undefined) checkOut(values.out);
     const basemap = values.basemap ? readGeoJsonFile(values.basemap, "basemap") : undefined;
@@ -111,13 +111,15 @@ export const reportCommand: Command = {
       return EXIT_CANCELLED;
     }
     const { inputs, analyses, files, draws, seed } = analysed;
-    const channel = inputs.channel!;
-    const centerline: MapFile = {
-      geojson: channel.geojson as MapFile["geojson"],
-      file: provenanceOf(values.centerline, "centerline"),
-    };
-    const network = channel.network;
-    const maps = [centerline, ...(basemap ? [basemap] : [])];
+    const channel = inputs.channel;
+    // Without --centerline the channel is the one built from the stations (as in analyze and the
+    // dashboard, with the notice readInputs gives); the provenance table then lists the files given.
+    const centerline: MapFile | undefined =
+      values.centerline === undefined || !channel
+        ? undefined
+        : { geojson: channel.geojson as MapFile["geojson"], file: provenanceOf(values.centerline, "centerline") };
+    const network = channel?.network;
+    const maps = [...(centerline ? [centerline] : []), ...(basemap ? [basemap] : [])];
     const notice = dataNoticeOf(maps);
     const provenance: ProvenanceFile[] = [...files, ...maps.map((m) => m.file)];
     io.err(`building the briefing (${analyses.length} survey${analyses.length === 1 ? "" : "s"})`);

@@ -137,6 +137,12 @@ describe.skipIf(skipBrowser || !bayFilesPresent)(
       expect(onChannel.length + offChannel.length).toBe(rows.length);
       expect(onChannel.length).toBeGreaterThan(5);
       for (const [, km] of offChannel) expect(km).toMatch(/^off channel, \d+\.\d km away$/);
+      // The list follows the channel from the mouth (the export lists South Bay first): on-channel
+      // stations in ascending km, the off-channel ones after them.
+      const firstOff = rows.findIndex(([, km]) => /off channel/.test(km));
+      expect(firstOff).toBe(onChannel.length);
+      const kms = onChannel.map(([, km]) => Number.parseFloat(km));
+      expect(kms).toEqual([...kms].sort((a, b) => a - b));
       await settle(s.page);
       await screenshot(s.page, "realdata-4-station-centerline");
     }, 120_000);

@@ -26,4 +26,18 @@ describe("concentration units for fluxes (common practice: per-kg vs per-L diffe
     expectWithin(sigmaOf(p.precision, 0), 2e-4, 1e-15, "σ at zero concentration is the floor");
     expectWithin(defaultPrecision("Xx", "nmol/L").fromTable ? 1 : 0, 0, 0, "unknown constituent falls back");
   });
+
+  it("defaultPrecision() gives a second column of the same constituent in a mass unit the same precision: DOC 5 µmol/L = 0.0601 mg C/L (atomic weight of C 12.011, CIAAW 2021)", () => {
+    const molar = defaultPrecision("DOC", "µmol/L");
+    const mass = defaultPrecision("DOC (DOC_mgL)", "mg/L");
+    expectWithin(mass.fromTable ? 1 : 0, 1, 0, "suffixed name found in the table");
+    expectWithin(mass.precision.relative, molar.precision.relative, 0, "relative");
+    expectWithin(mass.precision.absolute, (5e-6 * 12.011) / 1e-3, 1e-12, "absolute floor in mg/L");
+    expectWithin(
+      defaultPrecision("Fe", "µg/L").precision.absolute,
+      0.2e-9 * 55.845 * 1e6,
+      1e-12,
+      "Fe 0.2 nmol/L in µg/L",
+    );
+  });
 });

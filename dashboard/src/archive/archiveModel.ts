@@ -7,12 +7,17 @@
 import { scaleUtc } from "d3-scale";
 import {
   classWords,
+  dayMs,
   formatSignificant,
   maxOf,
   minOf,
+  paddedTimeDomain,
+  timeTicks,
   type ArchiveSummary,
   type Estimate,
 } from "../../../analysis/index.ts";
+
+export { dayMs };
 import { okabeIto, neutral } from "../panels/lib/palette.ts";
 import { linear, makeFrame, round, type Frame } from "../panels/lib/scales.ts";
 
@@ -60,13 +65,6 @@ export function seasonStyles(seasons: ArchiveSummary["seasons"]): SeasonStyle[] 
   }));
 }
 
-/** Milliseconds (UTC) of an ISO 8601 date's day, or undefined for text that is not a date. */
-export function dayMs(date: string | undefined): number | undefined {
-  if (date === undefined || !/^\d{4}-\d{2}-\d{2}/.test(date)) return undefined;
-  const ms = Date.parse(`${date.slice(0, 10)}T00:00:00Z`);
-  return Number.isFinite(ms) ? ms : undefined;
-}
-
 /** A shared time axis: px of a date, the date of a px, and ticks. */
 export interface TimeAxis {
   x(ms: number): number;
@@ -81,17 +79,15 @@ export function timeAxis(summary: ArchiveSummary, frame: Frame, nTicks = 5): Tim
     const t = dayMs(p.date);
     return t === undefined ? [] : [t];
   });
-  const lo = ms.length ? minOf(ms) : 0;
-  const hi = ms.length ? maxOf(ms) : 86_400_000;
-  const pad = Math.max((hi - lo) * 0.03, 15 * 86_400_000);
-  const s = scaleUtc()
-    .domain([lo - pad, hi + pad])
-    .range([frame.x0, frame.x1]);
-  const tickText = s.tickFormat(nTicks);
+  const domain = paddedTimeDomain(ms);
+  const s = scaleUtc().domain(domain).range([frame.x0, frame.x1]);
   return {
     x: (t) => round(s(t)),
     ms: (x) => s.invert(x).getTime(),
-    ticks: s.ticks(nTicks).map((d) => ({ x: round(s(d)), label: tickText(d) })),
+    // A label centred on the frame's right edge would be cut by the panel: such a tick is left out.
+    ticks: timeTicks(domain, nTicks)
+      .map((t) => ({ x: round(s(t.ms)), label: t.label }))
+      .filter((t) => t.x <= frame.x1 - 14),
     frame,
   };
 }

@@ -5,7 +5,7 @@
  * Dependencies run components → state → worker; every number shown comes from analysis/ through
  * the worker.
  */
-import type { Survey } from "../../../analysis/index.ts";
+import { stationListOrder, type Survey } from "../../../analysis/index.ts";
 import { Selection } from "./selection.svelte.ts";
 import { Settings, type AnalysisSettings } from "./settings.svelte.ts";
 import { AnalysisResults } from "./results.svelte.ts";
@@ -139,6 +139,14 @@ export class AppState {
       });
     }
     return out;
+  });
+
+  /** The stations as the station list shows them: along the channel from the mouth, off-channel ones last (analysis order). */
+  readonly listStations: MapStation[] = $derived.by(() => {
+    const placements = this.analysis?.stations;
+    if (!placements) return this.mapStations;
+    const rank = new Map(stationListOrder(placements).map((id, i) => [id, i]));
+    return [...this.mapStations].sort((a, b) => (rank.get(a.id) ?? Infinity) - (rank.get(b.id) ?? Infinity) || 0);
   });
 
   /**

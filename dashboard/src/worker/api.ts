@@ -261,7 +261,7 @@ export function createWorkerApi(cache?: ResultCache) {
     ): Promise<string> {
       const chosen = surveyIndices ? surveyIndices.map((i) => analyses[i]) : analyses;
       const done = chosen.filter((a): a is AnalysisResult => a !== undefined);
-      const provenance = await fileProvenance(files, centerlineFile);
+      const provenance = await fileProvenance(files, centerlineFile, inputs.files);
       // The archive section states what the archive view shows: the same seasons and discharge table.
       const archive = archiveChoices
         ? archiveOf(done, archiveChoices.seasons, archiveChoices.dischargeTable)

@@ -5,8 +5,10 @@
  */
 import {
   buildBriefing,
+  provenanceRoleOf,
   renderBriefingHtml,
   type ArchiveSummary,
+  type InputFileKind,
   type ProvenanceFile,
   type SurveyAnalysis,
 } from "../../../analysis/index.ts";
@@ -28,10 +30,16 @@ async function sha256Hex(bytes: Uint8Array): Promise<string | undefined> {
 export async function fileProvenance(
   surveys: SourceFile[],
   centerline: TextFile | undefined,
+  kinds: ReadonlyArray<{ file: string; kind: InputFileKind }> = [],
 ): Promise<ProvenanceFile[]> {
   const encoder = new TextEncoder();
   const out: ProvenanceFile[] = [];
-  const entries: Array<[SourceFile, ProvenanceFile["role"]]> = surveys.map((f) => [f, "survey"]);
+  // Each file in the role readInputs recognised (a station table is not a survey).
+  const kindOf = new Map(kinds.map((k) => [k.file, k.kind]));
+  const entries: Array<[SourceFile, ProvenanceFile["role"]]> = surveys.map((f) => [
+    f,
+    kindOf.has(f.name) ? provenanceRoleOf(kindOf.get(f.name)) : "survey",
+  ]);
   if (centerline) entries.push([centerline, "centerline"]);
   for (const [file, role] of entries) {
     const bytes = "text" in file ? encoder.encode(file.text) : file.bytes;
