@@ -1,7 +1,8 @@
 // `npm run calibrate`: seeded calibration study of the mixing engine against synthetic surveys
 // (bench/calibration/forwardModel.ts). Prints one table; goals from issue 14 beside it.
 // Options: --surveys N (default 100), --draws D (default 200), --full (every design × 1, 2, 5 % noise),
-// --shape TEXT (only shapes whose name contains TEXT).
+// --shape TEXT (only shapes whose name contains TEXT), --stations N, --spacing km|salinity, --noise PCT
+// (only designs with that number of stations, spacing or % noise; the seeds of a cell do not change).
 import { SHAPES, type SurveyDesign } from "./calibration/forwardModel.ts";
 import { scoreCell, type CellScore } from "./calibration/cell.ts";
 
@@ -15,6 +16,17 @@ const draws = opt("draws", 200);
 const full = args.includes("--full");
 const onlyIdx = args.indexOf("--shape");
 const only = onlyIdx >= 0 ? args[onlyIdx + 1]! : "";
+const strOpt = (name: string): string | undefined => {
+  const i = args.indexOf(`--${name}`);
+  return i >= 0 ? args[i + 1] : undefined;
+};
+const onlyStations = strOpt("stations");
+const onlySpacing = strOpt("spacing");
+const onlyNoise = strOpt("noise");
+const wanted = (d: SurveyDesign): boolean =>
+  (onlyStations === undefined || d.stations === Number(onlyStations)) &&
+  (onlySpacing === undefined || d.spacing === onlySpacing) &&
+  (onlyNoise === undefined || Math.abs(d.noise * 100 - Number(onlyNoise)) < 1e-9);
 
 const designs: SurveyDesign[] = [];
 for (const noise of full ? [0.01, 0.02, 0.05] : [0.02])
@@ -38,7 +50,10 @@ function missed(s: CellScore, d: SurveyDesign, reaction: boolean): string {
   }
   if (reaction) {
     applies = true;
-    if (Math.abs(s.percentBiasPp) > 2) out.push("bias");
+    // "bias (warned)": ≥ 95 % of the surveys carry a warning that C₀ or C*₀ may be biased, or those
+    // without one are within 2 pp (as "class (warned)": right or warned in ≥ 95 %).
+    if (Math.abs(s.percentBiasPp) > 2)
+      out.push(s.biasWarned >= 0.95 || Math.abs(s.percentBiasUnwarnedPp ?? 0) <= 2 ? "bias (warned)" : "bias");
     if (s.classAccuracy < 0.95) out.push(s.classOrWarned >= 0.95 ? "class (warned)" : "class");
     if (s.breakWithin2 !== undefined && s.breakWithin2 < 0.8)
       out.push((s.breakWithin2OrWarned ?? 0) >= 0.8 ? "break (warned)" : "break");
@@ -50,6 +65,7 @@ const t0 = performance.now();
 for (const shape of SHAPES) {
   if (only && !shape.name.includes(only)) continue;
   for (const d of designs) {
+    if (!wanted(d)) continue;
     const s: CellScore = scoreCell(shape, d, surveys, draws);
     rows.push([
       s.shape,
@@ -60,6 +76,8 @@ for (const shape of SHAPES) {
       f(s.effectiveBiasPct),
       f(s.effectiveRmsePct),
       f(s.percentBiasPp),
+      f(s.percentBiasUnwarnedPp),
+      pc(s.biasWarned),
       f(s.percentRmsePp),
       pc(s.effectiveCoverage),
       pc(s.percentCoverage),
@@ -112,6 +130,8 @@ table(
     "C*0 bias %",
     "C*0 RMSE %",
     "%chg bias pp",
+    "bias unwarned pp",
+    "bias warned %",
     "%chg RMSE pp",
     "cov C*0 %",
     "cov %chg %",
@@ -132,5 +152,5 @@ table(
 console.log("\nExact data (35 stations, km-even, no noise; Q = 100 m³/s, A = 5000 m²):\n");
 table(["shape", "C*0 err %", "%chg err pp", "∫A·R dx err %", "break err", "max err"], exact);
 console.log(
-  `\nGoals (issue 14): 95 % coverage 90–98 % for n ≥ 20; |bias of % change| ≤ 2 pp and class accuracy ≥ 95 % for reactions ending at S ≥ 5; break within ±2 in ≥ 80 % of surveys; rate integral within 5 % on exact data. "goals missed" names this row's misses; "class (warned)": the class is wrong in over 5 % of surveys, but in ≥ 95 % it is right or a warning says the stations cannot establish it (short-seaward-line, reaction-reaches-mouth, few-stations-in-zone); "break (warned)": the break is off by more than 2 in over 20 % of surveys, but in ≥ 80 % it is within ±2 or the tool warns (break-uncertain) that it is not located that well. "failed": surveys without C*0 or % change (the tool says "not determined").\nTruth: % change against the river value at S = 0. ${((performance.now() - t0) / 1000).toFixed(0)} s on Node ${process.version}.`,
+  `\nGoals (issue 14): 95 % coverage 90–98 % for n ≥ 20; |bias of % change| ≤ 2 pp and class accuracy ≥ 95 % for reactions ending at S ≥ 5; break within ±2 in ≥ 80 % of surveys; rate integral within 5 % on exact data. "goals missed" names this row's misses; "bias (warned)": |bias| > 2 pp over all surveys, but ≥ 95 % of the surveys carry a warning that C₀ or C*₀ may be biased (river-extrapolation-coarse, reaction-reaches-mouth, short-seaward-line; "bias warned %") or the surveys without one are within 2 pp ("bias unwarned pp"); "class (warned)": the class is wrong in over 5 % of surveys, but in ≥ 95 % it is right or a warning says the stations cannot establish it (short-seaward-line, reaction-reaches-mouth, few-stations-in-zone); "break (warned)": the break is off by more than 2 in over 20 % of surveys, but in ≥ 80 % it is within ±2 or the tool warns (break-uncertain) that it is not located that well. "failed": surveys without C*0 or % change (the tool says "not determined").\nTruth: % change against the river value at S = 0. ${((performance.now() - t0) / 1000).toFixed(0)} s on Node ${process.version}.`,
 );

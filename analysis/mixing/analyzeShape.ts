@@ -16,7 +16,7 @@ import { salinityGrid, TIE_FRACTION } from "./curveFit.ts";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { runBootstrap } from "./bootstrapRun.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
-import { twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
+import { fitTwoPhaseAtBreak, twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
 import { verdictOf } from "./verdict.ts";
 import { classify } from "./classify.ts";
 import { dilutionAt } from "./dilutionLine.ts";
@@ -24,6 +24,8 @@ import { fluxSummary } from "./flux.ts";
 import { rateProfile } from "./rateProfile.ts";
 import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
+import { fitQuarticExtension, riverModelSpread } from "./riverExtension.ts";
+import { coarseExtrapolationWarning } from "./riverReference.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -129,13 +131,22 @@ export function analyzeShape(p: ShapeInput): {
   // Replicates are drawn around the two-phase fit; when the straight line was kept, around the best
   // two-phase alternative it was tested against, so each replicate re-runs the selection (Efron 2014).
   const centre: TwoPhaseFit = tp.linear && tp.alternative ? { ...tp, ...tp.alternative, linear: false } : tp;
+  const conc = used.map((s) => s.conc);
+  const wts = used.map((s) => 1 / s.sigma ** 2);
+  // River value at S_ref from the quartic extension of the landward phase (riverExtension.ts) when the
+  // stations allow, recomputed in every replicate. The replicates stay drawn around the cubic two-phase
+  // fit: drawing them around the quartic curve made the C*₀ intervals cover less (calibration).
+  const quarticRiver =
+    !tp.linear && p.river.source !== "override" && fitQuarticExtension(x, conc, wts, tp) !== undefined;
   const yHat = Float64Array.from(used, (s) => twoPhaseAt(centre, s.salinity)[0]);
+  let riverModel: "quartic" | "cubic" = quarticRiver ? "quartic" : "cubic";
   const dof = Math.max(1, n - tp.params);
   const scatter = Math.max(1, Math.sqrt(tp.rss / dof));
   const boot = (sRef: number, rv: Endmember, override: boolean, effectiveAt: number) =>
     runBootstrap({
       x,
       yHat,
+      riverModel,
       sigmaEff: Float64Array.from(used, (s) => s.sigma * scatter),
       w: Float64Array.from(used, (s) => 1 / s.sigma ** 2),
       lambda: curve.lambda,
@@ -176,6 +187,17 @@ export function analyzeShape(p: ShapeInput): {
   let bs = boot(sr, river, override, cStar);
   if (
     !override &&
+    riverModel === "quartic" &&
+    draws > 0 &&
+    (!(river.conc > 0) || (bs.riverSe !== undefined && bs.riverSe > RIVER_SE_LIMIT * Math.abs(river.conc)))
+  ) {
+    // The quartic extension is too uncertain with this noise: the cubic landward phase instead.
+    river = { ...river, conc: twoPhaseAt(tp, sr)[0] };
+    riverModel = "cubic";
+    bs = boot(sr, river, override, cStar);
+  }
+  if (
+    !override &&
     draws > 0 &&
     (!(river.conc > 0) || (bs.riverSe !== undefined && bs.riverSe > RIVER_SE_LIMIT * Math.abs(river.conc)))
   ) {
@@ -196,7 +218,7 @@ export function analyzeShape(p: ShapeInput): {
       message: `Only ${bs.usable} of ${draws} bootstrap draws were usable; intervals are rough.`,
     });
   if (!override && bs.riverSe !== undefined && Number.isFinite(bs.riverSe)) river = { ...river, concSd: bs.riverSe };
-  // Bootstrap bias correction of C₀ (extrapolated along the curve) and C*₀ (break selection): both
+  // Bootstrap bias correction of C₀ (extrapolated along the cubic curve) and C*₀ (break selection): both
   // are nonlinear in the data and biased by the noise (Efron & Tibshirani 1993). Only for a two-phase
   // fit (the kept line gives C*₀ = C₀ by construction) and only where the residuals show noise of
   // the stated precision (χ²_ν ≥ {@link BIAS_CORRECTION_MIN_CHI2}): on data far smoother than that
@@ -205,10 +227,13 @@ export function analyzeShape(p: ShapeInput): {
     // A correction that leaves the bootstrap interval is not credible (skewed, unstable replicates).
     const within = (v: number, iv: [number, number] | undefined, fallback: number): number =>
       iv && v >= iv[0] && v <= iv[1] ? v : fallback;
-    if (!override)
+    // C₀ from the quartic extension is not corrected: its bias is small and the correction's extra
+    // variance (not in the bootstrap distribution) would make the interval cover less (calibration).
+    if (!override && riverModel === "cubic")
       river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
     cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
   }
+  if (!override) warnings.push(...coarseExtrapolationWarning(used, tp, river, riverModel, unit));
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
@@ -217,13 +242,39 @@ export function analyzeShape(p: ShapeInput): {
       code: "river-nonpositive",
       message: `River end-member ${river.conc} ${unit} is not positive: no % change.`,
     });
+  // Model-selection uncertainty of C₀ (quartic vs cubic landward phase): the Akaike-weighted
+  // between-model term widens the % change interval (Buckland et al. 1997).
+  const c0Spread =
+    percent && riverModel === "quartic" ? riverModelSpread(x, conc, wts, tp, sr, Math.max(1, tp.rss / dof)) : undefined;
+  if (percent && c0Spread !== undefined && river.conc > 0) {
+    const dPct = (100 * Math.abs(cStar) * c0Spread) / river.conc ** 2;
+    if (Number.isFinite(dPct))
+      percent = {
+        ...percent,
+        lower: percent.value - Math.hypot(percent.value - percent.lower, dPct),
+        upper: percent.value + Math.hypot(percent.upper - percent.value, dPct),
+      };
+  }
   const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
   if (tangent.method === "curve-tangent" || shortLine) {
     // No straight seaward phase, or one resting on < 3 stations: C*₀ is a slope at the end of
     // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
     // their difference widens the intervals (between-model term of Buckland et al. 1997).
     const cSpline = f[G - 1]! - (sMax - sr) * d1[G - 1]!;
-    const delta = Math.abs(cSpline - cStar);
+    let delta = Math.abs(cSpline - cStar);
+    // A seaward line on < 3 stations cannot be told from a reaction reaching the mouth: the tangent of
+    // the two-phase curve with its break at the seaward-most station is a third model (its chord-vs-
+    // tangent difference is the bias of the short line when the reaction does reach the mouth).
+    const mouthFit = shortLine ? fitTwoPhaseAtBreak(x, conc, wts, sMax) : undefined;
+    if (mouthFit) {
+      const [v, dv] = twoPhaseAt(mouthFit, sMax);
+      // Akaike weight of the mouth model against the chosen break (same parameter count): the squared
+      // difference enters in proportion to it (Buckland et al. 1997: weighted between-model term).
+      const dChi2 = Math.max(0, mouthFit.rss - tp.rss) / scatter ** 2;
+      const wMouth = 1 / (1 + Math.exp(dChi2 / 2));
+      const dMouth = Math.sqrt(wMouth) * Math.abs(v - (sMax - sr) * dv - cStar);
+      if (Number.isFinite(dMouth) && dMouth > delta) delta = dMouth;
+    }
     const widen = (e: Estimate, d: number): Estimate => ({
       ...e,
       lower: e.value - Math.hypot(e.value - e.lower, d),
@@ -236,14 +287,14 @@ export function analyzeShape(p: ShapeInput): {
     if (!shortLine)
       warnings.push({
         code: "reaction-reaches-mouth",
-        message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it). It is the effective end-member for that section only; stations farther seaward would fix it.`,
+        message: `No straight seaward line: the reaction continues to the seaward-most station (S = ${sMax.toFixed(1)}), so C*₀ is the tangent of the fitted curve there, an end-of-data slope (two curve models differ by ${delta.toPrecision(2)} ${unit}; the intervals include it, but C*₀ and the % change can still be biased by a few percentage points because the curvature there is poorly resolved). It is the effective end-member for that section only; stations farther seaward would fix it.`,
       });
   }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
   if (segStart !== undefined && tangent.nStations < MIN_SEAWARD_STATIONS)
     warnings.push({
       code: "short-seaward-line",
-      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} cannot be tested, so the class does not say "then conservative". Stations between there and the sea end-member would settle it.`,
+      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} cannot be tested, so the class does not say "then conservative". If the reaction in fact continues seaward, a line through these stations is a chord of the curve, not its tangent, and C*₀ is biased toward C₀ (the % change understated, by several percentage points in calibration with synthetic surveys); the interval includes the difference from a curve reaching the mouth only in proportion to how well the data support it. Stations between there and the sea end-member would settle it.`,
     });
   const mS = twoPhaseMaximum(tp, sMax);
   // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the
@@ -310,7 +361,8 @@ export function analyzeShape(p: ShapeInput): {
   const rD2 = Float64Array.from(rGrid, (s) => twoPhaseAt(tp, s)[2]);
   const rp = rateProfile(rGrid, rD2, sr, o, cStar, river.conc);
   warnings.push(...rp.warnings);
-  const breakEst = segStart !== undefined ? estimateOf(tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
+  const breakEst =
+    segStart !== undefined ? estimateOf(tp.breakAveraged ?? tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
   if (breakEst && breakEst.upper - breakEst.lower > 2 * BREAK_GOAL_S)
     warnings.push({
       code: "break-uncertain",

@@ -7,6 +7,7 @@ import { interval95, percentileSelect } from "../stats/percentile.ts";
 import { intervalBc95 } from "../stats/biasCorrectedInterval.ts";
 import { fitTwoPhase, seawardLine, twoPhaseDesign, twoPhaseMaximum, twoPhaseValue } from "./twoPhase.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
+import { riverByQuarticExtension } from "./riverExtension.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
 export interface BootstrapInput {
@@ -23,6 +24,12 @@ export interface BootstrapInput {
   grid: Float64Array;
   /** Reference salinity of the river end-member (0 unless stated). */
   referenceSalinity: number;
+  /**
+   * Model of the river value at the reference salinity in each replicate: "quartic" = the quartic
+   * extension of the replicate's landward phase (riverExtension.ts; the cubic phase where it cannot be
+   * fitted), "cubic" = the replicate's two-phase curve.
+   */
+  riverModel?: "quartic" | "cubic";
   /** A user-given river value ± sd (drawn from a normal); otherwise C₀ is re-estimated from each replicate. */
   riverOverride?: { conc: number; sd: number };
   /** Extra sd of the river value (a river history within the flushing time), added to each replicate. */
@@ -123,13 +130,16 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
     if (!fit) continue;
     const [ic, sl] = seawardLine(fit);
     const cr =
-      (b.riverOverride ? b.riverOverride.conc + b.riverOverride.sd * z() : twoPhaseValue(fit, sr)) +
-      (b.riverExtraSd ? b.riverExtraSd * z() : 0);
+      (b.riverOverride
+        ? b.riverOverride.conc + b.riverOverride.sd * z()
+        : b.riverModel === "quartic"
+          ? (riverByQuarticExtension(b.x, ys, b.w, fit, sr) ?? twoPhaseValue(fit, sr))
+          : twoPhaseValue(fit, sr)) + (b.riverExtraSd ? b.riverExtraSd * z() : 0);
     usable++;
     eff[d] = ic + sl * sr;
     c0[d] = cr;
     if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
-    if (!fit.linear) brk[d] = fit.breakSalinity;
+    if (!fit.linear) brk[d] = fit.breakAveraged ?? fit.breakSalinity;
     const m = twoPhaseMaximum(fit, sMax);
     if (m !== undefined) {
       mS[d] = m;

@@ -1,6 +1,7 @@
 import type { Endmember, MixingWarning } from "./result.ts";
 import type { PreparedSample } from "./prepareSamples.ts";
 import { twoPhaseAt, type TwoPhaseFit } from "./twoPhase.ts";
+import { riverByQuarticExtension } from "./riverExtension.ts";
 
 /** Farthest extrapolation (salinity units) from the freshest station down to S = 0. */
 export const MAX_RIVER_EXTRAPOLATION_S = 2;
@@ -26,7 +27,8 @@ export function referenceSalinity(sMin: number, stated?: number): { salinity: nu
 /**
  * River end-member at the reference salinity from the fitted two-phase curve (extrapolated from
  * the freshest stations along the curve, not the mean of the freshest group, which would leave out
- * any reaction between the river and those stations). concSd is provisional here (the group's
+ * any reaction between the river and those stations; with the landward phase extended by a quartic
+ * term when enough stations allow, {@link riverByQuarticExtension}). concSd is provisional here (the group's
  * standard error); the analysis replaces it by the bootstrap standard error.
  *
  * @see Boyle et al. (1974) GCA 38, 1719–1728; bibliography key boyle1974.
@@ -37,7 +39,14 @@ export function riverAtReference(
   fit: TwoPhaseFit,
   salinity: number,
 ): Endmember {
-  const conc = twoPhaseAt(fit, salinity)[0];
+  const conc =
+    riverByQuarticExtension(
+      used.map((s) => s.salinity),
+      used.map((s) => s.conc),
+      used.map((s) => 1 / (s.sigma * s.sigma)),
+      fit,
+      salinity,
+    ) ?? twoPhaseAt(fit, salinity)[0];
   const se = group.n >= 2 ? group.concSd / Math.sqrt(group.n) : used[0]!.sigma;
   return {
     ...group,
@@ -74,6 +83,48 @@ export function riverSlopeWarning(
     {
       code: "river-extrapolated",
       message: `The freshest stations (mean S = ${group.salinity.toFixed(2)}) lie on a C–S slope: the river end-member at S = ${river.salinity} was extrapolated along the fitted curve, C₀ = ${g(river.conc)} ${unit} (their mean: ${g(group.conc)} ${unit}). A river sample at S ≈ 0 would remove this extrapolation.`,
+    },
+  ];
+}
+
+/**
+ * Warning when C₀ at the reference salinity depends on an assumed curve shape beyond the freshest
+ * station by more than its standard error: with the cubic landward phase (too few stations for the
+ * quartic extension, or that extension too uncertain), when the extrapolation moves C₀ by more than one
+ * standard error from the curve at the freshest station; with the quartic extension, when the cubic
+ * landward phase at the same break gives a C₀ more than one standard error away (two landward
+ * models disagree). A model error that the bootstrap does not see can then bias C₀ and the % change
+ * (calibration with synthetic surveys: desorption ending at S 5 with salinity-even stations, −3 to −7 pp).
+ *
+ * @param used prepared samples sorted by salinity
+ * @param fit the two-phase fit
+ * @param river the river end-member at the reference salinity (concSd = its standard error)
+ * @param model which landward model gave C₀
+ * @param unit concentration unit for the message
+ * @returns the warning, or none
+ */
+export function coarseExtrapolationWarning(
+  used: readonly PreparedSample[],
+  fit: TwoPhaseFit,
+  river: Endmember,
+  model: "quartic" | "cubic",
+  unit: string,
+): MixingWarning[] {
+  const sMin = used[0]!.salinity;
+  if (fit.linear || !(river.salinity < sMin)) return [];
+  const atFreshest = twoPhaseAt(fit, sMin)[0];
+  const other = model === "quartic" ? twoPhaseAt(fit, river.salinity)[0] : atFreshest;
+  if (!(Math.abs(river.conc - other) > river.concSd)) return [];
+  const landward = used.filter((s) => s.salinity < fit.breakSalinity).length;
+  const g = (v: number): string => v.toPrecision(3);
+  const why =
+    model === "quartic"
+      ? `a cubic instead of a quartic reaction curve through the same ${landward} stations below S ${fit.breakSalinity.toFixed(1)} gives ${g(other)} ${unit}`
+      : `along a reaction curve resting on ${landward} station(s) below S ${fit.breakSalinity.toFixed(1)}`;
+  return [
+    {
+      code: "river-extrapolation-coarse",
+      message: `C₀ = ${g(river.conc)} ${unit} at S = ${river.salinity} is extrapolated from the freshest station (S = ${sMin.toFixed(2)}, curve value ${g(atFreshest)} ${unit}) ${model === "quartic" ? `(${why})` : why}: the shape of the reaction between the river and those stations is assumed, so C₀ and the % change may be biased by more than their intervals show (a few percentage points in calibration with synthetic surveys). A river sample at S ≈ 0, or more stations at low salinity, would remove this.`,
     },
   ];
 }

@@ -42,6 +42,14 @@ export interface TwoPhaseFit {
    * selection (Efron 2014), instead of drawing around the selected line only.
    */
   alternative?: { breakSalinity: number; coef: [number, number, number, number] };
+  /**
+   * Break averaged over the profile likelihood: the grid breaks and the chosen break weighted by
+   * exp(−(RSS(S_b) − RSS_min)/(2·s²)), s² = max(1, χ²_ν) (Akaike weights of the breaks, Buckland et
+   * al. 1997). Where the curvature fades gradually the profile is flat seaward of the best break and the
+   * averaged break moves toward the true end of the reaction; for a sharp break it equals S_b.
+   * Undefined for the straight line.
+   */
+  breakAveraged?: number;
 }
 
 /**
@@ -53,6 +61,8 @@ export const TWO_PHASE_ALPHA = 0.025;
 const GRID = 24;
 /** Golden-section refinement steps around the best grid break. */
 const REFINE = 12;
+/** Profile RSS of the grid breaks of the last search (single-threaded reuse). */
+const PROFILE = new Float64Array(GRID + 1);
 /** Coefficient work array of the fits (single-threaded reuse). */
 const COEF = new Float64Array(4);
 
@@ -229,6 +239,7 @@ export function fitTwoPhase(
   for (let g = 0; g <= GRID; g++) {
     const b = lo + ((sMax - lo) * g) / GRID;
     const r = termsRss(ds, tg, g * TERMS, c);
+    PROFILE[g] = r;
     if (r < best) {
       best = r;
       bestB = b;
@@ -310,16 +321,76 @@ export function fitTwoPhase(
     if (exactP) line.alternative = { breakSalinity: bestB, coef: [c[0]!, c[1]!, c[2]!, c[3]!] };
     return line;
   }
+  const coef: [number, number, number, number] = [c[0]!, c[1]!, c[2]!, c[3]!];
+  // Profile-averaged break (Akaike weights over the grid breaks and the chosen one).
+  const s2 = dfRes >= 1 ? Math.max(1, best / dfRes) : 1;
+  let sw = 1,
+    swb = bestB;
+  for (let g = 0; g <= GRID; g++) {
+    const r = PROFILE[g]!;
+    if (!Number.isFinite(r)) continue;
+    const e = Math.max(0, r - best) / (2 * s2);
+    if (!(e < 36)) continue; // weight < 1e-15: no effect on the average
+    const wg = Math.exp(-e);
+    sw += wg;
+    swb += wg * (lo + ((sMax - lo) * g) / GRID);
+  }
   return {
     breakSalinity: bestB,
     linear: false,
-    coef: [c[0]!, c[1]!, c[2]!, c[3]!],
+    coef,
     sMin,
     range,
     rss: best,
     rssLinear: rssLin,
     params: k + 1,
     pCurvature: p,
+    breakAveraged: swb / sw,
+  };
+}
+
+/**
+ * The two-phase model at a given break (no search, no test): weighted least squares with the cubic
+ * landward term when ≥ 4 distinct stations lie landward of it (else the quadratic). Used for the
+ * "reaction reaches the mouth" alternative (break at the seaward-most station) of a short seaward line.
+ *
+ * @param x ascending salinities; y concentrations; w weights 1/σ²
+ * @param breakSalinity the break S_b
+ * @returns the fit, or undefined (fewer than 3 distinct landward stations, singular system)
+ * @see Hudson, D.J. (1966) JASA 61, 1097–1129 (segmented regression at a given join point).
+ */
+export function fitTwoPhaseAtBreak(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  breakSalinity: number,
+): TwoPhaseFit | undefined {
+  const n = x.length;
+  if (n < 2) return undefined;
+  const sMin = x[0]!;
+  const range = x[n - 1]! - sMin;
+  if (!(range > 0)) return undefined;
+  let distinct = 0;
+  for (let i = 0, prev = Number.NEGATIVE_INFINITY; i < n; i++)
+    if (w[i]! > 0 && x[i]! < breakSalinity && x[i]! > prev) {
+      distinct++;
+      prev = x[i]!;
+    }
+  if (distinct < 3) return undefined;
+  const k = distinct >= 4 ? 4 : 3;
+  const c = COEF;
+  const rss = fitAt(x, y, w, sMin, range, breakSalinity, k, c);
+  if (!Number.isFinite(rss)) return undefined;
+  return {
+    breakSalinity,
+    linear: false,
+    coef: [c[0]!, c[1]!, c[2]!, c[3]!],
+    sMin,
+    range,
+    rss,
+    rssLinear: Number.NaN,
+    params: k + 1,
+    pCurvature: Number.NaN,
   };
 }
 

@@ -13,6 +13,10 @@ export interface CellScore {
   effectiveBiasPct: number;
   effectiveRmsePct: number;
   percentBiasPp: number;
+  /** Bias of % change over the surveys without a warning that C₀ or C*₀ may be biased ({@link BIAS_WARNINGS}); undefined when all carry one. */
+  percentBiasUnwarnedPp?: number;
+  /** Share of surveys carrying a warning that C₀ or C*₀ may be biased. */
+  biasWarned: number;
   percentRmsePp: number;
   effectiveCoverage: number;
   percentCoverage: number;
@@ -40,6 +44,9 @@ export interface CellScore {
 
 /** Warnings by which the tool says the stations cannot establish the class. */
 const CLASS_LIMIT_WARNINGS = new Set(["short-seaward-line", "reaction-reaches-mouth", "few-stations-in-zone"]);
+
+/** Warnings by which the tool says C₀ or C*₀ may be biased beyond their intervals (model error of an extrapolation). */
+export const BIAS_WARNINGS = new Set(["river-extrapolation-coarse", "reaction-reaches-mouth", "short-seaward-line"]);
 
 const covers = (e: Estimate | undefined, truth: number): boolean => !!e && e.lower <= truth && truth <= e.upper;
 const inside = (e: Estimate | undefined): boolean => !e || (e.lower <= e.value && e.value <= e.upper);
@@ -70,6 +77,8 @@ export function scoreCell(
   const c0 = shape.riverConc;
   const eErr: number[] = [];
   const pErr: number[] = [];
+  const pErrUnwarned: number[] = [];
+  let biasWarned = 0;
   let eCov = 0,
     pCov = 0,
     outside = 0,
@@ -129,6 +138,8 @@ export function scoreCell(
     refSum += r.endmembers?.river.salinity ?? Number.NaN;
     eErr.push((100 * (e.value - truth.effective)) / truth.effective);
     pErr.push(p.value - truth.percent);
+    if (r.warnings.some((w) => BIAS_WARNINGS.has(w.code))) biasWarned++;
+    else pErrUnwarned.push(p.value - truth.percent);
     if (covers(e, truth.effective)) eCov++;
     if (covers(p, truth.percent)) pCov++;
     if (!inside(e) || !inside(p)) outside++;
@@ -163,6 +174,8 @@ export function scoreCell(
     effectiveRmsePct: rms(eErr),
     percentBiasPp: mean(pErr),
     percentRmsePp: rms(pErr),
+    percentBiasUnwarnedPp: pErrUnwarned.length > 0 ? mean(pErrUnwarned) : undefined,
+    biasWarned: biasWarned / Math.max(1, ok),
     effectiveCoverage: eCov / Math.max(1, ok),
     percentCoverage: pCov / Math.max(1, ok),
     outsideOwnInterval: outside,

@@ -39,6 +39,14 @@ describe("mixing calibration guards (seeded synthetic surveys; Boyle et al. 1974
     expectWithin(s.outsideOwnInterval, 0, 0, "estimates outside their own interval");
   });
 
+  it("reported break = profile-likelihood average over breaks (Akaike weights of the grid breaks, Buckland et al. 1997; two-phase regression, Hinkley 1969, from memory): removal fading out at S 20, 20 salinity-even stations, 2 % noise, within ±2 in ≥ 40 % of 30 surveys and median error ≤ 2.2 (the best break alone: 23 %, 2.8), within ±2 or warned in ≥ 90 %", () => {
+    const s = scoreCell(shape("removal→S20"), { stations: 20, spacing: "salinity", noise: 0.02 }, 30, 100);
+    expectWithin((s.breakWithin2 ?? 0) >= 0.4 ? 1 : 0, 1, 0, `break within ±2 in ${s.breakWithin2}`);
+    expectWithin((s.breakMedianError ?? 99) <= 2.2 ? 1 : 0, 1, 0, `median break error ${s.breakMedianError}`);
+    expectWithin((s.breakWithin2OrWarned ?? 0) >= 0.9 ? 1 : 0, 1, 0, `within ±2 or warned ${s.breakWithin2OrWarned}`);
+    expectWithin(s.outsideOwnInterval, 0, 0, "estimates outside their own interval");
+  });
+
   const analyse = (name: string, stations: number, seed: number, draws = 200) =>
     analyzeConstituent(
       survey(shape(name), { stations, spacing: "km", noise: 0.02 }, seed).map((st) => ({
