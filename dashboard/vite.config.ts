@@ -31,6 +31,11 @@ export default defineConfig({
   root: dashboardDir,
   base: "./",
   plugins: [proj4Trim, svelte({ configFile: false })],
+  resolve: {
+    // jStat as published is one object no bundler can trim; the dashboard ships the functions we call,
+    // copied bit for bit (src/vendor/jstatSubset.ts; tests/dashboard/build/jstatSubset.test.ts).
+    alias: [{ find: /^jstat$/, replacement: join(dashboardDir, "src", "vendor", "jstatSubset.ts") }],
+  },
   define: { __BRACKLINE_ENGINE__: JSON.stringify(engineFingerprint()) },
   worker: { format: "es", plugins: () => [proj4Trim] },
   server: { fs: { allow: [repoDir] } },

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zodMini.ts";
 
 import { COLUMN_ROLES, type ColumnRole } from "./columnRoles.ts";
 
@@ -9,20 +9,20 @@ export const columnAssignmentSchema = z.object({
   header: z.string(),
   role: z.enum(COLUMN_ROLES),
   /** Constituent symbol (role "constituent"), e.g. "Si". */
-  name: z.string().optional(),
+  name: z.optional(z.string()),
   /** Canonical unit; required for constituents, conductivity, discharge. */
-  unit: z.string().optional(),
+  unit: z.optional(z.string()),
   /** Unit text as found in the header. */
-  unitText: z.string().optional(),
+  unitText: z.optional(z.string()),
   /** For role "flag": the header of the value column the flag belongs to. */
-  flagFor: z.string().optional(),
+  flagFor: z.optional(z.string()),
   /**
    * For constituents: "tracer" (dissolved, analysed against the dilution line) or "nonMixing"
    * (shown along the channel only); suggested from the name, the user may override it.
    */
-  kind: z.enum(["tracer", "nonMixing"]).optional(),
+  kind: z.optional(z.enum(["tracer", "nonMixing"])),
   /** Why the suggestion chose this role (shown in the mapping dialog). */
-  reason: z.string().optional(),
+  reason: z.optional(z.string()),
 });
 
 /** One column's assignment in a {@link ColumnMapping}. */
@@ -33,17 +33,17 @@ export const columnMappingSchema = z.object({
   shape: z.string(),
   columns: z.array(columnAssignmentSchema),
   /** Field delimiter; detected when absent. */
-  delimiter: z.string().optional(),
+  delimiter: z.optional(z.string()),
   /** Decimal comma; detected when absent. */
-  decimalComma: z.boolean().optional(),
+  decimalComma: z.optional(z.boolean()),
   /** Order of day, month and year in slash or dot dates ("1/21/16"). */
-  dateOrder: z.enum(["MDY", "DMY", "YMD"]).optional(),
+  dateOrder: z.optional(z.enum(["MDY", "DMY", "YMD"])),
   /** Time zone of the times as an ISO offset ("Z", "+01:00"); times stay local when absent. */
-  timeZone: z.string().optional(),
+  timeZone: z.optional(z.string()),
   /** EPSG code of projected x/y columns. */
-  epsg: z.number().int().optional(),
+  epsg: z.optional(z.int()),
   /** Depths for the labels in a "depthLabel" column, e.g. {"S": 0.2}; unlisted labels only give the layer. */
-  depthLabels: z.record(z.string(), z.number()).optional(),
+  depthLabels: z.optional(z.record(z.string(), z.number())),
 });
 
 /**

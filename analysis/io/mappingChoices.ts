@@ -4,7 +4,7 @@ import { parseDelimitedText } from "./delimitedRecords.ts";
 import { detectDialect, stripBom } from "./dialect.ts";
 import { suggestMapping } from "./suggestMapping.ts";
 import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
-import { z } from "zod";
+import { z } from "./zodMini.ts";
 
 /** Headers and the first data rows of a delimited text (enough to suggest a mapping). */
 export function headOfText(text: string, rows = 50): { headers: string[]; sample: string[][] } {
@@ -98,9 +98,9 @@ export function applyUnitOverrides(
 
 /** The usual unit of a constituent, for the example in a message (never applied without the user). */
 /** A mapping file as users write it: `shape` and column `role`s may be left out (merged with the suggestion). */
-export const partialMappingSchema = columnMappingSchema.extend({
-  shape: z.string().optional(),
-  columns: z.array(columnAssignmentSchema.partial({ role: true })),
+export const partialMappingSchema = z.extend(columnMappingSchema, {
+  shape: z.optional(z.string()),
+  columns: z.array(z.partial(columnAssignmentSchema, { role: true })),
 });
 
 /**

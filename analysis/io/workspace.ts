@@ -1,4 +1,4 @@
-import type { z } from "zod";
+import type { z } from "./zodMini.ts";
 import type { ImportIssue } from "../survey/survey.ts";
 import { makeIssue } from "./importSummary.ts";
 import { WORKSPACE_MIGRATIONS } from "./workspaceMigrations.ts";
@@ -75,7 +75,7 @@ function sizeProblem(record: Record<string, unknown>): ImportIssue | undefined {
   return undefined;
 }
 
-function zodIssues(error: z.ZodError, prefix: string): ImportIssue[] {
+function zodIssues(error: z.core.$ZodError, prefix: string): ImportIssue[] {
   return error.issues.slice(0, 50).map((i) => makeIssue(FILE, 0, `${prefix}${i.path.join(".")}`, "", i.message));
 }
 

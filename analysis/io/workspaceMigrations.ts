@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zodMini.ts";
 import { WORKSPACE_FORMAT } from "./workspaceSchema.ts";
 
 /**
@@ -7,12 +7,12 @@ import { WORKSPACE_FORMAT } from "./workspaceSchema.ts";
  */
 export const workspaceV1Schema = z.looseObject({
   version: z.literal(1),
-  name: z.string().optional(),
+  name: z.optional(z.string()),
   surveys: z.array(z.unknown()),
-  centerline: z.array(z.tuple([z.number(), z.number()])).optional(),
-  mappings: z.record(z.string(), z.looseObject({ columns: z.array(z.unknown()) })).optional(),
-  surveyGapDays: z.number().optional(),
-  analysis: z.record(z.string(), z.unknown()).optional(),
+  centerline: z.optional(z.array(z.tuple([z.number(), z.number()]))),
+  mappings: z.optional(z.record(z.string(), z.looseObject({ columns: z.array(z.unknown()) }))),
+  surveyGapDays: z.optional(z.number()),
+  analysis: z.optional(z.record(z.string(), z.unknown())),
 });
 
 /**
@@ -47,7 +47,7 @@ export function migrateV1toV2(doc: z.infer<typeof workspaceV1Schema>): Record<st
 
 /** Migration steps: from version n to n + 1. */
 export const WORKSPACE_MIGRATIONS: Readonly<
-  Record<number, { schema: z.ZodType; migrate: (doc: never) => Record<string, unknown> }>
+  Record<number, { schema: z.ZodMiniType; migrate: (doc: never) => Record<string, unknown> }>
 > = {
   1: { schema: workspaceV1Schema, migrate: migrateV1toV2 as (doc: never) => Record<string, unknown> },
 };

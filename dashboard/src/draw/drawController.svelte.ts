@@ -6,12 +6,13 @@
  * analysis/geometry (see drawnLine.ts) and update as the line changes.
  */
 import * as maplibregl from "maplibre-gl";
-import type { GeoJSONSource, Map as MapLibreMap, MapLayerMouseEvent, MapMouseEvent } from "maplibre-gl";
+import type { Map as MapLibreMap, MapLayerMouseEvent, MapMouseEvent } from "maplibre-gl";
 import type { FeatureCollection } from "geojson";
 import { DRAWN_FILE_NAME, dedupeVertices, drawnCenterlineGeoJson, type MouthEnd } from "./drawnLine.ts";
 import type { LonLat } from "../worker/overlay.ts";
 import type { TextFile } from "../worker/protocol.ts";
 import type { DrawnPreview } from "../worker/drawnPreview.ts";
+import { setSourceData } from "../map/sourceData.ts";
 
 export type DrawMode = "idle" | "drawing" | "editing";
 
@@ -292,8 +293,8 @@ export class DrawController {
         }),
       );
     const ticks = show ? this.drawn.ticks : [];
-    (map.getSource(SOURCE) as GeoJSONSource | undefined)?.setData({ type: "FeatureCollection", features });
-    (map.getSource(TICK_SOURCE) as GeoJSONSource | undefined)?.setData({
+    setSourceData(map, SOURCE, { type: "FeatureCollection", features });
+    setSourceData(map, TICK_SOURCE, {
       type: "FeatureCollection",
       features: ticks.map((t) => ({
         type: "Feature",

@@ -83,11 +83,18 @@ export class SavedWorkspace {
     readonly now: () => Date = () => new Date(),
   ) {}
 
-  /** Restores the stored workspace, or starts the demo estuary when the store is empty. */
+  /**
+   * Restores the stored workspace, or starts the demo estuary when the store is empty. When the
+   * store's hint says it holds nothing (a first visit), the demo starts at once, without waiting for
+   * IndexedDB to open; a workspace found there all the same (saved before the hint existed) then
+   * replaces the demo, as opening it would.
+   */
   async boot(): Promise<void> {
+    const maybeStored = this.store.mayHold?.() ?? true;
+    if (!maybeStored) this.startDemo();
     const text = await this.store.load().catch(() => undefined);
-    if (text === undefined || !(await this.openText(text))) this.startDemo();
-    else this.dirty = true;
+    if (text !== undefined && (await this.openText(text))) this.dirty = true;
+    else if (maybeStored) this.startDemo();
     this.ready = true;
   }
 

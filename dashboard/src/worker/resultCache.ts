@@ -55,6 +55,9 @@ export function browserResultCache(): ResultCache | undefined {
         d.createObjectStore(STORE);
       },
     }));
+  // Open the database as the worker starts, while the first job's files are read, not when the first
+  // survey looks up its result (on a cold start IndexedDB takes a while to open an empty profile).
+  void open().catch(() => undefined);
   return {
     key: (parts) => sha256Hex(JSON.stringify({ engine, parts })),
     async get(key) {

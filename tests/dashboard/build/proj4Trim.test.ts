@@ -52,11 +52,13 @@ const SAMPLE_XY: Record<number, [number, number]> = {
 };
 
 describe("dashboard proj4 build (proj4Trim) against proj4 as published", () => {
-  it("the build holds our projections only (no Equal Earth, no WKT parser)", () => {
+  it("the build holds our projections and datums only (no Equal Earth, no Potsdam datum, no WKT parser)", () => {
     const code = readFileSync(join(dir, "projection.js"), "utf8");
     expect(code).toContain("Lambert_Azimuthal_Equal_Area");
     expect(code).not.toContain("Equal_Earth");
     expect(code).not.toContain("PROJCRS");
+    expect(code).toContain("North_American_Datum_1983");
+    expect(code).not.toContain("Potsdam");
   });
   it("every EPSG code of EPSG_DEFINITIONS has a sample point", () => {
     for (const code of Object.keys(EPSG_DEFINITIONS)) expect(SAMPLE_XY[Number(code)]).toBeDefined();
