@@ -263,6 +263,7 @@ export type {
   StationPlacement,
   IsohalineAtKm,
   SurveyFacts,
+  DischargeProvenance,
   SurveyAnalysis,
   AlongChannelSeries,
   OffChannelStation,
@@ -416,10 +417,18 @@ export {
 } from "./archive/dischargeTable.ts";
 export {
   joinDischargeTable,
+  dischargeTableReport,
   DISCHARGE_JOIN_RULE,
   DISCHARGE_JOIN_MAX_DAYS,
   type DischargeJoin,
+  type DischargeTableReport,
 } from "./archive/dischargeJoin.ts";
+export {
+  surveyDischarge,
+  DISCHARGE_PRECEDENCE,
+  type DischargeGiven,
+  type SurveyDischarge,
+} from "./archive/surveyDischarge.ts";
 export { archiveTableRows, ARCHIVE_TABLE_COLUMNS, type ArchiveCell } from "./archive/archiveTable.ts";
 export { archiveSection, archiveName, type BriefingArchive } from "./archive/archiveSection.ts";
 export {

@@ -1,4 +1,5 @@
-import type { CommandIo } from "./command.ts";
+import type { Command, CommandIo } from "./command.ts";
+import { prestartSurveyWorkers, stopPrestarted } from "./archive/earlyStart.ts";
 import { commands } from "./commands/index.ts";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_USAGE, InputError, UsageError } from "./exitCodes.ts";
 import { stripControl } from "../analysis/output/terminalText.ts";
@@ -44,11 +45,21 @@ export async function main(argv: string[], io?: CommandIo): Promise<number> {
     sink.err(`brackline: unknown command "${name}"\n\n${usage()}`);
     return EXIT_USAGE;
   }
-  const command = await entry.load();
-  if (rest.includes("--help") || rest.includes("-h")) {
-    sink.out(command.help);
-    return 0;
+  // Survey workers start loading now, while this thread loads the command's code.
+  prestartSurveyWorkers(name, rest);
+  try {
+    const command = await entry.load();
+    if (rest.includes("--help") || rest.includes("-h")) {
+      sink.out(command.help);
+      return 0;
+    }
+    return await runCommand(command, name, rest, sink);
+  } finally {
+    await stopPrestarted();
   }
+}
+
+async function runCommand(command: Command, name: string, rest: string[], sink: CommandIo): Promise<number> {
   try {
     return await command.run(rest, sink);
   } catch (error) {

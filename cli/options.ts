@@ -3,46 +3,17 @@
  * values become one `InputChoices` for readInputs and one `WorkspaceSettings` for analyzeInputs.
  * A wrong option value is a command-line mistake (exit 64) in every command.
  */
+import { basename } from "node:path";
 import { parseArgs } from "node:util";
-import type { InputChoices, LayerChoice, MouthOption, WorkspaceSettings } from "../analysis/index.ts";
+import type { DischargeTable, InputChoices, LayerChoice, MouthOption, WorkspaceSettings } from "../analysis/index.ts";
+import { readDischargeTable } from "../analysis/index.ts";
 import { parseUnitOverride, partialMappingSchema } from "../analysis/io/mappingChoices.ts";
 import { InputError, UsageError } from "./exitCodes.ts";
 import { readBytes } from "./files.ts";
 
-/** Every option of every command, as node:util parseArgs declares it. */
-export const OPTIONS = {
-  centerline: { type: "string" },
-  mouth: { type: "string" },
-  stations: { type: "string" },
-  mapping: { type: "string" },
-  layer: { type: "string" },
-  discharge: { type: "string" },
-  draws: { type: "string" },
-  seed: { type: "string" },
-  format: { type: "string" },
-  out: { type: "string" },
-  basemap: { type: "string" },
-  title: { type: "string" },
-  date: { type: "string" },
-  bin: { type: "string" },
-  width: { type: "string" },
-  "max-offset": { type: "string" },
-  mixing: { type: "boolean" },
-  cond: { type: "string" },
-  temp: { type: "string" },
-  pres: { type: "string" },
-  pressure: { type: "string" },
-  threads: { type: "string" },
-  "cache-dir": { type: "string" },
-  "no-cache": { type: "boolean" },
-  seasons: { type: "string" },
-  "discharge-table": { type: "string" },
-  unit: { type: "string", multiple: true },
-  "off-channel-km": { type: "string" },
-  "keep-off-channel": { type: "boolean" },
-  "as-tracer": { type: "string", multiple: true },
-  "centerline-out": { type: "string" },
-} as const;
+import { OPTIONS } from "./optionTable.ts";
+
+export { OPTIONS };
 
 export type OptionName = keyof typeof OPTIONS;
 /** Parsed values: text for string options, true/false for boolean ones. */
@@ -62,6 +33,7 @@ export const INPUT_OPTIONS: readonly OptionName[] = [
   "mapping",
   "layer",
   "discharge",
+  "discharge-table",
   "draws",
   "seed",
   "unit",
@@ -69,6 +41,14 @@ export const INPUT_OPTIONS: readonly OptionName[] = [
   "keep-off-channel",
   "as-tracer",
 ];
+
+/** Help lines of the discharge options (analyze, compare, report). */
+export const DISCHARGE_HELP = `  --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name (for fluxes)
+  --discharge-table <flows.csv> daily discharge (date, m³/s; ft³/s when the header says cfs): a survey
+                               without a discharge of its own takes the row of its day, else of the
+                               nearest earlier day (at most 31 days before; stated)
+  Discharge precedence: --discharge, then the survey file's discharge column, then --discharge-table;
+  each survey states the one used ("dischargeSource": origin, statement, tableDate, daysBefore).`;
 
 /** Help lines of the issue-13 input options (analyze, compare, report). */
 export const CHOICE_HELP = `  --unit "<column>=<unit>"     unit of a column whose header has none (repeatable), e.g.
@@ -210,10 +190,34 @@ export function inputChoices(values: OptionValues): InputChoices {
   };
 }
 
-/** The analyzeInputs settings from parsed option values. */
+const tables = new Map<string, DischargeTable>();
+
+/**
+ * `--discharge-table flows.csv`: the table read once per path (readDischargeTable; its row problems
+ * are reported with the analysis, cli/archive/archiveOptions.ts `reportDischargeTable`).
+ *
+ * @throws InputError when the file cannot be read or has no usable row
+ */
+export function dischargeTableOption(path: string): DischargeTable {
+  const known = tables.get(path);
+  if (known) return known;
+  const table = readDischargeTable(new TextDecoder().decode(readBytes(path, "discharge table")), basename(path));
+  if (table.rows.length === 0) {
+    const first = table.issues[0];
+    throw new InputError(
+      `${path}: no usable row (expected a date column and a discharge column in m³/s)${first ? `; row ${first.row}, column "${first.column}", value "${first.value}": expected ${first.expected}` : ""}`,
+    );
+  }
+  tables.set(path, table);
+  return table;
+}
+
+/** The analyzeInputs settings from parsed option values (`--discharge-table` is read here). */
 export function workspaceSettings(values: OptionValues): WorkspaceSettings & { bootstrapDraws: number; seed: number } {
+  const table = values["discharge-table"] !== undefined ? dischargeTableOption(values["discharge-table"]) : undefined;
   return {
     bootstrapDraws: parseCount("draws", values.draws, 2000, MAX_DRAWS),
     seed: parseCount("seed", values.seed, 1),
+    ...(table ? { dischargeTable: table } : {}),
   };
 }

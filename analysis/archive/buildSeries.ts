@@ -54,7 +54,9 @@ export function buildSeriesPoints(
     const season = date ? seasonOf(date, seasons) : undefined;
     const given = discharge[f.name];
     const q = given?.dischargeM3s ?? f.riverDischargeM3s;
-    const qSource = given?.source ?? (f.riverDischargeM3s !== undefined ? "survey file or --discharge" : undefined);
+    const qSource =
+      given?.source ??
+      (f.riverDischargeM3s !== undefined ? (f.dischargeSource?.statement ?? "the survey's own discharge") : undefined);
     const common = {
       survey: f.name,
       ...(date ? { date } : {}),

@@ -14,7 +14,7 @@ import { constituentSamples } from "./mixingSamples.ts";
 import { placeStations } from "./placeStations.ts";
 import { alongChannelSeries } from "./alongChannelSeries.ts";
 import { offChannelStations } from "./offChannel.ts";
-import type { MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
+import type { DischargeProvenance, MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
 import { minOf, maxOf } from "../survey/arrayExtent.ts";
 
 /** Per-constituent settings a user may change (end-member overrides, precision, k, ...). */
@@ -41,6 +41,8 @@ export interface AnalyzeSurveyOptions {
   saltIntrusionSalinity?: number;
   /** River discharge [m³/s]; overrides the survey's. */
   riverDischargeM3s?: number;
+  /** Where the discharge came from (stated in the survey facts; see `surveyDischarge`). */
+  dischargeSource?: DischargeProvenance;
   /** Bootstrap draws for every constituent (default 2000). */
   bootstrapDraws?: number;
   /** Seed of the bootstrap (default 1). */
@@ -136,6 +138,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     ...(survey.startDate !== undefined ? { startDate: survey.startDate } : {}),
     ...(survey.endDate !== undefined ? { endDate: survey.endDate } : {}),
     ...(discharge !== undefined ? { riverDischargeM3s: discharge } : {}),
+    ...(discharge !== undefined && options.dischargeSource ? { dischargeSource: { ...options.dischargeSource } } : {}),
     ...(intrusion?.km !== undefined ? { saltIntrusionKm: intrusion.km } : {}),
     saltIntrusionSalinity: saltS,
     isohalines: iso ? iso.positions.map((p) => ({ salinity: p.salinity, km: p.km })) : [],

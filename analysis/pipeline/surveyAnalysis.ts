@@ -41,12 +41,30 @@ export interface IsohalineAtKm {
   km: number[];
 }
 
+/**
+ * Where a survey's river discharge came from (decided once by `surveyDischarge`, analysis/archive):
+ * `setting` = the analysis setting for every survey, `option` = given by the user for this survey
+ * (CLI `--discharge`), `file` = the survey file's discharge column, `table` = a daily discharge
+ * table joined by date (then `tableDate` and `daysBefore` say which row).
+ */
+export interface DischargeProvenance {
+  origin: "setting" | "option" | "file" | "table";
+  /** Plain statement, e.g. "discharge of 2019-07-14 (1 day before the survey) from flows.csv, row 22". */
+  statement: string;
+  /** Table date used (origin `table`), ISO 8601 YYYY-MM-DD. */
+  tableDate?: string;
+  /** Days between the table date and the survey date (origin `table`; 0 = same day). */
+  daysBefore?: number;
+}
+
 /** Survey-level facts. */
 export interface SurveyFacts {
   name: string;
   startDate?: string;
   endDate?: string;
   riverDischargeM3s?: number;
+  /** Where riverDischargeM3s came from (present whenever it is). */
+  dischargeSource?: DischargeProvenance;
   /** Distance from the mouth of the salt-intrusion isohaline [km]. */
   saltIntrusionKm?: number;
   /** The isohaline used for the intrusion length (default 2). */

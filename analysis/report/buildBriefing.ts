@@ -65,6 +65,10 @@ function provenance(input: BriefingInput): BriefingTable[] {
       0,
     );
     const withQ = input.analyses.filter((a) => a.survey.riverDischargeM3s !== undefined).length;
+    const fromTable = input.analyses.filter((a) => a.survey.dischargeSource?.origin === "table");
+    const tableNote = fromTable.length
+      ? ` (${fromTable.length} from a discharge table joined by date, ${fromTable.filter((a) => a.survey.dischargeSource?.daysBefore === 0).length} of them on the survey day)`
+      : "";
     tables.push({
       caption: "Surveys",
       header: ["Surveys", "Samples", "Placed on channel", "River discharge given"],
@@ -76,7 +80,7 @@ function provenance(input: BriefingInput): BriefingTable[] {
           }),
           String(input.analyses.reduce((n, a) => n + a.stations.length, 0)),
           String(placed),
-          `${withQ} of ${input.analyses.length}`,
+          `${withQ} of ${input.analyses.length}${tableNote}`,
         ],
       ],
     });
@@ -90,7 +94,9 @@ function provenance(input: BriefingInput): BriefingTable[] {
         String(a.stations.length),
         String(a.stations.filter((s) => s.alongChannelKm !== undefined).length),
         a.constituents.map((c) => `${c.name} (${c.unit})`).join(", "),
-        a.survey.riverDischargeM3s !== undefined ? formatSignificant(a.survey.riverDischargeM3s, 3) : "not given",
+        a.survey.riverDischargeM3s !== undefined
+          ? `${formatSignificant(a.survey.riverDischargeM3s, 3)}${a.survey.dischargeSource?.origin === "table" ? ` (table, ${a.survey.dischargeSource.tableDate})` : ""}`
+          : "not given",
       ]),
     });
   const sw: string[][] = [["Software", input.software ?? "Brackline"]];

@@ -42,7 +42,9 @@ export function surveySection(a: ComparableSurvey, ctx: SectionContext): Briefin
     ["Sampling dates", dates.length ? [...new Set(dates)].join(" to ") : "not given"],
     [
       "River discharge",
-      f.riverDischargeM3s !== undefined ? `${formatSignificant(f.riverDischargeM3s, 3)} m³/s` : "not given (no fluxes)",
+      f.riverDischargeM3s !== undefined
+        ? `${formatSignificant(f.riverDischargeM3s, 3)} m³/s${f.dischargeSource ? ` (${f.dischargeSource.statement})` : ""}`
+        : "not given (no fluxes)",
     ],
     [
       "Stations",

@@ -7,7 +7,9 @@ import type { SurveyComparison } from "../compare/types.ts";
 import { SCREENING_CAUTION } from "../output/caution.ts";
 import { deviationRows, resultRows, tableObjects, DEVIATION_COLUMNS, RESULT_COLUMNS } from "../output/columns.ts";
 import { analyzeSurvey, type ConstituentSettings } from "../pipeline/analyzeSurvey.ts";
-import type { SurveyAnalysis } from "../pipeline/surveyAnalysis.ts";
+import type { DischargeProvenance, SurveyAnalysis } from "../pipeline/surveyAnalysis.ts";
+import type { DischargeTable } from "../archive/dischargeTable.ts";
+import { surveyDischarge } from "../archive/surveyDischarge.ts";
 import { plottedObservations } from "./observations.ts";
 import { channelOverlay, surveyOverlay, type ChannelOverlay, type SurveyOverlay } from "./overlay.ts";
 import type { MouthDecision } from "./readCenterline.ts";
@@ -23,6 +25,11 @@ export interface WorkspaceSettings {
   saltIntrusionSalinity?: number;
   /** River discharge [m³/s] for every survey; overrides what the inputs carry. */
   riverDischargeM3s?: number;
+  /**
+   * A daily discharge table (readDischargeTable) joined by date to each survey without a discharge
+   * of its own; the precedence is `surveyDischarge`'s (DISCHARGE_PRECEDENCE), stated per survey.
+   */
+  dischargeTable?: DischargeTable;
   /** Per-constituent end-member overrides and precision. */
   constituents?: Readonly<Record<string, ConstituentSettings>>;
   /** Names of the surveys to analyse (default: all, in input order). */
@@ -78,6 +85,12 @@ export function analyzeInputs(inputs: WorkspaceInputs, settings: WorkspaceSettin
   const perSurvey = (i: number) => (f: number, label: string) =>
     settings.onProgress?.((i + f) / Math.max(1, chosen.length), label);
   const surveys = chosen.map((survey, i): SurveyResult => {
+    const q = surveyDischarge(survey, {
+      settingM3s: settings.riverDischargeM3s,
+      chosenM3s: inputs.choices.dischargeM3s,
+      table: settings.dischargeTable,
+    });
+    const { dischargeM3s, ...dischargeSource } = q ?? { dischargeM3s: undefined };
     const analysis = analyzeSurvey(survey, {
       ...(network ? { network } : {}),
       ...(inputs.choices.offChannelM !== undefined ? { offChannelThresholdM: inputs.choices.offChannelM } : {}),
@@ -88,7 +101,7 @@ export function analyzeInputs(inputs: WorkspaceInputs, settings: WorkspaceSettin
       ...(settings.saltIntrusionSalinity !== undefined
         ? { saltIntrusionSalinity: settings.saltIntrusionSalinity }
         : {}),
-      ...(settings.riverDischargeM3s !== undefined ? { riverDischargeM3s: settings.riverDischargeM3s } : {}),
+      ...(q ? { riverDischargeM3s: dischargeM3s, dischargeSource: dischargeSource as DischargeProvenance } : {}),
       ...(settings.constituents ? { settings: { ...settings.constituents } } : {}),
       onProgress: perSurvey(i),
     });

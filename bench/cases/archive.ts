@@ -44,6 +44,13 @@ function idleEstimateS(r: CliRun): number {
   return Math.max(t.main, ...t.workers, t.total / 2);
 }
 
+/** CPU [s] of the V8/libuv helper threads (garbage collection, optimising compiler): all threads but the JavaScript ones. */
+function helpersS(r: CliRun): number {
+  const t = r.threadsCpu;
+  if (!t) return Number.NaN;
+  return t.total - t.main - t.workers.reduce((x, y) => x + y, 0);
+}
+
 function archiveArgs(threads: number): string[] {
   const line = join(OUT, "north-bay.geojson");
   return [
@@ -151,7 +158,7 @@ export const archiveBench: BenchCase = {
         ratio: one.wallS / two.wallS,
         ratioLabel: "× speed-up (whole process)",
         goal: "≤ 5 s",
-        note: `${load}; CPU ${two.cpuS.toFixed(1)} s (one thread ${one.cpuS.toFixed(1)} s); per thread: main ${two.threadsCpu?.main.toFixed(1)} s, worker ${two.threadsCpu?.workers.map((w) => w.toFixed(1)).join(" + ")} s, V8/libuv helpers ${((two.threadsCpu?.total ?? NaN) - (two.threadsCpu?.main ?? NaN) - (two.threadsCpu?.workers.reduce((x, y) => x + y, 0) ?? NaN)).toFixed(1)} s; idle-machine lower bound from the threads' CPU ${idleEstimateS(two).toFixed(1)} s (one thread ${idleEstimateS(one).toFixed(1)} s)`,
+        note: `${load}; CPU ${two.cpuS.toFixed(1)} s (one thread ${one.cpuS.toFixed(1)} s); per thread: main ${two.threadsCpu?.main.toFixed(1)} s, worker ${two.threadsCpu?.workers.map((w) => w.toFixed(1)).join(" + ")} s, V8/libuv helpers ${helpersS(two).toFixed(1)} s (one thread: main ${one.threadsCpu?.main.toFixed(1)} s, helpers ${helpersS(one).toFixed(1)} s; threaded runs tune V8's compiler, cli/archive/compilerTuning.ts, one-thread runs keep V8's defaults, which are faster there); idle-machine lower bound from the threads' CPU ${idleEstimateS(two).toFixed(1)} s (one thread ${idleEstimateS(one).toFixed(1)} s)`,
       },
       {
         name: "archive: analysis phase of the same runs (as the CLI reports it: queue, threads, results)",

@@ -6,7 +6,9 @@ import { createHash } from "node:crypto";
 import { availableParallelism } from "node:os";
 import type { CommandIo } from "../command.ts";
 import type { Survey, SurveyAnalysis } from "../../analysis/index.ts";
+import { surveyDischarge } from "../../analysis/index.ts";
 import { SurveyCache, surveyCacheKey } from "./surveyCache.ts";
+import { surveyWorkerUrl } from "./earlyStart.ts";
 import { surveyTaskHandler, type SurveySetup } from "./surveyTask.ts";
 import { CancelledError, runPool, startWorkers, type StartedWorkers } from "./workerPool.ts";
 
@@ -37,9 +39,7 @@ export interface ArchiveRunStats {
   taskSeconds: number;
 }
 
-/** The worker script of the survey pool (the build's JavaScript, or a tsx entry from the TypeScript sources). */
-export const surveyWorkerUrl = (): URL =>
-  new URL(import.meta.url.endsWith(".ts") ? "./surveyWorkerTs.js" : "./surveyWorker.js", import.meta.url);
+export { surveyWorkerUrl };
 
 /**
  * Starts the survey worker threads now (before reading the inputs, so loading their code overlaps
@@ -64,8 +64,8 @@ export function surveyCost(survey: Survey): number {
   return values * 100 + survey.stations.length;
 }
 
-/** The cache key of every survey of a run. */
-function cacheKeys(surveys: readonly Survey[], setup: SurveySetup): string[] {
+/** The cache key of every survey of a run (exported for tests). */
+export function cacheKeys(surveys: readonly Survey[], setup: SurveySetup): string[] {
   const network = setup.inputs.channel?.network;
   const channel = network
     ? createHash("sha256")
@@ -73,8 +73,22 @@ function cacheKeys(surveys: readonly Survey[], setup: SurveySetup): string[] {
         .update(setup.inputs.channel!.mouth.statement)
         .digest("hex")
     : "none";
+  // The table itself is not hashed for every survey: what it gives each one (its resolved discharge,
+  // with origin, table date and days before) is, so a changed discharge changes the key.
+  const { dischargeTable, ...settings } = setup.settings;
   return surveys.map((survey) =>
-    surveyCacheKey({ survey, channel, settings: setup.settings, offChannelM: setup.inputs.choices.offChannelM }),
+    surveyCacheKey({
+      survey,
+      channel,
+      settings,
+      offChannelM: setup.inputs.choices.offChannelM,
+      discharge:
+        surveyDischarge(survey, {
+          settingM3s: settings.riverDischargeM3s,
+          chosenM3s: setup.inputs.choices.dischargeM3s,
+          table: dischargeTable,
+        }) ?? null,
+    }),
   );
 }
 

@@ -1,13 +1,10 @@
 /**
- * The archive options of `brackline compare`: seasons, a discharge table joined by date, threads
- * and the cache, turned into what summarizeArchive and analyzeArchive take.
+ * The archive options of `brackline compare`: seasons, threads and the cache, turned into what
+ * summarizeArchive and analyzeArchive take, and the report of a discharge table joined by date.
  */
-import { availableParallelism } from "node:os";
-import { basename } from "node:path";
-import type { DischargeSource, Season, Survey } from "../../analysis/index.ts";
-import { joinDischargeTable, parseSeasons, readDischargeTable } from "../../analysis/index.ts";
-import { InputError, UsageError } from "../exitCodes.ts";
-import { readFileSync } from "node:fs";
+import type { DischargeTable, Season, SurveyAnalysis } from "../../analysis/index.ts";
+import { DISCHARGE_JOIN_MAX_DAYS, dischargeTableReport, parseSeasons } from "../../analysis/index.ts";
+import { UsageError } from "../exitCodes.ts";
 import { defaultCacheDir } from "./surveyCache.ts";
 
 /** Seasons from `--seasons "wet=Dec-Apr,dry=Aug-Nov"` (default: meteorological seasons). */
@@ -20,13 +17,7 @@ export function seasonsOption(text: string | undefined): Season[] | undefined {
   }
 }
 
-/** Threads from `--threads n`, this one included (default: available parallelism); 0 or 1 = this thread only. */
-export function threadsOption(text: string | undefined): number {
-  if (text === undefined) return availableParallelism();
-  if (!/^\s*\d+\s*$/.test(text) || Number(text) > 256)
-    throw new UsageError(`--threads: expected a whole number 0…256; got "${text}"`);
-  return Number(text);
-}
+export { threadsOption } from "./earlyStart.ts";
 
 /** Cache directory from `--cache-dir` / `--no-cache` (default: the user's cache directory). */
 export function cacheDirOption(dir: string | undefined, noCache: boolean | undefined): string | undefined {
@@ -35,36 +26,27 @@ export function cacheDirOption(dir: string | undefined, noCache: boolean | undef
 }
 
 /**
- * Discharge of every survey from `--discharge-table flows.csv`: the table row of the survey's day,
- * else of the nearest earlier day (at most 31 days before), with the statement of which row was
- * used. Table problems go to stderr; surveys without a row are named.
- *
- * @throws InputError when the table cannot be read or has no usable row
+ * Reports on stderr what `--discharge-table` gave the analysed surveys (dischargeTableReport, from
+ * each survey's stated discharge source): the table's problems, its unit, how many surveys took a
+ * row and which were left without a discharge.
  */
-export function dischargeFromTable(
-  path: string,
-  surveys: readonly Pick<Survey, "name" | "startDate">[],
+export function reportDischargeTable(
+  table: DischargeTable,
+  analyses: readonly Pick<SurveyAnalysis, "survey">[],
   err: (text: string) => void,
-): Record<string, DischargeSource> {
-  let text: string;
-  try {
-    text = readFileSync(path, "utf8");
-  } catch (error) {
-    throw new InputError(
-      `${path}: cannot read discharge table (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`,
-    );
-  }
-  const table = readDischargeTable(text, basename(path));
-  for (const i of table.issues.slice(0, 20))
+): void {
+  const r = dischargeTableReport(
+    table,
+    analyses.map((a) => a.survey),
+  );
+  for (const i of r.issues.slice(0, 20))
     err(`  ${i.severity}: ${i.file} row ${i.row}, column "${i.column}", value "${i.value}": expected ${i.expected}`);
-  if (table.issues.length > 20) err(`  ... and ${table.issues.length - 20} more problems in ${table.fileName}`);
-  if (table.rows.length === 0)
-    throw new InputError(`${path}: no usable row (expected a date column and a discharge column in m³/s)`);
-  err(`discharge table ${table.fileName}: ${table.rows.length} days, ${table.unitNote}`);
-  const { discharge: out, missing } = joinDischargeTable(table, surveys);
-  if (missing.length)
+  if (r.issues.length > 20) err(`  ... and ${r.issues.length - 20} more problems in ${r.fileName}`);
+  err(
+    `discharge table ${r.fileName}: ${r.days} days, ${r.unitNote}; ${r.joined} survey(s) took a row (${r.sameDay} of their own day), ${r.ownDischarge} kept their own discharge`,
+  );
+  if (r.missing.length)
     err(
-      `discharge table ${table.fileName}: no row on or up to 31 days before ${missing.length} survey(s) (${missing.slice(0, 5).join(", ")}${missing.length > 5 ? ", …" : ""}); their discharge stays as given in the files or by --discharge`,
+      `discharge table ${r.fileName}: no row on or up to ${DISCHARGE_JOIN_MAX_DAYS} days before ${r.missing.length} survey(s) without a discharge of their own (${r.missing.slice(0, 5).join(", ")}${r.missing.length > 5 ? ", …" : ""}): no fluxes for them`,
     );
-  return out;
 }

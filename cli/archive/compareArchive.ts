@@ -3,11 +3,11 @@
  * progress and cancel), join discharges, summarise the archive and write JSON or the long CSV.
  */
 import type { CommandIo } from "../command.ts";
-import type { SurveyAnalysis, SurveyComparison, WorkspaceInputs } from "../../analysis/index.ts";
+import type { DischargeTable, SurveyAnalysis, SurveyComparison, WorkspaceInputs } from "../../analysis/index.ts";
 import { compareSurveys, summarizeArchive } from "../../analysis/index.ts";
 import { analyzeArchive } from "./analyzeArchive.ts";
 import { surveySetup } from "./surveyTask.ts";
-import { cacheDirOption, dischargeFromTable, seasonsOption, threadsOption } from "./archiveOptions.ts";
+import { cacheDirOption, reportDischargeTable, seasonsOption, threadsOption } from "./archiveOptions.ts";
 import { archiveCsv, archiveJson } from "./archiveOutput.ts";
 import { stopWorkers, type StartedWorkers } from "./workerPool.ts";
 
@@ -20,14 +20,12 @@ export interface ArchiveCompareValues {
   "cache-dir"?: string;
   "no-cache"?: boolean;
   seasons?: string;
-  "discharge-table"?: string;
 }
 
 /** Help lines of the archive options, for `compare --help`. */
 export const ARCHIVE_HELP = `With three or more surveys (an archive): series per constituent and the salt intrusion against date,
 river discharge, month and season, and year on year (README: series[], intrusion[]).
   --seasons <name=Mon-Mon,...>  seasons for summaries (default meteorological winter/spring/summer/autumn)
-  --discharge-table <flows.csv> daily discharge (date, m³/s); each survey takes its day or the nearest earlier day
   --threads <n>                 threads, this one included (default: all cores; 0 or 1 = this thread only)
   --cache-dir <dir>             per-survey result cache (default ~/.cache/brackline/surveys)
   --no-cache                    analyse every survey again, store nothing
@@ -40,7 +38,7 @@ river discharge, month and season, and year on year (README: series[], intrusion
  */
 export async function compareArchive(
   inputs: WorkspaceInputs,
-  settings: { bootstrapDraws: number; seed: number },
+  settings: { bootstrapDraws: number; seed: number; dischargeTable?: DischargeTable },
   values: ArchiveCompareValues,
   format: "json" | "csv",
   io: CommandIo,
@@ -50,20 +48,16 @@ export async function compareArchive(
     const seasons = seasonsOption(values.seasons);
     const threads = threadsOption(values.threads);
     const cacheDir = cacheDirOption(values["cache-dir"], values["no-cache"]);
-    const discharge = values["discharge-table"]
-      ? dischargeFromTable(values["discharge-table"], inputs.surveys, io.err)
-      : undefined;
     const { analyses, stats } = await analyzeArchive(
       { surveys: inputs.surveys, ...surveySetup(inputs, settings) },
       { threads, ...(cacheDir ? { cacheDir } : {}), ...(started ? { started } : {}), io },
     );
+    if (settings.dischargeTable) reportDischargeTable(settings.dischargeTable, analyses, io.err);
     io.err(
       `archive: ${stats.analysed} surveys analysed, ${stats.cached} from the cache, in ${stats.seconds.toFixed(1)} s`,
     );
-    const archive = summarizeArchive(analyses as SurveyAnalysis[], {
-      ...(seasons ? { seasons } : {}),
-      ...(discharge ? { discharge } : {}),
-    });
+    // Each analysis carries its discharge and where it came from (surveyDischarge, in analyzeInputs).
+    const archive = summarizeArchive(analyses as SurveyAnalysis[], seasons ? { seasons } : {});
     if (format === "csv") return archiveCsv(archive);
     const comparison: SurveyComparison | undefined =
       analyses.length <= ARCHIVE_COMPARISON_MAX ? compareSurveys(analyses) : undefined;

@@ -4,11 +4,11 @@
  * cancel. Workers are started before the files are read when the inputs look big enough to need
  * them, and ended unused otherwise.
  */
-import { statSync } from "node:fs";
 import type { CommandIo } from "../command.ts";
 import type { Survey, SurveyAnalysis, WorkspaceInputs } from "../../analysis/index.ts";
-import { analyzeArchive, startSurveyWorkers, surveyCost, type ArchiveRunStats } from "./analyzeArchive.ts";
+import { analyzeArchive, surveyCost, type ArchiveRunStats } from "./analyzeArchive.ts";
 import { threadsOption } from "./archiveOptions.ts";
+import { startWorkersIfWorthIt, takePrestarted } from "./earlyStart.ts";
 import { surveySetup, type SurveySetup } from "./surveyTask.ts";
 import { stopWorkers, type StartedWorkers } from "./workerPool.ts";
 
@@ -35,24 +35,14 @@ export const POOL_HELP = `  --threads <n>                threads analysing sever
  * a shared 2-core machine. An explicit `--threads` is always honoured.
  */
 export const POOL_MIN_WORK = 2e8;
-/** Survey files smaller than this in total are not worth starting workers before reading. */
-const EARLY_START_BYTES = 256 * 1024;
-
 /**
- * Starts the worker threads before the files are read when they will likely be used (explicit
- * `--threads n > 0`, or default threads and two or more survey files of at least 256 KiB together);
- * they then parse the files in parallel, and their start-up overlaps the reading. Pass the result to {@link analyzeSurveysThroughPool}.
+ * Workers for a run, started before the files are read when they will likely be used: those the
+ * CLI's entry already started for this command line (cli/archive/earlyStart.ts), else started now
+ * by the same rule (explicit `--threads n > 0`, or default threads and two or more survey files of
+ * at least 256 KiB together). Pass the result to {@link analyzeSurveysThroughPool}.
  */
 export function startWorkersEarly(paths: readonly string[], values: PoolValues): StartedWorkers | undefined {
-  const threads = threadsOption(values.threads);
-  if (threads < 2) return undefined;
-  if (values.threads === undefined) {
-    if (paths.length < 2) return undefined;
-    let bytes = 0;
-    for (const p of paths) bytes += statSync(p, { throwIfNoEntry: false })?.size ?? 0;
-    if (bytes < EARLY_START_BYTES) return undefined;
-  }
-  return startSurveyWorkers(threads - 1);
+  return takePrestarted() ?? startWorkersIfWorthIt(paths, values);
 }
 
 /**

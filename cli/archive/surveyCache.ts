@@ -10,7 +10,7 @@ import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 
 /** Bumped when the cached result format changes. */
-export const CACHE_FORMAT = 1;
+export const CACHE_FORMAT = 2;
 
 /** Default cache directory: $XDG_CACHE_HOME/brackline/surveys, else ~/.cache/brackline/surveys. */
 export function defaultCacheDir(): string {

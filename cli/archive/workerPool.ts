@@ -7,6 +7,7 @@
  * (the one-thread baseline).
  */
 import { Worker } from "node:worker_threads";
+import { tuneCompilerForThreads } from "./compilerTuning.ts";
 
 /** Handler of a worker module: set-up once, then one call per task. */
 export interface TaskHandler<Setup, Task, Result> {
@@ -40,6 +41,7 @@ export interface StartedWorkers {
 export function startWorkers(workerUrl: URL, threads: number): StartedWorkers {
   if (!Number.isInteger(threads) || threads < 0)
     throw new RangeError(`startWorkers: threads must be a whole number ≥ 0; got ${threads}`);
+  if (threads > 0) tuneCompilerForThreads();
   return { workers: Array.from({ length: threads }, () => new Worker(workerUrl)) };
 }
 
@@ -119,6 +121,7 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
     }
     return results;
   }
+  if (n > given.length) tuneCompilerForThreads();
   const workers = [
     ...given.slice(0, n),
     ...Array.from({ length: Math.max(0, n - given.length) }, () => new Worker(o.workerUrl)),

@@ -3,7 +3,14 @@ import type { SurveyAnalysis } from "../../analysis/index.ts";
 import { resultRows, tableCsv, RESULT_COLUMNS, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { UsageError } from "../exitCodes.ts";
 import { checkOut, writeOut } from "../files.ts";
-import { CHOICE_HELP, INPUT_OPTIONS, parseCommandLine, parseFormat, workspaceSettings } from "../options.ts";
+import {
+  CHOICE_HELP,
+  DISCHARGE_HELP,
+  INPUT_OPTIONS,
+  parseCommandLine,
+  parseFormat,
+  workspaceSettings,
+} from "../options.ts";
 import { loadWorkspaceOnWorkers } from "../archive/parallelRead.ts";
 import { POOL_HELP, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
 import { CancelledError, stopWorkers } from "../archive/workerPool.ts";
@@ -30,7 +37,7 @@ Options:
                                that has it, with that sample's salinity)
   --centerline-out <file>      without --centerline: write the centerline built from the stations
 ${CHOICE_HELP}
-  --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name
+${DISCHARGE_HELP}
   --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
 ${POOL_HELP}

@@ -12,19 +12,20 @@ import {
   workspaceSettings,
   type OptionValues,
   CHOICE_HELP,
+  DISCHARGE_HELP,
 } from "../options.ts";
 import { loadWorkspace } from "../workspace.ts";
 import { loadWorkspaceOnWorkers } from "../archive/parallelRead.ts";
 import { ARCHIVE_HELP, compareArchive } from "../archive/compareArchive.ts";
 import { CancelledError, stopWorkers, type StartedWorkers } from "../archive/workerPool.ts";
-import { cacheDirOption } from "../archive/archiveOptions.ts";
+import { cacheDirOption, reportDischargeTable } from "../archive/archiveOptions.ts";
 import { analyzeSurveysThroughPool, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
 
 /** Exit code after Ctrl+C (128 + SIGINT), as shells report it. */
 export const EXIT_CANCELLED = 130;
 
 /** Archive options of `compare` (three or more surveys). */
-const ARCHIVE_OPTION_NAMES = [...POOL_OPTION_NAMES, "seasons", "discharge-table"] as const;
+const ARCHIVE_OPTION_NAMES = [...POOL_OPTION_NAMES, "seasons"] as const;
 
 /** Size and SHA-256 of a file, for the briefing's provenance. */
 export function provenanceOf(path: string, role: ProvenanceFile["role"]): ProvenanceFile {
@@ -73,6 +74,7 @@ export async function analyzeFiles(
   const cacheDir =
     values["cache-dir"] !== undefined ? cacheDirOption(values["cache-dir"], values["no-cache"]) : undefined;
   const { analyses } = await analyzeSurveysThroughPool(inputs, settings, values, io, cacheDir, started);
+  if (settings.dischargeTable) reportDischargeTable(settings.dischargeTable, analyses, io.err);
   const comparison = compare ? workspaceComparison(analyses, {}) : undefined;
   // Each file in the role readInputs recognised (a station table among the positionals is one), and
   // the --stations table, which is not among them.
@@ -107,7 +109,7 @@ Options:
   --mapping <mapping.json>     a saved column mapping
   --layer shallowest|surface|bottom|average|all|<min>-<max>  one value per station and survey
 ${CHOICE_HELP}
-  --discharge <Q | name=Q,...> river discharge [m³/s] per survey name (needed for the exponent and fluxes)
+${DISCHARGE_HELP}
   --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1); identical input and seed give identical output
   --format json|csv            output format (default json)

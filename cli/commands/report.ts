@@ -3,7 +3,7 @@ import type { ProvenanceFile } from "../../analysis/index.ts";
 import { buildBriefing, renderBriefingHtml, SCREENING_CAUTION } from "../../analysis/index.ts";
 import { InputError, UsageError } from "../exitCodes.ts";
 import { checkOut, readBytes, writeOut } from "../files.ts";
-import { CHOICE_HELP, INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
+import { CHOICE_HELP, DISCHARGE_HELP, INPUT_OPTIONS, parseCommandLine, workspaceSettings } from "../options.ts";
 import { analyzeFiles, EXIT_CANCELLED, provenanceOf } from "./compare.ts";
 import { POOL_HELP, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
 import { CancelledError } from "../archive/workerPool.ts";
@@ -56,7 +56,7 @@ Options:
   --mapping <mapping.json>     a saved column mapping (a partial one is merged with the suggestion)
   --layer shallowest|surface|bottom|average|all|<min>-<max>  one value per station and survey
 ${CHOICE_HELP}
-  --discharge <Q | name=Q,...> river discharge [m³/s] for all surveys or per survey name (for fluxes)
+${DISCHARGE_HELP}
   --draws <n>                  bootstrap draws (default 2000, at most 100000)
   --seed <n>                   bootstrap seed (default 1)
 ${POOL_HELP}

@@ -12,6 +12,7 @@ import { AnalysisResults } from "./results.svelte.ts";
 import { SavedWorkspace, type WorkspaceIo } from "./savedWorkspace.svelte.ts";
 import { ImportFlow } from "./importFlow.svelte.ts";
 import { ArchiveState } from "../archive/archiveState.svelte.ts";
+import type { ArchiveChoices } from "../archive/archiveChoices.ts";
 import { memoryStore, type WorkspaceStore } from "./workspaceStore.ts";
 import { proxyCallback, startWorker, type RemoteApi, type WorkerHandle } from "../worker/client.ts";
 import type { AnalysisJob, TextFile } from "../worker/protocol.ts";
@@ -232,8 +233,25 @@ export class AppState {
       });
   }
 
+  /** The analysis settings sent to the worker, with the archive view's discharge table (it feeds each survey's analysis). */
   #settingsSnapshot(): AnalysisSettings {
-    return $state.snapshot(this.settings.analysis) as AnalysisSettings;
+    const table = this.settings.archive.dischargeTable;
+    return {
+      ...($state.snapshot(this.settings.analysis) as AnalysisSettings),
+      ...(table ? { dischargeTable: $state.snapshot(table) } : {}),
+    };
+  }
+
+  /**
+   * Sets the archive view's choices (seasons, discharge table). A new or removed discharge table
+   * re-runs the analysis: each survey's discharge, and so its fluxes, may change with it.
+   */
+  setArchiveChoices(choices: ArchiveChoices): void {
+    const before = this.settings.archive.dischargeTable;
+    this.settings.archive = choices;
+    const after = choices.dischargeTable;
+    const same = before?.name === after?.name && before?.text === after?.text;
+    if (!same && this.#analyser) void this.run({ kind: "analyze", settings: this.#settingsSnapshot() });
   }
 
   /** Reads survey files and a centerline in the worker and analyses them (the demo at start-up). */

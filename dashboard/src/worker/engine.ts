@@ -9,8 +9,10 @@ import {
   emptySummary,
   placeWithoutCenterline,
   readCenterline,
+  readDischargeTable,
   readInputs,
   type ChannelInput,
+  type DischargeTable,
   type ConstituentSettings,
   type ImportIssue,
   type InputFile,
@@ -98,11 +100,21 @@ function constituentSettings(settings: AnalysisSettings): Record<string, Constit
   return out;
 }
 
+let lastTable: { file: TextFile; table: DischargeTable } | undefined;
+
+/** The discharge table of a file, read by the analysis' reader (the last one kept: every survey of a run uses it). */
+export function dischargeTableOf(file: TextFile): DischargeTable {
+  if (lastTable?.file.name !== file.name || lastTable.file.text !== file.text)
+    lastTable = { file, table: readDischargeTable(file.text, file.name) };
+  return lastTable.table;
+}
+
 /** The analyzeInputs settings of the dashboard's settings (same bootstrap defaults as the CLI). */
 export function workspaceSettings(settings: AnalysisSettings): WorkspaceSettings {
   return {
     saltIntrusionSalinity: settings.saltIntrusionSalinity,
     ...(settings.riverDischargeM3s !== undefined ? { riverDischargeM3s: settings.riverDischargeM3s } : {}),
+    ...(settings.dischargeTable ? { dischargeTable: dischargeTableOf(settings.dischargeTable) } : {}),
     constituents: constituentSettings(settings),
   };
 }

@@ -35,6 +35,12 @@ export interface AnalysisSettings {
   precisionPercent: Record<string, number>;
   /** River discharge [m³/s] overriding the survey's own value, or undefined. */
   riverDischargeM3s: number | undefined;
+  /**
+   * The archive view's daily discharge table (date, m³/s): each survey without a discharge of its own
+   * takes its day's row, else the nearest earlier day, in its own analysis (fluxes), by the analysis'
+   * one rule (`surveyDischarge`, the CLI's `--discharge-table`).
+   */
+  dischargeTable?: TextFile;
   /** Name of the constant set used for speciation. */
   constantSet: string;
   /** Salinity of the isohaline that marks the salt intrusion (default 2). */

@@ -1,6 +1,6 @@
 /**
- * The archive view's own inputs: a discharge table joined in the worker by the analysis' join
- * (the CLI's discharge-table rule), the seasons editor text, the neutral no-discharge warning with
+ * The archive view's own inputs: a discharge table joined to each survey's analysis by the
+ * analysis' rule (the CLI's discharge-table rule) and reported by the worker, the seasons editor text, the neutral no-discharge warning with
  * per-front-end hints, and the workspace round trip of both choices (older workspaces: defaults).
  * Invented synthetic archive and an invented flows table; no measurements.
  */
@@ -12,6 +12,7 @@ import {
   joinDischargeTable,
   parseSeasons,
   readDischargeTable,
+  surveyDischarge,
   workspaceSchema,
 } from "../../../analysis/index.ts";
 import { syntheticArchive } from "../../archive/helpers/syntheticArchive.ts";
@@ -51,18 +52,26 @@ describe("discharge table in the archive view (invented flows)", () => {
     expect(w.hint!.dashboard).not.toMatch(/--/);
   });
 
-  it("archiveOf() joins the table by the analysis' rule: the same day, else the nearest earlier day", () => {
+  it("archiveOf() reports what the table gave the analyses (from their stated sources) and the series use those discharges", () => {
     const text = inventedFlows();
-    const answer = archiveOf(held, DEFAULT_SEASONS, { name: "invented-flows.csv", text });
+    const table = readDischargeTable(text, "invented-flows.csv");
+    // What analyzeInputs does for each survey given the table (AnalysisSettings.dischargeTable): surveyDischarge.
+    const analysed = noFlow.map((a) => {
+      const q = surveyDischarge(a.survey, { table })!;
+      const { dischargeM3s, ...dischargeSource } = q;
+      return { ...a, survey: { ...a.survey, riverDischargeM3s: dischargeM3s, dischargeSource } };
+    });
+    const answer = archiveOf(analysed as never, DEFAULT_SEASONS, { name: "invented-flows.csv", text });
     const report = answer.discharge!;
     expect(report.rule).toBe(DISCHARGE_JOIN_RULE);
     expect(report.joined).toBe(12);
+    expect(report.ownDischarge).toBe(0);
     expect(report.missing).toEqual([]);
     expect(report.issues).toHaveLength(1);
     expect(report.issues[0]).toMatchObject({ file: "invented-flows.csv", column: "date", value: "2016-13-01" });
-    // Same numbers as the CLI's path: readDischargeTable + joinDischargeTable.
+    // Same numbers as the CLI's table lookup: readDischargeTable + joinDischargeTable.
     const cli = joinDischargeTable(
-      readDischargeTable(text, "invented-flows.csv"),
+      table,
       noFlow.map((a) => a.survey),
     );
     const points = answer.summary!.intrusion;
@@ -73,6 +82,8 @@ describe("discharge table in the archive view (invented flows)", () => {
       /discharge of 2016-01-12 \(3 days before the survey\) from invented-flows\.csv/,
     );
     expect(answer.summary!.warnings.some((x) => x.code === "no-discharge")).toBe(false);
+    // Analyses run without the table: the table is reported as giving none of them a discharge.
+    expect(archiveOf(held, DEFAULT_SEASONS, { name: "invented-flows.csv", text }).discharge!.joined).toBe(0);
   });
 
   it("joinDischargeTable() names surveys with no row within 31 days before them", () => {
