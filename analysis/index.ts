@@ -279,6 +279,8 @@ export type { CenterlineStation, StationCenterline } from "./pipeline/centerline
 export { distancesFromMouth } from "./pipeline/distancesFromMouth.ts";
 export { distanceOrigin, salinityByDistance } from "./pipeline/distanceOrigin.ts";
 export type { DistanceOrigin, SalinityAtDistance } from "./pipeline/distanceOrigin.ts";
+export { riverArmEnd, salinityBreakIndex } from "./pipeline/salinityBreak.ts";
+export type { ProfilePoint, RiverArmEnd } from "./pipeline/salinityBreak.ts";
 export type { AnalyzeSurveyOptions, ConstituentSettings } from "./pipeline/analyzeSurvey.ts";
 export { constituentSamples } from "./pipeline/mixingSamples.ts";
 export type { ConstituentSamples } from "./pipeline/mixingSamples.ts";

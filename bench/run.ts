@@ -1,6 +1,11 @@
 // `npm run bench`: runs every benchmark case and prints one table.
 import { benchCases } from "./cases/index.ts";
 import type { BenchRow } from "./benchCase.ts";
+// @ts-expect-error plain-JavaScript build script without type declarations
+import { buildCli, cliBuildIsStale } from "../cli/build.js";
+
+// the CLI cases run cli/dist/, which the launcher builds only when missing: rebuild it here when stale
+if (cliBuildIsStale()) await buildCli();
 
 function fmt(x: number): string {
   if (!Number.isFinite(x)) return String(x);

@@ -1,6 +1,7 @@
 // Builds the `brackline` CLI from TypeScript to plain JavaScript in cli/dist/ with esbuild (ESM, code
 // split per command so `brackline --help` loads only the command list). Run as `npm run build:cli`;
-// cli/bin/brackline.js also calls buildCli() when cli/dist/ is missing or older than the sources.
+// cli/bin/brackline.js calls buildCli() when cli/dist/ is missing; `npm run bench` and the built-CLI
+// tests call it when cliBuildIsStale() (scripts/ensure.js does the same for `npm start`/`npm test`).
 import { readdirSync, statSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";

@@ -1,6 +1,8 @@
 import type { Survey } from "../survey/survey.ts";
 import { localSegmentLengthM } from "../geometry/ellipsoid.ts";
 import { distanceOrigin } from "./distanceOrigin.ts";
+import { PLATEAU_SALINITY, riverArmEnd } from "./salinityBreak.ts";
+import { maxOf, minOf } from "../survey/arrayExtent.ts";
 
 /** A station as evidence for a centerline: id, position and salinity (one entry per sample; ids may repeat). */
 export interface CenterlineStation {
@@ -15,7 +17,7 @@ export interface StationCenterline {
   geometry: { type: "LineString"; coordinates: [number, number][] };
   properties: {
     role: "main";
-    /** The saltiest end is the last vertex. */
+    /** The mouth is the last vertex (the saltiest end, or where a side bay was cut off). */
     mouth: "end";
     source: "stations";
     /** Station ids along the line, river first. */
@@ -27,6 +29,12 @@ export interface StationCenterline {
      * beyond the mouth (see distanceOrigin); also listed in `leftOut`.
      */
     sideArm?: string[];
+    /**
+     * Stations left off because the walk up the salinity gradient ran on past the end of the river's
+     * salinity gradient and turned across the estuary's axis into a side bay (see sideArmStart); also
+     * listed in `leftOut`.
+     */
+    pastMouth?: string[];
   };
 }
 
@@ -64,14 +72,18 @@ function chaikin(points: [number, number][], rounds: number): [number, number][]
  * than the current one (within `salinityTolerance`, default 0.5) — stations passed by (a side basin
  * fresher than the channel beyond it) are left out; then stations that make the line double back are left out one by one (the
  * vertex whose two legs are longest relative to the direct link, while that ratio exceeds
- * `detourRatio`), and the line is smoothed by Chaikin corner cutting with its ends fixed. The
+ * `detourRatio`); when the path runs on past the end of the river's salinity gradient and turns
+ * across the axis into a side bay (a side bay as salty as the entrance, or saltier after
+ * evaporation), it is cut at the mouth (`pastMouth`); and the line is smoothed by Chaikin corner
+ * cutting with its ends fixed. The
  * result is a suggestion to check and edit: it follows the stations, not the deep channel.
  *
  * @param stations samples with id, [lon, lat] and salinity (ids may repeat; positions averaged per id)
  * @param options detourRatio (default 2), smoothing rounds (default 2)
- * @returns the centerline Feature (mouth at the saltiest end = last vertex), or undefined with
+ * @returns the centerline Feature (mouth at its last vertex: the saltiest end, or where a side bay was cut off), or undefined with
  *   fewer than 2 stations that have both a position and a salinity
- * @see Chaikin, G.M. (1974) An algorithm for high-speed curve generation, Comput. Graph. Image Process. 3:346–349.
+ * @see Chaikin, G.M. (1974) An algorithm for high-speed curve generation, Comput. Graph. Image Process. 3:346–349;
+ *   Hudson (1966) for the segmented fit that finds the end of the river's gradient
  */
 export function centerlineFromStations(
   stations: readonly CenterlineStation[],
@@ -130,6 +142,8 @@ export function centerlineFromStations(
     leftOut.push(pts[worst]!.id);
     pts.splice(worst, 1);
   }
+  const pastMouth = pts.splice(sideArmStart(pts)).map((p) => p.id);
+  leftOut.unshift(...pastMouth);
   const coords = chaikin(
     pts.map((p) => p.at),
     options.smoothingRounds ?? 2,
@@ -137,8 +151,60 @@ export function centerlineFromStations(
   return {
     type: "Feature",
     geometry: { type: "LineString", coordinates: coords },
-    properties: { role: "main", mouth: "end", source: "stations", stationIds: pts.map((p) => p.id), leftOut },
+    properties: {
+      role: "main",
+      mouth: "end",
+      source: "stations",
+      stationIds: pts.map((p) => p.id),
+      leftOut,
+      ...(pastMouth.length > 0 ? { pastMouth } : {}),
+    },
   };
+}
+
+/**
+ * A side bay beyond the mouth (our rule): at least SIDE_ARM_MIN_STATIONS stations; turning away from
+ * the river arm's direction — the angle between the line from the river's head to the mouth and the
+ * line from the mouth to the path's end exceeds 45° (cosine below SIDE_ARM_MAX_COS); and nearly flat
+ * in salinity — within SIDE_ARM_MAX_SPREAD of the path's salinity contrast (at least
+ * PLATEAU_SALINITY) of the mouth's plateau, so the outer reach of a river arm that bends but still
+ * gets saltier seaward stays on the line.
+ */
+const SIDE_ARM_MIN_STATIONS = 2;
+const SIDE_ARM_MAX_COS = Math.SQRT1_2;
+const SIDE_ARM_MAX_SPREAD = 0.1;
+
+/** Cosine of the angle between the directions a→b and b→c (local flat-Earth east/north components). */
+function turnCos(a: [number, number], b: [number, number], c: [number, number]): number {
+  const k = Math.cos((b[1] * Math.PI) / 180);
+  const [ux, uy, vx, vy] = [(b[0] - a[0]) * k, b[1] - a[1], (c[0] - b[0]) * k, c[1] - b[1]];
+  return (ux * vx + uy * vy) / (Math.hypot(ux, uy) * Math.hypot(vx, vy) || 1);
+}
+
+/**
+ * Where a walked station path leaves the estuary for a side bay: the mouth is the riverward edge
+ * of the plateau of the saltiest station near the end of the river's steep gradient (riverArmEnd,
+ * on the path's own chainage); the stations beyond it are a side bay when they pass the rule above.
+ * Returns the index of the first station beyond the mouth, or the path's length when there is no side bay.
+ */
+function sideArmStart(path: ReadonlyArray<{ at: [number, number]; salinity: number }>): number {
+  const chainKm = [0];
+  for (let i = 1; i < path.length; i++) chainKm.push(chainKm[i - 1]! + dist(path[i - 1]!.at, path[i]!.at) / 1000);
+  const end = riverArmEnd(
+    path.map((p, i) => ({ distanceKm: chainKm[i]!, medianSalinity: p.salinity, meanSalinity: p.salinity, n: 1 })),
+    -1,
+    0,
+  );
+  if (end === undefined) return path.length;
+  const m = end.mouthIndex;
+  const last = path.length - 1;
+  if (last - m < SIDE_ARM_MIN_STATIONS) return path.length;
+  if (turnCos(path[0]!.at, path[m]!.at, path[last]!.at) >= SIDE_ARM_MAX_COS) return path.length;
+  const salinity = path.map((p) => p.salinity);
+  const spread = Math.max(PLATEAU_SALINITY, SIDE_ARM_MAX_SPREAD * (maxOf(salinity) - minOf(salinity)));
+  const top = path[end.topIndex]!.salinity;
+  const flat = salinity.slice(m + 1).every((s) => Math.abs(s - top) <= spread);
+  return flat ? m + 1 : path.length;
 }
 
 /**

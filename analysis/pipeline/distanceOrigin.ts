@@ -1,5 +1,6 @@
 import { maxOf } from "../survey/arrayExtent.ts";
 import { spearmanRho } from "../geometry/suggestMouth.ts";
+import { PLATEAU_SALINITY, riverArmEnd } from "./salinityBreak.ts";
 
 /** The salinity at one distance value: the median over every survey that sampled it. */
 export interface SalinityAtDistance {
@@ -33,17 +34,18 @@ export type DistanceOrigin =
       maxKm: number;
       /** Median salinity at the maximum and at the far end of the side arm. */
       maxSalinity: number;
+      /**
+       * Distance (as given) and median salinity of the saltiest station near the end of the river's steep
+       * gradient (see riverArmEnd), the plateau the mouth is measured from; the maximum itself when they agree.
+       */
+      topKm: number;
+      topSalinity: number;
       armEndSalinity: number;
       /** Distinct distances on the side arm. */
       armStations: number;
     };
 
-/**
- * Salinity band below the maximum median that counts as the maximum's plateau, and the smallest
- * fall from the maximum to the far end of a side arm (common practice: above the ~0.1–0.3 scatter
- * of medians of repeated casts at one station).
- */
-export const PLATEAU_SALINITY = 0.5;
+export { PLATEAU_SALINITY } from "./salinityBreak.ts";
 
 /**
  * A station must have been sampled at least this fraction as often as the most-sampled station to
@@ -91,15 +93,18 @@ export function salinityByDistance(pairs: ReadonlyArray<readonly [number, number
  * the larger mean). When the maximum lies inside the distance range, with at least
  * {@link SIDE_ARM_MIN_STATIONS} stations beyond it (away from the freshest station) whose far end is
  * at least {@link PLATEAU_SALINITY} fresher, the axis runs through the mouth into a second arm (a
- * transect continuing from a river through the bay entrance into a side bay): the mouth is the
- * riverward edge of the maximum's plateau (the last station, walking towards the river, whose median
- * is within {@link PLATEAU_SALINITY} of the maximum) and the river side is the side holding the
- * freshest station. Otherwise the sign of Spearman's rank correlation between distance and salinity
+ * transect continuing from a river through the bay entrance into a side bay): the river side is the
+ * side holding the freshest station, and the mouth is the riverward edge of the plateau (the last
+ * station, walking towards the river, whose median is within {@link PLATEAU_SALINITY}) of the
+ * saltiest station near the end of the river's steep gradient ({@link riverArmEnd}: within 10 km of
+ * the break of a two-segment fit). A single survey from a dry season can find the side bay saltier
+ * than the entrance; its maximum then marks the side bay, not the mouth. Otherwise the sign of Spearman's rank correlation between distance and salinity
  * (Spearman 1904) orients a simple axis.
  *
  * @param pairs [distance km, practical salinity], one per sample (finite numbers)
  * @returns the decision, or undefined with fewer than 3 distinct distances or no salinity contrast
- * @see common practice: an estuary's mouth is where its along-axis salinity peaks; Spearman (1904) for the rank correlation
+ * @see common practice: an estuary's mouth is where its along-axis salinity peaks; Spearman (1904) for the rank correlation;
+ *   Hudson (1966) for the segmented fit
  */
 export function distanceOrigin(pairs: ReadonlyArray<readonly [number, number]>): DistanceOrigin | undefined {
   const st = salinityByDistance(pairs);
@@ -122,19 +127,16 @@ export function distanceOrigin(pairs: ReadonlyArray<readonly [number, number]>):
     const arm = riverSide === 1 ? st.slice(0, iMax) : st.slice(iMax + 1);
     const armEnd = riverSide === 1 ? arm[0]! : arm[arm.length - 1]!;
     const drop = top.medianSalinity - armEnd.medianSalinity;
-    // the mouth: the riverward edge of the maximum's plateau (a flat-topped bay would otherwise put it anywhere on the plateau)
-    let iMouth = iMax;
-    for (let i = iMax + riverSide; i >= 0 && i < st.length; i += riverSide) {
-      const p = st[i]!;
-      if (p.n < minN) continue;
-      if (p.medianSalinity < top.medianSalinity - PLATEAU_SALINITY) break;
-      iMouth = i;
-    }
+    // the mouth: the riverward edge of the plateau of the saltiest station near the end of the river's steep
+    // gradient (a side bay made saltier than the entrance by evaporation would otherwise hold it)
+    const end = riverArmEnd(st, riverSide, minN)!;
     if (arm.length >= SIDE_ARM_MIN_STATIONS && drop >= PLATEAU_SALINITY)
       return {
         kind: "interior",
-        mouthKm: st[iMouth]!.distanceKm,
+        mouthKm: st[end.mouthIndex]!.distanceKm,
         maxKm: top.distanceKm,
+        topKm: st[end.topIndex]!.distanceKm,
+        topSalinity: st[end.topIndex]!.medianSalinity,
         riverSide,
         maxSalinity: top.medianSalinity,
         armEndSalinity: armEnd.medianSalinity,

@@ -1,7 +1,14 @@
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
+// @ts-expect-error plain-JavaScript build script without type declarations
+import { buildCli, cliBuildIsStale } from "../../cli/build.js";
 
-/** The shipped command: cli/bin/brackline.js runs the plain-JavaScript build (built here when missing or stale). */
+// the launcher builds cli/dist/ only when it is missing; these tests check the build of the current sources
+beforeAll(async () => {
+  if (cliBuildIsStale()) await buildCli();
+}, 120_000);
+
+/** The shipped command: cli/bin/brackline.js runs the plain-JavaScript build (cli/dist/). */
 function brackline(args: string[], viaNpx = false): { code: number | null; out: string; err: string } {
   const r = viaNpx
     ? spawnSync("npx", ["--no-install", "brackline", ...args], { encoding: "utf8" })

@@ -14,6 +14,7 @@ import {
   waitForAnalysis,
   type Session,
 } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 import { BAY_CRUISE_2018, BAY_DIR, BAY_STATIONS, BAY_UNITLESS, bayFileInput, bayFilesPresent } from "./bayFiles.ts";
 import { decodePng } from "./pixels.ts";
 
@@ -67,13 +68,7 @@ const near = (a: [number, number, number], b: [number, number, number]) =>
   Math.max(...a.map((v, i) => Math.abs(v - b[i]!))) <= 12;
 
 describe.skipIf(skipBrowser)("the first page load does not fetch the world land", () => {
-  let s: Session;
-  beforeAll(async () => {
-    s = await openReadyDashboard();
-  }, 120_000);
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard(openReadyDashboard, 120_000);
 
   it("the demo (its own invented coast) draws no world land and loaded no land asset", async () => {
     expect(await s.page.locator(".map").getAttribute("data-world-land")).toBe("off");

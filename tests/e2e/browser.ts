@@ -191,12 +191,12 @@ export async function selectionStatus(page: Page): Promise<string> {
  * Opens the dashboard and waits until the map has drawn and the analysis has finished: the set-up
  * every browser test starts from. Fails with the clear message when Chromium is missing.
  */
-export async function openReadyDashboard(): Promise<Session> {
+export async function openReadyDashboard(options: { settled?: boolean } = {}): Promise<Session> {
   const missing = missingBrowserMessage();
   if (missing) throw new Error(missing);
   const s = await openDashboard();
   await waitForMap(s.page);
   await waitForAnalysis(s.page);
-  await settle(s.page);
+  if (options.settled ?? true) await settle(s.page);
   return s;
 }

@@ -1,16 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openReadyDashboard, screenshot, settle, skipBrowser, type Session } from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, settle, skipBrowser } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 
 describe.skipIf(skipBrowser)("brushing a salinity range in the mixing plot", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    s = await openReadyDashboard();
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard();
 
   it("dragging across salinities in the mixing plot names the channel stretch in km and shades it on the map", async () => {
     const box = (await s.page.locator('[data-panel="MixingPlot"] svg').first().boundingBox())!;

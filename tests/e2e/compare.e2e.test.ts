@@ -1,26 +1,11 @@
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import {
-  openReadyDashboard,
-  screenshot,
-  SCREENSHOT_DIR,
-  selectionStatus,
-  type Session,
-  settle,
-  skipBrowser,
-} from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, SCREENSHOT_DIR, selectionStatus, settle, skipBrowser } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 
 describe.skipIf(skipBrowser)("survey comparison view and the briefing download", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    s = await openReadyDashboard();
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard();
 
   it("Compare surveys shows both invented surveys in the intrusion table and the Fe zone shift with its interval statement", async () => {
     await s.page.getByRole("button", { name: "Compare surveys" }).click();

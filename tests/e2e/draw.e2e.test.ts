@@ -1,35 +1,13 @@
 import { readFileSync } from "node:fs";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import {
-  missingBrowserMessage,
-  openDashboard,
-  screenshot,
-  settle,
-  skipBrowser,
-  stationPixel,
-  waitForAnalysis,
-  waitForMap,
-  type Session,
-} from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, settle, skipBrowser, stationPixel, waitForAnalysis } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 
 /** Stations from the mouth (W01) to the head (W30) of the invented wet survey, to draw along. */
 const ALONG_CHANNEL = ["W01", "W08", "W15", "W22", "W30"];
 
 describe.skipIf(skipBrowser)("drawing a channel centerline on the map", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-    await settle(s.page);
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard();
 
   it("the Draw channel toggle is a keyboard-reachable button that starts drawing", async () => {
     const button = s.page.getByRole("button", { name: "Draw channel" });

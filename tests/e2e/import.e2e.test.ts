@@ -1,14 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import {
-  openReadyDashboard,
-  screenshot,
-  type Session,
-  settle,
-  skipBrowser,
-  stationPixel,
-  waitForAnalysis,
-  waitForMap,
-} from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, type Session, settle, skipBrowser, stationPixel, waitForAnalysis, waitForMap } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 
 // An invented survey file with the quirks of real exports: semicolons, decimal commas, a censored
 // value, an unreadable cell, a salinity header no pattern knows, and a row without a station id.
@@ -31,15 +23,7 @@ async function selectedSurvey(s: Session): Promise<string> {
 }
 
 describe.skipIf(skipBrowser)("importing a survey file: mapping dialog, report, map, persistence after reload", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    s = await openReadyDashboard();
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard();
 
   it("a dropped semicolon file opens the mapping dialog with suggested roles, units and a preview", async () => {
     await s.page.locator('[data-testid="import-input"]').setInputFiles(csvFile("autumn.csv"));

@@ -1,25 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import {
-  openReadyDashboard,
-  screenshot,
-  selectionStatus,
-  type Session,
-  settle,
-  skipBrowser,
-  stationPixel,
-  waitForAnalysis,
-} from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, selectionStatus, settle, skipBrowser, stationPixel, waitForAnalysis } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 
 describe.skipIf(skipBrowser)("map tooltips, keyboard use and re-analysis in the worker", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    s = await openReadyDashboard();
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard();
 
   it("hovering station W30 on the map shows a tooltip with salinity, the constituent value and their units", async () => {
     const at = await stationPixel(s.page, "W30");

@@ -1,17 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { existsSync } from "node:fs";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
-import {
-  REPO_ROOT,
-  openReadyDashboard,
-  screenshot,
-  settle,
-  skipBrowser,
-  waitForAnalysis,
-  waitForMap,
-  type Session,
-} from "./browser.ts";
+import { REPO_ROOT, screenshot, settle, skipBrowser, waitForAnalysis, waitForMap } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 
 // A real survey export read at test time (never copied into the repository): the San Francisco Bay
 // cruise archive's 2022 file with its station table (../shared/data/usgs-sfbay-2016-2022/SOURCE.md).
@@ -94,15 +86,7 @@ async function layoutFacts(page: Page): Promise<{ pageOverflowPx: number; escape
 }
 
 describe.skipIf(skipBrowser)("layout and map labels at 1280×800 and 1440×900 (headless Chromium)", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    s = await openReadyDashboard();
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard();
 
   for (const [width, height] of [
     [1440, 900],

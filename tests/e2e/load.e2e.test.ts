@@ -1,29 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import {
-  missingBrowserMessage,
-  openDashboard,
-  screenshot,
-  skipBrowser,
-  waitForAnalysis,
-  waitForMap,
-  type Session,
-} from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, skipBrowser, openReadyDashboard } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 import { pixelStats } from "./pixels.ts";
 
 describe.skipIf(skipBrowser)("dashboard loads the invented demo estuary (headless Chromium)", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard(() => openReadyDashboard({ settled: false }));
 
   it("shows the product name, the caution line and both demo surveys in the survey switcher", async () => {
     await expect(s.page.locator("h1").textContent()).resolves.toBe("Brackline");

@@ -1,6 +1,7 @@
 import { readFile } from "node:fs/promises";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openReadyDashboard, screenshot, settle, skipBrowser, waitForAnalysis, type Session } from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { openReadyDashboard, screenshot, settle, skipBrowser, waitForAnalysis } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 import { BAY_CRUISE_2018, BAY_DIR, BAY_STATIONS, BAY_UNITLESS, bayFileInput, bayFilesPresent } from "./bayFiles.ts";
 
 if (!bayFilesPresent) console.warn(`realData.e2e: skipped, ${BAY_DIR} is absent`);
@@ -11,15 +12,7 @@ const DEMO_SURVEYS = ["wet-2025-03", "dry-2025-09"];
 describe.skipIf(skipBrowser || !bayFilesPresent)(
   "the raw San Francisco Bay cruise export through the dashboard",
   () => {
-    let s: Session;
-
-    beforeAll(async () => {
-      s = await openReadyDashboard();
-    }, 120_000);
-
-    afterAll(async () => {
-      await s?.close();
-    });
+    const s = suiteDashboard(openReadyDashboard, 120_000);
 
     it("importing the cruise file with its station table asks for the unit-less nutrients' units", async () => {
       await expect(s.page.locator('[data-testid="demo-banner"]').count()).resolves.toBe(1);

@@ -1,28 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import {
-  openReadyDashboard,
-  screenshot,
-  selectionStatus,
-  type Session,
-  settle,
-  skipBrowser,
-  stationPixel,
-} from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, selectionStatus, settle, skipBrowser, stationPixel } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 import { changedShare } from "./pixels.ts";
 
 const plotPoint = (id: string) => `[data-panel="MixingPlot"] [data-station="${id}"]`;
 const listButton = (id: string) => `[data-station-id="${id}"]`;
 
 describe.skipIf(skipBrowser)("selection links the map, the station list and the mixing plot both ways", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    s = await openReadyDashboard();
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard();
 
   it("clicking station W05 on the map selects it: status, list, mixing plot and a drawn highlight", async () => {
     const at = await stationPixel(s.page, "W05");

@@ -1,16 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openReadyDashboard, screenshot, settle, skipBrowser, waitForAnalysis, type Session } from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, settle, skipBrowser, waitForAnalysis } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 
 describe.skipIf(skipBrowser)("changing an end-member in the settings re-runs the analysis", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    s = await openReadyDashboard();
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard();
 
   const feRowText = async (): Promise<string> =>
     (await s.page.locator('[data-panel="BehaviourTable"] tr', { hasText: "Fe" }).first().textContent()) ?? "";

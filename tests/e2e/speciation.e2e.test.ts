@@ -1,18 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openReadyDashboard, screenshot, settle, skipBrowser, type Session } from "./browser.ts";
+import { describe, expect, it } from "vitest";
+import { screenshot, settle, skipBrowser } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 
 describe.skipIf(skipBrowser)(
   "speciation panel names its constant sets by their literature and states their limits",
   () => {
-    let s: Session;
-
-    beforeAll(async () => {
-      s = await openReadyDashboard();
-    });
-
-    afterAll(async () => {
-      await s?.close();
-    });
+    const s = suiteDashboard();
 
     it("shows literature-named Fe(III) and Cd sets, the pH scale, the Fe(OH)₃⁰ upper limit and the Davies validity range", async () => {
       const panel = s.page.locator('[data-panel="SpeciationPanel"]');

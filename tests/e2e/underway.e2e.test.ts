@@ -1,17 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import {
-  REPO_ROOT,
-  missingBrowserMessage,
-  openDashboard,
-  screenshot,
-  settle,
-  skipBrowser,
-  waitForAnalysis,
-  waitForMap,
-  type Session,
-} from "./browser.ts";
+import { REPO_ROOT, screenshot, settle, skipBrowser, openReadyDashboard } from "./browser.ts";
+import { suiteDashboard } from "./suite.ts";
 import { changedShare, pixelStats } from "./pixels.ts";
 import { underwayCsvChunks } from "../../bench/fixtures/underwayLog.ts";
 
@@ -25,19 +16,7 @@ function demoChannelLog(): Buffer {
 }
 
 describe.skipIf(skipBrowser)("underway log on the map (headless Chromium)", () => {
-  let s: Session;
-
-  beforeAll(async () => {
-    const missing = missingBrowserMessage();
-    if (missing) throw new Error(missing);
-    s = await openDashboard();
-    await waitForMap(s.page);
-    await waitForAnalysis(s.page);
-  });
-
-  afterAll(async () => {
-    await s?.close();
-  });
+  const s = suiteDashboard(() => openReadyDashboard({ settled: false }));
 
   it("loads a generated 100,000-record log, keeps the page updating while it reads, and draws its points on the map", async () => {
     await settle(s.page);

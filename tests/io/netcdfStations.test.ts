@@ -2,85 +2,41 @@ import { describe, expect, it } from "vitest";
 import { readNetcdfStations } from "../../analysis/io/netcdfStations.ts";
 import { cfTimeToIso, parseCfTimeUnits } from "../../analysis/io/cfTime.ts";
 import { expectWithin } from "../helpers/tolerance.ts";
-import { writeNetcdf3 } from "./helpers/netcdf3Writer.ts";
-import { cfStationVariables } from "./helpers/cfStationVariables.ts";
+import { cfVariable, PRACTICAL_SALINITY, SILICATE_UMOL_L, writeCfStationFile } from "./helpers/cfStationFile.ts";
 
 const FILL = -999;
 
 /** Two stations × three depths, CF orthogonal multidimensional profile layout (CF 1.11 §9.3.1). */
 function profileFile(): Uint8Array {
-  return writeNetcdf3({
-    dims: [
-      { name: "station", size: 2 },
-      { name: "z", size: 3 },
-      { name: "name_strlen", size: 8 },
-    ],
-    attrs: [
-      { name: "Conventions", value: "CF-1.11" },
-      { name: "featureType", value: "profile" },
-    ],
+  const onProfile = ["station", "z"];
+  return writeCfStationFile({
+    featureType: "profile",
+    stations: {
+      names: ["ST01", "ST02"],
+      timeDays: [20089.5, 20090.25],
+      timeUnits: "days since 1970-01-01 00:00:00",
+      latDeg: [45.1, 45.2],
+      lonDeg: [-1.5, -1.4],
+    },
+    depthsM: [0.5, 5, 10],
+    depthType: "float",
     vars: [
-      ...cfStationVariables({
-        names: ["ST01", "ST02"],
-        role: "profile_id",
-        timeDays: [20089.5, 20090.25],
-        timeUnits: "days since 1970-01-01 00:00:00",
-        latDeg: [45.1, 45.2],
-        lonDeg: [-1.5, -1.4],
-      }),
-      {
-        name: "depth",
-        dims: ["z"],
-        type: "float",
-        attrs: [
-          { name: "standard_name", value: "depth" },
-          { name: "units", value: "m" },
-          { name: "positive", value: "down" },
-        ],
-        data: [0.5, 5, 10],
-      },
-      {
-        name: "PSAL",
-        dims: ["station", "z"],
-        type: "float",
-        attrs: [
-          { name: "standard_name", value: "sea_water_practical_salinity" },
-          { name: "units", value: "1" },
-          { name: "_FillValue", type: "float", value: FILL },
-        ],
-        data: [5.2, 12.5, 20.1, 15, FILL, 30.25],
-      },
-      {
-        name: "TEMP",
-        dims: ["station", "z"],
-        type: "float",
-        attrs: [
-          { name: "standard_name", value: "sea_water_temperature" },
-          { name: "units", value: "degree_Celsius" },
-        ],
-        data: [14, 13.5, 13, 12, 11.5, 11],
-      },
-      {
-        name: "silicate",
-        dims: ["station", "z"],
-        type: "double",
-        attrs: [
-          { name: "standard_name", value: "mole_concentration_of_silicate_in_sea_water" },
-          { name: "units", value: "umol/L" },
-        ],
-        data: [80, 60, 40, 30, 20, 5],
-      },
-      {
-        name: "Fe",
-        dims: ["station", "z"],
-        type: "double",
-        attrs: [
-          { name: "long_name", value: "dissolved iron" },
-          { name: "units", value: "nmol/L" },
-          { name: "missing_value", value: -1 },
-        ],
-        data: [120, 90, -1, 50, 40, 10],
-      },
+      cfVariable("PSAL", onProfile, "float", { ...PRACTICAL_SALINITY, fill: FILL }, [5.2, 12.5, 20.1, 15, FILL, 30.25]),
+      cfVariable(
+        "TEMP",
+        onProfile,
+        "float",
+        { standardName: "sea_water_temperature", units: "degree_Celsius" },
+        [14, 13.5, 13, 12, 11.5, 11],
+      ),
+      cfVariable("silicate", onProfile, "double", SILICATE_UMOL_L, [80, 60, 40, 30, 20, 5]),
+      cfVariable(
+        "Fe",
+        onProfile,
+        "double",
+        { longName: "dissolved iron", units: "nmol/L", missing: -1 },
+        [120, 90, -1, 50, 40, 10],
+      ),
     ],
   });
 }

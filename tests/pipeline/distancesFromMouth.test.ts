@@ -78,6 +78,25 @@ describe("distance axis origin from salinity (common practice: the mouth is wher
     expect(kept.constituents[0]!.endmembers!.sea.stationIds.some((id) => id.startsWith("S"))).toBe(true);
   });
 
+  it("a side bay saltier than the entrance (evaporation in a dry season, one survey): the mouth stays at the end of the river's steep gradient, not at the side bay's salinity maximum", () => {
+    // the side bay's head a little fresher (0–5 km), its saltiest water at 10 km, freshening to 32.1 by the entrance
+    const rows: Array<[string, number, number]> = [
+      ["H0", 0, 33.4],
+      ["H1", 5, 33.9],
+    ];
+    for (const [k, sal] of [34.4, 33.4, 32.6, 32.1].entries()) rows.push([`S${k + 1}`, 10 * (k + 1), sal]);
+    rows.push(["M", 50, 32.0]); // entrance
+    for (let k = 1; k <= 10; k++) rows.push([`R${k}`, 50 + 10 * k, Math.max(0.1, 32.0 - 3.5 * k)]);
+    const o = distanceOrigin(rows.map((r) => [r[1], r[2]] as const));
+    expect(o).toMatchObject({ kind: "interior", maxKm: 10, mouthKm: 50, topKm: 40, riverSide: 1 });
+    const r = distancesFromMouth([survey("dry", rows)]);
+    const st = byId(r.surveys[0]!);
+    expect(st.get("M")!.distanceKm).toBe(0);
+    expectWithin(st.get("R10")!.distanceKm, 100, 1e-9, "freshest station");
+    for (const id of ["H0", "H1", "S1", "S2", "S3", "S4"]) expect(st.get(id)!.distanceKm, id).toBeUndefined();
+    expect(r.notice!.message).toContain("saltier than the bay entrance");
+  });
+
   it("salinity rising with distance on a simple axis: reversed (km = max − d)", () => {
     const rows: Array<[string, number, number]> = [0, 10, 20, 30, 40].map((km, i) => [`X${i}`, km, 2 + 7 * i]);
     const r = distancesFromMouth([survey("rev", rows)]);

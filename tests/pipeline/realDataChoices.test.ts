@@ -104,14 +104,20 @@ describe("mouth from salinity (Spearman 1904 rank correlation)", () => {
 });
 
 describe("centerline from stations", () => {
-  it("orders stations up the salinity gradient, leaves a fresher side basin off the line, mouth at the saltiest end", () => {
+  it("orders stations up the salinity gradient, leaves a fresher side basin off the line, and cuts a saltier basin that turns off the axis past the sea end; mouth at the line's end", () => {
     const st = survey().stations.map((s) => ({ id: s.id, lonLat: s.lonLat, salinity: s.salinity.value }));
     // a side basin fresher than the sea end, beside the middle of the channel
     st.push({ id: "X", lonLat: [0.25, 0.3], salinity: 20 });
     const line = centerlineFromStations(st)!;
     expect(line.properties.stationIds[0]).toBe("C0");
-    expect(line.properties.stationIds.at(-1)).toBe("B2");
+    // the basin B0–B2 (20 km north of the sea end, salinity 31–33) is a side bay beyond the mouth, not the channel
+    expect(line.properties.stationIds.at(-1)).toBe("C10");
+    expect(line.properties.pastMouth).toEqual(["B0", "B1", "B2"]);
     expect(line.properties.leftOut).toContain("X");
+    // without the basin the line runs to the saltiest station
+    const channelOnly = centerlineFromStations(st.filter((s) => !s.id.startsWith("B")))!;
+    expect(channelOnly.properties.stationIds.at(-1)).toBe("C10");
+    expect(channelOnly.properties.pastMouth).toBeUndefined();
     expect(line.properties.mouth).toBe("end");
     const net = buildChannelNetwork(line);
     expect(net.mouthSource).toBe("end");

@@ -11,8 +11,13 @@ import { basename, join } from "node:path";
 import Papa from "papaparse";
 import { main } from "../../cli/main.ts";
 import { analyzeInputs, readInputs, type InputChoices, type WorkspaceSettings } from "../../analysis/index.ts";
-import { writeNetcdf3 } from "../io/helpers/netcdf3Writer.ts";
-import { cfStationVariables } from "../io/helpers/cfStationVariables.ts";
+import {
+  cfVariable,
+  PRACTICAL_SALINITY,
+  SILICATE_UMOL_L,
+  writeCfStationFile,
+  type CfVariableMeta,
+} from "../io/helpers/cfStationFile.ts";
 import { expectWithin } from "../helpers/tolerance.ts";
 
 const DRAWS = 200;
@@ -90,55 +95,28 @@ function netcdfSurvey(): string {
   const FILL = -999;
   const num = (t: string | undefined) => (t !== undefined && /^[\d.+-]+$/.test(t.trim()) ? Number(t) : FILL);
   const days = rows.map((r) => Date.parse(r["date_time"]!) / 86_400_000);
-  const v = (name: string, column: string, attrs: Array<{ name: string; value: string }>) => ({
-    name,
-    dims: ["station", "z"],
-    type: "double" as const,
-    attrs: [...attrs, { name: "_FillValue", type: "double" as const, value: FILL }],
-    data: rows.map((r) => num(r[column])),
-  });
-  const bytes = writeNetcdf3({
-    dims: [
-      { name: "station", size: rows.length },
-      { name: "z", size: 1 },
-      { name: "name_strlen", size: 8 },
-    ],
-    attrs: [
-      { name: "Conventions", value: "CF-1.11" },
-      { name: "featureType", value: "profile" },
-    ],
+  const v = (name: string, column: string, meta: CfVariableMeta) =>
+    cfVariable(
+      name,
+      ["station", "z"],
+      "double",
+      { ...meta, fill: FILL },
+      rows.map((r) => num(r[column])),
+    );
+  const bytes = writeCfStationFile({
+    featureType: "profile",
+    stations: {
+      names: rows.map((r) => r["station"]!),
+      timeDays: days,
+      timeUnits: "days since 1970-01-01 00:00:00",
+      latDeg: rows.map((r) => Number(r["latitude"])),
+      lonDeg: rows.map((r) => Number(r["longitude"])),
+    },
+    depthsM: [1],
     vars: [
-      ...cfStationVariables({
-        names: rows.map((r) => r["station"]!),
-        role: "profile_id",
-        timeDays: days,
-        timeUnits: "days since 1970-01-01 00:00:00",
-        latDeg: rows.map((r) => Number(r["latitude"])),
-        lonDeg: rows.map((r) => Number(r["longitude"])),
-      }),
-      {
-        name: "depth",
-        dims: ["z"],
-        type: "double",
-        attrs: [
-          { name: "standard_name", value: "depth" },
-          { name: "units", value: "m" },
-          { name: "positive", value: "down" },
-        ],
-        data: [1],
-      },
-      v("PSAL", "salinity", [
-        { name: "standard_name", value: "sea_water_practical_salinity" },
-        { name: "units", value: "1" },
-      ]),
-      v("Mn", "Mn (nmol/L)", [
-        { name: "long_name", value: "dissolved manganese" },
-        { name: "units", value: "nmol/L" },
-      ]),
-      v("silicate", "Si (µmol/L)", [
-        { name: "standard_name", value: "mole_concentration_of_silicate_in_sea_water" },
-        { name: "units", value: "umol/L" },
-      ]),
+      v("PSAL", "salinity", PRACTICAL_SALINITY),
+      v("Mn", "Mn (nmol/L)", { longName: "dissolved manganese", units: "nmol/L" }),
+      v("silicate", "Si (µmol/L)", SILICATE_UMOL_L),
     ],
   });
   const p = join(dir, "wet.nc");

@@ -85,3 +85,8 @@ export function attachBrush(svg: SVGSVGElement, handlers: () => BrushHandlers): 
     svg.removeEventListener("pointerup", up);
   };
 }
+
+/** The survey of the mark under an event's target (its `data-survey`), or null. */
+export function surveyUnder(target: EventTarget | null): string | null {
+  return (target as Element | null)?.closest?.("[data-survey]")?.getAttribute("data-survey") ?? null;
+}

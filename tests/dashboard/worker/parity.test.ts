@@ -14,8 +14,7 @@ import { createWorkerApi, type WorkerApi } from "../../../dashboard/src/worker/a
 import type { AnalysisEvent, AnalysisJob, SourceFile, TextFile } from "../../../dashboard/src/worker/protocol.ts";
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
 import { readSurveyText, type SurveyAnalysis } from "../../../analysis/index.ts";
-import { writeNetcdf3 } from "../../io/helpers/netcdf3Writer.ts";
-import { cfStationVariables } from "../../io/helpers/cfStationVariables.ts";
+import { cfVariable, PRACTICAL_SALINITY, writeCfStationFile } from "../../io/helpers/cfStationFile.ts";
 
 const demo = (p: string) => readFileSync(new URL(`../../../data-demo/${p}`, import.meta.url), "utf8");
 const dir = mkdtempSync(join(tmpdir(), "brackline-parity-"));
@@ -52,41 +51,19 @@ function wetGeoJson(): string {
 function wetNetcdf(): Uint8Array {
   const rows = wetRows();
   const num = (k: string) => rows.map((r) => Number(r[k]));
-  const double = (name: string, attrs: Array<{ name: string; value: string }>, data: number[]) => ({
-    name,
-    dims: ["station"],
-    type: "double" as const,
-    attrs,
-    data,
-  });
-  return writeNetcdf3({
-    dims: [
-      { name: "station", size: rows.length },
-      { name: "name_strlen", size: 8 },
-    ],
-    attrs: [
-      { name: "Conventions", value: "CF-1.11" },
-      { name: "featureType", value: "timeSeries" },
-    ],
+  return writeCfStationFile({
+    featureType: "timeSeries",
+    stations: {
+      names: rows.map((r) => r["station"]!),
+      timeDays: rows.map((_, i) => 0.4 + i * 0.01),
+      timeUnits: "days since 2025-03-18 00:00:00",
+      latDeg: num("latitude"),
+      lonDeg: num("longitude"),
+    },
     vars: [
-      ...cfStationVariables({
-        names: rows.map((r) => r["station"]!),
-        role: "timeseries_id",
-        timeDays: rows.map((_, i) => 0.4 + i * 0.01),
-        timeUnits: "days since 2025-03-18 00:00:00",
-        latDeg: num("latitude"),
-        lonDeg: num("longitude"),
-      }),
-      double(
-        "PSAL",
-        [
-          { name: "standard_name", value: "sea_water_practical_salinity" },
-          { name: "units", value: "1" },
-        ],
-        num("salinity"),
-      ),
-      double("Mn", [{ name: "units", value: "nmol/L" }], num("Mn (nmol/L)")),
-      double("Ba", [{ name: "units", value: "nmol/L" }], num("Ba (nmol/L)")),
+      cfVariable("PSAL", ["station"], "double", PRACTICAL_SALINITY, num("salinity")),
+      cfVariable("Mn", ["station"], "double", { units: "nmol/L" }, num("Mn (nmol/L)")),
+      cfVariable("Ba", ["station"], "double", { units: "nmol/L" }, num("Ba (nmol/L)")),
     ],
   });
 }
