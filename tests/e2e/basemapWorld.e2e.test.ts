@@ -15,7 +15,7 @@ import {
   type Session,
 } from "./browser.ts";
 import { suiteDashboard } from "./suite.ts";
-import { BAY_CRUISE_2018, BAY_DIR, BAY_STATIONS, BAY_UNITLESS, bayFileInput, bayFilesPresent } from "./bayFiles.ts";
+import { BAY_DIR, bayFilesPresent, importBayCruise2018 } from "./bayFiles.ts";
 import { decodePng } from "./pixels.ts";
 
 if (!bayFilesPresent) console.warn(`basemapWorld.e2e: skipped, ${BAY_DIR} is absent`);
@@ -103,16 +103,7 @@ describe.skipIf(skipBrowser || !bayFilesPresent)("world land around San Francisc
   });
 
   it("importing the cruise export and its station table draws Natural Earth land around the bay", async () => {
-    await s.page
-      .locator('[data-testid="import-input"]')
-      .setInputFiles([await bayFileInput(BAY_CRUISE_2018), await bayFileInput(BAY_STATIONS)]);
-    const dialog = s.page.locator('[data-testid="mapping-dialog"][open]');
-    await dialog.waitFor({ timeout: 60_000 });
-    for (const header of BAY_UNITLESS) {
-      const unit = dialog.locator(`tr[data-header="${header}"] input[aria-label^="Unit"]`);
-      if ((await unit.count()) === 0) continue;
-      if ((await unit.inputValue()).trim() === "") await unit.fill("µmol/L");
-    }
+    const dialog = await importBayCruise2018(s.page);
     await dialog.locator('[data-testid="mapping-confirm"]').click();
     await s.page.locator('[data-testid="import-report"]').waitFor({ timeout: 60_000 });
     await s.page.locator('[data-testid="data-toggle"]').click();

@@ -4,6 +4,7 @@
 import { existsSync } from "node:fs";
 import { readFile } from "node:fs/promises";
 import { join } from "node:path";
+import type { Locator, Page } from "playwright-core";
 import { REPO_ROOT } from "./browser.ts";
 
 export const BAY_DIR = join(REPO_ROOT, "..", "shared", "data", "usgs-sfbay-2016-2022");
@@ -19,4 +20,23 @@ export const BAY_UNITLESS = ["Silicate", "Nitrate_+_Nitrite", "Phosphate", "Ammo
 /** One of the bay files as a playwright file-input payload. */
 export async function bayFileInput(name: string): Promise<{ name: string; mimeType: string; buffer: Buffer }> {
   return { name, mimeType: "text/csv", buffer: await readFile(join(BAY_DIR, name)) };
+}
+
+/**
+ * Drops the 2018 export and the station table on the import input, as a user would, waits for the
+ * mapping dialog and gives every unit-less nutrient column µmol/L (SOURCE.md); returns the open
+ * dialog, not yet confirmed.
+ */
+export async function importBayCruise2018(page: Page): Promise<Locator> {
+  await page
+    .locator('[data-testid="import-input"]')
+    .setInputFiles([await bayFileInput(BAY_CRUISE_2018), await bayFileInput(BAY_STATIONS)]);
+  const dialog = page.locator('[data-testid="mapping-dialog"][open]');
+  await dialog.waitFor({ timeout: 60_000 });
+  for (const header of BAY_UNITLESS) {
+    const unit = dialog.locator(`tr[data-header="${header}"] input[aria-label^="Unit"]`);
+    if ((await unit.count()) === 0) continue;
+    if ((await unit.inputValue()).trim() === "") await unit.fill("µmol/L");
+  }
+  return dialog;
 }

@@ -2,7 +2,7 @@ import { readFile } from "node:fs/promises";
 import { describe, expect, it } from "vitest";
 import { openReadyDashboard, screenshot, settle, skipBrowser, waitForAnalysis } from "./browser.ts";
 import { suiteDashboard } from "./suite.ts";
-import { BAY_CRUISE_2018, BAY_DIR, BAY_STATIONS, BAY_UNITLESS, bayFileInput, bayFilesPresent } from "./bayFiles.ts";
+import { BAY_DIR, bayFilesPresent, importBayCruise2018 } from "./bayFiles.ts";
 
 if (!bayFilesPresent) console.warn(`realData.e2e: skipped, ${BAY_DIR} is absent`);
 
@@ -16,16 +16,7 @@ describe.skipIf(skipBrowser || !bayFilesPresent)(
 
     it("importing the cruise file with its station table asks for the unit-less nutrients' units", async () => {
       await expect(s.page.locator('[data-testid="demo-banner"]').count()).resolves.toBe(1);
-      await s.page
-        .locator('[data-testid="import-input"]')
-        .setInputFiles([await bayFileInput(BAY_CRUISE_2018), await bayFileInput(BAY_STATIONS)]);
-      const dialog = s.page.locator('[data-testid="mapping-dialog"][open]');
-      await dialog.waitFor({ timeout: 60_000 });
-      for (const header of BAY_UNITLESS) {
-        const unit = dialog.locator(`tr[data-header="${header}"] input[aria-label^="Unit"]`);
-        if ((await unit.count()) === 0) continue;
-        if ((await unit.inputValue()).trim() === "") await unit.fill("µmol/L");
-      }
+      const dialog = await importBayCruise2018(s.page);
       // Oxygen is not a mixing tracer: given its unit it is drawn along the channel without end-members.
       await dialog.locator('tr[data-header="Oxygen"] input[aria-label^="Unit"]').fill("mg/L");
       await screenshot(s.page, "realdata-1-mapping-dialog");
