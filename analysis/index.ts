@@ -392,7 +392,7 @@ export {
   NO_DISCHARGE_HINT,
   type ArchiveOptions,
 } from "./archive/summarizeArchive.ts";
-export { buildSeriesPoints, groupRows, isoDay, zoneCentreKm, type DischargeSource } from "./archive/buildSeries.ts";
+export { buildSeriesPoints, groupRows, isoDay, zoneCentreKm } from "./archive/buildSeries.ts";
 export { quantityRelations, seasonTest, type QuantityPoint } from "./archive/quantityRelations.ts";
 export { dischargeRelation, pWords } from "./archive/dischargeRelation.ts";
 export { yearOnYear, type YearValue } from "./archive/yearOnYear.ts";
@@ -417,11 +417,9 @@ export {
   type DischargeLookup,
 } from "./archive/dischargeTable.ts";
 export {
-  joinDischargeTable,
   dischargeTableReport,
   DISCHARGE_JOIN_RULE,
   DISCHARGE_JOIN_MAX_DAYS,
-  type DischargeJoin,
   type DischargeTableReport,
 } from "./archive/dischargeJoin.ts";
 export {

@@ -9,12 +9,6 @@ import { spreadOf } from "./groupStats.ts";
 import { MONTH_LABELS, monthOfDate, seasonOf, type Season } from "./seasons.ts";
 import type { GroupRow, IntrusionPoint, SeriesPoint } from "./types.ts";
 
-/** Discharge given to a survey from outside its file, with where it came from. */
-export interface DischargeSource {
-  dischargeM3s: number;
-  source: string;
-}
-
 /** The date-like text of a survey as YYYY-MM-DD when it starts with one. */
 export function isoDay(date: string | undefined): string | undefined {
   return date !== undefined && /^\d{4}-\d{2}-\d{2}/.test(date) ? date.slice(0, 10) : undefined;
@@ -31,14 +25,13 @@ export function zoneCentreKm(p: SeriesPoint): number | undefined {
  * but not its C*₀ (warning).
  *
  * @param analyses analysed surveys, in any order (points come out in date order)
- * @param seasons seasons for labelling points
- * @param discharge discharge by survey name overriding the surveys' own, with its source
+ * @param seasons seasons for labelling points (each survey's discharge is the one its analysis used,
+ *   decided by surveyDischarge, with its statement)
  * @returns series points by constituent, intrusion points, warnings
  */
 export function buildSeriesPoints(
   analyses: readonly ComparableSurvey[],
   seasons: readonly Season[],
-  discharge: Readonly<Record<string, DischargeSource>> = {},
 ): {
   byConstituent: Map<string, { unit: string; points: SeriesPoint[] }>;
   intrusion: IntrusionPoint[];
@@ -52,11 +45,8 @@ export function buildSeriesPoints(
     const f = a.survey;
     const date = isoDay(f.startDate);
     const season = date ? seasonOf(date, seasons) : undefined;
-    const given = discharge[f.name];
-    const q = given?.dischargeM3s ?? f.riverDischargeM3s;
-    const qSource =
-      given?.source ??
-      (f.riverDischargeM3s !== undefined ? (f.dischargeSource?.statement ?? "the survey's own discharge") : undefined);
+    const q = f.riverDischargeM3s;
+    const qSource = q !== undefined ? (f.dischargeSource?.statement ?? "the survey's own discharge") : undefined;
     const common = {
       survey: f.name,
       ...(date ? { date } : {}),

@@ -1,7 +1,7 @@
 import type { ComparableSurvey } from "../compare/types.ts";
 import { dischargeScaling } from "../compare/dischargeScaling.ts";
 import { classWords, constituentWords } from "../report/wording.ts";
-import { buildSeriesPoints, groupRows, zoneCentreKm, type DischargeSource } from "./buildSeries.ts";
+import { buildSeriesPoints, groupRows, zoneCentreKm } from "./buildSeries.ts";
 import { dischargeRelation } from "./dischargeRelation.ts";
 import { quantityRelations, type QuantityPoint } from "./quantityRelations.ts";
 import { DEFAULT_SEASONS, type Season } from "./seasons.ts";
@@ -17,8 +17,6 @@ export const NO_DISCHARGE_HINT: Readonly<Record<FrontEnd, string>> = {
 export interface ArchiveOptions {
   /** Seasons for summaries and the season test (default: meteorological seasons). */
   seasons?: readonly Season[];
-  /** Discharge by survey name, overriding the surveys' own, with its source (e.g. a table lookup). */
-  discharge?: Readonly<Record<string, DischargeSource>>;
 }
 
 /** How the archive's intervals, fits and tests are obtained, shown with every archive result. */
@@ -100,7 +98,7 @@ export function summarizeArchive(analyses: readonly ComparableSurvey[], options:
   if (!Array.isArray(analyses) || analyses.length === 0)
     throw new RangeError(`summarizeArchive: analyses must hold at least 1 survey, got ${analyses?.length}`);
   const seasons = options.seasons ?? DEFAULT_SEASONS;
-  const { byConstituent, intrusion, warnings } = buildSeriesPoints(analyses, seasons, options.discharge);
+  const { byConstituent, intrusion, warnings } = buildSeriesPoints(analyses, seasons);
   const series = [...byConstituent.entries()].map(([name, e]) => constituentSeries(name, e.unit, e.points, seasons));
   const s0 = intrusion[0]?.saltIntrusionSalinity ?? 2;
   const withL = intrusion.filter((p) => p.saltIntrusionKm !== undefined);

@@ -94,20 +94,19 @@ describe("summarizeArchive() on seeded synthetic archives (invented data)", () =
     expect(a.warnings.map((w) => w.code)).toContain("no-discharge");
   });
 
-  it("a discharge table lookup overrides the survey's own discharge and names its source", () => {
+  it("each point carries the discharge the survey's analysis used and where it came from (dischargeSource)", () => {
     const surveys = syntheticArchive(STRONG).slice(0, 3);
-    const a = summarizeArchive(surveys, {
-      discharge: {
-        [surveys[0]!.survey.name]: {
-          dischargeM3s: 42,
-          source: "discharge of 2016-01-14 (1 day before the survey) from q.csv, row 2",
-        },
+    const statement = "discharge of 2016-01-14 (1 day before the survey) from q.csv, row 2";
+    surveys[0] = {
+      ...surveys[0]!,
+      survey: {
+        ...surveys[0]!.survey,
+        riverDischargeM3s: 42,
+        dischargeSource: { origin: "table", statement, tableDate: "2016-01-14", daysBefore: 1 },
       },
-    });
-    expect(a.series[0]!.points[0]).toMatchObject({
-      dischargeM3s: 42,
-      dischargeSource: expect.stringContaining("q.csv"),
-    });
+    };
+    const a = summarizeArchive(surveys);
+    expect(a.series[0]!.points[0]).toMatchObject({ dischargeM3s: 42, dischargeSource: statement });
     expect(a.intrusion[0]!.dischargeM3s).toBe(42);
   });
 

@@ -9,7 +9,6 @@ import {
   createWorkspace,
   DEFAULT_SEASONS,
   DISCHARGE_JOIN_RULE,
-  joinDischargeTable,
   parseSeasons,
   readDischargeTable,
   surveyDischarge,
@@ -69,13 +68,12 @@ describe("discharge table in the archive view (invented flows)", () => {
     expect(report.missing).toEqual([]);
     expect(report.issues).toHaveLength(1);
     expect(report.issues[0]).toMatchObject({ file: "invented-flows.csv", column: "date", value: "2016-13-01" });
-    // Same numbers as the CLI's table lookup: readDischargeTable + joinDischargeTable.
-    const cli = joinDischargeTable(
-      table,
-      noFlow.map((a) => a.survey),
-    );
+    // Same numbers as the CLI's: each survey's discharge by surveyDischarge with the table.
     const points = answer.summary!.intrusion;
-    for (const p of points) expect(p.dischargeM3s).toBe(cli.discharge[p.survey]!.dischargeM3s);
+    for (const p of points)
+      expect(p.dischargeM3s).toBe(
+        surveyDischarge(noFlow.find((a) => a.survey.name === p.survey)!.survey, { table })!.dischargeM3s,
+      );
     // 2016-01-15 (a Friday): the weekly rows fall on Tuesdays from 2015-12-01, so 2016-01-12 is used (3 days before).
     const jan = answer.summary!.series[0]!.points.find((p) => p.date === "2016-01-15")!;
     expect(jan.dischargeSource).toMatch(
@@ -86,16 +84,12 @@ describe("discharge table in the archive view (invented flows)", () => {
     expect(archiveOf(held, DEFAULT_SEASONS, { name: "invented-flows.csv", text }).discharge!.joined).toBe(0);
   });
 
-  it("joinDischargeTable() names surveys with no row within 31 days before them", () => {
+  it("surveyDischarge() with a table leaves surveys with no row within 31 days before them without one", () => {
     const table = readDischargeTable("date,Q m3/s\n2016-03-01,10\n", "invented.csv");
-    const j = joinDischargeTable(table, [
-      { name: "a", startDate: "2016-03-20" },
-      { name: "b", startDate: "2016-02-20" },
-      { name: "c", startDate: "2016-05-01" },
-      { name: "d" },
-    ]);
-    expect(Object.keys(j.discharge)).toEqual(["a"]);
-    expect(j.missing).toEqual(["b", "c", "d"]);
+    const q = (name: string, startDate?: string) =>
+      surveyDischarge({ name, ...(startDate ? { startDate } : {}) }, { table })?.dischargeM3s;
+    expect(q("a", "2016-03-20")).toBe(10);
+    expect([q("b", "2016-02-20"), q("c", "2016-05-01"), q("d")]).toEqual([undefined, undefined, undefined]);
   });
 });
 
