@@ -434,7 +434,6 @@ export {
   percentChangeSeriesSvg,
   channelTimeStripSvg,
   dischargeScatterSvg,
-  decimalYear,
   seasonColor,
 } from "./archive/archiveFigures.ts";
 export { dayMs, paddedTimeDomain, timeTicks } from "./archive/timeTicks.ts";

@@ -22,14 +22,6 @@ function timeFrame(
   return { f, ticks: timeTicks(domain, nTicks).map((t) => ({ value: t.ms, label: t.label })) };
 }
 
-/** Date YYYY-MM-DD as a decimal year (mid-day). */
-export function decimalYear(date: string): number {
-  const y = Number(date.slice(0, 4));
-  const start = Date.UTC(y, 0, 1);
-  const days = (Date.UTC(y + 1, 0, 1) - start) / 86_400_000;
-  return y + ((Date.parse(date.slice(0, 10)) - start) / 86_400_000 + 0.5) / days;
-}
-
 /** Colour of a season by its position in the season list (grey when in no season). */
 export function seasonColor(season: string | undefined, seasons: readonly string[]): string {
   const i = season === undefined ? -1 : seasons.indexOf(season);

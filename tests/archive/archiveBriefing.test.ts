@@ -4,9 +4,7 @@ import { renderBriefingHtml } from "../../analysis/report/renderHtml.ts";
 import { summarizeArchive } from "../../analysis/archive/summarizeArchive.ts";
 import { archiveName } from "../../analysis/archive/archiveSection.ts";
 import { archiveTableRows, ARCHIVE_TABLE_COLUMNS } from "../../analysis/archive/archiveTable.ts";
-import { decimalYear } from "../../analysis/archive/archiveFigures.ts";
 import { syntheticArchive } from "./helpers/syntheticArchive.ts";
-import { expectWithin } from "../helpers/tolerance.ts";
 
 const TRUTH = { pctAt1000: -30, pctPerDecade: 20, pctNoiseSd: 5, l1000Km: 60, exponent: -0.3, lNoiseSd: 0.05 };
 
@@ -58,9 +56,4 @@ describe("archive long table", () => {
     expect(Number(pc[0]![10])).toBeLessThan(Number(pc[0]![9]));
     expect(rows.filter((r) => String(r[7]).startsWith("salt_intrusion"))).toHaveLength(2);
   });
-});
-
-it("decimalYear() puts mid-year near .5 and 1 January at the start (common practice)", () => {
-  expectWithin(decimalYear("2019-01-01"), 2019 + 0.5 / 365, 1e-9, "1 Jan");
-  expectWithin(decimalYear("2020-07-02"), 2020.5, 0.002, "2 Jul 2020 (leap year)");
 });
