@@ -26,6 +26,7 @@ import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
 import { fitQuarticExtension, riverModelSpread } from "./riverExtension.ts";
 import { coarseExtrapolationWarning } from "./riverReference.ts";
+import { reactionExtent } from "./reactionExtent.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -233,7 +234,19 @@ export function analyzeShape(p: ShapeInput): {
       river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
     cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
   }
-  if (!override) warnings.push(...coarseExtrapolationWarning(used, tp, river, riverModel, unit));
+  // How far landward the stations show the reaction (lack-of-fit of the extended seaward line, reactionExtent.ts).
+  const extent =
+    tangent.method === "segment"
+      ? reactionExtent(
+          x,
+          conc,
+          used.map((s) => s.sigma * scatter),
+          tp,
+          Math.min(tp.breakAveraged ?? tp.breakSalinity, bs.breakSalinity?.[0] ?? Number.POSITIVE_INFINITY),
+        )
+      : undefined;
+  if (!override)
+    warnings.push(...coarseExtrapolationWarning(used, tp, river, riverModel, unit, extent?.reactionStations));
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
@@ -361,12 +374,19 @@ export function analyzeShape(p: ShapeInput): {
   const rD2 = Float64Array.from(rGrid, (s) => twoPhaseAt(tp, s)[2]);
   const rp = rateProfile(rGrid, rD2, sr, o, cStar, river.conc);
   warnings.push(...rp.warnings);
-  const breakEst =
+  let breakEst =
     segStart !== undefined ? estimateOf(tp.breakAveraged ?? tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
+  // The break search needs 4 stations landward of a break: where the interval reaches that limit, the
+  // replicates cannot place the break farther landward, and the interval is extended down to the lowest
+  // break the stations do not reject (reactionExtent.ts).
+  const censored = !!breakEst && !!extent?.atLandwardLimit && extent.lowestBreak < breakEst.lower;
+  if (breakEst && censored) breakEst = { ...breakEst, lower: extent!.lowestBreak };
   if (breakEst && breakEst.upper - breakEst.lower > 2 * BREAK_GOAL_S)
     warnings.push({
       code: "break-uncertain",
-      message: `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)} (95 %), wider than ±${BREAK_GOAL_S}: the curvature fades below the analytical precision there. C*₀ and its interval include this uncertainty; the "conservative beyond" salinity does not have that precision.`,
+      message: censored
+        ? `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)}: the stations between S ${extent!.lowestBreak.toFixed(1)} and the fitted break also lie on the seaward line, and with so few stations at low salinity the curve fit cannot place the break landward of S ${breakEst.value.toFixed(1)}. The reaction may end anywhere in that range; the break, the reaction zone and the maximum are not located more precisely, and C₀ (extrapolated along the fitted curve) may be biased. Stations at low salinity would settle it.`
+        : `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)} (95 %), wider than ±${BREAK_GOAL_S}: the curvature fades below the analytical precision there. C*₀ and its interval include this uncertainty; the "conservative beyond" salinity does not have that precision.`,
     });
   const verdict = verdictOf(cls, percent, effective, unit, warnings);
   const band = (arr: number[]): number[] =>
