@@ -20,7 +20,7 @@ describe("between-break spread (Akaike-weighted profile over breaks, model-avera
     const s = breakModelSpread(x, y, w, fit, 0, "cubic")!;
     expectWithin(s.effective, 0, 1e-6, "C*₀ spread on an exact cubic hinge");
     expectWithin(s.percent, 0, 1e-6, "% change spread on an exact cubic hinge");
-    expectWithin(breakModelSpread(x, y, w, { ...fit, linear: true }) === undefined ? 1 : 0, 1, 0, "line: undefined");
+    expectWithin(breakModelSpread(x, y, w, { ...fit, linear: true }, 0) === undefined ? 1 : 0, 1, 0, "line: undefined");
   });
 
   it("grows where the curvature fades over a long range (removal ending at S 20, 2 % noise: a flat profile over breaks) and is smaller for a sharp end at S 5", () => {
