@@ -403,6 +403,14 @@ export function analyzeShape(p: ShapeInput): {
   // break the stations do not reject (reactionExtent.ts).
   const censored = !!breakEst && !!extent?.atLandwardLimit && extent.lowestBreak < breakEst.lower;
   if (breakEst && censored) breakEst = { ...breakEst, lower: extent!.lowestBreak };
+  // Below the search's landward limit the maximum's place is the fitted curve's, not the stations': its
+  // interval reaches down to the station landward of the highest one (where a single peak must begin).
+  if (censored && maximum) {
+    let top = 0;
+    for (let i = 1; i < n; i++) if (used[i]!.conc > used[top]!.conc) top = i;
+    const floor = used[Math.max(0, top - 1)]!.salinity;
+    if (maximum.salinity.lower > floor) maximum = { ...maximum, salinity: { ...maximum.salinity, lower: floor } };
+  }
   if (breakEst && breakEst.upper - breakEst.lower > 2 * BREAK_GOAL_S)
     warnings.push({
       code: "break-uncertain",
