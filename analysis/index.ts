@@ -96,7 +96,7 @@ export type { NaturalSpline, SplinePoint } from "./stats/naturalSpline.ts";
 export { interval95, percentileSorted } from "./stats/percentile.ts";
 export { intervalBc95 } from "./stats/biasCorrectedInterval.ts";
 export { bootstrapBiasCorrected } from "./stats/bootstrapBias.ts";
-export { seededNormal } from "./stats/seededNormal.ts";
+export { NormalDeviates, seededNormal } from "./stats/seededNormal.ts";
 // --- end mixing ---
 
 // --- seawater ---

@@ -16,7 +16,7 @@ import { salinityGrid, TIE_FRACTION } from "./curveFit.ts";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { runBootstrap } from "./bootstrapRun.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
-import { fitTwoPhaseAtBreak, twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
+import { alternativeFit, fitTwoPhaseAtBreak, twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
 import { verdictOf } from "./verdict.ts";
 import { classify } from "./classify.ts";
 import { dilutionAt } from "./dilutionLine.ts";
@@ -138,9 +138,10 @@ export function analyzeShape(p: ShapeInput): {
   const x = Float64Array.from(used, (s) => s.salinity);
   // Replicates are drawn around the two-phase fit; when the straight line was kept, around the best
   // two-phase alternative it was tested against, so each replicate re-runs the selection (Efron 2014).
-  const centre: TwoPhaseFit = tp.linear && tp.alternative ? { ...tp, ...tp.alternative, linear: false } : tp;
-  const conc = used.map((s) => s.conc);
-  const wts = used.map((s) => 1 / s.sigma ** 2);
+  const centre: TwoPhaseFit = tp.linear && tp.alternative ? alternativeFit(tp, tp.alternative) : tp;
+  // Typed arrays, as everywhere the fits run (one array kind keeps V8's compiled fitting code).
+  const conc = Float64Array.from(used, (s) => s.conc);
+  const wts = Float64Array.from(used, (s) => 1 / s.sigma ** 2);
   // River value at S_ref from the quartic extension of the landward phase (riverExtension.ts) when the
   // stations allow, recomputed in every replicate. The replicates stay drawn around the cubic two-phase
   // fit: drawing them around the quartic curve made the C*₀ intervals cover less (calibration).

@@ -4,9 +4,20 @@ import { mergeKnotResponses, mergeKnots } from "../stats/knotData.ts";
 import { evaluatePlannedGrid, planSplineGrid } from "../stats/splineGridPlan.ts";
 import { interval95, percentileSelect } from "../stats/percentile.ts";
 import { intervalBc95 } from "../stats/biasCorrectedInterval.ts";
-import { seededNormal } from "../stats/seededNormal.ts";
-import { fitTwoPhase, seawardLine, twoPhaseDesign, twoPhaseMaximum, twoPhaseValue } from "./twoPhase.ts";
-import { zoneFromCurve } from "./zoneAndMaximum.ts";
+import { NormalDeviates } from "../stats/seededNormal.ts";
+import type { NaturalSpline } from "../stats/naturalSpline.ts";
+import type { PreparedSmoothingSpline } from "../stats/smoothingSpline.ts";
+import type { SplineGridPlan } from "../stats/splineGridPlan.ts";
+import {
+  fitTwoPhase,
+  newTwoPhaseFit,
+  twoPhaseDesign,
+  twoPhaseMaximum,
+  twoPhaseValue,
+  type TwoPhaseDesign,
+  type TwoPhaseFit,
+} from "./twoPhase.ts";
+import { zoneInto, type ReactionZoneBounds } from "./zoneAndMaximum.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
@@ -85,77 +96,201 @@ export interface BootstrapResult {
  *   re-run in each replicate; from memory).
  */
 export function runBootstrap(b: BootstrapInput): BootstrapResult {
-  const n = b.x.length;
-  const G = b.grid.length;
-  const D = b.draws;
-  const z = seededNormal(b.seed);
-  const nan = (): Float64Array => new Float64Array(D).fill(Number.NaN);
-  const eff = nan();
-  const c0 = nan();
-  const pct = nan();
-  const zLo = nan();
-  const zHi = nan();
-  const mS = nan();
-  const mX = nan();
-  const brk = nan();
-  // Replicate curves column by column (curves[g·D + d]): the band's percentiles read one contiguous column.
-  const curves = new Float64Array(D * G).fill(Number.NaN);
-  const ys = new Float64Array(n);
-  const ws = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
-  const splineWs = {
-    knots: new Float64Array(n),
-    values: new Float64Array(n),
-    secondDerivs: new Float64Array(n),
-    count: 0,
-  };
-  const f = new Float64Array(G);
-  const d2 = new Float64Array(G);
-  const rhoWork = new Float64Array(G);
-  const sr = b.referenceSalinity;
-  const sMax = b.x[n - 1]!;
-  // The station design is fixed: its break-search sums are built once for all replicates.
-  const design = twoPhaseDesign(b.x, b.w);
-  // So are the spline's merged knots, weights and λ: its band system is factored once.
-  const knotOf = new Int32Array(n);
-  const knots0 = mergeKnots(b.x, b.yHat, b.w, b.tieTol, ws, knotOf);
-  const prepared = knots0.n >= 4 ? prepareSmoothingSpline(knots0, b.lambda) : undefined;
-  // And the replicate curves' knots on the grid: interval and weights of every grid point.
-  const plan = prepared && planSplineGrid(prepared.x, prepared.n, b.grid);
-  let usable = 0;
-  for (let d = 0; d < D; d++) {
-    for (let i = 0; i < n; i++) ys[i] = b.yHat[i]! + b.sigmaEff[i]! * z();
-    const cs = b.sea.conc + b.sea.sd * z();
-    const fit = design && fitTwoPhase(b.x, ys, b.w, false, design);
-    if (!fit) continue;
-    const [ic, sl] = seawardLine(fit);
-    const cr =
-      (b.riverOverride
-        ? b.riverOverride.conc + b.riverOverride.sd * z()
-        : b.riverModel === "quartic"
-          ? (riverByQuarticExtension(b.x, ys, b.w, fit, sr) ?? twoPhaseValue(fit, sr))
-          : twoPhaseValue(fit, sr)) + (b.riverExtraSd ? b.riverExtraSd * z() : 0);
-    usable++;
-    eff[d] = ic + sl * sr;
-    c0[d] = cr;
-    if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
-    if (!fit.linear) brk[d] = fit.breakAveraged ?? fit.breakSalinity;
-    const m = twoPhaseMaximum(fit, sMax);
-    if (m !== undefined) {
-      mS[d] = m;
-      mX[d] = twoPhaseValue(fit, m) - (cr + ((cs - cr) * (m - sr)) / (b.sea.salinity - sr));
+  const st = new BootstrapDraws(b);
+  for (let d = 0; d < st.D; d++) drawReplicate(st, d);
+  return summarise(st, b.estimates);
+}
+
+/** A replicate's draws filled with NaN (NaN = no value in that replicate). */
+function nanDraws(D: number): Float64Array {
+  return new Float64Array(D).fill(Number.NaN);
+}
+
+/**
+ * Everything one {@link runBootstrap} run shares between its replicates: the inputs, the fixed design,
+ * spline and grid plan, the work arrays, the reusable fit and zone, and the replicates' results.
+ * One object of one fixed layout (number properties created holding doubles) that the replicate
+ * code reads, whatever the caller's input object looked like: V8 compiles {@link drawReplicate}
+ * once per thread instead of discarding it at each new input layout. (Structure for speed only: the
+ * draws and numbers are those of the single loop this replaced.)
+ */
+class BootstrapDraws {
+  readonly n: number;
+  readonly G: number;
+  readonly D: number;
+  readonly x: Float64Array;
+  readonly yHat: Float64Array;
+  readonly sigmaEff: Float64Array;
+  readonly w: Float64Array;
+  readonly grid: Float64Array;
+  readonly z: NormalDeviates;
+  readonly eff: Float64Array;
+  readonly c0: Float64Array;
+  readonly pct: Float64Array;
+  readonly zLo: Float64Array;
+  readonly zHi: Float64Array;
+  readonly mS: Float64Array;
+  readonly mX: Float64Array;
+  readonly brk: Float64Array;
+  /** Replicate curves column by column (curves[g·D + d]): the band's percentiles read one contiguous column. */
+  readonly curves: Float64Array;
+  readonly ys: Float64Array;
+  readonly knotWork: { x: Float64Array; y: Float64Array; w: Float64Array };
+  readonly splineWork: NaturalSpline;
+  readonly f: Float64Array;
+  readonly d2: Float64Array;
+  readonly rhoWork: Float64Array;
+  readonly design: TwoPhaseDesign | undefined;
+  readonly knotOf: Int32Array;
+  readonly prepared: PreparedSmoothingSpline | undefined;
+  readonly plan: SplineGridPlan | undefined;
+  /** The replicate's two-phase fit and reaction zone (overwritten by every replicate). */
+  readonly fit: TwoPhaseFit;
+  readonly zone: ReactionZoneBounds;
+  readonly zoneSign: -1 | 1 | undefined;
+  /** The river value's model, chosen once for all replicates ({@link riverOverridden} etc.). */
+  readonly river: (st: BootstrapDraws, fit: TwoPhaseFit) => number;
+  // Number properties start as NaN so that V8 stores them as doubles from the start.
+  readonly sr: number = Number.NaN;
+  readonly sMax: number = Number.NaN;
+  readonly seaSalinity: number = Number.NaN;
+  readonly seaConc: number = Number.NaN;
+  readonly seaSd: number = Number.NaN;
+  readonly overrideConc: number = Number.NaN;
+  readonly overrideSd: number = Number.NaN;
+  /** Extra sd of the river value (0 = none). */
+  readonly extraSd: number = Number.NaN;
+  usable = 0;
+
+  constructor(b: BootstrapInput) {
+    const n = b.x.length;
+    const G = b.grid.length;
+    const D = b.draws;
+    this.n = n;
+    this.G = G;
+    this.D = D;
+    this.x = b.x;
+    this.yHat = b.yHat;
+    this.sigmaEff = b.sigmaEff;
+    this.w = b.w;
+    this.grid = b.grid;
+    this.z = new NormalDeviates(b.seed);
+    this.eff = nanDraws(D);
+    this.c0 = nanDraws(D);
+    this.pct = nanDraws(D);
+    this.zLo = nanDraws(D);
+    this.zHi = nanDraws(D);
+    this.mS = nanDraws(D);
+    this.mX = nanDraws(D);
+    this.brk = nanDraws(D);
+    this.curves = new Float64Array(D * G).fill(Number.NaN);
+    this.ys = new Float64Array(n);
+    this.knotWork = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
+    this.splineWork = {
+      knots: new Float64Array(n),
+      values: new Float64Array(n),
+      secondDerivs: new Float64Array(n),
+      count: 0,
+    };
+    this.f = new Float64Array(G);
+    this.d2 = new Float64Array(G);
+    this.rhoWork = new Float64Array(G);
+    this.sr = b.referenceSalinity;
+    this.sMax = b.x[n - 1]!;
+    // The station design is fixed: its break-search sums are built once for all replicates.
+    this.design = twoPhaseDesign(b.x, b.w);
+    // So are the spline's merged knots, weights and λ: its band system is factored once.
+    this.knotOf = new Int32Array(n);
+    const knots0 = mergeKnots(b.x, b.yHat, b.w, b.tieTol, this.knotWork, this.knotOf);
+    this.prepared = knots0.n >= 4 ? prepareSmoothingSpline(knots0, b.lambda) : undefined;
+    // And the replicate curves' knots on the grid: interval and weights of every grid point.
+    this.plan = this.prepared && planSplineGrid(this.prepared.x, this.prepared.n, b.grid);
+    this.fit = newTwoPhaseFit();
+    this.zone = { from: Number.NaN, to: Number.NaN, kind: "removal" };
+    this.zoneSign = b.zoneSign;
+    this.seaSalinity = b.sea.salinity;
+    this.seaConc = b.sea.conc;
+    this.seaSd = b.sea.sd;
+    if (b.riverOverride) {
+      this.overrideConc = b.riverOverride.conc;
+      this.overrideSd = b.riverOverride.sd;
     }
-    if (!prepared) continue;
-    mergeKnotResponses(knotOf, b.w, ys, prepared.w, prepared.n, ws.y);
-    const spline = fitPreparedSpline(prepared, ws.y, splineWs);
-    if (plan) evaluatePlannedGrid(plan, spline.values, spline.secondDerivs, f, d2);
-    else evaluateSplineGrid(spline, b.grid, f, undefined, d2);
-    for (let g = 0; g < G; g++) curves[g * D + d] = f[g]!;
-    const zone = zoneFromCurve(b.grid, d2, sr, rhoWork, fit.linear ? undefined : fit.breakSalinity, b.zoneSign);
-    if (zone) {
-      zLo[d] = zone.from;
-      zHi[d] = zone.to;
-    }
+    this.extraSd = b.riverExtraSd ?? 0;
+    this.river = b.riverOverride ? riverOverridden : b.riverModel === "quartic" ? riverQuartic : riverCubic;
   }
+}
+
+/** River value of a replicate: the user's value ± sd, drawn from a normal. */
+function riverOverridden(st: BootstrapDraws): number {
+  return st.overrideConc + st.overrideSd * st.z.next();
+}
+
+/** River value of a replicate: the quartic extension of its landward phase, else its two-phase curve. */
+function riverQuartic(st: BootstrapDraws, fit: TwoPhaseFit): number {
+  return riverByQuarticExtension(st.x, st.ys, st.w, fit, st.sr) ?? twoPhaseValue(fit, st.sr);
+}
+
+/** River value of a replicate: its two-phase curve at the reference salinity. */
+function riverCubic(st: BootstrapDraws, fit: TwoPhaseFit): number {
+  return twoPhaseValue(fit, st.sr);
+}
+
+/** Replicate d of {@link runBootstrap}: draws its concentrations, refits and stores its results. */
+function drawReplicate(st: BootstrapDraws, d: number): void {
+  const n = st.n;
+  const ys = st.ys;
+  const yHat = st.yHat;
+  const sigmaEff = st.sigmaEff;
+  const z = st.z;
+  for (let i = 0; i < n; i++) ys[i] = yHat[i]! + sigmaEff[i]! * z.next();
+  const cs = st.seaConc + st.seaSd * z.next();
+  const design = st.design;
+  if (!design) return;
+  const fit = fitTwoPhase(st.x, ys, st.w, false, design, st.fit);
+  if (!fit) return;
+  // The seaward line C = ic + sl·S (seawardLine, without its array).
+  const sl = fit.coef[1] / fit.range;
+  const ic = fit.coef[0] - sl * fit.sMin;
+  const sr = st.sr;
+  const cr = st.river(st, fit) + (st.extraSd ? st.extraSd * z.next() : 0);
+  st.usable++;
+  const eff = st.eff;
+  eff[d] = ic + sl * sr;
+  st.c0[d] = cr;
+  if (cr > 0) st.pct[d] = (100 * (eff[d]! - cr)) / cr;
+  if (!fit.linear) st.brk[d] = fit.breakAveraged ?? fit.breakSalinity;
+  const m = twoPhaseMaximum(fit, st.sMax);
+  if (m !== undefined) {
+    st.mS[d] = m;
+    st.mX[d] = twoPhaseValue(fit, m) - (cr + ((cs - cr) * (m - sr)) / (st.seaSalinity - sr));
+  }
+  const prepared = st.prepared;
+  if (!prepared) return;
+  const knotY = st.knotWork.y;
+  mergeKnotResponses(st.knotOf, st.w, ys, prepared.w, prepared.n, knotY);
+  const spline = fitPreparedSpline(prepared, knotY, st.splineWork);
+  const f = st.f;
+  const d2 = st.d2;
+  if (st.plan) evaluatePlannedGrid(st.plan, spline.values, spline.secondDerivs, f, d2);
+  else evaluateSplineGrid(spline, st.grid, f, undefined, d2);
+  const G = st.G;
+  const D = st.D;
+  const curves = st.curves;
+  for (let g = 0; g < G; g++) curves[g * D + d] = f[g]!;
+  const zone = st.zone;
+  if (zoneInto(st.grid, d2, sr, st.rhoWork, fit.linear ? undefined : fit.breakSalinity, st.zoneSign, zone)) {
+    st.zLo[d] = zone.from;
+    st.zHi[d] = zone.to;
+  }
+}
+
+/** Intervals and band of the finished replicates of {@link runBootstrap}. */
+function summarise(st: BootstrapDraws, est: BootstrapInput["estimates"]): BootstrapResult {
+  const G = st.G;
+  const D = st.D;
+  const curves = st.curves;
+  const eff = st.eff;
+  const c0 = st.c0;
   const bandLower: number[] = new Array<number>(G);
   const bandUpper: number[] = new Array<number>(G);
   const col = new Float64Array(D);
@@ -171,26 +306,28 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
   let s1 = 0,
     s2 = 0,
     k = 0;
-  for (const v of c0)
+  for (let d = 0; d < D; d++) {
+    const v = c0[d]!;
     if (Number.isFinite(v)) {
       s1 += v;
       s2 += v * v;
       k++;
     }
-  const delta = eff.map((v, i) => v - c0[i]!);
-  const est = b.estimates;
+  }
+  const delta = new Float64Array(D);
+  for (let d = 0; d < D; d++) delta[d] = eff[d]! - c0[d]!;
   return {
-    usable,
+    usable: st.usable,
     effective: est ? intervalBc95(eff, est.effective) : interval95(eff),
-    percent: est ? intervalBc95(pct, est.percent) : interval95(pct),
+    percent: est ? intervalBc95(st.pct, est.percent) : interval95(st.pct),
     riverConc: est ? intervalBc95(c0, est.riverConc) : interval95(c0),
     riverSe: k >= 2 ? Math.sqrt(Math.max(0, (s2 - (s1 * s1) / k) / (k - 1))) : undefined,
     netDelta: est ? intervalBc95(delta, est.netDelta) : interval95(delta),
-    zoneLower: interval95(zLo),
-    zoneUpper: interval95(zHi),
-    maxSalinity: interval95(mS),
-    maxExcess: interval95(mX),
-    breakSalinity: interval95(brk),
+    zoneLower: interval95(st.zLo),
+    zoneUpper: interval95(st.zHi),
+    maxSalinity: interval95(st.mS),
+    maxExcess: interval95(st.mX),
+    breakSalinity: interval95(st.brk),
     bandLower,
     bandUpper,
     effectiveDraws: eff,

@@ -42,7 +42,7 @@ export interface TwoPhaseFit {
    * coefficients). The bootstrap draws around it so that each replicate can re-run the model
    * selection (Efron 2014), instead of drawing around the selected line only.
    */
-  alternative?: { breakSalinity: number; coef: [number, number, number, number] };
+  alternative?: { breakSalinity: number; coef: [number, number, number, number] } | undefined;
   /**
    * Break averaged over the profile likelihood: the grid breaks and the chosen break weighted by
    * exp(−(RSS(S_b) − RSS_min)/(2·s²)), s² = max(1, χ²_ν) (Akaike weights of the breaks, Buckland et
@@ -50,7 +50,52 @@ export interface TwoPhaseFit {
    * averaged break moves toward the true end of the reaction; for a sharp break it equals S_b.
    * Undefined for the straight line.
    */
-  breakAveraged?: number;
+  breakAveraged?: number | undefined;
+}
+
+/**
+ * A new fit with every property of {@link TwoPhaseFit} in one order (those without a value
+ * undefined): every fit then has the same object layout, so V8 compiles the code reading fits once
+ * instead of discarding it at each new layout. Internal; the numbers are set by the fitting code.
+ */
+export function newTwoPhaseFit(): TwoPhaseFit {
+  return {
+    breakSalinity: Number.NaN,
+    linear: false,
+    coef: coefficients(Number.NaN, Number.NaN, Number.NaN, Number.NaN),
+    sMin: Number.NaN,
+    range: Number.NaN,
+    rss: Number.NaN,
+    rssLinear: Number.NaN,
+    params: 0,
+    pCurvature: Number.NaN,
+    alternative: undefined,
+    breakAveraged: undefined,
+  };
+}
+
+/** [α₀, α₁, β₂, β₃] as a new array that always holds doubles (one element layout for every fit's coefficients). */
+function coefficients(a0: number, a1: number, b2: number, b3: number): [number, number, number, number] {
+  const c: [number, number, number, number] = [Number.NaN, Number.NaN, Number.NaN, Number.NaN];
+  c[0] = a0;
+  c[1] = a1;
+  c[2] = b2;
+  c[3] = b3;
+  return c;
+}
+
+// The fits' layout is settled once here, before any fitting code runs hot: the number properties
+// are created holding doubles (NaN), and the two optional ones are given a value of each kind they
+// take, so that no later fit changes the layout (which would make V8 discard the compiled code).
+{
+  const primer = newTwoPhaseFit();
+  primer.breakAveraged = Number.NaN;
+  primer.alternative = {
+    breakSalinity: Number.NaN,
+    coef: coefficients(Number.NaN, Number.NaN, Number.NaN, Number.NaN),
+  };
+  primer.breakAveraged = undefined;
+  primer.alternative = undefined;
 }
 
 /**
@@ -80,19 +125,53 @@ function fPCached(F: number, d1: number, d2: number): number {
   return F > c ? 0 : 1;
 }
 
-/** The fit that keeps the straight line C = α₀ + α₁·t through all stations. */
-function lineResult(a0: number, a1: number, sMin: number, range: number, rss: number): TwoPhaseFit {
-  return {
-    breakSalinity: sMin,
-    linear: true,
-    coef: [a0, a1, 0, 0],
-    sMin,
-    range,
-    rss,
-    rssLinear: rss,
-    params: 2,
-    pCurvature: 1,
-  };
+/**
+ * The fit `f` with the break and coefficients of its two-phase alternative (`{ ...f, ...alternative,
+ * linear: false }` with the layout of every other fit): the curve the bootstrap draws around when
+ * the straight line was kept.
+ */
+export function alternativeFit(f: TwoPhaseFit, alternative: NonNullable<TwoPhaseFit["alternative"]>): TwoPhaseFit {
+  const a = newTwoPhaseFit();
+  a.breakSalinity = alternative.breakSalinity;
+  a.linear = false;
+  a.coef = alternative.coef;
+  a.sMin = f.sMin;
+  a.range = f.range;
+  a.rss = f.rss;
+  a.rssLinear = f.rssLinear;
+  a.params = f.params;
+  a.pCurvature = f.pCurvature;
+  a.alternative = alternative;
+  a.breakAveraged = f.breakAveraged;
+  return a;
+}
+
+/** The fit that keeps the straight line C = α₀ + α₁·t through all stations, written to `out` or a new fit. */
+function lineResult(
+  out: TwoPhaseFit | undefined,
+  a0: number,
+  a1: number,
+  sMin: number,
+  range: number,
+  rss: number,
+): TwoPhaseFit {
+  const f = out ?? newTwoPhaseFit();
+  f.breakSalinity = sMin;
+  f.linear = true;
+  const c = f.coef;
+  c[0] = a0;
+  c[1] = a1;
+  c[2] = 0;
+  c[3] = 0;
+  f.sMin = sMin;
+  f.range = range;
+  f.rss = rss;
+  f.rssLinear = rss;
+  f.params = 2;
+  f.pCurvature = 1;
+  f.alternative = undefined;
+  f.breakAveraged = undefined;
+  return f;
 }
 
 /** Weighted fit at a fixed break (k = 2 line, 3 with h², 4 with h² and h³) by direct sums; RSS or NaN. */
@@ -186,6 +265,8 @@ function fitAt(
  * @param x ascending salinities; y concentrations; w weights 1/σ² (0 drops a point)
  * @param exactP false inside the bootstrap: pCurvature is then only 0 (significant) or 1
  * @param design the design of x and w from {@link twoPhaseDesign} (the bootstrap builds it once)
+ * @param out a fit from {@link newTwoPhaseFit} to overwrite and return instead of a new one (the
+ *   bootstrap reuses one for all its replicates)
  * @returns the fit, or undefined with fewer than 2 distinct salinities
  * @throws RangeError when the salinities are not ascending
  * @see Hudson, D.J. (1966) JASA 61, 1097–1129 (fitting segmented curves with unknown join points);
@@ -198,6 +279,7 @@ export function fitTwoPhase(
   w: ArrayLike<number>,
   exactP = true,
   design?: TwoPhaseDesign,
+  out?: TwoPhaseFit,
 ): TwoPhaseFit | undefined {
   const ds = design ?? twoPhaseDesign(x, w);
   if (!ds) return undefined;
@@ -209,7 +291,7 @@ export function fitTwoPhase(
   const lc0 = c[0]!,
     lc1 = c[1]!;
   const syy = ds.syy;
-  if (n < 5 || rssLin <= 1e-18 * syy) return lineResult(lc0, lc1, sMin, range, rssLin);
+  if (n < 5 || rssLin <= 1e-18 * syy) return lineResult(out, lc0, lc1, sMin, range, rssLin);
   // Candidate breaks: above the 3rd distinct station (≥ 3 distinct salinities landward, so the
   // landward curvature is never set by one station or by two near-tied ones), up to S_max.
   // The cubic term needs a 4th distinct station landward of the break.
@@ -225,7 +307,7 @@ export function fitTwoPhase(
       break;
     }
   }
-  if (!(third < sMax)) return lineResult(lc0, lc1, sMin, range, rssLin);
+  if (!(third < sMax)) return lineResult(out, lc0, lc1, sMin, range, rssLin);
   const lo = third + 1e-9 * range;
   if (!(fourth < sMax)) fourth = sMax;
   loadResponse(ds, y, ds.swy);
@@ -302,10 +384,10 @@ export function fitTwoPhase(
       bestB = xi;
     }
   }
-  if (!Number.isFinite(best)) return lineResult(lc0, lc1, sMin, range, rssLin);
+  if (!Number.isFinite(best)) return lineResult(out, lc0, lc1, sMin, range, rssLin);
   const k = fourth < bestB ? 4 : 3;
   best = fitAt(x, y, w, sMin, range, bestB, k, c);
-  if (!Number.isFinite(best)) return lineResult(lc0, lc1, sMin, range, rssLin);
+  if (!Number.isFinite(best)) return lineResult(out, lc0, lc1, sMin, range, rssLin);
   const extra = k - 2 + 1;
   const dfRes = n - k - 1;
   let p = 1;
@@ -318,13 +400,12 @@ export function fitTwoPhase(
     }
   }
   if (!(p < TWO_PHASE_ALPHA)) {
-    const line = lineResult(lc0, lc1, sMin, range, rssLin);
+    const line = lineResult(out, lc0, lc1, sMin, range, rssLin);
     line.pCurvature = p;
     // The alternative is for the full-data fit's bootstrap; replicates (exactP false) never use it.
-    if (exactP) line.alternative = { breakSalinity: bestB, coef: [c[0]!, c[1]!, c[2]!, c[3]!] };
+    if (exactP) line.alternative = { breakSalinity: bestB, coef: coefficients(c[0]!, c[1]!, c[2]!, c[3]!) };
     return line;
   }
-  const coef: [number, number, number, number] = [c[0]!, c[1]!, c[2]!, c[3]!];
   // Profile-averaged break (Akaike weights over the grid breaks and the chosen one).
   const s2 = dfRes >= 1 ? Math.max(1, best / dfRes) : 1;
   let sw = 1,
@@ -338,18 +419,23 @@ export function fitTwoPhase(
     sw += wg;
     swb += wg * (lo + ((sMax - lo) * g) / GRID);
   }
-  return {
-    breakSalinity: bestB,
-    linear: false,
-    coef,
-    sMin,
-    range,
-    rss: best,
-    rssLinear: rssLin,
-    params: k + 1,
-    pCurvature: p,
-    breakAveraged: swb / sw,
-  };
+  const f = out ?? newTwoPhaseFit();
+  f.breakSalinity = bestB;
+  f.linear = false;
+  const coef = f.coef;
+  coef[0] = c[0]!;
+  coef[1] = c[1]!;
+  coef[2] = c[2]!;
+  coef[3] = c[3]!;
+  f.sMin = sMin;
+  f.range = range;
+  f.rss = best;
+  f.rssLinear = rssLin;
+  f.params = k + 1;
+  f.pCurvature = p;
+  f.alternative = undefined;
+  f.breakAveraged = swb / sw;
+  return f;
 }
 
 /**
@@ -384,17 +470,21 @@ export function fitTwoPhaseAtBreak(
   const c = COEF;
   const rss = fitAt(x, y, w, sMin, range, breakSalinity, k, c);
   if (!Number.isFinite(rss)) return undefined;
-  return {
-    breakSalinity,
-    linear: false,
-    coef: [c[0]!, c[1]!, c[2]!, c[3]!],
-    sMin,
-    range,
-    rss,
-    rssLinear: Number.NaN,
-    params: k + 1,
-    pCurvature: Number.NaN,
-  };
+  const f = newTwoPhaseFit();
+  f.breakSalinity = breakSalinity;
+  f.linear = false;
+  const coef = f.coef;
+  coef[0] = c[0]!;
+  coef[1] = c[1]!;
+  coef[2] = c[2]!;
+  coef[3] = c[3]!;
+  f.sMin = sMin;
+  f.range = range;
+  f.rss = rss;
+  f.rssLinear = Number.NaN;
+  f.params = k + 1;
+  f.pCurvature = Number.NaN;
+  return f;
 }
 
 /** Value, dC/dS and d²C/dS² of the two-phase fit at salinity s. */

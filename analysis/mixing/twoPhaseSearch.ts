@@ -39,10 +39,16 @@ export interface TwoPhaseDesign {
   lineA00: number;
   lineA01: number;
   lineA11: number;
-  /** Cached design terms of the grid of candidate breaks starting at gridLo ({@link gridTerms}). */
-  grid?: Float64Array;
-  gridLo?: number;
+  /**
+   * Cached design terms of the grid of candidate breaks starting at gridLo ({@link gridTerms}); empty
+   * and NaN until the first search (present from the start, so every design has one object layout).
+   */
+  grid: Float64Array;
+  gridLo: number;
 }
+
+/** The empty grid of a design before its first break search. */
+const NO_GRID = new Float64Array(0);
 
 /**
  * Builds the design of {@link TwoPhaseDesign} from ascending salinities and weights.
@@ -109,20 +115,28 @@ export function twoPhaseDesign(x: ArrayLike<number>, w: ArrayLike<number>): TwoP
     p,
     q,
     sw,
-    swy: 0,
-    syy: 0,
-    ryy: 0,
-    ybar: 0,
-    line0: 0,
-    line1: 0,
-    rssLine: 0,
+    swy: Number.NaN,
+    syy: Number.NaN,
+    ryy: Number.NaN,
+    ybar: Number.NaN,
+    line0: Number.NaN,
+    line1: Number.NaN,
+    rssLine: Number.NaN,
     det11,
     ts,
     lineA00,
     lineA01,
     lineA11,
+    grid: NO_GRID,
+    gridLo: Number.NaN,
   };
 }
+
+// Settles the designs' object layout before any fitting code runs hot: in a design built from
+// fractions every number property holds a double from the start. (Were the first design's sums whole
+// numbers, V8 would lay them out as small integers and change the layout at the first fraction,
+// discarding the code compiled for it.)
+twoPhaseDesign([0.5, 1.25, 2.75], [0.3, 0.7, 1.1]);
 
 /**
  * Weighted straight-line fit C = α₀ + α₁·t of a response y (indexed like the caller's x) on the
@@ -539,7 +553,7 @@ export function breakRssInto(d: TwoPhaseDesign, b: number, k: number, coef: Floa
  * @param fourth salinity of the 4th distinct station (the cubic term needs it landward of the break)
  */
 export function gridTerms(d: TwoPhaseDesign, lo: number, G: number, fourth: number): Float64Array {
-  if (d.grid && d.gridLo === lo && d.grid.length === (G + 1) * TERMS) return d.grid;
+  if (d.gridLo === lo && d.grid.length === (G + 1) * TERMS) return d.grid;
   const grid = new Float64Array((G + 1) * TERMS);
   for (let g = 0; g <= G; g++) {
     const b = lo + ((d.sMax - lo) * g) / G;

@@ -1,6 +1,13 @@
 /** Fraction of the peak reaction density that bounds the reaction zone. */
 export const ZONE_THRESHOLD = 0.05;
 
+/** A reaction zone: [from, to] salinity and its kind. */
+export interface ReactionZoneBounds {
+  from: number;
+  to: number;
+  kind: "removal" | "addition";
+}
+
 /**
  * Reaction zone from the fitted curve. The reaction per unit salinity follows from
  * Eqs. 3–5: Q·dC*₀/dS = −Q·(S − S_r)·d²C/dS², so ρ(S) = −(S − S_r)·C''(S) (ρ < 0 removal).
@@ -27,16 +34,37 @@ export function zoneFromCurve(
   work?: Float64Array,
   segmentStart?: number,
   sign?: -1 | 1,
-): { from: number; to: number; kind: "removal" | "addition" } | undefined {
+): ReactionZoneBounds | undefined {
+  const rho = work && work.length >= grid.length ? work : new Float64Array(grid.length);
+  const out: ReactionZoneBounds = { from: Number.NaN, to: Number.NaN, kind: "removal" };
+  return zoneInto(grid, d2, riverSalinity, rho, segmentStart, sign, out) ? out : undefined;
+}
+
+/**
+ * {@link zoneFromCurve} written into a caller's object (the bootstrap locates a zone in every
+ * replicate and reuses one object and one scratch array).
+ *
+ * @param rho scratch array of length ≥ grid.length
+ * @param out receives the zone when there is one
+ * @returns true when there is a zone (then in out), false otherwise (out unchanged)
+ */
+export function zoneInto(
+  grid: ArrayLike<number>,
+  d2: ArrayLike<number>,
+  riverSalinity: number,
+  rho: Float64Array,
+  segmentStart: number | undefined,
+  sign: -1 | 1 | undefined,
+  out: ReactionZoneBounds,
+): boolean {
   let G = grid.length;
   if (segmentStart !== undefined) {
     while (G > 0 && grid[G - 1]! > segmentStart + 1e-9) G--;
-    if (G < 2) return undefined;
+    if (G < 2) return false;
   }
   let total = 0;
   let maxAbs = 0;
   let maxAbsSigned = 0;
-  const rho = work && work.length >= G ? work : new Float64Array(G);
   for (let i = 0; i < G; i++) {
     rho[i] = -(grid[i]! - riverSalinity) * d2[i]!;
     // ∫ρ dS only decides the sign when none is asked for.
@@ -46,17 +74,20 @@ export function zoneFromCurve(
       maxAbsSigned = rho[i]!;
     }
   }
-  if (!(maxAbs > 0)) return undefined;
+  if (!(maxAbs > 0)) return false;
   const sgn = sign ?? (total !== 0 ? Math.sign(total) : Math.sign(maxAbsSigned));
   let peak = 0;
   for (let i = 1; i < G; i++) if (sgn * rho[i]! > sgn * rho[peak]!) peak = i;
   const thr = ZONE_THRESHOLD * sgn * rho[peak]!;
-  if (!(thr > 0)) return undefined;
+  if (!(thr > 0)) return false;
   let lo = peak;
   let hi = peak;
   while (lo > 0 && sgn * rho[lo - 1]! >= thr) lo--;
   while (hi < G - 1 && sgn * rho[hi + 1]! >= thr) hi++;
-  return { from: grid[lo]!, to: segmentStart ?? grid[hi]!, kind: sgn < 0 ? "removal" : "addition" };
+  out.from = grid[lo]!;
+  out.to = segmentStart ?? grid[hi]!;
+  out.kind = sgn < 0 ? "removal" : "addition";
+  return true;
 }
 
 /**
