@@ -9,7 +9,7 @@ import type { NaturalSpline } from "../stats/naturalSpline.ts";
 import type { PreparedSmoothingSpline } from "../stats/smoothingSpline.ts";
 import type { SplineGridPlan } from "../stats/splineGridPlan.ts";
 import {
-  fitTwoPhase,
+  fitTwoPhaseReplicate,
   newTwoPhaseFit,
   twoPhaseDesign,
   twoPhaseMaximum,
@@ -246,7 +246,7 @@ function drawReplicate(st: BootstrapDraws, d: number): void {
   const cs = st.seaConc + st.seaSd * z.next();
   const design = st.design;
   if (!design) return;
-  const fit = fitTwoPhase(st.x, ys, st.w, false, design, st.fit);
+  const fit = fitTwoPhaseReplicate(design, st.x, ys, st.w, st.fit);
   if (!fit) return;
   // The seaward line C = ic + sl·S (seawardLine, without its array).
   const sl = fit.coef[1] / fit.range;

@@ -283,15 +283,78 @@ export function fitTwoPhase(
 ): TwoPhaseFit | undefined {
   const ds = design ?? twoPhaseDesign(x, w);
   if (!ds) return undefined;
+  const s = searchTwoPhase(ds, x, y, w);
+  if (s === SEARCH_FAILED) return undefined;
+  if (s === SEARCH_LINE) return lineResult(out, S.lc0, S.lc1, ds.sMin, ds.range, S.rssLin);
+  const F = S.F;
+  const p = F === P_ZERO ? 0 : F === P_ONE ? 1 : exactP ? fUpperP(F, S.extra, S.dfRes) : fPCached(F, S.extra, S.dfRes);
+  return settleTwoPhase(ds, p, exactP, out);
+}
+
+/**
+ * {@link fitTwoPhase} of a bootstrap replicate (exactP false) on the fixed design, written to `out`:
+ * the same numbers, by a path that never takes the full-data fit's branches (so V8's code for the
+ * replicates is not discarded when a full-data fit comes next).
+ */
+export function fitTwoPhaseReplicate(
+  ds: TwoPhaseDesign,
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  out: TwoPhaseFit,
+): TwoPhaseFit | undefined {
+  const s = searchTwoPhase(ds, x, y, w);
+  if (s === SEARCH_FAILED) return undefined;
+  if (s === SEARCH_LINE) return lineResult(out, S.lc0, S.lc1, ds.sMin, ds.range, S.rssLin);
+  const F = S.F;
+  const p = F === P_ZERO ? 0 : F === P_ONE ? 1 : fPCached(F, S.extra, S.dfRes);
+  return settleTwoPhase(ds, p, false, out);
+}
+
+/** Outcomes of {@link searchTwoPhase}. */
+const SEARCH_FAILED = 0,
+  SEARCH_LINE = 1,
+  SEARCH_TESTED = 2;
+/** Values of S.F that stand for p = 0 and p = 1 without an F-test (an F statistic is never negative). */
+const P_ZERO = -1,
+  P_ONE = -2;
+
+/**
+ * What {@link searchTwoPhase} leaves for its caller (one object, reused: single-threaded; number
+ * properties created holding doubles).
+ */
+const S = {
+  /** The straight line's coefficients and RSS. */
+  lc0: Number.NaN,
+  lc1: Number.NaN,
+  rssLin: Number.NaN,
+  /** The best break, its RSS (coefficients in COEF), parameters k and the lowest grid break. */
+  bestB: Number.NaN,
+  best: Number.NaN,
+  k: 0,
+  lo: Number.NaN,
+  /** F statistic of the two-phase model vs the line (or P_ZERO, P_ONE), its degrees of freedom. */
+  F: Number.NaN,
+  extra: 0,
+  dfRes: 0,
+};
+
+/**
+ * The straight line and the break search of {@link fitTwoPhase}: SEARCH_FAILED (no line), SEARCH_LINE
+ * (the line is kept without a test) or SEARCH_TESTED (the best break is in S with its coefficients in
+ * COEF and the F statistic of the test).
+ */
+function searchTwoPhase(ds: TwoPhaseDesign, x: ArrayLike<number>, y: ArrayLike<number>, w: ArrayLike<number>): number {
   const { n, xs, sMin, sMax, range } = ds;
   const c = COEF;
   const rssLin = fitLine(ds, y, c);
-  if (!Number.isFinite(rssLin)) return undefined;
+  if (!Number.isFinite(rssLin)) return SEARCH_FAILED;
   // The straight-line result is built only when it is returned (the bootstrap refits thousands of times).
-  const lc0 = c[0]!,
-    lc1 = c[1]!;
+  S.lc0 = c[0]!;
+  S.lc1 = c[1]!;
+  S.rssLin = rssLin;
   const syy = ds.syy;
-  if (n < 5 || rssLin <= 1e-18 * syy) return lineResult(out, lc0, lc1, sMin, range, rssLin);
+  if (n < 5 || rssLin <= 1e-18 * syy) return SEARCH_LINE;
   // Candidate breaks: above the 3rd distinct station (≥ 3 distinct salinities landward, so the
   // landward curvature is never set by one station or by two near-tied ones), up to S_max.
   // The cubic term needs a 4th distinct station landward of the break.
@@ -307,7 +370,7 @@ export function fitTwoPhase(
       break;
     }
   }
-  if (!(third < sMax)) return lineResult(out, lc0, lc1, sMin, range, rssLin);
+  if (!(third < sMax)) return SEARCH_LINE;
   const lo = third + 1e-9 * range;
   if (!(fourth < sMax)) fourth = sMax;
   loadResponse(ds, y, ds.swy);
@@ -384,23 +447,43 @@ export function fitTwoPhase(
       bestB = xi;
     }
   }
-  if (!Number.isFinite(best)) return lineResult(out, lc0, lc1, sMin, range, rssLin);
+  if (!Number.isFinite(best)) return SEARCH_LINE;
   const k = fourth < bestB ? 4 : 3;
   best = fitAt(x, y, w, sMin, range, bestB, k, c);
-  if (!Number.isFinite(best)) return lineResult(out, lc0, lc1, sMin, range, rssLin);
+  if (!Number.isFinite(best)) return SEARCH_LINE;
   const extra = k - 2 + 1;
   const dfRes = n - k - 1;
-  let p = 1;
+  let F = P_ONE;
   if (dfRes >= 1) {
     const gain = Math.max(0, rssLin - best);
-    if (best <= 1e-18 * syy) p = gain > 1e-18 * syy ? 0 : 1;
-    else {
-      const F = gain / extra / (best / dfRes);
-      p = exactP ? fUpperP(F, extra, dfRes) : fPCached(F, extra, dfRes);
-    }
+    if (best <= 1e-18 * syy) F = gain > 1e-18 * syy ? P_ZERO : P_ONE;
+    else F = gain / extra / (best / dfRes);
   }
+  S.bestB = bestB;
+  S.best = best;
+  S.k = k;
+  S.lo = lo;
+  S.F = F;
+  S.extra = extra;
+  S.dfRes = dfRes;
+  return SEARCH_TESTED;
+}
+
+/**
+ * The fit after the F-test of {@link searchTwoPhase} (p its p value): the straight line when
+ * p ≥ {@link TWO_PHASE_ALPHA} (with the tested two-phase alternative when exactP), else the
+ * two-phase model at the best break with its profile-averaged break.
+ */
+function settleTwoPhase(ds: TwoPhaseDesign, p: number, exactP: boolean, out: TwoPhaseFit | undefined): TwoPhaseFit {
+  const { sMin, sMax, range } = ds;
+  const c = COEF;
+  const bestB = S.bestB;
+  const best = S.best;
+  const k = S.k;
+  const lo = S.lo;
+  const dfRes = S.dfRes;
   if (!(p < TWO_PHASE_ALPHA)) {
-    const line = lineResult(out, lc0, lc1, sMin, range, rssLin);
+    const line = lineResult(out, S.lc0, S.lc1, sMin, range, S.rssLin);
     line.pCurvature = p;
     // The alternative is for the full-data fit's bootstrap; replicates (exactP false) never use it.
     if (exactP) line.alternative = { breakSalinity: bestB, coef: coefficients(c[0]!, c[1]!, c[2]!, c[3]!) };
@@ -430,7 +513,7 @@ export function fitTwoPhase(
   f.sMin = sMin;
   f.range = range;
   f.rss = best;
-  f.rssLinear = rssLin;
+  f.rssLinear = S.rssLin;
   f.params = k + 1;
   f.pCurvature = p;
   f.alternative = undefined;
