@@ -1,7 +1,8 @@
 import jStat from "jstat";
 import { fUpperP } from "../stats/distributions.ts";
 import {
-  breakRssInto,
+  breakRssIn,
+  BREAK_IN,
   fitLine,
   gridTerms,
   termsRssInto,
@@ -396,9 +397,11 @@ function searchTwoPhase(ds: TwoPhaseDesign, x: ArrayLike<number>, y: ArrayLike<n
   // Golden-section search: one new evaluation per step.
   let m1 = z - gr * (z - a);
   let m2 = a + gr * (z - a);
-  breakRssInto(ds, m1, fourth < m1 ? 4 : 3, c);
+  BREAK_IN[0] = m1;
+  breakRssIn(ds, fourth < m1 ? 4 : 3, c);
   let r1 = RSS_OUT[0]!;
-  breakRssInto(ds, m2, fourth < m2 ? 4 : 3, c);
+  BREAK_IN[0] = m2;
+  breakRssIn(ds, fourth < m2 ? 4 : 3, c);
   let r2 = RSS_OUT[0]!;
   for (let it = 0; it < REFINE; it++) {
     if (r1 < best) {
@@ -414,14 +417,16 @@ function searchTwoPhase(ds: TwoPhaseDesign, x: ArrayLike<number>, y: ArrayLike<n
       m2 = m1;
       r2 = r1;
       m1 = z - gr * (z - a);
-      breakRssInto(ds, m1, fourth < m1 ? 4 : 3, c);
+      BREAK_IN[0] = m1;
+      breakRssIn(ds, fourth < m1 ? 4 : 3, c);
       r1 = RSS_OUT[0]!;
     } else {
       a = m1;
       m1 = m2;
       r1 = r2;
       m2 = a + gr * (z - a);
-      breakRssInto(ds, m2, fourth < m2 ? 4 : 3, c);
+      BREAK_IN[0] = m2;
+      breakRssIn(ds, fourth < m2 ? 4 : 3, c);
       r2 = RSS_OUT[0]!;
     }
   }
@@ -440,7 +445,8 @@ function searchTwoPhase(ds: TwoPhaseDesign, x: ArrayLike<number>, y: ArrayLike<n
     const xi = xs[i]!;
     if (xi < bestB - tol || xi <= lo) continue;
     if (xi > bestB + tol) break;
-    breakRssInto(ds, xi, fourth < xi ? 4 : 3, c);
+    BREAK_IN[0] = xi;
+    breakRssIn(ds, fourth < xi ? 4 : 3, c);
     const r = RSS_OUT[0]!;
     if (r <= best) {
       best = r;
@@ -572,7 +578,10 @@ export function fitTwoPhaseAtBreak(
 
 /** Value, dC/dS and d²C/dS² of the two-phase fit at salinity s. */
 export function twoPhaseAt(f: TwoPhaseFit, s: number): [number, number, number] {
-  const [, a1, b2, b3] = f.coef;
+  // Indexed reads (not destructuring, which iterates and allocates outside optimised code).
+  const a1 = f.coef[1],
+    b2 = f.coef[2],
+    b3 = f.coef[3];
   const R = f.range;
   const h = Math.max(0, f.breakSalinity - s) / R;
   const d1 = (a1 - 2 * b2 * h - 3 * b3 * h * h) / R;
@@ -609,7 +618,9 @@ export function seawardLine(f: TwoPhaseFit): [number, number] {
  */
 export function twoPhaseMaximum(f: TwoPhaseFit, sMax: number): number | undefined {
   if (f.linear) return undefined;
-  const [, a1, b2, b3] = f.coef;
+  const a1 = f.coef[1],
+    b2 = f.coef[2],
+    b3 = f.coef[3];
   const hMax = (f.breakSalinity - f.sMin) / f.range;
   // Roots h of the derivative (scaled distance below S_b), at most two, in that order.
   let roots = 0,

@@ -364,6 +364,20 @@ const T_M = 0,
  * decides, as it always did (on the cached grid that decision is made once: 2 = singular).
  */
 export function breakTerms(d: TwoPhaseDesign, b: number, k: number, out: Float64Array, at = 0): void {
+  BREAK_IN[0] = b;
+  breakTermsIn(d, k, out, at);
+}
+
+/**
+ * The candidate break of {@link breakTermsIn} and {@link breakRssIn}: a slot rather than an argument,
+ * because a double passed to a call that is not inlined is boxed on the heap, and the break search of
+ * every bootstrap replicate makes ~15 such calls (as {@link RSS_OUT} for the results).
+ */
+export const BREAK_IN = new Float64Array(1);
+
+/** {@link breakTerms} of the break in {@link BREAK_IN}[0]. */
+function breakTermsIn(d: TwoPhaseDesign, k: number, out: Float64Array, at: number): void {
+  const b = BREAK_IN[0]!;
   const xs = d.xs;
   let lo = 0,
     hi = d.n;
@@ -542,7 +556,13 @@ export function breakRss(d: TwoPhaseDesign, b: number, k: number, coef: Float64A
 
 /** {@link breakRss} with the RSS written to {@link RSS_OUT}[0] instead of returned (no boxing). */
 export function breakRssInto(d: TwoPhaseDesign, b: number, k: number, coef: Float64Array): void {
-  breakTerms(d, b, k, ONE);
+  BREAK_IN[0] = b;
+  breakRssIn(d, k, coef);
+}
+
+/** {@link breakRssInto} of the break in {@link BREAK_IN}[0] (no boxing of the break). */
+export function breakRssIn(d: TwoPhaseDesign, k: number, coef: Float64Array): void {
+  breakTermsIn(d, k, ONE, 0);
   termsRssInto(d, ONE, 0, coef);
 }
 
