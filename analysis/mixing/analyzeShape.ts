@@ -26,7 +26,7 @@ import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
 import { fitQuarticExtension, riverModelSpread } from "./riverExtension.ts";
 import { coarseExtrapolationWarning } from "./riverReference.ts";
-import { MIN_SEAWARD_STATIONS, mouthAveragedEffective } from "./twoPhaseMouth.ts";
+import { MIN_SEAWARD_STATIONS, mouthAveragedEffective, mouthModelWeight } from "./twoPhaseMouth.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -75,6 +75,13 @@ export const BIAS_CORRECTION_MIN_CHI2 = 0.25;
 
 /** Fewest stations on the straight seaward line before a `short-seaward-line` warning (twoPhaseMouth.ts). */
 export { MIN_SEAWARD_STATIONS };
+
+/**
+ * Akaike weight of "the reaction reaches the mouth" (twoPhaseMouth.ts mouthModelWeight) from which a
+ * seaward line of ≥ 4 stations gets a `seaward-line-untested` warning (documented choice: that model is
+ * then within ΔAIC ≈ 5.9 of the fit, not excluded by the data).
+ */
+export const MOUTH_WEIGHT_WARN = 0.05;
 
 /** −1 for a net removal, +1 for a net addition (the quadratic coefficient decides a zero change, as in classify). */
 function netSign(netDelta: number, quadCoef: number): -1 | 1 {
@@ -289,6 +296,17 @@ export function analyzeShape(p: ShapeInput): {
     warnings.push({
       code: "short-seaward-line",
       message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} ${tangent.nStations < 3 ? 'cannot be tested, so the class does not say "then conservative"' : "is tested with one degree of freedom only (a curve passes through any 3 points)"}. If the reaction in fact continues seaward, a line through these stations is a chord of the curve, not its tangent, and C*₀ is biased toward C₀. C*₀ and its interval are therefore averaged with the tangent of a local quadratic through these stations and the next one landward, in proportion to how well the data support a curved end (Akaike weight ${(100 * mouthWeight).toFixed(0)} %); a bias of a few percentage points remains possible. Stations between there and the sea end-member would settle it.`,
+    });
+  // A seaward line of ≥ 4 stations that the data cannot tell from a reaction reaching the mouth
+  // (Akaike weight of the break at S_max ≥ MOUTH_WEIGHT_WARN): the chord bias is not bounded.
+  const wReach =
+    segStart !== undefined && tangent.nStations >= MIN_SEAWARD_STATIONS
+      ? mouthModelWeight(x, conc, wts, tp, scatter * scatter)
+      : undefined;
+  if (wReach !== undefined && wReach >= MOUTH_WEIGHT_WARN)
+    warnings.push({
+      code: "seaward-line-untested",
+      message: `The straight seaward line (${tangent.nStations} stations, S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}) cannot be told from a reaction that continues to the seaward-most station: a curve with no straight seaward phase fits nearly as well (Akaike weight ${(100 * wReach).toFixed(0)} %). If the reaction does continue, the line is a chord of the curve: C*₀ is biased toward C₀ (the % change understated, by several percentage points in calibration with synthetic surveys) beyond its interval, and "then conservative" is not established. More stations, or more precise ones, in the outer estuary would settle it.`,
     });
   const mS = twoPhaseMaximum(tp, sMax);
   // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the

@@ -1,4 +1,4 @@
-import { seawardLine, type TwoPhaseFit } from "./twoPhase.ts";
+import { fitTwoPhaseAtBreak, seawardLine, type TwoPhaseFit } from "./twoPhase.ts";
 
 /**
  * Fewest stations on the straight seaward line before its linearity counts as established: a
@@ -76,6 +76,37 @@ export function mouthAveragedEffective(
   const weight = 1 / (1 + Math.exp(Math.min(700, dAic / 2)));
   if (!Number.isFinite(curved) || !Number.isFinite(weight)) return none;
   return { value: segment + weight * (curved - segment), segment, curved, weight };
+}
+
+/**
+ * Akaike weight of "the reaction reaches the mouth" against a fitted seaward line: the two-phase model
+ * with its break at the seaward-most station S_max (no straight seaward phase; the landward curve
+ * continues to the last station) vs the fit with its break S_b, one parameter fewer (the break):
+ * ΔAIC = (RSS_mouth − RSS_b)/s² − 2, w = 1/(1 + exp(ΔAIC/2)) (Akaike 1974; Buckland et al. 1997).
+ * Used as a test only, never as an estimate: that global curve's tangent at S_max carries the
+ * landward curvature to the mouth and is far off where the reaction ends inside the estuary.
+ *
+ * @param x ascending salinities; y concentrations; w weights 1/σ²
+ * @param fit the two-phase fit of the same data
+ * @param s2 residual variance factor max(1, χ²_ν)
+ * @returns the weight, or undefined (straight line kept, break already at S_max, model not fitted)
+ * @see Buckland, S.T., Burnham, K.P. & Augustin, N.H. (1997) Biometrics 53, 603–618 (from memory);
+ *   Akaike, H. (1974) IEEE Trans. Automatic Control 19, 716–723.
+ */
+export function mouthModelWeight(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+  fit: TwoPhaseFit,
+  s2: number,
+): number | undefined {
+  const sMax = x[x.length - 1]!;
+  if (fit.linear || !(fit.breakSalinity < sMax)) return undefined;
+  const m = fitTwoPhaseAtBreak(x, y, w, sMax);
+  if (!m) return undefined;
+  const dAic = (m.rss - fit.rss) / s2 - 2;
+  const weight = 1 / (1 + Math.exp(Math.min(700, dAic / 2)));
+  return Number.isFinite(weight) ? weight : undefined;
 }
 
 /**

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { expectWithin } from "../helpers/tolerance.ts";
 import { fitTwoPhase, type TwoPhaseFit } from "../../analysis/mixing/twoPhase.ts";
-import { MIN_SEAWARD_STATIONS, mouthAveragedEffective } from "../../analysis/mixing/twoPhaseMouth.ts";
+import { MIN_SEAWARD_STATIONS, mouthAveragedEffective, mouthModelWeight } from "../../analysis/mixing/twoPhaseMouth.ts";
 import { SHAPES } from "../../bench/calibration/forwardModel.ts";
 import { scoreCell } from "../../bench/calibration/cell.ts";
 
@@ -78,11 +78,32 @@ describe("mouthAveragedEffective (Akaike-weighted seaward end models, Buckland e
     expectWithin(m.value >= lo - 1e-9 && m.value <= hi + 1e-9 ? 1 : 0, 1, 0, "averaged value between its models");
   });
 
-  it("calibration guard (seeded synthetic surveys, bench/calibration): removal continuing to the mouth, 20 km-even stations, 2 % noise: the % change is within 2 pp of the truth on average and its 95 % interval covers it in ≥ 90 % of 40 surveys (before: +2.4 pp, 88 % of 100)", () => {
+  it("calibration guard (seeded synthetic surveys, bench/calibration): removal continuing to the mouth, 20 km-even stations, 2 % noise: the % change is within 2 pp of the truth on average and its 95 % interval covers it in ≥ 90 % of 40 surveys and ≥ 95 % carry a warning that C*₀ may be biased (before: +2.4 pp, 88 % of 100, 99 % warned)", () => {
     const shape = SHAPES.find((s) => s.name === "removal→mouth")!;
     const s = scoreCell(shape, { stations: 20, spacing: "km", noise: 0.02 }, 40, 150);
     expectWithin(s.percentBiasPp, 0, 2, "bias of % change [pp]");
     expectWithin(s.percentCoverage >= 0.9 ? 1 : 0, 1, 0, `coverage of % change ${s.percentCoverage}`);
     expectWithin(s.outsideOwnInterval, 0, 0, "estimates outside their own interval");
+    // Every survey says C*₀ may be biased (reaction-reaches-mouth, short-seaward-line or seaward-line-untested).
+    expectWithin(s.biasWarned >= 0.95 ? 1 : 0, 1, 0, `share warned ${s.biasWarned}`);
+  });
+
+  it("mouthModelWeight: a reaction that ends at S 12 with a long straight tail leaves the break-at-the-mouth model no weight; a curve bending to the last station gives it a real one (Akaike 1974 weights, derived exact data with σ = 0.1)", () => {
+    const xs = Array.from({ length: 20 }, (_, i) => 0.5 + (32.5 * i) / 19);
+    const w = xs.map(() => 100);
+    const ended = xs.map((s) => 40 - 0.9 * s + (s < 12 ? 0.08 * (12 - s) ** 3 : 0));
+    const fEnded = fitTwoPhase(xs, ended, w)!;
+    expectWithin(fEnded.linear ? 0 : 1, 1, 0, "two-phase fit found");
+    expectWithin(
+      mouthModelWeight(xs, ended, w, fEnded, 1)!,
+      0,
+      1e-6,
+      "weight of the mouth model, reaction ending at S 12",
+    );
+    const curving = xs.map((s) => 100 - 4 * s + 0.05 * s * s);
+    const fCurving = { ...fitWithBreak(27, 0, 0, 0.5, 33), rss: 0 };
+    const wCurving = mouthModelWeight(xs, curving, w, fCurving, 1)!;
+    // The quadratic is inside the cubic model with its break at S_max (RSS 0): ΔAIC = −2, w = 1/(1 + e⁻¹).
+    expectWithin(wCurving, 1 / (1 + Math.exp(-1)), 1e-6, "weight of the mouth model on a parabola");
   });
 });
