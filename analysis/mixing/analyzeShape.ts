@@ -267,10 +267,11 @@ export function analyzeShape(p: ShapeInput): {
       };
   }
   const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
-  if (tangent.method === "curve-tangent" || shortLine) {
-    // No straight seaward phase, or one resting on < 4 stations: C*₀ is a slope at the end of
+  if (tangent.method === "curve-tangent" || (shortLine && tangent.nStations < 3)) {
+    // No straight seaward phase, or one resting on < 3 stations: C*₀ is a slope at the end of
     // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
-    // their difference widens the intervals (between-model term of Buckland et al. 1997).
+    // their difference widens the intervals (between-model term of Buckland et al. 1997). A line on 3
+    // stations is not widened: its average with the curved end (in every replicate) carries that.
     const cSpline = f[G - 1]! - (sMax - sr) * d1[G - 1]!;
     // A short seaward line is already averaged with a curved end (mouthAveragedEffective, in every
     // bootstrap replicate too), so its intervals carry that model's uncertainty.
