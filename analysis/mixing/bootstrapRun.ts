@@ -8,7 +8,7 @@ import { seededNormal } from "../stats/seededNormal.ts";
 import { fitTwoPhase, seawardLine, twoPhaseDesign, twoPhaseMaximum, twoPhaseValue } from "./twoPhase.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
-import { mouthAveragedEffective } from "./twoPhaseMouth.ts";
+import { MIN_SEAWARD_STATIONS, mouthAveragedEffective } from "./twoPhaseMouth.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
 export interface BootstrapInput {
@@ -141,7 +141,15 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
           ? (riverByQuarticExtension(b.x, ys, b.w, fit, sr) ?? twoPhaseValue(fit, sr))
           : twoPhaseValue(fit, sr)) + (b.riverExtraSd ? b.riverExtraSd * z() : 0);
     usable++;
-    eff[d] = b.mouthS2 !== undefined ? mouthAveragedEffective(b.x, ys, b.w, fit, sr, b.mouthS2).value : ic + sl * sr;
+    eff[d] = ic + sl * sr;
+    // Only a seaward line on < MIN_SEAWARD_STATIONS stations is averaged (the check saves the call).
+    if (
+      b.mouthS2 !== undefined &&
+      !fit.linear &&
+      n > MIN_SEAWARD_STATIONS &&
+      b.x[n - MIN_SEAWARD_STATIONS]! < fit.breakSalinity
+    )
+      eff[d] = mouthAveragedEffective(b.x, ys, b.w, fit, sr, b.mouthS2).value;
     c0[d] = cr;
     if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
     if (!fit.linear) brk[d] = fit.breakAveraged ?? fit.breakSalinity;
