@@ -5,6 +5,7 @@ import { fileURLToPath } from "node:url";
 import { defineConfig } from "vite";
 import { svelte } from "@sveltejs/vite-plugin-svelte";
 import { proj4Trim } from "./proj4Trim.ts";
+import { sharedAnalysisWorker } from "./sharedWorker.ts";
 
 const dashboardDir = fileURLToPath(new URL(".", import.meta.url));
 const repoDir = fileURLToPath(new URL("..", import.meta.url));
@@ -30,7 +31,7 @@ function engineFingerprint(): string {
 export default defineConfig({
   root: dashboardDir,
   base: "./",
-  plugins: [proj4Trim, svelte({ configFile: false })],
+  plugins: [proj4Trim, sharedAnalysisWorker(), svelte({ configFile: false })],
   resolve: {
     // jStat as published is one object no bundler can trim; the dashboard ships the functions we call,
     // copied bit for bit (src/vendor/jstatSubset.ts; tests/dashboard/build/jstatSubset.test.ts).
