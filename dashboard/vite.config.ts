@@ -28,7 +28,8 @@ function engineFingerprint(): string {
 }
 
 // The dashboard is a static, offline bundle: no CDN, no remote tiles or fonts.
-// Demo data are imported from data-demo/ at build time (see src/lib/demoData.ts).
+// The demo's data files from data-demo/ ship as data files beside the JavaScript (src/lib/demoData.ts,
+// demoPreload.ts). The analysis worker is an entry of this build, sharing its chunks (sharedWorker.ts).
 export default defineConfig({
   root: dashboardDir,
   base: "./",
