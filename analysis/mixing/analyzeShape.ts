@@ -26,6 +26,8 @@ import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
 import { fitQuarticExtension, riverModelSpread } from "./riverExtension.ts";
 import { coarseExtrapolationWarning } from "./riverReference.ts";
+import { reactionExtent } from "./reactionExtent.ts";
+import { breakModelSpread } from "./breakModelSpread.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -65,9 +67,15 @@ export const BREAK_GOAL_S = 2;
 /**
  * Largest bootstrap standard error of the extrapolated river value, as a fraction of it, before the
  * extrapolation to the reference salinity is called unstable and the freshest stations' mean is used
- * at their own salinity instead (documented choice).
+ * at their own salinity instead: one third, where the 95 % interval of C₀ reaches down to about a third
+ * of C₀ (1 − 1.96/3 ≈ 0.35) and the % change's upper limit is no longer bounded in practice. Below it
+ * the quartic extension is kept with its wide interval rather than swapped for the cubic landward phase
+ * or the freshest stations' mean, whose smaller spread hides a model error (documented choice;
+ * calibration, desorption ending at S 5, 20 km-even stations, 5 % noise: with a limit of 0.2 those swaps
+ * gave a % change bias of −6.8 pp and 81 % coverage, with one third −1.3 pp and 96 %; a river history
+ * within the flushing time, Loder & Reichard 1981, still sends C₀ to the freshest stations' mean).
  */
-export const RIVER_SE_LIMIT = 0.2;
+export const RIVER_SE_LIMIT = 1 / 3;
 
 /** Smallest χ²_ν of the two-phase fit at which C₀ and C*₀ are bootstrap bias-corrected (documented choice). */
 export const BIAS_CORRECTION_MIN_CHI2 = 0.25;
@@ -191,7 +199,7 @@ export function analyzeShape(p: ShapeInput): {
     draws > 0 &&
     (!(river.conc > 0) || (bs.riverSe !== undefined && bs.riverSe > RIVER_SE_LIMIT * Math.abs(river.conc)))
   ) {
-    // The quartic extension is too uncertain with this noise: the cubic landward phase instead.
+    // The quartic extension's interval reaches zero with this noise: the cubic landward phase instead.
     river = { ...river, conc: twoPhaseAt(tp, sr)[0] };
     riverModel = "cubic";
     bs = boot(sr, river, override, cStar);
@@ -233,7 +241,19 @@ export function analyzeShape(p: ShapeInput): {
       river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
     cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
   }
-  if (!override) warnings.push(...coarseExtrapolationWarning(used, tp, river, riverModel, unit));
+  // How far landward the stations show the reaction (lack-of-fit of the extended seaward line, reactionExtent.ts).
+  const extent =
+    tangent.method === "segment"
+      ? reactionExtent(
+          x,
+          conc,
+          used.map((s) => s.sigma * scatter),
+          tp,
+          Math.min(tp.breakAveraged ?? tp.breakSalinity, bs.breakSalinity?.[0] ?? Number.POSITIVE_INFINITY),
+        )
+      : undefined;
+  if (!override)
+    warnings.push(...coarseExtrapolationWarning(used, tp, river, riverModel, unit, extent?.reactionStations));
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
@@ -254,6 +274,21 @@ export function analyzeShape(p: ShapeInput): {
         lower: percent.value - Math.hypot(percent.value - percent.lower, dPct),
         upper: percent.value + Math.hypot(percent.upper - percent.value, dPct),
       };
+  }
+  // Model-selection uncertainty of the break as the data's profile over breaks sees it (breakModelSpread.ts):
+  // the replicates, drawn around a curve whose curvature stops at its break, place the break more surely
+  // than data whose curvature fades (Buckland et al. 1997 between-model term, in quadrature).
+  const spread =
+    tangent.method === "segment" && !tp.linear
+      ? breakModelSpread(x, conc, wts, tp, sr, percent && (override ? river.conc : riverModel))
+      : undefined;
+  if (spread) {
+    const widen = (e: Estimate, d: number): Estimate =>
+      Number.isFinite(d) && d > 0
+        ? { ...e, lower: e.value - Math.hypot(e.value - e.lower, d), upper: e.value + Math.hypot(e.upper - e.value, d) }
+        : e;
+    effective = widen(effective, spread.effective);
+    if (percent && spread.percent !== undefined) percent = widen(percent, spread.percent);
   }
   const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
   if (tangent.method === "curve-tangent" || shortLine) {
@@ -361,12 +396,27 @@ export function analyzeShape(p: ShapeInput): {
   const rD2 = Float64Array.from(rGrid, (s) => twoPhaseAt(tp, s)[2]);
   const rp = rateProfile(rGrid, rD2, sr, o, cStar, river.conc);
   warnings.push(...rp.warnings);
-  const breakEst =
+  let breakEst =
     segStart !== undefined ? estimateOf(tp.breakAveraged ?? tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
+  // The break search needs 4 stations landward of a break: where the interval reaches that limit, the
+  // replicates cannot place the break farther landward, and the interval is extended down to the lowest
+  // break the stations do not reject (reactionExtent.ts).
+  const censored = !!breakEst && !!extent?.atLandwardLimit && extent.lowestBreak < breakEst.lower;
+  if (breakEst && censored) breakEst = { ...breakEst, lower: extent!.lowestBreak };
+  // Below the search's landward limit the maximum's place is the fitted curve's, not the stations': its
+  // interval reaches down to the station landward of the highest one (where a single peak must begin).
+  if (censored && maximum) {
+    let top = 0;
+    for (let i = 1; i < n; i++) if (used[i]!.conc > used[top]!.conc) top = i;
+    const floor = used[Math.max(0, top - 1)]!.salinity;
+    if (maximum.salinity.lower > floor) maximum = { ...maximum, salinity: { ...maximum.salinity, lower: floor } };
+  }
   if (breakEst && breakEst.upper - breakEst.lower > 2 * BREAK_GOAL_S)
     warnings.push({
       code: "break-uncertain",
-      message: `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)} (95 %), wider than ±${BREAK_GOAL_S}: the curvature fades below the analytical precision there. C*₀ and its interval include this uncertainty; the "conservative beyond" salinity does not have that precision.`,
+      message: censored
+        ? `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)}: every station between S ${extent!.lowestBreak.toFixed(1)} (the first one landward of the break that lies more than 2σ off the seaward line) and the fitted break is within 2σ of that line, and with so few stations at low salinity the curve fit cannot place the break landward of S ${breakEst.value.toFixed(1)}. The reaction may end anywhere in that range; the break, the reaction zone and the maximum are not located more precisely, and C₀ (extrapolated along the fitted curve) may be biased. Stations at low salinity would settle it.`
+        : `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)} (95 %), wider than ±${BREAK_GOAL_S}: the curvature fades below the analytical precision there. C*₀ and its interval include this uncertainty; the "conservative beyond" salinity does not have that precision.`,
     });
   const verdict = verdictOf(cls, percent, effective, unit, warnings);
   const band = (arr: number[]): number[] =>
