@@ -1,0 +1,115 @@
+// Cold starts of the bare map page and the built dashboard, each page load in its own freshly
+// launched Chromium (bench flags, fresh profile), alternating bare / dashboard, N pairs. Prints each
+// pair and the medians. Not a bench row: a quick way to compare builds on a noisy shared machine.
+// Usage: npx tsx bench/profile/coldPairs.ts [--runs N] [--warm-bare]   (build dashboard/dist first)
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir, loadavg } from "node:os";
+import { join } from "node:path";
+import { spawn } from "node:child_process";
+import { chromium } from "playwright-core";
+import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
+import { serveBareMap } from "../fixtures/bareMap.ts";
+import { DIST, REPO, ensureDist } from "../fixtures/dashboardDist.ts";
+
+const FIRST_VIEW = {
+  all: [
+    '[data-active-analysis="ready"]',
+    '[data-map-ready="true"]',
+    '[data-panel="MixingPlot"] svg',
+    '[data-panel="ChannelProfile"] svg',
+    '[data-panel="BehaviourTable"] table',
+  ],
+  none: ['[data-testid="speciation-pending"]'],
+};
+const BARE = { all: ['[data-ready="true"]'], none: [] as string[] };
+
+async function coldLoad(url: string, spec: { all: string[]; none: string[] }): Promise<Record<string, number>> {
+  const profile = mkdtempSync(join(tmpdir(), "brackline-pairs-"));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM_PATH,
+    headless: true,
+    args: CHROMIUM_FLAGS,
+    viewport: { width: 1440, height: 900 },
+  });
+  try {
+    const page = context.pages()[0] ?? (await context.newPage());
+    await page.addInitScript({
+      content: `globalThis.__name = globalThis.__name || ((f) => f);
+      (() => { const m = (window.__marks = {}); const sels = ${JSON.stringify({ ...Object.fromEntries(FIRST_VIEW.all.map((s) => [s, s])), bare: BARE.all[0] })};
+      const tick = () => { for (const [k, s] of Object.entries(sels)) if (!(k in m) && document.querySelector(s)) m[k] = performance.now(); requestAnimationFrame(tick); };
+      requestAnimationFrame(tick); })();`,
+    });
+    await page.goto(url, { waitUntil: "load" });
+    const h = await page.waitForFunction(
+      ({ all, none }) =>
+        all.every((sel) => document.querySelector(sel)) && !none.some((sel) => document.querySelector(sel))
+          ? performance.now()
+          : false,
+      spec,
+      { polling: "raf", timeout: 180_000 },
+    );
+    const t = (await h.jsonValue()) as number;
+    const marks = (await page.evaluate(() => (window as unknown as { __marks: Record<string, number> }).__marks)) ?? {};
+    return { ready: t, ...marks };
+  } finally {
+    await context.close();
+    rmSync(profile, { recursive: true, force: true });
+  }
+}
+
+async function serveDist(dir: string): Promise<{ url: string; kill(): void }> {
+  const server = spawn(process.execPath, [join(REPO, "scripts", "serve.js"), "--dir", dir], {
+    env: { ...process.env, PORT: "0" },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  const url = await new Promise<string>((resolve) => {
+    let out = "";
+    server.stdout!.on("data", (c: Buffer) => {
+      out += c.toString();
+      const m = /(http:\/\/127\.0\.0\.1:\d+\/)/.exec(out);
+      if (m) resolve(m[1]!);
+    });
+  });
+  return { url, kill: () => server.kill() };
+}
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+const arg = (name: string) => process.argv[process.argv.indexOf(name) + 1];
+ensureDist();
+const runs = process.argv.includes("--runs") ? Number(arg("--runs")) : 3;
+// --dist DIR (repeatable): the built dashboards to compare, each loaded after the bare page in every round
+const dists = process.argv.flatMap((a, i) => (a === "--dist" ? [process.argv[i + 1]!] : []));
+if (dists.length === 0) dists.push(DIST);
+const bare = await serveBareMap();
+const dashes = await Promise.all(dists.map(serveDist));
+const b: number[] = [];
+const d: number[][] = dists.map(() => []);
+const short = (k: string) => k.replace(/^\[data-|"\]$|="true|="ready|\] svg$|\] table$/g, "").slice(0, 16);
+try {
+  for (let i = 0; i < runs; i++) {
+    const rb = await coldLoad(bare.url, BARE);
+    b.push(rb.ready!);
+    const parts = [`round ${i + 1}: bare ${rb.ready!.toFixed(0)}`];
+    for (const [k, dash] of dashes.entries()) {
+      const rd = await coldLoad(dash.url, FIRST_VIEW);
+      d[k]!.push(rd.ready!);
+      parts.push(
+        `  ${dists[k]}: ${rd.ready!.toFixed(0)} ms = ${(rd.ready! / rb.ready!).toFixed(2)}× (${Object.entries(rd)
+          .filter(([key]) => key !== "ready" && !/svg|table/.test(key))
+          .map(([key, v]) => `${short(key)} ${v.toFixed(0)}`)
+          .join(", ")})`,
+      );
+    }
+    console.log(
+      `${parts.join("\n")}\n  load ${loadavg()
+        .map((l) => l.toFixed(1))
+        .join(" ")}`,
+    );
+  }
+  console.log(
+    `median: bare ${median(b).toFixed(0)} ms; ${dists.map((x, k) => `${x} ${median(d[k]!).toFixed(0)} ms ${(median(d[k]!) / median(b)).toFixed(2)}×`).join("; ")}`,
+  );
+} finally {
+  for (const x of dashes) x.kill();
+  bare.close();
+}
