@@ -2,7 +2,7 @@
 // launched Chromium (bench flags, fresh profile), alternating bare / dashboard, N pairs. Prints each
 // pair and the medians. Not a bench row: a quick way to compare builds on a noisy shared machine.
 // Usage: npx tsx bench/profile/coldPairs.ts [--runs N] [--warm-bare]   (build dashboard/dist first)
-import { mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, readFileSync, readdirSync, rmSync } from "node:fs";
 import { tmpdir, loadavg } from "node:os";
 import { join } from "node:path";
 import { spawn } from "node:child_process";
@@ -23,6 +23,73 @@ const FIRST_VIEW = {
 };
 const BARE = { all: ['[data-ready="true"]'], none: [] as string[] };
 
+/** CPU ms by process type and thread name of a Chromium's processes (see browserCpuS). */
+function threadCpuMs(profile: string): Map<string, number> {
+  const out = new Map<string, number>();
+  for (const pid of browserPids(profile)) {
+    try {
+      const type =
+        /--type=([\w-]+)/.exec(readFileSync(`/proc/${pid}/cmdline`, "utf8").replace(/\0/g, " "))?.[1] ?? "browser";
+      for (const tid of readdirSync(`/proc/${pid}/task`)) {
+        const stat = readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8");
+        const comm = stat.slice(stat.indexOf("(") + 1, stat.lastIndexOf(")")).replace(/\d+$/, "");
+        const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+        const key = `${type}/${comm}`;
+        out.set(key, (out.get(key) ?? 0) + (Number(f[11]) + Number(f[12])) * 10);
+      }
+    } catch {
+      // ended meanwhile
+    }
+  }
+  return out;
+}
+
+/** CPU seconds (user + system) used so far by the Chromium whose profile directory is `profile` and all its child processes. */
+function browserCpuS(profile: string): number {
+  let ticks = 0;
+  for (const pid of browserPids(profile)) {
+    try {
+      const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      ticks += Number(f[11]) + Number(f[12]);
+    } catch {
+      // ended meanwhile
+    }
+  }
+  return ticks / 100;
+}
+
+/** The pids of the Chromium whose profile directory is `profile` and of all its child processes. */
+function browserPids(profile: string): Set<number> {
+  const procs = new Map<number, { ppid: number; ticks: number; root: boolean }>();
+  for (const name of readdirSync("/proc")) {
+    if (!/^\d+$/.test(name)) continue;
+    try {
+      const stat = readFileSync(`/proc/${name}/stat`, "utf8");
+      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      const cmd = readFileSync(`/proc/${name}/cmdline`, "utf8");
+      procs.set(Number(name), {
+        ppid: Number(f[1]),
+        ticks: Number(f[11]) + Number(f[12]),
+        root: cmd.includes(profile) && !cmd.includes("--type="),
+      });
+    } catch {
+      // the process ended meanwhile
+    }
+  }
+  const roots = [...procs].filter(([, p]) => p.root).map(([pid]) => pid);
+  const all = new Set(roots);
+  for (let grew = true; grew;) {
+    grew = false;
+    for (const [pid, p] of procs)
+      if (!all.has(pid) && all.has(p.ppid)) {
+        all.add(pid);
+        grew = true;
+      }
+  }
+  return all;
+}
+
 async function coldLoad(url: string, spec: { all: string[]; none: string[] }): Promise<Record<string, number>> {
   const profile = mkdtempSync(join(tmpdir(), "brackline-pairs-"));
   const context = await chromium.launchPersistentContext(profile, {
@@ -39,6 +106,7 @@ async function coldLoad(url: string, spec: { all: string[]; none: string[] }): P
       const tick = () => { for (const [k, s] of Object.entries(sels)) if (!(k in m) && document.querySelector(s)) m[k] = performance.now(); requestAnimationFrame(tick); };
       requestAnimationFrame(tick); })();`,
     });
+    const cpu0 = browserCpuS(profile);
     await page.goto(url, { waitUntil: "load" });
     const h = await page.waitForFunction(
       ({ all, none }) =>
@@ -49,8 +117,13 @@ async function coldLoad(url: string, spec: { all: string[]; none: string[] }): P
       { polling: "raf", timeout: 180_000 },
     );
     const t = (await h.jsonValue()) as number;
+    const cpuMs = (browserCpuS(profile) - cpu0) * 1000;
+    if (process.argv.includes("--threads")) {
+      const rows = [...threadCpuMs(profile)].filter(([, ms]) => ms >= 30).sort((a, b) => b[1] - a[1]);
+      console.log(`    threads (CPU ms since launch): ${rows.map(([k, ms]) => `${k} ${ms}`).join(", ")}`);
+    }
     const marks = (await page.evaluate(() => (window as unknown as { __marks: Record<string, number> }).__marks)) ?? {};
-    return { ready: t, ...marks };
+    return { ready: t, cpuMs, ...marks };
   } finally {
     await context.close();
     rmSync(profile, { recursive: true, force: true });
@@ -84,18 +157,22 @@ const bare = await serveBareMap();
 const dashes = await Promise.all(dists.map(serveDist));
 const b: number[] = [];
 const d: number[][] = dists.map(() => []);
+const bc: number[] = [];
+const dc: number[][] = dists.map(() => []);
 const short = (k: string) => k.replace(/^\[data-|"\]$|="true|="ready|\] svg$|\] table$/g, "").slice(0, 16);
 try {
   for (let i = 0; i < runs; i++) {
     const rb = await coldLoad(bare.url, BARE);
     b.push(rb.ready!);
-    const parts = [`round ${i + 1}: bare ${rb.ready!.toFixed(0)}`];
+    bc.push(rb.cpuMs!);
+    const parts = [`round ${i + 1}: bare ${rb.ready!.toFixed(0)} ms (cpu ${rb.cpuMs!.toFixed(0)} ms)`];
     for (const [k, dash] of dashes.entries()) {
       const rd = await coldLoad(dash.url, FIRST_VIEW);
       d[k]!.push(rd.ready!);
+      dc[k]!.push(rd.cpuMs!);
       parts.push(
         `  ${dists[k]}: ${rd.ready!.toFixed(0)} ms = ${(rd.ready! / rb.ready!).toFixed(2)}× (${Object.entries(rd)
-          .filter(([key]) => key !== "ready" && !/svg|table/.test(key))
+          .filter(([key]) => key !== "ready" && !/svg|table|bare/.test(key))
           .map(([key, v]) => `${short(key)} ${v.toFixed(0)}`)
           .join(", ")})`,
       );
@@ -106,6 +183,9 @@ try {
         .join(" ")}`,
     );
   }
+  console.log(
+    `median CPU (all browser processes, navigation to ready): bare ${median(bc).toFixed(0)} ms; ${dists.map((x, k) => `${x} ${median(dc[k]!).toFixed(0)} ms`).join("; ")}`,
+  );
   console.log(
     `median: bare ${median(b).toFixed(0)} ms; ${dists.map((x, k) => `${x} ${median(d[k]!).toFixed(0)} ms ${(median(d[k]!) / median(b)).toFixed(2)}×`).join("; ")}`,
   );

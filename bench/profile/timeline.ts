@@ -1,6 +1,6 @@
 // One cold start of the built dashboard in a fresh Chromium: a timeline of long main-thread tasks
 // (PerformanceObserver "longtask"), the map's renders/idle/source events and the first-view markers.
-// Usage: npx tsx bench/profile/timeline.ts [--dist DIR]
+// Usage: npx tsx bench/profile/timeline.ts [--dist DIR | --bare] [--trace [--trace-out FILE]] [--cpu-out FILE]
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -8,6 +8,7 @@ import { spawn } from "node:child_process";
 import { chromium } from "playwright-core";
 import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
 import { DIST, REPO, ensureDist } from "../fixtures/dashboardDist.ts";
+import { serveBareMap } from "../fixtures/bareMap.ts";
 
 const INIT = `(() => {
   const log = (window.__tl = []);
@@ -86,6 +87,7 @@ function longTasks(buf: Buffer): void {
 
 const dist = process.argv.includes("--dist") ? process.argv[process.argv.indexOf("--dist") + 1]! : DIST;
 ensureDist();
+const bareMap = process.argv.includes("--bare") ? await serveBareMap() : undefined;
 const server = spawn(process.execPath, [join(REPO, "scripts", "serve.js"), "--dir", dist], {
   env: { ...process.env, PORT: "0" },
   stdio: ["ignore", "pipe", "pipe"],
@@ -125,9 +127,12 @@ try {
     await cdp.send("Profiler.setSamplingInterval", { interval: 1000 });
     await cdp.send("Profiler.start");
   }
-  await page.goto(url, { waitUntil: "load" });
-  await page.waitForSelector('[data-analysis-status="ready"]', { timeout: 60_000 });
-  await page.waitForSelector('[data-map-ready="true"]', { timeout: 60_000 });
+  await page.goto(bareMap?.url ?? url, { waitUntil: "load" });
+  if (bareMap) await page.waitForSelector('[data-ready="true"]', { timeout: 60_000 });
+  else {
+    await page.waitForSelector('[data-analysis-status="ready"]', { timeout: 60_000 });
+    await page.waitForSelector('[data-map-ready="true"]', { timeout: 60_000 });
+  }
   await page.waitForTimeout(500);
   if (cdp && cpuOut) {
     const { profile: cpu } = await cdp.send("Profiler.stop");
@@ -152,4 +157,5 @@ try {
   await browser.close();
   rmSync(profile, { recursive: true, force: true });
   server.kill();
+  bareMap?.close();
 }
