@@ -111,7 +111,13 @@ export async function openDashboard(viewport = { width: 1440, height: 900 }): Pr
     if (msg.type() === "error") errors.push(`console: ${msg.text()}`);
   });
   page.on("pageerror", (error) => errors.push(`page: ${error.message}`));
-  page.on("requestfailed", (req) => errors.push(`request failed: ${req.url()} ${req.failure()?.errorText ?? ""}`));
+  page.on("requestfailed", (req) => {
+    const reason = req.failure()?.errorText ?? "";
+    // A blob: fetch (MapLibre's worker reading an image or tile it was handed) cut off because the page
+    // reloads or the map is torn down is not a failure the user sees; any other failed request is.
+    if (req.url().startsWith("blob:") && reason === "net::ERR_ABORTED") return;
+    errors.push(`request failed: ${req.url()} ${reason}`);
+  });
   page.on("response", (res) => {
     if (res.status() >= 400) errors.push(`HTTP ${res.status()}: ${res.url()}`);
   });
