@@ -6,6 +6,7 @@
  */
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
+import { readSurveyText } from "../../../analysis/index.ts";
 import { createWorkerApi } from "../../../dashboard/src/worker/api.ts";
 import type { AnalysisEvent, AnalysisJob } from "../../../dashboard/src/worker/protocol.ts";
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
@@ -72,6 +73,18 @@ describe("the first survey analysed in two parts on two workers equals the singl
     const markedRun = await runJob(job({ firstParts: { count: 2, token: 8 } }), (api) => api.receivePart(8, 1, marked));
     const units = analysed(markedRun)[0]!.analysis.constituents.map((c) => c.unit);
     expect(units.filter((u) => u.endsWith("(part 1)"))).toHaveLength(names.length);
+  }, 240_000);
+
+  it("a restored workspace (setSurveys job, surveys already read): the same analysis from two parts", async () => {
+    const surveys = readSurveyText(demo("surveys/both-surveys.csv"), { fileName: "both-surveys.csv" }).surveys;
+    const restored = (extra: Partial<AnalysisJob> = {}) =>
+      job({ kind: "setSurveys", surveys, firstSurvey: 0, ...extra } as Partial<AnalysisJob>);
+    const single = await runJob(restored());
+    const split = restored({ firstParts: { count: 2, token: 5 } });
+    const part = await createWorkerApi().analysePart(split, 0, { index: 1, count: 2 });
+    expect(part?.constituents.length).toBeGreaterThan(0);
+    const events = await runJob(split, (api) => api.receivePart(5, 1, part));
+    expect(notProgress(events)).toEqual(notProgress(single));
   }, 240_000);
 
   it("a part that is not there (a second worker that failed or found the cache) is analysed by the first; a stale token is ignored", async () => {
