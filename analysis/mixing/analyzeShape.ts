@@ -16,7 +16,7 @@ import { salinityGrid, TIE_FRACTION } from "./curveFit.ts";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { runBootstrap } from "./bootstrapRun.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
-import { fitTwoPhaseAtBreak, twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
+import { twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
 import { verdictOf } from "./verdict.ts";
 import { classify } from "./classify.ts";
 import { dilutionAt } from "./dilutionLine.ts";
@@ -26,6 +26,9 @@ import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
 import { fitQuarticExtension, riverModelSpread } from "./riverExtension.ts";
 import { coarseExtrapolationWarning } from "./riverReference.ts";
+import { MIN_SEAWARD_STATIONS, mouthAveragedEffective, mouthModelWeight } from "./twoPhaseMouth.ts";
+import { reactionExtent } from "./reactionExtent.ts";
+import { breakModelSpread } from "./breakModelSpread.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
 export interface ShapeInput {
@@ -65,15 +68,28 @@ export const BREAK_GOAL_S = 2;
 /**
  * Largest bootstrap standard error of the extrapolated river value, as a fraction of it, before the
  * extrapolation to the reference salinity is called unstable and the freshest stations' mean is used
- * at their own salinity instead (documented choice).
+ * at their own salinity instead: one third, where the 95 % interval of C₀ reaches down to about a third
+ * of C₀ (1 − 1.96/3 ≈ 0.35) and the % change's upper limit is no longer bounded in practice. Below it
+ * the quartic extension is kept with its wide interval rather than swapped for the cubic landward phase
+ * or the freshest stations' mean, whose smaller spread hides a model error (documented choice;
+ * calibration, desorption ending at S 5, 20 km-even stations, 5 % noise: with a limit of 0.2 those swaps
+ * gave a % change bias of −6.8 pp and 81 % coverage, with one third −1.3 pp and 96 %; a river history
+ * within the flushing time, Loder & Reichard 1981, still sends C₀ to the freshest stations' mean).
  */
-export const RIVER_SE_LIMIT = 0.2;
+export const RIVER_SE_LIMIT = 1 / 3;
 
 /** Smallest χ²_ν of the two-phase fit at which C₀ and C*₀ are bootstrap bias-corrected (documented choice). */
 export const BIAS_CORRECTION_MIN_CHI2 = 0.25;
 
-/** Fewest stations on the straight seaward line before a `short-seaward-line` warning (a line through 2 points tests nothing). */
-export const MIN_SEAWARD_STATIONS = 3;
+/** Fewest stations on the straight seaward line before a `short-seaward-line` warning (twoPhaseMouth.ts). */
+export { MIN_SEAWARD_STATIONS };
+
+/**
+ * Akaike weight of "the reaction reaches the mouth" (twoPhaseMouth.ts mouthModelWeight) from which a
+ * seaward line of ≥ 4 stations gets a `seaward-line-untested` warning (documented choice: that model is
+ * then within ΔAIC ≈ 5.9 of the fit, not excluded by the data).
+ */
+export const MOUTH_WEIGHT_WARN = 0.05;
 
 /** −1 for a net removal, +1 for a net addition (the quadratic coefficient decides a zero change, as in classify). */
 function netSign(netDelta: number, quadCoef: number): -1 | 1 {
@@ -165,6 +181,7 @@ export function analyzeShape(p: ShapeInput): {
         netDelta: effectiveAt - rv.conc,
       },
       zoneSign: netSign(effectiveAt - rv.conc, p.quadCoef),
+      mouthS2: scatter * scatter,
     });
   let override = river.source === "override";
   // The straight line through all stations is rejected yet kept (no seaward phase separates): its
@@ -183,7 +200,9 @@ export function analyzeShape(p: ShapeInput): {
   };
   if (!override && lineRejected) useGroup("no curve to extrapolate along");
   let sr = river.salinity;
-  let cStar = tangent.intercept + tangent.slope * sr;
+  // C*₀ averaged over the seaward end models where the seaward line is short (twoPhaseMouth.ts).
+  const effectiveAt = (s: number): number => mouthAveragedEffective(x, conc, wts, tp, s, scatter * scatter).value;
+  let cStar = effectiveAt(sr);
   let bs = boot(sr, river, override, cStar);
   if (
     !override &&
@@ -191,7 +210,7 @@ export function analyzeShape(p: ShapeInput): {
     draws > 0 &&
     (!(river.conc > 0) || (bs.riverSe !== undefined && bs.riverSe > RIVER_SE_LIMIT * Math.abs(river.conc)))
   ) {
-    // The quartic extension is too uncertain with this noise: the cubic landward phase instead.
+    // The quartic extension's interval reaches zero with this noise: the cubic landward phase instead.
     river = { ...river, conc: twoPhaseAt(tp, sr)[0] };
     riverModel = "cubic";
     bs = boot(sr, river, override, cStar);
@@ -209,7 +228,7 @@ export function analyzeShape(p: ShapeInput): {
       message: `Extrapolating the fitted curve from the freshest stations to S = ${sr} gives C₀ = ${extrapolated.toPrecision(3)} ${unit}${se !== undefined ? ` ± ${se.toPrecision(2)} (bootstrap standard error)` : ""}, too uncertain to use: the freshest stations disagree more than a mixing curve explains (river variability or a steep change at the lowest salinities). C₀ and C*₀ are given at the freshest stations' salinity S = ${river.salinity.toFixed(2)} instead. A river sample upstream of the salt intrusion would settle it.`,
     });
     sr = river.salinity;
-    cStar = tangent.intercept + tangent.slope * sr;
+    cStar = effectiveAt(sr);
     bs = boot(sr, river, override, cStar);
   }
   if (draws > 0 && bs.usable < 0.9 * draws)
@@ -233,7 +252,19 @@ export function analyzeShape(p: ShapeInput): {
       river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
     cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
   }
-  if (!override) warnings.push(...coarseExtrapolationWarning(used, tp, river, riverModel, unit));
+  // How far landward the stations show the reaction (lack-of-fit of the extended seaward line, reactionExtent.ts).
+  const extent =
+    tangent.method === "segment"
+      ? reactionExtent(
+          x,
+          conc,
+          used.map((s) => s.sigma * scatter),
+          tp,
+          Math.min(tp.breakAveraged ?? tp.breakSalinity, bs.breakSalinity?.[0] ?? Number.POSITIVE_INFINITY),
+        )
+      : undefined;
+  if (!override)
+    warnings.push(...coarseExtrapolationWarning(used, tp, river, riverModel, unit, extent?.reactionStations));
   let effective: ConstituentAnalysis["effectiveEndmember"] = estimateOf(cStar, bs.effective, unit);
   let percent: ConstituentAnalysis["percentChange"];
   if (river.conc > 0) percent = finiteEstimate((100 * (cStar - river.conc)) / river.conc, bs.percent, "%");
@@ -255,26 +286,31 @@ export function analyzeShape(p: ShapeInput): {
         upper: percent.value + Math.hypot(percent.upper - percent.value, dPct),
       };
   }
+  // Model-selection uncertainty of the break as the data's profile over breaks sees it (breakModelSpread.ts):
+  // the replicates, drawn around a curve whose curvature stops at its break, place the break more surely
+  // than data whose curvature fades (Buckland et al. 1997 between-model term, in quadrature).
+  const spread =
+    tangent.method === "segment" && !tp.linear
+      ? breakModelSpread(x, conc, wts, tp, sr, percent && (override ? river.conc : riverModel))
+      : undefined;
+  if (spread) {
+    const widen = (e: Estimate, d: number): Estimate =>
+      Number.isFinite(d) && d > 0
+        ? { ...e, lower: e.value - Math.hypot(e.value - e.lower, d), upper: e.value + Math.hypot(e.upper - e.value, d) }
+        : e;
+    effective = widen(effective, spread.effective);
+    if (percent && spread.percent !== undefined) percent = widen(percent, spread.percent);
+  }
   const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
-  if (tangent.method === "curve-tangent" || shortLine) {
+  if (tangent.method === "curve-tangent" || (shortLine && tangent.nStations < 3)) {
     // No straight seaward phase, or one resting on < 3 stations: C*₀ is a slope at the end of
     // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
-    // their difference widens the intervals (between-model term of Buckland et al. 1997).
+    // their difference widens the intervals (between-model term of Buckland et al. 1997). A line on 3
+    // stations is not widened: its average with the curved end (in every replicate) carries that.
     const cSpline = f[G - 1]! - (sMax - sr) * d1[G - 1]!;
-    let delta = Math.abs(cSpline - cStar);
-    // A seaward line on < 3 stations cannot be told from a reaction reaching the mouth: the tangent of
-    // the two-phase curve with its break at the seaward-most station is a third model (its chord-vs-
-    // tangent difference is the bias of the short line when the reaction does reach the mouth).
-    const mouthFit = shortLine ? fitTwoPhaseAtBreak(x, conc, wts, sMax) : undefined;
-    if (mouthFit) {
-      const [v, dv] = twoPhaseAt(mouthFit, sMax);
-      // Akaike weight of the mouth model against the chosen break (same parameter count): the squared
-      // difference enters in proportion to it (Buckland et al. 1997: weighted between-model term).
-      const dChi2 = Math.max(0, mouthFit.rss - tp.rss) / scatter ** 2;
-      const wMouth = 1 / (1 + Math.exp(dChi2 / 2));
-      const dMouth = Math.sqrt(wMouth) * Math.abs(v - (sMax - sr) * dv - cStar);
-      if (Number.isFinite(dMouth) && dMouth > delta) delta = dMouth;
-    }
+    // A short seaward line is already averaged with a curved end (mouthAveragedEffective, in every
+    // bootstrap replicate too), so its intervals carry that model's uncertainty.
+    const delta = Math.abs(cSpline - cStar);
     const widen = (e: Estimate, d: number): Estimate => ({
       ...e,
       lower: e.value - Math.hypot(e.value - e.lower, d),
@@ -291,10 +327,22 @@ export function analyzeShape(p: ShapeInput): {
       });
   }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
+  const mouthWeight = mouthAveragedEffective(x, conc, wts, tp, sr, scatter * scatter).weight;
   if (segStart !== undefined && tangent.nStations < MIN_SEAWARD_STATIONS)
     warnings.push({
       code: "short-seaward-line",
-      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} cannot be tested, so the class does not say "then conservative". If the reaction in fact continues seaward, a line through these stations is a chord of the curve, not its tangent, and C*₀ is biased toward C₀ (the % change understated, by several percentage points in calibration with synthetic surveys); the interval includes the difference from a curve reaching the mouth only in proportion to how well the data support it. Stations between there and the sea end-member would settle it.`,
+      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} ${tangent.nStations < 3 ? 'cannot be tested, so the class does not say "then conservative"' : "is tested with one degree of freedom only (a curve passes through any 3 points)"}. If the reaction in fact continues seaward, a line through these stations is a chord of the curve, not its tangent, and C*₀ is biased toward C₀. C*₀ and its interval are therefore averaged with the tangent of a local quadratic through these stations and the next one landward, in proportion to how well the data support a curved end (Akaike weight ${(100 * mouthWeight).toFixed(0)} %); a bias of a few percentage points remains possible. Stations between there and the sea end-member would settle it.`,
+    });
+  // A seaward line of ≥ 4 stations that the data cannot tell from a reaction reaching the mouth
+  // (Akaike weight of the break at S_max ≥ MOUTH_WEIGHT_WARN): the chord bias is not bounded.
+  const wReach =
+    segStart !== undefined && tangent.nStations >= MIN_SEAWARD_STATIONS
+      ? mouthModelWeight(x, conc, wts, tp, scatter * scatter)
+      : undefined;
+  if (wReach !== undefined && wReach >= MOUTH_WEIGHT_WARN)
+    warnings.push({
+      code: "seaward-line-untested",
+      message: `The straight seaward line (${tangent.nStations} stations, S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}) cannot be told from a reaction that continues to the seaward-most station: a curve with no straight seaward phase fits nearly as well (Akaike weight ${(100 * wReach).toFixed(0)} %). If the reaction does continue, the line is a chord of the curve: C*₀ is biased toward C₀ (the % change understated, by several percentage points in calibration with synthetic surveys) beyond its interval, and "then conservative" is not established. More stations, or more precise ones, in the outer estuary would settle it.`,
     });
   const mS = twoPhaseMaximum(tp, sMax);
   // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the
@@ -361,12 +409,27 @@ export function analyzeShape(p: ShapeInput): {
   const rD2 = Float64Array.from(rGrid, (s) => twoPhaseAt(tp, s)[2]);
   const rp = rateProfile(rGrid, rD2, sr, o, cStar, river.conc);
   warnings.push(...rp.warnings);
-  const breakEst =
+  let breakEst =
     segStart !== undefined ? estimateOf(tp.breakAveraged ?? tp.breakSalinity, bs.breakSalinity, "salinity") : undefined;
+  // The break search needs 4 stations landward of a break: where the interval reaches that limit, the
+  // replicates cannot place the break farther landward, and the interval is extended down to the lowest
+  // break the stations do not reject (reactionExtent.ts).
+  const censored = !!breakEst && !!extent?.atLandwardLimit && extent.lowestBreak < breakEst.lower;
+  if (breakEst && censored) breakEst = { ...breakEst, lower: extent!.lowestBreak };
+  // Below the search's landward limit the maximum's place is the fitted curve's, not the stations': its
+  // interval reaches down to the station landward of the highest one (where a single peak must begin).
+  if (censored && maximum) {
+    let top = 0;
+    for (let i = 1; i < n; i++) if (used[i]!.conc > used[top]!.conc) top = i;
+    const floor = used[Math.max(0, top - 1)]!.salinity;
+    if (maximum.salinity.lower > floor) maximum = { ...maximum, salinity: { ...maximum.salinity, lower: floor } };
+  }
   if (breakEst && breakEst.upper - breakEst.lower > 2 * BREAK_GOAL_S)
     warnings.push({
       code: "break-uncertain",
-      message: `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)} (95 %), wider than ±${BREAK_GOAL_S}: the curvature fades below the analytical precision there. C*₀ and its interval include this uncertainty; the "conservative beyond" salinity does not have that precision.`,
+      message: censored
+        ? `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)}: every station between S ${extent!.lowestBreak.toFixed(1)} (the first one landward of the break that lies more than 2σ off the seaward line) and the fitted break is within 2σ of that line, and with so few stations at low salinity the curve fit cannot place the break landward of S ${breakEst.value.toFixed(1)}. The reaction may end anywhere in that range; the break, the reaction zone and the maximum are not located more precisely, and C₀ (extrapolated along the fitted curve) may be biased. Stations at low salinity would settle it.`
+        : `The end of the reaction (start of the straight seaward line) is located only to S ${breakEst.lower.toFixed(1)}–${breakEst.upper.toFixed(1)} (95 %), wider than ±${BREAK_GOAL_S}: the curvature fades below the analytical precision there. C*₀ and its interval include this uncertainty; the "conservative beyond" salinity does not have that precision.`,
     });
   const verdict = verdictOf(cls, percent, effective, unit, warnings);
   const band = (arr: number[]): number[] =>

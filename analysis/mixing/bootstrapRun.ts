@@ -8,6 +8,7 @@ import { seededNormal } from "../stats/seededNormal.ts";
 import { fitTwoPhase, seawardLine, twoPhaseDesign, twoPhaseMaximum, twoPhaseValue } from "./twoPhase.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
+import { MIN_SEAWARD_STATIONS, mouthAveragedEffective } from "./twoPhaseMouth.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
 export interface BootstrapInput {
@@ -44,6 +45,11 @@ export interface BootstrapInput {
   estimates?: { effective: number; percent: number; riverConc: number; netDelta: number };
   /** Sign of the reaction zone to locate in each replicate (that of the point estimate's net change). */
   zoneSign?: -1 | 1;
+  /**
+   * When given (the full-data max(1, χ²_ν)), each replicate's C*₀ is averaged over the seaward end
+   * models as the point estimate is (twoPhaseMouth.ts, Buckland et al. 1997).
+   */
+  mouthS2?: number;
 }
 
 /** 95 % percentile intervals of the bootstrap replicates (undefined when too few usable draws). */
@@ -136,6 +142,14 @@ export function runBootstrap(b: BootstrapInput): BootstrapResult {
           : twoPhaseValue(fit, sr)) + (b.riverExtraSd ? b.riverExtraSd * z() : 0);
     usable++;
     eff[d] = ic + sl * sr;
+    // Only a seaward line on < MIN_SEAWARD_STATIONS stations is averaged (the check saves the call).
+    if (
+      b.mouthS2 !== undefined &&
+      !fit.linear &&
+      n > MIN_SEAWARD_STATIONS &&
+      b.x[n - MIN_SEAWARD_STATIONS]! < fit.breakSalinity
+    )
+      eff[d] = mouthAveragedEffective(b.x, ys, b.w, fit, sr, b.mouthS2).value;
     c0[d] = cr;
     if (cr > 0) pct[d] = (100 * (eff[d]! - cr)) / cr;
     if (!fit.linear) brk[d] = fit.breakAveraged ?? fit.breakSalinity;

@@ -2,6 +2,7 @@ import type { Endmember, MixingWarning } from "./result.ts";
 import type { PreparedSample } from "./prepareSamples.ts";
 import { twoPhaseAt, type TwoPhaseFit } from "./twoPhase.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
+import { MIN_REACTION_STATIONS } from "./reactionExtent.ts";
 
 /** Farthest extrapolation (salinity units) from the freshest station down to S = 0. */
 export const MAX_RIVER_EXTRAPOLATION_S = 2;
@@ -93,15 +94,22 @@ export function riverSlopeWarning(
  * quartic extension, or that extension too uncertain), when the extrapolation moves C₀ by more than one
  * standard error from the curve at the freshest station; with the quartic extension, when the cubic
  * landward phase at the same break gives a C₀ more than one standard error away (two landward
- * models disagree). A model error that the bootstrap does not see can then bias C₀ and the % change
- * (calibration with synthetic surveys: desorption ending at S 5 with salinity-even stations, −3 to −7 pp).
+ * models disagree); and, whatever the models say, when fewer than {@link MIN_REACTION_STATIONS} distinct
+ * stations depart from the seaward line (`reactionStations`, reactionExtent.ts): the reaction
+ * is then seen at one or two stations and its shape between them and the river (which sets C₀) is
+ * the model's, not the data's. A model error that the bootstrap does not see can then bias C₀ and the
+ * % change (calibration with synthetic surveys: desorption ending at S 5 with salinity-even stations,
+ * −3 to −7 pp).
  *
  * @param used prepared samples sorted by salinity
  * @param fit the two-phase fit
  * @param river the river end-member at the reference salinity (concSd = its standard error)
  * @param model which landward model gave C₀
  * @param unit concentration unit for the message
+ * @param reactionStations distinct stations that show the reaction (off the seaward line), when known
  * @returns the warning, or none
+ * @see Hastie, T., Tibshirani, R. & Friedman, J. (2009) The Elements of Statistical Learning, 2nd ed.,
+ *   §7.3 (extrapolation error is model error; from memory).
  */
 export function coarseExtrapolationWarning(
   used: readonly PreparedSample[],
@@ -109,22 +117,25 @@ export function coarseExtrapolationWarning(
   river: Endmember,
   model: "quartic" | "cubic",
   unit: string,
+  reactionStations?: number,
 ): MixingWarning[] {
   const sMin = used[0]!.salinity;
   if (fit.linear || !(river.salinity < sMin)) return [];
   const atFreshest = twoPhaseAt(fit, sMin)[0];
   const other = model === "quartic" ? twoPhaseAt(fit, river.salinity)[0] : atFreshest;
-  if (!(Math.abs(river.conc - other) > river.concSd)) return [];
+  const fewSeen = reactionStations !== undefined && reactionStations < MIN_REACTION_STATIONS;
+  if (!(Math.abs(river.conc - other) > river.concSd) && !fewSeen) return [];
   const landward = used.filter((s) => s.salinity < fit.breakSalinity).length;
   const g = (v: number): string => v.toPrecision(3);
-  const why =
-    model === "quartic"
+  const why = fewSeen
+    ? `along a reaction curve seen at only ${reactionStations} station(s) off the seaward line`
+    : model === "quartic"
       ? `a cubic instead of a quartic reaction curve through the same ${landward} stations below S ${fit.breakSalinity.toFixed(1)} gives ${g(other)} ${unit}`
       : `along a reaction curve resting on ${landward} station(s) below S ${fit.breakSalinity.toFixed(1)}`;
   return [
     {
       code: "river-extrapolation-coarse",
-      message: `C₀ = ${g(river.conc)} ${unit} at S = ${river.salinity} is extrapolated from the freshest station (S = ${sMin.toFixed(2)}, curve value ${g(atFreshest)} ${unit}) ${model === "quartic" ? `(${why})` : why}: the shape of the reaction between the river and those stations is assumed, so C₀ and the % change may be biased by more than their intervals show (a few percentage points in calibration with synthetic surveys). A river sample at S ≈ 0, or more stations at low salinity, would remove this.`,
+      message: `C₀ = ${g(river.conc)} ${unit} at S = ${river.salinity} is extrapolated from the freshest station (S = ${sMin.toFixed(2)}, curve value ${g(atFreshest)} ${unit}) ${model === "quartic" && !fewSeen ? `(${why})` : why}: the shape of the reaction between the river and those stations is assumed, so C₀ and the % change may be biased by more than their intervals show (a few percentage points in calibration with synthetic surveys). A river sample at S ≈ 0, or more stations at low salinity, would remove this.`,
     },
   ];
 }

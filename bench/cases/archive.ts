@@ -1,14 +1,16 @@
 // Benchmark: the whole San Francisco Bay cruise archive 2016–2022 (../shared/data, read at run time)
 // with its station table through the built CLI (`brackline compare`, four nutrients, 2,000 bootstrap
-// draws, no cache), on 2 worker threads against the same command on one thread (--threads 0), each in
-// a fresh process, in the same run. The load average is printed beside the numbers: on a shared
-// machine, compare runs made at different loads with care.
-import { execFile } from "node:child_process";
-import { mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
+// draws, no cache), on 2 threads (this one and a worker) against the same command on one thread
+// (--threads 0), each in a fresh process, in the same run: several pairs of runs in alternating order,
+// medians. The load average is printed beside the numbers; on a shared machine the per-thread CPU of
+// the analysis phase (from /proc, split when the CLI says the analysis starts) gives a lower bound of
+// the idle-machine times that the load does not change much.
+import { mkdirSync, writeFileSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import type { BenchCase, BenchRow } from "../benchCase.ts";
+import { idleBoundS, median, runSampled, type ThreadedRun } from "./archiveThreads.ts";
 import {
   northBayCenterline,
   SF_DIR,
@@ -20,36 +22,6 @@ import {
 const ROOT = fileURLToPath(new URL("../../", import.meta.url));
 const OUT = join(ROOT, "node_modules", ".cache", "brackline-bench-archive");
 const BIN = join(ROOT, "cli", "bin", "brackline.js");
-
-interface CliRun {
-  /** Whole process [s]. */
-  wallS: number;
-  /** The analysis phase as the CLI reports it ("archive: … in X s") [s]. */
-  analyseS: number;
-  /** CPU of the process and its threads [s]. */
-  cpuS: number;
-  surveys: number;
-  output: string;
-  /** CPU [s] of the main thread, of the busiest `threads − 1` other threads (the workers) and of all threads, sampled from /proc every 20 ms. */
-  threadsCpu?: { main: number; workers: number[]; total: number };
-}
-
-/**
- * A lower bound of the wall time this run would take on an idle 2-core machine, from its threads'
- * CPU: no less than the busiest thread, and no less than all its CPU shared by 2 cores.
- */
-function idleEstimateS(r: CliRun): number {
-  const t = r.threadsCpu;
-  if (!t) return Number.NaN;
-  return Math.max(t.main, ...t.workers, t.total / 2);
-}
-
-/** CPU [s] of the V8/libuv helper threads (garbage collection, optimising compiler): all threads but the JavaScript ones. */
-function helpersS(r: CliRun): number {
-  const t = r.threadsCpu;
-  if (!t) return Number.NaN;
-  return t.total - t.main - t.workers.reduce((x, y) => x + y, 0);
-}
 
 function archiveArgs(threads: number): string[] {
   const line = join(OUT, "north-bay.geojson");
@@ -72,69 +44,34 @@ function archiveArgs(threads: number): string[] {
   ];
 }
 
-/** CPU seconds of each thread of a running process (Linux /proc; empty elsewhere). */
-function threadCpuS(pid: number): Map<number, number> {
-  const out = new Map<number, number>();
-  try {
-    for (const tid of readdirSync(`/proc/${pid}/task`)) {
-      const stat = readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8");
-      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-      out.set(Number(tid), (Number(f[11]) + Number(f[12])) / 100); // utime + stime, clock ticks (100 Hz)
-    }
-  } catch {
-    // The process ended between two looks.
-  }
-  return out;
+const ANALYSIS_START = /archive: \d+ surveys, \d+ from the cache, \d+ to analyse/;
+const ANALYSIS_DONE = /archive: (\d+) surveys analysed, \d+ from the cache, in ([\d.]+) s/;
+/** Pairs of runs (one thread, two threads; the order alternates between pairs): BENCH_ARCHIVE_PAIRS, default 3. */
+const PAIRS = Math.max(1, Number(process.env.BENCH_ARCHIVE_PAIRS ?? 3) || 3);
+
+interface CliRun extends ThreadedRun {
+  /** The analysis phase as the CLI reports it ("archive: … in X s") [s]. */
+  analyseS: number;
+  surveys: number;
 }
 
-function cli(threads: number): Promise<CliRun> {
-  return new Promise((resolve, reject) => {
-    const t0 = performance.now();
-    const perThread = new Map<number, number>();
-    const child = execFile(process.execPath, archiveArgs(threads), { maxBuffer: 1 << 28 }, (e, out, err) => {
-      clearInterval(poll);
-      const wallS = (performance.now() - t0) / 1000;
-      if (e) return reject(new Error(`threads ${threads}: ${e.message} ${err.slice(-500)}`));
-      const m = /archive: (\d+) surveys analysed, \d+ from the cache, in ([\d.]+) s/.exec(err);
-      const pid = child.pid ?? -1;
-      const main = perThread.get(pid) ?? Number.NaN;
-      const others = [...perThread.entries()]
-        .filter(([t]) => t !== pid)
-        .map(([, c]) => c)
-        .sort((x, y) => y - x);
-      const workers = others.slice(0, Math.max(0, threads - 1));
-      const total = [...perThread.values()].reduce((x, y) => x + y, 0);
-      resolve({
-        wallS,
-        analyseS: Number(m?.[2] ?? NaN),
-        cpuS: NaN,
-        surveys: Number(m?.[1] ?? 0),
-        output: out,
-        threadsCpu: { main, workers, total },
-      });
-    });
-    const poll = setInterval(() => {
-      if (child.pid !== undefined) for (const [t, c] of threadCpuS(child.pid)) perThread.set(t, c);
-    }, 20);
-  });
+async function cli(threads: number): Promise<CliRun> {
+  const r = await runSampled(archiveArgs(threads), ANALYSIS_START, Math.max(0, threads - 1));
+  const m = ANALYSIS_DONE.exec(r.stderr);
+  return { ...r, analyseS: Number(m?.[2] ?? NaN), surveys: Number(m?.[1] ?? 0) };
 }
 
-/** CPU seconds used by finished children of this process so far. */
-function childrenCpuS(): number {
-  // process.resourceUsage() covers this process only; the children's CPU is read from /proc when there.
-  try {
-    const stat = readFileSync("/proc/self/stat", "utf8");
-    const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-    return (Number(f[13]) + Number(f[14])) / 100; // cutime + cstime, in clock ticks (100 Hz)
-  } catch {
-    return Number.NaN;
-  }
-}
+const f1 = (x: number): string => x.toFixed(1);
+const f2 = (x: number): string => x.toFixed(2);
+/** Median of one figure over runs. */
+const med = (runs: readonly CliRun[], f: (r: CliRun) => number): number => median(runs.map(f));
 
-async function measured(threads: number): Promise<CliRun> {
-  const c0 = childrenCpuS();
-  const r = await cli(threads);
-  return { ...r, cpuS: childrenCpuS() - c0 };
+/** "main 1.8 s, worker 1.6 s, helpers 0.8 s" (medians over the runs) of one phase. */
+function cpuText(runs: readonly CliRun[], ph: "all" | "analysis"): string {
+  const parts = [`main ${f1(med(runs, (r) => r[ph].main))} s`];
+  if (runs[0]![ph].workers.length > 0) parts.push(`worker ${f1(med(runs, (r) => r[ph].workers[0] ?? NaN))} s`);
+  parts.push(`V8/libuv helpers ${f1(med(runs, (r) => r[ph].helpers))} s`);
+  return parts.join(", ");
 }
 
 export const archiveBench: BenchCase = {
@@ -144,31 +81,43 @@ export const archiveBench: BenchCase = {
     mkdirSync(OUT, { recursive: true });
     writeFileSync(join(OUT, "north-bay.geojson"), northBayCenterline());
     const load0 = loadavg()[0]!;
-    await cli(2); // builds cli/dist/ when stale and warms the file cache, outside the timing
-    const one = await measured(0);
-    const two = await measured(2);
+    await cli(2); // warms the file cache, outside the timing
+    const one: CliRun[] = [];
+    const two: CliRun[] = [];
+    for (let p = 0; p < PAIRS; p++) {
+      // Alternating order, so a load that rises or falls during the bench favours neither side.
+      for (const threads of p % 2 === 0 ? [0, 2] : [2, 0]) (threads === 0 ? one : two).push(await cli(threads));
+    }
     const load1 = loadavg()[0]!;
-    const load = `load average ${load0.toFixed(2)} → ${load1.toFixed(2)} (1 min) on ${availableParallelism()} cores`;
+    const same = [...one, ...two].every((r) => r.stdout === one[0]!.stdout);
+    const load = `load average ${load0.toFixed(2)} → ${load1.toFixed(2)} (1 min) on ${availableParallelism()} cores; medians of ${PAIRS} pairs of runs (order alternating)`;
+    const pairRatios = (f: (r: CliRun) => number): string => one.map((o, i) => f2(f(o) / f(two[i]!))).join(", ");
+    const idleAll = (r: CliRun): number => idleBoundS(r.all);
+    const idleAnalysis = (r: CliRun): number => idleBoundS(r.analysis);
+    const wall2 = med(two, (r) => r.wallS);
+    const wall1 = med(one, (r) => r.wallS);
+    const an2 = med(two, (r) => r.analyseS);
+    const an1 = med(one, (r) => r.analyseS);
     return [
       {
-        name: `archive: brackline compare, whole 2016–2022 SF Bay archive + station table (${two.surveys} surveys, four nutrients, 2,000 draws, no cache), --threads 2 (this thread and a worker), process wall time`,
-        value: two.wallS,
+        name: `archive: brackline compare, whole 2016–2022 SF Bay archive + station table (${two[0]!.surveys} surveys, four nutrients, 2,000 draws, no cache), --threads 2 (this thread and a worker), process wall time`,
+        value: wall2,
         unit: "s",
-        baseline: { name: "same command, --threads 0", value: one.wallS },
-        ratio: one.wallS / two.wallS,
+        baseline: { name: "same command, --threads 0", value: wall1 },
+        ratio: wall1 / wall2,
         ratioLabel: "× speed-up (whole process)",
         goal: "≤ 5 s",
-        note: `${load}; CPU ${two.cpuS.toFixed(1)} s (one thread ${one.cpuS.toFixed(1)} s); per thread: main ${two.threadsCpu?.main.toFixed(1)} s, worker ${two.threadsCpu?.workers.map((w) => w.toFixed(1)).join(" + ")} s, V8/libuv helpers ${helpersS(two).toFixed(1)} s (one thread: main ${one.threadsCpu?.main.toFixed(1)} s, helpers ${helpersS(one).toFixed(1)} s; threaded runs tune V8's compiler, cli/archive/compilerTuning.ts, one-thread runs keep V8's defaults, which are faster there); idle-machine lower bound from the threads' CPU ${idleEstimateS(two).toFixed(1)} s (one thread ${idleEstimateS(one).toFixed(1)} s)`,
+        note: `${load}; per pair ${pairRatios((r) => r.wallS)}×; CPU ${f1(med(two, (r) => r.all.total))} s (one thread ${f1(med(one, (r) => r.all.total))} s): ${cpuText(two, "all")} (one thread: ${cpuText(one, "all")}); threaded runs tune V8's compiler (cli/archive/compilerTuning.ts), one-thread runs keep V8's defaults, which are faster there; no heap or young-generation limits are set in either; idle-machine lower bound from the threads' CPU ${f1(med(two, idleAll))} s (one thread ${f1(med(one, idleAll))} s); output byte-identical between all runs: ${same ? "yes" : "NO"}`,
       },
       {
         name: "archive: analysis phase of the same runs (as the CLI reports it: queue, threads, results)",
-        value: two.analyseS,
+        value: an2,
         unit: "s",
-        baseline: { name: "same work on this thread (--threads 0)", value: one.analyseS },
-        ratio: one.analyseS / two.analyseS,
+        baseline: { name: "same work on this thread (--threads 0)", value: an1 },
+        ratio: an1 / an2,
         ratioLabel: "× speed-up",
         goal: "≥ 1.7× on 2 cores",
-        note: `${load}; the worker starts while the files are read and reads some of them; ratio of the idle-machine lower bounds ${(idleEstimateS(one) / idleEstimateS(two)).toFixed(2)}×`,
+        note: `${load}; per pair ${pairRatios((r) => r.analyseS)}×; CPU in the phase: ${cpuText(two, "analysis")} (one thread: ${cpuText(one, "analysis")}); idle-machine lower bounds from the threads' CPU in the phase ${f2(med(two, idleAnalysis))} s vs ${f2(med(one, idleAnalysis))} s, ratio ${f2(median(one.map((o, i) => idleAnalysis(o) / idleAnalysis(two[i]!))))}× (median per pair); the worker starts while the files are read and reads some of them`,
       },
     ];
   },
