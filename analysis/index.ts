@@ -272,6 +272,8 @@ export type {
   OffChannelStation,
 } from "./pipeline/surveyAnalysis.ts";
 export { analyzeSurvey, DEFAULT_OFF_CHANNEL_M } from "./pipeline/analyzeSurvey.ts";
+export { constituentPartOf } from "./pipeline/constituentParts.ts";
+export type { ConstituentPart } from "./pipeline/constituentParts.ts";
 export { alongChannelSeries } from "./pipeline/alongChannelSeries.ts";
 export { offChannelStations } from "./pipeline/offChannel.ts";
 export { networkWithMouth } from "./pipeline/resolveMouth.ts";
