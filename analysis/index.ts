@@ -202,6 +202,8 @@ export type { CfTimeUnit } from "./io/cfTime.ts";
 export { suggestMapping } from "./io/suggestMapping.ts";
 export { COLUMN_ROLES } from "./io/columnRoles.ts";
 export { columnMappingSchema, columnAssignmentSchema, columnWithRole } from "./io/columnMapping.ts";
+export { checkSchema } from "./io/validation.ts";
+export type { SchemaIssue } from "./io/validation.ts";
 export type { ColumnMapping, ColumnAssignment, ColumnRole } from "./io/columnMapping.ts";
 export { fileShapeSignature, findSavedMapping } from "./io/fileShape.ts";
 export { emptySummary, mergeSummaries } from "./io/importSummary.ts";
@@ -270,6 +272,8 @@ export type {
   OffChannelStation,
 } from "./pipeline/surveyAnalysis.ts";
 export { analyzeSurvey, DEFAULT_OFF_CHANNEL_M } from "./pipeline/analyzeSurvey.ts";
+export { constituentPartOf } from "./pipeline/constituentParts.ts";
+export type { ConstituentPart } from "./pipeline/constituentParts.ts";
 export { alongChannelSeries } from "./pipeline/alongChannelSeries.ts";
 export { offChannelStations } from "./pipeline/offChannel.ts";
 export { networkWithMouth } from "./pipeline/resolveMouth.ts";

@@ -6,7 +6,7 @@
 import { basename } from "node:path";
 import { parseArgs } from "node:util";
 import type { DischargeTable, InputChoices, LayerChoice, MouthOption, WorkspaceSettings } from "../analysis/index.ts";
-import { readDischargeTable } from "../analysis/index.ts";
+import { checkSchema, readDischargeTable } from "../analysis/index.ts";
 import { parseUnitOverride, partialMappingSchema } from "../analysis/io/mappingChoices.ts";
 import { InputError, UsageError } from "./exitCodes.ts";
 import { readBytes } from "./files.ts";
@@ -147,10 +147,10 @@ function readMapping(path: string): InputChoices["mapping"] {
     if (error instanceof InputError) throw error;
     throw new InputError(`${path}: row 1: not valid JSON (${(error as Error).message})`);
   }
-  const parsed = partialMappingSchema.safeParse(doc);
+  const parsed = checkSchema(partialMappingSchema, doc);
   if (!parsed.success) {
-    const first = parsed.error.issues[0];
-    const where = first?.path.length ? ` at ${first.path.join(".")}` : "";
+    const first = parsed.issues[0];
+    const where = first?.path ? ` at ${first.path}` : "";
     throw new InputError(
       `${path}: expected a column mapping object as the dashboard saves it ({ "columns": [...] })${where}: ${first?.message ?? "invalid"}`,
     );

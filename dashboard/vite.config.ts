@@ -5,6 +5,8 @@ import { fileURLToPath } from "node:url";
 import { defineConfig } from "vite";
 import { svelte } from "@sveltejs/vite-plugin-svelte";
 import { proj4Trim } from "./proj4Trim.ts";
+import { sharedAnalysisWorker } from "./sharedWorker.ts";
+import { demoPreload } from "./demoPreload.ts";
 
 const dashboardDir = fileURLToPath(new URL(".", import.meta.url));
 const repoDir = fileURLToPath(new URL("..", import.meta.url));
@@ -26,11 +28,12 @@ function engineFingerprint(): string {
 }
 
 // The dashboard is a static, offline bundle: no CDN, no remote tiles or fonts.
-// Demo data are imported from data-demo/ at build time (see src/lib/demoData.ts).
+// The demo's data files from data-demo/ ship as data files beside the JavaScript (src/lib/demoData.ts,
+// demoPreload.ts). The analysis worker is an entry of this build, sharing its chunks (sharedWorker.ts).
 export default defineConfig({
   root: dashboardDir,
   base: "./",
-  plugins: [proj4Trim, svelte({ configFile: false })],
+  plugins: [proj4Trim, sharedAnalysisWorker(), demoPreload, svelte({ configFile: false })],
   resolve: {
     // jStat as published is one object no bundler can trim; the dashboard ships the functions we call,
     // copied bit for bit (src/vendor/jstatSubset.ts; tests/dashboard/build/jstatSubset.test.ts).
@@ -43,6 +46,8 @@ export default defineConfig({
     outDir: "dist",
     emptyOutDir: true,
     target: "es2022",
+    // The demo's data files are fetched as files (src/lib/demoData.ts), never inlined into JavaScript.
+    assetsInlineLimit: (file) => (file.includes("/data-demo/") ? false : undefined),
     // maplibre-gl and deck.gl are large by nature; the whole app stays offline.
     chunkSizeWarningLimit: 2500,
   },

@@ -1,56 +1,56 @@
-import { z } from "./zodMini.ts";
+import { int, num, v } from "./validation.ts";
 
 import { COLUMN_ROLES, type ColumnRole } from "./columnRoles.ts";
 
 export { COLUMN_ROLES, type ColumnRole };
 
-export const columnAssignmentSchema = z.object({
+export const columnAssignmentSchema = v.object({
   /** Header text exactly as in the file. */
-  header: z.string(),
-  role: z.enum(COLUMN_ROLES),
+  header: v.string(),
+  role: v.picklist(COLUMN_ROLES),
   /** Constituent symbol (role "constituent"), e.g. "Si". */
-  name: z.optional(z.string()),
+  name: v.optional(v.string()),
   /** Canonical unit; required for constituents, conductivity, discharge. */
-  unit: z.optional(z.string()),
+  unit: v.optional(v.string()),
   /** Unit text as found in the header. */
-  unitText: z.optional(z.string()),
+  unitText: v.optional(v.string()),
   /** For role "flag": the header of the value column the flag belongs to. */
-  flagFor: z.optional(z.string()),
+  flagFor: v.optional(v.string()),
   /**
    * For constituents: "tracer" (dissolved, analysed against the dilution line) or "nonMixing"
    * (shown along the channel only); suggested from the name, the user may override it.
    */
-  kind: z.optional(z.enum(["tracer", "nonMixing"])),
+  kind: v.optional(v.picklist(["tracer", "nonMixing"])),
   /** Why the suggestion chose this role (shown in the mapping dialog). */
-  reason: z.optional(z.string()),
+  reason: v.optional(v.string()),
 });
 
 /** One column's assignment in a {@link ColumnMapping}. */
-export type ColumnAssignment = z.infer<typeof columnAssignmentSchema>;
+export type ColumnAssignment = v.InferOutput<typeof columnAssignmentSchema>;
 
-export const columnMappingSchema = z.object({
+export const columnMappingSchema = v.object({
   /** File-shape signature the mapping was made for (see fileShapeSignature). */
-  shape: z.string(),
-  columns: z.array(columnAssignmentSchema),
+  shape: v.string(),
+  columns: v.array(columnAssignmentSchema),
   /** Field delimiter; detected when absent. */
-  delimiter: z.optional(z.string()),
+  delimiter: v.optional(v.string()),
   /** Decimal comma; detected when absent. */
-  decimalComma: z.optional(z.boolean()),
+  decimalComma: v.optional(v.boolean()),
   /** Order of day, month and year in slash or dot dates ("1/21/16"). */
-  dateOrder: z.optional(z.enum(["MDY", "DMY", "YMD"])),
+  dateOrder: v.optional(v.picklist(["MDY", "DMY", "YMD"])),
   /** Time zone of the times as an ISO offset ("Z", "+01:00"); times stay local when absent. */
-  timeZone: z.optional(z.string()),
+  timeZone: v.optional(v.string()),
   /** EPSG code of projected x/y columns. */
-  epsg: z.optional(z.int()),
+  epsg: v.optional(int),
   /** Depths for the labels in a "depthLabel" column, e.g. {"S": 0.2}; unlisted labels only give the layer. */
-  depthLabels: z.optional(z.record(z.string(), z.number())),
+  depthLabels: v.optional(v.record(v.string(), num)),
 });
 
 /**
  * How the columns of one file shape are read: JSON-serialisable; the user confirms or corrects the
  * suggestion in the mapping dialog, and a saved mapping is reused for files of the same shape.
  */
-export type ColumnMapping = z.infer<typeof columnMappingSchema>;
+export type ColumnMapping = v.InferOutput<typeof columnMappingSchema>;
 
 /** Finds the first column with the role, or undefined. */
 export function columnWithRole(mapping: ColumnMapping, role: ColumnRole): ColumnAssignment | undefined {

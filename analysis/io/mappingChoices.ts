@@ -4,7 +4,7 @@ import { parseDelimitedText } from "./delimitedRecords.ts";
 import { detectDialect, stripBom } from "./dialect.ts";
 import { suggestMapping } from "./suggestMapping.ts";
 import { canonicalUnitText, concentrationUnitText } from "./unitText.ts";
-import { z } from "./zodMini.ts";
+import { checkSchema, v } from "./validation.ts";
 
 /** Headers and the first data rows of a delimited text (enough to suggest a mapping). */
 export function headOfText(text: string, rows = 50): { headers: string[]; sample: string[][] } {
@@ -98,9 +98,10 @@ export function applyUnitOverrides(
 
 /** The usual unit of a constituent, for the example in a message (never applied without the user). */
 /** A mapping file as users write it: `shape` and column `role`s may be left out (merged with the suggestion). */
-export const partialMappingSchema = z.extend(columnMappingSchema, {
-  shape: z.optional(z.string()),
-  columns: z.array(z.partial(columnAssignmentSchema, { role: true })),
+export const partialMappingSchema = v.object({
+  ...columnMappingSchema.entries,
+  shape: v.optional(v.string()),
+  columns: v.array(v.partial(columnAssignmentSchema, ["role"])),
 });
 
 /**
@@ -116,10 +117,10 @@ export function mergeMapping(
   user: unknown,
   suggested: ColumnMapping,
 ): { mapping: ColumnMapping } | { errors: string[] } {
-  const parsed = partialMappingSchema.safeParse(user);
+  const parsed = checkSchema(partialMappingSchema, user);
   if (!parsed.success)
     return {
-      errors: parsed.error.issues.map((i) => `${i.path.length > 0 ? i.path.join(".") : "(top level)"}: ${i.message}`),
+      errors: parsed.issues.map((i) => `${i.path !== "" ? i.path : "(top level)"}: ${i.message}`),
     };
   const u = parsed.data;
   const columns = suggested.columns.map((c) => {

@@ -1,4 +1,4 @@
-import type { z } from "./zodMini.ts";
+import { checkSchema, type SchemaIssue } from "./validation.ts";
 import type { ImportIssue } from "../survey/survey.ts";
 import { makeIssue } from "./importSummary.ts";
 import { WORKSPACE_MIGRATIONS } from "./workspaceMigrations.ts";
@@ -25,11 +25,11 @@ export { createWorkspace } from "./newWorkspace.ts";
  *   (e.g. a non-finite number, which JSON cannot hold)
  */
 export function exportWorkspace(ws: WorkspaceDocument): string {
-  const checked = workspaceSchema.safeParse(ws);
+  const checked = checkSchema(workspaceSchema, ws);
   if (!checked.success) {
-    const first = checked.error.issues[0];
+    const first = checked.issues[0];
     throw new TypeError(
-      `exportWorkspace(): ws.${first?.path.join(".") ?? ""} is invalid: ${first?.message ?? "schema mismatch"}`,
+      `exportWorkspace(): ws.${first?.path ?? ""} is invalid: ${first?.message ?? "schema mismatch"}`,
     );
   }
   // The validated copy has the schema's key order, so export(import(export(ws))) is byte-identical.
@@ -75,8 +75,8 @@ function sizeProblem(record: Record<string, unknown>): ImportIssue | undefined {
   return undefined;
 }
 
-function zodIssues(error: z.core.$ZodError, prefix: string): ImportIssue[] {
-  return error.issues.slice(0, 50).map((i) => makeIssue(FILE, 0, `${prefix}${i.path.join(".")}`, "", i.message));
+function schemaIssues(found: SchemaIssue[], prefix: string): ImportIssue[] {
+  return found.slice(0, 50).map((i) => makeIssue(FILE, 0, `${prefix}${i.path}`, "", i.message));
 }
 
 /**
@@ -134,9 +134,9 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
   }
   while (version < WORKSPACE_VERSION) {
     const step = WORKSPACE_MIGRATIONS[version];
-    const parsed = step?.schema.safeParse(doc);
+    const parsed = step === undefined ? undefined : checkSchema(step.schema, doc);
     if (step === undefined || parsed === undefined || !parsed.success) {
-      if (parsed !== undefined && !parsed.success) appendAll(issues, zodIssues(parsed.error, ""));
+      if (parsed !== undefined && !parsed.success) appendAll(issues, schemaIssues(parsed.issues, ""));
       issues.push(makeIssue(FILE, 0, "version", String(version), `a valid version ${version} document to migrate`));
       return { workspace: undefined, issues };
     }
@@ -152,18 +152,18 @@ export function importWorkspace(text: string): { workspace: WorkspaceDocument | 
   }
   if (Array.isArray(record.surveys)) {
     record.surveys = record.surveys.filter((s, i) => {
-      const r = surveySchema.safeParse(s);
+      const r = checkSchema(surveySchema, s);
       if (!r.success)
         issues.push(
-          ...zodIssues(r.error, `surveys.${i}.`),
+          ...schemaIssues(r.issues, `surveys.${i}.`),
           makeIssue(FILE, 0, `surveys.${i}`, "", "a valid survey; this survey was left out", "warning"),
         );
       return r.success;
     });
   }
-  const result = workspaceSchema.safeParse(record);
+  const result = checkSchema(workspaceSchema, record);
   if (!result.success) {
-    appendAll(issues, zodIssues(result.error, ""));
+    appendAll(issues, schemaIssues(result.issues, ""));
     return { workspace: undefined, issues };
   }
   const tiles = result.data.settings.tileUrl;

@@ -1,18 +1,18 @@
-import { z } from "./zodMini.ts";
+import { num, v } from "./validation.ts";
 import { WORKSPACE_FORMAT } from "./workspaceSchema.ts";
 
 /**
  * Version 1 workspace (the first saved shape): surveys, the centerline as a bare list of
  * [lon, lat] pairs, mappings keyed by file shape, and a single survey-gap setting.
  */
-export const workspaceV1Schema = z.looseObject({
-  version: z.literal(1),
-  name: z.optional(z.string()),
-  surveys: z.array(z.unknown()),
-  centerline: z.optional(z.array(z.tuple([z.number(), z.number()]))),
-  mappings: z.optional(z.record(z.string(), z.looseObject({ columns: z.array(z.unknown()) }))),
-  surveyGapDays: z.optional(z.number()),
-  analysis: z.optional(z.record(z.string(), z.unknown())),
+export const workspaceV1Schema = v.looseObject({
+  version: v.literal(1),
+  name: v.optional(v.string()),
+  surveys: v.array(v.unknown()),
+  centerline: v.optional(v.array(v.tuple([num, num]))),
+  mappings: v.optional(v.record(v.string(), v.looseObject({ columns: v.array(v.unknown()) }))),
+  surveyGapDays: v.optional(num),
+  analysis: v.optional(v.record(v.string(), v.unknown())),
 });
 
 /**
@@ -24,7 +24,7 @@ export const workspaceV1Schema = z.looseObject({
  * @param doc a document that passed {@link workspaceV1Schema}
  * @returns a version 2 document (to be validated by the v2 schema)
  */
-export function migrateV1toV2(doc: z.infer<typeof workspaceV1Schema>): Record<string, unknown> {
+export function migrateV1toV2(doc: v.InferOutput<typeof workspaceV1Schema>): Record<string, unknown> {
   const line = doc.centerline ?? [];
   const centerline =
     line.length >= 2 ? { type: "Feature", geometry: { type: "LineString", coordinates: line }, properties: {} } : null;
@@ -47,7 +47,7 @@ export function migrateV1toV2(doc: z.infer<typeof workspaceV1Schema>): Record<st
 
 /** Migration steps: from version n to n + 1. */
 export const WORKSPACE_MIGRATIONS: Readonly<
-  Record<number, { schema: z.ZodMiniType; migrate: (doc: never) => Record<string, unknown> }>
+  Record<number, { schema: v.GenericSchema; migrate: (doc: never) => Record<string, unknown> }>
 > = {
   1: { schema: workspaceV1Schema, migrate: migrateV1toV2 as (doc: never) => Record<string, unknown> },
 };

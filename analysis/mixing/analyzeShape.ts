@@ -16,7 +16,7 @@ import { salinityGrid, TIE_FRACTION } from "./curveFit.ts";
 import { evaluateSplineGrid } from "../stats/naturalSpline.ts";
 import { runBootstrap } from "./bootstrapRun.ts";
 import { zoneFromCurve } from "./zoneAndMaximum.ts";
-import { alternativeFit, fitTwoPhaseAtBreak, twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
+import { alternativeFit, twoPhaseAt, twoPhaseMaximum, type TwoPhaseFit } from "./twoPhase.ts";
 import { verdictOf } from "./verdict.ts";
 import { classify } from "./classify.ts";
 import { dilutionAt } from "./dilutionLine.ts";
@@ -26,6 +26,7 @@ import { estimateOf, finiteEstimate } from "./estimate.ts";
 import { bootstrapBiasCorrected } from "../stats/bootstrapBias.ts";
 import { fitQuarticExtension, riverModelSpread } from "./riverExtension.ts";
 import { coarseExtrapolationWarning } from "./riverReference.ts";
+import { MIN_SEAWARD_STATIONS, mouthAveragedEffective, mouthModelWeight } from "./twoPhaseMouth.ts";
 import { reactionExtent } from "./reactionExtent.ts";
 import { breakModelSpread } from "./breakModelSpread.ts";
 
@@ -80,8 +81,15 @@ export const RIVER_SE_LIMIT = 1 / 3;
 /** Smallest χ²_ν of the two-phase fit at which C₀ and C*₀ are bootstrap bias-corrected (documented choice). */
 export const BIAS_CORRECTION_MIN_CHI2 = 0.25;
 
-/** Fewest stations on the straight seaward line before a `short-seaward-line` warning (a line through 2 points tests nothing). */
-export const MIN_SEAWARD_STATIONS = 3;
+/** Fewest stations on the straight seaward line before a `short-seaward-line` warning (twoPhaseMouth.ts). */
+export { MIN_SEAWARD_STATIONS };
+
+/**
+ * Akaike weight of "the reaction reaches the mouth" (twoPhaseMouth.ts mouthModelWeight) from which a
+ * seaward line of ≥ 4 stations gets a `seaward-line-untested` warning (documented choice: that model is
+ * then within ΔAIC ≈ 5.9 of the fit, not excluded by the data).
+ */
+export const MOUTH_WEIGHT_WARN = 0.05;
 
 /** −1 for a net removal, +1 for a net addition (the quadratic coefficient decides a zero change, as in classify). */
 function netSign(netDelta: number, quadCoef: number): -1 | 1 {
@@ -174,6 +182,7 @@ export function analyzeShape(p: ShapeInput): {
         netDelta: effectiveAt - rv.conc,
       },
       zoneSign: netSign(effectiveAt - rv.conc, p.quadCoef),
+      mouthS2: scatter * scatter,
     });
   let override = river.source === "override";
   // The straight line through all stations is rejected yet kept (no seaward phase separates): its
@@ -192,7 +201,9 @@ export function analyzeShape(p: ShapeInput): {
   };
   if (!override && lineRejected) useGroup("no curve to extrapolate along");
   let sr = river.salinity;
-  let cStar = tangent.intercept + tangent.slope * sr;
+  // C*₀ averaged over the seaward end models where the seaward line is short (twoPhaseMouth.ts).
+  const effectiveAt = (s: number): number => mouthAveragedEffective(x, conc, wts, tp, s, scatter * scatter).value;
+  let cStar = effectiveAt(sr);
   let bs = boot(sr, river, override, cStar);
   if (
     !override &&
@@ -218,7 +229,7 @@ export function analyzeShape(p: ShapeInput): {
       message: `Extrapolating the fitted curve from the freshest stations to S = ${sr} gives C₀ = ${extrapolated.toPrecision(3)} ${unit}${se !== undefined ? ` ± ${se.toPrecision(2)} (bootstrap standard error)` : ""}, too uncertain to use: the freshest stations disagree more than a mixing curve explains (river variability or a steep change at the lowest salinities). C₀ and C*₀ are given at the freshest stations' salinity S = ${river.salinity.toFixed(2)} instead. A river sample upstream of the salt intrusion would settle it.`,
     });
     sr = river.salinity;
-    cStar = tangent.intercept + tangent.slope * sr;
+    cStar = effectiveAt(sr);
     bs = boot(sr, river, override, cStar);
   }
   if (draws > 0 && bs.usable < 0.9 * draws)
@@ -292,25 +303,15 @@ export function analyzeShape(p: ShapeInput): {
     if (percent && spread.percent !== undefined) percent = widen(percent, spread.percent);
   }
   const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
-  if (tangent.method === "curve-tangent" || shortLine) {
+  if (tangent.method === "curve-tangent" || (shortLine && tangent.nStations < 3)) {
     // No straight seaward phase, or one resting on < 3 stations: C*₀ is a slope at the end of
     // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
-    // their difference widens the intervals (between-model term of Buckland et al. 1997).
+    // their difference widens the intervals (between-model term of Buckland et al. 1997). A line on 3
+    // stations is not widened: its average with the curved end (in every replicate) carries that.
     const cSpline = f[G - 1]! - (sMax - sr) * d1[G - 1]!;
-    let delta = Math.abs(cSpline - cStar);
-    // A seaward line on < 3 stations cannot be told from a reaction reaching the mouth: the tangent of
-    // the two-phase curve with its break at the seaward-most station is a third model (its chord-vs-
-    // tangent difference is the bias of the short line when the reaction does reach the mouth).
-    const mouthFit = shortLine ? fitTwoPhaseAtBreak(x, conc, wts, sMax) : undefined;
-    if (mouthFit) {
-      const [v, dv] = twoPhaseAt(mouthFit, sMax);
-      // Akaike weight of the mouth model against the chosen break (same parameter count): the squared
-      // difference enters in proportion to it (Buckland et al. 1997: weighted between-model term).
-      const dChi2 = Math.max(0, mouthFit.rss - tp.rss) / scatter ** 2;
-      const wMouth = 1 / (1 + Math.exp(dChi2 / 2));
-      const dMouth = Math.sqrt(wMouth) * Math.abs(v - (sMax - sr) * dv - cStar);
-      if (Number.isFinite(dMouth) && dMouth > delta) delta = dMouth;
-    }
+    // A short seaward line is already averaged with a curved end (mouthAveragedEffective, in every
+    // bootstrap replicate too), so its intervals carry that model's uncertainty.
+    const delta = Math.abs(cSpline - cStar);
     const widen = (e: Estimate, d: number): Estimate => ({
       ...e,
       lower: e.value - Math.hypot(e.value - e.lower, d),
@@ -327,10 +328,22 @@ export function analyzeShape(p: ShapeInput): {
       });
   }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
+  const mouthWeight = mouthAveragedEffective(x, conc, wts, tp, sr, scatter * scatter).weight;
   if (segStart !== undefined && tangent.nStations < MIN_SEAWARD_STATIONS)
     warnings.push({
       code: "short-seaward-line",
-      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} cannot be tested, so the class does not say "then conservative". If the reaction in fact continues seaward, a line through these stations is a chord of the curve, not its tangent, and C*₀ is biased toward C₀ (the % change understated, by several percentage points in calibration with synthetic surveys); the interval includes the difference from a curve reaching the mouth only in proportion to how well the data support it. Stations between there and the sea end-member would settle it.`,
+      message: `The straight seaward line rests on only ${tangent.nStations} station(s) (S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}): C*₀ extrapolates from them, and whether mixing is conservative beyond S ${tp.breakSalinity.toFixed(1)} ${tangent.nStations < 3 ? 'cannot be tested, so the class does not say "then conservative"' : "is tested with one degree of freedom only (a curve passes through any 3 points)"}. If the reaction in fact continues seaward, a line through these stations is a chord of the curve, not its tangent, and C*₀ is biased toward C₀. C*₀ and its interval are therefore averaged with the tangent of a local quadratic through these stations and the next one landward, in proportion to how well the data support a curved end (Akaike weight ${(100 * mouthWeight).toFixed(0)} %); a bias of a few percentage points remains possible. Stations between there and the sea end-member would settle it.`,
+    });
+  // A seaward line of ≥ 4 stations that the data cannot tell from a reaction reaching the mouth
+  // (Akaike weight of the break at S_max ≥ MOUTH_WEIGHT_WARN): the chord bias is not bounded.
+  const wReach =
+    segStart !== undefined && tangent.nStations >= MIN_SEAWARD_STATIONS
+      ? mouthModelWeight(x, conc, wts, tp, scatter * scatter)
+      : undefined;
+  if (wReach !== undefined && wReach >= MOUTH_WEIGHT_WARN)
+    warnings.push({
+      code: "seaward-line-untested",
+      message: `The straight seaward line (${tangent.nStations} stations, S ${tangent.fromSalinity.toFixed(1)}–${sMax.toFixed(1)}) cannot be told from a reaction that continues to the seaward-most station: a curve with no straight seaward phase fits nearly as well (Akaike weight ${(100 * wReach).toFixed(0)} %). If the reaction does continue, the line is a chord of the curve: C*₀ is biased toward C₀ (the % change understated, by several percentage points in calibration with synthetic surveys) beyond its interval, and "then conservative" is not established. More stations, or more precise ones, in the outer estuary would settle it.`,
     });
   const mS = twoPhaseMaximum(tp, sMax);
   // Coherence: never "conservative" when the straight line is rejected (χ² p < 0.01) or the

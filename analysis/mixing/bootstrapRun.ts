@@ -19,6 +19,7 @@ import {
 } from "./twoPhase.ts";
 import { zoneInto, type ReactionZoneBounds } from "./zoneAndMaximum.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
+import { MIN_SEAWARD_STATIONS, mouthAveragedEffective } from "./twoPhaseMouth.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
 export interface BootstrapInput {
@@ -55,6 +56,11 @@ export interface BootstrapInput {
   estimates?: { effective: number; percent: number; riverConc: number; netDelta: number };
   /** Sign of the reaction zone to locate in each replicate (that of the point estimate's net change). */
   zoneSign?: -1 | 1;
+  /**
+   * When given (the full-data max(1, χ²_ν)), each replicate's C*₀ is averaged over the seaward end
+   * models as the point estimate is (twoPhaseMouth.ts, Buckland et al. 1997).
+   */
+  mouthS2?: number;
 }
 
 /** 95 % percentile intervals of the bootstrap replicates (undefined when too few usable draws). */
@@ -160,6 +166,9 @@ class BootstrapDraws {
   readonly overrideSd: number = Number.NaN;
   /** Extra sd of the river value (0 = none). */
   readonly extraSd: number = Number.NaN;
+  /** C*₀ averaged over the seaward end models (when the input gives mouthS2), with that s². */
+  readonly mouthAverage: boolean = false;
+  readonly mouthS2: number = Number.NaN;
   usable = 0;
 
   constructor(b: BootstrapInput) {
@@ -216,6 +225,10 @@ class BootstrapDraws {
       this.overrideSd = b.riverOverride.sd;
     }
     this.extraSd = b.riverExtraSd ?? 0;
+    if (b.mouthS2 !== undefined) {
+      this.mouthAverage = true;
+      this.mouthS2 = b.mouthS2;
+    }
     this.river = b.riverOverride ? riverOverridden : b.riverModel === "quartic" ? riverQuartic : riverCubic;
   }
 }
@@ -256,6 +269,9 @@ function drawReplicate(st: BootstrapDraws, d: number): void {
   st.usable++;
   const eff = st.eff;
   eff[d] = ic + sl * sr;
+  // Only a seaward line on < MIN_SEAWARD_STATIONS stations is averaged (the check saves the call).
+  if (st.mouthAverage && !fit.linear && n > MIN_SEAWARD_STATIONS && st.x[n - MIN_SEAWARD_STATIONS]! < fit.breakSalinity)
+    eff[d] = mouthAveragedEffective(st.x, ys, st.w, fit, sr, st.mouthS2).value;
   st.c0[d] = cr;
   if (cr > 0) st.pct[d] = (100 * (eff[d]! - cr)) / cr;
   if (!fit.linear) st.brk[d] = fit.breakAveraged ?? fit.breakSalinity;

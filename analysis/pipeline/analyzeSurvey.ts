@@ -16,6 +16,7 @@ import { alongChannelSeries } from "./alongChannelSeries.ts";
 import { offChannelStations } from "./offChannel.ts";
 import type { DischargeProvenance, MixingWarning, SurveyAnalysis, SurveyFacts } from "./surveyAnalysis.ts";
 import { minOf, maxOf } from "../survey/arrayExtent.ts";
+import { constituentPartOf, type ConstituentPart } from "./constituentParts.ts";
 
 /** Per-constituent settings a user may change (end-member overrides, precision, k, ...). */
 export type ConstituentSettings = Partial<
@@ -49,6 +50,11 @@ export interface AnalyzeSurveyOptions {
   seed?: number;
   /** Only these constituents (default: all of the survey). */
   constituents?: string[];
+  /**
+   * Only this part of the constituents (split by {@link constituentPartOf}, the number of accepted
+   * samples as cost): parts analysed apart and merged in survey order equal the whole analysis.
+   */
+  part?: ConstituentPart;
   /** Settings by constituent name. */
   settings?: Record<string, ConstituentSettings>;
   /** Temperature at which per-volume samples were measured, for per-kg ↔ per-L [°C] (default 20). */
@@ -147,9 +153,17 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
   };
   const asTracer = new Set(options.analyseAsTracers ?? []);
   const isTracer = (c: Survey["constituents"][number]): boolean => c.kind !== "nonMixing" || asTracer.has(c.name);
-  const wanted = options.constituents ?? survey.constituents.filter(isTracer).map((c) => c.name);
+  const listed = options.constituents ?? survey.constituents.filter(isTracer).map((c) => c.name);
+  const part = options.part;
+  const partOf = part
+    ? constituentPartOf(
+        listed.map((name) => constituentSamples(survey.stations, name).samples.length),
+        part.count,
+      )
+    : undefined;
+  const wanted = partOf ? listed.filter((_, i) => partOf[i] === part!.index) : listed;
   const variables = survey.constituents
-    .filter((c) => !isTracer(c) && (options.constituents === undefined || !wanted.includes(c.name)))
+    .filter((c) => !isTracer(c) && (options.constituents === undefined || !listed.includes(c.name)))
     .map((c) => alongChannelSeries(survey, c.name, placements));
   const constituents: ConstituentAnalysis[] = [];
   const labT = options.labTemperatureC ?? 20;

@@ -7,6 +7,7 @@ import type { SurveyComparison } from "../compare/types.ts";
 import { SCREENING_CAUTION } from "../output/caution.ts";
 import { deviationRows, resultRows, tableObjects, DEVIATION_COLUMNS, RESULT_COLUMNS } from "../output/columns.ts";
 import { analyzeSurvey, type ConstituentSettings } from "../pipeline/analyzeSurvey.ts";
+import type { ConstituentPart } from "../pipeline/constituentParts.ts";
 import type { DischargeProvenance, SurveyAnalysis } from "../pipeline/surveyAnalysis.ts";
 import type { DischargeTable } from "../archive/dischargeTable.ts";
 import { surveyDischarge } from "../archive/surveyDischarge.ts";
@@ -32,6 +33,11 @@ export interface WorkspaceSettings {
   dischargeTable?: DischargeTable;
   /** Per-constituent end-member overrides and precision. */
   constituents?: Readonly<Record<string, ConstituentSettings>>;
+  /**
+   * Only this part of each survey's constituents (analyzeSurvey `part`): parts analysed apart, e.g.
+   * on two threads, and merged in survey order equal the whole analysis. Default: every constituent.
+   */
+  constituentPart?: ConstituentPart;
   /** Names of the surveys to analyse (default: all, in input order). */
   surveys?: readonly string[];
   /** Compare the analysed surveys (needs ≥ 2); referenceIndex into the analysed list, default 0. */
@@ -103,6 +109,7 @@ export function analyzeInputs(inputs: WorkspaceInputs, settings: WorkspaceSettin
         : {}),
       ...(q ? { riverDischargeM3s: dischargeM3s, dischargeSource: dischargeSource as DischargeProvenance } : {}),
       ...(settings.constituents ? { settings: { ...settings.constituents } } : {}),
+      ...(settings.constituentPart ? { part: settings.constituentPart } : {}),
       onProgress: perSurvey(i),
     });
     analysis.observations = plottedObservations(survey, analysis);

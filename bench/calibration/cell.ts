@@ -43,10 +43,20 @@ export interface CellScore {
 }
 
 /** Warnings by which the tool says the stations cannot establish the class. */
-const CLASS_LIMIT_WARNINGS = new Set(["short-seaward-line", "reaction-reaches-mouth", "few-stations-in-zone"]);
+const CLASS_LIMIT_WARNINGS = new Set([
+  "short-seaward-line",
+  "reaction-reaches-mouth",
+  "few-stations-in-zone",
+  "seaward-line-untested",
+]);
 
 /** Warnings by which the tool says C₀ or C*₀ may be biased beyond their intervals (model error of an extrapolation). */
-export const BIAS_WARNINGS = new Set(["river-extrapolation-coarse", "reaction-reaches-mouth", "short-seaward-line"]);
+export const BIAS_WARNINGS = new Set([
+  "river-extrapolation-coarse",
+  "reaction-reaches-mouth",
+  "short-seaward-line",
+  "seaward-line-untested",
+]);
 
 const covers = (e: Estimate | undefined, truth: number): boolean => !!e && e.lower <= truth && truth <= e.upper;
 const inside = (e: Estimate | undefined): boolean => !e || (e.lower <= e.value && e.value <= e.upper);

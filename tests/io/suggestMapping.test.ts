@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { columnMappingSchema } from "../../analysis/io/columnMapping.ts";
+import { checkSchema } from "../../analysis/io/validation.ts";
 import { fileShapeSignature, findSavedMapping } from "../../analysis/io/fileShape.ts";
 import { suggestMapping } from "../../analysis/io/suggestMapping.ts";
 
@@ -42,7 +43,7 @@ describe("suggestMapping (automatic column recognition)", () => {
       "constituent",
     ]);
     expect(m.columns[11].flagFor).toBe("Cu (nmol/L)");
-    expect(columnMappingSchema.safeParse(JSON.parse(JSON.stringify(m))).success).toBe(true);
+    expect(checkSchema(columnMappingSchema, JSON.parse(JSON.stringify(m))).success).toBe(true);
   });
 
   it("suggestMapping() recognises separate date and time columns, station number, and reads the date order from the samples", () => {

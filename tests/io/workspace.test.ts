@@ -58,7 +58,7 @@ function sampleWorkspace() {
   return ws;
 }
 
-describe("workspace document (zod schema, versions, migrations)", () => {
+describe("workspace document (schema, versions, migrations)", () => {
   it("exportWorkspace() → importWorkspace() is a lossless round trip (surveys with censored/flagged/invalid cells, centerline, mappings, settings, analysis choices)", () => {
     const ws = sampleWorkspace();
     const text = exportWorkspace(ws);

@@ -72,6 +72,7 @@ export class DrawController {
     this.vertices = [];
     this.mode = "drawing";
     this.#map?.doubleClickZoom.disable();
+    this.#ensureLayers();
     this.render();
   }
 
@@ -87,6 +88,7 @@ export class DrawController {
     this.mouth = mouth;
     this.mode = "editing";
     this.#map?.doubleClickZoom.enable();
+    this.#ensureLayers();
     this.render();
   }
 
@@ -191,8 +193,9 @@ export class DrawController {
   #retryPending = false;
 
   /**
-   * Adds the draw tool's sources and layers when the map's style lacks them: at attach, and again after
-   * every style change. The map view's `setStyle` (diffed) removes every source and layer its style does
+   * Adds the draw tool's sources and layers when the map's style lacks them: when the tool is first used
+   * (drawing or editing; not at attach, so the cold start tiles and draws none of them), and again after
+   * every style change while it is in use. The map view's `setStyle` (diffed) removes every source and layer its style does
    * not name, ours included, and fires "styledata" while its own sources are still loading, so
    * `isStyleLoaded()` is false then; waiting for it dropped the layers for good (the vertex hit test then
    * found nothing to drag). The layers are added as soon as the style itself is parsed, else once the map
@@ -200,7 +203,7 @@ export class DrawController {
    */
   #ensureLayers(): void {
     const map = this.#map;
-    if (!map || map.getSource(SOURCE)) return;
+    if (!map || this.mode === "idle" || map.getSource(SOURCE)) return;
     try {
       this.#addLayers(map);
     } catch {

@@ -17,17 +17,62 @@ export interface DemoBundle {
   basemap?: TextFile;
 }
 
-const surveyFiles = import.meta.glob("../../../data-demo/surveys/*.csv", {
+/** The demo's file holding every survey; when present it is read alone (the others repeat it). */
+const ALL_SURVEYS_FILE = "both-surveys.csv";
+
+/**
+ * The demo's files. The built dashboard ships them as data files beside the JavaScript (Vite `?url`
+ * assets, fetched once when this module loads; index.html preloads the ones read, see
+ * dashboard/demoPreload.ts), not as strings inside the main chunk. The dev server and the unit tests
+ * take the text inlined (`?raw`). Either way `demoBundle()` stays synchronous.
+ */
+const rawSurveys = import.meta.glob("../../../data-demo/surveys/*.csv", {
   query: "?raw",
   import: "default",
   eager: true,
 }) as Record<string, string>;
 
-const geojsonFiles = import.meta.glob("../../../data-demo/*.geojson", {
+const rawGeojson = import.meta.glob("../../../data-demo/*.geojson", {
   query: "?raw",
   import: "default",
   eager: true,
 }) as Record<string, string>;
+
+const surveyUrls = import.meta.glob("../../../data-demo/surveys/*.csv", {
+  query: "?url",
+  import: "default",
+  eager: true,
+}) as Record<string, string>;
+
+const geojsonUrls = import.meta.glob("../../../data-demo/*.geojson", {
+  query: "?url",
+  import: "default",
+  eager: true,
+}) as Record<string, string>;
+
+/** Fetches the text of every file in `urls`; a file that cannot be fetched is left out (and reported as absent). */
+async function fetchAll(
+  urls: Record<string, string>,
+  wanted: (path: string) => boolean,
+): Promise<Record<string, string>> {
+  const entries = Object.entries(urls).filter(([path]) => wanted(path));
+  const texts = await Promise.all(
+    entries.map(async ([path, url]) => {
+      const response = await fetch(url).catch(() => undefined);
+      return response?.ok ? ([path, await response.text()] as const) : undefined;
+    }),
+  );
+  return Object.fromEntries(texts.filter((t) => t !== undefined));
+}
+
+/** Survey files read: the combined file alone when it is there (the others repeat it), else all. */
+function surveyWanted(path: string): boolean {
+  return !Object.keys(surveyUrls).some((p) => baseName(p) === ALL_SURVEYS_FILE) || baseName(path) === ALL_SURVEYS_FILE;
+}
+
+const [surveyFiles, geojsonFiles] = import.meta.env.PROD
+  ? await Promise.all([fetchAll(surveyUrls, surveyWanted), fetchAll(geojsonUrls, () => true)])
+  : [rawSurveys, rawGeojson];
 
 function baseName(path: string): string {
   return path.slice(path.lastIndexOf("/") + 1);
@@ -39,9 +84,6 @@ function pick(files: Record<string, string>, name: string): TextFile | undefined
   }
   return undefined;
 }
-
-/** The demo's file holding every survey; when present it is read alone (the others repeat it). */
-const ALL_SURVEYS_FILE = "both-surveys.csv";
 
 /** The demo files bundled into this build. */
 export function demoBundle(): DemoBundle {

@@ -105,16 +105,21 @@ export function buildLayers({ data, stations, scale, selected, hovered }: LayerS
     c[2] ?? 0,
     off ? 70 : (c[3] ?? 255),
   ];
+  const projected = selectedStations.filter((s) => s.nearestLonLat !== undefined);
+  // Only with a selection: an empty layer still builds its shader program (software WebGL at the cold start).
+  if (projected.length > 0)
+    layers.push(
+      new LineLayer<MapStation>({
+        id: "projection-lines",
+        data: projected,
+        getSourcePosition: (s) => s.lonLat,
+        getTargetPosition: (s) => s.nearestLonLat ?? s.lonLat,
+        getColor: INK,
+        getWidth: 1.5,
+        widthUnits: "pixels",
+      }),
+    );
   layers.push(
-    new LineLayer<MapStation>({
-      id: "projection-lines",
-      data: selectedStations.filter((s) => s.nearestLonLat !== undefined),
-      getSourcePosition: (s) => s.lonLat,
-      getTargetPosition: (s) => s.nearestLonLat ?? s.lonLat,
-      getColor: INK,
-      getWidth: 1.5,
-      widthUnits: "pixels",
-    }),
     new ScatterplotLayer<MapStation>({
       id: "stations",
       data: stations,

@@ -57,6 +57,13 @@ export class AppState {
   readonly archive = new ArchiveState(() => this.#analysisApi());
   readonly #connect: NonNullable<AppOptions["connect"]>;
   #analyser: WorkerHandle | undefined;
+  /**
+   * A second analysis worker started with the first at the cold start: it analyses part of the first
+   * job's survey on screen (the other processor core), hands it over and stops.
+   */
+  #partner: WorkerHandle | undefined;
+  /** Whether the next job may use the partner (only the first one: the cold start). */
+  #partnerJob = false;
   #reader: WorkerHandle | undefined;
   /** Counts analysis jobs; events of a superseded job are dropped. */
   #job = 0;
@@ -154,9 +161,49 @@ export class AppState {
    * Starts the analysis worker now, so it downloads and compiles its code while the map starts
    * (App calls this before mounting the map; otherwise the first job starts it).
    */
-  startAnalysis(options: { untilMapIdle?: boolean } = {}): void {
+  startAnalysis(options: { untilMapIdle?: boolean; partner?: boolean } = {}): void {
     if (options.untilMapIdle) this.#mapIdle ??= false;
     this.#analysisApi();
+    if (options.partner && !this.#partner) {
+      this.#partnerJob = true;
+      this.#partner = this.#connect("brackline-analysis-part", () => this.#partnerFailed?.());
+    }
+  }
+
+  /** Tells the analysing worker not to wait for the partner's part (it failed to start). */
+  #partnerFailed: (() => void) | undefined;
+
+  /** Stops the partner worker (its part handed over, or not needed). */
+  #stopPartner(): void {
+    this.#partner?.terminate();
+    this.#partner = undefined;
+    this.#partnerFailed = undefined;
+  }
+
+  /**
+   * The first job's survey on screen in two parts: the partner worker analyses part 1 of its
+   * constituents and hands it to the analysing worker, which analyses part 0 and merges them (the
+   * same result as one worker). Only a job that reads its inputs (the demo, a restored workspace).
+   */
+  #splitFirst(job: AnalysisJob, token: number): AnalysisJob {
+    const partner = this.#partner;
+    const use = this.#partnerJob && partner !== undefined && (job.kind === "load" || job.kind === "setSurveys");
+    this.#partnerJob = false;
+    if (!use) {
+      this.#stopPartner();
+      return job;
+    }
+    const analyser = this.#analysisApi();
+    let handed = false;
+    const hand = (part: Awaited<ReturnType<RemoteApi["analysePart"]>>) => {
+      if (handed) return;
+      handed = true;
+      void analyser.receivePart(token, 1, part);
+      this.#stopPartner();
+    };
+    this.#partnerFailed = () => hand(undefined);
+    partner.api.analysePart(job, job.firstSurvey ?? 0, { index: 1, count: 2 }).then(hand, () => hand(undefined));
+    return { ...job, firstParts: { count: 2, token } };
   }
 
   /**
@@ -226,8 +273,9 @@ export class AppState {
         if (names.length > 0 && !names.includes(this.selection.constituent)) this.selection.constituent = names[0];
       }
     });
+    const ordered = this.#splitFirst({ ...job, firstSurvey: this.selection.surveyIndex }, id);
     return this.#analysisApi()
-      .run({ ...job, firstSurvey: this.selection.surveyIndex }, onEvent)
+      .run(ordered, onEvent)
       .catch((error: unknown) => {
         if (id === this.#job) this.results.receive({ type: "error", message: String(error) });
       });
@@ -363,6 +411,7 @@ export class AppState {
   }
 
   destroy(): void {
+    this.#stopPartner();
     this.#analyser?.terminate();
     this.#reader?.terminate();
     this.#analyser = undefined;

@@ -9,6 +9,7 @@ import {
   exportWorkspace,
   importWorkspace,
   workspaceComparison,
+  type ConstituentPart,
   type Season,
   type WorkspaceDocument,
   type WorkspaceInputs,
@@ -19,7 +20,7 @@ import type { FileInspection, FileOutcome, ImportSource } from "./importTypes.ts
 import { inspectFile } from "./inspectFile.ts";
 import { importFile } from "./importFile.ts";
 import type { AnalysisSettings } from "./protocol.ts";
-import { analyse, inputsOf, readFiles, type AnalysisResult } from "./engine.ts";
+import { analyse, inputsOf, mergeParts, readFiles, type AnalysisResult } from "./engine.ts";
 import { briefingHtml, fileProvenance } from "./briefing.ts";
 import { brushStretch, type BrushedStretch } from "./brushStretch.ts";
 import type { ChannelOverlay } from "./overlay.ts";
@@ -38,6 +39,16 @@ function yieldToQueue(): Promise<void> {
 
 /** Longest wait, after the first survey of a job, for the main thread's `resumeBackground`. */
 const FIRST_VIEW_WAIT_MS = 3000;
+
+/** One part of a survey's constituents analysed by another worker (`analysePart`); undefined when it has none. */
+export type PartAnswer = { constituents: AnalysisResult["constituents"] } | undefined;
+
+/** The inputs a job reads (load, setSurveys); undefined for jobs that re-analyse what a worker holds. */
+function jobInputs(job: AnalysisJob): WorkspaceInputs | undefined {
+  if (job.kind === "load") return readFiles(job.surveys, job.centerline);
+  if (job.kind === "setSurveys") return inputsOf(job.surveys, job.centerline, job.settings.mouth);
+  return undefined;
+}
 
 function messageOf(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
@@ -85,14 +96,50 @@ export function createWorkerApi(cache?: ResultCache) {
   }
 
   /** What one survey's result depends on besides the engine: the survey, its channel, choices and settings. */
-  function cacheParts(survey: WorkspaceInputs["surveys"][number], settings: AnalysisSettings): unknown {
+  function cacheParts(
+    survey: WorkspaceInputs["surveys"][number],
+    settings: AnalysisSettings,
+    from: WorkspaceInputs = inputs,
+  ): unknown {
     return {
       survey,
-      centerline: inputs.channel ? { geojson: inputs.channel.geojson, mouth: inputs.channel.mouth } : null,
-      stationTable: inputs.stationTable ?? null,
-      choices: inputs.choices,
+      centerline: from.channel ? { geojson: from.channel.geojson, mouth: from.channel.mouth } : null,
+      stationTable: from.stationTable ?? null,
+      choices: from.choices,
       settings,
     };
+  }
+
+  /** Collects the other parts of the running job's first survey (see `receivePart`). */
+  let partWaiter: { token: number; parts: Map<number, PartAnswer>; want: number; done: () => void } | undefined;
+
+  /**
+   * The first survey with its constituents in `parts.count` parts: part 0 here, the others from
+   * `receivePart` (analysed here after all when they do not come within twice this part's time).
+   */
+  async function analyseInParts(
+    run: number,
+    survey: WorkspaceInputs["surveys"][number],
+    settings: AnalysisSettings,
+    parts: { count: number; token: number },
+    onStep: (fraction: number, label: string) => void,
+  ): Promise<CachedAnalysis | undefined> {
+    const received = new Map<number, PartAnswer>();
+    let arrived: () => void = () => undefined;
+    const all = new Promise<void>((resolve) => (arrived = resolve));
+    partWaiter = { token: parts.token, parts: received, want: parts.count - 1, done: () => arrived() };
+    const t0 = Date.now();
+    const own = analyse(inputs, survey, settings, onStep, { index: 0, count: parts.count });
+    const waitMs = 2 * (Date.now() - t0) + 500;
+    await Promise.race([all, new Promise((resolve) => setTimeout(resolve, waitMs))]);
+    if (partWaiter?.token === parts.token) partWaiter = undefined;
+    if (run !== latestRun) return undefined;
+    const rest = [];
+    for (let index = 1; index < parts.count; index++) {
+      const got = received.get(index);
+      rest.push(got ?? analyse(inputs, survey, settings, undefined, { index, count: parts.count }).analysis);
+    }
+    return mergeParts(inputs, survey, [own.analysis, ...rest], own.analysis);
   }
 
   /** Opens the gate of the running job's background surveys (see `resumeBackground`). */
@@ -124,6 +171,7 @@ export function createWorkerApi(cache?: ResultCache) {
     emit: (e: AnalysisEvent) => void,
     first: number,
     gate: boolean,
+    parts?: { count: number; token: number },
   ) {
     const { surveys } = inputs;
     const total = surveys.length;
@@ -139,16 +187,20 @@ export function createWorkerApi(cache?: ResultCache) {
         const key = cache ? await cache.key(cacheParts(surveys[i], settings)) : undefined;
         const stored = key ? await cache!.get(key) : undefined;
         if (run !== latestRun) return;
+        const onStep = (fraction: number, label: string) =>
+          emit({
+            type: "progress",
+            stage: `${stage}: ${label}`,
+            done: Math.round((k + fraction) * 100),
+            total: total * 100,
+          });
+        const inParts =
+          !stored && k === 0 && parts && parts.count > 1
+            ? await analyseInParts(run, surveys[i], settings, parts, onStep)
+            : undefined;
+        if (run !== latestRun) return;
         const { analysis, overlay }: CachedAnalysis =
-          stored ??
-          analyse(inputs, surveys[i], settings, (fraction, label) =>
-            emit({
-              type: "progress",
-              stage: `${stage}: ${label}`,
-              done: Math.round((k + fraction) * 100),
-              total: total * 100,
-            }),
-          );
+          stored ?? inParts ?? analyse(inputs, surveys[i], settings, onStep);
         if (key && !stored) void cache!.put(key, { analysis, overlay });
         analyses[i] = analysis;
         emit({ type: "analysis", surveyIndex: i, analysis, overlay });
@@ -212,7 +264,7 @@ export function createWorkerApi(cache?: ResultCache) {
             ...(inputs.offeredCenterline ? { offeredCenterline: inputs.offeredCenterline as object } : {}),
           });
         }
-        await analyseAll(run, job.settings, emit, job.firstSurvey ?? 0, job.firstSurvey !== undefined);
+        await analyseAll(run, job.settings, emit, job.firstSurvey ?? 0, job.firstSurvey !== undefined, job.firstParts);
       } catch (error) {
         emit({ type: "error", message: messageOf(error) });
       }
@@ -225,6 +277,31 @@ export function createWorkerApi(cache?: ResultCache) {
     resumeBackground(): void {
       openGate?.();
       openGate = undefined;
+    },
+
+    /**
+     * Another worker's part of the first survey of the job whose `firstParts.token` is `token`
+     * (`undefined`: it has none, this worker analyses that part itself). Parts of other jobs are ignored.
+     */
+    receivePart(token: number, index: number, part: PartAnswer): void {
+      const w = partWaiter;
+      if (!w || w.token !== token || index < 1) return;
+      if (part) w.parts.set(index, part);
+      if (!part || w.parts.size >= w.want) w.done();
+    },
+
+    /**
+     * Part `part` of the constituents of survey `surveyIndex` of a job that reads its inputs (load,
+     * setSurveys), read and analysed here like `run` would, for the worker that runs the job
+     * (`receivePart`). Undefined when the job reads nothing or the result cache holds the whole survey.
+     */
+    async analysePart(job: AnalysisJob, surveyIndex: number, part: ConstituentPart): Promise<PartAnswer> {
+      const read = jobInputs(job);
+      const survey = read?.surveys[surveyIndex];
+      if (!read || !survey) return undefined;
+      const key = cache ? await cache.key(cacheParts(survey, job.settings, read)) : undefined;
+      if (key && (await cache!.get(key))) return undefined;
+      return { constituents: analyse(read, survey, job.settings, undefined, part).analysis.constituents };
     },
 
     /**

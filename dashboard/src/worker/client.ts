@@ -5,6 +5,7 @@
  */
 import { proxy, releaseProxy, wrap, type Remote } from "comlink";
 import type { WorkerApi } from "./api.ts";
+import { analysisWorkerUrl } from "./analysisWorkerUrl.ts";
 
 /** The worker API as the main thread calls it. */
 export type RemoteApi = Remote<WorkerApi>;
@@ -17,7 +18,7 @@ export interface WorkerHandle {
 
 /** Starts one worker; `name` shows in the browser's tools; `onFail` hears a worker that fails to start. */
 export function startWorker(name: string, onFail?: (message: string) => void): WorkerHandle {
-  const worker = new Worker(new URL("./analysis.worker.ts", import.meta.url), { type: "module", name });
+  const worker = new Worker(analysisWorkerUrl, { type: "module", name });
   worker.addEventListener("error", (event: ErrorEvent) => {
     onFail?.(event.message || `The ${name} worker failed to start.`);
   });

@@ -6,12 +6,16 @@
  */
 import {
   analyzeInputs,
+  channelOverlay,
   emptySummary,
+  plottedObservations,
+  surveyOverlay,
   placeWithoutCenterline,
   readCenterline,
   readDischargeTable,
   readInputs,
   type ChannelInput,
+  type ConstituentPart,
   type DischargeTable,
   type ConstituentSettings,
   type ImportIssue,
@@ -119,12 +123,16 @@ export function workspaceSettings(settings: AnalysisSettings): WorkspaceSettings
   };
 }
 
-/** Analyses one survey of the inputs with analyzeInputs; `onStep` reports progress as a fraction with a label. */
+/**
+ * Analyses one survey of the inputs with analyzeInputs; `onStep` reports progress as a fraction with
+ * a label. With `part` only that part of its constituents (see `mergeParts`).
+ */
 export function analyse(
   inputs: WorkspaceInputs,
   survey: Survey,
   settings: AnalysisSettings,
   onStep?: (fraction: number, label: string) => void,
+  part?: ConstituentPart,
 ): { analysis: AnalysisResult; overlay: SurveyOverlay } {
   const choices = {
     ...inputs.choices,
@@ -133,8 +141,35 @@ export function analyse(
   };
   const results = analyzeInputs(
     { ...inputs, surveys: [survey], choices },
-    { ...workspaceSettings(settings), ...(onStep ? { onProgress: onStep } : {}) },
+    {
+      ...workspaceSettings(settings),
+      ...(onStep ? { onProgress: onStep } : {}),
+      ...(part ? { constituentPart: part } : {}),
+    },
   );
   const [first] = results.surveys;
   return { analysis: first!.analysis, overlay: first!.overlay };
+}
+
+/**
+ * One survey's analysis from the analyses of the parts of its constituents (`analyse` with `part`,
+ * the parts together covering every constituent): the survey-wide parts are the same in each, the
+ * constituents are put back in the survey's order, and the plotted observations and the map overlay
+ * are made from the whole, as analyzeInputs makes them. Equal to `analyse` without parts.
+ */
+export function mergeParts(
+  inputs: WorkspaceInputs,
+  survey: Survey,
+  parts: ReadonlyArray<Pick<AnalysisResult, "constituents">>,
+  base: AnalysisResult,
+): { analysis: AnalysisResult; overlay: SurveyOverlay } {
+  const rank = new Map(survey.constituents.map((c, i) => [c.name, i]));
+  const constituents = parts
+    .flatMap((p) => p.constituents)
+    .sort((a, b) => (rank.get(a.name) ?? Infinity) - (rank.get(b.name) ?? Infinity));
+  const analysis: AnalysisResult = { ...base, constituents };
+  analysis.observations = plottedObservations(survey, analysis);
+  const network = inputs.channel?.network;
+  const ticks = network ? channelOverlay(network).ticks : [];
+  return { analysis, overlay: surveyOverlay(analysis, network, ticks) };
 }

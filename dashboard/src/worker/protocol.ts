@@ -72,6 +72,12 @@ export type SourceFile = TextFile | { name: string; bytes: Uint8Array };
  */
 export interface JobOrder {
   firstSurvey?: number;
+  /**
+   * The first survey's constituents split into `count` parts to analyse side by side: this worker
+   * analyses part 0 and takes the others from `receivePart(token, …)` (another worker's
+   * `analysePart`), or analyses them itself when they do not come; the merged result is the same.
+   */
+  firstParts?: { count: number; token: number };
 }
 
 /** One analysis job. A newer job supersedes an older one (the worker stops between surveys). */

@@ -7,18 +7,17 @@
  */
 import {
   carbonatePhAlongMixingLine,
-  DEFAULT_CD_CHLORIDE_SET_ID,
   cdSpeciationVsSalinity,
   feSpeciationVsPh,
   linearGrid,
   majorIonsVsSalinity,
   stationSpeciation,
-  type CarbonateEndmember,
   type CarbonateMixingSeries,
   type FeSpeciationSeries,
   type SeriesSet,
   type StationSpeciationResult,
 } from "../../../analysis/index.ts";
+import type { SpeciationSettings } from "./speciationSettings.ts";
 
 /** A value, or the message of the error the analysis raised. */
 export type Outcome<T> = { ok: true; value: T } | { ok: false; error: string };
@@ -31,26 +30,7 @@ function attempt<T>(f: () => T): Outcome<T> {
   }
 }
 
-export interface SpeciationSettings {
-  feSetId: string;
-  cdSetId: string;
-  /** Temperature [°C] used when the station has none. */
-  defaultTemperatureC: number;
-  /** TA/DIC end-members for the expected pH along the mixing line, when known. */
-  carbonate?: { river: CarbonateEndmember; sea: CarbonateEndmember };
-  /** pH axis of the Fe(III) chart. */
-  pHRange: [number, number];
-  /** Salinity axis of the Cd and major-ion charts (within the major-ion mixing model's end-members). */
-  salinityRange: [number, number];
-}
-
-export const defaultSpeciationSettings: SpeciationSettings = {
-  feSetId: "baesMesmer1976",
-  cdSetId: DEFAULT_CD_CHLORIDE_SET_ID,
-  defaultTemperatureC: 25,
-  pHRange: [3, 10],
-  salinityRange: [0, 35],
-};
+export { defaultSpeciationSettings, type SpeciationSettings } from "./speciationSettings.ts";
 
 /** The conditions of the station speciation is shown for (values as measured). */
 export interface FocusStation {

@@ -5,6 +5,7 @@
  * Invented synthetic archive and an invented flows table; no measurements.
  */
 import { describe, expect, it } from "vitest";
+import { parse } from "valibot";
 import {
   createWorkspace,
   DEFAULT_SEASONS,
@@ -118,7 +119,7 @@ describe("workspace keeps the archive choices", () => {
       dischargeTable: { name: "f.csv", text: "date,q\n" },
     };
     const doc = toWorkspaceDocument({ ...base, archive }, "2026-01-01T00:00:00Z");
-    const checked = workspaceSchema.parse(JSON.parse(JSON.stringify(doc)));
+    const checked = parse(workspaceSchema, JSON.parse(JSON.stringify(doc)));
     expect(fromWorkspaceDocument(checked as typeof doc).archive).toEqual(archive);
   });
 });
