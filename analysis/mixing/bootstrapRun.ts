@@ -17,7 +17,7 @@ import {
   type TwoPhaseDesign,
   type TwoPhaseFit,
 } from "./twoPhase.ts";
-import { zoneInto, type ReactionZoneBounds } from "./zoneAndMaximum.ts";
+import { dominantZoneSign, zoneInto, type ReactionZoneBounds } from "./zoneAndMaximum.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
 import { MIN_SEAWARD_STATIONS, mouthAveragedEffective } from "./twoPhaseMouth.ts";
 
@@ -294,7 +294,9 @@ function drawReplicate(st: BootstrapDraws, d: number): void {
   const curves = st.curves;
   for (let g = 0; g < G; g++) curves[g * D + d] = f[g]!;
   const zone = st.zone;
-  if (zoneInto(st.grid, d2, sr, st.rhoWork, fit.linear ? undefined : fit.breakSalinity, st.zoneSign, zone)) {
+  const segmentStart = fit.linear ? undefined : fit.breakSalinity;
+  const sign = st.zoneSign ?? dominantZoneSign(st.grid, d2, sr, segmentStart);
+  if (zoneInto(st.grid, d2, sr, st.rhoWork, segmentStart, sign, zone)) {
     st.zLo[d] = zone.from;
     st.zHi[d] = zone.to;
   }

@@ -37,14 +37,55 @@ export function zoneFromCurve(
 ): ReactionZoneBounds | undefined {
   const rho = work && work.length >= grid.length ? work : new Float64Array(grid.length);
   const out: ReactionZoneBounds = { from: Number.NaN, to: Number.NaN, kind: "removal" };
-  return zoneInto(grid, d2, riverSalinity, rho, segmentStart, sign, out) ? out : undefined;
+  const sgn = sign ?? dominantZoneSign(grid, d2, riverSalinity, segmentStart);
+  return zoneInto(grid, d2, riverSalinity, rho, segmentStart, sgn, out) ? out : undefined;
+}
+
+/** Grid points up to the seaward segment's start S_b (all without one). */
+function zoneGridLength(grid: ArrayLike<number>, segmentStart: number | undefined): number {
+  // The loop's test runs on every call, with or without a segment (one code path for V8's compiler).
+  const limit = segmentStart === undefined ? Number.POSITIVE_INFINITY : segmentStart + 1e-9;
+  let G = grid.length;
+  while (G > 0 && grid[G - 1]! > limit) G--;
+  return G;
 }
 
 /**
- * {@link zoneFromCurve} written into a caller's object (the bootstrap locates a zone in every
- * replicate and reuses one object and one scratch array).
+ * The dominant sign of ρ(S) = −(S − S_r)·C''(S) for {@link zoneFromCurve} when no sign is asked for:
+ * that of ∫ρ dS (trapezoids), or of the largest |ρ| when the integral is 0 (searched up to S_b when
+ * a seaward segment starts there).
+ *
+ * @returns −1, +1, or 0 or NaN when ρ gives no sign (then there is no zone)
+ */
+export function dominantZoneSign(
+  grid: ArrayLike<number>,
+  d2: ArrayLike<number>,
+  riverSalinity: number,
+  segmentStart: number | undefined,
+): number {
+  const G = zoneGridLength(grid, segmentStart);
+  let total = 0;
+  let maxAbs = 0;
+  let maxAbsSigned = 0;
+  let prev = 0;
+  for (let i = 0; i < G; i++) {
+    const r = -(grid[i]! - riverSalinity) * d2[i]!;
+    if (i > 0) total += 0.5 * (r + prev) * (grid[i]! - grid[i - 1]!);
+    if (Math.abs(r) > maxAbs) {
+      maxAbs = Math.abs(r);
+      maxAbsSigned = r;
+    }
+    prev = r;
+  }
+  return total !== 0 ? Math.sign(total) : Math.sign(maxAbsSigned);
+}
+
+/**
+ * {@link zoneFromCurve} with its sign given, written into a caller's object (the bootstrap locates
+ * a zone in every replicate and reuses one object and one scratch array).
  *
  * @param rho scratch array of length ≥ grid.length
+ * @param sign −1 for a removal zone, +1 for an addition zone
  * @param out receives the zone when there is one
  * @returns true when there is a zone (then in out), false otherwise (out unchanged)
  */
@@ -54,28 +95,18 @@ export function zoneInto(
   riverSalinity: number,
   rho: Float64Array,
   segmentStart: number | undefined,
-  sign: -1 | 1 | undefined,
+  sign: number,
   out: ReactionZoneBounds,
 ): boolean {
-  let G = grid.length;
-  if (segmentStart !== undefined) {
-    while (G > 0 && grid[G - 1]! > segmentStart + 1e-9) G--;
-    if (G < 2) return false;
-  }
-  let total = 0;
+  const G = zoneGridLength(grid, segmentStart);
+  if (segmentStart !== undefined && G < 2) return false;
   let maxAbs = 0;
-  let maxAbsSigned = 0;
   for (let i = 0; i < G; i++) {
     rho[i] = -(grid[i]! - riverSalinity) * d2[i]!;
-    // ∫ρ dS only decides the sign when none is asked for.
-    if (i > 0 && sign === undefined) total += 0.5 * (rho[i]! + rho[i - 1]!) * (grid[i]! - grid[i - 1]!);
-    if (Math.abs(rho[i]!) > maxAbs) {
-      maxAbs = Math.abs(rho[i]!);
-      maxAbsSigned = rho[i]!;
-    }
+    if (Math.abs(rho[i]!) > maxAbs) maxAbs = Math.abs(rho[i]!);
   }
   if (!(maxAbs > 0)) return false;
-  const sgn = sign ?? (total !== 0 ? Math.sign(total) : Math.sign(maxAbsSigned));
+  const sgn = sign;
   let peak = 0;
   for (let i = 1; i < G; i++) if (sgn * rho[i]! > sgn * rho[peak]!) peak = i;
   const thr = ZONE_THRESHOLD * sgn * rho[peak]!;

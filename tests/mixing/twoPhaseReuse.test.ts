@@ -8,7 +8,12 @@ import {
   twoPhaseDesign,
   type TwoPhaseFit,
 } from "../../analysis/mixing/twoPhase.ts";
-import { zoneFromCurve, zoneInto, type ReactionZoneBounds } from "../../analysis/mixing/zoneAndMaximum.ts";
+import {
+  dominantZoneSign,
+  zoneFromCurve,
+  zoneInto,
+  type ReactionZoneBounds,
+} from "../../analysis/mixing/zoneAndMaximum.ts";
 import { stationSalinities, trueConc } from "./helpers/synthetic.ts";
 
 /** The fit's numbers as a plain object (undefined properties left out), for comparing fits of different origin. */
@@ -90,7 +95,7 @@ describe("two-phase fit and reaction zone written into reused objects", () => {
           // d²C/dS² of a bump centred at S 8 (invented curve).
           const d2 = grid.map((s) => bump * Math.exp(-((s - 8) ** 2) / 8));
           const ref = zoneFromCurve(grid, d2, 0, undefined, seg, sign);
-          const found = zoneInto(grid, d2, 0, rho, seg, sign, out);
+          const found = zoneInto(grid, d2, 0, rho, seg, sign ?? dominantZoneSign(grid, d2, 0, seg), out);
           expect(found).toBe(ref !== undefined);
           if (ref) expect({ ...out }).toEqual(ref);
         }
