@@ -147,16 +147,9 @@ export function alternativeFit(f: TwoPhaseFit, alternative: NonNullable<TwoPhase
   return a;
 }
 
-/** The fit that keeps the straight line C = α₀ + α₁·t through all stations, written to `out` or a new fit. */
-function lineResult(
-  out: TwoPhaseFit | undefined,
-  a0: number,
-  a1: number,
-  sMin: number,
-  range: number,
-  rss: number,
-): TwoPhaseFit {
-  const f = out ?? newTwoPhaseFit();
+/** The fit that keeps the straight line C = α₀ + α₁·t through all stations, written to `out`. */
+function lineResult(out: TwoPhaseFit, a0: number, a1: number, sMin: number, range: number, rss: number): TwoPhaseFit {
+  const f = out;
   f.breakSalinity = sMin;
   f.linear = true;
   const c = f.coef;
@@ -286,10 +279,16 @@ export function fitTwoPhase(
   if (!ds) return undefined;
   const s = searchTwoPhase(ds, x, y, w);
   if (s === SEARCH_FAILED) return undefined;
-  if (s === SEARCH_LINE) return lineResult(out, S.lc0, S.lc1, ds.sMin, ds.range, S.rssLin);
+  // The fit object is made here, not on the shared path below (which the bootstrap enters with its own).
+  const f = out ?? newTwoPhaseFit();
+  if (s === SEARCH_LINE) return lineResult(f, S.lc0, S.lc1, ds.sMin, ds.range, S.rssLin);
   const F = S.F;
   const p = F === P_ZERO ? 0 : F === P_ONE ? 1 : exactP ? fUpperP(F, S.extra, S.dfRes) : fPCached(F, S.extra, S.dfRes);
-  return settleTwoPhase(ds, p, exactP, out);
+  settleTwoPhase(ds, p, f);
+  // The alternative is for the full-data fit's bootstrap; replicates (exactP false) never use it.
+  if (exactP && f.linear)
+    f.alternative = { breakSalinity: S.bestB, coef: coefficients(COEF[0]!, COEF[1]!, COEF[2]!, COEF[3]!) };
+  return f;
 }
 
 /**
@@ -309,7 +308,7 @@ export function fitTwoPhaseReplicate(
   if (s === SEARCH_LINE) return lineResult(out, S.lc0, S.lc1, ds.sMin, ds.range, S.rssLin);
   const F = S.F;
   const p = F === P_ZERO ? 0 : F === P_ONE ? 1 : fPCached(F, S.extra, S.dfRes);
-  return settleTwoPhase(ds, p, false, out);
+  return settleTwoPhase(ds, p, out);
 }
 
 /** Outcomes of {@link searchTwoPhase}. */
@@ -476,11 +475,11 @@ function searchTwoPhase(ds: TwoPhaseDesign, x: ArrayLike<number>, y: ArrayLike<n
 }
 
 /**
- * The fit after the F-test of {@link searchTwoPhase} (p its p value): the straight line when
- * p ≥ {@link TWO_PHASE_ALPHA} (with the tested two-phase alternative when exactP), else the
- * two-phase model at the best break with its profile-averaged break.
+ * The fit after the F-test of {@link searchTwoPhase} (p its p value), written to `out`: the straight
+ * line when p ≥ {@link TWO_PHASE_ALPHA} (its tested two-phase alternative is added by
+ * {@link fitTwoPhase}), else the two-phase model at the best break with its profile-averaged break.
  */
-function settleTwoPhase(ds: TwoPhaseDesign, p: number, exactP: boolean, out: TwoPhaseFit | undefined): TwoPhaseFit {
+function settleTwoPhase(ds: TwoPhaseDesign, p: number, out: TwoPhaseFit): TwoPhaseFit {
   const { sMin, sMax, range } = ds;
   const c = COEF;
   const bestB = S.bestB;
@@ -491,8 +490,6 @@ function settleTwoPhase(ds: TwoPhaseDesign, p: number, exactP: boolean, out: Two
   if (!(p < TWO_PHASE_ALPHA)) {
     const line = lineResult(out, S.lc0, S.lc1, sMin, range, S.rssLin);
     line.pCurvature = p;
-    // The alternative is for the full-data fit's bootstrap; replicates (exactP false) never use it.
-    if (exactP) line.alternative = { breakSalinity: bestB, coef: coefficients(c[0]!, c[1]!, c[2]!, c[3]!) };
     return line;
   }
   // Profile-averaged break (Akaike weights over the grid breaks and the chosen one).
@@ -508,7 +505,7 @@ function settleTwoPhase(ds: TwoPhaseDesign, p: number, exactP: boolean, out: Two
     sw += wg;
     swb += wg * (lo + ((sMax - lo) * g) / GRID);
   }
-  const f = out ?? newTwoPhaseFit();
+  const f = out;
   f.breakSalinity = bestB;
   f.linear = false;
   const coef = f.coef;
