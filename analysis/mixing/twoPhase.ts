@@ -168,6 +168,39 @@ function lineResult(out: TwoPhaseFit, a0: number, a1: number, sMin: number, rang
   return f;
 }
 
+/**
+ * The fit with a break written to `out`: break, the four coefficients of `c`, scaling, RSS of the
+ * curve and of the straight line, parameter count and the curvature test's p (the optional
+ * `alternative` and `breakAveraged` are the caller's).
+ */
+function curveResult(
+  out: TwoPhaseFit,
+  breakSalinity: number,
+  c: ArrayLike<number>,
+  sMin: number,
+  range: number,
+  rss: number,
+  rssLinear: number,
+  params: number,
+  pCurvature: number,
+): TwoPhaseFit {
+  const f = out;
+  f.breakSalinity = breakSalinity;
+  f.linear = false;
+  const coef = f.coef;
+  coef[0] = c[0]!;
+  coef[1] = c[1]!;
+  coef[2] = c[2]!;
+  coef[3] = c[3]!;
+  f.sMin = sMin;
+  f.range = range;
+  f.rss = rss;
+  f.rssLinear = rssLinear;
+  f.params = params;
+  f.pCurvature = pCurvature;
+  return f;
+}
+
 /** Weighted fit at a fixed break (k = 2 line, 3 with h², 4 with h² and h³) by direct sums; RSS or NaN. */
 function fitAt(
   x: ArrayLike<number>,
@@ -505,20 +538,7 @@ function settleTwoPhase(ds: TwoPhaseDesign, p: number, out: TwoPhaseFit): TwoPha
     sw += wg;
     swb += wg * (lo + ((sMax - lo) * g) / GRID);
   }
-  const f = out;
-  f.breakSalinity = bestB;
-  f.linear = false;
-  const coef = f.coef;
-  coef[0] = c[0]!;
-  coef[1] = c[1]!;
-  coef[2] = c[2]!;
-  coef[3] = c[3]!;
-  f.sMin = sMin;
-  f.range = range;
-  f.rss = best;
-  f.rssLinear = S.rssLin;
-  f.params = k + 1;
-  f.pCurvature = p;
+  const f = curveResult(out, bestB, c, sMin, range, best, S.rssLin, k + 1, p);
   f.alternative = undefined;
   f.breakAveraged = swb / sw;
   return f;
@@ -556,21 +576,7 @@ export function fitTwoPhaseAtBreak(
   const c = COEF;
   const rss = fitAt(x, y, w, sMin, range, breakSalinity, k, c);
   if (!Number.isFinite(rss)) return undefined;
-  const f = newTwoPhaseFit();
-  f.breakSalinity = breakSalinity;
-  f.linear = false;
-  const coef = f.coef;
-  coef[0] = c[0]!;
-  coef[1] = c[1]!;
-  coef[2] = c[2]!;
-  coef[3] = c[3]!;
-  f.sMin = sMin;
-  f.range = range;
-  f.rss = rss;
-  f.rssLinear = Number.NaN;
-  f.params = k + 1;
-  f.pCurvature = Number.NaN;
-  return f;
+  return curveResult(newTwoPhaseFit(), breakSalinity, c, sMin, range, rss, Number.NaN, k + 1, Number.NaN);
 }
 
 /** Value, dC/dS and d²C/dS² of the two-phase fit at salinity s. */
