@@ -5,11 +5,10 @@
 import { mkdtempSync, readFileSync, readdirSync, rmSync } from "node:fs";
 import { tmpdir, loadavg } from "node:os";
 import { join } from "node:path";
-import { spawn } from "node:child_process";
 import { chromium } from "playwright-core";
 import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
-import { DIST, REPO, ensureDist } from "../fixtures/dashboardDist.ts";
+import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
 
 const FIRST_VIEW = {
   all: [
@@ -128,22 +127,6 @@ async function coldLoad(url: string, spec: { all: string[]; none: string[] }): P
     await context.close();
     rmSync(profile, { recursive: true, force: true });
   }
-}
-
-async function serveDist(dir: string): Promise<{ url: string; kill(): void }> {
-  const server = spawn(process.execPath, [join(REPO, "scripts", "serve.js"), "--dir", dir], {
-    env: { ...process.env, PORT: "0" },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  const url = await new Promise<string>((resolve) => {
-    let out = "";
-    server.stdout!.on("data", (c: Buffer) => {
-      out += c.toString();
-      const m = /(http:\/\/127\.0\.0\.1:\d+\/)/.exec(out);
-      if (m) resolve(m[1]!);
-    });
-  });
-  return { url, kill: () => server.kill() };
 }
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;

@@ -3,12 +3,10 @@
 // the map's events, resource timings, and a Chromium trace summed per thread (script compile,
 // evaluation, tasks, GC, layout/paint). Not a bench row: a tool to see what the first view waits for.
 // Usage: npx tsx bench/profile/coldStart.ts [--runs N]   (build dashboard/dist first)
-import { spawn } from "node:child_process";
-import { join } from "node:path";
 import { chromium, type Browser } from "playwright-core";
 import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
-import { DIST, REPO, ensureDist } from "../fixtures/dashboardDist.ts";
+import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
 
 const MARKERS: Record<string, string> = {
   mapReady: '[data-map-ready="true"]',
@@ -220,23 +218,6 @@ function print(label: string, s: Summary): void {
         .join(", ")}`,
     );
   for (const l of s.cpu) console.log(l);
-}
-
-/** Serves a built dashboard directory; resolves with its URL and the server process. */
-async function serveDist(dir: string): Promise<{ url: string; kill(): void }> {
-  const server = spawn(process.execPath, [join(REPO, "scripts", "serve.js"), "--dir", dir], {
-    env: { ...process.env, PORT: "0" },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  const url = await new Promise<string>((resolve) => {
-    let out = "";
-    server.stdout!.on("data", (c: Buffer) => {
-      out += c.toString();
-      const m = /(http:\/\/127\.0\.0\.1:\d+\/)/.exec(out);
-      if (m) resolve(m[1]!);
-    });
-  });
-  return { url, kill: () => server.kill() };
 }
 
 function argValues(name: string): string[] {

@@ -4,10 +4,9 @@
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { spawn } from "node:child_process";
 import { chromium } from "playwright-core";
 import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
-import { DIST, REPO, ensureDist } from "../fixtures/dashboardDist.ts";
+import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
 
 const INIT = `(() => {
@@ -88,18 +87,8 @@ function longTasks(buf: Buffer): void {
 const dist = process.argv.includes("--dist") ? process.argv[process.argv.indexOf("--dist") + 1]! : DIST;
 ensureDist();
 const bareMap = process.argv.includes("--bare") ? await serveBareMap() : undefined;
-const server = spawn(process.execPath, [join(REPO, "scripts", "serve.js"), "--dir", dist], {
-  env: { ...process.env, PORT: "0" },
-  stdio: ["ignore", "pipe", "pipe"],
-});
-const url = await new Promise<string>((resolve) => {
-  let out = "";
-  server.stdout!.on("data", (c: Buffer) => {
-    out += c.toString();
-    const m = /(http:\/\/127\.0\.0\.1:\d+\/)/.exec(out);
-    if (m) resolve(m[1]!);
-  });
-});
+const server = await serveDist(dist);
+const url = server.url;
 const profile = mkdtempSync(join(tmpdir(), "brackline-tl-"));
 const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_FLAGS });
 const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
