@@ -9,7 +9,8 @@ const g = (v: number): string => (Math.abs(v) >= 100 ? v.toFixed(0) : v.toPrecis
  * Plain-language verdict that agrees with the numbers (documented rules): a % change whose
  * interval crosses or touches zero says "not determined in sign" (a limit of exactly 0 % comes from
  * bootstrap draws that kept the straight line, i.e. conservative mixing is not excluded); an interval wider than ±1000 % says
- * "not determined"; a negative C*₀ is flagged (warning "effective-negative").
+ * "not determined"; a negative C*₀ is flagged (warning "effective-negative") and leaves the % change
+ * "not determined" in words (a removal beyond 100 % is not a net change anyone can use).
  *
  * @param cls behaviour class
  * @param percent % change estimate
@@ -40,6 +41,8 @@ export function verdictOf(
     });
     return `${cls}; % change not determined (95 % interval ${span})`;
   }
+  if (effective && effective.value < 0)
+    return `${cls} in the curve's shape, but the net % change is not determined: the effective river end-member is negative (C*₀ = ${g(effective.value)} ${unit}), which is not physical`;
   if (cls === "conservative")
     return `conservative mixing within the uncertainty (% change ${g(percent.value)} %, 95 % interval ${span})`;
   if (percent.lower <= 0 && percent.upper >= 0)

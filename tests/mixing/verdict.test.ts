@@ -29,4 +29,13 @@ describe("verdictOf()", () => {
     expect(v).toMatch(/% change not determined/);
     expect(warnings.map((w) => w.code)).toEqual(["effective-negative", "percent-not-determined"]);
   });
+
+  it("leaves the net change undetermined in words when C*₀ is negative (real case: Neuse DON 2016-03-07, -173 % [-424, -78])", () => {
+    // Common practice: C*₀ < 0 is not physical, so a removal of more than 100 % is an extrapolation artefact.
+    const warnings: MixingWarning[] = [];
+    const v = verdictOf("removal", est(-173, -424, -78), est(-252, -1122, 71), "µg/L", warnings);
+    expect(v).toMatch(/net % change is not determined/);
+    expect(v).not.toMatch(/net removal of/);
+    expect(warnings.map((w) => w.code)).toEqual(["effective-negative"]);
+  });
 });
