@@ -287,11 +287,14 @@ export function analyzeShape(p: ShapeInput): {
         upper: percent.value + Math.hypot(percent.upper - percent.value, dPct),
       };
   }
-  // Model-selection uncertainty of the break as the data's profile over breaks sees it (breakModelSpread.ts):
+  // Model-selection uncertainty of the break as the data's profile over breaks sees it (breakModelSpread.ts);
+  // not for a seaward line on < 4 stations, whose C*₀ is averaged with a curved end in every replicate
+  // (twoPhaseMouth.ts), which already carries the end model (adding both counted it twice):
   // the replicates, drawn around a curve whose curvature stops at its break, place the break more surely
   // than data whose curvature fades (Buckland et al. 1997 between-model term, in quadrature).
+  const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
   const spread =
-    tangent.method === "segment" && !tp.linear
+    tangent.method === "segment" && !tp.linear && !shortLine
       ? breakModelSpread(x, conc, wts, tp, sr, percent && (override ? river.conc : riverModel))
       : undefined;
   if (spread) {
@@ -302,7 +305,6 @@ export function analyzeShape(p: ShapeInput): {
     effective = widen(effective, spread.effective);
     if (percent && spread.percent !== undefined) percent = widen(percent, spread.percent);
   }
-  const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
   if (tangent.method === "curve-tangent" || (shortLine && tangent.nStations < 3)) {
     // No straight seaward phase, or one resting on < 3 stations: C*₀ is a slope at the end of
     // the data that depends on the curve model. The smoothing spline's tangent there is a second model;
