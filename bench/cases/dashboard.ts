@@ -12,30 +12,10 @@ import type { BenchCase, BenchRow } from "../benchCase.ts";
 import { openBenchDashboard } from "../fixtures/dashboardDist.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
 import { inFreshBrowser } from "../fixtures/freshBrowser.ts";
+import { ALL_SURVEYS, BARE, FIRST_VIEW, type ReadySpec } from "../fixtures/readySpecs.ts";
 
 /** Cold loads of each page (bare map, dashboard), alternating, each in a browser of its own. */
 const COLD_ROUNDS = 3;
-
-/** What a page must show (every `all` selector present, no `none` selector) to count as ready. */
-interface ReadySpec {
-  all: string[];
-  none?: string[];
-}
-
-/** The survey on screen analysed and drawn: mixing plot, profile, behaviour table, speciation answered, map idle. */
-const FIRST_VIEW: ReadySpec = {
-  all: [
-    '[data-active-analysis="ready"]',
-    '[data-map-ready="true"]',
-    '[data-panel="MixingPlot"] svg',
-    '[data-panel="ChannelProfile"] svg',
-    '[data-panel="BehaviourTable"] table',
-  ],
-  none: ['[data-testid="speciation-pending"]'],
-};
-/** Every survey analysed (the comparison made) and the map idle. */
-const ALL_SURVEYS: ReadySpec = { all: ['[data-analysis-status="ready"]', '[data-map-ready="true"]'] };
-const BARE: ReadySpec = { all: ['[data-ready="true"]'] };
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);

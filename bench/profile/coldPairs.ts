@@ -9,18 +9,7 @@ import { chromium } from "playwright-core";
 import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
 import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
-
-const FIRST_VIEW = {
-  all: [
-    '[data-active-analysis="ready"]',
-    '[data-map-ready="true"]',
-    '[data-panel="MixingPlot"] svg',
-    '[data-panel="ChannelProfile"] svg',
-    '[data-panel="BehaviourTable"] table',
-  ],
-  none: ['[data-testid="speciation-pending"]'],
-};
-const BARE = { all: ['[data-ready="true"]'], none: [] as string[] };
+import { BARE, FIRST_VIEW, type ReadySpec } from "../fixtures/readySpecs.ts";
 
 /** CPU ms by process type and thread name of a Chromium's processes (see browserCpuS). */
 function threadCpuMs(profile: string): Map<string, number> {
@@ -89,7 +78,7 @@ function browserPids(profile: string): Set<number> {
   return all;
 }
 
-async function coldLoad(url: string, spec: { all: string[]; none: string[] }): Promise<Record<string, number>> {
+async function coldLoad(url: string, spec: ReadySpec): Promise<Record<string, number>> {
   const profile = mkdtempSync(join(tmpdir(), "brackline-pairs-"));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM_PATH,
@@ -112,7 +101,7 @@ async function coldLoad(url: string, spec: { all: string[]; none: string[] }): P
         all.every((sel) => document.querySelector(sel)) && !none.some((sel) => document.querySelector(sel))
           ? performance.now()
           : false,
-      spec,
+      { all: spec.all, none: spec.none ?? [] },
       { polling: "raf", timeout: 180_000 },
     );
     const t = (await h.jsonValue()) as number;

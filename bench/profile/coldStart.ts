@@ -224,7 +224,7 @@ function argValues(name: string): string[] {
   return process.argv.flatMap((a, i) => (a === name && process.argv[i + 1] ? [process.argv[i + 1]!] : []));
 }
 
-/** The first complete view as the bench defines it (bench/cases/dashboard.ts FIRST_VIEW). */
+/** The first complete view as the bench defines it (FIRST_VIEW in bench/fixtures/readySpecs.ts), by marker. */
 const FIRST_VIEW = [
   MARKERS.mapReady!,
   MARKERS.activeAnalysis!,
