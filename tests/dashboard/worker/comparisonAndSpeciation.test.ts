@@ -4,14 +4,14 @@
  * as plain data equal to analysis/seawater's own results (common practice: one source for every number).
  */
 import { readFileSync } from "node:fs";
-import { afterAll, describe, expect, it } from "vitest";
-import { expose, proxy, wrap } from "comlink";
-import { createWorkerApi, type WorkerApi } from "../../../dashboard/src/worker/api.ts";
+import { describe, expect, it } from "vitest";
+import { proxy } from "comlink";
 import { readFiles, workspaceSettings } from "../../../dashboard/src/worker/engine.ts";
 import type { AnalysisEvent } from "../../../dashboard/src/worker/protocol.ts";
 import { defaultSpeciationSettings } from "../../../dashboard/src/worker/speciation.ts";
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
 import { analyzeInputs, stationSpeciation } from "../../../analysis/index.ts";
+import { comlinkWorker } from "./helpers/comlinkWorker.ts";
 
 const demo = (p: string) => readFileSync(new URL(`../../../data-demo/${p}`, import.meta.url), "utf8");
 const surveys = [
@@ -20,13 +20,7 @@ const surveys = [
 ];
 const centerline = { name: "centerline.geojson", text: demo("centerline.geojson") };
 
-const channel = new MessageChannel();
-expose(createWorkerApi(), channel.port1);
-const worker = wrap<WorkerApi>(channel.port2);
-afterAll(() => {
-  channel.port1.close();
-  channel.port2.close();
-});
+const worker = comlinkWorker();
 
 describe("worker comparison and speciation", () => {
   it("the worker's comparison of the invented demo surveys equals analyzeInputs' comparison", async () => {

@@ -9,21 +9,17 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
-import { expose, proxy, wrap } from "comlink";
+import { proxy } from "comlink";
 import { main } from "../../../cli/main.ts";
-import { createWorkerApi, type WorkerApi } from "../../../dashboard/src/worker/api.ts";
 import type { AnalysisEvent, TextFile } from "../../../dashboard/src/worker/protocol.ts";
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
 import type { SurveyAnalysis } from "../../../analysis/index.ts";
+import { comlinkWorker } from "./helpers/comlinkWorker.ts";
 
 const demo = (p: string) => readFileSync(new URL(`../../../data-demo/${p}`, import.meta.url), "utf8");
 const dir = mkdtempSync(join(tmpdir(), "brackline-discharge-parity-"));
-const channel = new MessageChannel();
-expose(createWorkerApi(), channel.port1);
-const worker = wrap<WorkerApi>(channel.port2);
+const worker = comlinkWorker();
 afterAll(() => {
-  channel.port1.close();
-  channel.port2.close();
   rmSync(dir, { recursive: true, force: true });
 });
 

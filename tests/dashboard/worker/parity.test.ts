@@ -7,26 +7,19 @@
 import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { afterAll, describe, expect, it } from "vitest";
-import { expose, proxy, wrap } from "comlink";
+import { describe, expect, it } from "vitest";
+import { proxy } from "comlink";
 import { main } from "../../../cli/main.ts";
-import { createWorkerApi, type WorkerApi } from "../../../dashboard/src/worker/api.ts";
 import type { AnalysisEvent, AnalysisJob, SourceFile, TextFile } from "../../../dashboard/src/worker/protocol.ts";
 import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
 import { readSurveyText, type SurveyAnalysis } from "../../../analysis/index.ts";
 import { cfVariable, PRACTICAL_SALINITY, writeCfStationFile } from "../../io/helpers/cfStationFile.ts";
+import { comlinkWorker } from "./helpers/comlinkWorker.ts";
 
 const demo = (p: string) => readFileSync(new URL(`../../../data-demo/${p}`, import.meta.url), "utf8");
 const dir = mkdtempSync(join(tmpdir(), "brackline-parity-"));
 
-/** The worker API behind Comlink, as the dashboard calls it (one end of a MessageChannel each side). */
-const channel = new MessageChannel();
-expose(createWorkerApi(), channel.port1);
-const worker = wrap<WorkerApi>(channel.port2);
-afterAll(() => {
-  channel.port1.close();
-  channel.port2.close();
-});
+const worker = comlinkWorker();
 
 /** The invented wet-season demo survey as rows of its CSV (no quoted fields in the demo files). */
 function wetRows(): Array<Record<string, string>> {
