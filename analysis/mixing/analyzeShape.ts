@@ -202,8 +202,9 @@ export function analyzeShape(p: ShapeInput): {
   if (!override && lineRejected) useGroup("no curve to extrapolate along");
   let sr = river.salinity;
   // C*₀ averaged over the seaward end models where the seaward line is short (twoPhaseMouth.ts).
-  const effectiveAt = (s: number): number => mouthAveragedEffective(x, conc, wts, tp, s, scatter * scatter).value;
-  let cStar = effectiveAt(sr);
+  const mouthAverageAt = (s: number) => mouthAveragedEffective(x, conc, wts, tp, s, scatter * scatter);
+  let mouthAverage = mouthAverageAt(sr);
+  let cStar = mouthAverage.value;
   let bs = boot(sr, river, override, cStar);
   if (
     !override &&
@@ -229,7 +230,8 @@ export function analyzeShape(p: ShapeInput): {
       message: `Extrapolating the fitted curve from the freshest stations to S = ${sr} gives C₀ = ${extrapolated.toPrecision(3)} ${unit}${se !== undefined ? ` ± ${se.toPrecision(2)} (bootstrap standard error)` : ""}, too uncertain to use: the freshest stations disagree more than a mixing curve explains (river variability or a steep change at the lowest salinities). C₀ and C*₀ are given at the freshest stations' salinity S = ${river.salinity.toFixed(2)} instead. A river sample upstream of the salt intrusion would settle it.`,
     });
     sr = river.salinity;
-    cStar = effectiveAt(sr);
+    mouthAverage = mouthAverageAt(sr);
+    cStar = mouthAverage.value;
     bs = boot(sr, river, override, cStar);
   }
   if (draws > 0 && bs.usable < 0.9 * draws)
@@ -330,7 +332,7 @@ export function analyzeShape(p: ShapeInput): {
       });
   }
   const segStart = tangent.method === "segment" && !tp.linear ? tangent.fromSalinity : undefined;
-  const mouthWeight = mouthAveragedEffective(x, conc, wts, tp, sr, scatter * scatter).weight;
+  const mouthWeight = mouthAverage.weight;
   if (segStart !== undefined && tangent.nStations < MIN_SEAWARD_STATIONS)
     warnings.push({
       code: "short-seaward-line",
