@@ -5,8 +5,7 @@
 import { mkdtempSync, readFileSync, readdirSync, rmSync } from "node:fs";
 import { tmpdir, loadavg } from "node:os";
 import { join } from "node:path";
-import { chromium } from "playwright-core";
-import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
+import { launchChromium } from "../../tests/e2e/browser.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
 import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
 import { BARE, FIRST_VIEW, type ReadySpec } from "../fixtures/readySpecs.ts";
@@ -80,12 +79,7 @@ function browserPids(profile: string): Set<number> {
 
 async function coldLoad(url: string, spec: ReadySpec): Promise<Record<string, number>> {
   const profile = mkdtempSync(join(tmpdir(), "brackline-pairs-"));
-  const context = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM_PATH,
-    headless: true,
-    args: CHROMIUM_FLAGS,
-    viewport: { width: 1440, height: 900 },
-  });
+  const context = await launchChromium(profile);
   try {
     const page = context.pages()[0] ?? (await context.newPage());
     await page.addInitScript({

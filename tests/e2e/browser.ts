@@ -85,6 +85,22 @@ function startServer(): Promise<{ child: ChildProcess; url: string }> {
   });
 }
 
+/**
+ * Debian's headless Chromium with the software-WebGL flags on a profile directory of its own
+ * (Playwright passes it as --user-data-dir): the one launch every browser test and bench uses.
+ */
+export function launchChromium(
+  profile: string,
+  viewport: { width: number; height: number } = { width: 1440, height: 900 },
+): Promise<BrowserContext> {
+  return chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM_PATH,
+    headless: true,
+    args: CHROMIUM_FLAGS,
+    viewport,
+  });
+}
+
 /** Starts the server and the browser and opens the dashboard. */
 export async function openDashboard(viewport = { width: 1440, height: 900 }): Promise<Session> {
   const missing = missingBrowserMessage();
@@ -94,12 +110,7 @@ export async function openDashboard(viewport = { width: 1440, height: 900 }): Pr
   let context: BrowserContext;
   try {
     // A fresh profile directory per session (Playwright passes it as --user-data-dir).
-    context = await chromium.launchPersistentContext(profile, {
-      executablePath: CHROMIUM_PATH,
-      headless: true,
-      args: CHROMIUM_FLAGS,
-      viewport,
-    });
+    context = await launchChromium(profile, viewport);
   } catch (error) {
     server.child.kill();
     throw error;
