@@ -51,7 +51,9 @@ export interface BootstrapInput {
   seed: number;
   /**
    * Full-data point estimates: when given, C*₀, % change, C₀ and C*₀ − C₀ get bias-corrected
-   * percentile intervals about them (Efron 1987) instead of plain percentile intervals.
+   * percentile intervals about them (Efron 1987) instead of plain percentile intervals. Only when `yHat`
+   * is the fit that gave them: BC's z₀ measures the estimator's median bias from replicates of that fit
+   * (the caller omits them when it draws around a kept line's two-phase alternative).
    */
   estimates?: { effective: number; percent: number; riverConc: number; netDelta: number };
   /** Sign of the reaction zone to locate in each replicate (that of the point estimate's net change). */
@@ -92,7 +94,8 @@ export interface BootstrapResult {
  * linearity tests see the design the survey had. Intervals are percentile intervals, bias-corrected
  * (BC, Efron 1987) about the full-data estimates when those are given. When the full-data fit kept
  * the straight line, the caller passes the best two-phase fit as Ĉ so that every replicate re-runs the
- * model selection and the intervals carry its uncertainty (Efron 2014).
+ * model selection and the intervals carry its uncertainty (Efron 2014), and no estimates (plain
+ * percentile intervals: the replicates are then not drawn around the fit that gave the estimates).
  *
  * @param b inputs
  * @returns intervals and the curve band on the grid
