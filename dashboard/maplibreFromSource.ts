@@ -1,5 +1,6 @@
 import { createRequire } from "node:module";
 import { dirname, join } from "node:path";
+import { fileURLToPath } from "node:url";
 import { transformWithOxc, type Plugin } from "vite";
 
 const maplibreDir = dirname(createRequire(import.meta.url).resolve("maplibre-gl/package.json"));
@@ -10,6 +11,8 @@ const workerEntry = join(maplibreDir, "src", "source", "worker.ts");
 const workerUrlImport = "maplibre-gl/dist/maplibre-gl-worker.mjs?url";
 const workerUrlModule = "\0brackline-maplibre-worker-url";
 const sourceDir = `${join(maplibreDir, "src")}/`;
+/** Stand-in for the MapLibre Tiles decoder, which only vector tile sources with `encoding: "mlt"` reach. */
+const noMlt = fileURLToPath(new URL("./src/vendor/maplibreNoMlt.js", import.meta.url));
 
 /**
  * Vite plugin: in `npm run build` MapLibre is built from the TypeScript sources its package ships
@@ -23,7 +26,9 @@ const sourceDir = `${join(maplibreDir, "src")}/`;
  * unit tests use the published bundles as before. MapLibre's classes are written for TypeScript's
  * `useDefineForClassFields: false` (a struct array declares `int16: Int16Array` and its base
  * constructor fills it), which its package ships no tsconfig to say, so its sources are compiled
- * here with that setting.
+ * here with that setting. The map's sources are GeoJSON and raster only (src/map/style.ts), so the
+ * decoder of MapLibre Tiles vector tiles (`@maplibre/mlt`, ~19 kB gzip) is swapped for a stand-in
+ * that throws (src/vendor/maplibreNoMlt.js).
  */
 export function maplibreFromSource(): Plugin {
   let building = false;
@@ -37,8 +42,9 @@ export function maplibreFromSource(): Plugin {
     buildStart() {
       if (building) workerRef = this.emitFile({ type: "chunk", id: workerEntry, name: "maplibre-worker" });
     },
-    resolveId(source) {
+    resolveId(source, importer) {
       if (!building) return null;
+      if (source === "@maplibre/mlt" && importer?.startsWith(sourceDir)) return noMlt;
       if (source === "maplibre-gl") return mainEntry;
       if (source === workerUrlImport) return workerUrlModule;
       return null;
