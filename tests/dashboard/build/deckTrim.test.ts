@@ -37,4 +37,24 @@ describe("deckTrim: deck.gl without its WebGPU attribute buffer groups", () => {
     expect(modules.length).toBeGreaterThan(100);
     expect(modules.filter((f) => readFileSync(join(dist, f), "utf8").includes("@luma.gl/gpgpu"))).toEqual([]);
   });
+
+  it("deck.gl's layer and resource code imports from loaders.gl only what the stand-in exports, and the plugin swaps it only for deck.gl's core", async () => {
+    const dist = join(coreDir, "dist");
+    const imported = new Set<string>();
+    for (const f of ["lib/init.js", "lib/layer.js", "lib/resource/resource.js"]) {
+      const code = readFileSync(join(dist, f), "utf8");
+      for (const m of code.matchAll(/import \{([^}]*)\} from '@loaders\.gl\/(core|images)'/g)) {
+        for (const name of m[1]!.split(",")) imported.add(name.trim());
+      }
+    }
+    expect([...imported].sort()).toEqual(["ImageLoader", "load", "registerLoaders"]);
+    const standIn = (await import("../../../dashboard/src/vendor/deckNoLoaders.js")) as Record<string, unknown>;
+    for (const name of imported) expect(standIn[name], name).toBeDefined();
+    await expect((standIn.load as (url: string) => Promise<unknown>)("cells.json")).rejects.toThrow(
+      /not part of the dashboard build/,
+    );
+    const resolveId = deckTrim.resolveId as (source: string, importer?: string) => string | null;
+    expect(resolveId.call(null, "@loaders.gl/core", join(dist, "lib", "layer.js"))).toMatch(/deckNoLoaders\.js$/);
+    expect(resolveId.call(null, "@loaders.gl/core", join(REPO, "dashboard", "src", "x.ts"))).toBeNull();
+  });
 });
