@@ -5,8 +5,10 @@ import { fileURLToPath } from "node:url";
 import { defineConfig } from "vite";
 import { svelte } from "@sveltejs/vite-plugin-svelte";
 import { proj4Trim } from "./proj4Trim.ts";
+import { deckTrim } from "./deckTrim.ts";
 import { sharedAnalysisWorker } from "./sharedWorker.ts";
 import { demoPreload } from "./demoPreload.ts";
+import { maplibreFromSource } from "./maplibreFromSource.ts";
 
 const dashboardDir = fileURLToPath(new URL(".", import.meta.url));
 const repoDir = fileURLToPath(new URL("..", import.meta.url));
@@ -33,7 +35,14 @@ function engineFingerprint(): string {
 export default defineConfig({
   root: dashboardDir,
   base: "./",
-  plugins: [proj4Trim, sharedAnalysisWorker(), demoPreload, svelte({ configFile: false })],
+  plugins: [
+    proj4Trim,
+    deckTrim,
+    sharedAnalysisWorker(),
+    maplibreFromSource(),
+    demoPreload,
+    svelte({ configFile: false }),
+  ],
   resolve: {
     // jStat as published is one object no bundler can trim; the dashboard ships the functions we call,
     // copied bit for bit (src/vendor/jstatSubset.ts; tests/dashboard/build/jstatSubset.test.ts).
