@@ -8,6 +8,7 @@
  */
 import { Worker } from "node:worker_threads";
 import { tuneCompilerForThreads } from "./compilerTuning.ts";
+import { phaseMark } from "./phaseLog.ts";
 
 /** Handler of a worker module: set-up once, then one call per task. */
 export interface TaskHandler<Setup, Task, Result> {
@@ -114,7 +115,9 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
     for (const i of order) {
       if (o.signal?.aborted) throw new CancelledError(done);
       const t0 = performance.now();
+      phaseMark(`task ${i} start`);
       results[i] = o.inline.run(o.tasks[i]!);
+      phaseMark(`task ${i} end`);
       done++;
       o.onResult?.(i, results[i]!, performance.now() - t0);
       await new Promise((r) => setImmediate(r)); // lets a SIGINT through between tasks
@@ -145,7 +148,9 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
           const i = order[next++]!;
           const t0 = performance.now();
           try {
+            phaseMark(`task ${i} start`);
             results[i] = o.inline!.run(o.tasks[i]!);
+            phaseMark(`task ${i} end`);
           } catch (error) {
             return reject(error);
           }
