@@ -40,6 +40,8 @@ export async function loadWorkspaceOnWorkers(
       workerUrl: surveyWorkerUrl(),
       threads: started.workers.length,
       alsoHere: true,
+      // A few long tasks: whichever thread is free takes the next file (no file held in hand).
+      sharedQueue: true,
       started,
       handler: "read",
       keepStarted: true,
