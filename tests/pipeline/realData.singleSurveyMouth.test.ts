@@ -98,7 +98,6 @@ describe.skipIf(!present)(
               `${date}: mouth at station ${mouth}, South Bay on the channel: ${southOnChannel.map((s) => s.id)}`,
             );
         }
-      // 11 full transects (Rio Vista to South Bay) and 12 cruises reaching San Pablo Bay
       // 11 full transects (Rio Vista to South Bay) and 14 cruises reaching San Pablo Bay or beyond
       expect(checked.length).toBe(25);
       // Two cruises that do not reach the river are still read wrongly, from salinity alone:
