@@ -51,9 +51,12 @@ export interface BootstrapInput {
   seed: number;
   /**
    * Full-data point estimates: when given, C*₀, % change, C₀ and C*₀ − C₀ get bias-corrected
-   * percentile intervals about them (Efron 1987) instead of plain percentile intervals.
+   * percentile intervals about them (Efron 1987) instead of plain percentile intervals. BC's z₀ measures
+   * the estimator's median bias from replicates of the fit that gave the estimate; `effective` undefined:
+   * a plain percentile interval for C*₀ (a kept line's C*₀ with the replicates drawn around its two-phase
+   * alternative; analyzeShape.ts).
    */
-  estimates?: { effective: number; percent: number; riverConc: number; netDelta: number };
+  estimates?: { effective: number | undefined; percent: number; riverConc: number; netDelta: number };
   /** Sign of the reaction zone to locate in each replicate (that of the point estimate's net change). */
   zoneSign?: -1 | 1;
   /**
@@ -92,7 +95,8 @@ export interface BootstrapResult {
  * linearity tests see the design the survey had. Intervals are percentile intervals, bias-corrected
  * (BC, Efron 1987) about the full-data estimates when those are given. When the full-data fit kept
  * the straight line, the caller passes the best two-phase fit as Ĉ so that every replicate re-runs the
- * model selection and the intervals carry its uncertainty (Efron 2014).
+ * model selection and the intervals carry its uncertainty (Efron 2014), and no C*₀ estimate (a plain
+ * percentile interval: the replicates are then not drawn around the fit that gave it).
  *
  * @param b inputs
  * @returns intervals and the curve band on the grid
@@ -350,7 +354,7 @@ function summarise(st: BootstrapDraws, est: BootstrapInput["estimates"]): Bootst
   for (let d = 0; d < D; d++) delta[d] = eff[d]! - c0[d]!;
   return {
     usable: st.usable,
-    effective: est ? intervalBc95(eff, est.effective) : interval95(eff),
+    effective: est?.effective !== undefined ? intervalBc95(eff, est.effective) : interval95(eff),
     percent: est ? intervalBc95(st.pct, est.percent) : interval95(st.pct),
     riverConc: est ? intervalBc95(c0, est.riverConc) : interval95(c0),
     riverSe: k >= 2 ? Math.sqrt(Math.max(0, (s2 - (s1 * s1) / k) / (k - 1))) : undefined,

@@ -8,6 +8,8 @@ export interface CellScore {
   shape: string;
   design: SurveyDesign;
   surveys: number;
+  /** Surveys scored for coverage and bias (those with a C*₀ and a % change): the coverage's Monte Carlo n. */
+  scored: number;
   /** Surveys where analyzeConstituent threw or gave no C*₀ (class accuracy still counts the latter). */
   failures: number;
   effectiveBiasPct: number;
@@ -20,6 +22,10 @@ export interface CellScore {
   percentRmsePp: number;
   effectiveCoverage: number;
   percentCoverage: number;
+  /** Mean half-width of the C*₀ 95 % interval, % of the true C*₀ (compare with 1.96 × RMSE). */
+  effectiveHalfWidthPct: number;
+  /** Mean half-width of the % change 95 % interval [pp]. */
+  percentHalfWidthPp: number;
   /** Point estimate outside its own interval (C*₀ or % change). */
   outsideOwnInterval: number;
   classAccuracy: number;
@@ -106,6 +112,8 @@ export function scoreCell(
   const bErr: number[] = [];
   const mErr: number[] = [];
   const rErr: number[] = [];
+  let eHalf = 0,
+    pHalf = 0;
   for (let k = 0; k < surveys; k++) {
     const seed = seed0 + 7919 * k + Math.round(design.noise * 1e4) + 131 * design.stations;
     const st = survey(shape, design, seed);
@@ -150,6 +158,8 @@ export function scoreCell(
     pErr.push(p.value - truth.percent);
     if (r.warnings.some((w) => BIAS_WARNINGS.has(w.code))) biasWarned++;
     else pErrUnwarned.push(p.value - truth.percent);
+    eHalf += (50 * (e.upper - e.lower)) / Math.abs(truth.effective);
+    pHalf += 0.5 * (p.upper - p.lower);
     if (covers(e, truth.effective)) eCov++;
     if (covers(p, truth.percent)) pCov++;
     if (!inside(e) || !inside(p)) outside++;
@@ -179,6 +189,7 @@ export function scoreCell(
     shape: shape.name,
     design,
     surveys,
+    scored: ok,
     failures,
     effectiveBiasPct: mean(eErr),
     effectiveRmsePct: rms(eErr),
@@ -188,6 +199,8 @@ export function scoreCell(
     biasWarned: biasWarned / Math.max(1, ok),
     effectiveCoverage: eCov / Math.max(1, ok),
     percentCoverage: pCov / Math.max(1, ok),
+    effectiveHalfWidthPct: eHalf / Math.max(1, ok),
+    percentHalfWidthPp: pHalf / Math.max(1, ok),
     outsideOwnInterval: outside,
     classAccuracy: cls / Math.max(1, analysed),
     classOrWarned: clsHonest / Math.max(1, analysed),

@@ -84,6 +84,38 @@ export const SHAPES: Shape[] = [
   { name: "removal→mouth", breakSalinity: 50, percent: -50, riverConc: 100, seaConc: 10, expectedClass: "removal" },
 ];
 
+/**
+ * Weak reactions (3–5 %) that the straight-line test often does not detect (`npm run calibrate -- --weak`
+ * adds them): the line kept, C*₀ and % change still have a true value off the line's, so they show what
+ * the intervals of a kept line cover when there is a reaction after all. Not in the issue 14 goal table.
+ */
+export const WEAK_SHAPES: Shape[] = [
+  {
+    name: "weak removal→S5",
+    breakSalinity: 5,
+    percent: -5,
+    riverConc: 100,
+    seaConc: 10,
+    expectedClass: "removal-then-conservative",
+  },
+  {
+    name: "weak removal→S20",
+    breakSalinity: 20,
+    percent: -3,
+    riverConc: 100,
+    seaConc: 10,
+    expectedClass: "removal-then-conservative",
+  },
+  {
+    name: "weak desorption→S10",
+    breakSalinity: 10,
+    percent: 5,
+    riverConc: 100,
+    seaConc: 10,
+    expectedClass: "addition",
+  },
+];
+
 /** The analytic curve of a shape: value and derivatives at S, and the true answers. */
 export interface Curve {
   conc(s: number): number;
