@@ -1,5 +1,6 @@
 import type { Command, CommandIo } from "./command.ts";
 import { prestartSurveyWorkers, stopPrestarted } from "./archive/earlyStart.ts";
+import { PHASES_ON, phaseMark } from "./archive/phaseLog.ts";
 import { commands } from "./commands/index.ts";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_USAGE, InputError, UsageError } from "./exitCodes.ts";
 import { stripControl } from "../analysis/output/terminalText.ts";
@@ -36,6 +37,10 @@ export async function main(argv: string[], io?: CommandIo): Promise<number> {
   };
   const sink: CommandIo = { out: (t) => raw.out(stripControl(t)), err: (t) => raw.err(stripControl(t)) };
   const [name, ...rest] = argv;
+  if (PHASES_ON && !io) {
+    process.stderr.write(`phase ${performance.timeOrigin.toFixed(1)} 0 process start\n`);
+    phaseMark("CLI entry loaded");
+  }
   if (name === undefined || name === "--help" || name === "-h" || name === "help") {
     sink.out(usage());
     return name === undefined ? EXIT_USAGE : 0;
@@ -47,8 +52,10 @@ export async function main(argv: string[], io?: CommandIo): Promise<number> {
   }
   // Survey workers start loading now, while this thread loads the command's code.
   prestartSurveyWorkers(name, rest);
+  phaseMark("workers started");
   try {
     const command = await entry.load();
+    phaseMark("command loaded");
     if (rest.includes("--help") || rest.includes("-h")) {
       sink.out(command.help);
       return 0;

@@ -11,6 +11,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import type { BenchCase, BenchRow } from "../benchCase.ts";
 import { idleBoundS, median, runSampled, type ThreadedRun } from "./archiveThreads.ts";
+import { PHASE_NAMES, runPhases, type RunPhases } from "./archivePhases.ts";
 import {
   northBayCenterline,
   SF_DIR,
@@ -53,12 +54,21 @@ interface CliRun extends ThreadedRun {
   /** The analysis phase as the CLI reports it ("archive: … in X s") [s]. */
   analyseS: number;
   surveys: number;
+  /** The run's phases from its timeline (BRACKLINE_PHASES=1). */
+  phases: RunPhases;
 }
 
 async function cli(threads: number): Promise<CliRun> {
-  const r = await runSampled(archiveArgs(threads), ANALYSIS_START, Math.max(0, threads - 1));
+  const r = await runSampled(archiveArgs(threads), ANALYSIS_START, Math.max(0, threads - 1), {
+    BRACKLINE_PHASES: "1",
+  });
   const m = ANALYSIS_DONE.exec(r.stderr);
-  return { ...r, analyseS: Number(m?.[2] ?? NaN), surveys: Number(m?.[1] ?? 0) };
+  return {
+    ...r,
+    analyseS: Number(m?.[2] ?? NaN),
+    surveys: Number(m?.[1] ?? 0),
+    phases: runPhases(r.stderr, r.exitAtMs),
+  };
 }
 
 const f1 = (x: number): string => x.toFixed(1);
@@ -98,6 +108,13 @@ export const archiveBench: BenchCase = {
     const wall1 = med(one, (r) => r.wallS);
     const an2 = med(two, (r) => r.analyseS);
     const an1 = med(one, (r) => r.analyseS);
+    const phaseRows: BenchRow[] = (Object.keys(PHASE_NAMES) as Array<keyof RunPhases>).map((k) => ({
+      name: `archive phase: ${PHASE_NAMES[k]} (2 threads; timeline marks, BRACKLINE_PHASES=1)`,
+      value: med(two, (r) => r.phases[k]),
+      unit: "s",
+      baseline: { name: "one thread", value: med(one, (r) => r.phases[k]) },
+      note: `per pair (two / one): ${two.map((t, i) => `${f2(t.phases[k])} / ${f2(one[i]!.phases[k])}`).join(", ")}`,
+    }));
     return [
       {
         name: `archive: brackline compare, whole 2016–2022 SF Bay archive + station table (${two[0]!.surveys} surveys, four nutrients, 2,000 draws, no cache), --threads 2 (this thread and a worker), process wall time`,
@@ -119,6 +136,7 @@ export const archiveBench: BenchCase = {
         goal: "≥ 1.7× on 2 cores",
         note: `${load}; per pair ${pairRatios((r) => r.analyseS)}×; CPU in the phase: ${cpuText(two, "analysis")} (one thread: ${cpuText(one, "analysis")}); idle-machine lower bounds from the threads' CPU in the phase ${f2(med(two, idleAnalysis))} s vs ${f2(med(one, idleAnalysis))} s, ratio ${f2(median(one.map((o, i) => idleAnalysis(o) / idleAnalysis(two[i]!))))}× (median per pair); the worker starts while the files are read and reads some of them`,
       },
+      ...phaseRows,
     ];
   },
 };

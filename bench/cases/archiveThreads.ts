@@ -32,6 +32,8 @@ export interface PhaseCpu {
 /** A finished CLI run with its stdout, stderr and per-thread CPU before and after the analysis start. */
 export interface ThreadedRun {
   wallS: number;
+  /** When the parent saw the process end (epoch ms, for the CLI's phase marks). */
+  exitAtMs: number;
   stdout: string;
   stderr: string;
   /** The whole process. */
@@ -54,13 +56,19 @@ function phase(cpu: Map<number, number>, pid: number, workers: number): PhaseCpu
  * ends); the split is taken when a stderr line matches `startLine`.
  *
  * @param workers how many non-main threads are worker threads (0 for a one-thread run)
+ * @param env extra environment variables of the run
  */
-export function runSampled(args: readonly string[], startLine: RegExp, workers: number): Promise<ThreadedRun> {
+export function runSampled(
+  args: readonly string[],
+  startLine: RegExp,
+  workers: number,
+  env: Record<string, string> = {},
+): Promise<ThreadedRun> {
   return new Promise((resolve, reject) => {
     const t0 = performance.now();
     const seen = new Map<number, number>();
     let atStart: Map<number, number> | undefined;
-    const child = spawn(process.execPath, args, { stdio: ["ignore", "pipe", "pipe"] });
+    const child = spawn(process.execPath, args, { stdio: ["ignore", "pipe", "pipe"], env: { ...process.env, ...env } });
     const pid = child.pid ?? -1;
     const sample = (): void => {
       for (const [t, c] of threadCpuS(pid)) seen.set(t, c);
@@ -79,11 +87,13 @@ export function runSampled(args: readonly string[], startLine: RegExp, workers: 
     child.on("error", reject);
     child.on("close", (code) => {
       clearInterval(poll);
+      const exitAtMs = Date.now();
       const wallS = (performance.now() - t0) / 1000;
       if (code !== 0) return reject(new Error(`exit code ${code}: ${stderr.slice(-500)}`));
       const after = new Map([...seen].map(([t, c]) => [t, c - (atStart?.get(t) ?? 0)]));
       resolve({
         wallS,
+        exitAtMs,
         stdout,
         stderr,
         all: phase(seen, pid, workers),

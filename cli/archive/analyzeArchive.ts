@@ -11,6 +11,7 @@ import { SurveyCache, surveyCacheKey } from "./surveyCache.ts";
 import { surveyWorkerUrl } from "./earlyStart.ts";
 import { surveyTaskHandler, type SurveySetup } from "./surveyTask.ts";
 import { CancelledError, runPool, startWorkers, type StartedWorkers } from "./workerPool.ts";
+import { phaseMark } from "./phaseLog.ts";
 
 /** Options of {@link analyzeArchive}. */
 export interface ArchiveRunOptions {
@@ -102,6 +103,7 @@ export async function analyzeArchive(
   o: ArchiveRunOptions,
 ): Promise<{ analyses: SurveyAnalysis[]; stats: ArchiveRunStats }> {
   const t0 = performance.now();
+  phaseMark("analysis start");
   const { surveys, ...setup } = input;
   const cache = new SurveyCache(o.cacheDir);
   // Keys (a hash of each survey, the channel, the settings and the analysis code) only with a cache.
@@ -152,6 +154,7 @@ export async function analyzeArchive(
   } finally {
     if (!o.signal) process.off("SIGINT", onSigint);
   }
+  phaseMark("analysis end");
   return {
     analyses: out,
     stats: {

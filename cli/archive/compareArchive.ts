@@ -10,6 +10,7 @@ import { surveySetup } from "./surveyTask.ts";
 import { cacheDirOption, reportDischargeTable, seasonsOption, threadsOption } from "./archiveOptions.ts";
 import { archiveCsv, archiveJson } from "./archiveOutput.ts";
 import { stopWorkers, type StartedWorkers } from "./workerPool.ts";
+import { phaseMark } from "./phaseLog.ts";
 
 /** Up to this many surveys the JSON also carries the two-survey comparison against the first. */
 export const ARCHIVE_COMPARISON_MAX = 4;
@@ -58,6 +59,7 @@ export async function compareArchive(
     );
     // Each analysis carries its discharge and where it came from (surveyDischarge, in analyzeInputs).
     const archive = summarizeArchive(analyses as SurveyAnalysis[], seasons ? { seasons } : {});
+    phaseMark("archive summarised");
     if (format === "csv") return archiveCsv(archive);
     const comparison: SurveyComparison | undefined =
       analyses.length <= ARCHIVE_COMPARISON_MAX ? compareSurveys(analyses) : undefined;

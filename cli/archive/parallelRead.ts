@@ -11,6 +11,7 @@ import { loadWorkspace, workspaceFiles } from "../workspace.ts";
 import { surveyWorkerUrl } from "./analyzeArchive.ts";
 import { readTaskHandler, type ReadResult, type ReadSetup, type ReadTask } from "./readTask.ts";
 import { runPool, stopWorkers, type StartedWorkers } from "./workerPool.ts";
+import { phaseMark } from "./phaseLog.ts";
 
 /**
  * loadWorkspace with the survey files parsed on the started workers (kept running for the analysis).
@@ -34,10 +35,13 @@ export async function loadWorkspaceOnWorkers(
     if (tasks.length < 2) return loadWorkspace(paths, values, io, { files, choices, preRead: new Map() });
     const stationFile = files.find((f) => given[f.name] === "stationTable");
     const { onProgress: _p, ...plain } = choices;
+    phaseMark("files read from disk; parsing");
     const results = await runPool<ReadSetup, ReadTask, ReadResult>({
       workerUrl: surveyWorkerUrl(),
       threads: started.workers.length,
       alsoHere: true,
+      // A few long tasks: whichever thread is free takes the next file (no file held in hand).
+      sharedQueue: true,
       started,
       handler: "read",
       keepStarted: true,
@@ -49,6 +53,7 @@ export async function loadWorkspaceOnWorkers(
     // Without --stations, a station table among the files would be joined to every survey: the
     // workers did not know it, so such inputs are read again here.
     if (!stationFile && results.some((r) => r.kind === "stationTable")) return loadWorkspace(paths, values, io);
+    phaseMark("files parsed");
     const preRead = new Map<string, ReadResult>();
     tasks.forEach((t, i) => {
       const r = results[i]!;

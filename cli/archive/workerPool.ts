@@ -8,6 +8,7 @@
  */
 import { Worker } from "node:worker_threads";
 import { tuneCompilerForThreads } from "./compilerTuning.ts";
+import { phaseMark } from "./phaseLog.ts";
 
 /** Handler of a worker module: set-up once, then one call per task. */
 export interface TaskHandler<Setup, Task, Result> {
@@ -15,8 +16,27 @@ export interface TaskHandler<Setup, Task, Result> {
   run(task: Task): Result;
 }
 
-/** Messages to a worker: a set-up (naming the handler when the worker has several), then tasks. */
-export type ToWorker<Setup, Task> = { setup: Setup; handler?: string } | { index: number; task: Task };
+/**
+ * Every task of a run at once, with a counter in shared memory from which the worker and this thread
+ * each claim the next task (Atomics.add), see {@link PoolOptions.sharedQueue}.
+ */
+export interface SharedQueue<Task> {
+  tasks: readonly Task[];
+  /** Task indices in the order they are claimed. */
+  order: readonly number[];
+  /** One Int32 on a SharedArrayBuffer: the position in `order` of the next task to claim. */
+  claim: Int32Array;
+}
+
+/** Messages to a worker: a set-up (naming the handler when the worker has several; with a shared queue, the whole run), then tasks. */
+export type ToWorker<Setup, Task> =
+  { setup: Setup; handler?: string; queue?: SharedQueue<Task> } | { index: number; task: Task };
+
+/** The next task index of a shared queue, claimed for this thread (undefined when none is left). */
+export function claimTask(queue: Pick<SharedQueue<unknown>, "order" | "claim">): number | undefined {
+  const k = Atomics.add(queue.claim, 0, 1);
+  return k < queue.order.length ? queue.order[k] : undefined;
+}
 /** Messages from a worker: a result or an error of one task. */
 export interface FromWorker<Result> {
   index: number;
@@ -72,6 +92,13 @@ export interface PoolOptions<Setup, Task, Result> {
   /** Keep the `started` workers running after a successful run (for a next run with another handler). */
   keepStarted?: boolean;
   /**
+   * Send every task with the set-up and let each thread claim the next one from a counter in shared
+   * memory (with `alsoHere`): no thread holds a task in hand that another could have started, so
+   * the last tasks go to whichever thread is free first. For a few long tasks whose data is cheap to
+   * copy (the files of an archive to parse); many small tasks are fed one message each.
+   */
+  sharedQueue?: boolean;
+  /**
    * This thread takes tasks from the same queue too (with `inline`), between handling the workers'
    * messages: on 2 cores, this thread and one worker do the work of two workers without a third
    * JavaScript engine loading and compiling the same code. Each worker then keeps two tasks in hand,
@@ -114,7 +141,9 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
     for (const i of order) {
       if (o.signal?.aborted) throw new CancelledError(done);
       const t0 = performance.now();
+      phaseMark(`task ${i} start`);
       results[i] = o.inline.run(o.tasks[i]!);
+      phaseMark(`task ${i} end`);
       done++;
       o.onResult?.(i, results[i]!, performance.now() - t0);
       await new Promise((r) => setImmediate(r)); // lets a SIGINT through between tasks
@@ -127,6 +156,11 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
     ...Array.from({ length: Math.max(0, n - given.length) }, () => new Worker(o.workerUrl)),
   ];
   let next = 0;
+  const queue: SharedQueue<Task> | undefined = o.sharedQueue
+    ? { tasks: o.tasks, order, claim: new Int32Array(new SharedArrayBuffer(4)) }
+    : undefined;
+  /** The next task for this thread, or undefined. */
+  const take = (): number | undefined => (queue ? claimTask(queue) : next < order.length ? order[next++] : undefined);
   let ok = false;
   const listeners: Array<() => void> = [];
   try {
@@ -135,17 +169,18 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
       if (o.signal?.aborted) return stop();
       o.signal?.addEventListener("abort", stop, { once: true });
       const feed = (w: Worker): void => {
-        if (next >= order.length) return;
+        if (queue || next >= order.length) return;
         const i = order[next++]!;
         w.postMessage({ index: i, task: o.tasks[i] } satisfies ToWorker<Setup, Task>);
       };
       const here = async (): Promise<void> => {
         o.inline!.setup(o.setup);
-        while (next < order.length && !o.signal?.aborted) {
-          const i = order[next++]!;
+        for (let i = take(); i !== undefined && !o.signal?.aborted; i = take()) {
           const t0 = performance.now();
           try {
+            phaseMark(`task ${i} start`);
             results[i] = o.inline!.run(o.tasks[i]!);
+            phaseMark(`task ${i} end`);
           } catch (error) {
             return reject(error);
           }
@@ -179,6 +214,7 @@ export async function runPool<Setup, Task, Result>(o: PoolOptions<Setup, Task, R
         w.postMessage({
           setup: o.setup,
           ...(o.handler ? { handler: o.handler } : {}),
+          ...(queue ? { queue } : {}),
         } satisfies ToWorker<Setup, Task>);
         feed(w);
         // A second task in hand, as long as this thread is still left one to start with.

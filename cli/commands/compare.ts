@@ -20,6 +20,7 @@ import { ARCHIVE_HELP, compareArchive } from "../archive/compareArchive.ts";
 import { CancelledError, stopWorkers, type StartedWorkers } from "../archive/workerPool.ts";
 import { cacheDirOption, reportDischargeTable } from "../archive/archiveOptions.ts";
 import { analyzeSurveysThroughPool, POOL_OPTION_NAMES, startWorkersEarly } from "../archive/poolAnalysis.ts";
+import { phaseMark } from "../archive/phaseLog.ts";
 
 /** Exit code after Ctrl+C (128 + SIGINT), as shells report it. */
 export const EXIT_CANCELLED = 130;
@@ -139,6 +140,7 @@ export const compareCommand: Command = {
     try {
       // The survey files are parsed on those workers when there are several.
       inputs = await loadWorkspaceOnWorkers(positionals, values, io, started);
+      phaseMark("inputs ready");
     } catch (error) {
       await stopWorkers(started);
       throw error;
@@ -152,8 +154,10 @@ export const compareCommand: Command = {
         io.err(`cancelled after ${error.done} surveys; they are cached: run the same command again to continue`);
         return EXIT_CANCELLED;
       }
+      phaseMark("output made");
       if (values.out !== undefined) writeOut(values.out, text);
       else io.out(text);
+      phaseMark("output written");
       return 0;
     }
     let analysed: Awaited<ReturnType<typeof analyzeFiles>>;
