@@ -225,6 +225,9 @@ export function labelLayers(): LayerSpecification[] {
         "icon-padding": 0,
         "symbol-sort-key": ["get", "sortKey"],
       },
+      // The image is transparent: its boxes only take part in placement. At opacity 0 MapLibre places
+      // them but draws nothing, so the map never builds the icon shader (costly in software WebGL).
+      paint: { "icon-opacity": 0 },
     },
   ];
 }
