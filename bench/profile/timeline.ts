@@ -1,6 +1,7 @@
 // One cold start of the built dashboard in a fresh Chromium: a timeline of long main-thread tasks
 // (PerformanceObserver "longtask"), the map's renders/idle/source events and the first-view markers.
 // Usage: npx tsx bench/profile/timeline.ts [--dist DIR | --bare] [--trace [--trace-out FILE]] [--cpu-out FILE]
+// With --trace also each thread's busy time per 250 ms and the WebGL flushes per context (traceThreads.ts).
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -8,6 +9,7 @@ import { chromium } from "playwright-core";
 import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
 import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
+import { threadViews } from "./traceThreads.ts";
 
 const INIT = `(() => {
   const log = (window.__tl = []);
@@ -135,6 +137,7 @@ try {
       : undefined;
     if (out) (await import("node:fs")).writeFileSync(out, trace);
     longTasks(trace);
+    console.log(threadViews(trace.toString("utf8")).join("\n"));
   }
   const tl = await page.evaluate(() => (window as unknown as { __tl: string[] }).__tl);
   const marks = await page.evaluate(() =>
