@@ -3,7 +3,7 @@
 // uses are bundled in too (see EXTERNAL). Run as `npm run build:cli`;
 // cli/bin/brackline.js calls buildCli() when cli/dist/ is missing; `npm run bench` and the built-CLI
 // tests call it when cliBuildIsStale() (scripts/ensure.js does the same for `npm start`/`npm test`).
-import { readdirSync, statSync } from "node:fs";
+import { readdirSync, rmSync, statSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 
@@ -41,10 +41,15 @@ export function cliBuildIsStale() {
  */
 const EXTERNAL = ["@turf/turf"];
 
-/** Builds cli/dist/ (synchronously, about 0.5 s). */
+/**
+ * Builds cli/dist/ (synchronously, about 0.5 s), then deletes the files of earlier builds that this one
+ * did not write (esbuild never removes old chunks, whose names change with their content). Nothing is
+ * deleted before the build, so a CLI started from cli/dist/ meanwhile keeps its files.
+ */
 export async function buildCli() {
   const esbuild = await import("esbuild");
-  esbuild.buildSync({
+  const { metafile } = esbuild.buildSync({
+    metafile: true,
     absWorkingDir: ROOT,
     entryPoints: { main: "cli/main.ts", surveyWorker: "cli/archive/surveyWorker.ts" },
     outdir: DIST,
@@ -61,6 +66,9 @@ export async function buildCli() {
     logLevel: "warning",
     legalComments: "eof",
   });
+  const written = new Set(Object.keys(metafile.outputs).map((f) => join(ROOT, f)));
+  for (const e of readdirSync(DIST, { withFileTypes: true }))
+    if (e.isFile() && !written.has(join(DIST, e.name))) rmSync(join(DIST, e.name));
 }
 
 if (process.argv[1] === fileURLToPath(import.meta.url)) await buildCli();
