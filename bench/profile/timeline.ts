@@ -9,7 +9,7 @@ import { chromium } from "playwright-core";
 import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
 import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
-import { threadViews } from "./traceThreads.ts";
+import { threadViews, traceEvents } from "./traceThreads.ts";
 
 const INIT = `(() => {
   const log = (window.__tl = []);
@@ -38,16 +38,7 @@ const INIT = `(() => {
 
 /** Renderer main-thread tasks over 50 ms with their largest inner events (JS entry points by function and URL). */
 function longTasks(buf: Buffer): void {
-  type Ev = {
-    name: string;
-    ph: string;
-    ts: number;
-    dur?: number;
-    pid: number;
-    tid: number;
-    args?: { data?: Record<string, unknown>; name?: string };
-  };
-  const events = (JSON.parse(buf.toString("utf8")) as { traceEvents: Ev[] }).traceEvents;
+  const events = traceEvents(buf.toString("utf8"));
   const names = new Map<string, string>();
   for (const e of events)
     if (e.ph === "M" && e.name === "thread_name") names.set(`${e.pid}:${e.tid}`, String(e.args?.name));

@@ -7,14 +7,20 @@
 // Usage: npx tsx bench/profile/traceThreads.ts TRACE.json   (or called by timeline.ts --trace)
 import { readFileSync } from "node:fs";
 
-interface Ev {
+/** One event of a Chromium trace file (the fields the profiles read). */
+export interface TraceEvent {
   name: string;
   ph: string;
   ts: number;
   dur?: number;
   pid: number;
   tid: number;
-  args?: { name?: string; handler?: string };
+  args?: { name?: string; handler?: string; data?: Record<string, unknown> };
+}
+
+/** The events of a Chromium trace file's JSON text. */
+export function traceEvents(traceJson: string): TraceEvent[] {
+  return (JSON.parse(traceJson) as { traceEvents: TraceEvent[] }).traceEvents;
 }
 
 const BIN_MS = 250;
@@ -23,7 +29,7 @@ const THREADS = /^(CrRendererMain|CrGpuMain|DedicatedWorker thread)$/;
 
 /** Lines: busy tenths of each 250 ms bin per thread, then WebGL flushes over 30 ms per context. */
 export function threadViews(traceJson: string): string[] {
-  const events = (JSON.parse(traceJson) as { traceEvents: Ev[] }).traceEvents;
+  const events = traceEvents(traceJson);
   const names = new Map<string, string>();
   for (const e of events)
     if (e.ph === "M" && e.name === "thread_name") names.set(`${e.pid}:${e.tid}`, String(e.args?.name));
