@@ -11,20 +11,20 @@ import { scoreCell, type CellScore } from "./calibration/cell.ts";
 import { bandVerdict, wilson95 } from "./calibration/coverageError.ts";
 
 const args = process.argv.slice(2);
-const opt = (name: string, dflt: number): number => {
+/** The value after `--name`, or undefined when the option is absent. */
+const strOpt = (name: string): string | undefined => {
   const i = args.indexOf(`--${name}`);
-  return i >= 0 ? Number(args[i + 1]) : dflt;
+  return i >= 0 ? args[i + 1] : undefined;
+};
+const opt = (name: string, dflt: number): number => {
+  const v = strOpt(name);
+  return v === undefined ? dflt : Number(v);
 };
 const surveys = opt("surveys", 100);
 const draws = opt("draws", 200);
 const full = args.includes("--full");
 const shapes = args.includes("--weak") ? [...SHAPES, ...WEAK_SHAPES] : SHAPES;
-const onlyIdx = args.indexOf("--shape");
-const only = onlyIdx >= 0 ? args[onlyIdx + 1]! : "";
-const strOpt = (name: string): string | undefined => {
-  const i = args.indexOf(`--${name}`);
-  return i >= 0 ? args[i + 1] : undefined;
-};
+const only = strOpt("shape") ?? "";
 const onlyStations = strOpt("stations");
 const onlySpacing = strOpt("spacing");
 const onlyNoise = strOpt("noise");
