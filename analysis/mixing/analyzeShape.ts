@@ -268,6 +268,10 @@ export function analyzeShape(p: ShapeInput): {
       river = { ...river, conc: within(bootstrapBiasCorrected(bs.riverDraws, river.conc), bs.riverConc, river.conc) };
     cStar = within(bootstrapBiasCorrected(bs.effectiveDraws, cStar), bs.effective, cStar);
   }
+  // The profile over breaks with the quartic river model, computed once: C₀'s average below and the
+  // between-break spread further down use the same refits.
+  let quarticSpread: ReturnType<typeof breakModelSpread> | null = null;
+  const quarticBreakSpread = () => (quarticSpread ??= breakModelSpread(x, conc, wts, tp, sr, "quartic"));
   // C₀ from the quartic extension ends its landward model at the fit's break, which the data may not locate
   // (flat profile): the profile-likelihood (Akaike-weighted) average of C₀ over the candidate breaks,
   // the model-averaged estimator of Buckland et al. (1997), in place of the best break's C₀
@@ -286,7 +290,7 @@ export function analyzeShape(p: ShapeInput): {
     river.conc > 0 &&
     tp.rss / dof >= BIAS_CORRECTION_MIN_CHI2
   ) {
-    const averaged = breakModelSpread(x, conc, wts, tp, sr, "quartic")?.river;
+    const averaged = quarticBreakSpread()?.river;
     if (averaged !== undefined && Number.isFinite(averaged) && averaged > 0) river = { ...river, conc: averaged };
   }
   // How far landward the stations show the reaction (lack-of-fit of the extended seaward line, reactionExtent.ts).
@@ -331,7 +335,9 @@ export function analyzeShape(p: ShapeInput): {
   const shortLine = tangent.method === "segment" && !tp.linear && tangent.nStations < MIN_SEAWARD_STATIONS;
   const spread =
     tangent.method === "segment" && !tp.linear && !shortLine
-      ? breakModelSpread(x, conc, wts, tp, sr, percent && (override ? river.conc : riverModel))
+      ? percent && !override && riverModel === "quartic"
+        ? quarticBreakSpread()
+        : breakModelSpread(x, conc, wts, tp, sr, percent && (override ? river.conc : riverModel))
       : undefined;
   if (spread) {
     const widen = (e: Estimate, d: number): Estimate =>
