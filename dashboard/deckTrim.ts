@@ -1,8 +1,4 @@
-import { join } from "node:path";
-import { fileURLToPath } from "node:url";
-import type { Plugin } from "vite";
-
-const vendor = fileURLToPath(new URL("./src/vendor/", import.meta.url));
+import { vendorSwap } from "./vendorSwap.ts";
 
 /**
  * Vite plugin: deck.gl without its WebGPU-only attribute packing. `@deck.gl/core` imports
@@ -14,14 +10,13 @@ const vendor = fileURLToPath(new URL("./src/vendor/", import.meta.url));
  * arrays, so `@loaders.gl/core` and `@loaders.gl/images` are swapped for stand-ins
  * (src/vendor/deckNoLoaders.js: registering is a no-op, loading rejects).
  */
-export const deckTrim: Plugin = {
-  name: "brackline-deck-trim",
-  enforce: "pre",
-  resolveId(source, importer) {
-    if (!importer?.includes("/node_modules/@deck.gl/core/dist/")) return null;
-    if (source === "@loaders.gl/core" || source === "@loaders.gl/images") return join(vendor, "deckNoLoaders.js");
-    if (!importer.includes("/dist/lib/attribute/")) return null;
-    if (source === "./attribute-buffer-groups.js") return join(vendor, "deckWebgpuBufferGroups.js");
-    return null;
+export const deckTrim = vendorSwap("brackline-deck-trim", [
+  {
+    importer: "/node_modules/@deck.gl/core/dist/",
+    swaps: { "@loaders.gl/core": "deckNoLoaders.js", "@loaders.gl/images": "deckNoLoaders.js" },
   },
-};
+  {
+    importer: "/node_modules/@deck.gl/core/dist/lib/attribute/",
+    swaps: { "./attribute-buffer-groups.js": "deckWebgpuBufferGroups.js" },
+  },
+]);
