@@ -170,8 +170,8 @@ export function analyzeShape(p: ShapeInput): {
     !tp.linear && p.river.source !== "override" && fitQuarticExtension(x, conc, wts, tp) !== undefined;
   const yHat = Float64Array.from(used, (s) => twoPhaseAt(centre, s.salinity)[0]);
   let riverModel: "quartic" | "cubic" | "local" = quarticRiver ? "quartic" : "cubic";
-  // Where ≥ 7 stations lie below the window's upper limit (min(S 6, upper end of the break's likelihood
-  // confidence set)), C₀ comes from a local cubic through them instead (riverLocalPolynomial.ts; Fan &
+  // Where ≥ 7 stations lie in the window (S < h, h = min(upper end of the break's likelihood confidence
+  // set, max(S 5, its lower end)); localRiverWindow), C₀ comes from a local cubic through them instead (riverLocalPolynomial.ts; Fan &
   // Gijbels 1996), recomputed in every replicate with the same window: it does not end at the two-phase
   // fit's break, which the data often do not locate, and whose misplacement biased C₀ and the % change
   // (calibration, desorption ending at S 5, 20 km-even stations, 5 % noise, 400 surveys, 2,000 draws: % change bias
