@@ -29,8 +29,8 @@ export interface LocalWindow {
 }
 
 /**
- * Window of the local river estimate: h = min({@link LOCAL_WINDOW_MAX_S}, upper end of the break's
- * profile-likelihood 95 % confidence set). The set is the breaks b of the grid (3rd distinct station to
+ * Window of the local river estimate: h = min(upper end of the break's profile-likelihood 95 % confidence
+ * set, max({@link LOCAL_WINDOW_MAX_S}, its lower end)). The set is the breaks b of the grid (3rd distinct station to
  * S_max) with (RSS_b − RSS_min)/s² ≤ χ²₁,0.95 (test inversion; Hinkley 1969, from memory), s² = max(1, χ²_ν):
  * every break the data do not reject lies below h's upper limit, so the window never reaches far past
  * the reaction's end, where the curve turns straight and no cubic follows it; below that limit the window
