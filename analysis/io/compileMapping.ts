@@ -1,6 +1,7 @@
 import { quantityUnit } from "../seawater/quantityUnits.ts";
 import type { Constituent, ImportIssue } from "../survey/survey.ts";
 import type { ColumnMapping, ColumnRole } from "./columnMapping.ts";
+import { COLUMN_ROLES } from "./columnRoles.ts";
 import { makeIssue } from "./importSummary.ts";
 import { projDefinition } from "./projection.ts";
 import type { UnitParser } from "./unitText.ts";
@@ -21,6 +22,11 @@ export interface ConstituentColumn {
 /** A mapping resolved against the actual header row. */
 export interface CompiledMapping {
   headers: string[];
+  /**
+   * Column index of each single-value role (undefined: not in the file). Every role is present as a
+   * property, in one order, so each file's object has the same shape and the row-reading code that
+   * reads it is compiled once per run, not once per file ({@link emptySingleRoles}).
+   */
   single: Partial<Record<SingleRole, number>>;
   constituents: ConstituentColumn[];
   /** value column index → flag column index */
@@ -28,6 +34,16 @@ export interface CompiledMapping {
   /** Conductivity unit factor to mS/cm. */
   conductivityToMScm?: number;
   constituentList: Constituent[];
+}
+
+/** Roles that take a single column, in one fixed order. */
+const SINGLE_ROLES = COLUMN_ROLES.filter((r): r is SingleRole => r !== "constituent" && r !== "flag" && r !== "ignore");
+
+/** A {@link CompiledMapping.single} with every role present and undefined (one object shape for every file). */
+export function emptySingleRoles(): Partial<Record<SingleRole, number>> {
+  const single: Partial<Record<SingleRole, number>> = {};
+  for (const r of SINGLE_ROLES) single[r] = undefined;
+  return single;
 }
 
 function looseHeader(h: string): string {
@@ -77,7 +93,7 @@ export function compileMapping(
   const issues: ImportIssue[] = [];
   const compiled: CompiledMapping = {
     headers: [...headers],
-    single: {},
+    single: emptySingleRoles(),
     constituents: [],
     flagOf: new Map(),
     constituentList: [],
@@ -227,5 +243,5 @@ export function compileMapping(
 
 /** Exposed for tests and the dialog: which roles a compiled mapping found. */
 export function compiledRoles(c: CompiledMapping): SingleRole[] {
-  return Object.keys(c.single) as SingleRole[];
+  return (Object.keys(c.single) as SingleRole[]).filter((r) => c.single[r] !== undefined);
 }

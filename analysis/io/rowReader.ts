@@ -61,20 +61,46 @@ export function createRowReader(
   mapping: ColumnMapping,
   options: RowReaderOptions,
 ): RowReader {
-  const issues: ImportIssue[] = [];
-  const stations: ImportedStation[] = [];
-  const summary = emptySummary();
-  const integral = { ids: new Set<string>(), issue: undefined as ImportIssue | undefined };
-  const flagMap = options.flagMap ?? DEFAULT_FLAG_MAP;
-  const s = compiled.single;
-  const width = compiled.headers.length;
-  const header = (i: number): string => compiled.headers[i] ?? `column ${i + 1}`;
-  const count = (c: ValueCell): void => {
-    summary.valuesByStatus[c.status] += 1;
-    if (!c.accepted && c.status !== "invalid") summary.valuesRejectedByFlag += 1;
-  };
+  return new CompiledRowReader(compiled, mapping, options);
+}
 
-  const read = (record: DelimitedRecord): void => {
+/**
+ * The row reader: one class, so every file of a run is read by the same functions (no closures made
+ * per file, whose compiled code V8 would otherwise build again for each file).
+ */
+class CompiledRowReader implements RowReader {
+  readonly issues: ImportIssue[] = [];
+  readonly stations: ImportedStation[] = [];
+  readonly summary = emptySummary();
+  private readonly integralIds = new Set<string>();
+  private integralIssue: ImportIssue | undefined = undefined;
+  private readonly flagMap: Readonly<Record<string, FlagDecision>>;
+  private readonly width: number;
+
+  constructor(
+    private readonly compiled: CompiledMapping,
+    private readonly mapping: ColumnMapping,
+    private readonly options: RowReaderOptions,
+  ) {
+    this.flagMap = options.flagMap ?? DEFAULT_FLAG_MAP;
+    this.width = compiled.headers.length;
+  }
+
+  private header(i: number): string {
+    return this.compiled.headers[i] ?? `column ${i + 1}`;
+  }
+
+  private count(c: ValueCell): void {
+    this.summary.valuesByStatus[c.status] += 1;
+    if (!c.accepted && c.status !== "invalid") this.summary.valuesRejectedByFlag += 1;
+  }
+
+  read(record: DelimitedRecord): void {
+    const { compiled, mapping, options, summary, issues, flagMap } = this;
+    const s = compiled.single;
+    const width = this.width;
+    const header = (i: number): string => this.header(i);
+    const count = (c: ValueCell): void => this.count(c);
     const { fields, row } = record;
     summary.rowsRead += 1;
     const ctx: CellContext = { file: options.file, row, decimalComma: options.decimalComma, flagMap, issues };
@@ -110,12 +136,14 @@ export function createRowReader(
     const idWritten = s.station === undefined ? `row ${row}` : cellText(s.station).trim();
     const { id, changed: idChanged } = integralStationId(idWritten);
     if (idChanged) {
-      integral.ids.add(idWritten);
-      if (integral.issue === undefined) {
-        integral.issue = makeIssue(options.file, row, header(s.station ?? 0), idWritten, "", "warning");
-        issues.push(integral.issue);
+      this.integralIds.add(idWritten);
+      let integralIssue = this.integralIssue;
+      if (integralIssue === undefined) {
+        integralIssue = makeIssue(options.file, row, header(s.station ?? 0), idWritten, "", "warning");
+        this.integralIssue = integralIssue;
+        issues.push(integralIssue);
       }
-      integral.issue.expected = `station ids written as whole numbers with a trailing ".0" are read without it ("${integral.issue.value}" as "${integralStationId(integral.issue.value).id}"; ${integral.ids.size} such id(s) in this column); the text as written is kept with each station (idText)`;
+      integralIssue.expected = `station ids written as whole numbers with a trailing ".0" are read without it ("${integralIssue.value}" as "${integralStationId(integralIssue.value).id}"; ${this.integralIds.size} such id(s) in this column); the text as written is kept with each station (idText)`;
     }
     if (id.length === 0) {
       countRejected(summary, "missing station id");
@@ -214,8 +242,7 @@ export function createRowReader(
         );
     }
     if (rowFlag !== undefined && rowFlag.trim() !== "") st.rowFlag = rowFlag;
-    stations.push(st);
+    this.stations.push(st);
     summary.rowsAccepted += 1;
-  };
-  return { read, stations, issues, summary };
+  }
 }
