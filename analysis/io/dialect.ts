@@ -63,14 +63,19 @@ const COMMA_DECIMAL = /^[+-]?\d+,\d+$/;
  * @returns the detected dialect; "," and decimal point when nothing better is found
  */
 export function detectDialect(sample: string): TextDialect {
-  // A file's head is examined by several readers (kind, mapping, rows): the last answer is kept.
-  if (lastDialect !== undefined && lastDialect.sample === sample) return { ...lastDialect.dialect };
+  // A file's head is examined by several readers (kind, mapping, rows), and readInputs recognises
+  // every file before it reads any: the answers for the last few samples are kept.
+  const known = recentDialects.get(sample);
+  if (known !== undefined) return { ...known };
   const dialect = detectDialectOf(sample);
-  lastDialect = { sample, dialect };
+  recentDialects.set(sample, dialect);
+  if (recentDialects.size > RECENT_DIALECTS) recentDialects.delete(recentDialects.keys().next().value!);
   return { ...dialect };
 }
 
-let lastDialect: { sample: string; dialect: TextDialect } | undefined;
+/** Samples whose dialect is kept (each at most 64 K characters). */
+const RECENT_DIALECTS = 8;
+const recentDialects = new Map<string, TextDialect>();
 
 function detectDialectOf(sample: string): TextDialect {
   const text = stripBom(sample);

@@ -83,7 +83,11 @@ function looksBinary(sample: string): boolean {
  */
 export function detectFileKind(content: string | Uint8Array): { kind: InputFileKind; reason?: string } {
   if (typeof content !== "string" && isNetcdfMagic(content)) return { kind: "surveyNetcdf" };
-  const head = decodeText(typeof content === "string" ? content.slice(0, HEAD_CHARS) : content.subarray(0, HEAD_CHARS));
+  // The first HEAD_CHARS characters (a UTF-8 character has at most 4 bytes), the same sample the
+  // survey reader detects the dialect on, so that detection is done once per file (detectDialect).
+  const head = decodeText(
+    typeof content === "string" ? content.slice(0, HEAD_CHARS + 1) : content.subarray(0, 4 * HEAD_CHARS),
+  ).slice(0, HEAD_CHARS);
   const start = head.trimStart();
   if (start.length === 0) return { kind: "unknown", reason: "the file is empty" };
   if (looksBinary(head.slice(0, 4096))) return { kind: "unknown", reason: "binary content that is not netCDF" };
