@@ -7,6 +7,7 @@
 import type { FeatureCollection } from "geojson";
 import type { ExpressionSpecification, StyleSpecification } from "maplibre-gl";
 import { LABEL_SOURCE, labelLayers } from "./labels.ts";
+import { MARK_SOURCE, markLayers } from "./marks.ts";
 import { worldLandStyle, type WorldLandSource } from "./basemapStyle.ts";
 
 export const PALETTE = {
@@ -36,17 +37,20 @@ export interface StyleOptions {
   tileUrl?: string;
   /** The overlay labels (labels.ts labelFeatures); empty when omitted. */
   labels?: FeatureCollection;
+  /** The channel, km ticks, reaction zone, brushed stretch, isohalines, maximum (marks.ts markFeatures); empty when omitted. */
+  marks?: FeatureCollection;
   /** Natural Earth world land (basemapStyle.ts), drawn beneath user tiles and our own basemap. */
   worldLand?: WorldLandSource;
 }
 
-export function buildStyle({ basemap, tileUrl, labels, worldLand }: StyleOptions): StyleSpecification {
+export function buildStyle({ basemap, tileUrl, labels, marks, worldLand }: StyleOptions): StyleSpecification {
   const world = worldLand ? worldLandStyle(worldLand, PALETTE) : undefined;
   const style: StyleSpecification = {
     version: 8,
     name: "Brackline offline",
     sources: {
       basemap: { type: "geojson", data: basemap ?? EMPTY },
+      [MARK_SOURCE]: { type: "geojson", data: marks ?? EMPTY },
       [LABEL_SOURCE]: { type: "geojson", data: labels ?? EMPTY },
       ...world?.sources,
     },
@@ -102,6 +106,8 @@ export function buildStyle({ basemap, tileUrl, labels, worldLand }: StyleOptions
         filter: ["all", POINT, ["has", "name"]],
         paint: { "circle-radius": 2.5, "circle-color": PALETTE.label },
       },
+      // The channel and its marks above the basemap, under every label.
+      ...markLayers(),
       // Overlay labels above the place names: MapLibre places the topmost layers first.
       ...labelLayers(),
     ],
