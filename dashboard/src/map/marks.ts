@@ -1,7 +1,8 @@
 /**
  * The map's drawn marks that nobody picks — the channel, its km ticks, the reaction zone, a brushed
- * stretch, isohaline markers and the maximum ring — as one GeoJSON source and MapLibre line and circle
- * layers, drawn beneath the labels. MapLibre's line and circle programs are the ones the basemap
+ * stretch, isohaline markers and the maximum ring — as MapLibre line and circle layers drawn beneath
+ * the labels, reading the labels' GeoJSON source (one source: one tiling in MapLibre's worker and one
+ * set of tile loads, so fewer frames, when an analysis changes both). MapLibre's line and circle programs are the ones the basemap
  * already uses (shoreline, place dots); a deck.gl layer type costs software WebGL (SwiftShader) one
  * large shader program to compile at the cold start (PathLayer alone ~1 s of CPU on the bench machine,
  * bench/profile/bareVariants.ts). deck.gl keeps what is picked or per-station (layers.ts).
@@ -11,11 +12,13 @@ import type { LayerSpecification } from "maplibre-gl";
 import type { MapData } from "./mapData.ts";
 import type { LonLat } from "../worker/overlay.ts";
 import { ADDITION_CSS, ADDITION_DARK_CSS, REMOVAL_CSS, toRgba, type RGBA } from "./colour.ts";
+import { LABEL_SOURCE } from "./labels.ts";
 
-/** GeoJSON source of every mark. */
-export const MARK_SOURCE = "overlay-marks";
+/** GeoJSON source of every mark: the overlay labels' (its label kinds and these kinds are distinct). */
+export const MARK_SOURCE = LABEL_SOURCE;
 
-export type MarkKind = "zone-removal" | "zone-addition" | "brush" | "channel" | "tick" | "isohaline" | "maximum";
+export type MarkKind =
+  "zone-removal" | "zone-addition" | "brush" | "channel" | "tick" | "isohaline-marker" | "maximum-ring";
 
 /** Layer ids, lowest first (the style order). */
 export const MARK_LAYERS = {
@@ -68,8 +71,8 @@ export function markFeatures(data: MapData): FeatureCollection<LineString | Poin
   for (const p of data.brushPaths ?? []) if (p.length >= 2) features.push(line("brush", p));
   features.push(...channelMarks((data.channel?.paths ?? []).map((p) => p.path)));
   for (const t of data.channel?.ticks ?? []) features.push(point("tick", t.lonLat, t.major));
-  for (const iso of data.overlay?.isohalines ?? []) features.push(point("isohaline", iso.lonLat));
-  for (const p of zone?.maximumPoints ?? []) features.push(point("maximum", p));
+  for (const iso of data.overlay?.isohalines ?? []) features.push(point("isohaline-marker", iso.lonLat));
+  for (const p of zone?.maximumPoints ?? []) features.push(point("maximum-ring", p));
   return { type: "FeatureCollection", features };
 }
 
@@ -116,7 +119,7 @@ export function markLayers(): LayerSpecification[] {
       id: MARK_LAYERS.isohalines,
       type: "circle",
       source: MARK_SOURCE,
-      filter: isKind("isohaline"),
+      filter: isKind("isohaline-marker"),
       paint: {
         "circle-radius": 4,
         "circle-color": HALO_CSS,
@@ -128,7 +131,7 @@ export function markLayers(): LayerSpecification[] {
       id: MARK_LAYERS.maximum,
       type: "circle",
       source: MARK_SOURCE,
-      filter: isKind("maximum"),
+      filter: isKind("maximum-ring"),
       paint: {
         "circle-radius": 12.5,
         "circle-opacity": 0,

@@ -7,7 +7,7 @@
 import type { FeatureCollection } from "geojson";
 import type { ExpressionSpecification, StyleSpecification } from "maplibre-gl";
 import { LABEL_SOURCE, labelLayers } from "./labels.ts";
-import { MARK_SOURCE, markLayers } from "./marks.ts";
+import { markLayers } from "./marks.ts";
 import { worldLandStyle, type WorldLandSource } from "./basemapStyle.ts";
 
 export const PALETTE = {
@@ -43,6 +43,15 @@ export interface StyleOptions {
   worldLand?: WorldLandSource;
 }
 
+/** The marks then the labels, as the one overlay source's data. */
+export function overlayFeatures(
+  marks: FeatureCollection | undefined,
+  labels: FeatureCollection | undefined,
+): FeatureCollection {
+  if (!marks?.features.length) return labels ?? EMPTY;
+  return { type: "FeatureCollection", features: [...marks.features, ...(labels?.features ?? [])] };
+}
+
 export function buildStyle({ basemap, tileUrl, labels, marks, worldLand }: StyleOptions): StyleSpecification {
   const world = worldLand ? worldLandStyle(worldLand, PALETTE) : undefined;
   const style: StyleSpecification = {
@@ -50,8 +59,8 @@ export function buildStyle({ basemap, tileUrl, labels, marks, worldLand }: Style
     name: "Brackline offline",
     sources: {
       basemap: { type: "geojson", data: basemap ?? EMPTY },
-      [MARK_SOURCE]: { type: "geojson", data: marks ?? EMPTY },
-      [LABEL_SOURCE]: { type: "geojson", data: labels ?? EMPTY },
+      // One source for the marks and the labels (marks.ts): tiled together when an analysis changes both.
+      [LABEL_SOURCE]: { type: "geojson", data: overlayFeatures(marks, labels) },
       ...world?.sources,
     },
     layers: [

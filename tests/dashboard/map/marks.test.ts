@@ -49,7 +49,7 @@ const data: MapData = {
 describe("markFeatures() gives MapLibre the marks deck.gl drew before (no deck.gl shader for them)", () => {
   it("draws the zone, brush and channel lines, then ticks, isohalines and the maximum, lowest first", () => {
     const kinds = markFeatures(data).features.map((f) => f.properties.kind);
-    expect(kinds).toEqual(["zone-addition", "brush", "channel", "tick", "tick", "isohaline", "maximum"]);
+    expect(kinds).toEqual(["zone-addition", "brush", "channel", "tick", "tick", "isohaline-marker", "maximum-ring"]);
   });
 
   it("leaves out a channel path of one point (no line to draw) and keeps the major flag of ticks", () => {

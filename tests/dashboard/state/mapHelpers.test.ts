@@ -93,7 +93,7 @@ describe("buildStyle() is offline unless the user turns tiles on (rules: no inte
     expect(text).not.toMatch(/https?:\/\//);
     expect(style.glyphs).toBeUndefined();
     expect(style.sprite).toBeUndefined();
-    expect(Object.keys(style.sources)).toEqual(["basemap", "overlay-marks", "overlay-labels"]);
+    expect(Object.keys(style.sources)).toEqual(["basemap", "overlay-labels"]);
   });
 
   it("a user tile URL adds one raster source drawn under the basemap's labels", () => {
