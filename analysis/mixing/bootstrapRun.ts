@@ -19,6 +19,7 @@ import {
 } from "./twoPhase.ts";
 import { dominantZoneSign, zoneInto, type ReactionZoneBounds } from "./zoneAndMaximum.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
+import { localRiverFromWeights, localRiverWeights, type LocalWindow } from "./riverLocalPolynomial.ts";
 import { MIN_SEAWARD_STATIONS, mouthAveragedEffective } from "./twoPhaseMouth.ts";
 
 /** What the bootstrap needs from the full-data analysis. */
@@ -39,9 +40,12 @@ export interface BootstrapInput {
   /**
    * Model of the river value at the reference salinity in each replicate: "quartic" = the quartic
    * extension of the replicate's landward phase (riverExtension.ts; the cubic phase where it cannot be
-   * fitted), "cubic" = the replicate's two-phase curve.
+   * fitted), "cubic" = the replicate's two-phase curve, "local" = the local cubic through the freshest
+   * stations of `localWindow` (riverLocalPolynomial.ts; the window fixed, as the spline's λ).
    */
-  riverModel?: "quartic" | "cubic";
+  riverModel?: "quartic" | "cubic" | "local";
+  /** Window of the "local" river model. */
+  localWindow?: LocalWindow;
   /** A user-given river value ± sd (drawn from a normal); otherwise C₀ is re-estimated from each replicate. */
   riverOverride?: { conc: number; sd: number };
   /** Extra sd of the river value (a river history within the flushing time), added to each replicate. */
@@ -173,6 +177,8 @@ class BootstrapDraws {
   /** C*₀ averaged over the seaward end models (when the input gives mouthS2), with that s². */
   readonly mouthAverage: boolean = false;
   readonly mouthS2: number = Number.NaN;
+  /** Equivalent-kernel weights of the local river model (fixed design: computed once; empty: not used). */
+  readonly localWeights: Float64Array = new Float64Array(0);
   usable = 0;
 
   constructor(b: BootstrapInput) {
@@ -233,7 +239,18 @@ class BootstrapDraws {
       this.mouthAverage = true;
       this.mouthS2 = b.mouthS2;
     }
-    this.river = b.riverOverride ? riverOverridden : b.riverModel === "quartic" ? riverQuartic : riverCubic;
+    const lw =
+      b.riverModel === "local" && b.localWindow
+        ? localRiverWeights(b.x, b.w, b.localWindow, b.referenceSalinity)
+        : undefined;
+    if (lw) this.localWeights = lw;
+    this.river = b.riverOverride
+      ? riverOverridden
+      : b.riverModel === "quartic"
+        ? riverQuartic
+        : lw
+          ? riverLocal
+          : riverCubic;
   }
 }
 
@@ -245,6 +262,11 @@ function riverOverridden(st: BootstrapDraws): number {
 /** River value of a replicate: the quartic extension of its landward phase, else its two-phase curve. */
 function riverQuartic(st: BootstrapDraws, fit: TwoPhaseFit): number {
   return riverByQuarticExtension(st.x, st.ys, st.w, fit, st.sr) ?? twoPhaseValue(fit, st.sr);
+}
+
+/** River value of a replicate: the local cubic through its freshest stations, else its two-phase curve. */
+function riverLocal(st: BootstrapDraws, fit: TwoPhaseFit): number {
+  return localRiverFromWeights(st.localWeights, st.ys) ?? twoPhaseValue(fit, st.sr);
 }
 
 /** River value of a replicate: its two-phase curve at the reference salinity. */

@@ -115,14 +115,14 @@ export function coarseExtrapolationWarning(
   used: readonly PreparedSample[],
   fit: TwoPhaseFit,
   river: Endmember,
-  model: "quartic" | "cubic",
+  model: "quartic" | "cubic" | "local",
   unit: string,
   reactionStations?: number,
 ): MixingWarning[] {
   const sMin = used[0]!.salinity;
   if (fit.linear || !(river.salinity < sMin)) return [];
   const atFreshest = twoPhaseAt(fit, sMin)[0];
-  const other = model === "quartic" ? twoPhaseAt(fit, river.salinity)[0] : atFreshest;
+  const other = model !== "cubic" ? twoPhaseAt(fit, river.salinity)[0] : atFreshest;
   const fewSeen = reactionStations !== undefined && reactionStations < MIN_REACTION_STATIONS;
   if (!(Math.abs(river.conc - other) > river.concSd) && !fewSeen) return [];
   const landward = used.filter((s) => s.salinity < fit.breakSalinity).length;
@@ -131,11 +131,13 @@ export function coarseExtrapolationWarning(
     ? `along a reaction curve seen at only ${reactionStations} station(s) off the seaward line`
     : model === "quartic"
       ? `a cubic instead of a quartic reaction curve through the same ${landward} stations below S ${fit.breakSalinity.toFixed(1)} gives ${g(other)} ${unit}`
-      : `along a reaction curve resting on ${landward} station(s) below S ${fit.breakSalinity.toFixed(1)}`;
+      : model === "local"
+        ? `along a local cubic through the freshest stations; the two-phase curve, whose reaction ends at S ${fit.breakSalinity.toFixed(1)}, gives ${g(other)} ${unit}`
+        : `along a reaction curve resting on ${landward} station(s) below S ${fit.breakSalinity.toFixed(1)}`;
   return [
     {
       code: "river-extrapolation-coarse",
-      message: `C₀ = ${g(river.conc)} ${unit} at S = ${river.salinity} is extrapolated from the freshest station (S = ${sMin.toFixed(2)}, curve value ${g(atFreshest)} ${unit}) ${model === "quartic" && !fewSeen ? `(${why})` : why}: the shape of the reaction between the river and those stations is assumed, so C₀ and the % change may be biased by more than their intervals show (a few percentage points in calibration with synthetic surveys). A river sample at S ≈ 0, or more stations at low salinity, would remove this.`,
+      message: `C₀ = ${g(river.conc)} ${unit} at S = ${river.salinity} is extrapolated from the freshest station (S = ${sMin.toFixed(2)}, curve value ${g(atFreshest)} ${unit}) ${model !== "cubic" && !fewSeen ? `(${why})` : why}: the shape of the reaction between the river and those stations is assumed, so C₀ and the % change may be biased by more than their intervals show (a few percentage points in calibration with synthetic surveys). A river sample at S ≈ 0, or more stations at low salinity, would remove this.`,
     },
   ];
 }
