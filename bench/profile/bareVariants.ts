@@ -1,12 +1,14 @@
-// What the shared work of a cold start costs: the bare MapLibre + deck.gl page (bench/fixtures/bareMap.ts)
-// built once with switches read from its URL, each variant loaded in a freshly launched Chromium (the
+// What the shared work of a cold start costs: the bare MapLibre + deck.gl page as it was before the
+// dashboard drew its channel with MapLibre (basemap, channel as a deck.gl PathLayer, points as a deck.gl
+// ScatterplotLayer; `mlChannel` gives today's bench/fixtures/bareMap.ts) built once with switches read from its URL, each variant loaded in a freshly launched Chromium (the
 // bench's flags), variants in rotating order over N rounds, medians. Not a bench row: a tool to see which
 // part of the bare page's own time (worker start, deck.gl's context, style layers, pixel ratio) a
 // change to both pages could save.
 // Usage: npx tsx bench/profile/bareVariants.ts [--runs N] [VARIANT ...]
-//   a variant is a query string of switches, e.g. "" (the bare page as benched), "prewarm", "aa=0&interleaved"
+//   a variant is a query string of switches, e.g. "" (no switch), "mlChannel", "prewarm", "aa=0&interleaved"
 //   switches: prewarm (MapLibre's workers before the map), aa=0 (deck.gl without multisampling),
-//   interleaved (deck.gl in MapLibre's context), nodeck, nooutline (water without fill-outline-color),
+//   interleaved (deck.gl in MapLibre's context; deck.gl 9.4's @deck.gl/mapbox reads map.transform, which
+//   MapLibre 6 removed, so the probe stands in for it), nodeck, nooutline (water without fill-outline-color),
 //   nolabels (no symbol layers), nodots (no circle layer), pr=X (canvas pixel ratio),
 //   deckOnLoad (deck.gl's layers from the map's load), deckLayers=path|scatter|none (one deck.gl layer or none),
 //   scatter4 / scatter4fn (four point layers as the dashboard's, accessors partly constants / all functions),
