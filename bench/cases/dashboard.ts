@@ -129,7 +129,7 @@ export const dashboardBench: BenchCase = {
         `median of ${COLD_ROUNDS} cold loads each in a fresh browser (${colds.map((c) => s2(pick(c))).join(", ")} s; bare map ${bareColds.map(s2).join(", ")} s, and ${s2(bareShared)} s when loaded second in the dashboard's browser, its shaders compiled)`;
       const since = `since navigation start, polled every frame; load average ${load}`;
       const bareBaseline = {
-        name: "bare MapLibre + deck.gl page, same style and basemap, cold in a fresh browser",
+        name: "bare MapLibre + deck.gl page, same style, basemap and channel layer, cold in a fresh browser",
         value: bareCold / 1000,
       };
 

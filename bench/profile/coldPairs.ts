@@ -2,80 +2,14 @@
 // launched Chromium (bench flags, fresh profile), alternating bare / dashboard, N pairs. Prints each
 // pair and the medians. Not a bench row: a quick way to compare builds on a noisy shared machine.
 // Usage: npx tsx bench/profile/coldPairs.ts [--runs N] [--warm-bare]   (build dashboard/dist first)
-import { mkdtempSync, readFileSync, readdirSync, rmSync } from "node:fs";
+import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir, loadavg } from "node:os";
 import { join } from "node:path";
 import { launchChromium } from "../../tests/e2e/browser.ts";
+import { browserCpuS, threadCpuMs } from "./browserCpu.ts";
 import { serveBareMap } from "../fixtures/bareMap.ts";
 import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
 import { BARE, FIRST_VIEW, type ReadySpec } from "../fixtures/readySpecs.ts";
-
-/** CPU ms by process type and thread name of a Chromium's processes (see browserCpuS). */
-function threadCpuMs(profile: string): Map<string, number> {
-  const out = new Map<string, number>();
-  for (const pid of browserPids(profile)) {
-    try {
-      const type =
-        /--type=([\w-]+)/.exec(readFileSync(`/proc/${pid}/cmdline`, "utf8").replace(/\0/g, " "))?.[1] ?? "browser";
-      for (const tid of readdirSync(`/proc/${pid}/task`)) {
-        const stat = readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8");
-        const comm = stat.slice(stat.indexOf("(") + 1, stat.lastIndexOf(")")).replace(/\d+$/, "");
-        const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-        const key = `${type}/${comm}`;
-        out.set(key, (out.get(key) ?? 0) + (Number(f[11]) + Number(f[12])) * 10);
-      }
-    } catch {
-      // ended meanwhile
-    }
-  }
-  return out;
-}
-
-/** CPU seconds (user + system) used so far by the Chromium whose profile directory is `profile` and all its child processes. */
-function browserCpuS(profile: string): number {
-  let ticks = 0;
-  for (const pid of browserPids(profile)) {
-    try {
-      const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
-      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-      ticks += Number(f[11]) + Number(f[12]);
-    } catch {
-      // ended meanwhile
-    }
-  }
-  return ticks / 100;
-}
-
-/** The pids of the Chromium whose profile directory is `profile` and of all its child processes. */
-function browserPids(profile: string): Set<number> {
-  const procs = new Map<number, { ppid: number; ticks: number; root: boolean }>();
-  for (const name of readdirSync("/proc")) {
-    if (!/^\d+$/.test(name)) continue;
-    try {
-      const stat = readFileSync(`/proc/${name}/stat`, "utf8");
-      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-      const cmd = readFileSync(`/proc/${name}/cmdline`, "utf8");
-      procs.set(Number(name), {
-        ppid: Number(f[1]),
-        ticks: Number(f[11]) + Number(f[12]),
-        root: cmd.includes(profile) && !cmd.includes("--type="),
-      });
-    } catch {
-      // the process ended meanwhile
-    }
-  }
-  const roots = [...procs].filter(([, p]) => p.root).map(([pid]) => pid);
-  const all = new Set(roots);
-  for (let grew = true; grew;) {
-    grew = false;
-    for (const [pid, p] of procs)
-      if (!all.has(pid) && all.has(p.ppid)) {
-        all.add(pid);
-        grew = true;
-      }
-  }
-  return all;
-}
 
 async function coldLoad(url: string, spec: ReadySpec): Promise<Record<string, number>> {
   const profile = mkdtempSync(join(tmpdir(), "brackline-pairs-"));

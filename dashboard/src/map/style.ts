@@ -7,6 +7,7 @@
 import type { FeatureCollection } from "geojson";
 import type { ExpressionSpecification, StyleSpecification } from "maplibre-gl";
 import { LABEL_SOURCE, labelLayers } from "./labels.ts";
+import { markLayers } from "./marks.ts";
 import { worldLandStyle, type WorldLandSource } from "./basemapStyle.ts";
 
 export const PALETTE = {
@@ -36,18 +37,30 @@ export interface StyleOptions {
   tileUrl?: string;
   /** The overlay labels (labels.ts labelFeatures); empty when omitted. */
   labels?: FeatureCollection;
+  /** The channel, km ticks, reaction zone, brushed stretch, isohalines, maximum (marks.ts markFeatures); empty when omitted. */
+  marks?: FeatureCollection;
   /** Natural Earth world land (basemapStyle.ts), drawn beneath user tiles and our own basemap. */
   worldLand?: WorldLandSource;
 }
 
-export function buildStyle({ basemap, tileUrl, labels, worldLand }: StyleOptions): StyleSpecification {
+/** The marks then the labels, as the one overlay source's data. */
+export function overlayFeatures(
+  marks: FeatureCollection | undefined,
+  labels: FeatureCollection | undefined,
+): FeatureCollection {
+  if (!marks?.features.length) return labels ?? EMPTY;
+  return { type: "FeatureCollection", features: [...marks.features, ...(labels?.features ?? [])] };
+}
+
+export function buildStyle({ basemap, tileUrl, labels, marks, worldLand }: StyleOptions): StyleSpecification {
   const world = worldLand ? worldLandStyle(worldLand, PALETTE) : undefined;
   const style: StyleSpecification = {
     version: 8,
     name: "Brackline offline",
     sources: {
       basemap: { type: "geojson", data: basemap ?? EMPTY },
-      [LABEL_SOURCE]: { type: "geojson", data: labels ?? EMPTY },
+      // One source for the marks and the labels (marks.ts): tiled together when an analysis changes both.
+      [LABEL_SOURCE]: { type: "geojson", data: overlayFeatures(marks, labels) },
       ...world?.sources,
     },
     layers: [
@@ -102,6 +115,8 @@ export function buildStyle({ basemap, tileUrl, labels, worldLand }: StyleOptions
         filter: ["all", POINT, ["has", "name"]],
         paint: { "circle-radius": 2.5, "circle-color": PALETTE.label },
       },
+      // The channel and its marks above the basemap, under every label.
+      ...markLayers(),
       // Overlay labels above the place names: MapLibre places the topmost layers first.
       ...labelLayers(),
     ],
