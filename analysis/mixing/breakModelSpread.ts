@@ -1,8 +1,6 @@
 import { fitTwoPhaseAtBreak, seawardLine, twoPhaseValue, type TwoPhaseFit } from "./twoPhase.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
-
-/** Candidate breaks of the profile (as the break search's grid: from the 3rd distinct station to S_max). */
-export const SPREAD_GRID = 24;
+import { candidateBreaks } from "./breakGrid.ts";
 
 /**
  * Between-break spread of the effective river end-member C*₀ and of the % change: the two-phase model
@@ -43,21 +41,10 @@ export function breakModelSpread(
   river?: "quartic" | "cubic" | number,
 ): { effective: number; percent?: number; river?: number } | undefined {
   if (fit.linear) return undefined;
-  const n = x.length;
-  let third = Number.NaN;
-  for (let i = 1, distinct = 1, prev = x[0]!; i < n; i++) {
-    if (!(x[i]! > prev)) continue;
-    prev = x[i]!;
-    if (++distinct === 3) {
-      third = prev;
-      break;
-    }
-  }
-  const sMax = x[n - 1]!;
-  if (!(third < sMax)) return undefined;
-  const dof = Math.max(1, n - fit.params);
+  const breaks = candidateBreaks(x);
+  if (!breaks) return undefined;
+  const dof = Math.max(1, x.length - fit.params);
   const s2 = Math.max(1, fit.rss / dof);
-  const lo = third + 1e-9 * (sMax - x[0]!);
   // Weighted first and second moments of C*₀(b) and % change(b) (spread about the model average θ̄).
   let sw = 0,
     se1 = 0,
@@ -65,8 +52,7 @@ export function breakModelSpread(
     sp1 = 0,
     sp2 = 0,
     sc = 0;
-  for (let g = 0; g <= SPREAD_GRID; g++) {
-    const b = lo + ((sMax - lo) * g) / SPREAD_GRID;
+  for (const b of breaks) {
     const f = fitTwoPhaseAtBreak(x, y, w, b);
     if (!f) continue;
     const e = Math.max(0, f.rss - fit.rss) / (2 * s2);

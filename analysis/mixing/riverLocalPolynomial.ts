@@ -1,3 +1,4 @@
+import { candidateBreaks } from "./breakGrid.ts";
 import { fitTwoPhaseAtBreak, type TwoPhaseFit } from "./twoPhase.ts";
 
 /** Largest number of unknowns (the local quartic of {@link localRiverModelSpread}). */
@@ -51,24 +52,12 @@ export function localRiverWindow(
 ): LocalWindow | undefined {
   if (fit.linear) return undefined;
   const n = x.length;
-  let third = Number.NaN;
-  for (let i = 1, distinct = 1, prev = x[0]!; i < n; i++) {
-    if (!(x[i]! > prev)) continue;
-    prev = x[i]!;
-    if (++distinct === 3) {
-      third = prev;
-      break;
-    }
-  }
-  const sMax = x[n - 1]!;
-  if (!(third < sMax)) return undefined;
+  const breaks = candidateBreaks(x);
+  if (!breaks) return undefined;
   const s2 = Math.max(1, fit.rss / Math.max(1, n - fit.params));
-  const lo = third + 1e-9 * (sMax - x[0]!);
-  const GRID = 24;
   let lower = fit.breakSalinity;
   let upper = fit.breakSalinity;
-  for (let g = 0; g <= GRID; g++) {
-    const b = lo + ((sMax - lo) * g) / GRID;
+  for (const b of breaks) {
     if (b >= lower && b <= upper) continue;
     const f = fitTwoPhaseAtBreak(x, y, w, b);
     if (!f || !((f.rss - fit.rss) / s2 <= CHI2_1_95)) continue;
