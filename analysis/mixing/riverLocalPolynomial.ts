@@ -1,5 +1,6 @@
 import { candidateBreaks } from "./breakGrid.ts";
 import { fitTwoPhaseAtBreak, type TwoPhaseFit } from "./twoPhase.ts";
+import { solveAugmented } from "../stats/gaussJordan.ts";
 
 /** Largest number of unknowns (the local quartic of {@link localRiverModelSpread}). */
 const KMAX = 5;
@@ -139,7 +140,7 @@ export function localRiverWeights(
   }
   for (let r = 1; r < k; r++) for (let c = 0; c < r; c++) A[r * W + c] = A[c * W + r]!;
   A[k] = 1; // right-hand side e: the first row of the inverse (symmetric)
-  if (!solve(k)) return undefined;
+  if (!solveAugmented(A, k, COEF)) return undefined;
   const l = new Float64Array(win.count);
   for (let i = 0; i < win.count; i++) {
     const t = x[i]! * hInv;
@@ -225,7 +226,7 @@ function localPolyAt(
     }
   }
   for (let r = 1; r < k; r++) for (let c = 0; c < r; c++) A[r * W + c] = A[c * W + r]!;
-  if (!solve(k)) return undefined;
+  if (!solveAugmented(A, k, COEF)) return undefined;
   if (rss) {
     let s = 0;
     for (let i = 0; i < win.count; i++) {
@@ -242,34 +243,5 @@ function localPolyAt(
   return COEF[0];
 }
 
-/** Coefficients of the last {@link solve}. */
+/** Coefficients of the last solve. */
 const COEF = new Float64Array(KMAX);
-
-/** Gauss–Jordan with partial pivoting on the k × (k + 1) system in {@link A}; false when singular. */
-function solve(k: number): boolean {
-  const W = k + 1;
-  const scale = Math.abs(A[0]!) + 1e-300;
-  for (let col = 0; col < k; col++) {
-    let piv = col;
-    for (let r = col + 1; r < k; r++) if (Math.abs(A[r * W + col]!) > Math.abs(A[piv * W + col]!)) piv = r;
-    const p = A[piv * W + col]!;
-    if (!(Math.abs(p) > 1e-14 * scale)) return false;
-    if (piv !== col)
-      for (let j = 0; j < W; j++) {
-        const t = A[col * W + j]!;
-        A[col * W + j] = A[piv * W + j]!;
-        A[piv * W + j] = t;
-      }
-    for (let r = 0; r < k; r++) {
-      if (r === col) continue;
-      const f = A[r * W + col]! / p;
-      if (f !== 0) for (let j = col; j < W; j++) A[r * W + j] = A[r * W + j]! - f * A[col * W + j]!;
-    }
-  }
-  for (let i = 0; i < k; i++) {
-    const v = A[i * W + k]! / A[i * W + i]!;
-    if (!Number.isFinite(v)) return false;
-    COEF[i] = v;
-  }
-  return true;
-}
