@@ -1,3 +1,5 @@
+import { fitTwoPhaseAtBreak, type TwoPhaseFit } from "./twoPhase.ts";
+
 /** Candidate breaks of a profile over breaks (as the break search's grid in twoPhase.ts). */
 export const BREAK_GRID = 24;
 
@@ -29,4 +31,30 @@ export function candidateBreaks(x: ArrayLike<number>): Float64Array | undefined 
   const breaks = new Float64Array(BREAK_GRID + 1);
   for (let g = 0; g <= BREAK_GRID; g++) breaks[g] = lo + ((sMax - lo) * g) / BREAK_GRID;
   return breaks;
+}
+
+/** The two-phase model refitted at each candidate break: `fits[g]` at `breaks[g]` (undefined where it cannot be fitted). */
+export interface BreakProfile {
+  breaks: Float64Array;
+  fits: Array<TwoPhaseFit | undefined>;
+}
+
+/**
+ * The profile over breaks of a survey's data: the two-phase model refitted at each of
+ * {@link candidateBreaks} (fitTwoPhaseAtBreak, weighted least squares at a given join point). Computed
+ * once per constituent and read by every use of the profile (the local river window's confidence set,
+ * the between-break spread and model averages).
+ *
+ * @param x ascending salinities; y concentrations; w weights 1/σ²
+ * @returns the profile, or undefined when there are no candidate breaks
+ * @see Hudson, D.J. (1966) JASA 61, 1097–1129 (segmented regression at a given join point).
+ */
+export function breakProfile(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  w: ArrayLike<number>,
+): BreakProfile | undefined {
+  const breaks = candidateBreaks(x);
+  if (!breaks) return undefined;
+  return { breaks, fits: Array.from(breaks, (b) => fitTwoPhaseAtBreak(x, y, w, b)) };
 }

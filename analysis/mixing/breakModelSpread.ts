@@ -1,6 +1,6 @@
-import { fitTwoPhaseAtBreak, seawardLine, twoPhaseValue, type TwoPhaseFit } from "./twoPhase.ts";
+import { seawardLine, twoPhaseValue, type TwoPhaseFit } from "./twoPhase.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
-import { candidateBreaks } from "./breakGrid.ts";
+import { breakProfile, type BreakProfile } from "./breakGrid.ts";
 
 /**
  * Between-break spread of the effective river end-member C*₀ and of the % change: the two-phase model
@@ -25,6 +25,7 @@ import { candidateBreaks } from "./breakGrid.ts";
  * @param fit the two-phase fit (not the straight line)
  * @param sRef reference salinity of C*₀ and C₀
  * @param river how C₀ was obtained ("quartic", "cubic", or its fixed value); omitted: no % change spread
+ * @param profile the refits at the candidate breaks ({@link breakProfile}), when already computed
  * @returns spreads of C*₀ (concentration units) and % change (percentage points), and the model-averaged
  *   C₀ (`river`, when `river` is "quartic" or "cubic"), or undefined for the straight line or when no
  *   break can be refitted
@@ -39,10 +40,10 @@ export function breakModelSpread(
   fit: TwoPhaseFit,
   sRef: number,
   river?: "quartic" | "cubic" | number,
+  profile: BreakProfile | undefined = breakProfile(x, y, w),
 ): { effective: number; percent?: number; river?: number } | undefined {
   if (fit.linear) return undefined;
-  const breaks = candidateBreaks(x);
-  if (!breaks) return undefined;
+  if (!profile) return undefined;
   const dof = Math.max(1, x.length - fit.params);
   const s2 = Math.max(1, fit.rss / dof);
   // Weighted first and second moments of C*₀(b) and % change(b) (spread about the model average θ̄).
@@ -52,8 +53,7 @@ export function breakModelSpread(
     sp1 = 0,
     sp2 = 0,
     sc = 0;
-  for (const b of breaks) {
-    const f = fitTwoPhaseAtBreak(x, y, w, b);
+  for (const f of profile.fits) {
     if (!f) continue;
     const e = Math.max(0, f.rss - fit.rss) / (2 * s2);
     if (!(e < 36)) continue;

@@ -1,5 +1,5 @@
-import { candidateBreaks } from "./breakGrid.ts";
-import { fitTwoPhaseAtBreak, type TwoPhaseFit } from "./twoPhase.ts";
+import { breakProfile, type BreakProfile } from "./breakGrid.ts";
+import type { TwoPhaseFit } from "./twoPhase.ts";
 import { solveAugmented } from "../stats/gaussJordan.ts";
 
 /** Largest number of unknowns (the local quartic of {@link localRiverModelSpread}). */
@@ -41,6 +41,7 @@ export interface LocalWindow {
  *
  * @param x ascending salinities; y concentrations; w weights 1/σ²
  * @param fit the two-phase fit of the same data (not the straight line)
+ * @param profile the refits at the candidate breaks ({@link breakProfile}), when already computed
  * @returns the window, or undefined when the fit is the straight line or fewer than
  *   {@link MIN_LOCAL_STATIONS} distinct stations lie inside it
  * @see Hinkley, D.V. (1969) Biometrika 56, 495–504 (likelihood-ratio confidence set of the join point).
@@ -50,17 +51,17 @@ export function localRiverWindow(
   y: ArrayLike<number>,
   w: ArrayLike<number>,
   fit: TwoPhaseFit,
+  profile: BreakProfile | undefined = fit.linear ? undefined : breakProfile(x, y, w),
 ): LocalWindow | undefined {
-  if (fit.linear) return undefined;
+  if (fit.linear || !profile) return undefined;
   const n = x.length;
-  const breaks = candidateBreaks(x);
-  if (!breaks) return undefined;
   const s2 = Math.max(1, fit.rss / Math.max(1, n - fit.params));
   let lower = fit.breakSalinity;
   let upper = fit.breakSalinity;
-  for (const b of breaks) {
+  for (let g = 0; g < profile.breaks.length; g++) {
+    const b = profile.breaks[g]!;
     if (b >= lower && b <= upper) continue;
-    const f = fitTwoPhaseAtBreak(x, y, w, b);
+    const f = profile.fits[g];
     if (!f || !((f.rss - fit.rss) / s2 <= CHI2_1_95)) continue;
     if (b < lower) lower = b;
     else upper = b;
