@@ -29,6 +29,7 @@ import { coarseExtrapolationWarning } from "./riverReference.ts";
 import { MIN_SEAWARD_STATIONS, mouthAveragedEffective, mouthModelWeight } from "./twoPhaseMouth.ts";
 import { reactionExtent } from "./reactionExtent.ts";
 import { breakModelSpread } from "./breakModelSpread.ts";
+import { breakProfile, type BreakProfile } from "./breakGrid.ts";
 import { localRiverModelSpread, localRiverWindow, riverByLocalCubic } from "./riverLocalPolynomial.ts";
 
 /** Inputs of {@link analyzeShape}: the full-data pieces computed by analyzeConstituent. */
@@ -176,9 +177,13 @@ export function analyzeShape(p: ShapeInput): {
   // fit's break, which the data often do not locate, and whose misplacement biased C₀ and the % change
   // (calibration, desorption ending at S 5, 20 km-even stations, 5 % noise, 400 surveys, 2,000 draws: % change bias
   // −3.0 pp with the model-averaged quartic extension; see README).
+  // The refits at the candidate breaks, computed once for the local window and the between-break spreads.
+  let profile: BreakProfile | undefined | null = null;
+  const profileOnce = (): BreakProfile | undefined =>
+    profile === null ? (profile = breakProfile(x, conc, wts)) : profile;
   const localWin =
     !tp.linear && p.river.source !== "override" && tangent.method === "segment"
-      ? localRiverWindow(x, conc, wts, tp)
+      ? localRiverWindow(x, conc, wts, tp, profileOnce())
       : undefined;
   const localC0 = localWin && riverByLocalCubic(x, conc, wts, localWin, river.salinity);
   if (localWin && localC0 !== undefined && localC0 > 0) {
@@ -292,7 +297,7 @@ export function analyzeShape(p: ShapeInput): {
   // The profile over breaks with the quartic river model, computed once: C₀'s average below and the
   // between-break spread further down use the same refits.
   let quarticSpread: ReturnType<typeof breakModelSpread> | null = null;
-  const quarticBreakSpread = () => (quarticSpread ??= breakModelSpread(x, conc, wts, tp, sr, "quartic"));
+  const quarticBreakSpread = () => (quarticSpread ??= breakModelSpread(x, conc, wts, tp, sr, "quartic", profileOnce()));
   // C₀ from the quartic extension ends its landward model at the fit's break, which the data may not locate
   // (flat profile): the profile-likelihood (Akaike-weighted) average of C₀ over the candidate breaks,
   // the model-averaged estimator of Buckland et al. (1997), in place of the best break's C₀
@@ -372,6 +377,7 @@ export function analyzeShape(p: ShapeInput): {
             sr,
             // The local cubic's C₀ does not depend on the break: held fixed, as a river override.
             percent && (override || riverModel === "local" ? river.conc : riverModel),
+            profileOnce(),
           )
       : undefined;
   if (spread) {

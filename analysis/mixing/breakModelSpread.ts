@@ -1,8 +1,6 @@
-import { fitTwoPhaseAtBreak, seawardLine, twoPhaseValue, type TwoPhaseFit } from "./twoPhase.ts";
+import { seawardLine, twoPhaseValue, type TwoPhaseFit } from "./twoPhase.ts";
 import { riverByQuarticExtension } from "./riverExtension.ts";
-
-/** Candidate breaks of the profile (as the break search's grid: from the 3rd distinct station to S_max). */
-export const SPREAD_GRID = 24;
+import { breakProfile, type BreakProfile } from "./breakGrid.ts";
 
 /**
  * Between-break spread of the effective river end-member C*₀ and of the % change: the two-phase model
@@ -27,6 +25,7 @@ export const SPREAD_GRID = 24;
  * @param fit the two-phase fit (not the straight line)
  * @param sRef reference salinity of C*₀ and C₀
  * @param river how C₀ was obtained ("quartic", "cubic", or its fixed value); omitted: no % change spread
+ * @param profile the refits at the candidate breaks ({@link breakProfile}), when already computed
  * @returns spreads of C*₀ (concentration units) and % change (percentage points), and the model-averaged
  *   C₀ (`river`, when `river` is "quartic" or "cubic"), or undefined for the straight line or when no
  *   break can be refitted
@@ -41,23 +40,12 @@ export function breakModelSpread(
   fit: TwoPhaseFit,
   sRef: number,
   river?: "quartic" | "cubic" | number,
+  profile: BreakProfile | undefined = breakProfile(x, y, w),
 ): { effective: number; percent?: number; river?: number } | undefined {
   if (fit.linear) return undefined;
-  const n = x.length;
-  let third = Number.NaN;
-  for (let i = 1, distinct = 1, prev = x[0]!; i < n; i++) {
-    if (!(x[i]! > prev)) continue;
-    prev = x[i]!;
-    if (++distinct === 3) {
-      third = prev;
-      break;
-    }
-  }
-  const sMax = x[n - 1]!;
-  if (!(third < sMax)) return undefined;
-  const dof = Math.max(1, n - fit.params);
+  if (!profile) return undefined;
+  const dof = Math.max(1, x.length - fit.params);
   const s2 = Math.max(1, fit.rss / dof);
-  const lo = third + 1e-9 * (sMax - x[0]!);
   // Weighted first and second moments of C*₀(b) and % change(b) (spread about the model average θ̄).
   let sw = 0,
     se1 = 0,
@@ -65,9 +53,7 @@ export function breakModelSpread(
     sp1 = 0,
     sp2 = 0,
     sc = 0;
-  for (let g = 0; g <= SPREAD_GRID; g++) {
-    const b = lo + ((sMax - lo) * g) / SPREAD_GRID;
-    const f = fitTwoPhaseAtBreak(x, y, w, b);
+  for (const f of profile.fits) {
     if (!f) continue;
     const e = Math.max(0, f.rss - fit.rss) / (2 * s2);
     if (!(e < 36)) continue;

@@ -1,4 +1,5 @@
 import { twoPhaseValue, type TwoPhaseFit } from "./twoPhase.ts";
+import { solveAugmented } from "../stats/gaussJordan.ts";
 
 /**
  * Fewest distinct stations landward of the break before the river value is extrapolated with the
@@ -202,38 +203,7 @@ export function fitQuarticExtension(
   A[2 * W + K] = r2;
   A[3 * W + K] = r3;
   A[4 * W + K] = r4;
-  return solve();
+  return solveAugmented(A, K, OUT) ? OUT : undefined;
 }
 
 const OUT = new Float64Array(K);
-
-/** Gauss–Jordan with partial pivoting on {@link A}; undefined when singular. */
-function solve(): Float64Array | undefined {
-  const W = K + 1;
-  const scale = Math.abs(A[0]!) + 1e-300;
-  for (let col = 0; col < K; col++) {
-    let piv = col;
-    for (let r = col + 1; r < K; r++) if (Math.abs(A[r * W + col]!) > Math.abs(A[piv * W + col]!)) piv = r;
-    const p = A[piv * W + col]!;
-    if (!(Math.abs(p) > 1e-14 * scale)) return undefined;
-    if (piv !== col)
-      for (let j = 0; j < W; j++) {
-        const t = A[col * W + j]!;
-        A[col * W + j] = A[piv * W + j]!;
-        A[piv * W + j] = t;
-      }
-    const co = col * W;
-    for (let r = 0, ro = 0; r < K; r++, ro += W) {
-      if (r === col) continue;
-      const f = A[ro + col]! / p;
-      // Column col itself (≈ 0 after elimination) is never read again: the update starts right of it.
-      if (f !== 0) for (let j = col + 1; j < W; j++) A[ro + j] = A[ro + j]! - f * A[co + j]!;
-    }
-  }
-  for (let i = 0; i < K; i++) {
-    const v = A[i * W + K]! / A[i * W + i]!;
-    OUT[i] = v;
-    if (!Number.isFinite(v)) return undefined;
-  }
-  return OUT;
-}

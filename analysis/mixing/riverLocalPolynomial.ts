@@ -1,4 +1,6 @@
-import { fitTwoPhaseAtBreak, type TwoPhaseFit } from "./twoPhase.ts";
+import { breakProfile, type BreakProfile } from "./breakGrid.ts";
+import type { TwoPhaseFit } from "./twoPhase.ts";
+import { solveAugmented } from "../stats/gaussJordan.ts";
 
 /** Largest number of unknowns (the local quartic of {@link localRiverModelSpread}). */
 const KMAX = 5;
@@ -39,6 +41,7 @@ export interface LocalWindow {
  *
  * @param x ascending salinities; y concentrations; w weights 1/σ²
  * @param fit the two-phase fit of the same data (not the straight line)
+ * @param profile the refits at the candidate breaks ({@link breakProfile}), when already computed
  * @returns the window, or undefined when the fit is the straight line or fewer than
  *   {@link MIN_LOCAL_STATIONS} distinct stations lie inside it
  * @see Hinkley, D.V. (1969) Biometrika 56, 495–504 (likelihood-ratio confidence set of the join point).
@@ -48,29 +51,17 @@ export function localRiverWindow(
   y: ArrayLike<number>,
   w: ArrayLike<number>,
   fit: TwoPhaseFit,
+  profile: BreakProfile | undefined = fit.linear ? undefined : breakProfile(x, y, w),
 ): LocalWindow | undefined {
-  if (fit.linear) return undefined;
+  if (fit.linear || !profile) return undefined;
   const n = x.length;
-  let third = Number.NaN;
-  for (let i = 1, distinct = 1, prev = x[0]!; i < n; i++) {
-    if (!(x[i]! > prev)) continue;
-    prev = x[i]!;
-    if (++distinct === 3) {
-      third = prev;
-      break;
-    }
-  }
-  const sMax = x[n - 1]!;
-  if (!(third < sMax)) return undefined;
   const s2 = Math.max(1, fit.rss / Math.max(1, n - fit.params));
-  const lo = third + 1e-9 * (sMax - x[0]!);
-  const GRID = 24;
   let lower = fit.breakSalinity;
   let upper = fit.breakSalinity;
-  for (let g = 0; g <= GRID; g++) {
-    const b = lo + ((sMax - lo) * g) / GRID;
+  for (let g = 0; g < profile.breaks.length; g++) {
+    const b = profile.breaks[g]!;
     if (b >= lower && b <= upper) continue;
-    const f = fitTwoPhaseAtBreak(x, y, w, b);
+    const f = profile.fits[g];
     if (!f || !((f.rss - fit.rss) / s2 <= CHI2_1_95)) continue;
     if (b < lower) lower = b;
     else upper = b;
@@ -150,7 +141,7 @@ export function localRiverWeights(
   }
   for (let r = 1; r < k; r++) for (let c = 0; c < r; c++) A[r * W + c] = A[c * W + r]!;
   A[k] = 1; // right-hand side e: the first row of the inverse (symmetric)
-  if (!solve(k)) return undefined;
+  if (!solveAugmented(A, k, COEF)) return undefined;
   const l = new Float64Array(win.count);
   for (let i = 0; i < win.count; i++) {
     const t = x[i]! * hInv;
@@ -236,7 +227,7 @@ function localPolyAt(
     }
   }
   for (let r = 1; r < k; r++) for (let c = 0; c < r; c++) A[r * W + c] = A[c * W + r]!;
-  if (!solve(k)) return undefined;
+  if (!solveAugmented(A, k, COEF)) return undefined;
   if (rss) {
     let s = 0;
     for (let i = 0; i < win.count; i++) {
@@ -253,34 +244,5 @@ function localPolyAt(
   return COEF[0];
 }
 
-/** Coefficients of the last {@link solve}. */
+/** Coefficients of the last solve. */
 const COEF = new Float64Array(KMAX);
-
-/** Gauss–Jordan with partial pivoting on the k × (k + 1) system in {@link A}; false when singular. */
-function solve(k: number): boolean {
-  const W = k + 1;
-  const scale = Math.abs(A[0]!) + 1e-300;
-  for (let col = 0; col < k; col++) {
-    let piv = col;
-    for (let r = col + 1; r < k; r++) if (Math.abs(A[r * W + col]!) > Math.abs(A[piv * W + col]!)) piv = r;
-    const p = A[piv * W + col]!;
-    if (!(Math.abs(p) > 1e-14 * scale)) return false;
-    if (piv !== col)
-      for (let j = 0; j < W; j++) {
-        const t = A[col * W + j]!;
-        A[col * W + j] = A[piv * W + j]!;
-        A[piv * W + j] = t;
-      }
-    for (let r = 0; r < k; r++) {
-      if (r === col) continue;
-      const f = A[r * W + col]! / p;
-      if (f !== 0) for (let j = col; j < W; j++) A[r * W + j] = A[r * W + j]! - f * A[col * W + j]!;
-    }
-  }
-  for (let i = 0; i < k; i++) {
-    const v = A[i * W + k]! / A[i * W + i]!;
-    if (!Number.isFinite(v)) return false;
-    COEF[i] = v;
-  }
-  return true;
-}

@@ -2,7 +2,8 @@
 // with analyzeConstituent, scored against the forward model's true answers.
 import { analyzeConstituent } from "../../analysis/mixing/analyzeConstituent.ts";
 import type { ConstituentAnalysis, Estimate } from "../../analysis/mixing/result.ts";
-import { curveOf, gradientPerM, survey, type Shape, type SurveyDesign } from "./forwardModel.ts";
+import type { AnalyzeOptions } from "../../analysis/mixing/options.ts";
+import { curveOf, gradientPerM, survey, type Shape, type SurveyDesign, type SyntheticStation } from "./forwardModel.ts";
 
 export interface CellScore {
   shape: string;
@@ -73,6 +74,28 @@ const median = (a: number[]): number | undefined => {
   return s.length % 2 ? s[m]! : 0.5 * (s[m - 1]! + s[m]!);
 };
 
+/**
+ * The mixing engine's analysis of one synthetic survey as the calibration scores it: every station
+ * accepted and uncensored, the stated precision the survey's relative noise (absolute 1e-9), constituent
+ * "X" in µmol/L; `options` adds the draws, seed and anything else.
+ */
+export function analyzeSynthetic(
+  stations: readonly SyntheticStation[],
+  noise: number,
+  options: Partial<AnalyzeOptions>,
+): ConstituentAnalysis {
+  return analyzeConstituent(
+    stations.map((s) => ({
+      stationId: s.stationId,
+      salinity: s.salinity,
+      conc: s.conc,
+      censored: false,
+      accepted: true,
+    })),
+    { name: "X", unit: "µmol/L", precision: { relative: Math.max(noise, 1e-6), absolute: 1e-9 }, ...options },
+  );
+}
+
 /** Break salinity the analysis reports: start of the seaward linear segment, when it found one. */
 export function reportedBreak(r: ConstituentAnalysis): number | undefined {
   if (r.breakSalinity) return r.breakSalinity.value;
@@ -119,23 +142,11 @@ export function scoreCell(
     const st = survey(shape, design, seed);
     let r: ConstituentAnalysis;
     try {
-      r = analyzeConstituent(
-        st.map((s) => ({
-          stationId: s.stationId,
-          salinity: s.salinity,
-          conc: s.conc,
-          censored: false,
-          accepted: true,
-        })),
-        {
-          name: "X",
-          unit: "µmol/L",
-          precision: { relative: Math.max(design.noise, 1e-6), absolute: 1e-9 },
-          bootstrapDraws: draws,
-          seed: seed + 1,
-          ...(withRates ? { riverDischargeM3s: 100, crossSectionM2: 5000, salinityGradientPerM: gradientPerM } : {}),
-        },
-      );
+      r = analyzeSynthetic(st, design.noise, {
+        bootstrapDraws: draws,
+        seed: seed + 1,
+        ...(withRates ? { riverDischargeM3s: 100, crossSectionM2: 5000, salinityGradientPerM: gradientPerM } : {}),
+      });
     } catch {
       failures++;
       continue;

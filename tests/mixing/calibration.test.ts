@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { expectWithin } from "../helpers/tolerance.ts";
 import { SHAPES, survey } from "../../bench/calibration/forwardModel.ts";
 import { analyzeConstituent } from "../../analysis/mixing/analyzeConstituent.ts";
-import { scoreCell } from "../../bench/calibration/cell.ts";
+import { analyzeSynthetic, scoreCell } from "../../bench/calibration/cell.ts";
 
 // Regression guards from the calibration suite (`npm run calibrate`, issue 14): a few fixed-seed
 // cells with bounds, not timings. Forward model: bench/calibration/forwardModel.ts (invented surveys).
@@ -48,16 +48,10 @@ describe("mixing calibration guards (seeded synthetic surveys; Boyle et al. 1974
   });
 
   const analyse = (name: string, stations: number, seed: number, draws = 200) =>
-    analyzeConstituent(
-      survey(shape(name), { stations, spacing: "km", noise: 0.02 }, seed).map((st) => ({
-        stationId: st.stationId,
-        salinity: st.salinity,
-        conc: st.conc,
-        censored: false,
-        accepted: true,
-      })),
-      { name: "X", unit: "µmol/L", precision: { relative: 0.02, absolute: 1e-9 }, bootstrapDraws: draws, seed },
-    );
+    analyzeSynthetic(survey(shape(name), { stations, spacing: "km", noise: 0.02 }, seed), 0.02, {
+      bootstrapDraws: draws,
+      seed,
+    });
 
   it("conservative surveys: the % change interval carries model-selection uncertainty (bootstrap from the two-phase alternative, selection re-run per replicate; Efron 2014, from memory) instead of a degenerate 0 [0, 0]", () => {
     let widths = 0;

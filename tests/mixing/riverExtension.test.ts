@@ -1,14 +1,13 @@
 import { describe, it } from "vitest";
 import { expectWithin } from "../helpers/tolerance.ts";
 import { SHAPES, survey } from "../../bench/calibration/forwardModel.ts";
-import { scoreCell, BIAS_WARNINGS } from "../../bench/calibration/cell.ts";
+import { analyzeSynthetic, scoreCell, BIAS_WARNINGS } from "../../bench/calibration/cell.ts";
 import { fitTwoPhase, twoPhaseValue } from "../../analysis/mixing/twoPhase.ts";
 import {
   MIN_LANDWARD_FOR_QUARTIC,
   riverByQuarticExtension,
   riverModelSpread,
 } from "../../analysis/mixing/riverExtension.ts";
-import { analyzeConstituent } from "../../analysis/mixing/analyzeConstituent.ts";
 
 // River end-member at S = 0 from the landward phase extended by a quartic term (riverExtension.ts) and
 // the warnings where C₀ or C*₀ may be biased (issue 14). Forward model: bench/calibration/forwardModel.ts
@@ -77,16 +76,7 @@ describe("river value at S = 0 by the quartic extension of the landward phase (s
     for (let k = 0; k < n; k++) {
       const seed = 3 + 7919 * k;
       const st = survey(shape("desorption→S5"), { stations: 20, spacing: "salinity", noise: 0.02 }, seed);
-      const r = analyzeConstituent(
-        st.map((s) => ({
-          stationId: s.stationId,
-          salinity: s.salinity,
-          conc: s.conc,
-          censored: false,
-          accepted: true,
-        })),
-        { name: "X", unit: "µmol/L", precision: { relative: 0.02, absolute: 1e-9 }, bootstrapDraws: 100, seed },
-      );
+      const r = analyzeSynthetic(st, 0.02, { bootstrapDraws: 100, seed });
       if (r.warnings.some((w) => BIAS_WARNINGS.has(w.code))) warned++;
     }
     expectWithin(warned >= 0.7 * n ? 1 : 0, 1, 0, `surveys warned: ${warned} of ${n}`);

@@ -9,7 +9,7 @@ import {
   localRiverWindow,
   riverByLocalCubic,
 } from "../../analysis/mixing/riverLocalPolynomial.ts";
-import { analyzeConstituent } from "../../analysis/mixing/analyzeConstituent.ts";
+import { analyzeSynthetic } from "../../bench/calibration/cell.ts";
 
 // River end-member at S = 0 from a local cubic regression through the freshest stations
 // (riverLocalPolynomial.ts; Fan & Gijbels 1996, local polynomial estimator at a boundary point, from
@@ -85,22 +85,7 @@ describe("river value at S = 0 by a local cubic through the freshest stations (F
     for (let k = 0; k < 40; k++) {
       const seed = 1 + 7919 * k + 500 + 131 * 20; // the calibration cell's seeds (bench/calibration/cell.ts)
       const st = survey(sh, { stations: 20, spacing: "km", noise: 0.05 }, seed);
-      const r = analyzeConstituent(
-        st.map((s) => ({
-          stationId: s.stationId,
-          salinity: s.salinity,
-          conc: s.conc,
-          censored: false,
-          accepted: true,
-        })),
-        {
-          name: "X",
-          unit: "µmol/L",
-          precision: { relative: 0.05, absolute: 1e-9 },
-          bootstrapDraws: 200,
-          seed: seed + 1,
-        },
-      );
+      const r = analyzeSynthetic(st, 0.05, { bootstrapDraws: 200, seed: seed + 1 });
       errs.push((100 * (r.endmembers!.river.conc - sh.riverConc)) / sh.riverConc);
     }
     const mean = errs.reduce((a, b) => a + b, 0) / errs.length;
