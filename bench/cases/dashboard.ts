@@ -44,27 +44,37 @@ async function loadTimes(page: Page): Promise<{ first: number; all: number }> {
 
 /**
  * Chooses `value` in the constituent menu and returns ms from the change event to the last DOM
- * change in the page (panels, table, map notes), once nothing has changed for `quietMs`.
+ * change in the page (panels, table, map notes), once nothing has changed for `quietMs`. The map's
+ * own drawing is not part of it: its ready flag (data-map-ready, false while the map takes in the new
+ * marks) is timed apart, as `mapMs` (event to the flag's last change).
  */
-function choose(page: Page, value: string, quietMs = 500): Promise<{ ms: number; mixingText: string }> {
+function choose(page: Page, value: string, quietMs = 500): Promise<{ ms: number; mixingText: string; mapMs: number }> {
   return page.evaluate(
     ([v, quiet]) =>
-      new Promise<{ ms: number; mixingText: string }>((resolve) => {
+      new Promise<{ ms: number; mixingText: string; mapMs: number }>((resolve) => {
         const select = document.querySelector<HTMLSelectElement>('[data-testid="constituent-select"]')!;
         let last = -1;
-        const obs = new MutationObserver(() => (last = performance.now()));
+        let lastMap = -1;
+        const obs = new MutationObserver((records) => {
+          const now = performance.now();
+          for (const r of records)
+            if (r.type === "attributes" && r.attributeName === "data-map-ready") lastMap = now;
+            else last = now;
+        });
         obs.observe(document.body, { subtree: true, childList: true, attributes: true, characterData: true });
         const t0 = performance.now();
         select.value = v as string;
         select.dispatchEvent(new Event("change", { bubbles: true }));
         const check = () => {
           const now = performance.now();
-          if (now - Math.max(last, t0) >= (quiet as number)) {
+          if (now - Math.max(last, lastMap, t0) >= (quiet as number)) {
             obs.disconnect();
             const mixing = document.querySelector('[data-panel="MixingPlot"]')?.textContent ?? "";
             // no DOM change at all: the round trip ends at the next frame
-            if (last < 0) requestAnimationFrame(() => resolve({ ms: performance.now() - t0, mixingText: mixing }));
-            else resolve({ ms: last - t0, mixingText: mixing });
+            const mapMs = lastMap < 0 ? 0 : lastMap - t0;
+            if (last < 0)
+              requestAnimationFrame(() => resolve({ ms: performance.now() - t0, mixingText: mixing, mapMs }));
+            else resolve({ ms: last - t0, mixingText: mixing, mapMs });
           } else setTimeout(check, 25);
         };
         setTimeout(check, 25);
@@ -148,6 +158,7 @@ export const dashboardBench: BenchCase = {
         .evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value));
       if (options.length < 2) throw new Error(`the demo has ${options.length} constituents; need 2 to time a change`);
       const times: number[] = [];
+      const mapTimes: number[] = [];
       const noop: number[] = [];
       let wrong = 0;
       for (let k = 1; k <= 6; k++) {
@@ -155,6 +166,7 @@ export const dashboardBench: BenchCase = {
         const r = await choose(s.page, value);
         if (!r.mixingText.includes(value)) wrong++;
         times.push(r.ms);
+        mapTimes.push(r.mapMs);
         noop.push(await noOpRoundTrip(s.page));
       }
       const sel = median(times);
@@ -188,7 +200,7 @@ export const dashboardBench: BenchCase = {
           ratio: sel / Math.max(base, 1e-3),
           ratioLabel: "× the no-op",
           goal: "≤ 100 ms",
-          note: `median of ${times.length} changes (${times.map((t) => t.toFixed(0)).join(", ")} ms)${wrong ? `; mixing plot did not name the constituent in ${wrong}` : ""}; map pixels not included`,
+          note: `median of ${times.length} changes (${times.map((t) => t.toFixed(0)).join(", ")} ms)${wrong ? `; mixing plot did not name the constituent in ${wrong}` : ""}; map pixels not included (the map is idle with the new marks ${median(mapTimes).toFixed(0)} ms after the event, median; data-map-ready)`,
         },
       ];
     } finally {
