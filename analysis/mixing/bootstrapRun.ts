@@ -358,8 +358,10 @@ function summarise(st: BootstrapDraws, est: BootstrapInput["estimates"]): Bootst
   const D = st.D;
   const eff = st.eff;
   const c0 = st.c0;
-  const bandLower: number[] = new Array<number>(G);
-  const bandUpper: number[] = new Array<number>(G);
+  // Created holding doubles (NaN), so that bandInto's stores always meet arrays of one map; empty arrays
+  // changed map at their first double and V8 discarded bandInto's code compiled while it ran ("wrong map").
+  const bandLower: number[] = new Array<number>(G).fill(Number.NaN);
+  const bandUpper: number[] = new Array<number>(G).fill(Number.NaN);
   bandInto(st.curves, G, D, new Float64Array(D), bandLower, bandUpper);
   let s1 = 0,
     s2 = 0,
