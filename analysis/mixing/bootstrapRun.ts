@@ -111,34 +111,8 @@ export interface BootstrapResult {
  */
 export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const st = new BootstrapDraws(b);
-  if (st.plan) drawPlanned(st, st.plan);
-  else drawUnplanned(st);
+  for (let d = 0; d < st.D; d++) drawReplicate(st, d);
   return summarise(st, b.estimates);
-}
-
-/**
- * The replicates of a run whose grid has a spline plan (the grid inside the knots). The two ways of
- * evaluating the replicate curves have loops of their own, chosen once per run: inside one loop the
- * way that the first runs did not take was a call without type feedback, and V8 threw away the
- * compiled {@link drawReplicate} at the first run that took it.
- */
-function drawPlanned(st: BootstrapDraws, plan: SplineGridPlan): void {
-  for (let d = 0; d < st.D; d++) {
-    if (!drawReplicate(st, d)) continue;
-    const spline = replicateSpline(st);
-    evaluatePlannedGrid(plan, spline.values, spline.secondDerivs, st.f, st.d2);
-    storeCurveAndZone(st, d);
-  }
-}
-
-/** The replicates of a run without a spline plan (grid points beyond the knots: the spline continued linearly). */
-function drawUnplanned(st: BootstrapDraws): void {
-  for (let d = 0; d < st.D; d++) {
-    if (!drawReplicate(st, d)) continue;
-    const spline = replicateSpline(st);
-    evaluateSplineGrid(spline, st.grid, st.f, undefined, st.d2);
-    storeCurveAndZone(st, d);
-  }
 }
 
 /** A replicate's draws filled with NaN (NaN = no value in that replicate). */
@@ -300,11 +274,8 @@ function riverCubic(st: BootstrapDraws, fit: TwoPhaseFit): number {
   return twoPhaseValue(fit, st.sr);
 }
 
-/**
- * Replicate d of {@link runBootstrap}: draws its concentrations, refits the two-phase model and stores
- * its results; true when the replicate's smoothing spline is to be fitted next ({@link replicateSpline}).
- */
-function drawReplicate(st: BootstrapDraws, d: number): boolean {
+/** Replicate d of {@link runBootstrap}: draws its concentrations, refits and stores its results. */
+function drawReplicate(st: BootstrapDraws, d: number): void {
   const n = st.n;
   const ys = st.ys;
   const yHat = st.yHat;
@@ -313,9 +284,9 @@ function drawReplicate(st: BootstrapDraws, d: number): boolean {
   for (let i = 0; i < n; i++) ys[i] = yHat[i]! + sigmaEff[i]! * z.next();
   const cs = st.seaConc + st.seaSd * z.next();
   const design = st.design;
-  if (!design) return false;
+  if (!design) return;
   const fit = fitTwoPhaseReplicate(design, st.x, ys, st.w, st.fit);
-  if (!fit) return false;
+  if (!fit) return;
   // The seaward line C = ic + sl·S (seawardLine, without its array).
   const sl = fit.coef[1] / fit.range;
   const ic = fit.coef[0] - sl * fit.sMin;
@@ -335,27 +306,19 @@ function drawReplicate(st: BootstrapDraws, d: number): boolean {
     st.mS[d] = m;
     st.mX[d] = twoPhaseValue(fit, m) - (cr + ((cs - cr) * (m - sr)) / (st.seaSalinity - sr));
   }
-  return st.prepared !== undefined;
-}
-
-/** The smoothing spline of the replicate drawn last (st.ys), at the full-data knots and λ. */
-function replicateSpline(st: BootstrapDraws): NaturalSpline {
-  const prepared = st.prepared!;
+  const prepared = st.prepared;
+  if (!prepared) return;
   const knotY = st.knotWork.y;
-  mergeKnotResponses(st.knotOf, st.w, st.ys, prepared.w, prepared.n, knotY);
-  return fitPreparedSpline(prepared, knotY, st.splineWork);
-}
-
-/** Stores replicate d's curve (st.f) and locates its reaction zone from the curvature (st.d2). */
-function storeCurveAndZone(st: BootstrapDraws, d: number): void {
+  mergeKnotResponses(st.knotOf, st.w, ys, prepared.w, prepared.n, knotY);
+  const spline = fitPreparedSpline(prepared, knotY, st.splineWork);
   const f = st.f;
   const d2 = st.d2;
+  if (st.plan) evaluatePlannedGrid(st.plan, spline.values, spline.secondDerivs, f, d2);
+  else evaluateSplineGrid(spline, st.grid, f, undefined, d2);
   const G = st.G;
   const D = st.D;
   const curves = st.curves;
   for (let g = 0; g < G; g++) curves[g * D + d] = f[g]!;
-  const fit = st.fit;
-  const sr = st.sr;
   const zone = st.zone;
   const segmentStart = fit.linear ? undefined : fit.breakSalinity;
   const sign = st.zoneSign ?? dominantZoneSign(st.grid, d2, sr, segmentStart);
@@ -395,10 +358,8 @@ function summarise(st: BootstrapDraws, est: BootstrapInput["estimates"]): Bootst
   const D = st.D;
   const eff = st.eff;
   const c0 = st.c0;
-  // Created holding doubles (NaN), so that bandInto's stores always meet arrays of one map; empty arrays
-  // changed map at their first double and V8 discarded bandInto's code compiled while it ran ("wrong map").
-  const bandLower: number[] = new Array<number>(G).fill(Number.NaN);
-  const bandUpper: number[] = new Array<number>(G).fill(Number.NaN);
+  const bandLower: number[] = new Array<number>(G);
+  const bandUpper: number[] = new Array<number>(G);
   bandInto(st.curves, G, D, new Float64Array(D), bandLower, bandUpper);
   let s1 = 0,
     s2 = 0,

@@ -458,13 +458,6 @@ function breakTermsIn(d: TwoPhaseDesign, k: number, out: Float64Array, at: numbe
 export const RSS_OUT = new Float64Array(1);
 
 /**
- * +∞ as a module constant: `Number.POSITIVE_INFINITY` is a property load that needs type feedback, and
- * the singular-design branches of {@link termsRssInto} that read it are first reached after V8 has
- * compiled the function, which then threw the code away ("property access without feedback").
- */
-const POS_INF = Number.POSITIVE_INFINITY;
-
-/**
  * Weighted RSS of the two-phase model at a break whose design terms are in tm[at …] for the
  * response loaded by {@link loadResponse}: the closed form when safe, else the normal equations
  * solved by {@link solveNormal} (RSS = Σw·ỹ² − βᵀr).
@@ -493,61 +486,63 @@ export function termsRssInto(d: TwoPhaseDesign, tm: Float64Array, at: number, co
   const r2 = (h * q0 - 2 * q1) * h + q2;
   const r3 = k >= 4 ? ((h * q0 - 3 * q1) * h + 3 * q2) * h - q3 : 0;
   const fast = tm[at + T_FAST]!;
-  // One store of the result at the end, whichever branch computed it: the branch of a design that is
-  // singular at every response (fast = 2) is rare and first reached after V8 has compiled this
-  // function, so it must not hold an operation of its own (a property load or store without feedback).
-  let rss = POS_INF;
+  if (fast === 2) {
+    RSS_OUT[0] = Number.POSITIVE_INFINITY;
+    return;
+  }
   if (fast === 1) {
     const rt2 = r2 - a02 * d.line0 - a12 * d.line1;
-    if (k < 4) rss = Math.max(0, d.rssLine - rt2 * rt2 * tm[at + T_C22]!);
-    else {
-      const rt3 = r3 - a03 * d.line0 - a13 * d.line1;
-      const gain = tm[at + T_C22]! * rt2 * rt2 + 2 * tm[at + T_C23]! * rt2 * rt3 + tm[at + T_C33]! * rt3 * rt3;
-      rss = Math.max(0, d.rssLine - gain);
+    if (k < 4) {
+      RSS_OUT[0] = Math.max(0, d.rssLine - rt2 * rt2 * tm[at + T_C22]!);
+      return;
     }
-  } else if (fast !== 2) {
-    const P = d.p,
-      e = d.n * 7,
-      eq = d.n * 4;
-    const r0 = Q[eq]!,
-      r1 = Q[eq + 1]!;
-    // The normal equations written into M here rather than through putNormal (the same entries): a
-    // call with 15 numbers that is not inlined boxes each of them.
-    const a00 = P[e]!,
-      a01 = P[e + 1]!,
-      c = k + 1;
-    M[0] = a00;
-    M[1] = a01;
-    M[c] = a01;
-    M[c + 1] = P[e + 2]!;
-    M[k] = r0;
-    M[c + k] = r1;
-    if (k >= 3) {
-      M[2] = a02;
-      M[2 * c] = a02;
-      M[c + 2] = a12;
-      M[2 * c + 1] = a12;
-      M[2 * c + 2] = tm[at + T_A22]!;
-      M[2 * c + k] = r2;
-    }
-    if (k >= 4) {
-      const a23 = tm[at + T_A23]!;
-      M[3] = a03;
-      M[3 * c] = a03;
-      M[c + 3] = a13;
-      M[3 * c + 1] = a13;
-      M[2 * c + 3] = a23;
-      M[3 * c + 2] = a23;
-      M[3 * c + 3] = tm[at + T_A33]!;
-      M[3 * c + k] = r3;
-    }
-    coef[0] = coef[1] = coef[2] = coef[3] = 0;
-    // Singular normal equations: +∞ (the RSS below is then not used).
-    const solved = solveNormal(k, coef);
-    const r = d.ryy - coef[0]! * r0 - coef[1]! * r1 - coef[2]! * r2 - coef[3]! * r3;
-    rss = solved && Number.isFinite(r) ? Math.max(0, r) : POS_INF;
+    const rt3 = r3 - a03 * d.line0 - a13 * d.line1;
+    const gain = tm[at + T_C22]! * rt2 * rt2 + 2 * tm[at + T_C23]! * rt2 * rt3 + tm[at + T_C33]! * rt3 * rt3;
+    RSS_OUT[0] = Math.max(0, d.rssLine - gain);
+    return;
   }
-  RSS_OUT[0] = rss;
+  const P = d.p,
+    e = d.n * 7,
+    eq = d.n * 4;
+  const r0 = Q[eq]!,
+    r1 = Q[eq + 1]!;
+  // The normal equations written into M here rather than through putNormal (the same entries): a
+  // call with 15 numbers that is not inlined boxes each of them.
+  const a00 = P[e]!,
+    a01 = P[e + 1]!,
+    c = k + 1;
+  M[0] = a00;
+  M[1] = a01;
+  M[c] = a01;
+  M[c + 1] = P[e + 2]!;
+  M[k] = r0;
+  M[c + k] = r1;
+  if (k >= 3) {
+    M[2] = a02;
+    M[2 * c] = a02;
+    M[c + 2] = a12;
+    M[2 * c + 1] = a12;
+    M[2 * c + 2] = tm[at + T_A22]!;
+    M[2 * c + k] = r2;
+  }
+  if (k >= 4) {
+    const a23 = tm[at + T_A23]!;
+    M[3] = a03;
+    M[3 * c] = a03;
+    M[c + 3] = a13;
+    M[3 * c + 1] = a13;
+    M[2 * c + 3] = a23;
+    M[3 * c + 2] = a23;
+    M[3 * c + 3] = tm[at + T_A33]!;
+    M[3 * c + k] = r3;
+  }
+  coef[0] = coef[1] = coef[2] = coef[3] = 0;
+  if (!solveNormal(k, coef)) {
+    RSS_OUT[0] = Number.POSITIVE_INFINITY;
+    return;
+  }
+  const rss = d.ryy - coef[0]! * r0 - coef[1]! * r1 - coef[2]! * r2 - coef[3]! * r3;
+  RSS_OUT[0] = Number.isFinite(rss) ? Math.max(0, rss) : Number.POSITIVE_INFINITY;
 }
 
 const ONE = new Float64Array(TERMS);
@@ -584,10 +579,8 @@ export function gridTerms(d: TwoPhaseDesign, lo: number, G: number, fourth: numb
     const b = lo + ((d.sMax - lo) * g) / G;
     const k = fourth < b ? 4 : 3;
     const at = g * TERMS;
-    // One index for the flag's read and write (an addition in a rarely taken branch has no type feedback).
-    const fastAt = at + T_FAST;
     breakTerms(d, b, k, grid, at);
-    if (grid[fastAt] === 1) continue;
+    if (grid[at + T_FAST] === 1) continue;
     // Not provably safe: decide once, as the general solve would (its pivots ignore y).
     const P = d.p,
       e = d.n * 7;
@@ -608,11 +601,8 @@ export function gridTerms(d: TwoPhaseDesign, lo: number, G: number, fourth: numb
       0,
       0,
     );
-    // The flag written by one store whichever way the solve went (breakTerms left it 0): a failed solve
-    // is rare, and a store of its own in that branch had no type feedback when V8 compiled this loop.
-    const solved = solveNormal(k, SINK);
-    const finite = Number.isFinite(grid[at + T_C22]!) && (k < 4 || Number.isFinite(grid[at + T_C33]!));
-    grid[fastAt] = !solved ? 2 : finite ? 1 : 0;
+    if (!solveNormal(k, SINK)) grid[at + T_FAST] = 2;
+    else if (Number.isFinite(grid[at + T_C22]!) && (k < 4 || Number.isFinite(grid[at + T_C33]!))) grid[at + T_FAST] = 1;
   }
   d.grid = grid;
   d.gridLo = lo;

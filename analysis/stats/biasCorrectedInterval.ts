@@ -26,20 +26,15 @@ export function intervalBc95(values: ArrayLike<number>, estimate: number): [numb
   if (!Number.isFinite(estimate)) return undefined;
   const work = new Float64Array(values.length);
   let n = 0;
-  // Replicates below and equal to θ̂ counted apart as integers, both counts updated for every value: a
-  // tie is rare, and adding ½ in a branch of its own made V8 discard the loop's compiled code at the
-  // first one (an operation without type feedback). below + ½·ties is exact.
   let below = 0;
-  let ties = 0;
   for (let i = 0; i < values.length; i++) {
     const v = values[i]!;
     if (!Number.isFinite(v)) continue;
     work[n++] = v;
-    below += v < estimate ? 1 : 0;
-    ties += v === estimate ? 1 : 0;
+    if (v < estimate) below += 1;
+    else if (v === estimate) below += 0.5;
   }
   if (n < 2) return undefined;
-  below += 0.5 * ties;
   const share = Math.min(1 - 0.5 / n, Math.max(0.5 / n, below / n));
   const z0 = Math.max(-MAX_Z0, Math.min(MAX_Z0, jStat.normal.inv(share, 0, 1)));
   const zc = 1.959963984540054;

@@ -46,28 +46,26 @@ export function interval95(values: ArrayLike<number>): [number, number] | undefi
  */
 export function percentileSelect(a: Float64Array, n: number, p: number): number | undefined {
   if (n === 0) return undefined;
-  const last = n - 1;
-  const h = last * p;
+  const h = (n - 1) * p;
   const lo = Math.floor(h);
   // Floyd–Rivest selection (the quickselect package) on the finite values; the order statistics it
-  // leaves at lo (and lo + 1) are unique, whatever the order of the rest. One selection call and one
-  // read for every case: an exact order statistic (h = lo) is rare, and a call of its own in that branch
-  // was first reached after V8 had compiled this function (an operation without type feedback).
-  const exact = lo >= last || h === lo;
-  const lowerTail = 2 * lo < n;
-  // Lower tail: order statistic lo + 1 selected, lo is the largest before it; upper tail: lo selected,
-  // lo + 1 is the smallest after it.
-  const k = exact || !lowerTail ? lo : lo + 1;
-  quickselect(a as unknown as number[], k, 0, last);
-  const selected = a[k]!;
-  if (exact) return selected;
+  // leaves at lo (and lo + 1) are unique, whatever the order of the rest.
+  const values = a as unknown as number[];
+  if (lo + 1 >= n || h === lo) {
+    quickselect(values, lo, 0, n - 1);
+    return a[lo]!;
+  }
   let vLo = Number.NEGATIVE_INFINITY,
     vHi = Number.POSITIVE_INFINITY;
-  if (lowerTail) {
-    vHi = selected;
+  if (2 * lo < n) {
+    // Lower tail: select order statistic lo + 1; order statistic lo is the largest before it.
+    quickselect(values, lo + 1, 0, n - 1);
+    vHi = a[lo + 1]!;
     for (let i = 0; i <= lo; i++) if (a[i]! > vLo) vLo = a[i]!;
   } else {
-    vLo = selected;
+    // Upper tail: select order statistic lo; order statistic lo + 1 is the smallest after it.
+    quickselect(values, lo, 0, n - 1);
+    vLo = a[lo]!;
     for (let i = lo + 1; i < n; i++) if (a[i]! < vHi) vHi = a[i]!;
   }
   return vLo + (h - lo) * (vHi - vLo);
