@@ -19,7 +19,7 @@ import { ADDITION_DARK_CSS } from "./colour.ts";
 
 /** GeoJSON source of every overlay label and marker reservation. */
 export const LABEL_SOURCE = "overlay-labels";
-/** Transparent image whose boxes reserve the space of markers deck.gl draws over the map. */
+/** Transparent image whose boxes reserve the space of the station markers (circle layers take no part in label placement). */
 export const RESERVE_IMAGE = "brackline-reserve";
 export const RESERVE_IMAGE_PX = 16;
 
@@ -123,7 +123,7 @@ function point(lonLat: LonLat, props: LabelProps): Feature<Point, LabelProps> {
   return { type: "Feature", geometry: { type: "Point", coordinates: [lonLat[0], lonLat[1]] }, properties: props };
 }
 
-/** Radius [px] deck.gl draws a station with (kept in step with layers.ts). */
+/** Outer radius [px] of a station marker, to the middle of its ring (stations.ts draws it; labels keep clear of it). */
 export function stationRadiusPx(s: MapStation, selected: ReadonlySet<string>, hovered: string | null): number {
   return selected.has(s.id) ? 9 : s.id === hovered ? 8 : 6;
 }

@@ -8,6 +8,7 @@ import type { FeatureCollection } from "geojson";
 import type { ExpressionSpecification, StyleSpecification } from "maplibre-gl";
 import { LABEL_SOURCE, labelLayers } from "./labels.ts";
 import { markLayers } from "./marks.ts";
+import { STATION_ID_PROPERTY, stationLayers } from "./stations.ts";
 import { worldLandStyle, type WorldLandSource } from "./basemapStyle.ts";
 
 export const PALETTE = {
@@ -39,28 +40,39 @@ export interface StyleOptions {
   labels?: FeatureCollection;
   /** The channel, km ticks, reaction zone, brushed stretch, isohalines, maximum (marks.ts markFeatures); empty when omitted. */
   marks?: FeatureCollection;
+  /** The stations and projection lines (stations.ts stationFeatures); none when omitted. */
+  stations?: FeatureCollection["features"];
   /** Natural Earth world land (basemapStyle.ts), drawn beneath user tiles and our own basemap. */
   worldLand?: WorldLandSource;
 }
 
-/** The marks then the labels, as the one overlay source's data. */
+/** The marks, the labels, then the stations, as the one overlay source's data. */
 export function overlayFeatures(
   marks: FeatureCollection | undefined,
   labels: FeatureCollection | undefined,
+  stations: FeatureCollection["features"] = [],
 ): FeatureCollection {
-  if (!marks?.features.length) return labels ?? EMPTY;
-  return { type: "FeatureCollection", features: [...marks.features, ...(labels?.features ?? [])] };
+  if (!marks?.features.length && stations.length === 0) return labels ?? EMPTY;
+  return {
+    type: "FeatureCollection",
+    features: [...(marks?.features ?? []), ...(labels?.features ?? []), ...stations],
+  };
 }
 
-export function buildStyle({ basemap, tileUrl, labels, marks, worldLand }: StyleOptions): StyleSpecification {
+export function buildStyle({ basemap, tileUrl, labels, marks, stations, worldLand }: StyleOptions): StyleSpecification {
   const world = worldLand ? worldLandStyle(worldLand, PALETTE) : undefined;
   const style: StyleSpecification = {
     version: 8,
     name: "Brackline offline",
     sources: {
       basemap: { type: "geojson", data: basemap ?? EMPTY },
-      // One source for the marks and the labels (marks.ts): tiled together when an analysis changes both.
-      [LABEL_SOURCE]: { type: "geojson", data: overlayFeatures(marks, labels) },
+      // One source for the marks, the labels and the stations (marks.ts, stations.ts): tiled together
+      // when an analysis changes them; station features carry their id for the hover feature state.
+      [LABEL_SOURCE]: {
+        type: "geojson",
+        data: overlayFeatures(marks, labels, stations),
+        promoteId: STATION_ID_PROPERTY,
+      },
       ...world?.sources,
     },
     layers: [
@@ -119,6 +131,8 @@ export function buildStyle({ basemap, tileUrl, labels, marks, worldLand }: Style
       ...markLayers(),
       // Overlay labels above the place names: MapLibre places the topmost layers first.
       ...labelLayers(),
+      // The stations on top (their room is kept free of labels by the labels' reserve boxes).
+      ...stationLayers(),
     ],
   };
   if (tileUrl && tileUrl.trim() !== "") {

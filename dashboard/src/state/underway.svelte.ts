@@ -9,7 +9,7 @@ import type { ImportIssue, UnderwayBins, UnderwaySummary } from "../../../analys
 import { proxyCallback, type RemoteApi } from "../worker/client.ts";
 import type { TextFile } from "../worker/protocol.ts";
 import type { UnderwayPoints, UnderwayResult, UnderwayView } from "../worker/underwayProtocol.ts";
-import { MAX_UNDERWAY_POINTS } from "../map/underwayLayer.ts";
+import { MAX_UNDERWAY_POINTS } from "../map/underwayPoints.ts";
 
 export type UnderwayStatus = "idle" | "reading" | "ready" | "error";
 
