@@ -136,6 +136,8 @@ describe.skipIf(skipBrowser || !present)("the survey archive view over the 2017â
       `archiveView.e2e: main map: ${(await note.textContent())?.replace(/\s+/g, " ")}; ${await note.getAttribute("data-paths")} zone stretches`,
     );
     expect(Number(await note.getAttribute("data-paths"))).toBeGreaterThan(0);
+    // deck.gl, loaded on demand for the zones, has drawn them over the map.
+    await s.page.waitForSelector('[data-dense-drawn~="archive-chosen-zones"]', { timeout: 60_000 });
     const dimmed = await s.page.locator('[data-testid="archive-strip"] g.col.dim').count();
     expect(dimmed).toBeGreaterThan(0);
     await settle(s.page);

@@ -40,6 +40,8 @@ describe.skipIf(skipBrowser)("underway log on the map (headless Chromium)", () =
     expect(summary).toContain("100,000 of 100,000 records placed");
     const seen = await s.page.evaluate(() => (window as unknown as { __underwaySeen: number[] }).__underwaySeen);
     expect(seen.some((v) => v > 0 && v < 1)).toBe(true);
+    // deck.gl, loaded on demand for the log, has drawn its points over the map.
+    await s.page.waitForSelector('[data-dense-drawn~="underway"]', { timeout: 60_000 });
     await settle(s.page);
     await s.page.waitForTimeout(1000);
     const after = await screenshot(s.page, "underway-after");
