@@ -9,7 +9,7 @@
 //   switches: prewarm (MapLibre's workers before the map), aa=0 (deck.gl without multisampling),
 //   interleaved (deck.gl in MapLibre's context; deck.gl 9.4's @deck.gl/mapbox reads map.transform, which
 //   MapLibre 6 removed, so the probe stands in for it), nodeck, nooutline (water without fill-outline-color),
-//   nolabels (no symbol layers), nodots (no circle layer), pr=X (canvas pixel ratio),
+//   nolabels (no symbol layers), pdb0 (MapLibre's canvas without preserveDrawingBuffer), nodots (no circle layer), pr=X (canvas pixel ratio),
 //   deckOnLoad (deck.gl's layers from the map's load), deckLayers=path|scatter|none (one deck.gl layer or none),
 //   scatter4 / scatter4fn (four point layers as the dashboard's, accessors partly constants / all functions),
 //   scatter1 (the same points in one layer),
@@ -57,7 +57,7 @@ const map = new maplibregl.Map({
   bounds: [[Math.min(...lons), Math.min(...lats)], [Math.max(...lons), Math.max(...lats)]],
   fitBoundsOptions: { padding: 48 },
   attributionControl: false,
-  canvasContextAttributes: { preserveDrawingBuffer: true },
+  canvasContextAttributes: { preserveDrawingBuffer: !q.has("pdb0") },
   fadeDuration: 0,
   ...(pr ? { pixelRatio: pr } : {}),
 });
