@@ -10,19 +10,24 @@ import type { Map as MapLibreMap } from "maplibre-gl";
 import type { DenseLayers } from "./denseLayers.ts";
 import { underwayLayer } from "./underwayLayer.ts";
 import { chosenZonesLayer } from "../archive/chosenZonesLayer.ts";
+import { deckStationLayers, type StationLayerState } from "./deckStations.ts";
 
 export interface DeckOverlay {
-  /** Draws these dense layers (an empty description draws nothing). */
-  setLayers(dense: DenseLayers): void;
+  /**
+   * Draws these dense layers (an empty description draws nothing) and, over them, the stations: deck.gl's
+   * canvas lies over MapLibre's, whose stations would otherwise be under the dense points.
+   */
+  setLayers(dense: DenseLayers, stations: StationLayerState): void;
   remove(): void;
 }
 
-/** The deck.gl layers of a description, lowest first. */
-export function deckLayers(dense: DenseLayers): Layer[] {
-  return [
+/** The deck.gl layers of a description, lowest first, with the stations over them (none without a dense layer). */
+export function deckLayers(dense: DenseLayers, stations: StationLayerState): Layer[] {
+  const layers: Layer[] = [
     ...(dense.chosenZones ? chosenZonesLayer(dense.chosenZones.paths, dense.chosenZones.nZoned) : []),
     ...(dense.underway ? [underwayLayer(dense.underway)] : []),
   ];
+  return layers.length > 0 ? [...layers, ...deckStationLayers(stations)] : [];
 }
 
 /**
@@ -51,8 +56,8 @@ export function addDeckOverlay(
     c.setAttribute("aria-hidden", "true");
   }
   return {
-    setLayers: (dense) => {
-      layers = deckLayers(dense);
+    setLayers: (dense, stations) => {
+      layers = deckLayers(dense, stations);
       overlay.setProps({ layers });
     },
     remove: () => overlay.finalize(),

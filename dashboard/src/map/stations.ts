@@ -54,7 +54,8 @@ const WHITE_RING: RGBA = [255, 255, 255, 220];
 
 export const cssRgba = ([r, g, b, a]: RGBA): string => `rgba(${r}, ${g}, ${b}, ${Number((a / 255).toFixed(3))})`;
 
-function colourValue(data: MapData, s: MapStation): number | undefined {
+/** The value a station is coloured by (salinity or deviation from the dilution line). */
+export function colourValue(data: MapData, s: MapStation): number | undefined {
   return data.colouring === "deviation" ? s.deviation : s.salinity;
 }
 
