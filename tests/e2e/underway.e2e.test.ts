@@ -42,6 +42,9 @@ describe.skipIf(skipBrowser)("underway log on the map (headless Chromium)", () =
     expect(seen.some((v) => v > 0 && v < 1)).toBe(true);
     // deck.gl, loaded on demand for the log, has drawn its points over the map.
     await s.page.waitForSelector('[data-dense-drawn~="underway"]', { timeout: 60_000 });
+    // deck.gl's canvas only draws: the map keeps one keyboard stop (MapLibre's labelled canvas).
+    await expect(s.page.locator(".map canvas").count()).resolves.toBe(2);
+    await expect(s.page.locator(".map canvas:not([tabindex='-1'])").count()).resolves.toBe(1);
     await settle(s.page);
     await s.page.waitForTimeout(1000);
     const after = await screenshot(s.page, "underway-after");

@@ -42,19 +42,28 @@ export function addDeckOverlay(
   options: { antialias: boolean; onDrawn?: (ids: string[]) => void },
 ): DeckOverlay {
   const before = new Set(map.getContainer().querySelectorAll("canvas"));
+  /** deck.gl's canvas only draws: no tab stop, hidden from assistive technology (checked again at its first frame). */
+  let hidden = false;
+  const hideCanvas = () => {
+    for (const c of map.getContainer().querySelectorAll("canvas")) {
+      if (before.has(c)) continue;
+      c.tabIndex = -1;
+      c.setAttribute("aria-hidden", "true");
+      hidden = true;
+    }
+  };
   let layers: Layer[] = [];
   const overlay = new MapboxOverlay({
     interleaved: false,
     deviceProps: { webgl: { antialias: options.antialias } },
     layers,
-    onAfterRender: () => options.onDrawn?.(layers.filter((l) => l.isLoaded).map((l) => l.id)),
+    onAfterRender: () => {
+      if (!hidden) hideCanvas();
+      options.onDrawn?.(layers.filter((l) => l.isLoaded).map((l) => l.id));
+    },
   });
   map.addControl(overlay);
-  for (const c of map.getContainer().querySelectorAll("canvas")) {
-    if (before.has(c)) continue;
-    c.tabIndex = -1;
-    c.setAttribute("aria-hidden", "true");
-  }
+  hideCanvas();
   return {
     setLayers: (dense, stations) => {
       layers = deckLayers(dense, stations);
