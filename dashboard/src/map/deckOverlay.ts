@@ -42,13 +42,24 @@ export function addDeckOverlay(
   options: { antialias: boolean; onDrawn?: (ids: string[]) => void },
 ): DeckOverlay {
   const before = new Set(map.getContainer().querySelectorAll("canvas"));
-  /** deck.gl's canvas only draws: no tab stop, hidden from assistive technology (checked again at its first frame). */
+  /**
+   * deck.gl's canvas only draws: no tab stop, hidden from assistive technology. deck.gl gives its canvas
+   * `tabindex="0"` again after creating it, so an observer puts it back; looked for after each frame
+   * until found.
+   */
   let hidden = false;
+  const keepOut = (c: HTMLCanvasElement) => {
+    if (c.tabIndex !== -1) c.tabIndex = -1;
+    if (c.getAttribute("aria-hidden") !== "true") c.setAttribute("aria-hidden", "true");
+  };
+  const observer = new MutationObserver((records) => {
+    for (const r of records) keepOut(r.target as HTMLCanvasElement);
+  });
   const hideCanvas = () => {
     for (const c of map.getContainer().querySelectorAll("canvas")) {
       if (before.has(c)) continue;
-      c.tabIndex = -1;
-      c.setAttribute("aria-hidden", "true");
+      keepOut(c);
+      observer.observe(c, { attributes: true, attributeFilter: ["tabindex", "aria-hidden"] });
       hidden = true;
     }
   };
@@ -69,6 +80,9 @@ export function addDeckOverlay(
       layers = deckLayers(dense, stations);
       overlay.setProps({ layers });
     },
-    remove: () => overlay.finalize(),
+    remove: () => {
+      observer.disconnect();
+      overlay.finalize();
+    },
   };
 }
