@@ -1,7 +1,7 @@
 // Two views of a Chromium trace of a cold start (bench/profile/timeline.ts --trace): how busy each
 // thread that matters was in each 250 ms from navigation (renderer main, GPU main, dedicated workers:
 // the analysis worker and MapLibre's), and the GPU process's WebGL command-buffer flushes per context
-// (the first context is MapLibre's, the second deck.gl's). In software WebGL a long flush is a frame
+// (the first context is MapLibre's; a second is deck.gl's, on the bare page and in the dashboard only with a dense layer). In software WebGL a long flush is a frame
 // drawn, or shaders built, on the CPU, and the renderer's next frame commit waits for it (the main
 // thread then shows as busy): e.g. deck.gl's first draw (~1 s) held the analysis result ~1 s in the queue.
 // Usage: npx tsx bench/profile/traceThreads.ts TRACE.json   (or called by timeline.ts --trace)

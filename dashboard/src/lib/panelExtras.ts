@@ -16,7 +16,7 @@ export const DEMO_CARBONATE: { river: CarbonateEndmember; sea: CarbonateEndmembe
   sea: { salinity: 35, taUmolKg: 2300, dicUmolKg: 2050 },
 };
 
-/** The canvases of the map (MapLibre base map and the deck.gl overlay), for the map PNG export. */
+/** The canvases of the map (MapLibre's, and deck.gl's while a dense layer is shown), for the map PNG export. */
 export function mapCanvases(): HTMLCanvasElement[] {
   return [...document.querySelectorAll<HTMLCanvasElement>(".map-area canvas")];
 }
