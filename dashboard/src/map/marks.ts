@@ -20,12 +20,19 @@ export const MARK_SOURCE = LABEL_SOURCE;
 export type MarkKind =
   "zone-removal" | "zone-addition" | "brush" | "channel" | "tick" | "isohaline-marker" | "maximum-ring";
 
-/** Layer ids, lowest first (the style order). */
+/**
+ * Layer ids, lowest first (the style order). Each layer's paint is constant (a layer per zone kind and
+ * per tick size, not a colour or radius read from the feature): MapLibre builds one shader program per
+ * set of feature-driven paint properties, so constant paint shares the programs the basemap's lines and
+ * place dots already built instead of compiling variants of its own when the analysis comes in.
+ */
 export const MARK_LAYERS = {
   zone: "mark-zone",
+  zoneAddition: "mark-zone-addition",
   brush: "mark-brush",
   channel: "mark-channel",
   ticks: "mark-ticks",
+  ticksMajor: "mark-ticks-major",
   isohalines: "mark-isohalines",
   maximum: "mark-maximum",
 } as const;
@@ -85,12 +92,17 @@ export function markLayers(): LayerSpecification[] {
       id: MARK_LAYERS.zone,
       type: "line",
       source: MARK_SOURCE,
-      filter: ["in", ["get", "kind"], ["literal", ["zone-removal", "zone-addition"]]],
+      filter: isKind("zone-removal"),
       layout: { "line-cap": "round", "line-join": "round" },
-      paint: {
-        "line-color": ["match", ["get", "kind"], "zone-addition", ADDITION_ZONE_CSS, REMOVAL_ZONE_CSS],
-        "line-width": 14,
-      },
+      paint: { "line-color": REMOVAL_ZONE_CSS, "line-width": 14 },
+    },
+    {
+      id: MARK_LAYERS.zoneAddition,
+      type: "line",
+      source: MARK_SOURCE,
+      filter: isKind("zone-addition"),
+      layout: { "line-cap": "round", "line-join": "round" },
+      paint: { "line-color": ADDITION_ZONE_CSS, "line-width": 14 },
     },
     {
       id: MARK_LAYERS.brush,
@@ -112,8 +124,15 @@ export function markLayers(): LayerSpecification[] {
       id: MARK_LAYERS.ticks,
       type: "circle",
       source: MARK_SOURCE,
-      filter: isKind("tick"),
-      paint: { "circle-radius": ["case", ["==", ["get", "major"], true], 3.5, 2], "circle-color": CHANNEL_CSS },
+      filter: ["all", isKind("tick"), ["!=", ["get", "major"], true]],
+      paint: { "circle-radius": 2, "circle-color": CHANNEL_CSS },
+    },
+    {
+      id: MARK_LAYERS.ticksMajor,
+      type: "circle",
+      source: MARK_SOURCE,
+      filter: ["all", isKind("tick"), ["==", ["get", "major"], true]],
+      paint: { "circle-radius": 3.5, "circle-color": CHANNEL_CSS },
     },
     {
       id: MARK_LAYERS.isohalines,
