@@ -12,6 +12,7 @@ import { fileURLToPath } from "node:url";
 import type { BenchCase, BenchRow } from "../benchCase.ts";
 import { idleBoundS, median, runSampled, type ThreadedRun } from "./archiveThreads.ts";
 import { PHASE_NAMES, runPhases, type RunPhases } from "./archivePhases.ts";
+import { threadPhases, type ThreadPhase, type ThreadPhases } from "./archiveThreadPhases.ts";
 import {
   northBayCenterline,
   SF_DIR,
@@ -56,6 +57,8 @@ interface CliRun extends ThreadedRun {
   surveys: number;
   /** The run's phases from its timeline (BRACKLINE_PHASES=1). */
   phases: RunPhases;
+  /** CPU and GC pauses of each JavaScript thread in the reading and analysis phases (timeline marks). */
+  threads: ThreadPhases;
 }
 
 async function cli(threads: number): Promise<CliRun> {
@@ -68,6 +71,7 @@ async function cli(threads: number): Promise<CliRun> {
     analyseS: Number(m?.[2] ?? NaN),
     surveys: Number(m?.[1] ?? 0),
     phases: runPhases(r.stderr, r.exitAtMs),
+    threads: threadPhases(r.stderr),
   };
 }
 
@@ -75,6 +79,11 @@ const f1 = (x: number): string => x.toFixed(1);
 const f2 = (x: number): string => x.toFixed(2);
 /** Median of one figure over runs. */
 const med = (runs: readonly CliRun[], f: (r: CliRun) => number): number => median(runs.map(f));
+
+/** "GC 0.06 of 1.85 s CPU" (medians over the runs) of one thread's phase. */
+function gcText(runs: readonly CliRun[], f: (t: ThreadPhases) => ThreadPhase): string {
+  return `GC ${f2(med(runs, (r) => f(r.threads).gcMs) / 1000)} of ${f2(med(runs, (r) => f(r.threads).cpuMs) / 1000)} s CPU`;
+}
 
 /** "main 1.8 s, worker 1.6 s, helpers 0.8 s" (medians over the runs) of one phase. */
 function cpuText(runs: readonly CliRun[], ph: "all" | "analysis"): string {
@@ -135,6 +144,13 @@ export const archiveBench: BenchCase = {
         ratioLabel: "× speed-up",
         goal: "≥ 1.7× on 2 cores",
         note: `${load}; per pair ${pairRatios((r) => r.analyseS)}×; CPU in the phase: ${cpuText(two, "analysis")} (one thread: ${cpuText(one, "analysis")}); idle-machine lower bounds from the threads' CPU in the phase ${f2(med(two, idleAnalysis))} s vs ${f2(med(one, idleAnalysis))} s, ratio ${f2(median(one.map((o, i) => idleAnalysis(o) / idleAnalysis(two[i]!))))}× (median per pair); the worker starts while the files are read and reads some of them`,
+      },
+      {
+        name: "archive: garbage-collection pauses of the JavaScript threads in the analysis phase (v8.GCProfiler, summed over the threads; GC work on V8's helper threads is counted with the helpers above)",
+        value: med(two, (r) => (r.threads.mainAnalysis.gcMs + r.threads.workerAnalysis.gcMs) / 1000),
+        unit: "s",
+        baseline: { name: "one thread", value: med(one, (r) => r.threads.mainAnalysis.gcMs / 1000) },
+        note: `analysis: main ${gcText(two, (t) => t.mainAnalysis)}, worker ${gcText(two, (t) => t.workerAnalysis)} (one thread: ${gcText(one, (t) => t.mainAnalysis)}); reading the inputs: main ${gcText(two, (t) => t.mainRead)}, worker ${gcText(two, (t) => t.workerRead)} (one thread: ${gcText(one, (t) => t.mainRead)})`,
       },
       ...phaseRows,
     ];

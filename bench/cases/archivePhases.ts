@@ -1,5 +1,5 @@
 // The phases of one archive CLI run, from the timeline the CLI writes with BRACKLINE_PHASES=1
-// (cli/archive/phaseLog.ts: `phase <epoch ms> <thread id> <label>` per mark, workers included):
+// (cli/archive/phaseLog.ts: `phase <epoch ms> <thread id> cpu=<ms> gc=<ms> <label>` per mark, workers included):
 // start-up, module load, reading, parsing (with the time the main thread waited for a worker's last
 // file), the rest of reading the inputs, analysis (with each thread's idle end), summary and output.
 
@@ -25,17 +25,31 @@ export interface RunPhases {
   exit: number;
 }
 
-interface Mark {
+/** One mark of a run's timeline. */
+export interface Mark {
+  /** When [epoch ms]. */
   t: number;
   thread: number;
+  /** The thread's CPU time so far [ms] (NaN when the CLI could not read it). */
+  cpu: number;
+  /** The thread's garbage-collection pauses so far [ms] (NaN when not written). */
+  gc: number;
   label: string;
 }
 
-function marks(stderr: string): Mark[] {
+/** The marks of a run's stderr. */
+export function marks(stderr: string): Mark[] {
   const out: Mark[] = [];
   for (const line of stderr.split("\n")) {
-    const m = /^phase (\d+(?:\.\d+)?) (\d+) (.*)$/.exec(line);
-    if (m) out.push({ t: Number(m[1]), thread: Number(m[2]), label: m[3]! });
+    const m = /^phase (\d+(?:\.\d+)?) (\d+) (?:cpu=(\d+(?:\.\d+)?) )?(?:gc=(\d+(?:\.\d+)?) )?(.*)$/.exec(line);
+    if (m)
+      out.push({
+        t: Number(m[1]),
+        thread: Number(m[2]),
+        cpu: Number(m[3] ?? NaN),
+        gc: Number(m[4] ?? NaN),
+        label: m[5]!,
+      });
   }
   return out;
 }
