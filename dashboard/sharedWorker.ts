@@ -1,7 +1,7 @@
 import { fileURLToPath } from "node:url";
 import type { Plugin } from "vite";
 import { SAVED_HINT } from "./src/state/savedHint.ts";
-import { EARLY_DEMO_MESSAGE } from "./src/worker/earlyJob.ts";
+import { EARLY_DEMO_FRAGMENT } from "./src/worker/earlyJob.ts";
 
 const workerDir = fileURLToPath(new URL("./src/worker/", import.meta.url));
 /** The analysis worker's entry module. */
@@ -41,17 +41,17 @@ export function sharedAnalysisWorker(): Plugin {
         );
         if (!entry) return [];
         const url = JSON.stringify(`./${entry.fileName}`);
-        // At a first visit (no saved-workspace hint) the page starts with the demo: the worker is told
-        // to begin that job at once (src/worker/earlyJob.ts); `demo` says it was told.
+        // At a first visit (no saved-workspace hint) the page starts with the demo: the worker is started
+        // with a fragment that tells it to begin that job at once (src/worker/earlyJob.ts); `demo` says so.
         const hint = JSON.stringify(SAVED_HINT);
-        const message = JSON.stringify({ [EARLY_DEMO_MESSAGE]: true });
+        const fragment = JSON.stringify(EARLY_DEMO_FRAGMENT);
         return [
           {
             tag: "script",
             children:
-              `(()=>{try{const w=new Worker(${url},{type:"module",name:"brackline-analysis"});const errors=[];` +
-              `w.addEventListener("error",(e)=>errors.push(e));let demo=false;` +
-              `try{demo=localStorage.getItem(${hint})===null}catch{}if(demo)w.postMessage(${message});` +
+              `(()=>{try{let demo=false;try{demo=localStorage.getItem(${hint})===null}catch{}` +
+              `const w=new Worker(${url}+(demo?${fragment}:""),{type:"module",name:"brackline-analysis"});` +
+              `const errors=[];w.addEventListener("error",(e)=>errors.push(e));` +
               `window.__bracklineEarlyWorker={worker:w,url:new URL(${url},document.baseURI).href,errors,demo}}catch{}})();`,
             injectTo: "head" as const,
           },
