@@ -1,7 +1,7 @@
 import { fileURLToPath } from "node:url";
 import type { Plugin } from "vite";
 import { SAVED_HINT } from "./src/state/savedHint.ts";
-import { EARLY_DEMO_FRAGMENT } from "./src/worker/earlyJob.ts";
+import { EARLY_DEMO_MESSAGE } from "./src/worker/earlyJob.ts";
 
 const workerDir = fileURLToPath(new URL("./src/worker/", import.meta.url));
 /** The analysis worker's entry module. */
@@ -41,17 +41,17 @@ export function sharedAnalysisWorker(): Plugin {
         );
         if (!entry) return [];
         const url = JSON.stringify(`./${entry.fileName}`);
-        // At a first visit (no saved-workspace hint) the page starts with the demo: the worker is started
-        // with a fragment that tells it to begin that job at once (src/worker/earlyJob.ts); `demo` says so.
+        // At a first visit (no saved-workspace hint) the page starts with the demo: the worker is told
+        // to begin that job at once (src/worker/earlyJob.ts); `demo` says it was told.
         const hint = JSON.stringify(SAVED_HINT);
-        const fragment = JSON.stringify(EARLY_DEMO_FRAGMENT);
+        const message = JSON.stringify({ [EARLY_DEMO_MESSAGE]: true });
         return [
           {
             tag: "script",
             children:
-              `(()=>{try{let demo=false;try{demo=localStorage.getItem(${hint})===null}catch{}` +
-              `const w=new Worker(${url}+(demo?${fragment}:""),{type:"module",name:"brackline-analysis"});` +
-              `const errors=[];w.addEventListener("error",(e)=>errors.push(e));` +
+              `(()=>{try{const w=new Worker(${url},{type:"module",name:"brackline-analysis"});const errors=[];` +
+              `w.addEventListener("error",(e)=>errors.push(e));let demo=false;` +
+              `try{demo=localStorage.getItem(${hint})===null}catch{}if(demo)w.postMessage(${message});` +
               `window.__bracklineEarlyWorker={worker:w,url:new URL(${url},document.baseURI).href,errors,demo}}catch{}})();`,
             injectTo: "head" as const,
           },

@@ -7,23 +7,25 @@ import { expose, transfer } from "comlink";
 import { createWorkerApi } from "./api.ts";
 import { pointsTransfer, underwayTransfer } from "./underwayEngine.ts";
 import { browserResultCache } from "./resultCache.ts";
-import { demoJob, EARLY_DEMO_FRAGMENT } from "./earlyJob.ts";
+import { demoJob, EARLY_DEMO_MESSAGE } from "./earlyJob.ts";
 import { readDemoFiles } from "./demoFiles.ts";
 
 const api = createWorkerApi(browserResultCache());
 
-// A first visit (the built page's head script started this worker with the demo fragment, see
-// dashboard/sharedWorker.ts): begin the demo's job now, while the page's main bundle loads; the page's
-// same job attaches to it (earlyJob.ts). Read from the worker's own URL, not a message: a message
-// posted before a module worker has run reaches it only when the page's main thread is free again.
-if (self.location.hash === EARLY_DEMO_FRAGMENT) {
+// A first visit (the built page's head script says so, dashboard/sharedWorker.ts): begin the demo's
+// job now, while the page's main bundle loads; the page's same job attaches to it (earlyJob.ts).
+// Registered before Comlink's listener, which never sees this message.
+self.addEventListener("message", (event: MessageEvent) => {
+  const data: unknown = event.data;
+  if (typeof data !== "object" || data === null || !(EARLY_DEMO_MESSAGE in data)) return;
+  event.stopImmediatePropagation();
   void readDemoFiles({ basemap: false }).then(
     (bundle) => {
       if (bundle.surveys.length > 0) api.startEarly(demoJob(bundle));
     },
     () => undefined,
   );
-}
+});
 
 expose({
   ...api,

@@ -1,8 +1,8 @@
 /**
  * The cold start's first job, begun by the analysis worker itself. At a first visit (no saved
  * workspace) the page always starts with the demo's job; the built page's head script, which starts
- * the worker before the main bundle is fetched (dashboard/sharedWorker.ts), tells it so in the
- * worker's URL (a fragment), and the worker reads the demo's files and begins that job at once, while the main bundle
+ * the worker before the main bundle is fetched (dashboard/sharedWorker.ts), tells it so with one
+ * message, and the worker reads the demo's files and begins that job at once, while the main bundle
  * loads. The page's own job, when it comes, attaches to it if it is the same job (`sameJob`):
  * same files, same settings, same survey first; any other job supersedes it as usual. The numbers
  * come from the one analysis path either way; only the start moves earlier.
@@ -11,8 +11,8 @@ import type { AnalysisJob } from "./protocol.ts";
 import type { DemoBundle } from "./demoFiles.ts";
 import { defaultAnalysisSettings } from "./defaultSettings.ts";
 
-/** The fragment of the worker URL the head script starts the early worker with at a first visit. */
-export const EARLY_DEMO_FRAGMENT = "#demo";
+/** The message (its one key) the head script posts to the early worker at a first visit. */
+export const EARLY_DEMO_MESSAGE = "bracklineEarlyDemo";
 
 /** The job a first visit's page sends (SavedWorkspace.startDemo → AppState.load → run): the demo's files, default settings, survey 0 first. */
 export function demoJob(bundle: Pick<DemoBundle, "surveys" | "centerline">): AnalysisJob {
