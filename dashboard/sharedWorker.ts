@@ -1,7 +1,5 @@
 import { fileURLToPath } from "node:url";
 import type { Plugin } from "vite";
-import { SAVED_HINT } from "./src/state/savedHint.ts";
-import { EARLY_DEMO_MESSAGE } from "./src/worker/earlyJob.ts";
 
 const workerDir = fileURLToPath(new URL("./src/worker/", import.meta.url));
 /** The analysis worker's entry module. */
@@ -32,7 +30,6 @@ export function sharedAnalysisWorker(): Plugin {
     // The built page starts the analysis worker from a one-line script at the top of its head, before
     // the main bundle (~1.3 MB) is fetched, parsed and run: the worker's own ~0.5 MB load, parse and
     // evaluate in parallel instead of after it; startWorker (src/worker/client.ts) adopts that worker.
-    // At a first visit it also tells the worker to begin the demo's job (src/worker/earlyJob.ts).
     transformIndexHtml: {
       order: "post",
       handler(_html, ctx) {
@@ -41,18 +38,13 @@ export function sharedAnalysisWorker(): Plugin {
         );
         if (!entry) return [];
         const url = JSON.stringify(`./${entry.fileName}`);
-        // At a first visit (no saved-workspace hint) the page starts with the demo: the worker is told
-        // to begin that job at once (src/worker/earlyJob.ts); `demo` says it was told.
-        const hint = JSON.stringify(SAVED_HINT);
-        const message = JSON.stringify({ [EARLY_DEMO_MESSAGE]: true });
         return [
           {
             tag: "script",
             children:
               `(()=>{try{const w=new Worker(${url},{type:"module",name:"brackline-analysis"});const errors=[];` +
-              `w.addEventListener("error",(e)=>errors.push(e));let demo=false;` +
-              `try{demo=localStorage.getItem(${hint})===null}catch{}if(demo)w.postMessage(${message});` +
-              `window.__bracklineEarlyWorker={worker:w,url:new URL(${url},document.baseURI).href,errors,demo}}catch{}})();`,
+              `w.addEventListener("error",(e)=>errors.push(e));` +
+              `window.__bracklineEarlyWorker={worker:w,url:new URL(${url},document.baseURI).href,errors}}catch{}})();`,
             injectTo: "head" as const,
           },
         ];

@@ -6,7 +6,6 @@ import type { CarbonateEndmember } from "../../../analysis/index.ts";
 
 import type { AnalysisSettings, ConstituentOverrides } from "../worker/protocol.ts";
 import type { ArchiveChoices } from "../archive/archiveChoices.ts";
-import { defaultAnalysisSettings } from "../worker/defaultSettings.ts";
 
 export type { AnalysisSettings, ConstituentOverrides, EndmemberOverride } from "../worker/protocol.ts";
 
@@ -27,7 +26,13 @@ export class Settings {
   /** Carbonate end-members for the expected-pH curve; undefined until the user gives them (or the demo runs). */
   carbonate = $state.raw<CarbonateSetting | undefined>(undefined);
   /** Analysis settings; replaced whole so the worker gets a plain object. */
-  analysis = $state.raw<AnalysisSettings>(defaultAnalysisSettings());
+  analysis = $state.raw<AnalysisSettings>({
+    endmemberOverrides: {},
+    precisionPercent: {},
+    riverDischargeM3s: undefined,
+    constantSet: "default",
+    saltIntrusionSalinity: 2,
+  });
   /** Archive view: the user's seasons and discharge table (not part of the per-survey analysis). */
   archive = $state.raw<ArchiveChoices>({});
   /** Colour stations by salinity or by deviation from the dilution line. */

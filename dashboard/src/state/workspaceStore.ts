@@ -4,11 +4,12 @@
  * restore goes through the same validation and migration as "Open workspace".
  */
 import { openDB, type IDBPDatabase } from "idb";
-import { SAVED_HINT } from "./savedHint.ts";
 
 const DB_NAME = "brackline";
 const STORE = "workspace";
 const KEY = "current";
+/** localStorage key set while IndexedDB holds a saved workspace (a hint; IndexedDB stays the record). */
+const SAVED_HINT = "brackline.workspace.saved";
 
 function hint(): Storage | undefined {
   try {

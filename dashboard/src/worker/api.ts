@@ -31,7 +31,6 @@ import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
 import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
 import { archiveOf, type ArchiveAnswer } from "./archive.ts";
 import type { CachedAnalysis, ResultCache } from "./resultCache.ts";
-import { sameJob } from "./earlyJob.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -67,18 +66,6 @@ function compareAll(analyses: ReadonlyArray<AnalysisResult | undefined>): Compar
   } catch (error) {
     return { type: "comparison", reason: `The surveys could not be compared: ${messageOf(error)}` };
   }
-}
-
-/** A job the worker began before the page asked for it (`startEarly`). */
-interface EarlyRun {
-  job: AnalysisJob;
-  /** Its run number (superseded once another job runs). */
-  run: number;
-  /** Events reported before the page's same job attached. */
-  events: AnalysisEvent[];
-  /** The page's listener, once attached. */
-  listener?: (e: AnalysisEvent) => void;
-  done: Promise<void>;
 }
 
 /**
@@ -230,92 +217,57 @@ export function createWorkerApi(cache?: ResultCache) {
     emit({ type: "done" });
   }
 
-  /**
-   * Runs one analysis job, reporting through `onEvent`: the survey `job.firstSurvey` (the one
-   * on screen) first, then the others. A newer call supersedes this one: its remaining surveys
-   * are not analysed (the promise still resolves).
-   */
-  async function runJob(job: AnalysisJob, onEvent: (event: AnalysisEvent) => void): Promise<void> {
-    const run = ++latestRun;
-    const emit = (e: AnalysisEvent) => {
-      if (run === latestRun) onEvent(e);
-    };
-    try {
-      if (job.kind === "load") {
-        emit({ type: "progress", stage: "Reading files", done: 0, total: 1 });
-        await yieldToQueue();
-        const read = readFiles(job.surveys, job.centerline, (fraction) =>
-          emit({ type: "progress", stage: "Reading files", done: Math.round(fraction * 100), total: 100 }),
-        );
-        useInputs(read, job.centerline, emit);
-        files = job.surveys;
-      } else if (job.kind === "setSurveys") {
-        useInputs(inputsOf(job.surveys, job.centerline, job.settings.mouth), job.centerline, emit);
-        files = [];
-      } else if (job.kind === "centerline") {
-        const next = inputsOf(inputs.surveys, job.centerline, job.settings.mouth);
-        const oldLine = centerlineFile?.name;
-        next.issues = [...inputs.issues.filter((i) => i.file !== oldLine), ...next.issues];
-        useInputs({ ...next, files: inputs.files, summary: inputs.summary }, job.centerline, emit);
-      }
-      const mouthChanged =
-        job.kind === "analyze" && (centerlineFile || inputs.channel) && job.settings.mouth !== inputs.choices.mouth;
-      if (mouthChanged) {
-        // Another mouth: the channel is re-read from the held centerline file, the km change.
-        const next = inputsOf(inputs.surveys, centerlineFile, job.settings.mouth);
-        useInputs({ ...next, files: inputs.files, summary: inputs.summary }, centerlineFile, emit);
-      }
-      if (job.kind !== "analyze" || mouthChanged) {
-        analyses = inputs.surveys.map(() => undefined);
-        emit({
-          type: "loaded",
-          surveys: inputs.surveys,
-          issues: inputs.issues,
-          channel,
-          notices: inputs.notices,
-          ...(inputs.offeredCenterline ? { offeredCenterline: inputs.offeredCenterline as object } : {}),
-        });
-      }
-      await analyseAll(run, job.settings, emit, job.firstSurvey ?? 0, job.firstSurvey !== undefined, job.firstParts);
-    } catch (error) {
-      emit({ type: "error", message: messageOf(error) });
-    }
-  }
-
-  /**
-   * The job this worker began on its own at the cold start (`startEarly`): its run number, the
-   * events it reported before the page's same job attached, and the page's listener once attached.
-   */
-  let early: EarlyRun | undefined;
-
   return {
     /**
-     * Runs one analysis job (see `runJob`). When it is the job this worker began on its own at the
-     * cold start (`startEarly`) and no other job came between, it attaches to that run instead: the
-     * events reported so far are replayed to `onEvent` in order, and the later ones go to it.
+     * Runs one analysis job, reporting through `onEvent`: the survey `job.firstSurvey` (the one
+     * on screen) first, then the others. A newer call supersedes this one: its remaining surveys
+     * are not analysed (the promise still resolves).
      */
-    run(job: AnalysisJob, onEvent: (event: AnalysisEvent) => void): Promise<void> {
-      const begun = early;
-      early = undefined;
-      if (begun && begun.run === latestRun && sameJob(begun.job, job)) {
-        begun.listener = onEvent;
-        for (const event of begun.events.splice(0)) onEvent(event);
-        return begun.done;
+    async run(job: AnalysisJob, onEvent: (event: AnalysisEvent) => void): Promise<void> {
+      const run = ++latestRun;
+      const emit = (e: AnalysisEvent) => {
+        if (run === latestRun) onEvent(e);
+      };
+      try {
+        if (job.kind === "load") {
+          emit({ type: "progress", stage: "Reading files", done: 0, total: 1 });
+          await yieldToQueue();
+          const read = readFiles(job.surveys, job.centerline, (fraction) =>
+            emit({ type: "progress", stage: "Reading files", done: Math.round(fraction * 100), total: 100 }),
+          );
+          useInputs(read, job.centerline, emit);
+          files = job.surveys;
+        } else if (job.kind === "setSurveys") {
+          useInputs(inputsOf(job.surveys, job.centerline, job.settings.mouth), job.centerline, emit);
+          files = [];
+        } else if (job.kind === "centerline") {
+          const next = inputsOf(inputs.surveys, job.centerline, job.settings.mouth);
+          const oldLine = centerlineFile?.name;
+          next.issues = [...inputs.issues.filter((i) => i.file !== oldLine), ...next.issues];
+          useInputs({ ...next, files: inputs.files, summary: inputs.summary }, job.centerline, emit);
+        }
+        const mouthChanged =
+          job.kind === "analyze" && (centerlineFile || inputs.channel) && job.settings.mouth !== inputs.choices.mouth;
+        if (mouthChanged) {
+          // Another mouth: the channel is re-read from the held centerline file, the km change.
+          const next = inputsOf(inputs.surveys, centerlineFile, job.settings.mouth);
+          useInputs({ ...next, files: inputs.files, summary: inputs.summary }, centerlineFile, emit);
+        }
+        if (job.kind !== "analyze" || mouthChanged) {
+          analyses = inputs.surveys.map(() => undefined);
+          emit({
+            type: "loaded",
+            surveys: inputs.surveys,
+            issues: inputs.issues,
+            channel,
+            notices: inputs.notices,
+            ...(inputs.offeredCenterline ? { offeredCenterline: inputs.offeredCenterline as object } : {}),
+          });
+        }
+        await analyseAll(run, job.settings, emit, job.firstSurvey ?? 0, job.firstSurvey !== undefined, job.firstParts);
+      } catch (error) {
+        emit({ type: "error", message: messageOf(error) });
       }
-      return runJob(job, onEvent);
-    },
-
-    /**
-     * Begins `job` before the page asks for it (the demo at a first visit, earlyJob.ts), holding its
-     * events until the page's `run` of the same job attaches. Ignored once any job has run.
-     */
-    startEarly(job: AnalysisJob): void {
-      if (latestRun !== 0 || early) return;
-      const events: AnalysisEvent[] = [];
-      const begun: EarlyRun = { job, run: 0, events, done: Promise.resolve() };
-      begun.done = runJob(job, (event) => (begun.listener ? begun.listener(event) : events.push(event)));
-      begun.run = latestRun;
-      early = begun;
     },
 
     /**

@@ -23,20 +23,6 @@ interface EarlyWorker {
   url: string;
   /** Error events it fired before it was adopted. */
   errors: ErrorEvent[];
-  /** Whether it was told to begin the demo's job (a first visit, worker/earlyJob.ts). */
-  demo?: boolean;
-}
-
-/** Whether the early worker was told to begin the demo's job itself. */
-let earlyDemo = false;
-
-/**
- * True when the analysis worker the page's head started is already analysing the demo (a first
- * visit): the page's demo job attaches to that run, so no partner worker should split it.
- */
-export function workerBeganDemo(): boolean {
-  const g = globalThis as { __bracklineEarlyWorker?: EarlyWorker };
-  return earlyDemo || g.__bracklineEarlyWorker?.demo === true;
 }
 
 /** The early-started analysis worker, once: for the first "brackline-analysis" started from the same URL. */
@@ -45,7 +31,6 @@ function adoptEarlyWorker(name: string): EarlyWorker | undefined {
   const early = g.__bracklineEarlyWorker;
   if (!early || name !== "brackline-analysis" || early.url !== analysisWorkerUrl) return undefined;
   delete g.__bracklineEarlyWorker;
-  earlyDemo = early.demo === true;
   return early;
 }
 
