@@ -101,6 +101,7 @@ try {
       ],
     });
   page.on("console", (m) => console.log("console:", m.text()));
+  page.on("worker", (w) => w.on("console", (m) => console.log("worker console:", m.text())));
   await page.addInitScript({ content: INIT });
   const cpuOut = process.argv.includes("--cpu-out") ? process.argv[process.argv.indexOf("--cpu-out") + 1]! : undefined;
   const cdp = cpuOut ? await context.newCDPSession(page) : undefined;
