@@ -59,6 +59,17 @@ export function colourValue(data: MapData, s: MapStation): number | undefined {
   return data.colouring === "deviation" ? s.deviation : s.salinity;
 }
 
+/** A station's fill: the colour scale's colour of its value, faded when the station is off the channel. */
+export function stationFillRgba(data: MapData, s: MapStation, scale: ColourScale): RGBA {
+  const [r, g, b, a] = scale.rgba(colourValue(data, s));
+  return [r, g, b, s.offChannel ? OFF_CHANNEL_ALPHA : a];
+}
+
+/** A station's ring colour: dark when selected, hovered or off the channel, otherwise white. */
+export function stationRingRgba(s: MapStation, selected: ReadonlySet<string>, hovered: string | null): RGBA {
+  return selected.has(s.id) || s.id === hovered || s.offChannel ? INK : WHITE_RING;
+}
+
 /**
  * The station points (fill colour precomputed) and, for the selected stations with a nearest channel
  * point, their projection lines, as features of the overlay source.
@@ -77,7 +88,6 @@ export function stationFeatures(
   const lines: Feature<LineString, ProjectionProps>[] = [];
   const points: Feature<Point, StationProps>[] = [];
   for (const s of stations) {
-    const [r, g, b, a] = scale.rgba(colourValue(data, s));
     const isSelected = selected.has(s.id);
     if (isSelected && s.nearestLonLat)
       lines.push({
@@ -91,7 +101,7 @@ export function stationFeatures(
       properties: {
         kind: "station-mark",
         sid: s.id,
-        fill: cssRgba([r, g, b, s.offChannel ? OFF_CHANNEL_ALPHA : a]),
+        fill: cssRgba(stationFillRgba(data, s, scale)),
         off: Boolean(s.offChannel),
         selected: isSelected,
       },
