@@ -11,7 +11,7 @@ import type { Feature, FeatureCollection, LineString, Point } from "geojson";
 import type { LayerSpecification } from "maplibre-gl";
 import type { MapData } from "./mapData.ts";
 import type { LonLat } from "../worker/overlay.ts";
-import { ADDITION_CSS, ADDITION_DARK_CSS, REMOVAL_CSS, toRgba, type RGBA } from "./colour.ts";
+import { ADDITION_CSS, ADDITION_DARK_CSS, REMOVAL_CSS, cssRgba, toRgba } from "./colour.ts";
 import { LABEL_SOURCE } from "./labels.ts";
 
 /** GeoJSON source of every mark: the overlay labels' (its label kinds and these kinds are distinct). */
@@ -43,14 +43,13 @@ interface MarkProps {
   major?: boolean;
 }
 
-const css = ([r, g, b, a]: RGBA): string => `rgba(${r}, ${g}, ${b}, ${(a / 255).toFixed(3)})`;
-export const CHANNEL_CSS = css([52, 84, 102, 230]);
-const REMOVAL_ZONE_CSS = css(toRgba(REMOVAL_CSS, 140));
-const ADDITION_ZONE_CSS = css(toRgba(ADDITION_CSS, 140));
-const MAXIMUM_CSS = css(toRgba(ADDITION_DARK_CSS, 255));
-const HALO_CSS = css([250, 250, 247, 235]);
-const ISOHALINE_CSS = css([20, 110, 140, 255]);
-const BRUSH_CSS = css([40, 40, 40, 110]);
+export const CHANNEL_CSS = cssRgba([52, 84, 102, 230]);
+const REMOVAL_ZONE_CSS = cssRgba(toRgba(REMOVAL_CSS, 140));
+const ADDITION_ZONE_CSS = cssRgba(toRgba(ADDITION_CSS, 140));
+const MAXIMUM_CSS = cssRgba(toRgba(ADDITION_DARK_CSS, 255));
+const HALO_CSS = cssRgba([250, 250, 247, 235]);
+const ISOHALINE_CSS = cssRgba([20, 110, 140, 255]);
+const BRUSH_CSS = cssRgba([40, 40, 40, 110]);
 
 function line(kind: MarkKind, path: LonLat[]): Feature<LineString, MarkProps> {
   return { type: "Feature", geometry: { type: "LineString", coordinates: path }, properties: { kind } };

@@ -17,7 +17,7 @@
 import type { Feature, LineString, Point } from "geojson";
 import type { ExpressionSpecification, LayerSpecification } from "maplibre-gl";
 import type { MapData, MapStation } from "./mapData.ts";
-import type { ColourScale, RGBA } from "./colour.ts";
+import { cssRgba, type ColourScale, type RGBA } from "./colour.ts";
 import { LABEL_SOURCE, stationRadiusPx } from "./labels.ts";
 
 /** Dark ink of the selected, hovered and off-channel rings and of the projection lines. */
@@ -51,8 +51,6 @@ interface ProjectionProps {
 /** Alpha (0–255) of an off-channel station's fill. */
 const OFF_CHANNEL_ALPHA = 70;
 const WHITE_RING: RGBA = [255, 255, 255, 220];
-
-export const cssRgba = ([r, g, b, a]: RGBA): string => `rgba(${r}, ${g}, ${b}, ${Number((a / 255).toFixed(3))})`;
 
 /** The value a station is coloured by (salinity or deviation from the dilution line). */
 export function colourValue(data: MapData, s: MapStation): number | undefined {
