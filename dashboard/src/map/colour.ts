@@ -36,6 +36,11 @@ export function toRgba(css: string, alpha = 235): RGBA {
   return c ? [Math.round(c.r), Math.round(c.g), Math.round(c.b), alpha] : NO_VALUE;
 }
 
+/** An RGBA colour (alpha 0–255) as a CSS `rgba()` colour, for MapLibre paint properties. */
+export function cssRgba([r, g, b, a]: RGBA): string {
+  return `rgba(${r}, ${g}, ${b}, ${Number((a / 255).toFixed(3))})`;
+}
+
 function formatTick(value: number): string {
   const abs = Math.abs(value);
   if (abs === 0) return "0";

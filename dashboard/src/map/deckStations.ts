@@ -10,7 +10,7 @@ import { LineLayer, ScatterplotLayer } from "@deck.gl/layers";
 import type { MapData, MapStation } from "./mapData.ts";
 import type { ColourScale } from "./colour.ts";
 import { stationRadiusPx } from "./labels.ts";
-import { INK, colourValue, stationRingPx } from "./stations.ts";
+import { INK, stationFillRgba, stationRingPx, stationRingRgba } from "./stations.ts";
 
 /** What the station layers are drawn from (as MapView holds it). */
 export interface StationLayerState {
@@ -24,12 +24,6 @@ export interface StationLayerState {
 export function deckStationLayers({ data, stations, scale, selected, hovered }: StationLayerState): Layer[] {
   const layers: Layer[] = [];
   const selectedStations = stations.filter((s) => selected.has(s.id));
-  const fade = (c: number[], off: boolean | undefined): [number, number, number, number] => [
-    c[0] ?? 0,
-    c[1] ?? 0,
-    c[2] ?? 0,
-    off ? 70 : (c[3] ?? 255),
-  ];
   const projected = selectedStations.filter((s) => s.nearestLonLat !== undefined);
   // Only with a selection: an empty layer still builds its shader program (software WebGL at the cold start).
   if (projected.length > 0)
@@ -52,9 +46,9 @@ export function deckStationLayers({ data, stations, scale, selected, hovered }: 
       getRadius: (s) => stationRadiusPx(s, selected, hovered),
       radiusUnits: "pixels",
       stroked: true,
-      // Off-channel stations (left out of the fits): faded fill in a dark ring, so they read as set apart.
-      getFillColor: (s) => fade(scale.rgba(colourValue(data, s)), s.offChannel),
-      getLineColor: (s) => (selected.has(s.id) || s.id === hovered || s.offChannel ? INK : [255, 255, 255, 220]),
+      // The same fill and ring as MapLibre's station layer (stations.ts).
+      getFillColor: (s) => stationFillRgba(data, s, scale),
+      getLineColor: (s) => stationRingRgba(s, selected, hovered),
       getLineWidth: (s) => stationRingPx(s, selected, hovered),
       lineWidthUnits: "pixels",
       updateTriggers: {

@@ -5,13 +5,13 @@
  * set of tile loads, so fewer frames, when an analysis changes both). MapLibre's line and circle programs are the ones the basemap
  * already uses (shoreline, place dots); a deck.gl layer type costs software WebGL (SwiftShader) one
  * large shader program to compile at the cold start (PathLayer alone ~1 s of CPU on the bench machine,
- * bench/profile/bareVariants.ts). deck.gl keeps what is picked or per-station (layers.ts).
+ * bench/profile/bareVariants.ts). The stations are MapLibre layers of the same source too (stations.ts).
  */
 import type { Feature, FeatureCollection, LineString, Point } from "geojson";
 import type { LayerSpecification } from "maplibre-gl";
 import type { MapData } from "./mapData.ts";
 import type { LonLat } from "../worker/overlay.ts";
-import { ADDITION_CSS, ADDITION_DARK_CSS, REMOVAL_CSS, toRgba, type RGBA } from "./colour.ts";
+import { ADDITION_CSS, ADDITION_DARK_CSS, REMOVAL_CSS, cssRgba, toRgba } from "./colour.ts";
 import { LABEL_SOURCE } from "./labels.ts";
 
 /** GeoJSON source of every mark: the overlay labels' (its label kinds and these kinds are distinct). */
@@ -43,14 +43,13 @@ interface MarkProps {
   major?: boolean;
 }
 
-const css = ([r, g, b, a]: RGBA): string => `rgba(${r}, ${g}, ${b}, ${(a / 255).toFixed(3)})`;
-export const CHANNEL_CSS = css([52, 84, 102, 230]);
-const REMOVAL_ZONE_CSS = css(toRgba(REMOVAL_CSS, 140));
-const ADDITION_ZONE_CSS = css(toRgba(ADDITION_CSS, 140));
-const MAXIMUM_CSS = css(toRgba(ADDITION_DARK_CSS, 255));
-const HALO_CSS = css([250, 250, 247, 235]);
-const ISOHALINE_CSS = css([20, 110, 140, 255]);
-const BRUSH_CSS = css([40, 40, 40, 110]);
+export const CHANNEL_CSS = cssRgba([52, 84, 102, 230]);
+const REMOVAL_ZONE_CSS = cssRgba(toRgba(REMOVAL_CSS, 140));
+const ADDITION_ZONE_CSS = cssRgba(toRgba(ADDITION_CSS, 140));
+const MAXIMUM_CSS = cssRgba(toRgba(ADDITION_DARK_CSS, 255));
+const HALO_CSS = cssRgba([250, 250, 247, 235]);
+const ISOHALINE_CSS = cssRgba([20, 110, 140, 255]);
+const BRUSH_CSS = cssRgba([40, 40, 40, 110]);
 
 function line(kind: MarkKind, path: LonLat[]): Feature<LineString, MarkProps> {
   return { type: "Feature", geometry: { type: "LineString", coordinates: path }, properties: { kind } };
@@ -85,55 +84,38 @@ export function markFeatures(data: MapData): FeatureCollection<LineString | Poin
 
 const isKind = (kind: MarkKind) => ["==", ["get", "kind"], kind] as ["==", ["get", string], string];
 
+/** A line layer of one mark kind, with constant colour and width [px]. */
+function lineLayer(id: string, kind: MarkKind, colour: string, widthPx: number, round: boolean): LayerSpecification {
+  return {
+    id,
+    type: "line",
+    source: MARK_SOURCE,
+    filter: isKind(kind),
+    layout: round ? { "line-cap": "round", "line-join": "round" } : { "line-join": "round" },
+    paint: { "line-color": colour, "line-width": widthPx },
+  };
+}
+
+/** A circle layer of the km ticks, minor or major, with constant radius [px]. */
+function tickLayer(id: string, major: boolean, radiusPx: number): LayerSpecification {
+  return {
+    id,
+    type: "circle",
+    source: MARK_SOURCE,
+    filter: ["all", isKind("tick"), [major ? "==" : "!=", ["get", "major"], true]],
+    paint: { "circle-radius": radiusPx, "circle-color": CHANNEL_CSS },
+  };
+}
+
 /** The mark layers, lowest first (append after the basemap's layers, before the labels). */
 export function markLayers(): LayerSpecification[] {
   return [
-    {
-      id: MARK_LAYERS.zone,
-      type: "line",
-      source: MARK_SOURCE,
-      filter: isKind("zone-removal"),
-      layout: { "line-cap": "round", "line-join": "round" },
-      paint: { "line-color": REMOVAL_ZONE_CSS, "line-width": 14 },
-    },
-    {
-      id: MARK_LAYERS.zoneAddition,
-      type: "line",
-      source: MARK_SOURCE,
-      filter: isKind("zone-addition"),
-      layout: { "line-cap": "round", "line-join": "round" },
-      paint: { "line-color": ADDITION_ZONE_CSS, "line-width": 14 },
-    },
-    {
-      id: MARK_LAYERS.brush,
-      type: "line",
-      source: MARK_SOURCE,
-      filter: isKind("brush"),
-      layout: { "line-cap": "round", "line-join": "round" },
-      paint: { "line-color": BRUSH_CSS, "line-width": 22 },
-    },
-    {
-      id: MARK_LAYERS.channel,
-      type: "line",
-      source: MARK_SOURCE,
-      filter: isKind("channel"),
-      layout: { "line-join": "round" },
-      paint: { "line-color": CHANNEL_CSS, "line-width": 2.5 },
-    },
-    {
-      id: MARK_LAYERS.ticks,
-      type: "circle",
-      source: MARK_SOURCE,
-      filter: ["all", isKind("tick"), ["!=", ["get", "major"], true]],
-      paint: { "circle-radius": 2, "circle-color": CHANNEL_CSS },
-    },
-    {
-      id: MARK_LAYERS.ticksMajor,
-      type: "circle",
-      source: MARK_SOURCE,
-      filter: ["all", isKind("tick"), ["==", ["get", "major"], true]],
-      paint: { "circle-radius": 3.5, "circle-color": CHANNEL_CSS },
-    },
+    lineLayer(MARK_LAYERS.zone, "zone-removal", REMOVAL_ZONE_CSS, 14, true),
+    lineLayer(MARK_LAYERS.zoneAddition, "zone-addition", ADDITION_ZONE_CSS, 14, true),
+    lineLayer(MARK_LAYERS.brush, "brush", BRUSH_CSS, 22, true),
+    lineLayer(MARK_LAYERS.channel, "channel", CHANNEL_CSS, 2.5, false),
+    tickLayer(MARK_LAYERS.ticks, false, 2),
+    tickLayer(MARK_LAYERS.ticksMajor, true, 3.5),
     {
       id: MARK_LAYERS.isohalines,
       type: "circle",

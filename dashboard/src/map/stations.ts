@@ -17,7 +17,7 @@
 import type { Feature, LineString, Point } from "geojson";
 import type { ExpressionSpecification, LayerSpecification } from "maplibre-gl";
 import type { MapData, MapStation } from "./mapData.ts";
-import type { ColourScale, RGBA } from "./colour.ts";
+import { cssRgba, type ColourScale, type RGBA } from "./colour.ts";
 import { LABEL_SOURCE, stationRadiusPx } from "./labels.ts";
 
 /** Dark ink of the selected, hovered and off-channel rings and of the projection lines. */
@@ -52,11 +52,20 @@ interface ProjectionProps {
 const OFF_CHANNEL_ALPHA = 70;
 const WHITE_RING: RGBA = [255, 255, 255, 220];
 
-export const cssRgba = ([r, g, b, a]: RGBA): string => `rgba(${r}, ${g}, ${b}, ${Number((a / 255).toFixed(3))})`;
-
 /** The value a station is coloured by (salinity or deviation from the dilution line). */
 export function colourValue(data: MapData, s: MapStation): number | undefined {
   return data.colouring === "deviation" ? s.deviation : s.salinity;
+}
+
+/** A station's fill: the colour scale's colour of its value, faded when the station is off the channel. */
+export function stationFillRgba(data: MapData, s: MapStation, scale: ColourScale): RGBA {
+  const [r, g, b, a] = scale.rgba(colourValue(data, s));
+  return [r, g, b, s.offChannel ? OFF_CHANNEL_ALPHA : a];
+}
+
+/** A station's ring colour: dark when selected, hovered or off the channel, otherwise white. */
+export function stationRingRgba(s: MapStation, selected: ReadonlySet<string>, hovered: string | null): RGBA {
+  return selected.has(s.id) || s.id === hovered || s.offChannel ? INK : WHITE_RING;
 }
 
 /**
@@ -77,7 +86,6 @@ export function stationFeatures(
   const lines: Feature<LineString, ProjectionProps>[] = [];
   const points: Feature<Point, StationProps>[] = [];
   for (const s of stations) {
-    const [r, g, b, a] = scale.rgba(colourValue(data, s));
     const isSelected = selected.has(s.id);
     if (isSelected && s.nearestLonLat)
       lines.push({
@@ -91,7 +99,7 @@ export function stationFeatures(
       properties: {
         kind: "station-mark",
         sid: s.id,
-        fill: cssRgba([r, g, b, s.offChannel ? OFF_CHANNEL_ALPHA : a]),
+        fill: cssRgba(stationFillRgba(data, s, scale)),
         off: Boolean(s.offChannel),
         selected: isSelected,
       },
