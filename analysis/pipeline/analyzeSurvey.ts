@@ -52,7 +52,7 @@ export interface AnalyzeSurveyOptions {
   constituents?: string[];
   /**
    * Only this part of the constituents (split by {@link constituentPartOf}, the number of accepted
-   * samples as cost): parts analysed apart and merged in survey order equal the whole analysis.
+   * samples as cost, or named): parts analysed apart and merged in survey order equal the whole analysis.
    */
   part?: ConstituentPart;
   /** Settings by constituent name. */
@@ -155,13 +155,7 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
   const isTracer = (c: Survey["constituents"][number]): boolean => c.kind !== "nonMixing" || asTracer.has(c.name);
   const listed = options.constituents ?? survey.constituents.filter(isTracer).map((c) => c.name);
   const part = options.part;
-  const partOf = part
-    ? constituentPartOf(
-        listed.map((name) => constituentSamples(survey.stations, name).samples.length),
-        part.count,
-      )
-    : undefined;
-  const wanted = partOf ? listed.filter((_, i) => partOf[i] === part!.index) : listed;
+  const wanted = constituentsOfPart(survey, listed, part);
   const variables = survey.constituents
     .filter((c) => !isTracer(c) && (options.constituents === undefined || !listed.includes(c.name)))
     .map((c) => alongChannelSeries(survey, c.name, placements));
@@ -220,4 +214,15 @@ export function analyzeSurvey(survey: Survey, options: AnalyzeSurveyOptions = {}
     warnings,
     caution: SCREENING_CAUTION,
   };
+}
+
+/** The constituents of `listed` that `part` analyses, in list order (all of them without a part). */
+function constituentsOfPart(survey: Survey, listed: readonly string[], part: ConstituentPart | undefined): string[] {
+  if (!part) return [...listed];
+  if ("names" in part) return listed.filter((name) => part.names.includes(name));
+  const partOf = constituentPartOf(
+    listed.map((name) => constituentSamples(survey.stations, name).samples.length),
+    part.count,
+  );
+  return listed.filter((_, i) => partOf[i] === part.index);
 }

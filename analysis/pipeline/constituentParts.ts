@@ -5,13 +5,22 @@
  * seed, so the merged parts equal the whole analysis.
  */
 
-/** Which part of a survey's constituents one analysis computes. */
-export interface ConstituentPart {
-  /** This part, 0 ≤ index < count. */
-  index: number;
-  /** How many parts the constituents are split into (≥ 1). */
-  count: number;
-}
+/**
+ * Which part of a survey's constituents one analysis computes: part `index` of `count` parts of about
+ * equal work ({@link constituentPartOf}), or the constituents named (e.g. the one on screen first,
+ * then the others).
+ */
+export type ConstituentPart =
+  | {
+      /** This part, 0 ≤ index < count. */
+      index: number;
+      /** How many parts the constituents are split into (≥ 1). */
+      count: number;
+    }
+  | {
+      /** The constituents of this part, by name (names the survey does not analyse are left out). */
+      names: readonly string[];
+    };
 
 /**
  * Assigns constituents to `count` parts by greedy longest-processing-time scheduling on a cost

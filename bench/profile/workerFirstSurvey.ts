@@ -20,6 +20,8 @@ const job: AnalysisJob = {
     saltIntrusionSalinity: 2,
   },
   firstSurvey: 0,
+  // The selection's default constituent: its map marks are posted first (an "overlay" event).
+  firstConstituent: "Fe",
 };
 const api = createWorkerApi();
 const t0 = performance.now();

@@ -13,14 +13,16 @@ const sent = new WeakMap<GeoJSONSource, string>();
  * @param map the map
  * @param id the GeoJSON source's id (nothing happens while the style has no such source)
  * @param data the feature collection to show
+ * @param beforeSend called just before the data are sent (not when they are skipped)
  * @returns true when the data were sent to the source
  */
-export function setSourceData(map: MapLibreMap, id: string, data: FeatureCollection): boolean {
+export function setSourceData(map: MapLibreMap, id: string, data: FeatureCollection, beforeSend?: () => void): boolean {
   const source = map.getSource(id) as GeoJSONSource | undefined;
   if (!source) return false;
   const text = JSON.stringify(data);
   if (sent.get(source) === text) return false;
   sent.set(source, text);
+  beforeSend?.();
   source.setData(data);
   return true;
 }

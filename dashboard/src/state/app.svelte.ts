@@ -24,6 +24,7 @@ import { deviationsById, placementsById } from "../lib/analysisView.ts";
 import { withObservations } from "../panels/lib/observations.ts";
 import type { SurveyAnalysisView } from "../panels/lib/types.ts";
 import type { SurveyComparison } from "../../../analysis/index.ts";
+import { shownConstituent } from "../worker/shownConstituent.ts";
 
 /** What the root needs from outside: where to keep the workspace and how to start a worker. */
 export interface AppOptions {
@@ -265,15 +266,19 @@ export class AppState {
       }
       if (event.type === "loaded") {
         if (this.selection.surveyIndex >= event.surveys.length) this.selection.surveyIndex = 0;
-        // Non-mixing variables (oxygen, chlorophyll...) are never the default constituent.
-        const names =
-          event.surveys[this.selection.surveyIndex]?.constituents
-            .filter((c) => c.kind !== "nonMixing")
-            .map((c) => c.name) ?? [];
-        if (names.length > 0 && !names.includes(this.selection.constituent)) this.selection.constituent = names[0];
+        // Non-mixing variables (oxygen, chlorophyll...) are never the default constituent (the rule
+        // the worker follows for the marks it posts first).
+        const shown = shownConstituent(
+          event.surveys[this.selection.surveyIndex]?.constituents ?? [],
+          this.selection.constituent,
+        );
+        if (shown !== undefined) this.selection.constituent = shown;
       }
     });
-    const ordered = this.#splitFirst({ ...job, firstSurvey: this.selection.surveyIndex }, id);
+    const ordered = this.#splitFirst(
+      { ...job, firstSurvey: this.selection.surveyIndex, firstConstituent: this.selection.constituent },
+      id,
+    );
     return this.#analysisApi()
       .run(ordered, onEvent)
       .catch((error: unknown) => {

@@ -76,6 +76,14 @@ export class AnalysisResults {
         this.comparison = message.comparison;
         this.comparisonReason = message.reason;
         break;
+      case "overlay": {
+        // The marks of the survey's constituent on screen, before its analysis (never over a complete one).
+        if (this.analyses[message.surveyIndex] !== undefined) break;
+        const overlays = [...this.overlays];
+        overlays[message.surveyIndex] = message.overlay;
+        this.overlays = overlays;
+        break;
+      }
       case "analysis": {
         const analyses = [...this.analyses];
         analyses[message.surveyIndex] = message.analysis;

@@ -31,6 +31,7 @@ import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
 import { speciationModel, type SpeciationModel, type SpeciationRequest } from "./speciation.ts";
 import { archiveOf, type ArchiveAnswer } from "./archive.ts";
 import type { CachedAnalysis, ResultCache } from "./resultCache.ts";
+import { shownConstituent } from "./shownConstituent.ts";
 
 /** Lets queued calls (a newer job) arrive between steps. */
 function yieldToQueue(): Promise<void> {
@@ -142,6 +143,33 @@ export function createWorkerApi(cache?: ResultCache) {
     return mergeParts(inputs, survey, [own.analysis, ...rest], own.analysis);
   }
 
+  /**
+   * Survey `index` with the constituent on screen first: that constituent is analysed and its map
+   * marks posted (an `overlay` event), then the others are analysed and the two parts merged (the same
+   * result as one run, as `mergeParts` says). Undefined when there is nothing to post first (the
+   * survey mixes no other constituent, or not this one).
+   */
+  async function analyseShownFirst(
+    run: number,
+    index: number,
+    settings: AnalysisSettings,
+    chosen: string,
+    emit: (e: AnalysisEvent) => void,
+    onStep: (fraction: number, label: string) => void,
+  ): Promise<CachedAnalysis | undefined> {
+    const survey = inputs.surveys[index];
+    const name = shownConstituent(survey.constituents, chosen);
+    const others = survey.constituents.map((c) => c.name).filter((n) => n !== name);
+    if (name === undefined || others.length === 0) return undefined;
+    const head = analyse(inputs, survey, settings, undefined, { names: [name] });
+    emit({ type: "overlay", surveyIndex: index, overlay: head.overlay });
+    // The marks leave now; a newer job may arrive meanwhile.
+    await yieldToQueue();
+    if (run !== latestRun) return undefined;
+    const rest = analyse(inputs, survey, settings, onStep, { names: others });
+    return mergeParts(inputs, survey, [head.analysis, rest.analysis], rest.analysis);
+  }
+
   /** Opens the gate of the running job's background surveys (see `resumeBackground`). */
   let openGate: (() => void) | undefined;
 
@@ -172,6 +200,7 @@ export function createWorkerApi(cache?: ResultCache) {
     first: number,
     gate: boolean,
     parts?: { count: number; token: number },
+    firstConstituent?: string,
   ) {
     const { surveys } = inputs;
     const total = surveys.length;
@@ -199,8 +228,13 @@ export function createWorkerApi(cache?: ResultCache) {
             ? await analyseInParts(run, surveys[i], settings, parts, onStep)
             : undefined;
         if (run !== latestRun) return;
+        const shown =
+          !stored && !inParts && k === 0 && firstConstituent !== undefined
+            ? await analyseShownFirst(run, i, settings, firstConstituent, emit, onStep)
+            : undefined;
+        if (run !== latestRun) return;
         const { analysis, overlay }: CachedAnalysis =
-          stored ?? inParts ?? analyse(inputs, surveys[i], settings, onStep);
+          stored ?? inParts ?? shown ?? analyse(inputs, surveys[i], settings, onStep);
         if (key && !stored) void cache!.put(key, { analysis, overlay });
         analyses[i] = analysis;
         emit({ type: "analysis", surveyIndex: i, analysis, overlay });
@@ -264,7 +298,15 @@ export function createWorkerApi(cache?: ResultCache) {
             ...(inputs.offeredCenterline ? { offeredCenterline: inputs.offeredCenterline as object } : {}),
           });
         }
-        await analyseAll(run, job.settings, emit, job.firstSurvey ?? 0, job.firstSurvey !== undefined, job.firstParts);
+        await analyseAll(
+          run,
+          job.settings,
+          emit,
+          job.firstSurvey ?? 0,
+          job.firstSurvey !== undefined,
+          job.firstParts,
+          job.firstConstituent,
+        );
       } catch (error) {
         emit({ type: "error", message: messageOf(error) });
       }

@@ -78,6 +78,12 @@ export interface JobOrder {
    * `analysePart`), or analyses them itself when they do not come; the merged result is the same.
    */
   firstParts?: { count: number; token: number };
+  /**
+   * The constituent on screen (the selection's; the survey's first mixing constituent when it lacks it,
+   * `shownConstituent`). The worker analyses it first in the first survey and posts its map marks (an
+   * `overlay` event) before the survey's other constituents, so the map tiles them with its basemap.
+   */
+  firstConstituent?: string;
 }
 
 /** One analysis job. A newer job supersedes an older one (the worker stops between surveys). */
@@ -95,6 +101,11 @@ export type AnalysisJob = JobOrder &
 
 /** What an analysis job reports while it runs, in order: loaded, progress…, analysis…, done. */
 export type AnalysisEvent =
+  /**
+   * The first survey's map marks for the constituent on screen (isohalines, its reaction zone and
+   * maximum), before the survey's whole analysis; the `analysis` event's overlay has the same marks.
+   */
+  | { type: "overlay"; surveyIndex: number; overlay: SurveyOverlay }
   /** Work in progress: `done` of `total` steps of `stage`. */
   | { type: "progress"; stage: string; done: number; total: number }
   /** Files read: surveys, problems found, and the channel drawn on the map. */

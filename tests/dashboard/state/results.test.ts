@@ -50,4 +50,20 @@ describe("AnalysisResults.receive() folds worker events into state (common pract
     expect(ws.analyses).not.toBe(before);
     expect(before).toEqual([undefined, undefined]);
   });
+
+  it("an overlay event gives a survey its marks before its analysis, and never replaces a complete one", () => {
+    const ws = new AnalysisResults();
+    const inputs = readFiles([demoFile("surveys/both-surveys.csv")], demoFile("centerline.geojson"));
+    const { surveys, issues } = inputs;
+    ws.receive({ type: "loaded", surveys, issues, channel: undefined });
+    const settings = new Settings().analysis;
+    const head = analyse(inputs, surveys[0], settings, undefined, { names: ["Fe"] });
+    ws.receive({ type: "overlay", surveyIndex: 0, overlay: head.overlay });
+    expect(ws.overlays[0]).toBe(head.overlay);
+    expect(ws.analyses[0]).toBeUndefined();
+    const whole = analyse(inputs, surveys[0], settings);
+    ws.receive({ type: "analysis", surveyIndex: 0, analysis: whole.analysis, overlay: whole.overlay });
+    ws.receive({ type: "overlay", surveyIndex: 0, overlay: head.overlay });
+    expect(ws.overlays[0]).toBe(whole.overlay);
+  });
 });
