@@ -9,42 +9,11 @@ import { describe, expect, it } from "vitest";
 import { readSurveyText } from "../../../analysis/index.ts";
 import { createWorkerApi } from "../../../dashboard/src/worker/api.ts";
 import type { AnalysisEvent, AnalysisJob } from "../../../dashboard/src/worker/protocol.ts";
-import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
+import { demoJob as job, eventsOf, runJob } from "./helpers/demoJob.ts";
 
 const demo = (p: string) => readFileSync(new URL(`../../../data-demo/${p}`, import.meta.url), "utf8");
-const job = (extra: Partial<AnalysisJob> = {}): AnalysisJob =>
-  ({
-    kind: "load",
-    surveys: [{ name: "both-surveys.csv", text: demo("surveys/both-surveys.csv") }],
-    centerline: { name: "centerline.geojson", text: demo("centerline.geojson") },
-    settings: new Settings().analysis,
-    firstSurvey: 1,
-    ...extra,
-  }) as AnalysisJob;
-
-type Analysed = Extract<AnalysisEvent, { type: "analysis" }>;
-const analysed = (es: AnalysisEvent[]) => es.filter((e): e is Analysed => e.type === "analysis");
+const analysed = (es: AnalysisEvent[]) => eventsOf(es, "analysis");
 const notProgress = (es: AnalysisEvent[]) => es.filter((e) => e.type !== "progress");
-
-/** Runs `j` on one worker API, resuming the background surveys after the first as the main thread does. */
-async function runJob(
-  j: AnalysisJob,
-  onOwnPart?: (api: ReturnType<typeof createWorkerApi>) => void,
-): Promise<AnalysisEvent[]> {
-  const api = createWorkerApi();
-  const events: AnalysisEvent[] = [];
-  let started = false;
-  await api.run(j, (e) => {
-    events.push(e);
-    // The first survey's own part has begun: the other part arrives while this worker waits for it.
-    if (!started && e.type === "progress" && e.stage.includes("mixing analysis")) {
-      started = true;
-      if (onOwnPart) setTimeout(() => onOwnPart(api), 0);
-    }
-    if (e.type === "analysis" && analysed(events).length === 1) setTimeout(() => api.resumeBackground(), 0);
-  });
-  return events;
-}
 
 describe("the first survey analysed in two parts on two workers equals the single-worker analysis", () => {
   it("part 1 from a second worker: the same events, results and comparison as one worker", async () => {

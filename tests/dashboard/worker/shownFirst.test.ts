@@ -5,37 +5,8 @@
  * change a computed value): the analysis, its overlay and the comparison equal a run without it, and
  * the marks posted first are the final overlay's. Demo data are invented.
  */
-import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { createWorkerApi } from "../../../dashboard/src/worker/api.ts";
-import type { AnalysisEvent, AnalysisJob } from "../../../dashboard/src/worker/protocol.ts";
-import { Settings } from "../../../dashboard/src/state/settings.svelte.ts";
-
-const demo = (p: string) => readFileSync(new URL(`../../../data-demo/${p}`, import.meta.url), "utf8");
-const job = (extra: Partial<AnalysisJob> = {}): AnalysisJob =>
-  ({
-    kind: "load",
-    surveys: [{ name: "both-surveys.csv", text: demo("surveys/both-surveys.csv") }],
-    centerline: { name: "centerline.geojson", text: demo("centerline.geojson") },
-    settings: new Settings().analysis,
-    firstSurvey: 1,
-    ...extra,
-  }) as AnalysisJob;
-
-type Of<T extends AnalysisEvent["type"]> = Extract<AnalysisEvent, { type: T }>;
-const ofType = <T extends AnalysisEvent["type"]>(es: AnalysisEvent[], type: T) =>
-  es.filter((e): e is Of<T> => e.type === type);
-
-/** Runs `j`, resuming the background surveys after the first analysis as the main thread does. */
-async function runJob(j: AnalysisJob): Promise<AnalysisEvent[]> {
-  const api = createWorkerApi();
-  const events: AnalysisEvent[] = [];
-  await api.run(j, (e) => {
-    events.push(e);
-    if (e.type === "analysis" && ofType(events, "analysis").length === 1) setTimeout(() => api.resumeBackground(), 0);
-  });
-  return events;
-}
+import { demoJob as job, eventsOf as ofType, runJob } from "./helpers/demoJob.ts";
 
 describe("WorkerApi.run() with firstConstituent: the marks on screen first, the same results", () => {
   it("posts the first survey's marks for the constituent on screen before its analysis; every result equals the plain run's", async () => {
