@@ -24,7 +24,7 @@ import { analyse, inputsOf, mergeParts, readFiles, type AnalysisResult } from ".
 import { briefingHtml, fileProvenance } from "./briefing.ts";
 import { brushStretch, type BrushedStretch } from "./brushStretch.ts";
 import type { ChannelOverlay } from "./overlay.ts";
-import type { AnalysisEvent, AnalysisJob, ProgressCallback, SourceFile } from "./protocol.ts";
+import type { AnalysisEvent, AnalysisJob, JobOrder, ProgressCallback, SourceFile } from "./protocol.ts";
 import type { UnderwayPoints, UnderwayRequest, UnderwayResult, UnderwayView } from "./underwayProtocol.ts";
 import { readUnderway, viewUnderway } from "./underwayEngine.ts";
 import { previewCenterline, type DrawnPreview } from "./drawnPreview.ts";
@@ -189,21 +189,21 @@ export function createWorkerApi(cache?: ResultCache) {
   }
 
   /**
-   * Analyses every held survey: `first` (the survey on screen) first, then the others in order,
-   * yielding between surveys so a newer job, a speciation request or the first view's requests
-   * are answered in between. With `gate` the background surveys wait for `resumeBackground`.
+   * Analyses every held survey in the job's order (`JobOrder`): `firstSurvey` (the survey on screen)
+   * first, then the others in order, yielding between surveys so a newer job, a speciation request or
+   * the first view's requests are answered in between. With a `firstSurvey` the background surveys
+   * wait for `resumeBackground`; `firstParts` and `firstConstituent` say how the first is analysed.
    */
   async function analyseAll(
     run: number,
     settings: AnalysisSettings,
     emit: (e: AnalysisEvent) => void,
-    first: number,
-    gate: boolean,
-    parts?: { count: number; token: number },
-    firstConstituent?: string,
+    { firstSurvey, firstParts: parts, firstConstituent }: JobOrder,
   ) {
     const { surveys } = inputs;
     const total = surveys.length;
+    const gate = firstSurvey !== undefined;
+    const first = firstSurvey ?? 0;
     const start = first >= 0 && first < total ? first : 0;
     const order = [start, ...surveys.map((_, i) => i).filter((i) => i !== start)];
     for (const [k, i] of order.entries()) {
@@ -298,15 +298,7 @@ export function createWorkerApi(cache?: ResultCache) {
             ...(inputs.offeredCenterline ? { offeredCenterline: inputs.offeredCenterline as object } : {}),
           });
         }
-        await analyseAll(
-          run,
-          job.settings,
-          emit,
-          job.firstSurvey ?? 0,
-          job.firstSurvey !== undefined,
-          job.firstParts,
-          job.firstConstituent,
-        );
+        await analyseAll(run, job.settings, emit, job);
       } catch (error) {
         emit({ type: "error", message: messageOf(error) });
       }
