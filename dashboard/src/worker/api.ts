@@ -140,7 +140,7 @@ export function createWorkerApi(cache?: ResultCache) {
       const got = received.get(index);
       rest.push(got ?? analyse(inputs, survey, settings, undefined, { index, count: parts.count }).analysis);
     }
-    return mergeParts(inputs, survey, [own.analysis, ...rest], own.analysis);
+    return mergeParts(inputs, survey, [own.analysis, ...rest], own.analysis, channel);
   }
 
   /**
@@ -167,7 +167,7 @@ export function createWorkerApi(cache?: ResultCache) {
     await yieldToQueue();
     if (run !== latestRun) return undefined;
     const rest = analyse(inputs, survey, settings, onStep, { names: others });
-    return mergeParts(inputs, survey, [head.analysis, rest.analysis], rest.analysis);
+    return mergeParts(inputs, survey, [head.analysis, rest.analysis], rest.analysis, channel);
   }
 
   /** Opens the gate of the running job's background surveys (see `resumeBackground`). */

@@ -6,7 +6,6 @@
  */
 import {
   analyzeInputs,
-  channelOverlay,
   emptySummary,
   plottedObservations,
   surveyOverlay,
@@ -26,7 +25,7 @@ import {
   type WorkspaceSettings,
 } from "../../../analysis/index.ts";
 import type { AnalysisSettings, SourceFile, TextFile } from "./protocol.ts";
-import type { SurveyOverlay } from "./overlay.ts";
+import type { ChannelOverlay, SurveyOverlay } from "./overlay.ts";
 
 /** The survey analysis as the panels and the map read it. */
 export type AnalysisResult = SurveyAnalysis;
@@ -156,12 +155,15 @@ export function analyse(
  * the parts together covering every constituent): the survey-wide parts are the same in each, the
  * constituents are put back in the survey's order, and the plotted observations and the map overlay
  * are made from the whole, as analyzeInputs makes them. Equal to `analyse` without parts.
+ *
+ * @param channel the channel overlay of `inputs.channel` (channelOverlay), which holds its km ticks
  */
 export function mergeParts(
   inputs: WorkspaceInputs,
   survey: Survey,
   parts: ReadonlyArray<Pick<AnalysisResult, "constituents">>,
   base: AnalysisResult,
+  channel: ChannelOverlay | undefined,
 ): { analysis: AnalysisResult; overlay: SurveyOverlay } {
   const rank = new Map(survey.constituents.map((c, i) => [c.name, i]));
   const constituents = parts
@@ -169,7 +171,5 @@ export function mergeParts(
     .sort((a, b) => (rank.get(a.name) ?? Infinity) - (rank.get(b.name) ?? Infinity));
   const analysis: AnalysisResult = { ...base, constituents };
   analysis.observations = plottedObservations(survey, analysis);
-  const network = inputs.channel?.network;
-  const ticks = network ? channelOverlay(network).ticks : [];
-  return { analysis, overlay: surveyOverlay(analysis, network, ticks) };
+  return { analysis, overlay: surveyOverlay(analysis, inputs.channel?.network, channel?.ticks ?? []) };
 }
