@@ -10,6 +10,13 @@ import type { AnalysisEvent, InputNotice } from "../worker/protocol.ts";
 import type { AnalysisResult } from "../worker/engine.ts";
 import type { ChannelOverlay, SurveyOverlay } from "../worker/overlay.ts";
 
+/** A copy of `items` with `value` at `index` (the arrays here are replaced, never mutated). */
+function replacedAt<T>(items: readonly T[], index: number, value: T): T[] {
+  const out = [...items];
+  out[index] = value;
+  return out;
+}
+
 export type ResultsStatus = "idle" | "reading" | "analysing" | "ready" | "error";
 
 /** Progress of the running worker job. */
@@ -76,23 +83,15 @@ export class AnalysisResults {
         this.comparison = message.comparison;
         this.comparisonReason = message.reason;
         break;
-      case "overlay": {
+      case "overlay":
         // The marks of the survey's constituent on screen, before its analysis (never over a complete one).
-        if (this.analyses[message.surveyIndex] !== undefined) break;
-        const overlays = [...this.overlays];
-        overlays[message.surveyIndex] = message.overlay;
-        this.overlays = overlays;
+        if (this.analyses[message.surveyIndex] === undefined)
+          this.overlays = replacedAt(this.overlays, message.surveyIndex, message.overlay);
         break;
-      }
-      case "analysis": {
-        const analyses = [...this.analyses];
-        analyses[message.surveyIndex] = message.analysis;
-        this.analyses = analyses;
-        const overlays = [...this.overlays];
-        overlays[message.surveyIndex] = message.overlay;
-        this.overlays = overlays;
+      case "analysis":
+        this.analyses = replacedAt(this.analyses, message.surveyIndex, message.analysis);
+        this.overlays = replacedAt(this.overlays, message.surveyIndex, message.overlay);
         break;
-      }
       case "done":
         this.status = "ready";
         this.progress = null;
