@@ -16,7 +16,10 @@
  * data event, once that event's own handlers have run: a source's `content` event is what starts its
  * tiles' reload), or the user moves the map, or the map is resized, or `maxMs` has passed. Then the
  * original method is seen again and, if a frame was asked for, called once. Only a map that has asked
- * for its tiles may be held: MapLibre asks for a view's tiles in a frame.
+ * for its tiles may be held: MapLibre asks for a view's tiles in a frame. With `drawOnceWhen`, one frame
+ * is let through the first time it holds (e.g. the basemap's tiles are all in while the marks are still
+ * being made): the shader programs are then built, in MapLibre and in the software GPU, while the rest
+ * is still on its way, instead of all in the frame that ends the hold.
  */
 import type { Map as MapLibreMap } from "maplibre-gl";
 
@@ -42,12 +45,21 @@ const held = new WeakSet<object>();
  * @param map the map
  * @param done true once the map has what it should draw (checked after each source data event)
  * @param maxMs longest hold [ms]
+ * @param drawOnceWhen one frame is drawn the first time this holds (checked as `done`) before `done()`
  */
-export function holdFrames(map: HoldableMap, done: () => boolean, maxMs: number): FrameHold | undefined {
+export function holdFrames(
+  map: HoldableMap,
+  done: () => boolean,
+  maxMs: number,
+  drawOnceWhen?: () => boolean,
+): FrameHold | undefined {
   if (held.has(map)) return undefined;
   held.add(map);
   const own = map as { triggerRepaint(): void };
+  /** The map's own method (MapLibre's, on its prototype). */
+  const draw = () => (Object.getPrototypeOf(own) as { triggerRepaint(): void }).triggerRepaint.call(own);
   let asked = false;
+  let drawnOnce = drawOnceWhen === undefined;
   own.triggerRepaint = () => {
     asked = true;
   };
@@ -64,7 +76,13 @@ export function holdFrames(map: HoldableMap, done: () => boolean, maxMs: number)
   };
   const onSourceData = () =>
     queueMicrotask(() => {
-      if (held.has(map) && done()) release();
+      if (!held.has(map)) return;
+      if (done()) release();
+      else if (!drawnOnce && drawOnceWhen!()) {
+        drawnOnce = true;
+        asked = false;
+        draw();
+      }
     });
   // Moves of the map's own (fitBounds at the start) wait with the rest; the user's do not.
   const onMove = (e: { originalEvent?: unknown }) => {

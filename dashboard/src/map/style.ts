@@ -32,6 +32,9 @@ const POINT: ExpressionSpecification = ["in", ["geometry-type"], ["literal", ["P
 
 const EMPTY: FeatureCollection = { type: "FeatureCollection", features: [] };
 
+/** GeoJSON source of the basemap (water, land, marsh, place labels). */
+export const BASEMAP_SOURCE = "basemap";
+
 export interface StyleOptions {
   basemap: FeatureCollection | undefined;
   /** Raster tile URL template; used only when non-empty. */
@@ -65,7 +68,7 @@ export function buildStyle({ basemap, tileUrl, labels, marks, stations, worldLan
     version: 8,
     name: "Brackline offline",
     sources: {
-      basemap: { type: "geojson", data: basemap ?? EMPTY },
+      [BASEMAP_SOURCE]: { type: "geojson", data: basemap ?? EMPTY },
       // One source for the marks, the labels and the stations (marks.ts, stations.ts): tiled together
       // when an analysis changes them; station features carry their id for the hover feature state.
       [LABEL_SOURCE]: {
@@ -81,35 +84,35 @@ export function buildStyle({ basemap, tileUrl, labels, marks, stations, worldLan
       {
         id: "land",
         type: "fill",
-        source: "basemap",
+        source: BASEMAP_SOURCE,
         filter: ["all", POLYGON, ["==", KIND, "land"]],
         paint: { "fill-color": PALETTE.land },
       },
       {
         id: "water",
         type: "fill",
-        source: "basemap",
+        source: BASEMAP_SOURCE,
         filter: ["all", POLYGON, ["in", KIND, ["literal", ["water", "sea", "river"]]]],
         paint: { "fill-color": PALETTE.water, "fill-outline-color": PALETTE.shore },
       },
       {
         id: "marsh",
         type: "fill",
-        source: "basemap",
+        source: BASEMAP_SOURCE,
         filter: ["all", POLYGON, ["in", KIND, ["literal", ["marsh", "wetland"]]]],
         paint: { "fill-color": PALETTE.marsh },
       },
       {
         id: "shoreline",
         type: "line",
-        source: "basemap",
+        source: BASEMAP_SOURCE,
         filter: ["all", POLYGON, ["in", KIND, ["literal", ["water", "sea", "river"]]]],
         paint: { "line-color": PALETTE.shore, "line-width": 0.8 },
       },
       {
         id: "place-labels",
         type: "symbol",
-        source: "basemap",
+        source: BASEMAP_SOURCE,
         filter: ["all", POINT, ["has", "name"]],
         layout: {
           "text-field": ["get", "name"],
@@ -123,7 +126,7 @@ export function buildStyle({ basemap, tileUrl, labels, marks, stations, worldLan
       {
         id: "place-dots",
         type: "circle",
-        source: "basemap",
+        source: BASEMAP_SOURCE,
         filter: ["all", POINT, ["has", "name"]],
         paint: { "circle-radius": 2.5, "circle-color": PALETTE.label },
       },

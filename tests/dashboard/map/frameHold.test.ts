@@ -103,4 +103,31 @@ describe("holdFrames()", () => {
     expect(hold.holding).toBe(false);
     expect(m.frames).toBe(1);
   });
+
+  it("drawOnceWhen lets one frame through the first time it holds, and the hold goes on", async () => {
+    const m = new FakeMap();
+    let basemapIn = false;
+    const hold = holdFrames(
+      asMap(m),
+      () => false,
+      600,
+      () => basemapIn,
+    )!;
+    m.triggerRepaint();
+    m.fire("sourcedata", { sourceId: "basemap", tile: {} });
+    await flush();
+    expect(m.frames).toBe(0);
+    basemapIn = true;
+    m.fire("sourcedata", { sourceId: "basemap", tile: {} });
+    await flush();
+    expect(m.frames).toBe(1);
+    expect(hold.holding).toBe(true);
+    // Only once; requests after it are held again, and the release draws one more frame.
+    m.triggerRepaint();
+    m.fire("sourcedata", { sourceId: "basemap", tile: {} });
+    await flush();
+    expect(m.frames).toBe(1);
+    hold.release();
+    expect(m.frames).toBe(2);
+  });
 });
