@@ -1,7 +1,9 @@
 // One cold start of the built dashboard in a fresh Chromium: a timeline of long main-thread tasks
 // (PerformanceObserver "longtask"), the map's renders/idle/source events and the first-view markers.
-// Usage: npx tsx bench/profile/timeline.ts [--dist DIR | --bare] [--trace [--trace-out FILE]] [--cpu-out FILE]
-// With --trace also each thread's busy time per 250 ms and the WebGL flushes per context (traceThreads.ts).
+// Usage: npx tsx bench/profile/timeline.ts [--dist DIR | --bare [--size WxH]] [--trace [--v8] [--trace-out FILE]] [--cpu-out FILE]
+// With --trace also each thread's busy time per 250 ms and the WebGL flushes per context (traceThreads.ts);
+// --v8 adds V8's compile and GC events (the background JIT). --size gives the bare page's map the
+// dashboard's map size, as the bench does (e.g. 686x695).
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -98,6 +100,7 @@ try {
         "toplevel",
         "gpu",
         "blink.user_timing",
+        ...(process.argv.includes("--v8") ? ["v8", "disabled-by-default-v8.compile", "disabled-by-default-v8.gc"] : []),
       ],
     });
   page.on("console", (m) => console.log("console:", m.text()));
@@ -110,7 +113,12 @@ try {
     await cdp.send("Profiler.setSamplingInterval", { interval: 1000 });
     await cdp.send("Profiler.start");
   }
-  await page.goto(bareMap?.url ?? url, { waitUntil: "load" });
+  const size = process.argv.includes("--size") ? process.argv[process.argv.indexOf("--size") + 1]!.split("x") : [];
+  const bareUrl =
+    bareMap && size.length === 2
+      ? `${bareMap.url}${bareMap.url.includes("?") ? "&" : "?"}w=${size[0]}&h=${size[1]}`
+      : bareMap?.url;
+  await page.goto(bareUrl ?? url, { waitUntil: "load" });
   if (bareMap) await page.waitForSelector('[data-ready="true"]', { timeout: 60_000 });
   else {
     await page.waitForSelector('[data-analysis-status="ready"]', { timeout: 60_000 });
