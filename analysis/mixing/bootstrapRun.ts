@@ -111,8 +111,17 @@ export interface BootstrapResult {
  */
 export function runBootstrap(b: BootstrapInput): BootstrapResult {
   const st = new BootstrapDraws(b);
-  for (let d = 0; d < st.D; d++) drawReplicate(st, d);
+  drawAll(st);
   return summarise(st, b.estimates);
+}
+
+/**
+ * Every replicate of {@link runBootstrap}. (A function of its own: V8 compiles this loop while it runs
+ * and enters that code again on every later run; inside runBootstrap the compiled loop ran on into
+ * code it had never seen run and fell back to the interpreter at the end of every run.)
+ */
+function drawAll(st: BootstrapDraws): void {
+  for (let d = 0; d < st.D; d++) drawReplicate(st, d);
 }
 
 /** A replicate's draws filled with NaN (NaN = no value in that replicate). */
@@ -342,14 +351,24 @@ function bandInto(
   upper: number[],
 ): void {
   for (let g = 0; g < G; g++) {
-    let k = 0;
-    for (let d = 0, o = g * D; d < D; d++) {
-      const v = curves[o + d]!;
-      if (Number.isFinite(v)) col[k++] = v;
-    }
+    const k = finiteColumn(curves, g * D, D, col);
     lower[g] = percentileSelect(col, k, 0.025) ?? Number.NaN;
     upper[g] = percentileSelect(col, k, 0.975) ?? Number.NaN;
   }
+}
+
+/**
+ * Copies the finite values of curves[o … o + D) into col and returns their count. (A function of its
+ * own: V8 compiled this inner loop alone while it ran, and left that code at the end of every column,
+ * once per grid point, back to the interpreter for the outer loop.)
+ */
+function finiteColumn(curves: Float64Array, o: number, D: number, col: Float64Array): number {
+  let k = 0;
+  for (let d = 0; d < D; d++) {
+    const v = curves[o + d]!;
+    if (Number.isFinite(v)) col[k++] = v;
+  }
+  return k;
 }
 
 /** Intervals and band of the finished replicates of {@link runBootstrap}. */

@@ -135,7 +135,13 @@ export function alternativeFit(f: TwoPhaseFit, alternative: NonNullable<TwoPhase
   const a = newTwoPhaseFit();
   a.breakSalinity = alternative.breakSalinity;
   a.linear = false;
-  a.coef = alternative.coef;
+  // The alternative's coefficients copied into the fit's own array: a fit's coef array is never
+  // replaced (replacing it once made V8 discard the compiled code of everything that reads fits).
+  const c = a.coef;
+  c[0] = alternative.coef[0];
+  c[1] = alternative.coef[1];
+  c[2] = alternative.coef[2];
+  c[3] = alternative.coef[3];
   a.sMin = f.sMin;
   a.range = f.range;
   a.rss = f.rss;
