@@ -1,7 +1,8 @@
 // Cold starts of the bare map page and the built dashboard, each page load in its own freshly
 // launched Chromium (bench flags, fresh profile), alternating bare / dashboard, N pairs. Prints each
 // pair and the medians. Not a bench row: a quick way to compare builds on a noisy shared machine.
-// Usage: npx tsx bench/profile/coldPairs.ts [--runs N] [--warm-bare]   (build dashboard/dist first)
+// Usage: npx tsx bench/profile/coldPairs.ts [--runs N] [--warm-bare] [--dist DIR ...] [--bare-size WxH] [--threads]
+// (build dashboard/dist first; --bare-size gives the bare page's map the dashboard map's size, as the bench does)
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir, loadavg } from "node:os";
 import { join } from "node:path";
@@ -54,6 +55,12 @@ const runs = process.argv.includes("--runs") ? Number(arg("--runs")) : 3;
 const dists = process.argv.flatMap((a, i) => (a === "--dist" ? [process.argv[i + 1]!] : []));
 if (dists.length === 0) dists.push(DIST);
 const bare = await serveBareMap();
+// --bare-size WxH: the bare page's map at the dashboard map's size, as the bench draws it (e.g. 686x695)
+const bareSize = process.argv.includes("--bare-size") ? arg("--bare-size").split("x") : [];
+const bareUrl =
+  bareSize.length === 2
+    ? `${bare.url}${bare.url.includes("?") ? "&" : "?"}w=${bareSize[0]}&h=${bareSize[1]}`
+    : bare.url;
 const dashes = await Promise.all(dists.map(serveDist));
 const b: number[] = [];
 const d: number[][] = dists.map(() => []);
@@ -62,7 +69,7 @@ const dc: number[][] = dists.map(() => []);
 const short = (k: string) => k.replace(/^\[data-|"\]$|="true|="ready|\] svg$|\] table$/g, "").slice(0, 16);
 try {
   for (let i = 0; i < runs; i++) {
-    const rb = await coldLoad(bare.url, BARE);
+    const rb = await coldLoad(bareUrl, BARE);
     b.push(rb.ready!);
     bc.push(rb.cpuMs!);
     const parts = [`round ${i + 1}: bare ${rb.ready!.toFixed(0)} ms (cpu ${rb.cpuMs!.toFixed(0)} ms)`];
