@@ -16,6 +16,18 @@ function setup(constituent = "Fe") {
 }
 
 describe("MixingPlot", () => {
+  it("is drawn at the panel's known width at once (widthHint), else at its default 640 px until it measures itself", () => {
+    const selection = new Selection();
+    selection.constituent = "Fe";
+    const hinted = render(MixingPlot, { analysis: fixtureAnalysis(), selection, idPrefix: "wh", widthHint: 492 });
+    const svg = hinted.container.querySelector("svg[data-export-name='mixing']")!;
+    expect(svg.getAttribute("width")).toBe("492");
+    // the height follows the width as for a measured panel: 0.66 × width, kept within 340–520 px
+    expect(svg.getAttribute("height")).toBe("340");
+    const plain = render(MixingPlot, { analysis: fixtureAnalysis(), selection, idPrefix: "nw" });
+    expect(plain.container.querySelector("svg[data-export-name='mixing']")!.getAttribute("width")).toBe("640");
+  });
+
   it("MixingPlot labels both axes with units (Salinity (PSS-78), Fe (nmol/L))", () => {
     const { svg } = setup();
     const titles = [...svg.querySelectorAll(".axis-title")].map((t) => t.textContent);

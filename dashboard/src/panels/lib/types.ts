@@ -57,4 +57,10 @@ export type SurveyAnalysisView = Omit<SurveyAnalysis, "constituents"> & { consti
 export interface PanelProps {
   analysis: SurveyAnalysisView;
   selection: Selection;
+  /**
+   * The panel's content width [CSS px] when the page knows it before the panel is drawn (the panels
+   * column, measured while its placeholders show): charts are drawn at that width at once instead of
+   * at their default width and again once they have measured themselves.
+   */
+  widthHint?: number;
 }
