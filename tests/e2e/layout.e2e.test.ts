@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { existsSync } from "node:fs";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
-import { REPO_ROOT, screenshot, settle, skipBrowser, waitForAnalysis, waitForMap } from "./browser.ts";
+import { REPO_ROOT, screenshot, selectionStatus, settle, skipBrowser, waitForAnalysis, waitForMap } from "./browser.ts";
 import { suiteDashboard } from "./suite.ts";
 
 // A real survey export read at test time (never copied into the repository): the San Francisco Bay
@@ -242,6 +242,8 @@ describe.skipIf(skipBrowser)("layout and map labels at 1280×800 and 1440×900 (
       await settle(s.page);
       await s.page.waitForTimeout(800);
       await screenshot(s.page, "layout-realdata-1440");
+      // The demo station selected above (W12) is not one of the bay's: the status says so.
+      expect(await selectionStatus(s.page)).toBe("Selected: W12 (not in this survey)");
       const facts = await layoutFacts(s.page);
       expect(facts.pageOverflowPx).toBeLessThanOrEqual(0);
       expect(facts.headerPx).toBeLessThan(64);
