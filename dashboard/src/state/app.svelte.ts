@@ -266,12 +266,10 @@ export class AppState {
       }
       if (event.type === "loaded") {
         if (this.selection.surveyIndex >= event.surveys.length) this.selection.surveyIndex = 0;
-        // Non-mixing variables (oxygen, chlorophyll...) are never the default constituent (the rule
-        // the worker follows for the marks it posts first).
-        const shown = shownConstituent(
-          event.surveys[this.selection.surveyIndex]?.constituents ?? [],
-          this.selection.constituent,
-        );
+        // Non-mixing variables (oxygen, chlorophyll...) are never the default constituent, nor one the
+        // survey has no observation of (the rule the worker follows for the marks it posts first).
+        const survey = event.surveys[this.selection.surveyIndex];
+        const shown = shownConstituent(survey?.constituents ?? [], this.selection.constituent, survey?.stations);
         if (shown !== undefined) this.selection.constituent = shown;
       }
     });

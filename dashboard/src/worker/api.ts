@@ -158,7 +158,7 @@ export function createWorkerApi(cache?: ResultCache) {
     onStep: (fraction: number, label: string) => void,
   ): Promise<CachedAnalysis | undefined> {
     const survey = inputs.surveys[index];
-    const name = shownConstituent(survey.constituents, chosen);
+    const name = shownConstituent(survey.constituents, chosen, survey.stations);
     const others = survey.constituents.map((c) => c.name).filter((n) => n !== name);
     if (name === undefined || others.length === 0) return undefined;
     const head = analyse(inputs, survey, settings, undefined, { names: [name] });
