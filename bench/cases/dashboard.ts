@@ -10,7 +10,7 @@
 import type { Page } from "playwright-core";
 import type { BenchCase, BenchRow } from "../benchCase.ts";
 import { openBenchDashboard } from "../fixtures/dashboardDist.ts";
-import { serveBareMap } from "../fixtures/bareMap.ts";
+import { bareMapUrl, serveBareMap } from "../fixtures/bareMap.ts";
 import { inFreshBrowser } from "../fixtures/freshBrowser.ts";
 import { ALL_SURVEYS, BARE, FIRST_VIEW, type ReadySpec } from "../fixtures/readySpecs.ts";
 
@@ -113,7 +113,7 @@ export const dashboardBench: BenchCase = {
         const r = document.querySelector(".maplibregl-map")!.getBoundingClientRect();
         return { w: Math.round(r.width), h: Math.round(r.height) };
       });
-      const bareUrl = `${bare.url}${bare.url.includes("?") ? "&" : "?"}w=${mapBox.w}&h=${mapBox.h}`;
+      const bareUrl = bareMapUrl(bare, mapBox);
       // The session's page is left while the cold loads run: an open map tab keeps a little CPU busy.
       await s.page.goto("about:blank");
       const colds: Array<{ first: number; all: number }> = [];

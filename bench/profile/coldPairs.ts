@@ -8,7 +8,7 @@ import { tmpdir, loadavg } from "node:os";
 import { join } from "node:path";
 import { launchChromium } from "../../tests/e2e/browser.ts";
 import { browserCpuS, threadCpuMs } from "./browserCpu.ts";
-import { serveBareMap } from "../fixtures/bareMap.ts";
+import { bareMapUrl, parseSize, serveBareMap } from "../fixtures/bareMap.ts";
 import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
 import { BARE, FIRST_VIEW, type ReadySpec } from "../fixtures/readySpecs.ts";
 
@@ -56,11 +56,7 @@ const dists = process.argv.flatMap((a, i) => (a === "--dist" ? [process.argv[i +
 if (dists.length === 0) dists.push(DIST);
 const bare = await serveBareMap();
 // --bare-size WxH: the bare page's map at the dashboard map's size, as the bench draws it (e.g. 686x695)
-const bareSize = process.argv.includes("--bare-size") ? arg("--bare-size").split("x") : [];
-const bareUrl =
-  bareSize.length === 2
-    ? `${bare.url}${bare.url.includes("?") ? "&" : "?"}w=${bareSize[0]}&h=${bareSize[1]}`
-    : bare.url;
+const bareUrl = bareMapUrl(bare, parseSize(process.argv.includes("--bare-size") ? arg("--bare-size") : undefined));
 const dashes = await Promise.all(dists.map(serveDist));
 const b: number[] = [];
 const d: number[][] = dists.map(() => []);

@@ -10,7 +10,7 @@ import { join } from "node:path";
 import { chromium } from "playwright-core";
 import { CHROMIUM_FLAGS, CHROMIUM_PATH } from "../../tests/e2e/browser.ts";
 import { DIST, ensureDist, serveDist } from "../fixtures/dashboardDist.ts";
-import { serveBareMap } from "../fixtures/bareMap.ts";
+import { bareMapUrl, parseSize, serveBareMap } from "../fixtures/bareMap.ts";
 import { threadViews, traceEvents } from "./traceThreads.ts";
 
 const INIT = `(() => {
@@ -113,11 +113,10 @@ try {
     await cdp.send("Profiler.setSamplingInterval", { interval: 1000 });
     await cdp.send("Profiler.start");
   }
-  const size = process.argv.includes("--size") ? process.argv[process.argv.indexOf("--size") + 1]!.split("x") : [];
-  const bareUrl =
-    bareMap && size.length === 2
-      ? `${bareMap.url}${bareMap.url.includes("?") ? "&" : "?"}w=${size[0]}&h=${size[1]}`
-      : bareMap?.url;
+  const size = parseSize(
+    process.argv.includes("--size") ? process.argv[process.argv.indexOf("--size") + 1] : undefined,
+  );
+  const bareUrl = bareMap && bareMapUrl(bareMap, size);
   await page.goto(bareUrl ?? url, { waitUntil: "load" });
   if (bareMap) await page.waitForSelector('[data-ready="true"]', { timeout: 60_000 });
   else {
