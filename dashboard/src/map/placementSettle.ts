@@ -24,8 +24,6 @@ import type { Map as MapLibreMap } from "maplibre-gl";
 
 /** The non-public MapLibre state read here (every field optional: checked before use). */
 interface RenderState {
-  _fadeDuration?: unknown;
-  _idleTriggered?: unknown;
   _placementDirty?: unknown;
   _sourcesDirty?: unknown;
   _styleDirty?: unknown;
@@ -51,9 +49,8 @@ export function settleStalePlacement(map: SettlingMap): boolean {
   const m = map as SettlingMap & RenderState;
   const placement = m.style?.placement;
   const pauseable = m.style?.pauseablePlacement;
-  const fade = m._idleTriggered === true ? m._fadeDuration : 0;
+  // The placement's own fade (MapLibre makes it with the map's fadeDuration, 0 before the first idle).
   if (
-    fade !== 0 ||
     placement?.fadeDuration !== 0 ||
     placement.stale !== true ||
     m._placementDirty !== true ||
