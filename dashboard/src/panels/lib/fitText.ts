@@ -39,19 +39,20 @@ export function fitText(node: SVGTextElement, options: FitTextOptions): { update
   const family = inherited(node, "font-family");
   const weight = inherited(node, "font-weight") ?? "normal";
   const canvas = family ? measuringContext() : null;
-  const measure = (): number | undefined => {
-    try {
-      if (canvas && typeof canvas.measureText === "function") {
+  const positive = (len: number | undefined) =>
+    len !== undefined && Number.isFinite(len) && len > 0 ? len : undefined;
+  const measure = canvas
+    ? (): number | undefined => {
         canvas.font = `${weight} ${node.getAttribute("font-size") ?? baseSize}px ${family}`;
-        const len = canvas.measureText(node.textContent ?? "").width;
-        return Number.isFinite(len) && len > 0 ? len : undefined;
+        return positive(canvas.measureText(node.textContent ?? "").width);
       }
-      const len = typeof node.getComputedTextLength === "function" ? node.getComputedTextLength() : undefined;
-      return len !== undefined && Number.isFinite(len) && len > 0 ? len : undefined;
-    } catch {
-      return undefined;
-    }
-  };
+    : (): number | undefined => {
+        try {
+          return positive(typeof node.getComputedTextLength === "function" ? node.getComputedTextLength() : undefined);
+        } catch {
+          return undefined;
+        }
+      };
   function fit({ text, maxWidth, minPx = 11 }: FitTextOptions): void {
     node.textContent = text;
     node.setAttribute("font-size", String(baseSize));
