@@ -3,27 +3,13 @@
 // time is up); then one frame is drawn. Checked on a stand-in for MapLibre's map (its event methods,
 // tile state and triggerRepaint); common practice: coalescing redraw requests.
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import { FakeEvents } from "./helpers/fakeEvents.ts";
 import { holdFrames, retiled, type HoldableMap } from "../../../dashboard/src/map/frameHold.ts";
 
-type Listener = (e: Record<string, unknown>) => void;
-
-class FakeMap {
+class FakeMap extends FakeEvents {
   frames = 0;
   sourceLoaded = true;
   tilesLoaded = true;
-  private listeners = new Map<string, Set<Listener>>();
-  on(type: string, f: Listener) {
-    if (!this.listeners.has(type)) this.listeners.set(type, new Set());
-    this.listeners.get(type)!.add(f);
-    return this;
-  }
-  off(type: string, f: Listener) {
-    this.listeners.get(type)?.delete(f);
-    return this;
-  }
-  fire(type: string, e: Record<string, unknown> = {}) {
-    for (const f of [...(this.listeners.get(type) ?? [])]) f(e);
-  }
   isSourceLoaded() {
     return this.sourceLoaded;
   }

@@ -9,11 +9,10 @@ import {
   settleStalePlacement,
   type SettlingMap,
 } from "../../../dashboard/src/map/placementSettle.ts";
-
-type Listener = () => void;
+import { FakeEvents } from "./helpers/fakeEvents.ts";
 
 /** The render-time state of a MapLibre map just after a frame that took in new label tiles. */
-class FakeMap {
+class FakeMap extends FakeEvents {
   _placementDirty = true;
   _sourcesDirty = false;
   _styleDirty = false;
@@ -24,19 +23,6 @@ class FakeMap {
     pauseablePlacement: { isDone: () => this.done },
     placement: { stale: true, fadeDuration: 0 },
   };
-  private listeners = new Map<string, Set<Listener>>();
-  on(type: string, f: Listener) {
-    if (!this.listeners.has(type)) this.listeners.set(type, new Set());
-    this.listeners.get(type)!.add(f);
-    return this;
-  }
-  off(type: string, f: Listener) {
-    this.listeners.get(type)?.delete(f);
-    return this;
-  }
-  fire(type: string) {
-    for (const f of [...(this.listeners.get(type) ?? [])]) f();
-  }
   isMoving() {
     return this.moving;
   }
