@@ -473,6 +473,11 @@ export { stripControl } from "./output/terminalText.ts";
 // --- workspace ---
 export { readInputs, readStationTableFile, readSurveyFileAs, type PreReadFiles } from "./workspace/readInputs.ts";
 export { placeWithoutCenterline } from "./workspace/stationPlacement.ts";
+export {
+  EMPTY_CONSTITUENTS_NOTICE,
+  constituentsWithoutValues,
+  emptyConstituentsNotice,
+} from "./workspace/emptyConstituents.ts";
 export { plottedObservations, surveyObservations } from "./workspace/observations.ts";
 export { stationListOrder } from "./workspace/stationOrder.ts";
 export type { ObservationPoint } from "./workspace/observations.ts";

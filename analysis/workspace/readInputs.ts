@@ -1,6 +1,7 @@
 /**
  * Files to surveys and channel: the one entry point from bytes to data (CLI and dashboard worker).
  */
+import { emptyConstituentsNotice } from "./emptyConstituents.ts";
 import { emptySummary, mergeSummaries } from "../io/importSummary.ts";
 import { readGeoJsonPoints } from "../io/geojsonPoints.ts";
 import type { ImportResult, ReadSurveyOptions } from "../io/importPipeline.ts";
@@ -140,6 +141,8 @@ export function readInputs(
   });
   const surveys = results.flatMap((r) => r.surveys);
   const summary = results.map((r) => r.summary).reduce(mergeSummaries, emptySummary());
+  const empty = emptyConstituentsNotice(surveys);
+  if (empty) notices.push(empty);
 
   let channel: ChannelInput | undefined;
   files.forEach((f, i) => {

@@ -244,6 +244,10 @@ describe.skipIf(skipBrowser)("layout and map labels at 1280×800 and 1440×900 (
       await screenshot(s.page, "layout-realdata-1440");
       // The demo station selected above (W12) is not one of the bay's: the status says so.
       expect(await selectionStatus(s.page)).toBe("Selected: W12 (not in this survey)");
+      // The 2022 export's nutrient columns are empty in every cruise: said once, under the map.
+      await expect(
+        s.page.locator('[data-testid="channel-notices"] [data-code="constituentsWithoutValues"]').textContent(),
+      ).resolves.toContain("wqdata22.csv has no value of NO2, NO3+NO2, NH4, PO4, Si in any of its 8 surveys");
       const facts = await layoutFacts(s.page);
       expect(facts.pageOverflowPx).toBeLessThanOrEqual(0);
       expect(facts.headerPx).toBeLessThan(64);

@@ -23,6 +23,7 @@ import {
   type SurveyAnalysis,
   type WorkspaceInputs,
   type WorkspaceSettings,
+  emptyConstituentsNotice,
 } from "../../../analysis/index.ts";
 import type { AnalysisSettings, SourceFile, TextFile } from "./protocol.ts";
 import type { ChannelOverlay, SurveyOverlay } from "./overlay.ts";
@@ -76,13 +77,17 @@ export function inputsOf(
 ): WorkspaceInputs {
   const { channel, issues } = readChannel(centerline, surveys, mouth);
   const base = { files: [], issues, summary: emptySummary(), choices: mouth ? { mouth } : {} };
-  if (centerline || surveys.length === 0) return { surveys, ...(channel ? { channel } : {}), ...base, notices: [] };
+  // The notice readInputs gives when the files are read, given again for surveys read earlier.
+  const empty = emptyConstituentsNotice(surveys);
+  const emptyNotices = empty ? [empty] : [];
+  if (centerline || surveys.length === 0)
+    return { surveys, ...(channel ? { channel } : {}), ...base, notices: emptyNotices };
   const placed = placeWithoutCenterline(surveys, true, mouth);
   return {
     surveys: placed.surveys,
     ...base,
     ...(placed.channel ? { channel: placed.channel } : {}),
-    notices: placed.notices,
+    notices: [...emptyNotices, ...placed.notices],
     ...(placed.offered ? { offeredCenterline: placed.offered } : {}),
   };
 }
