@@ -477,6 +477,7 @@ export {
   EMPTY_CONSTITUENTS_NOTICE,
   constituentsWithoutValues,
   emptyConstituentsNotice,
+  type SurveyColumns,
 } from "./workspace/emptyConstituents.ts";
 export { plottedObservations, surveyObservations } from "./workspace/observations.ts";
 export { stationListOrder } from "./workspace/stationOrder.ts";

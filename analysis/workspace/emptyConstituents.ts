@@ -6,6 +6,12 @@
  */
 import type { Survey } from "../survey/survey.ts";
 
+/** The parts of a survey {@link constituentsWithoutValues} reads (a whole Survey will do). */
+export interface SurveyColumns {
+  constituents: ReadonlyArray<{ name: string }>;
+  stations: ReadonlyArray<{ values: Readonly<Record<string, { status: string } | undefined>> }>;
+}
+
 /** Notice code of {@link emptyConstituentsNotice}. */
 export const EMPTY_CONSTITUENTS_NOTICE = "constituentsWithoutValues";
 
@@ -14,10 +20,10 @@ export const EMPTY_CONSTITUENTS_NOTICE = "constituentsWithoutValues";
  * the order the file gives them. An observation is a measured value or a below-detection result;
  * missing, invalid or empty cells are none.
  *
- * @param surveys the surveys read from one file
+ * @param surveys the surveys read from one file (or one survey)
  * @returns the constituent names without any observation (empty when every column has one)
  */
-export function constituentsWithoutValues(surveys: readonly Survey[]): string[] {
+export function constituentsWithoutValues(surveys: readonly SurveyColumns[]): string[] {
   const names: string[] = [];
   for (const s of surveys) for (const c of s.constituents) if (!names.includes(c.name)) names.push(c.name);
   return names.filter(

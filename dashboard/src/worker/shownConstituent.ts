@@ -1,3 +1,5 @@
+import { constituentsWithoutValues, type SurveyColumns } from "../../../analysis/index.ts";
+
 /**
  * Which constituent the dashboard shows for a survey: the one chosen when the survey mixes it and has
  * observations of it, else its first mixing constituent with observations (a value or a
@@ -15,18 +17,11 @@
 export function shownConstituent(
   constituents: ReadonlyArray<{ name: string; kind?: string }>,
   chosen: string,
-  stations: ReadonlyArray<{ values: Readonly<Record<string, { status: string } | undefined>> }> = [],
+  stations: SurveyColumns["stations"] = [],
 ): string | undefined {
   const mixing = constituents.filter((c) => c.kind !== "nonMixing").map((c) => c.name);
-  const observed =
-    stations.length === 0
-      ? mixing
-      : mixing.filter((name) =>
-          stations.some((s) => {
-            const status = s.values[name]?.status;
-            return status === "measured" || status === "belowDetection";
-          }),
-        );
+  const empty = new Set(stations.length === 0 ? [] : constituentsWithoutValues([{ constituents, stations }]));
+  const observed = mixing.filter((name) => !empty.has(name));
   const pool = observed.length > 0 ? observed : mixing;
   return pool.includes(chosen) ? chosen : pool[0];
 }
